@@ -1,0 +1,78 @@
+/**
+ * The one model interface. Every equation of state in isochor is a residual Helmholtz energy
+ * alpha_r(T, rho, x) = A_res / (n R T), relative to the ideal gas at the same T and density,
+ * with its derivatives. Every property (pressure, departures, fugacity, heat capacities, speed of
+ * sound, Joule-Thomson) is computed from these in one place (state/), never re-derived per model.
+ *
+ * Derivatives are "reduced" (multiplied by the variable), which keeps them dimensionless:
+ *   aD  = rho   d(alpha_r)/d(rho)       aDD = rho^2 d2(alpha_r)/d(rho)^2
+ *   aT  = T     d(alpha_r)/dT           aTT = T^2   d2(alpha_r)/dT^2
+ *   aDT = rho T d2(alpha_r)/d(rho)dT
+ * Then Z = 1 + aD, and for example u_res/RT = -aT, s_res/R = -a - aT (same T and density).
+ */
+import type { ResultWarning } from "../errors.js";
+
+export interface ResidualDerivatives {
+  readonly a: number;
+  readonly aD: number;
+  readonly aDD: number;
+  readonly aT: number;
+  readonly aTT: number;
+  readonly aDT: number;
+  /** rho^3 d3(alpha_r)/d(rho)^3, when the model provides it (critical points). */
+  readonly aDDD?: number;
+  /**
+   * d(n alpha_r)/d(n_i) at constant T, V and n_j (j != i), one per component, when requested
+   * with `{ composition: true }`. ln phi_i = dnA[i] - ln Z.
+   */
+  readonly dnA?: readonly number[];
+}
+
+/** What to compute: composition derivatives cost extra, so they are requested explicitly. */
+export interface ResidualRequest {
+  readonly composition?: boolean;
+}
+
+/** How a model was built: shown in every result and record. */
+export interface ModelInfo {
+  /** Stable id, e.g. "peng-robinson" (the `isochor eval` model name). */
+  readonly id: string;
+  /** Human name, e.g. "Peng-Robinson (1976)". */
+  readonly name: string;
+  /** Full citation(s) of the equation. */
+  readonly citation: string;
+  /** Component ids, in the order of the composition vector. */
+  readonly componentIds: readonly string[];
+}
+
+export interface ResidualModel {
+  readonly info: ModelInfo;
+  /**
+   * Molar gas constant the equation was fitted with, J/(mol K) (reference equations publish their
+   * own, e.g. IAPWS-95). Absent: the CODATA value in constants.ts.
+   */
+  readonly gasConstant?: number;
+  /** Residual Helmholtz energy and derivatives at T (K), molar density rho (mol/m3), mole fractions x. */
+  residual(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+    request?: ResidualRequest,
+  ): ResidualDerivatives;
+  /**
+   * Largest meaningful molar density at this T and x (close packing, e.g. 1/b for a cubic),
+   * mol/m3; Infinity when the model has no such limit.
+   */
+  maxDensity(temperatureK: number, x: readonly number[]): number;
+  /**
+   * Optional: every density root of P(T, rho, x) = P, ascending, mol/m3 (closed form for cubics).
+   * When absent the engine searches for roots numerically.
+   */
+  densityRoots?(temperatureK: number, pressurePa: number, x: readonly number[]): number[];
+  /** Optional: warnings for a state outside the model's validity range (empty when inside). */
+  checkValidity?(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+  ): ResultWarning[];
+}

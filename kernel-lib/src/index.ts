@@ -1,0 +1,7 @@
+/**
+ * isochor: real-fluid thermodynamic properties for TypeScript notebooks.
+ * `core` is the browser-safe engine; `display` and `records` need Node (tslab kernel, CLI).
+ */
+export * from "./core.js";
+export * from "./display/index.js";
+export * from "./records/index.js";

@@ -1,0 +1,2 @@
+// Public exports of petroleum/ (filled by the area as it lands).
+export {};

@@ -1,0 +1,2 @@
+// Public exports of state/ (filled by the area as it lands).
+export {};

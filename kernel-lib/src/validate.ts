@@ -1,0 +1,43 @@
+/**
+ * Input checks written so that NaN fails too (`!(x > 0)` rather than `x <= 0`).
+ * Each throws an InputError naming the input, its unit, the valid range and the value received.
+ */
+import { InputError } from "./errors.js";
+
+/** Requires a finite number > 0. Returns it, so checks can be used inline. */
+export function requirePositive(input: string, value: number, unit: string): number {
+  if (!(typeof value === "number" && value > 0 && value < Infinity)) {
+    throw new InputError({ input, unit, validRange: "a finite number > 0", received: value });
+  }
+  return value;
+}
+
+/** Requires a finite number >= 0. */
+export function requireNonNegative(input: string, value: number, unit: string): number {
+  if (!(typeof value === "number" && value >= 0 && value < Infinity)) {
+    throw new InputError({ input, unit, validRange: "a finite number >= 0", received: value });
+  }
+  return value;
+}
+
+/** Requires any finite number. */
+export function requireFinite(input: string, value: number, unit: string): number {
+  if (!(typeof value === "number" && Number.isFinite(value))) {
+    throw new InputError({ input, unit, validRange: "a finite number", received: value });
+  }
+  return value;
+}
+
+/** Requires lo <= value <= hi (both inclusive). */
+export function requireInRange(
+  input: string,
+  value: number,
+  unit: string,
+  lo: number,
+  hi: number,
+): number {
+  if (!(typeof value === "number" && value >= lo && value <= hi)) {
+    throw new InputError({ input, unit, validRange: `between ${lo} and ${hi}`, received: value });
+  }
+  return value;
+}
