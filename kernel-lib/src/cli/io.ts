@@ -1,0 +1,20 @@
+/** The command line's view of the world, injectable so tests can capture output. */
+import * as fs from "node:fs";
+
+export interface CliIo {
+  stdout(text: string): void;
+  stderr(text: string): void;
+  /** Reads all of standard input as UTF-8. */
+  readStdin(): Promise<string>;
+  /** Current working directory. */
+  cwd: string;
+}
+
+export function nodeIo(): CliIo {
+  return {
+    stdout: (t) => void process.stdout.write(t),
+    stderr: (t) => void process.stderr.write(t),
+    readStdin: () => Promise.resolve(fs.readFileSync(0, "utf8")),
+    cwd: process.cwd(),
+  };
+}

@@ -1,0 +1,59 @@
+#!/usr/bin/env node
+/**
+ * The `isochor` command: one entry point, one sub-command per file.
+ *   isochor run <notebook.ipynb...>   execute notebooks, write executed notebooks and HTML records
+ *   isochor eval [request.json]       batch property evaluation, JSON in, JSON out
+ */
+import type { CliIo } from "./io.js";
+import { nodeIo } from "./io.js";
+
+interface Command {
+  summary: string;
+  load: () => Promise<(argv: string[], io: CliIo) => Promise<number>>;
+}
+
+const commands: Record<string, Command> = {
+  run: {
+    summary: "run <notebook.ipynb...>  execute notebooks and write calculation records",
+    load: async () => (await import("./run.js")).runCommand,
+  },
+  eval: {
+    summary: "eval [request.json]     evaluate states from a JSON request (file or stdin)",
+    load: async () => (await import("./eval.js")).evalCommand,
+  },
+};
+
+function usage(): string {
+  return ["usage: isochor <command> [arguments]", "", "commands:"]
+    .concat(Object.values(commands).map((c) => `  ${c.summary}`))
+    .join("\n");
+}
+
+export async function main(argv: string[], io: CliIo): Promise<number> {
+  const [name, ...rest] = argv;
+  if (name === undefined || name === "--help" || name === "-h") {
+    io.stdout(usage() + "\n");
+    return name === undefined ? 2 : 0;
+  }
+  const command = commands[name];
+  if (!command) {
+    io.stderr(`isochor: unknown command ${JSON.stringify(name)}\n${usage()}\n`);
+    return 2;
+  }
+  const run = await command.load();
+  return run(rest, io);
+}
+
+if (require.main === module) {
+  main(process.argv.slice(2), nodeIo()).then(
+    (code) => {
+      process.exitCode = code;
+    },
+    (error: unknown) => {
+      process.stderr.write(
+        `isochor: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`,
+      );
+      process.exitCode = 1;
+    },
+  );
+}
