@@ -1,0 +1,183 @@
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import { realCubicRoots } from "../../../kernel-lib/src/numerics/cubicRoots.js";
+import { InputError } from "../../../kernel-lib/src/errors.js";
+
+/** Relative difference, guarded for zero. */
+function rel(a: number, b: number): number {
+  return Math.abs(a - b) / Math.max(Math.abs(b), Number.MIN_VALUE);
+}
+
+/**
+ * The textbook trigonometric / Cardano formula with no rescaling and no polishing (Numerical
+ * Recipes 3rd ed. eq. 5.6.12 used as is): the "naive" method this module improves on.
+ */
+function naiveTrigRoots(a: number, b: number, c: number): number[] {
+  const Q = (a * a - 3 * b) / 9;
+  const R = (2 * a * a * a - 9 * a * b + 27 * c) / 54;
+  const theta = Math.acos(R / Math.sqrt(Q * Q * Q));
+  const sq = Math.sqrt(Q);
+  return [
+    -2 * sq * Math.cos(theta / 3) - a / 3,
+    -2 * sq * Math.cos((theta + 2 * Math.PI) / 3) - a / 3,
+    -2 * sq * Math.cos((theta - 2 * Math.PI) / 3) - a / 3,
+  ].sort((x, y) => x - y);
+}
+
+describe("realCubicRoots", () => {
+  it("solves (x-1)(x-2)(x-3) (closed form: expanded by hand)", () => {
+    const r = realCubicRoots(1, -6, 11, -6);
+    expect(r.roots).toHaveLength(3);
+    r.roots.forEach((x, i) => expect(x).toBeCloseTo(i + 1, 14));
+    r.residuals.forEach((p) => expect(Math.abs(p)).toBeLessThan(1e-13));
+  });
+
+  it("recovers tiny roots next to a root near 1 to full relative accuracy where the naive formula does not", () => {
+    // Exactly representable roots 2^-30, 3*2^-30 and 1 (closed form: (x-1)(x-e)(x-3e), e = 2^-30);
+    // every coefficient below is exact in binary64, so the exact roots are known. This is the
+    // shape of the cubic EOS in Z at low pressure.
+    const e = 2 ** -30;
+    const c2 = -(1 + 4 * e);
+    const c1 = 4 * e + 3 * e * e;
+    const c0 = -3 * e * e;
+    const careful = realCubicRoots(1, c2, c1, c0).roots;
+    expect(rel(careful[0], e)).toBeLessThan(1e-14);
+    expect(rel(careful[1], 3 * e)).toBeLessThan(1e-14);
+    expect(rel(careful[2], 1)).toBeLessThan(1e-15);
+    const naive = naiveTrigRoots(c2, c1, c0);
+    // The naive formula has absolute error ~ eps: relative error on the 1e-9 roots ~ 1e-7.
+    expect(Math.max(rel(naive[0], e), rel(naive[1], 3 * e))).toBeGreaterThan(1e-10);
+  });
+
+  it("handles coefficients whose scale would overflow the unscaled formula", () => {
+    // Roots 1e100, 2e100, 3e100: a^3 ~ 2e302 and 2 a^3 overflows without rescaling.
+    const r = realCubicRoots(1, -6e100, 11e200, -6e300).roots;
+    expect(r).toHaveLength(3);
+    [1e100, 2e100, 3e100].forEach((x, i) => expect(rel(r[i], x)).toBeLessThan(1e-12));
+    // Roots -2e-100, 1e-100, 4e-100 (closed form: sum 3e-100, pair sum -6e-200, product -8e-300):
+    // Q^3 and R^2 (~1e-600) would underflow to zero without rescaling.
+    const s = realCubicRoots(1, -3e-100, -6e-200, 8e-300).roots;
+    expect(s).toHaveLength(3);
+    [-2e-100, 1e-100, 4e-100].forEach((x, i) => expect(rel(s[i], x)).toBeLessThan(1e-12));
+  });
+
+  it("returns a double root twice and a triple root three times", () => {
+    // (x-1)^2 (x-2) = x^3 - 4x^2 + 5x - 2 (closed form)
+    const d = realCubicRoots(1, -4, 5, -2).roots;
+    expect(d).toHaveLength(3);
+    expect(d[0]).toBeCloseTo(1, 7);
+    expect(d[1]).toBeCloseTo(1, 7);
+    expect(d[2]).toBeCloseTo(2, 14);
+    // (x-1)^3 = x^3 - 3x^2 + 3x - 1
+    const t = realCubicRoots(1, -3, 3, -1).roots;
+    expect(t).toEqual([1, 1, 1]);
+    // x^3 = 0
+    expect(realCubicRoots(2, 0, 0, 0).roots).toEqual([0, 0, 0]);
+  });
+
+  it("separates nearly coincident distinct roots (1, 1 + 1e-6, 3)", () => {
+    // Roots of a double-root-like cubic are determined only to ~ sqrt(eps) * spread: 1e-6 apart is
+    // resolvable. Coefficients formed from the roots (closed form of Vieta's relations).
+    const r1 = 1,
+      r2 = 1 + 1e-6,
+      r3 = 3;
+    const res = realCubicRoots(1, -(r1 + r2 + r3), r1 * r2 + r1 * r3 + r2 * r3, -r1 * r2 * r3);
+    expect(res.roots).toHaveLength(3);
+    expect(Math.abs(res.roots[0] - r1)).toBeLessThan(1e-9);
+    expect(Math.abs(res.roots[1] - r2)).toBeLessThan(1e-9);
+    expect(res.roots[2]).toBeCloseTo(3, 13);
+  });
+
+  it("returns one real root when the other two are complex", () => {
+    // (x - 2)(x^2 + 1) = x^3 - 2x^2 + x - 2 (closed form)
+    const r = realCubicRoots(1, -2, 1, -2);
+    expect(r.roots).toHaveLength(1);
+    expect(r.roots[0]).toBeCloseTo(2, 15);
+  });
+
+  it("does not invent a double root when the closed-form discriminant is zero within rounding", () => {
+    // 1e-6 x^3 + 9e-33 x^2 + 1e-100 (found by the property test below): one real root near
+    // -c2/c3 = -9e-27 and a complex pair near 0 (f(0) = c0 > 0 is a local minimum), by hand.
+    const r = realCubicRoots(1e-6, 9e-33, 0, 1e-100);
+    expect(r.roots).toHaveLength(1);
+    expect(rel(r.roots[0], -9e-27)).toBeLessThan(1e-14);
+  });
+
+  it("solves quadratics, linear and constant cases", () => {
+    // 0 x^3 + x^2 - 3x + 2 = (x-1)(x-2)
+    expect(realCubicRoots(0, 1, -3, 2).roots).toEqual([1, 2]);
+    // Catastrophic-cancellation quadratic: x^2 - 1e8 x + 1 has roots ~1e8 and ~1e-8 (closed form:
+    // product of the roots = 1, so the small root is 1 / large root).
+    const q = realCubicRoots(0, 1, -1e8, 1).roots;
+    expect(rel(q[0], 1 / q[1])).toBeLessThan(1e-15);
+    expect(rel(q[0], 1e-8)).toBeLessThan(1e-15);
+    expect(realCubicRoots(0, 1, 0, 1).roots).toEqual([]);
+    expect(realCubicRoots(0, 1, -2, 1).roots).toEqual([1, 1]);
+    expect(realCubicRoots(0, 0, 2, -3).roots).toEqual([1.5]);
+    expect(realCubicRoots(0, 0, 0, 5).roots).toEqual([]);
+  });
+
+  it("refuses NaN, infinite and all-zero coefficients", () => {
+    expect(() => realCubicRoots(NaN, 1, 1, 1)).toThrow(InputError);
+    expect(() => realCubicRoots(1, Infinity, 1, 1)).toThrow(/c2/);
+    expect(() => realCubicRoots(0, 0, 0, 0)).toThrow(InputError);
+    expect(() => realCubicRoots(1, 0, 0, 1, { maxPolishSteps: -1 })).toThrow(InputError);
+  });
+
+  it("recovers random integer roots exactly (property)", () => {
+    // Integer roots in [-1000, 1000]: the expanded coefficients are exact integers.
+    fc.assert(
+      fc.property(
+        fc.integer({ min: -1000, max: 1000 }),
+        fc.integer({ min: -1000, max: 1000 }),
+        fc.integer({ min: -1000, max: 1000 }),
+        fc.integer({ min: 1, max: 7 }),
+        (p, q, r, lead) => {
+          const sorted = [p, q, r].sort((x, y) => x - y);
+          const res = realCubicRoots(
+            lead,
+            -lead * (p + q + r),
+            lead * (p * q + p * r + q * r),
+            -lead * p * q * r,
+          );
+          expect(res.roots).toHaveLength(3);
+          const distinct = sorted[0] !== sorted[1] && sorted[1] !== sorted[2];
+          // Distinct integer roots are well separated: near machine precision. Repeated ones are
+          // limited to ~sqrt(eps) (double) or eps^(1/3) (triple) relative to the root scale.
+          const scale = Math.max(1, ...sorted.map(Math.abs));
+          const tol = distinct ? 1e-9 * scale : 1e-4 * scale;
+          res.roots.forEach((x, i) => expect(Math.abs(x - sorted[i])).toBeLessThan(tol));
+        },
+      ),
+      { numRuns: 500 },
+    );
+  });
+
+  it("returns roots that are backward stable for random coefficients (property)", () => {
+    // Backward-stability bound (closed form of rounding analysis, common practice, no source):
+    // |p(x)| <= k eps sum |c_i x^i| for each returned root.
+    // Zero or a normal-range magnitude (subnormal coefficients are outside any physical use).
+    const coef = fc.oneof(
+      fc.constant(0),
+      fc.double({ min: -1e6, max: 1e6, noNaN: true }).filter((c) => Math.abs(c) > 1e-100),
+    );
+    fc.assert(
+      fc.property(
+        coef.filter((c) => Math.abs(c) > 1e-6),
+        coef,
+        coef,
+        coef,
+        (c3, c2, c1, c0) => {
+          const res = realCubicRoots(c3, c2, c1, c0);
+          expect(res.roots.length === 1 || res.roots.length === 3).toBe(true);
+          res.roots.forEach((x, i) => {
+            const magnitude =
+              Math.abs(c3 * x * x * x) + Math.abs(c2 * x * x) + Math.abs(c1 * x) + Math.abs(c0);
+            expect(Math.abs(res.residuals[i])).toBeLessThanOrEqual(64 * Number.EPSILON * magnitude);
+          });
+        },
+      ),
+      { numRuns: 2000 },
+    );
+  });
+});
