@@ -1,0 +1,128 @@
+/**
+ * The HTML fragment of one chart: a static SVG rendered in Node, upgraded in place to a live
+ * vega-embed view when scripts run and the runtime (vegaRuntimeScript) is on the page.
+ *
+ *   <figure class="isochor-chart" id=... data-isochor-chart="static">
+ *     <div class="isochor-chart-static"> SVG </div>         shown until the live view is up
+ *     <div class="isochor-chart-live"></div>                 vega-embed renders here
+ *     <script type="application/json"> spec </script>        escaped for the script element
+ *     <script> boot </script>                                waits for window.vegaEmbed, embeds
+ *     <figcaption> caption (escaped) </figcaption>
+ *   </figure>
+ *
+ * Marker for checkers: `data-isochor-chart` goes "static" -> "live" once vega-embed has rendered,
+ * or "failed" (with a console error) if it could not. Untrusted notebooks and pages without
+ * scripts keep the static SVG, which is the intended fallback.
+ */
+import { randomBytes } from "node:crypto";
+import { InputError } from "../errors.js";
+import { escapeHtml, jsonForScript } from "./escapeHtml.js";
+import { renderSvg } from "./renderSvg.js";
+import { vegaRuntimeScript } from "./vegaRuntime.js";
+import type { VegaLiteSpec } from "./vegaLiteSpec.js";
+
+/** Attribute on each chart's container: "static", then "live" or "failed". */
+export const CHART_STATE_ATTRIBUTE = "data-isochor-chart";
+
+/** Options of {@link chartHtml}. */
+export interface ChartHtmlOptions {
+  /**
+   * Put the inline runtime (about 830 KB) in front of the chart. Default false: the caller sends
+   * it once per page (showChart does this for the first chart of a kernel session; records put it
+   * in the page head).
+   */
+  includeRuntime?: boolean;
+  /** Caption shown under the chart, as plain text (escaped). Default: none. */
+  caption?: string;
+  /**
+   * How long the live upgrade waits for the runtime to appear on the page, in milliseconds,
+   * before it leaves the static SVG in place. Default 15000.
+   */
+  runtimeWaitMs?: number;
+}
+
+/** Chart element ids: random, so two outputs on one page never collide. */
+function newChartId(): string {
+  return "isochor-chart-" + randomBytes(6).toString("hex");
+}
+
+/**
+ * Browser-side boot of one chart. Plain ES2017, no template literals with user text: the id is
+ * generated here, the spec travels as JSON data in its own element and is never evaluated as code.
+ */
+function bootScript(id: string, runtimeWaitMs: number): string {
+  return `(function () {
+  var id = ${JSON.stringify(id)}, waited = 0;
+  function start() {
+    var root = document.getElementById(id);
+    if (!root || root.getAttribute(${JSON.stringify(CHART_STATE_ATTRIBUTE)}) !== "static") return;
+    if (typeof window.vegaEmbed !== "function") {
+      if (waited >= ${runtimeWaitMs}) return;
+      waited += 100;
+      setTimeout(start, 100);
+      return;
+    }
+    root.setAttribute(${JSON.stringify(CHART_STATE_ATTRIBUTE)}, "starting");
+    var spec = JSON.parse(root.querySelector("script.isochor-chart-spec").textContent);
+    var live = root.querySelector(".isochor-chart-live");
+    window.vegaEmbed(live, spec, { actions: false, renderer: "svg" }).then(function () {
+      root.querySelector(".isochor-chart-static").style.display = "none";
+      live.style.display = "";
+      root.setAttribute(${JSON.stringify(CHART_STATE_ATTRIBUTE)}, "live");
+    }, function (error) {
+      root.setAttribute(${JSON.stringify(CHART_STATE_ATTRIBUTE)}, "failed");
+      console.error("isochor chart " + id + " stayed static: " + (error && error.message));
+    });
+  }
+  if (document.readyState === "loading") document.addEventListener("DOMContentLoaded", start);
+  else start();
+})();`;
+}
+
+/**
+ * Builds the HTML fragment for one chart: static SVG now, live vega-embed view when scripts run.
+ * @param spec A Vega-Lite v6 specification with inline data.
+ * @param options See {@link ChartHtmlOptions}.
+ * @returns HTML text, safe to place in a notebook output or a page.
+ * @example
+ * const html = await chartHtml(spec, { caption: "Z against pressure, Corvid Point feed gas" });
+ */
+export async function chartHtml(
+  spec: VegaLiteSpec,
+  options: ChartHtmlOptions = {},
+): Promise<string> {
+  const includeRuntime = options.includeRuntime ?? false;
+  const runtimeWaitMs = options.runtimeWaitMs ?? 15000;
+  if (!(runtimeWaitMs >= 0) || !Number.isFinite(runtimeWaitMs)) {
+    throw new InputError({
+      input: "options.runtimeWaitMs",
+      unit: "ms",
+      validRange: "a finite number >= 0",
+      received: runtimeWaitMs,
+    });
+  }
+  if (options.caption !== undefined && typeof options.caption !== "string") {
+    throw new InputError({
+      input: "options.caption",
+      unit: "-",
+      validRange: "a string",
+      received: options.caption,
+    });
+  }
+  const svg = await renderSvg(spec);
+  const id = newChartId();
+  const caption =
+    options.caption !== undefined
+      ? `<figcaption class="isochor-chart-caption">${escapeHtml(options.caption)}</figcaption>`
+      : "";
+  return (
+    (includeRuntime ? vegaRuntimeScript() + "\n" : "") +
+    `<figure class="isochor-chart" id="${id}" ${CHART_STATE_ATTRIBUTE}="static" style="margin:0.5em 0">` +
+    `<div class="isochor-chart-static">${svg}</div>` +
+    `<div class="isochor-chart-live" style="display:none"></div>` +
+    `<script type="application/json" class="isochor-chart-spec">${jsonForScript(spec)}</script>` +
+    `<script>${bootScript(id, runtimeWaitMs)}</script>` +
+    caption +
+    `</figure>`
+  );
+}

@@ -1,0 +1,30 @@
+/**
+ * Per-kernel-session display state: whether the chart runtime has been sent to the page yet.
+ * Kept on a global symbol rather than in a module variable, so that every copy of the library
+ * loaded in one process (the runner's and a notebook's) agrees, and so the records runner can
+ * start a fresh session for each notebook it executes.
+ */
+interface DisplaySession {
+  runtimeSent: boolean;
+}
+
+const KEY = Symbol.for("isochor.display.session");
+
+export function displaySession(): DisplaySession {
+  const holder = globalThis as unknown as Record<symbol, DisplaySession | undefined>;
+  let session = holder[KEY];
+  if (!session) {
+    session = { runtimeSent: false };
+    holder[KEY] = session;
+  }
+  return session;
+}
+
+/**
+ * Starts a fresh display session: the next chart shown carries the inline runtime again.
+ * Call it when the page was reloaded without restarting the kernel (charts then stay static
+ * until the runtime is sent). The records runner calls it before each notebook.
+ */
+export function resetDisplaySession(): void {
+  displaySession().runtimeSent = false;
+}

@@ -1,0 +1,51 @@
+/**
+ * Shows a chart in the current tslab cell, in one call and one output (text/html: nbconvert's HTML
+ * export would strip image/svg+xml). The first chart of a kernel session carries the runtime.
+ */
+import { chartHtml } from "./chartHtml.js";
+import { displaySession } from "./displaySession.js";
+import type { VegaLiteSpec } from "./vegaLiteSpec.js";
+
+/** Options of {@link showChart}. */
+export interface ShowChartOptions {
+  /**
+   * Send the inline runtime with this chart even if it was sent before in this kernel session
+   * (use after reloading the page without restarting the kernel). Default: only with the first
+   * chart of the session.
+   */
+  includeRuntime?: boolean;
+  /** Caption under the chart, as plain text (escaped). Default: none. */
+  caption?: string;
+}
+
+/** The part of tslab's public module used here (tslab is loaded lazily: it pulls in TypeScript). */
+interface TslabDisplay {
+  display: { html(s: string): void };
+}
+
+/**
+ * Displays a Vega-Lite chart in the current tslab notebook cell: static SVG at once, live view
+ * when the notebook is trusted.
+ * @param spec A Vega-Lite v6 specification with inline data.
+ * @param options See {@link ShowChartOptions}.
+ * @example
+ * await showChart(spec, { caption: "Feed gas Z, Corvid Point crude unit" });
+ */
+export async function showChart(spec: VegaLiteSpec, options: ShowChartOptions = {}): Promise<void> {
+  const session = displaySession();
+  const includeRuntime = options.includeRuntime ?? !session.runtimeSent;
+  const html = await chartHtml(spec, { includeRuntime, caption: options.caption });
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const tslab = require("tslab") as TslabDisplay;
+  try {
+    tslab.display.html(html);
+  } catch (error) {
+    throw new Error(
+      "showChart displays in a tslab notebook cell (or under `isochor run`); outside one, use " +
+        "chartHtml() for HTML or savePng() for an image. tslab said: " +
+        (error instanceof Error ? error.message : String(error)),
+      { cause: error },
+    );
+  }
+  if (includeRuntime) session.runtimeSent = true;
+}
