@@ -1,0 +1,223 @@
+/**
+ * Ideal-gas cp, h and s of a pure species from its molecular constants (statistical mechanics).
+ *
+ * Pipeline: molecular constants (data/molecules.json or the caller's) -> validation ->
+ * precomputation (hindered-rotor levels, h at 298.15 K) -> per-temperature sum of contributions:
+ *   translation (translation.ts, Sackur-Tetrode at 1 bar)
+ * + rotation (linearRotor.ts / linearRotorLevels.ts / nonlinearRotor.ts)
+ * + harmonic vibrations (harmonicVibration.ts)
+ * + electronic levels (electronic.ts)
+ * + internal rotors (hinderedRotor.ts), replacing the torsional vibrations they stand for.
+ * McQuarrie, Statistical Mechanics (2000), ch. 5-8: the molecular partition function factorises,
+ * so cp, h - h(0 K) and s are sums over these parts.
+ *
+ * Valid temperature range (judgement, stated in `validTemperatureK`):
+ *   min = 20 K for atoms and level-summed linear rotors; otherwise max(50 K, 5 theta_rot,max),
+ *         where theta_rot,max is the largest rotational temperature of a classical rotor
+ *         (water: 200 K, ammonia: 72 K, the rest: 50 K);
+ *   max = 3000 K. Above about 1000 K the harmonic-oscillator / rigid-rotor model misses
+ *         anharmonicity and vibration-rotation coupling; cp errors grow to about 1-3 % at 3000 K
+ *         (more for H2 and molecules with low-frequency or large-amplitude modes). Dissociation and
+ *         ionisation are not modelled.
+ * Outside the range every function throws OutOfRangeError; a temperature that is not a finite
+ * positive number throws InputError.
+ */
+import { OutOfRangeError } from "../../errors.js";
+import { requirePositive } from "../../validate.js";
+import { STANDARD_TEMPERATURE_K, type IdealGasPure } from "../types.js";
+import { electronicContribution } from "./electronic.js";
+import { harmonicVibrationContribution, type HarmonicMode } from "./harmonicVibration.js";
+import { buildHinderedRotor, type HinderedRotorModel } from "./hinderedRotor.js";
+import { linearRotorContribution } from "./linearRotor.js";
+import { linearRotorLevelsContribution } from "./linearRotorLevels.js";
+import { getMolecule, validateMolecularConstants } from "./moleculeTable.js";
+import { nonlinearRotorContribution } from "./nonlinearRotor.js";
+import { wavenumberToKelvin } from "./spectroscopicUnits.js";
+import { translationalContribution } from "./translation.js";
+import {
+  NO_CONTRIBUTION,
+  sumContributions,
+  type MolecularConstants,
+  type ThermoContribution,
+} from "./types.js";
+
+/** How the torsional modes listed as internal rotors are treated. */
+export type TorsionTreatment = "hindered-rotor" | "harmonic" | "free-rotor";
+
+/** How the rotation of a linear molecule is treated. */
+export type LinearRotorTreatment = "auto" | "classical" | "level-sum";
+
+/** Options of idealGasFromMolecule. */
+export interface MolecularIdealGasOptions {
+  /**
+   * Treatment of torsions that have an internal-rotor entry. Default "hindered-rotor" (exact levels
+   * of V0/2 (1 - cos n phi)). "harmonic" uses the observed torsional fundamental from the vibration
+   * list; "free-rotor" uses the same level computation with V0 = 0. Example: ethane at 400 K gives
+   * s = 246.4 J/(mol K) with the default, about 245.3 harmonic and 249.2 free rotor.
+   */
+  readonly torsion?: TorsionTreatment;
+  /**
+   * Rotation of linear molecules. Default "auto": explicit level sum with nuclear-spin statistics
+   * when the data carry `nuclearSpinWeights` (H2), classical otherwise. "level-sum" without spin
+   * weights uses weights 1 and 1 (heteronuclear) and requires sigma = 1 or the weights.
+   */
+  readonly linearRotor?: LinearRotorTreatment;
+}
+
+/** The IdealGasPure contract plus the statistical-mechanics details, for inspection in a notebook. */
+export interface MolecularIdealGas extends IdealGasPure {
+  /** The molecular constants used. */
+  readonly constants: MolecularConstants;
+  /** Treatment of torsions used. */
+  readonly torsion: TorsionTreatment;
+  /** Contributions at temperature T (K), each with cp, h - h(0 K) and s at 1 bar. */
+  contributions(temperatureK: number): {
+    readonly translation: ThermoContribution;
+    readonly rotation: ThermoContribution;
+    readonly vibration: ThermoContribution;
+    readonly electronic: ThermoContribution;
+    readonly internalRotation: ThermoContribution;
+    readonly total: ThermoContribution;
+  };
+  /** Sensible enthalpy h(T) - h(0 K), J/mol. */
+  enthalpyFrom0K(temperatureK: number): number;
+}
+
+/** Highest temperature of the model, K. */
+export const MOLECULAR_MAX_TEMPERATURE_K = 3000;
+
+/**
+ * Ideal-gas properties from molecular constants.
+ * @param molecule a shipped id ("ethane"), formula ("C2H6") or a MolecularConstants object
+ * @param options see MolecularIdealGasOptions
+ * @example idealGasFromMolecule("ethane").entropyStandard(400) // about 246.4 J/(mol K)
+ */
+export function idealGasFromMolecule(
+  molecule: string | MolecularConstants,
+  options: MolecularIdealGasOptions = {},
+): MolecularIdealGas {
+  const c = validateMolecularConstants(
+    typeof molecule === "string" ? getMolecule(molecule) : molecule,
+  );
+  const torsion = options.torsion ?? "hindered-rotor";
+  if (!["hindered-rotor", "harmonic", "free-rotor"].includes(torsion)) {
+    throw new OutOfRangeError({
+      input: "options.torsion",
+      unit: "-",
+      validRange: '"hindered-rotor", "harmonic" or "free-rotor"',
+      received: torsion,
+    });
+  }
+  const linearChoice = options.linearRotor ?? "auto";
+  if (!["auto", "classical", "level-sum"].includes(linearChoice)) {
+    throw new OutOfRangeError({
+      input: "options.linearRotor",
+      unit: "-",
+      validRange: '"auto", "classical" or "level-sum"',
+      received: linearChoice,
+    });
+  }
+  const spinWeights = c.nuclearSpinWeights ?? { even: 1, odd: 1 };
+  const levelSumLinear =
+    c.geometry === "linear" &&
+    (linearChoice === "level-sum" ||
+      (linearChoice === "auto" && c.nuclearSpinWeights !== undefined));
+  if (levelSumLinear && c.nuclearSpinWeights === undefined && c.symmetryNumber !== 1) {
+    throw new OutOfRangeError({
+      input: `${c.id}.nuclearSpinWeights`,
+      unit: "-",
+      validRange: "given when a homonuclear (sigma = 2) rotor's levels are summed explicitly",
+      received: undefined,
+    });
+  }
+
+  // Vibrations kept as harmonic oscillators; torsions go to the rotor models unless "harmonic".
+  const harmonicModes: HarmonicMode[] = c.vibrations.filter(
+    (v) => v.internalRotorIndex === undefined || torsion === "harmonic",
+  );
+  const rotors: HinderedRotorModel[] =
+    torsion === "harmonic"
+      ? []
+      : c.internalRotors.map((r) =>
+          buildHinderedRotor(torsion === "free-rotor" ? { ...r, barrierInvCm: 0 } : r, {
+            maxTemperatureK: MOLECULAR_MAX_TEMPERATURE_K,
+          }),
+        );
+
+  const classicalThetaMax =
+    c.geometry === "atom" || levelSumLinear
+      ? 0
+      : Math.max(...c.rotationalConstantsInvCm.map(wavenumberToKelvin));
+  const minT =
+    c.geometry === "atom" || levelSumLinear ? 20 : Math.max(50, Math.ceil(5 * classicalThetaMax));
+  const validTemperatureK = { min: minT, max: MOLECULAR_MAX_TEMPERATURE_K };
+
+  const check = (temperatureK: number): number => {
+    requirePositive("temperatureK", temperatureK, "K");
+    if (!(temperatureK >= minT && temperatureK <= MOLECULAR_MAX_TEMPERATURE_K)) {
+      throw new OutOfRangeError({
+        input: "temperatureK",
+        unit: "K",
+        validRange: `${minT} K to ${MOLECULAR_MAX_TEMPERATURE_K} K for ${c.id} (statistical-mechanics model)`,
+        received: temperatureK,
+      });
+    }
+    return temperatureK;
+  };
+
+  const rotation = (t: number): ThermoContribution => {
+    if (c.geometry === "atom") return NO_CONTRIBUTION;
+    if (c.geometry === "linear") {
+      return levelSumLinear
+        ? linearRotorLevelsContribution(
+            c.rotationalConstantsInvCm[0],
+            c.symmetryNumber,
+            spinWeights,
+            t,
+          )
+        : linearRotorContribution(c.rotationalConstantsInvCm[0], c.symmetryNumber, t);
+    }
+    return nonlinearRotorContribution(c.rotationalConstantsInvCm, c.symmetryNumber, t);
+  };
+
+  const parts = (t: number) => {
+    const translation = translationalContribution(c.molarMassKgPerMol, t);
+    const rot = rotation(t);
+    const vibration = harmonicVibrationContribution(harmonicModes, t);
+    const electronic = electronicContribution(c.electronicLevels, t);
+    const internalRotation = sumContributions(rotors.map((r) => r.contribution(t)));
+    const total = sumContributions([translation, rot, vibration, electronic, internalRotation]);
+    return { translation, rotation: rot, vibration, electronic, internalRotation, total };
+  };
+
+  const h298 = parts(STANDARD_TEMPERATURE_K).total.enthalpyFrom0K;
+  const methodParts = [
+    "translation",
+    c.geometry === "atom"
+      ? ""
+      : levelSumLinear
+        ? "rotational level sum (ortho/para equilibrium)"
+        : "classical rigid rotor",
+    c.vibrations.length > 0 ? "harmonic oscillators" : "",
+    "electronic levels",
+    rotors.length > 0
+      ? torsion === "free-rotor"
+        ? "free internal rotor"
+        : "hindered internal rotor (exact levels)"
+      : "",
+  ].filter((s) => s !== "");
+
+  return {
+    componentId: c.id,
+    method: `statistical mechanics (${methodParts.join(", ")})`,
+    source: c.sources.join("; "),
+    validTemperatureK,
+    constants: c,
+    torsion,
+    contributions: (temperatureK) => parts(check(temperatureK)),
+    cp: (temperatureK) => parts(check(temperatureK)).total.cp,
+    enthalpyFrom0K: (temperatureK) => parts(check(temperatureK)).total.enthalpyFrom0K,
+    enthalpyFrom298: (temperatureK) => parts(check(temperatureK)).total.enthalpyFrom0K - h298,
+    entropyStandard: (temperatureK) => parts(check(temperatureK)).total.entropy,
+  };
+}

@@ -1,0 +1,54 @@
+/**
+ * Rotational contribution of a linear molecule by an explicit sum over rigid-rotor levels,
+ * with nuclear-spin statistics in ortho/para equilibrium.
+ *
+ *   q_rot = [2 / (sigma (g_even + g_odd))] * sum_J g(J) (2J + 1) exp(-theta_r J(J+1) / T)
+ *
+ * where g(J) is the nuclear-spin weight of even or odd J (H2: 1 and 3). The sum is the
+ * "equilibrium" mixture: ortho and para forms interconvert and share one Boltzmann distribution
+ * (McQuarrie, Statistical Mechanics, 2000, sec. 6-5, eq. 6-50, equilibrium case). The prefactor
+ * divides out the nuclear-spin degeneracy (2I+1)^2, as third-law tables do, so that q_rot tends to
+ * the classical T/(sigma theta_r) at high T. For a heteronuclear molecule use weights 1 and 1 with
+ * sigma = 1.
+ *
+ * Limits: equilibrium hydrogen only. "Normal" hydrogen (ortho:para frozen at 3:1, as in a gas
+ * cooled quickly without a catalyst) has a different cv below about 250 K and is not modelled.
+ * The levels are those of a rigid rotor with the ground-state constant B0 (no centrifugal
+ * distortion), so at high T the vibration-rotation coupling is missing.
+ */
+import { wavenumberToKelvin } from "./spectroscopicUnits.js";
+import { levelSumContribution } from "./levelSum.js";
+import type { NuclearSpinWeights, ThermoContribution } from "./types.js";
+
+/** Options for the explicit rotational level sum. */
+export interface LinearRotorLevelsOptions {
+  /** Stop the sum when theta_r J(J+1)/T exceeds this. Default 60 (terms below e^-60 dropped). */
+  readonly cutoff?: number;
+}
+
+/**
+ * @param rotationalConstantInvCm B0, cm^-1
+ * @param symmetryNumber sigma
+ * @param weights nuclear-spin weights of even and odd J
+ * @param temperatureK temperature, K
+ */
+export function linearRotorLevelsContribution(
+  rotationalConstantInvCm: number,
+  symmetryNumber: number,
+  weights: NuclearSpinWeights,
+  temperatureK: number,
+  options: LinearRotorLevelsOptions = {},
+): ThermoContribution {
+  const cutoff = options.cutoff ?? 60;
+  const thetaR = wavenumberToKelvin(rotationalConstantInvCm);
+  const theta: number[] = [];
+  const g: number[] = [];
+  for (let j = 0; ; j++) {
+    const th = thetaR * j * (j + 1);
+    theta.push(th);
+    g.push((j % 2 === 0 ? weights.even : weights.odd) * (2 * j + 1));
+    if (th / temperatureK > cutoff && j > 2) break;
+  }
+  const prefactor = 2 / (symmetryNumber * (weights.even + weights.odd));
+  return levelSumContribution({ thetaK: theta, degeneracy: g, prefactor }, temperatureK);
+}
