@@ -1,2 +1,8 @@
-// Public exports of numerics/ (filled by the area as it lands).
-export {};
+// Public exports of numerics/: root finders, linear solve, quadrature, hyper-dual differentiation.
+export { realCubicRoots } from "./cubicRoots.js";
+export type { CubicRootsOptions, CubicRootsResult } from "./cubicRoots.js";
+export { findRootBrent } from "./brent.js";
+export type { BrentOptions, RootResult } from "./brent.js";
+export { solveLinear } from "./linearSolve.js";
+export { solveNewtonSystem } from "./newton.js";
+export type { NewtonOptions, NewtonResult } from "./newton.js";
