@@ -6,3 +6,5 @@ export type { BrentOptions, RootResult } from "./brent.js";
 export { solveLinear } from "./linearSolve.js";
 export { solveNewtonSystem } from "./newton.js";
 export type { NewtonOptions, NewtonResult } from "./newton.js";
+export { integrateAdaptive } from "./gaussKronrod.js";
+export type { QuadratureOptions, QuadratureResult } from "./gaussKronrod.js";
