@@ -1,0 +1,185 @@
+/**
+ * A reference-quality fluid: a multiparameter Helmholtz equation of state built from a data file
+ * (./data/*.json), exposed as a {@link ResidualModel} so the engine computes every property from it,
+ * plus what only a reference equation has: its own ideal part phi_0 with the publication's reference
+ * state, its published gas constant, critical and triple points, validity range and ancillary
+ * equations (saturation starting values).
+ *
+ * Conversion to the engine's reduced derivatives (tau = T_red/T, delta = rho/rho_red):
+ *   a = phi_r, aD = delta phi_d, aDD = delta^2 phi_dd, aDDD = delta^3 phi_ddd,
+ *   aT = -tau phi_t, aTT = tau^2 phi_tt + 2 tau phi_t, aDT = -delta tau phi_dt.
+ */
+import type { ResultWarning } from "../../errors.js";
+import type { ModelInfo, ResidualDerivatives, ResidualModel } from "../types.js";
+import type { ReferenceState } from "../../idealgas/types.js";
+import { compileAncillary, type Ancillary } from "./ancillary.js";
+import type { RangeData, ReferenceFluidData } from "./fluidData.js";
+import { compileIdealPart, type IdealPart } from "./idealPart.js";
+import {
+  compileResidualPart,
+  emptyReducedHelmholtz,
+  type ReducedHelmholtz,
+  type ResidualPart,
+} from "./residualPart.js";
+
+/** A fixed point of the fluid in SI molar units. */
+export interface FluidPoint {
+  readonly temperatureK: number;
+  /** mol/m3 */
+  readonly densityMolPerM3: number;
+  /** Pa */
+  readonly pressurePa: number;
+}
+
+/** Saturation starting values from the published ancillary equations. */
+export interface SaturationEstimate {
+  readonly pressurePa: number;
+  /** mol/m3 */
+  readonly liquidDensityMolPerM3: number;
+  /** mol/m3 */
+  readonly vaporDensityMolPerM3: number;
+}
+
+/** Where a state lies relative to the equation's published range. */
+export type ValidityStatus = "inside" | "extrapolated" | "outside";
+
+/** A reference fluid: a ResidualModel with the extras of a published reference equation. */
+export interface ReferenceFluid extends ResidualModel {
+  readonly gasConstant: number;
+  readonly data: ReferenceFluidData;
+  readonly molarMassKgPerMol: number;
+  /** Published critical point (the equation reproduces it by construction). */
+  readonly critical: FluidPoint;
+  /** Published triple-point temperature and pressure, K and Pa. */
+  readonly triple: { readonly temperatureK: number; readonly pressurePa: number };
+  /** Reducing temperature (K) and molar density (mol/m3) of tau and delta. */
+  readonly reducing: { readonly temperatureK: number; readonly densityMolPerM3: number };
+  /** The zero of h, s, u of results computed with {@link ReferenceFluid.idealReduced}. */
+  readonly referenceState: ReferenceState;
+  /** phi_r and reduced derivatives at (tau, delta), written into `out` (no allocation). */
+  residualReduced(tau: number, delta: number, out: ReducedHelmholtz): ReducedHelmholtz;
+  /** phi_0 (publication's reference state) and reduced derivatives at (tau, delta). */
+  idealReduced(tau: number, delta: number, out: ReducedHelmholtz): ReducedHelmholtz;
+  /** Saturation estimate from the ancillary equations; T below the critical temperature. */
+  saturationEstimate(temperatureK: number): SaturationEstimate;
+  /** Where (T, P) lies relative to the published range and its extrapolation range. */
+  validityStatus(temperatureK: number, pressurePa: number): ValidityStatus;
+  /** The published range in words, for messages. */
+  readonly validityDescription: string;
+}
+
+function describeRange(r: RangeData): string {
+  return `${r.temperatureK.min} K to ${r.temperatureK.max} K at pressures up to ${r.pressurePa.max / 1e6} MPa`;
+}
+
+function inside(r: RangeData, temperatureK: number, pressurePa: number): boolean {
+  return (
+    temperatureK >= r.temperatureK.min &&
+    temperatureK <= r.temperatureK.max &&
+    pressurePa <= r.pressurePa.max
+  );
+}
+
+/** Builds a {@link ReferenceFluid} from its data file. */
+export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
+  const M = data.molarMassKgPerMol;
+  const R =
+    data.gasConstantJPerMolK ??
+    (data.specificGasConstantJPerKgK !== undefined ? data.specificGasConstantJPerKgK * M : NaN);
+  if (!(R > 0)) throw new RangeError(`fluid ${data.id}: no gas constant in its data file`);
+  const Tred = data.reducing.temperatureK;
+  const rhoRed = data.reducing.densityKgPerM3 / M;
+  const residualPart: ResidualPart = compileResidualPart(data.residual);
+  const idealPart: IdealPart = compileIdealPart(data.ideal);
+  const anc = data.ancillaries;
+  const psatAnc: Ancillary = compileAncillary(anc.pressure, anc.reducingTemperatureK, 1);
+  const densityScale = (unit: string | undefined): number => (unit === "mol/m3" ? 1 : 1 / M);
+  const rhoLAnc = compileAncillary(
+    anc.liquidDensity,
+    anc.reducingTemperatureK,
+    densityScale(anc.liquidDensity.unit),
+  );
+  const rhoVAnc = compileAncillary(
+    anc.vaporDensity,
+    anc.reducingTemperatureK,
+    densityScale(anc.vaporDensity.unit),
+  );
+  const scratch = emptyReducedHelmholtz();
+  const info: ModelInfo = {
+    id: "reference",
+    name: data.name,
+    citation: Object.values(data.citations).join(" "),
+    componentIds: [data.id],
+  };
+  const validityDescription =
+    `${data.name} is valid from ${describeRange(data.validity)}; ` +
+    `extrapolation is allowed to ${describeRange(data.validity.extrapolation)}. ${data.validity.note}`;
+
+  function validityStatus(temperatureK: number, pressurePa: number): ValidityStatus {
+    if (inside(data.validity, temperatureK, pressurePa)) return "inside";
+    if (inside(data.validity.extrapolation, temperatureK, pressurePa)) return "extrapolated";
+    return "outside";
+  }
+
+  return {
+    info,
+    gasConstant: R,
+    data,
+    molarMassKgPerMol: M,
+    critical: {
+      temperatureK: data.critical.temperatureK,
+      densityMolPerM3: data.critical.densityKgPerM3 / M,
+      pressurePa: data.critical.pressurePa,
+    },
+    triple: { temperatureK: data.triple.temperatureK, pressurePa: data.triple.pressurePa },
+    reducing: { temperatureK: Tred, densityMolPerM3: rhoRed },
+    referenceState: { kind: "fluid-convention", description: data.referenceState },
+    validityDescription,
+    residual(temperatureK: number, densityMolPerM3: number): ResidualDerivatives {
+      const tau = Tred / temperatureK;
+      const r = residualPart.evaluate(tau, densityMolPerM3 / rhoRed, scratch);
+      return {
+        a: r.f,
+        aD: r.fD,
+        aDD: r.fDD,
+        aDDD: r.fDDD,
+        aT: -r.fT,
+        aTT: r.fTT + 2 * r.fT,
+        aDT: -r.fDT,
+        // A pure fluid: d(n alpha_r)/dn = alpha_r + rho d(alpha_r)/d(rho).
+        dnA: [r.f + r.fD],
+      };
+    },
+    maxDensity(): number {
+      return Infinity;
+    },
+    checkValidity(temperatureK: number, densityMolPerM3: number): ResultWarning[] {
+      const tau = Tred / temperatureK;
+      const r = residualPart.evaluate(tau, densityMolPerM3 / rhoRed, scratch);
+      const pressurePa = densityMolPerM3 * R * temperatureK * (1 + r.fD);
+      const status = validityStatus(temperatureK, pressurePa);
+      if (status === "inside") return [];
+      return [
+        {
+          code: "outside-validity",
+          message:
+            `state T = ${temperatureK} K, P = ${pressurePa} Pa is outside the published range of ` +
+            `${data.name} (${describeRange(data.validity)})` +
+            (status === "extrapolated"
+              ? `; it is within the published extrapolation range (${describeRange(data.validity.extrapolation)}).`
+              : ` and outside its extrapolation range (${describeRange(data.validity.extrapolation)}): results are not trustworthy.`),
+        },
+      ];
+    },
+    residualReduced: (tau, delta, out) => residualPart.evaluate(tau, delta, out),
+    idealReduced: (tau, delta, out) => idealPart.evaluate(tau, delta, out),
+    saturationEstimate(temperatureK: number): SaturationEstimate {
+      return {
+        pressurePa: psatAnc(temperatureK),
+        liquidDensityMolPerM3: rhoLAnc(temperatureK),
+        vaporDensityMolPerM3: rhoVAnc(temperatureK),
+      };
+    },
+    validityStatus,
+  };
+}
