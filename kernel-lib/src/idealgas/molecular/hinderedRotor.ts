@@ -21,7 +21,9 @@
  *
  * Basis size: M is chosen so that B M^2 exceeds V0 + `cutoff` kB T_max; eigenvalues near the top
  * of a truncated basis are inaccurate, but they carry Boltzmann factors below e^-cutoff at T_max.
- * The levels depend only on the molecule, so they are computed once per rotor (memoised).
+ * The levels depend only on the molecule, so they are computed once per rotor (memoised in a
+ * small module-level cache keyed by the rotor constants and basis options; the cache holds pure
+ * results only, so cells run out of order cannot see stale state).
  */
 import { InputError } from "../../errors.js";
 import { levelSumContribution } from "./levelSum.js";
@@ -99,12 +101,36 @@ function checkRotor(rotor: InternalRotor, where: string): void {
   }
 }
 
-/** Diagonalise the hindered-rotor Hamiltonian once and return a model that evaluates cp, h, s. */
+const CACHE_LIMIT = 64;
+const cache = new Map<string, HinderedRotorModel>();
+
+/**
+ * Diagonalise the hindered-rotor Hamiltonian once and return a model that evaluates cp, h, s.
+ * Repeated calls with the same constants and options return the memoised model.
+ */
 export function buildHinderedRotor(
   rotor: InternalRotor,
   options: HinderedRotorOptions = {},
 ): HinderedRotorModel {
   checkRotor(rotor, "internalRotor");
+  const key = JSON.stringify([
+    rotor.barrierInvCm,
+    rotor.fold,
+    rotor.symmetryNumber,
+    rotor.reducedMomentAmuA2,
+    options.maxTemperatureK ?? null,
+    options.cutoff ?? null,
+    options.basisHalfWidth ?? null,
+  ]);
+  const hit = cache.get(key);
+  if (hit) return hit;
+  const model = diagonalise(rotor, options);
+  if (cache.size >= CACHE_LIMIT) cache.clear();
+  cache.set(key, model);
+  return model;
+}
+
+function diagonalise(rotor: InternalRotor, options: HinderedRotorOptions): HinderedRotorModel {
   const maxT = options.maxTemperatureK ?? 3000;
   const cutoff = options.cutoff ?? 50;
   const b = rotationalConstantFromMoment(rotor.reducedMomentAmuA2);

@@ -180,14 +180,28 @@ export function idealGasFromMolecule(
     return nonlinearRotorContribution(c.rotationalConstantsInvCm, c.symmetryNumber, t);
   };
 
-  const parts = (t: number) => {
+  type Parts = {
+    translation: ThermoContribution;
+    rotation: ThermoContribution;
+    vibration: ThermoContribution;
+    electronic: ThermoContribution;
+    internalRotation: ThermoContribution;
+    total: ThermoContribution;
+  };
+  // One-entry memo: callers usually ask cp, h and s at the same temperature in a row.
+  let lastT = NaN;
+  let lastParts: Parts | undefined;
+  const parts = (t: number): Parts => {
+    if (t === lastT && lastParts) return lastParts;
     const translation = translationalContribution(c.molarMassKgPerMol, t);
     const rot = rotation(t);
     const vibration = harmonicVibrationContribution(harmonicModes, t);
     const electronic = electronicContribution(c.electronicLevels, t);
     const internalRotation = sumContributions(rotors.map((r) => r.contribution(t)));
     const total = sumContributions([translation, rot, vibration, electronic, internalRotation]);
-    return { translation, rotation: rot, vibration, electronic, internalRotation, total };
+    lastT = t;
+    lastParts = { translation, rotation: rot, vibration, electronic, internalRotation, total };
+    return lastParts;
   };
 
   const h298 = parts(STANDARD_TEMPERATURE_K).total.enthalpyFrom0K;
