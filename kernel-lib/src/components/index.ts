@@ -1,2 +1,20 @@
-// Public exports of components/ (filled by the area as it lands).
-export {};
+// Public exports of components/: the component record, the built-in table, lookup and validation.
+export type {
+  Component,
+  ComponentOrigin,
+  ComponentSources,
+  CpCorrelation,
+  PolynomialCp,
+  PolynomialCpSegment,
+  AlyLeeCp,
+} from "./types.js";
+export { getComponent, listComponents, normalizeComponentName } from "./getComponent.js";
+export type { GetComponentOptions } from "./getComponent.js";
+export { defineComponent } from "./defineComponent.js";
+export type { ComponentSpec, DefineComponentOptions } from "./defineComponent.js";
+export { checkMoleFractions, normalizeMoleFractions } from "./composition.js";
+export type { CheckMoleFractionsOptions } from "./composition.js";
+export { AmbiguousNameError } from "./ambiguousNameError.js";
+export { parseFormula } from "./formula.js";
+export type { ElementCounts } from "./formula.js";
+export { editDistance } from "./editDistance.js";

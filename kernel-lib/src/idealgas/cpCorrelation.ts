@@ -1,0 +1,135 @@
+/**
+ * Ideal-gas heat-capacity correlations and their exact integrals.
+ *
+ * Polynomial (one or more temperature segments), cp°/R = sum a_k T^k:
+ *   int cp dT   = R sum a_k (T2^(k+1) - T1^(k+1)) / (k+1)
+ *   int cp/T dT = R [a_0 ln(T2/T1) + sum_(k>=1) a_k (T2^k - T1^k) / k]
+ * Segments are integrated piece by piece; below the first segment the first polynomial is used, above
+ * the last the last one (extrapolation, which the callers allow only within their stated margin).
+ *
+ * Aly-Lee (1981, Fluid Phase Equilibria 6, 169-179; the DIPPR 107 form),
+ *   cp° = A + B [x / sinh x]^2 + D [y / cosh y]^2,  x = C/T, y = E/T:
+ *   int cp dT   = A T + B T x coth x - D T y tanh y                          (+ const)
+ *   int cp/T dT = A ln T + B [x coth x - ln|sinh x|] - D [y tanh y - ln cosh y]  (+ const)
+ * (differentiate to check: d/dT of x coth x - ln sinh x is x^2 csch^2 x / T). When C = 0 the B term
+ * is the constant B (x/sinh x -> 1), integrated as B T and B ln T; when E = 0 the D term vanishes.
+ */
+import { R } from "../constants.js";
+import type { AlyLeeCp, CpCorrelation, PolynomialCp } from "../components/types.js";
+
+/** Ideal-gas isobaric heat capacity cp°(T), J/(mol K). No range check (callers check ranges). */
+export function correlationCp(correlation: CpCorrelation, temperatureK: number): number {
+  if (correlation.form === "polynomial") {
+    const a = segmentFor(correlation, temperatureK).coefficients;
+    let sum = 0;
+    for (let k = a.length - 1; k >= 0; k--) sum = sum * temperatureK + a[k];
+    return R * sum;
+  }
+  return alyLeeCp(correlation, temperatureK);
+}
+
+/** int_{T1}^{T2} cp° dT, J/mol (closed form). */
+export function correlationCpIntegral(
+  correlation: CpCorrelation,
+  t1K: number,
+  t2K: number,
+): number {
+  if (correlation.form === "polynomial") {
+    return integratePiecewise(correlation, t1K, t2K, (a, lo, hi) => {
+      let sum = 0;
+      for (let k = 0; k < a.length; k++) sum += (a[k] * (hi ** (k + 1) - lo ** (k + 1))) / (k + 1);
+      return R * sum;
+    });
+  }
+  return alyLeeH(correlation, t2K) - alyLeeH(correlation, t1K);
+}
+
+/** int_{T1}^{T2} cp°/T dT, J/(mol K) (closed form). */
+export function correlationCpOverTIntegral(
+  correlation: CpCorrelation,
+  t1K: number,
+  t2K: number,
+): number {
+  if (correlation.form === "polynomial") {
+    return integratePiecewise(correlation, t1K, t2K, (a, lo, hi) => {
+      let sum = a.length > 0 ? a[0] * Math.log(hi / lo) : 0;
+      for (let k = 1; k < a.length; k++) sum += (a[k] * (hi ** k - lo ** k)) / k;
+      return R * sum;
+    });
+  }
+  return alyLeeS(correlation, t2K) - alyLeeS(correlation, t1K);
+}
+
+function segmentFor(correlation: PolynomialCp, temperatureK: number) {
+  const segments = correlation.segments;
+  for (let i = 0; i < segments.length - 1; i++) {
+    if (temperatureK < segments[i].maxTemperatureK) return segments[i];
+  }
+  return segments[segments.length - 1];
+}
+
+function integratePiecewise(
+  correlation: PolynomialCp,
+  t1K: number,
+  t2K: number,
+  piece: (a: readonly number[], lo: number, hi: number) => number,
+): number {
+  if (t2K < t1K) return -integratePiecewise(correlation, t2K, t1K, piece);
+  const segments = correlation.segments;
+  let total = 0;
+  let t = t1K;
+  for (let i = 0; i < segments.length && t < t2K; i++) {
+    const last = i === segments.length - 1;
+    if (!last && t >= segments[i].maxTemperatureK) continue;
+    const upper = last ? t2K : Math.min(t2K, segments[i].maxTemperatureK);
+    total += piece(segments[i].coefficients, t, upper);
+    t = upper;
+  }
+  return total;
+}
+
+/** x / sinh x, with its limit 1 at x = 0 (and 0 when sinh overflows). */
+function xOverSinh(x: number): number {
+  return x === 0 ? 1 : x / Math.sinh(x);
+}
+
+/** x coth x = x / tanh x, with its limit 1 at x = 0. */
+function xCoth(x: number): number {
+  return x === 0 ? 1 : x / Math.tanh(x);
+}
+
+/** ln|sinh x| without overflow for large |x|. */
+function logAbsSinh(x: number): number {
+  const ax = Math.abs(x);
+  return ax + Math.log((1 - Math.exp(-2 * ax)) / 2);
+}
+
+/** ln cosh x without overflow for large |x|. */
+function logCosh(x: number): number {
+  const ax = Math.abs(x);
+  return ax + Math.log((1 + Math.exp(-2 * ax)) / 2);
+}
+
+function alyLeeCp(c: AlyLeeCp, t: number): number {
+  const x = c.cK / t;
+  const y = c.eK / t;
+  const bTerm = xOverSinh(x) ** 2;
+  const dTerm = (y / Math.cosh(y)) ** 2;
+  return c.aJPerMolK + c.bJPerMolK * bTerm + c.dJPerMolK * dTerm;
+}
+
+/** Antiderivative of the Aly-Lee cp in T, J/mol. */
+function alyLeeH(c: AlyLeeCp, t: number): number {
+  const x = c.cK / t;
+  const y = c.eK / t;
+  return c.aJPerMolK * t + c.bJPerMolK * t * xCoth(x) - c.dJPerMolK * t * y * Math.tanh(y);
+}
+
+/** Antiderivative of the Aly-Lee cp/T in T, J/(mol K). */
+function alyLeeS(c: AlyLeeCp, t: number): number {
+  const x = c.cK / t;
+  const y = c.eK / t;
+  const bPart = c.cK === 0 ? Math.log(t) : xCoth(x) - logAbsSinh(x);
+  const dPart = y * Math.tanh(y) - logCosh(y);
+  return c.aJPerMolK * Math.log(t) + c.bJPerMolK * bPart - c.dJPerMolK * dPart;
+}
