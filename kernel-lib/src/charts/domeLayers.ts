@@ -1,0 +1,190 @@
+/**
+ * Layers for the fixed elements of a diagram (internal): the two-phase region with its boundary
+ * (the saturation "dome"), the critical point, and lines of constant quality drawn by the lever
+ * rule between the saturated liquid and vapour of each saturation row.
+ */
+import { toDisplay } from "./displayUnits.js";
+import type { CriticalPoint, SaturationRow } from "./saturationInput.js";
+import {
+  curveRows,
+  positionEncoding,
+  shortNumber,
+  type AxisPlan,
+  type WarningList,
+} from "./specParts.js";
+import { INK } from "./theme.js";
+
+/** How to read a diagram coordinate of a saturated phase (SI); undefined when missing. */
+export type PhaseCoordinate = (row: SaturationRow, phase: "liquid" | "vapor") => number | undefined;
+
+/**
+ * The dome: a filled two-phase band (horizontal area between liquid and vapour at each saturation
+ * ordinate) and its boundary line, liquid branch up to the critical point and vapour branch back.
+ * `x` gives the abscissa of a phase; `y` the ordinate of a row (pressure or temperature).
+ */
+export function domeLayers(
+  rows: readonly SaturationRow[],
+  critical: { x?: number; y: number } | undefined,
+  x: PhaseCoordinate,
+  y: (row: SaturationRow) => number,
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+  warnings: WarningList,
+): Record<string, unknown>[] {
+  const usable = rows.filter((r) => x(r, "liquid") !== undefined && x(r, "vapor") !== undefined);
+  if (usable.length < 2) return [];
+  const fillValues: Record<string, number>[] = [];
+  for (const r of usable) {
+    const xl = x(r, "liquid") as number;
+    const xv = x(r, "vapor") as number;
+    const yy = y(r);
+    const ok =
+      [xl, xv, yy].every(Number.isFinite) &&
+      (!xAxis.log || (xl > 0 && xv > 0)) &&
+      (!yAxis.log || yy > 0);
+    if (!ok) continue;
+    fillValues.push({
+      x: toDisplay(xl, xAxis.unit),
+      x2: toDisplay(xv, xAxis.unit),
+      y: toDisplay(yy, yAxis.unit),
+    });
+  }
+  const boundary = [
+    ...usable.map((r) => ({ x: x(r, "liquid") as number, y: y(r) })),
+    ...(critical && critical.x !== undefined ? [{ x: critical.x, y: critical.y }] : []),
+    ...[...usable].reverse().map((r) => ({ x: x(r, "vapor") as number, y: y(r) })),
+  ];
+  const lineRows = curveRows(
+    [{ label: "saturation boundary", points: boundary }],
+    xAxis,
+    yAxis,
+    warnings,
+    "dome",
+  );
+  return [
+    {
+      data: { values: fillValues },
+      mark: {
+        type: "area",
+        orient: "horizontal",
+        color: INK.twoPhaseFill,
+        opacity: 0.85,
+        clip: true,
+      },
+      encoding: {
+        y: positionEncoding("y", yAxis),
+        x: positionEncoding("x", xAxis),
+        x2: { field: "x2" },
+      },
+    },
+    {
+      data: { values: lineRows },
+      mark: { type: "line", color: INK.dome, strokeWidth: 2.2, clip: true },
+      encoding: {
+        x: positionEncoding("x", xAxis),
+        y: positionEncoding("y", yAxis),
+        order: { field: "order", type: "quantitative" },
+        detail: { field: "path", type: "nominal" },
+      },
+    },
+  ];
+}
+
+/** Lines of constant vapour quality q (mole fraction vapour), by the lever rule, x = xl + q (xv - xl). */
+export function qualityLayers(
+  rows: readonly SaturationRow[],
+  qualities: readonly number[],
+  x: PhaseCoordinate,
+  y: (row: SaturationRow) => number,
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+  warnings: WarningList,
+): Record<string, unknown>[] {
+  const usable = rows.filter((r) => x(r, "liquid") !== undefined && x(r, "vapor") !== undefined);
+  if (usable.length < 2 || qualities.length === 0) return [];
+  const curves = qualities.map((q) => ({
+    label: `q = ${shortNumber(q)}`,
+    points: usable.map((r) => {
+      const xl = x(r, "liquid") as number;
+      const xv = x(r, "vapor") as number;
+      return { x: xl + q * (xv - xl), y: y(r) };
+    }),
+  }));
+  const rowsOut = curveRows(curves, xAxis, yAxis, warnings, "quality");
+  // Label each quality line at its lowest point (first row: lowest saturation T).
+  const labels = curves
+    .map((c) => {
+      const first = rowsOut.find((r) => r.series === c.label);
+      return first ? { x: first.x, y: first.y, label: c.label } : undefined;
+    })
+    .filter((v) => v !== undefined);
+  return [
+    {
+      data: { values: rowsOut },
+      mark: { type: "line", color: INK.guide, strokeWidth: 0.9, strokeDash: [1, 2.5], clip: true },
+      encoding: {
+        x: positionEncoding("x", xAxis),
+        y: positionEncoding("y", yAxis),
+        order: { field: "order", type: "quantitative" },
+        detail: { field: "path", type: "nominal" },
+      },
+    },
+    {
+      data: { values: labels },
+      mark: { type: "text", color: INK.guide, fontSize: 9, dy: 9, clip: true },
+      encoding: {
+        x: positionEncoding("x", xAxis),
+        y: positionEncoding("y", yAxis),
+        text: { field: "label", type: "nominal" },
+      },
+    },
+  ];
+}
+
+/** The critical point: an open diamond and a small plain-text label. */
+export function criticalLayers(
+  point: CriticalPoint | undefined,
+  xSI: number | undefined,
+  ySI: number | undefined,
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+): Record<string, unknown>[] {
+  if (!point || xSI === undefined || ySI === undefined) return [];
+  if (!Number.isFinite(xSI) || !Number.isFinite(ySI)) return [];
+  if ((xAxis.log && !(xSI > 0)) || (yAxis.log && !(ySI > 0))) return [];
+  const values = [
+    {
+      x: toDisplay(xSI, xAxis.unit),
+      y: toDisplay(ySI, yAxis.unit),
+      label: "critical point",
+    },
+  ];
+  const encoding = { x: positionEncoding("x", xAxis), y: positionEncoding("y", yAxis) };
+  return [
+    {
+      data: { values },
+      mark: {
+        type: "point",
+        shape: "diamond",
+        filled: false,
+        size: 90,
+        strokeWidth: 1.8,
+        color: INK.critical,
+        clip: true,
+      },
+      encoding: {
+        ...encoding,
+        tooltip: [
+          { field: "label", type: "nominal", title: "Point" },
+          { field: "x", type: "quantitative", title: xAxis.title, format: ".5~g" },
+          { field: "y", type: "quantitative", title: yAxis.title, format: ".5~g" },
+        ],
+      },
+    },
+    {
+      data: { values },
+      mark: { type: "text", align: "left", dx: 8, dy: -8, color: INK.critical, fontSize: 10 },
+      encoding: { ...encoding, text: { field: "label", type: "nominal" } },
+    },
+  ];
+}

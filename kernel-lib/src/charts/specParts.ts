@@ -1,0 +1,261 @@
+/**
+ * Building blocks shared by the chart builders (internal): options common to every chart, axis
+ * descriptions, conversion of SI curves into data rows, series encodings and the top-level spec.
+ *
+ * Safety: user strings (titles, series labels, state names) go into a spec only as DATA values or
+ * as literal title text. Field names, expressions and formats are fixed strings written here, so
+ * a label like `datum.x + alert(1)` or `<script>` can never be evaluated, only shown.
+ */
+import { InputError } from "../errors.js";
+import type { ChartMeta, ChartSpec } from "./chartSpec.js";
+import {
+  quantityTitle,
+  resolveUnit,
+  toDisplay,
+  type DisplayUnit,
+  type QuantityKind,
+  type UnitChoice,
+} from "./displayUnits.js";
+import {
+  DEFAULT_HEIGHT,
+  DEFAULT_WIDTH,
+  SERIES_COLORS,
+  SERIES_DASHES,
+  themeConfig,
+} from "./theme.js";
+
+/** Options every chart builder takes. */
+export interface BaseChartOptions {
+  /** Chart title (plain text). Default: a title naming the diagram. */
+  title?: string;
+  /** Subtitle under the title (plain text), e.g. the fluid and model. Default: none. */
+  subtitle?: string;
+  /** Plot width, CSS px. Default 520. */
+  width?: number;
+  /** Plot height, CSS px. Default 340. */
+  height?: number;
+  /**
+   * Display units: "SI" (K, MPa, kmol/m3, kJ/mol, ...), "field" (degF, psia, lbmol/ft3,
+   * Btu/lbmol, ...) or a system with overrides, e.g. `{ system: "SI", pressure: "bar" }`.
+   * Default "SI". Data are always given in SI; only the axes change.
+   */
+  units?: UnitChoice;
+}
+
+export const VEGA_LITE_SCHEMA = "https://vega.github.io/schema/vega-lite/v6.json";
+
+/** One axis: its quantity, display unit, title and scale type. */
+export interface AxisPlan {
+  readonly kind: QuantityKind;
+  readonly unit: DisplayUnit;
+  readonly title: string;
+  readonly log: boolean;
+  /** Fixed scale domain in display units; undefined lets Vega-Lite fit the data. */
+  domain?: readonly [number, number];
+}
+
+/** Plans an axis: resolves the display unit and writes "Name / unit". */
+export function planAxis(
+  kind: QuantityKind,
+  name: string,
+  units: UnitChoice | undefined,
+  log = false,
+): AxisPlan {
+  const unit = resolveUnit(kind, units);
+  return { kind, unit, title: quantityTitle(name, unit), log };
+}
+
+/** Collects de-duplicated warnings while a spec is built. */
+export class WarningList {
+  private readonly seen = new Set<string>();
+  add(message: string): void {
+    this.seen.add(message);
+  }
+  list(): string[] {
+    return [...this.seen];
+  }
+}
+
+/** A point of a curve, SI. */
+export interface XY {
+  readonly x: number;
+  readonly y: number;
+}
+
+/** A data row of a line layer (display units). */
+export interface LineRow {
+  x: number;
+  y: number;
+  /** Series label (user text or built from a number); shown in the legend and tooltip. */
+  series: string;
+  /** Line identity: series index and segment, so gaps split a line. */
+  path: string;
+  /** Drawing order along the line. */
+  order: number;
+  [extra: string]: unknown;
+}
+
+/**
+ * Converts curves (SI points) to line rows in display units. Points that cannot be drawn
+ * (non-finite, or <= 0 on a logarithmic axis) are left out, split the line there, and are reported
+ * once per curve in `warnings`.
+ */
+export function curveRows(
+  curves: readonly { label: string; points: readonly XY[] }[],
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+  warnings: WarningList,
+  pathPrefix = "",
+): LineRow[] {
+  const rows: LineRow[] = [];
+  curves.forEach((curve, s) => {
+    let segment = 0;
+    let open = false;
+    let dropped = 0;
+    curve.points.forEach((p) => {
+      const ok =
+        Number.isFinite(p.x) &&
+        Number.isFinite(p.y) &&
+        (!xAxis.log || p.x > 0) &&
+        (!yAxis.log || p.y > 0);
+      if (!ok) {
+        dropped++;
+        if (open) segment++;
+        open = false;
+        return;
+      }
+      open = true;
+      rows.push({
+        x: toDisplay(p.x, xAxis.unit),
+        y: toDisplay(p.y, yAxis.unit),
+        series: curve.label,
+        path: `${pathPrefix}${s}:${segment}`,
+        order: rows.length,
+      });
+    });
+    if (dropped > 0) {
+      warnings.add(
+        `${dropped} point(s) of the curve "${curve.label}" were left out: not finite, or not > 0 ` +
+          "on a logarithmic axis. Check the data or use a linear axis.",
+      );
+    }
+  });
+  return rows;
+}
+
+/** Positional encoding for an axis (field "x", "y", "x2" or "y2" of the rows). */
+export function positionEncoding(field: string, axis: AxisPlan): Record<string, unknown> {
+  const scale: Record<string, unknown> = axis.log
+    ? { type: "log", nice: false }
+    : { type: "linear", zero: false };
+  if (axis.domain) scale["domain"] = [axis.domain[0], axis.domain[1]];
+  return { field, type: "quantitative", title: axis.title, scale };
+}
+
+/** Colour plus dash encodings for series labels, in the order given (one merged legend). */
+export function seriesEncodings(
+  labels: readonly string[],
+  legendTitle: string,
+): Record<string, unknown> {
+  const domain = [...labels];
+  const colors = domain.map((_, i) => SERIES_COLORS[i % SERIES_COLORS.length]);
+  const dashes = domain.map((_, i) =>
+    SERIES_DASHES[(i + Math.floor(i / SERIES_COLORS.length)) % SERIES_DASHES.length].slice(),
+  );
+  return {
+    color: {
+      field: "series",
+      type: "nominal",
+      title: legendTitle,
+      scale: { domain, range: colors },
+    },
+    strokeDash: {
+      field: "series",
+      type: "nominal",
+      title: legendTitle,
+      scale: { domain, range: dashes },
+    },
+  };
+}
+
+/** Tooltip listing the series and both coordinates with their axis titles. */
+export function lineTooltip(xAxis: AxisPlan, yAxis: AxisPlan, seriesTitle: string): unknown[] {
+  return [
+    { field: "series", type: "nominal", title: seriesTitle },
+    { field: "x", type: "quantitative", title: xAxis.title, format: ".4~g" },
+    { field: "y", type: "quantitative", title: yAxis.title, format: ".4~g" },
+  ];
+}
+
+/** Checks a plot dimension option. */
+export function checkSize(input: string, value: number | undefined, fallback: number): number {
+  const v = value ?? fallback;
+  if (!(Number.isFinite(v) && v >= 40 && v <= 4000)) {
+    throw new InputError({ input, unit: "px", validRange: "between 40 and 4000", received: v });
+  }
+  return v;
+}
+
+/** Checks a user label (titles, series names): any string, shown as plain text. */
+export function checkText(input: string, value: unknown): string {
+  if (typeof value !== "string") {
+    throw new InputError({ input, unit: "-", validRange: "a string", received: value });
+  }
+  return value;
+}
+
+/** Checks that a list option is an array. */
+export function checkArray<T>(input: string, value: readonly T[] | undefined): readonly T[] {
+  if (value === undefined) return [];
+  if (!Array.isArray(value)) {
+    throw new InputError({ input, unit: "-", validRange: "an array", received: value });
+  }
+  return value;
+}
+
+/** Formats a number for a label, 4 significant figures, no trailing zeros. */
+export function shortNumber(value: number): string {
+  if (!Number.isFinite(value)) return String(value);
+  return String(Number(value.toPrecision(4)));
+}
+
+/** The top level of every spec: schema, title, size, theme and builder metadata. */
+export function topLevel(
+  chart: string,
+  defaultTitle: string,
+  options: BaseChartOptions,
+  axes: readonly AxisPlan[],
+  warnings: WarningList,
+  body: Record<string, unknown>,
+  extraMeta: { molarMassKgPerMol?: number } = {},
+  sized = true,
+): ChartSpec {
+  const title: Record<string, unknown> = {
+    text: options.title === undefined ? defaultTitle : checkText("title", options.title),
+  };
+  if (options.subtitle !== undefined) title["subtitle"] = checkText("subtitle", options.subtitle);
+  const units: Record<string, string> = {};
+  for (const axis of axes) units[axis.kind] = axis.unit.id;
+  const meta: ChartMeta = {
+    chart,
+    units,
+    ...(extraMeta.molarMassKgPerMol !== undefined
+      ? { molarMassKgPerMol: extraMeta.molarMassKgPerMol }
+      : {}),
+    warnings: warnings.list(),
+  };
+  const spec: ChartSpec = {
+    $schema: VEGA_LITE_SCHEMA,
+    title: title as ChartSpec["title"],
+    ...(sized
+      ? {
+          width: checkSize("width", options.width, DEFAULT_WIDTH),
+          height: checkSize("height", options.height, DEFAULT_HEIGHT),
+        }
+      : {}),
+    ...body,
+    config: themeConfig(),
+    usermeta: { isochor: meta },
+  };
+  return spec;
+}
