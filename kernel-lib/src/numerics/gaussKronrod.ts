@@ -129,7 +129,7 @@ function applyRule(f: (x: number) => number, a: number, b: number): boolean {
  * @example
  * ```ts
  * const r = integrateAdaptive(Math.sqrt, 0, 1); // sqrt endpoint: bisects towards 0
- * r.value; // 0.6666666666666666 (closed form 2/3), r.errorEstimate < 1e-10
+ * r.value; // ≈ 0.666666666667 (closed form 2/3), with r.errorEstimate < 1e-10
  * ```
  * @throws InputError if a or b is not finite or an option is invalid.
  * @throws SolverError if f is not finite somewhere in [a, b], or the tolerance is not met within

@@ -8,3 +8,5 @@ export { solveNewtonSystem } from "./newton.js";
 export type { NewtonOptions, NewtonResult } from "./newton.js";
 export { integrateAdaptive } from "./gaussKronrod.js";
 export type { QuadratureOptions, QuadratureResult } from "./gaussKronrod.js";
+export { HyperDual, hd, derivatives2, partials2 } from "./hyperDual.js";
+export type { HyperDualLike, Num, Derivatives2, Partials2 } from "./hyperDual.js";

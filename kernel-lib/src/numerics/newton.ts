@@ -50,7 +50,7 @@ const METHOD = "damped Newton (Dennis & Schnabel 1983)";
  * ```ts
  * // x^2 + y^2 = 4, x y = 1
  * solveNewtonSystem(([x, y]) => [x * x + y * y - 4, x * y - 1], [2, 0.5]).value;
- * // [1.9318516525781366, 0.5176380902050415]
+ * // ≈ [1.93185165, 0.51763809] (exact: x = sqrt(2 + sqrt 3), y = 1 / x)
  * ```
  * @throws InputError if x0 or an option is invalid, or F returns the wrong length.
  * @throws SolverError if the Jacobian is singular, F is not finite, the line search cannot
