@@ -1,7 +1,137 @@
-/** `isochor run`: placeholder until the records runner lands (see records/). */
+/**
+ * `isochor run [--out <dir>] <notebook.ipynb...>`: executes notebooks in-process through tslab
+ * (no Jupyter) and writes, for each, the executed notebook and an HTML calculation record.
+ * Exit codes: 0 all notebooks ran; 1 a notebook is missing, not a notebook, or a cell failed
+ * (nothing written for it); 2 usage error.
+ */
+import * as path from "node:path";
+import { IsochorError } from "../errors.js";
+import { RunnerError } from "../records/runnerError.js";
+import type { RunProgress } from "../records/runNotebooks.js";
 import type { CliIo } from "./io.js";
 
-export async function runCommand(_argv: string[], io: CliIo): Promise<number> {
-  io.stderr("isochor run: not built yet\n");
-  return 1;
+const USAGE = `usage: isochor run [--out <dir>] <notebook.ipynb...>
+
+Executes each notebook top to bottom in a fresh TypeScript session (tslab, in-process, no Jupyter)
+and writes <name>.ipynb (executed) and <name>.html (calculation record) into the output folder.
+
+options:
+  --out <dir>   output folder (default: out/records under the current directory)
+  -h, --help    show this help
+`;
+
+interface ParsedArgs {
+  outDir: string;
+  notebooks: string[];
+}
+
+function parseArgs(argv: string[], cwd: string): ParsedArgs | { error: string } | "help" {
+  let outDir = path.join(cwd, "out", "records");
+  const notebooks: string[] = [];
+  for (let i = 0; i < argv.length; i++) {
+    const arg = argv[i];
+    if (arg === "-h" || arg === "--help") return "help";
+    if (arg === "--out" || arg.startsWith("--out=")) {
+      const value = arg === "--out" ? argv[++i] : arg.slice("--out=".length);
+      if (value === undefined || value === "") return { error: "--out needs a folder" };
+      outDir = path.resolve(cwd, value);
+    } else if (arg === "--") {
+      notebooks.push(...argv.slice(i + 1));
+      break;
+    } else if (arg.startsWith("-")) {
+      return { error: `unknown option ${JSON.stringify(arg)}` };
+    } else {
+      notebooks.push(arg);
+    }
+  }
+  if (notebooks.length === 0) return { error: "no notebook given" };
+  return { outDir, notebooks };
+}
+
+function seconds(ms: number): string {
+  return `${(ms / 1000).toFixed(1)} s`;
+}
+
+/** A path as the user would type it: relative to cwd when inside it, else absolute. */
+function shown(cwd: string, file: string): string {
+  const relative = path.relative(cwd, file);
+  return relative === ""
+    ? "."
+    : relative.startsWith("..") || path.isAbsolute(relative)
+      ? file
+      : relative;
+}
+
+function progressPrinter(io: CliIo, cwd: string): (event: RunProgress) => void {
+  return (event) => {
+    switch (event.kind) {
+      case "notebook-start":
+        io.stdout(
+          `[${event.index}/${event.count}] ${event.notebook} (${event.codeCells} code cells)\n`,
+        );
+        break;
+      case "session-ready":
+        io.stdout(`      TypeScript session ready (${seconds(event.elapsedMs)})\n`);
+        break;
+      case "cell-done":
+        io.stdout(
+          `      cell ${event.cellNumber} (code ${event.codeCellIndex}/${event.codeCells})` +
+            ` ${event.ok ? "ok" : "FAILED"}  ${seconds(event.cellMs)}  [${seconds(event.elapsedMs)}]\n`,
+        );
+        break;
+      case "notebook-done":
+        io.stdout(
+          `      done in ${seconds(event.elapsedMs)} -> ${shown(cwd, event.recordPath)}, ` +
+            `${shown(cwd, event.executedPath)}\n`,
+        );
+        break;
+      default:
+        break;
+    }
+  };
+}
+
+export async function runCommand(argv: string[], io: CliIo): Promise<number> {
+  const parsed = parseArgs(argv, io.cwd);
+  if (parsed === "help") {
+    io.stdout(USAGE);
+    return 0;
+  }
+  if ("error" in parsed) {
+    io.stderr(`isochor run: ${parsed.error}\n\n${USAGE}`);
+    return 2;
+  }
+  // Loaded here so `isochor --help` does not pay for tslab and TypeScript.
+  const { runNotebooks } = await import("../records/runNotebooks.js");
+  const started = performance.now();
+  const previousCwd = process.cwd();
+  try {
+    // Notebook paths are resolved against io.cwd (the runner resolves against process.cwd()).
+    process.chdir(io.cwd);
+    const records = await runNotebooks(parsed.notebooks, {
+      outDir: parsed.outDir,
+      onProgress: progressPrinter(io, io.cwd),
+    });
+    io.stdout(
+      `isochor run: ${records.length} notebook${records.length === 1 ? "" : "s"} ran in ` +
+        `${seconds(performance.now() - started)}; records in ${shown(io.cwd, parsed.outDir)}\n`,
+    );
+    return 0;
+  } catch (error) {
+    if (error instanceof RunnerError) {
+      const consequence =
+        error.cellNumber === undefined
+          ? "No notebook was run."
+          : `No record written for ${error.notebook}.`;
+      io.stderr(`isochor run: ${error.message}\n${consequence}\n`);
+      return 1;
+    }
+    if (error instanceof IsochorError) {
+      io.stderr(`isochor run: ${error.message}\n`);
+      return 1;
+    }
+    throw error;
+  } finally {
+    process.chdir(previousCwd);
+  }
 }

@@ -113,7 +113,7 @@ export async function chartHtml(
   const id = newChartId();
   const caption =
     options.caption !== undefined
-      ? `<figcaption class="isochor-chart-caption">${escapeHtml(options.caption)}</figcaption>`
+      ? `<figcaption class="isochor-chart-caption" style="font-size:0.9em;opacity:0.8">${escapeHtml(options.caption)}</figcaption>`
       : "";
   return (
     (includeRuntime ? vegaRuntimeScript() + "\n" : "") +

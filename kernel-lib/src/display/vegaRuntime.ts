@@ -12,8 +12,12 @@
 import * as fs from "node:fs";
 import * as path from "node:path";
 
-/** Attribute that marks the runtime's <script> element (records de-duplicate on it). */
-export const RUNTIME_MARKER_ATTRIBUTE = "data-isochor-chart-runtime";
+/**
+ * Attribute that marks a <script> element a page needs only once. Records keep one element per
+ * distinct attribute value, in the page head, and drop the copies in cell outputs. The chart
+ * runtime's value is "chart-runtime vega@x vega-lite@y vega-embed@z"; other bundles may use it too.
+ */
+export const RUNTIME_MARKER_ATTRIBUTE = "data-isochor-once";
 
 const BUNDLES = [
   { pkg: "vega", file: "build/vega.min.js" },
@@ -63,8 +67,8 @@ export function vegaRuntimeSource(): { source: string; versions: Record<string, 
 export function vegaRuntimeScript(): string {
   if (cachedScript === undefined) {
     const { source, versions } = vegaRuntimeSource();
-    const label = Object.entries(versions)
-      .map(([k, v]) => `${k}@${v}`)
+    const label = ["chart-runtime"]
+      .concat(Object.entries(versions).map(([k, v]) => `${k}@${v}`))
       .join(" ");
     // "</script" cannot occur inside the element; escape it in case a future build contains it.
     const safe = source.replace(/<\/(script)/gi, "<\\/$1");

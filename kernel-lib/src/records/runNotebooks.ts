@@ -1,0 +1,303 @@
+/**
+ * The records runner: executes notebooks in-process through tslab and writes, per notebook,
+ * the executed notebook (nbformat 4) and a standalone HTML calculation record.
+ *
+ *   check every path (exists, nbformat 4, no two outputs with one name)      nothing run yet
+ *   for each notebook:  TslabSession in its folder -> cells in order -> outputs captured
+ *                       first failing cell: RunnerError (notebook, cell, error), nothing written
+ *                       success: <name>.ipynb and <name>.html written to temp names, then renamed
+ *
+ * A failed notebook also loses any record of it left by an earlier run, so no file in the output
+ * folder claims to be the record of a notebook that does not run today.
+ */
+import * as fs from "node:fs";
+import * as path from "node:path";
+import { InputError } from "../errors.js";
+import { runEnvironment } from "./environment.js";
+import type { RunEnvironment } from "./environment.js";
+import { firstHeading } from "./markdown.js";
+import type { CodeCell, Notebook, NotebookOutput } from "./notebookFormat.js";
+import { joinText, readNotebook } from "./notebookFormat.js";
+import { recordHtml } from "./recordHtml.js";
+import { RunnerError } from "./runnerError.js";
+import { TslabSession } from "./tslabSession.js";
+
+/** Progress events, for a terminal display. */
+export type RunProgress =
+  | { kind: "notebook-start"; notebook: string; index: number; count: number; codeCells: number }
+  | { kind: "session-ready"; notebook: string; elapsedMs: number }
+  | {
+      kind: "cell-start";
+      notebook: string;
+      cellNumber: number;
+      codeCellIndex: number;
+      codeCells: number;
+    }
+  | {
+      kind: "cell-done";
+      notebook: string;
+      cellNumber: number;
+      codeCellIndex: number;
+      codeCells: number;
+      cellMs: number;
+      elapsedMs: number;
+      ok: boolean;
+    }
+  | {
+      kind: "notebook-done";
+      notebook: string;
+      elapsedMs: number;
+      recordPath: string;
+      executedPath: string;
+    };
+
+/** Options of {@link runNotebooks}. */
+export interface RunNotebooksOptions {
+  /** Output folder, created if missing. Default "out/records" under the current directory. */
+  outDir?: string;
+  /** Receives progress events. Default: none. */
+  onProgress?: (event: RunProgress) => void;
+  /** A cell running longer than this (ms) is interrupted and fails. Default 600000 (10 min). */
+  cellTimeoutMs?: number;
+}
+
+/** What was written for one notebook. */
+export interface NotebookRecord {
+  notebook: string;
+  title: string;
+  executedPath: string;
+  recordPath: string;
+  codeCells: number;
+  elapsedMs: number;
+}
+
+interface PlannedNotebook {
+  name: string;
+  absolute: string;
+  notebook: Notebook;
+  executedPath: string;
+  recordPath: string;
+}
+
+/** Writes `content` to a temporary file beside `target` (renamed into place once all are written). */
+function writeTemp(target: string, content: string): string {
+  const temp = path.join(path.dirname(target), `.${path.basename(target)}.${process.pid}.partial`);
+  fs.writeFileSync(temp, content);
+  return temp;
+}
+
+function removeQuietly(file: string): void {
+  try {
+    fs.rmSync(file, { force: true });
+  } catch {
+    // best effort: nothing else can be done
+  }
+}
+
+function plan(paths: string[], outDir: string): PlannedNotebook[] {
+  if (!Array.isArray(paths) || paths.length === 0) {
+    throw new InputError({
+      input: "paths",
+      unit: "-",
+      validRange: "one or more notebook paths",
+      received: paths,
+    });
+  }
+  const byStem = new Map<string, string>();
+  return paths.map((name) => {
+    if (typeof name !== "string" || name.length === 0) {
+      throw new InputError({
+        input: "paths",
+        unit: "-",
+        validRange: "non-empty path strings",
+        received: name,
+      });
+    }
+    const absolute = path.resolve(name);
+    const notebook = readNotebook(absolute, name);
+    const stem = path.basename(absolute).replace(/\.ipynb$/i, "");
+    const clash = byStem.get(stem);
+    if (clash !== undefined) {
+      throw new RunnerError({
+        notebook: name,
+        detail: `has the same file name as ${clash}; their records would overwrite each other in ${outDir}`,
+      });
+    }
+    byStem.set(stem, name);
+    return {
+      name,
+      absolute,
+      notebook,
+      executedPath: path.join(outDir, `${stem}.ipynb`),
+      recordPath: path.join(outDir, `${stem}.html`),
+    };
+  });
+}
+
+function titleOf(notebook: Notebook, absolute: string): string {
+  for (const cell of notebook.cells) {
+    if (cell.cell_type !== "markdown") continue;
+    const heading = firstHeading(joinText(cell.source));
+    if (heading) return heading;
+  }
+  return path.basename(absolute).replace(/\.ipynb$/i, "");
+}
+
+/** The executed notebook as nbformat 4 JSON (one space indent, like Jupyter). */
+function executedNotebookJson(notebook: Notebook, env: RunEnvironment, startedAt: Date): string {
+  const metadata = {
+    ...notebook.metadata,
+    isochor: {
+      run: {
+        date: startedAt.toISOString(),
+        isochorVersion: env.isochorVersion,
+        gitCommit: env.gitCommit,
+        node: env.nodeVersion,
+        tslab: env.tslabVersion,
+      },
+    },
+  };
+  return JSON.stringify({ ...notebook, metadata }, null, 1) + "\n";
+}
+
+async function runOne(
+  planned: PlannedNotebook,
+  index: number,
+  count: number,
+  options: RunNotebooksOptions,
+): Promise<NotebookRecord> {
+  const { name, absolute, notebook } = planned;
+  const progress = options.onProgress ?? (() => {});
+  const cells = notebook.cells;
+  const codeCellNumbers = cells.flatMap((c, i) => (c.cell_type === "code" ? [i + 1] : []));
+  const started = performance.now();
+  const startedAt = new Date();
+  progress({
+    kind: "notebook-start",
+    notebook: name,
+    index,
+    count,
+    codeCells: codeCellNumbers.length,
+  });
+  const env = runEnvironment(path.dirname(absolute));
+  const session = TslabSession.open(path.dirname(absolute), {
+    cellTimeoutMs: options.cellTimeoutMs,
+  });
+  const cellTimesMs: Array<number | undefined> = cells.map(() => undefined);
+  try {
+    progress({ kind: "session-ready", notebook: name, elapsedMs: performance.now() - started });
+    let executionCount = 0;
+    const earlier: NotebookOutput[][] = [];
+    for (let c = 0; c < codeCellNumbers.length; c++) {
+      const cellNumber = codeCellNumbers[c];
+      const cell = cells[cellNumber - 1] as CodeCell;
+      const source = joinText(cell.source);
+      if (source.trim() === "") continue; // as Jupyter: empty cells are not executed
+      progress({
+        kind: "cell-start",
+        notebook: name,
+        cellNumber,
+        codeCellIndex: c + 1,
+        codeCells: codeCellNumbers.length,
+      });
+      executionCount += 1;
+      const run = await session.execute(source, executionCount, earlier);
+      cell.execution_count = executionCount;
+      cell.outputs = run.outputs;
+      earlier.push(run.outputs);
+      cellTimesMs[cellNumber - 1] = run.elapsedMs;
+      progress({
+        kind: "cell-done",
+        notebook: name,
+        cellNumber,
+        codeCellIndex: c + 1,
+        codeCells: codeCellNumbers.length,
+        cellMs: run.elapsedMs,
+        elapsedMs: performance.now() - started,
+        ok: run.ok,
+      });
+      if (!run.ok) {
+        const error = run.error;
+        const firstLine = source.split("\n").find((l) => l.trim() !== "") ?? "";
+        throw new RunnerError({
+          notebook: name,
+          cellNumber,
+          cellCount: cells.length,
+          detail:
+            `${error ? `${error.ename}: ${error.evalue}` : "the cell failed"}` +
+            `\n  cell begins: ${firstLine.trim().slice(0, 120)}`,
+        });
+      }
+    }
+  } finally {
+    session.close();
+  }
+
+  const elapsedMs = performance.now() - started;
+  const title = titleOf(notebook, absolute);
+  const html = recordHtml({
+    title,
+    notebookName: name,
+    executedNotebookFile: path.basename(planned.executedPath),
+    startedAt,
+    elapsedMs,
+    environment: env,
+    cells,
+    cellTimesMs,
+  });
+  const temps: string[] = [];
+  try {
+    temps.push(writeTemp(planned.executedPath, executedNotebookJson(notebook, env, startedAt)));
+    temps.push(writeTemp(planned.recordPath, html));
+    fs.renameSync(temps[0], planned.executedPath);
+    fs.renameSync(temps[1], planned.recordPath);
+  } catch (error) {
+    temps.forEach(removeQuietly);
+    throw error;
+  }
+  progress({
+    kind: "notebook-done",
+    notebook: name,
+    elapsedMs,
+    recordPath: planned.recordPath,
+    executedPath: planned.executedPath,
+  });
+  return {
+    notebook: name,
+    title,
+    executedPath: planned.executedPath,
+    recordPath: planned.recordPath,
+    codeCells: codeCellNumbers.length,
+    elapsedMs,
+  };
+}
+
+/**
+ * Executes notebooks in order, in-process, and writes their executed copies and HTML records.
+ * Stops at the first failing cell.
+ * @param paths Notebook files (.ipynb, nbformat 4).
+ * @param options See {@link RunNotebooksOptions}.
+ * @returns One entry per notebook, in order.
+ * @throws RunnerError naming the notebook (and the cell, with its error) when a file is missing or
+ *   not a notebook, or a cell fails; nothing is written for that notebook and any earlier record
+ *   of it in the output folder is removed.
+ */
+export async function runNotebooks(
+  paths: string[],
+  options: RunNotebooksOptions = {},
+): Promise<NotebookRecord[]> {
+  const outDir = path.resolve(options.outDir ?? path.join("out", "records"));
+  const planned = plan(paths, outDir);
+  fs.mkdirSync(outDir, { recursive: true });
+  const records: NotebookRecord[] = [];
+  for (let i = 0; i < planned.length; i++) {
+    try {
+      records.push(await runOne(planned[i], i + 1, planned.length, options));
+    } catch (error) {
+      removeQuietly(planned[i].executedPath);
+      removeQuietly(planned[i].recordPath);
+      throw error;
+    }
+  }
+  return records;
+}
