@@ -2,7 +2,7 @@
  * Electronic contribution from a list of levels (term value and degeneracy).
  *
  *   q_el = sum_i g_i exp(-theta_i / T),  theta_i = h c T_i / kB
- * McQuarrie, Statistical Mechanics (2000), eqs. 5-27 and 6-10. Only the listed levels are
+ * McQuarrie, Statistical Mechanics (2000), ch. 5 and 6. Only the listed levels are
  * included; for the molecules shipped here the next levels lie far above kB T at 3000 K, except
  * where the data notes say otherwise.
  */

@@ -5,7 +5,7 @@
  *   (h - h0)/(R T) = d x / (e^x - 1)
  *   cv/R           = d x^2 e^x / (e^x - 1)^2
  *   s/R            = d [ x / (e^x - 1) - ln(1 - e^-x) ]
- * McQuarrie, Statistical Mechanics (2000), eqs. 6-22 to 6-25 and 8-25.
+ * McQuarrie, Statistical Mechanics (2000), ch. 6 (diatomic) and ch. 8 (polyatomic, normal modes).
  *
  * Using observed fundamentals (not harmonic constants omega_e) absorbs part of the anharmonicity at
  * low T. At high T anharmonicity and vibration-rotation coupling add to cp (for N2 at 3000 K the

@@ -6,9 +6,10 @@
  * in the free-rotor basis exp(i m phi)/sqrt(2 pi), m = -M..M. The matrix elements are
  *   <m|H|m> = B m^2 + V0/2,   <m +- n|H|m> = -V0/4,
  * so the matrix splits into n independent tridiagonal blocks (m = r, r +- n, r +- 2n, ... for
- * r = 0..n-1), each diagonalised with implicit QL (tridiagonalEigenvalues.ts). This is the method
- * of e.g. Lewis, Malloy, Chao & Laane, J. Mol. Struct. 12 (1972) 427, and of the hindered-rotor
- * treatments reviewed by McClurg, Flagan & Goddard, J. Chem. Phys. 106 (1997) 6675.
+ * r = 0..n-1), each diagonalised with implicit QL (tridiagonalEigenvalues.ts). This is the
+ * standard variational treatment of the 1-D torsion (a Mathieu equation); the hindered-rotor
+ * literature, approximations included, is reviewed by McClurg, Flagan & Goddard, J. Chem. Phys.
+ * 106 (1997) 6675 (citation from memory).
  *
  * Partition function q = (1/sigma_int) sum_i exp(-(E_i - E_0)/kB T), energies from the ground
  * level (like the harmonic oscillator measured from its zero-point level); thermodynamic functions

@@ -14,7 +14,7 @@
  * Valid temperature range (judgement, stated in `validTemperatureK`):
  *   min = 20 K for atoms and level-summed linear rotors; otherwise max(50 K, 5 theta_rot,max),
  *         where theta_rot,max is the largest rotational temperature of a classical rotor
- *         (water: 200 K, ammonia: 72 K, the rest: 50 K);
+ *         (water: 201 K, ammonia: 72 K, hydrogen sulfide: 75 K, the rest: 50 K);
  *   max = 3000 K. Above about 1000 K the harmonic-oscillator / rigid-rotor model misses
  *         anharmonicity and vibration-rotation coupling; cp errors grow to about 1-3 % at 3000 K
  *         (more for H2 and molecules with low-frequency or large-amplitude modes). Dissociation and
@@ -53,7 +53,7 @@ export interface MolecularIdealGasOptions {
    * Treatment of torsions that have an internal-rotor entry. Default "hindered-rotor" (exact levels
    * of V0/2 (1 - cos n phi)). "harmonic" uses the observed torsional fundamental from the vibration
    * list; "free-rotor" uses the same level computation with V0 = 0. Example: ethane at 400 K gives
-   * s = 246.4 J/(mol K) with the default, about 245.3 harmonic and 249.2 free rotor.
+   * s = 246.44 J/(mol K) with the default, 245.30 harmonic and 250.27 free rotor.
    */
   readonly torsion?: TorsionTreatment;
   /**

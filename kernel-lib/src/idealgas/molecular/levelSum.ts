@@ -3,7 +3,7 @@
  *
  * With q = f * sum_i g_i exp(-theta_i / T) (theta_i = level energy / kB, measured from the lowest
  * level; f a constant prefactor such as 1/sigma), the molar functions are (McQuarrie, Statistical
- * Mechanics, 2000, eqs. 5-17 to 5-21 and 6-33):
+ * Mechanics, 2000, ch. 5 and 6; the standard canonical-ensemble relations):
  *   (u - u0)/R = <theta>,  cv/R = (<theta^2> - <theta>^2) / T^2,  s/R = ln q + <theta>/T,
  * where <.> is the Boltzmann average. For internal degrees of freedom cp = cv and h - h0 = u - u0.
  * Levels are shifted by the smallest theta before summing, so no overflow occurs at low T.

@@ -4,7 +4,7 @@
  *   q_rot = T / (sigma theta_r),  theta_r = h c B / kB
  *   (h - h0) = R T,  cv = R,  s/R = ln q_rot + 1
  *
- * McQuarrie, Statistical Mechanics (2000), eq. 6-34 (with the symmetry number, eq. 6-48).
+ * McQuarrie, Statistical Mechanics (2000), ch. 6 (rotational partition function, symmetry number).
  *
  * The classical limit is used: it is good to about (theta_r/T)^2/45 in cv and better in s once
  * T >> theta_r. It fails at low T for molecules with a large rotational constant, H2 above all

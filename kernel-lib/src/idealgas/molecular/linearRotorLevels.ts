@@ -6,7 +6,8 @@
  *
  * where g(J) is the nuclear-spin weight of even or odd J (H2: 1 and 3). The sum is the
  * "equilibrium" mixture: ortho and para forms interconvert and share one Boltzmann distribution
- * (McQuarrie, Statistical Mechanics, 2000, sec. 6-5, eq. 6-50, equilibrium case). The prefactor
+ * (McQuarrie, Statistical Mechanics, 2000, ch. 6, section on the rotational partition function of
+ * hydrogen, equilibrium case; equation numbers not re-checked). The prefactor
  * divides out the nuclear-spin degeneracy (2I+1)^2, as third-law tables do, so that q_rot tends to
  * the classical T/(sigma theta_r) at high T. For a heteronuclear molecule use weights 1 and 1 with
  * sigma = 1.

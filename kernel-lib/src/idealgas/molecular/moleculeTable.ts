@@ -2,6 +2,7 @@
  * The shipped molecular constants (data/molecules.json, with citations per molecule), lookup by id
  * or formula, and validation of constants supplied by a user.
  */
+import { editDistance } from "../../components/editDistance.js";
 import { InputError, UnknownNameError } from "../../errors.js";
 import table from "./data/molecules.json";
 import type { MolecularConstants } from "./types.js";
@@ -12,19 +13,6 @@ const MOLECULES: readonly MolecularConstants[] = (table as { molecules: Molecula
 /** Ids of the molecules shipped with the library, in table order. */
 export function listMolecules(): readonly string[] {
   return MOLECULES.map((m) => m.id);
-}
-
-function editDistance(a: string, b: string): number {
-  // Levenshtein distance, two-row dynamic programming.
-  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
-  for (let i = 1; i <= a.length; i++) {
-    const cur = [i];
-    for (let j = 1; j <= b.length; j++) {
-      cur[j] = Math.min(prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1));
-    }
-    prev = cur;
-  }
-  return prev[b.length];
 }
 
 /**

@@ -5,7 +5,8 @@
  *   q_rot = (sqrt(pi) / sigma) * sqrt( T^3 / (theta_A theta_B theta_C) ),  theta_X = h c X / kB
  *   (h - h0) = 3/2 R T,  cv = 3/2 R,  s/R = ln q_rot + 3/2
  *
- * McQuarrie, Statistical Mechanics (2000), eq. 8-22; Hill (1960), eq. 9-21. Symmetric tops
+ * McQuarrie, Statistical Mechanics (2000), ch. 8; Hill, An Introduction to Statistical
+ * Thermodynamics (1960), ch. 9. Symmetric tops
  * (two equal constants) and spherical tops (three equal) are the same formula.
  *
  * The classical limit is used. It is adequate once T is several times the largest rotational

@@ -5,7 +5,7 @@
  * - Second radiation constant c2 = h c / kB, m K; a term value of x cm^-1 corresponds to the
  *   characteristic temperature theta = 100 c2 x (K).
  * - Rotational constant B = h / (8 pi^2 c I) (Herzberg, Molecular Spectra and Molecular Structure,
- *   vol. I, 1950, eq. III,8), with B in m^-1 here and converted to cm^-1.
+ *   vol. I, 1950, ch. III), with B in m^-1 here and converted to cm^-1.
  * - Atomic mass unit taken as (1 g/mol)/NA. Since 2019 the molar mass constant is 1 g/mol only to
  *   within about 4e-10 relative, which is far below the accuracy of any constant used here.
  */

@@ -3,8 +3,8 @@
  *
  *   s/R = ln[ (2 pi m kB T / h^2)^(3/2) kB T / p ] + 5/2,   h - h0 = 5/2 R T,   cp = 5/2 R
  *
- * McQuarrie, Statistical Mechanics (2000), eq. 5-20; Hill, An Introduction to Statistical
- * Thermodynamics (1960), eq. 4-14. Here p = 1 bar (the standard pressure of the tables), and the
+ * McQuarrie, Statistical Mechanics (2000), ch. 5; Hill, An Introduction to Statistical
+ * Thermodynamics (1960), ch. 4. Here p = 1 bar (the standard pressure of the tables), and the
  * pV = RT term is included in h and cp so that the other contributions are pure internal ones.
  */
 import { AVOGADRO, BOLTZMANN, PLANCK, R } from "../../constants.js";

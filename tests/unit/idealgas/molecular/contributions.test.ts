@@ -46,7 +46,8 @@ describe("translation (Sackur-Tetrode)", () => {
 
 describe("rigid rotors", () => {
   it("explicit level sum (sigma = 1) follows the Mulholland high-T expansion", () => {
-    // Mulholland (1928), as given by McQuarrie, Statistical Mechanics (2000), eq. 6-36:
+    // Mulholland (1928) Euler-Maclaurin expansion, from memory of McQuarrie, Statistical
+    // Mechanics (2000), ch. 6:
     // q = (T/theta)(1 + u/3 + u^2/15 + 4u^3/315 + ...), u = theta/T, hence (series worked out here)
     // s/R = ln(1/u) + 1 - u^2/90 - 16u^3/2835 + O(u^4),  cv/R = 1 + u^2/45 + 16u^3/945 + O(u^4).
     const bInvCm = 1.92253;
@@ -70,7 +71,7 @@ describe("rigid rotors", () => {
     const delta = 2 * wavenumberToKelvin(b); // E(J=1) - E(J=0) = 2 B
     const r = 9 * Math.exp(-delta / t);
     const c = linearRotorLevelsContribution(b, 2, { even: 1, odd: 3 }, t);
-    // Two-level (Schottky) functions; prefactor 2 / (sigma (1 + 3)) = 1/4 (McQuarrie eq. 6-50).
+    // Two-level (Schottky) functions; prefactor 2 / (sigma (1 + 3)) = 1/4 (McQuarrie 2000, ch. 6).
     // J = 2 (weight 5, 512 K up) adds about 2.5e-8 to cv/R: tolerance 5e-8.
     expect(c.cp / R).toBeCloseTo(((delta / t) ** 2 * r) / (1 + r) ** 2, 7);
     expect(c.entropy / R).toBeCloseTo(Math.log((1 + r) / 4) + ((delta / t) * r) / (1 + r), 7);
@@ -85,7 +86,7 @@ describe("rigid rotors", () => {
   });
 
   it("nonlinear rotor: spherical top q = sqrt(pi)/sigma (T/theta)^(3/2)", () => {
-    // McQuarrie (2000), eq. 8-20 (spherical top).
+    // McQuarrie (2000), ch. 8 (spherical top), from memory.
     const b = 5.241;
     const theta = wavenumberToKelvin(b);
     const c = nonlinearRotorContribution([b, b, b], 12, 298.15);

@@ -1,6 +1,6 @@
 /**
  * Hindered internal rotor: the exact levels against the free-rotor and harmonic-oscillator limits
- * (closed forms; McQuarrie, Statistical Mechanics, 2000, eqs. 6-22 to 6-25; Pitzer & Gwinn,
+ * (closed forms; McQuarrie, Statistical Mechanics, 2000, ch. 6; Pitzer & Gwinn,
  * J. Chem. Phys. 10 (1942) 428 for the limits of the hindered rotor).
  */
 import { describe, expect, it } from "vitest";
