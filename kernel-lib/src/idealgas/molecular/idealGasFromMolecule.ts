@@ -60,6 +60,8 @@ export interface MolecularIdealGasOptions {
    * Rotation of linear molecules. Default "auto": explicit level sum with nuclear-spin statistics
    * when the data carry `nuclearSpinWeights` (H2), classical otherwise. "level-sum" without spin
    * weights uses weights 1 and 1 (heteronuclear) and requires sigma = 1 or the weights.
+   * "classical" for H2 raises the valid minimum to 5 theta_r = 427 K (h(298.15 K), the zero of
+   * enthalpyFrom298, is then evaluated with the classical rotor slightly outside that range).
    */
   readonly linearRotor?: LinearRotorTreatment;
 }

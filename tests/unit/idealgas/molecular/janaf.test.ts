@@ -86,6 +86,27 @@ describe("S and Cp at 298.15 K against NIST-JANAF (Chase 1998, from memory)", ()
   });
 });
 
+describe("equilibrium hydrogen below room temperature (rotational level sum)", () => {
+  // From memory of NIST-JANAF (Chase 1998), H2 table: the dip of cp below 7/2 R near 150-200 K
+  // is the ortho/para rotational heat capacity, which the classical rotor cannot give.
+  const rows = [
+    { t: 100, cp: 28.154, s: 100.727 },
+    { t: 200, cp: 27.447, s: 119.412 },
+  ];
+  const gas = idealGasFromMolecule("hydrogen");
+  for (const row of rows) {
+    it(`${row.t} K: S within 0.15 %, Cp within 1 %`, () => {
+      expect(rel(gas.entropyStandard(row.t), row.s)).toBeLessThan(0.0015);
+      expect(rel(gas.cp(row.t), row.cp)).toBeLessThan(0.01);
+    });
+  }
+  it("cp has a minimum below 7/2 R between 100 and 250 K (explicit levels, not the classical rotor)", () => {
+    expect(gas.cp(150)).toBeLessThan(3.5 * 8.314462618 * 0.95);
+    expect(gas.cp(150)).toBeLessThan(gas.cp(100));
+    expect(gas.cp(150)).toBeLessThan(gas.cp(250));
+  });
+});
+
 describe("S and Cp at 1000 K against NIST-JANAF (Chase 1998, from memory)", () => {
   for (const row of AT_1000) {
     it(`${row.id}: S within 0.15 %, Cp within 1.5 % and low (no anharmonicity in the model)`, () => {
