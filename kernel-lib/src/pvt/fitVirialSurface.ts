@@ -1,0 +1,129 @@
+/**
+ * Weighted least-squares fit of the virial-type surface (virialSurface.ts) to P-V-T points, with
+ * the order (density terms x temperature terms) either given or chosen by AICc (selectByAicc.ts).
+ * The fitted quantity is Z - 1 = P/(rho R T) - 1, with standard deviation u(P)/(rho R T), which
+ * is the pressure residual rescaled, so the weights are those of the pressures.
+ */
+import { R } from "../constants.js";
+import { InputError } from "../errors.js";
+import { fitDiagnostics } from "./fitDiagnostics.js";
+import type { FitDiagnostics } from "./fitDiagnostics.js";
+import { aicc } from "./selectByAicc.js";
+import { surfaceBasis } from "./virialSurface.js";
+import type { VirialSurface } from "./virialSurface.js";
+import { weightedLeastSquares } from "./weightedLeastSquares.js";
+import type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
+
+export interface SurfacePoint {
+  temperatureK: number;
+  densityMolPerM3: number;
+  pressurePa: number;
+}
+
+export interface FitVirialSurfaceOptions {
+  /** Fixed number of density terms (powers rho^1..rho^n). Default: chosen by AICc. */
+  densityTerms?: number;
+  /** Fixed number of temperature terms per density power (tau^0..tau^(n-1)). Default: chosen by AICc. */
+  temperatureTerms?: number;
+  /** Largest density-term count tried by AICc. Default 6. */
+  maxDensityTerms?: number;
+  /** Largest temperature-term count tried by AICc. Default 4. */
+  maxTemperatureTerms?: number;
+  /** Gas constant, J/(mol K). Default: CODATA R of constants.ts. */
+  gasConstant?: number;
+}
+
+export interface VirialSurfaceFit {
+  surface: VirialSurface;
+  fit: WeightedLeastSquaresResult;
+  diagnostics: FitDiagnostics;
+  /** Pressure residuals (measured - fitted), Pa, in the order of the points. */
+  pressureResidualsPa: number[];
+}
+
+/**
+ * @param sigmaPa standard deviation of each pressure, Pa; pass undefined to use unit weights and
+ *   take the scale from the scatter (the covariance is then multiplied by chi2/dof).
+ */
+export function fitVirialSurface(
+  points: readonly SurfacePoint[],
+  sigmaPa: readonly number[] | undefined,
+  options: FitVirialSurfaceOptions = {},
+): VirialSurfaceFit {
+  const gas = options.gasConstant ?? R;
+  const n = points.length;
+  if (!(n >= 3)) {
+    throw new InputError({ input: "points", unit: "-", validRange: "at least 3 points for a surface fit", received: n });
+  }
+  const temperatureScale = points.reduce((s, p) => s + p.temperatureK, 0) / n;
+  const densityScale = Math.max(...points.map((p) => p.densityMolPerM3));
+  const y = points.map((p) => p.pressurePa / (p.densityMolPerM3 * gas * p.temperatureK) - 1);
+  const scaleKnown = sigmaPa !== undefined;
+  const sigma = points.map((p, i) => (sigmaPa ? (sigmaPa[i] as number) : p.pressurePa) / (p.densityMolPerM3 * gas * p.temperatureK));
+  // Unit weights in P when unknown: sigma_y = P/(rho R T) ~ Z, i.e. relative pressure weights.
+  const candidates: [number, number][] = [];
+  const dMax = options.densityTerms ?? options.maxDensityTerms ?? 6;
+  const tMax = options.temperatureTerms ?? options.maxTemperatureTerms ?? 4;
+  for (let d = options.densityTerms ?? 1; d <= dMax; d++) {
+    for (let t = options.temperatureTerms ?? 1; t <= tMax; t++) candidates.push([d, t]);
+  }
+  const distinctT = new Set(points.map((p) => p.temperatureK.toPrecision(8))).size;
+  let best: { score: number; d: number; t: number; fit: WeightedLeastSquaresResult } | undefined;
+  let lastError: unknown;
+  for (const [d, t] of candidates) {
+    if (t > distinctT || d * t > n - 2) continue;
+    const shape = { densityTerms: d, temperatureTerms: t, densityScale, temperatureScale };
+    const design = points.map((p) => surfaceBasis(shape, "aD", p.temperatureK, p.densityMolPerM3));
+    let fit: WeightedLeastSquaresResult;
+    try {
+      fit = weightedLeastSquares(design, y, sigma);
+    } catch (e) {
+      lastError = e;
+      continue;
+    }
+    const score =
+      options.densityTerms !== undefined && options.temperatureTerms !== undefined
+        ? 0
+        : aicc(fit.chiSquare, n, d * t, scaleKnown);
+    if (!best || score < best.score) best = { score, d, t, fit };
+  }
+  if (!best) {
+    throw new InputError({
+      input: "points",
+      unit: "-",
+      validRange: "enough distinct temperatures and densities for at least one surface order",
+      received: `${n} points at ${distinctT} temperatures` + (lastError instanceof Error ? ` (${lastError.message})` : ""),
+    });
+  }
+  const { d, t, fit } = best;
+  const dof = fit.degreesOfFreedom;
+  const red = dof > 0 ? fit.chiSquare / dof : 1;
+  const factor = scaleKnown ? Math.max(1, red) : dof > 0 ? red : 1;
+  const covariance = fit.covariance.map((row) => row.map((v) => v * factor));
+  const order = points.map((_, i) => i).sort((a, b) => (points[a] as SurfacePoint).densityMolPerM3 - (points[b] as SurfacePoint).densityMolPerM3);
+  const diagnostics = fitDiagnostics(
+    `surface fit (${d} density x ${t} temperature terms)`,
+    fit,
+    order.map((i) => fit.normalizedResiduals[i] as number),
+    scaleKnown ? "stated" : "from-scatter",
+  );
+  const surface: VirialSurface = {
+    densityTerms: d,
+    temperatureTerms: t,
+    densityScale,
+    temperatureScale,
+    coefficients: fit.coefficients,
+    covariance,
+    range: {
+      minTemperatureK: Math.min(...points.map((p) => p.temperatureK)),
+      maxTemperatureK: Math.max(...points.map((p) => p.temperatureK)),
+      maxDensityMolPerM3: densityScale,
+    },
+  };
+  return {
+    surface,
+    fit,
+    diagnostics,
+    pressureResidualsPa: points.map((p, i) => (fit.residuals[i] as number) * p.densityMolPerM3 * gas * p.temperatureK),
+  };
+}

@@ -1,0 +1,122 @@
+/**
+ * Smoothing fit along one isochore: P(T) as a weighted polynomial in the centred, scaled
+ * temperature x = (T - Tmid)/halfRange (keeps the normal equations well conditioned), order chosen
+ * by AICc (selectByAicc.ts) unless fixed. Gives P and the isochoric slope (dP/dT)_rho with their
+ * standard uncertainties from the coefficient covariance (JCGM 100:2008 eq. 13).
+ */
+import { InputError } from "../errors.js";
+import { fitDiagnostics } from "./fitDiagnostics.js";
+import type { FitDiagnostics } from "./fitDiagnostics.js";
+import { aicc } from "./selectByAicc.js";
+import { weightedLeastSquares } from "./weightedLeastSquares.js";
+import type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
+
+export interface IsochoreFitOptions {
+  /** Fixed polynomial order (1 = linear in T). Default: chosen by AICc up to `maxOrder`. */
+  order?: number;
+  /** Highest order tried. Default 6. */
+  maxOrder?: number;
+}
+
+export interface IsochoreFit {
+  /** The isochore's density, mol/m3. */
+  readonly densityMolPerM3: number;
+  readonly order: number;
+  readonly minTemperatureK: number;
+  readonly maxTemperatureK: number;
+  readonly diagnostics: FitDiagnostics;
+  /** Residual pressures (measured - fitted), Pa, in the order the points were given. */
+  readonly residualsPa: readonly number[];
+  /** Standard deviation used for each point, Pa (stated, or from the scatter). */
+  readonly sigmaPa: readonly number[];
+  /** P (Pa) and dP/dT (Pa/K) at T, with standard uncertainties. */
+  evaluate(temperatureK: number): { pressurePa: number; slopePaPerK: number; uPressurePa: number; uSlopePaPerK: number };
+}
+
+export function fitIsochore(
+  densityMolPerM3: number,
+  temperaturesK: readonly number[],
+  pressuresPa: readonly number[],
+  sigmaPa: readonly number[] | undefined,
+  options: IsochoreFitOptions = {},
+): IsochoreFit {
+  const n = temperaturesK.length;
+  const distinct = new Set(temperaturesK.map((t) => t.toPrecision(10))).size;
+  if (!(distinct >= 2)) {
+    throw new InputError({
+      input: `isochore ${densityMolPerM3.toPrecision(6)} mol/m3`,
+      unit: "-",
+      validRange: "at least 2 distinct temperatures",
+      received: distinct,
+    });
+  }
+  const tMin = Math.min(...temperaturesK);
+  const tMax = Math.max(...temperaturesK);
+  const mid = 0.5 * (tMin + tMax);
+  const half = 0.5 * (tMax - tMin);
+  const xs = temperaturesK.map((t) => (t - mid) / half);
+  const scaleKnown = sigmaPa !== undefined;
+  const sigma = sigmaPa ?? temperaturesK.map(() => 1);
+  const orders: number[] = [];
+  if (options.order !== undefined) orders.push(options.order);
+  else for (let k = 1; k <= Math.min(options.maxOrder ?? 6, distinct - 1); k++) orders.push(k);
+  let best: { score: number; order: number; fit: WeightedLeastSquaresResult } | undefined;
+  for (const order of orders) {
+    if (order + 1 > distinct) continue;
+    const design = xs.map((x) => Array.from({ length: order + 1 }, (_, j) => x ** j));
+    const fit = weightedLeastSquares(design, pressuresPa, sigma);
+    const raw = aicc(fit.chiSquare, n, order + 1, scaleKnown);
+    // Infinity when n - k - 1 <= 0: keep the lowest such order only as a last resort.
+    const score = Number.isFinite(raw) ? raw : 1e300 + order;
+    if (!best || score < best.score) best = { score, order, fit };
+  }
+  if (!best) {
+    throw new InputError({
+      input: `isochore ${densityMolPerM3.toPrecision(6)} mol/m3 order`,
+      unit: "-",
+      validRange: `at most ${distinct - 1} (distinct temperatures - 1)`,
+      received: options.order,
+    });
+  }
+  const { order, fit } = best;
+  const dof = fit.degreesOfFreedom;
+  const red = dof > 0 ? fit.chiSquare / dof : Number.NaN;
+  // Stated sigmas: enlarge when the scatter is larger (Birge ratio); unknown: scale from the scatter.
+  const factor = scaleKnown ? (dof > 0 ? Math.max(1, red) : 1) : dof > 0 ? red : 0;
+  const cov = fit.covariance.map((r) => r.map((v) => v * factor));
+  const sortIdx = temperaturesK.map((_, i) => i).sort((a, b) => (temperaturesK[a] as number) - (temperaturesK[b] as number));
+  const diagnostics = fitDiagnostics(
+    `isochore ${densityMolPerM3.toPrecision(6)} mol/m3 (order ${order})`,
+    fit,
+    sortIdx.map((i) => fit.normalizedResiduals[i] as number),
+    scaleKnown ? "stated" : "from-scatter",
+  );
+  const c = fit.coefficients;
+  const usedSigma = scaleKnown ? sigma.map((s) => s * Math.sqrt(Math.max(1, dof > 0 ? red : 1))) : sigma.map(() => Math.sqrt(factor));
+  return {
+    densityMolPerM3,
+    order,
+    minTemperatureK: tMin,
+    maxTemperatureK: tMax,
+    diagnostics,
+    residualsPa: fit.residuals,
+    sigmaPa: usedSigma,
+    evaluate(temperatureK: number) {
+      const x = (temperatureK - mid) / half;
+      const gP = c.map((_, j) => x ** j);
+      const gS = c.map((_, j) => (j === 0 ? 0 : (j * x ** (j - 1)) / half));
+      const quad = (g: number[]) => {
+        let v = 0;
+        for (let i = 0; i < g.length; i++) for (let j = 0; j < g.length; j++) v += (g[i] as number) * ((cov[i] as number[])[j] as number) * (g[j] as number);
+        return Math.sqrt(Math.max(v, 0));
+      };
+      let P = 0;
+      let S = 0;
+      for (let j = 0; j < c.length; j++) {
+        P += (c[j] as number) * (gP[j] as number);
+        S += (c[j] as number) * (gS[j] as number);
+      }
+      return { pressurePa: P, slopePaPerK: S, uPressurePa: quad(gP), uSlopePaPerK: quad(gS) };
+    },
+  };
+}

@@ -1,0 +1,68 @@
+/**
+ * Propagation of the pressure uncertainties through a frozen route (fixed groupings, orders and
+ * nodes, so the route is a fixed, nearly linear map from the pressures to the departures):
+ *  - Monte Carlo (JCGM 101:2008, GUM Supplement 1, §7): pressures resampled as P_i + sigma_i N(0,1)
+ *    from a seeded generator (seededRandom.ts), standard deviation of each output;
+ *  - linearised (JCGM 100:2008, GUM, eq. 10): sensitivity of each output to each pressure by a
+ *    one-sigma step, u^2 = sum_i (f(P + sigma_i e_i) - f(P))^2; exact where the map is linear
+ *    (every departure except the ln Z term of g and ln phi).
+ * Temperature and density uncertainties enter through sigma_i as effective pressure
+ * uncertainties (the "effective variance" of Orear, Am. J. Phys. 50 (1982) 912), so they are
+ * treated as independent per point.
+ */
+import { seededRandom } from "./seededRandom.js";
+
+export interface PropagationResult {
+  /** Standard uncertainty of each output. */
+  standardUncertainty: number[];
+  samples: number;
+}
+
+export function monteCarloPropagation(
+  evaluate: (pressuresPa: readonly number[]) => number[],
+  pressuresPa: readonly number[],
+  sigmaPa: readonly number[],
+  samples: number,
+  seed: number,
+): PropagationResult {
+  const rng = seededRandom(seed);
+  let mean: number[] | undefined;
+  let m2: number[] | undefined;
+  for (let s = 1; s <= samples; s++) {
+    const p = pressuresPa.map((v, i) => v + (sigmaPa[i] as number) * rng.normal());
+    const out = evaluate(p);
+    if (!mean || !m2) {
+      mean = out.slice();
+      m2 = out.map(() => 0);
+      continue;
+    }
+    // Welford's running variance (Welford, Technometrics 4 (1962) 419).
+    for (let k = 0; k < out.length; k++) {
+      const d = (out[k] as number) - (mean[k] as number);
+      mean[k] = (mean[k] as number) + d / s;
+      m2[k] = (m2[k] as number) + d * ((out[k] as number) - (mean[k] as number));
+    }
+  }
+  return { standardUncertainty: (m2 ?? []).map((v) => Math.sqrt(v / Math.max(samples - 1, 1))), samples };
+}
+
+export function linearisedPropagation(
+  evaluate: (pressuresPa: readonly number[]) => number[],
+  pressuresPa: readonly number[],
+  sigmaPa: readonly number[],
+  nominal: readonly number[],
+): PropagationResult {
+  const acc = nominal.map(() => 0);
+  const p = pressuresPa.slice();
+  for (let i = 0; i < p.length; i++) {
+    const keep = p[i] as number;
+    p[i] = keep + (sigmaPa[i] as number);
+    const out = evaluate(p);
+    for (let k = 0; k < acc.length; k++) {
+      const d = (out[k] as number) - (nominal[k] as number);
+      acc[k] = (acc[k] as number) + d * d;
+    }
+    p[i] = keep;
+  }
+  return { standardUncertainty: acc.map(Math.sqrt), samples: p.length };
+}
