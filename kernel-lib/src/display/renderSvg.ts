@@ -63,7 +63,21 @@ function findUrlData(node: unknown, path: string): { path: string; url: unknown 
 export async function renderSvg(spec: VegaLiteSpec): Promise<string> {
   checkChartSpec(spec);
   const { vega, vegaLite } = await loadVega();
-  const compiled = vegaLite.compile(spec as Parameters<typeof vegaLite.compile>[0]);
+  // vega tags data rows it ingests (a symbol id on each object): work on a copy, so the caller's
+  // spec and rows stay as they were (and serialise the same in chartHtml).
+  const copy = structuredClone(spec) as Parameters<typeof vegaLite.compile>[0];
+  let compiled: ReturnType<typeof vegaLite.compile>;
+  try {
+    compiled = vegaLite.compile(copy);
+  } catch (error) {
+    throw new InputError({
+      input: "spec",
+      unit: "-",
+      validRange: "a Vega-Lite v6 specification that vega-lite can compile",
+      received: `a spec with mark ${JSON.stringify(spec.mark ?? null)}`,
+      hint: `vega-lite said: ${error instanceof Error ? error.message : String(error)}`,
+    });
+  }
   const loader = vega.loader();
   const refuse = (uri: string): Promise<never> =>
     Promise.reject(

@@ -3,6 +3,7 @@
  * anything else with a RunnerError. Field names are nbformat's own (snake_case), per the nbformat 4
  * JSON schema (nbformat.v4.schema.json, "required" lists).
  */
+import { randomBytes } from "node:crypto";
 import * as fs from "node:fs";
 import { RunnerError } from "./runnerError.js";
 
@@ -70,6 +71,11 @@ export function joinText(text: MultilineString | undefined): string {
   return Array.isArray(text) ? text.join("") : text;
 }
 
+/** A cell id for 4.5 notebooks whose cells lack one (schema: 1-64 of [a-zA-Z0-9-_]). */
+function newCellId(index: number): string {
+  return `isochor-cell-${index + 1}-${randomBytes(4).toString("hex")}`;
+}
+
 function isRecord(value: unknown): value is Record<string, unknown> {
   return value !== null && typeof value === "object" && !Array.isArray(value);
 }
@@ -109,7 +115,12 @@ export function parseNotebook(text: string, name: string): Notebook {
       detail: `not an nbformat 4 notebook (nbformat is ${JSON.stringify(json.nbformat)}); save it with Jupyter 4 or later`,
     });
   }
-  const minor = typeof json.nbformat_minor === "number" ? json.nbformat_minor : 0;
+  const minor =
+    typeof json.nbformat_minor === "number" &&
+    Number.isInteger(json.nbformat_minor) &&
+    json.nbformat_minor >= 0
+      ? json.nbformat_minor
+      : 0;
   const cells: NotebookCell[] = json.cells.map((cell: unknown, i: number) => {
     const where = `cell ${i + 1}`;
     if (!isRecord(cell) || !isMultiline(cell.source)) {
@@ -119,7 +130,11 @@ export function parseNotebook(text: string, name: string): Notebook {
       });
     }
     const metadata = isRecord(cell.metadata) ? cell.metadata : {};
-    const id = typeof cell.id === "string" ? { id: cell.id } : {};
+    // nbformat 4.5 requires a cell id; 4.0-4.4 forbid one (their schemas allow no extra fields).
+    const id =
+      minor >= 5
+        ? { id: typeof cell.id === "string" && cell.id !== "" ? cell.id : newCellId(i) }
+        : {};
     switch (cell.cell_type) {
       case "code":
         return {
