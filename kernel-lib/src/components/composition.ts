@@ -101,3 +101,39 @@ export function normalizeMoleFractions(
   }
   return x.map((xi) => xi / sum);
 }
+
+/**
+ * Mole fractions from amounts of substance (mol): each amount finite and >= 0, total > 0.
+ * @example moleFractionsFromAmounts([3, 1]) // [0.75, 0.25]
+ */
+export function moleFractionsFromAmounts(amountsMol: readonly number[]): number[] {
+  if (!Array.isArray(amountsMol) || amountsMol.length === 0) {
+    throw new InputError({
+      input: "amountsMol",
+      unit: "mol",
+      validRange: "a non-empty array of amounts",
+      received: amountsMol,
+    });
+  }
+  let total = 0;
+  amountsMol.forEach((n, i) => {
+    if (!(typeof n === "number" && n >= 0 && n < Infinity)) {
+      throw new InputError({
+        input: `amountsMol[${i}]`,
+        unit: "mol",
+        validRange: "a finite number >= 0",
+        received: n,
+      });
+    }
+    total += n;
+  });
+  if (!(total > 0)) {
+    throw new InputError({
+      input: "total amount (sum of amountsMol)",
+      unit: "mol",
+      validRange: "> 0",
+      received: total,
+    });
+  }
+  return amountsMol.map((n) => n / total);
+}

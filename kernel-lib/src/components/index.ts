@@ -12,7 +12,11 @@ export { getComponent, listComponents, normalizeComponentName } from "./getCompo
 export type { GetComponentOptions } from "./getComponent.js";
 export { defineComponent } from "./defineComponent.js";
 export type { ComponentSpec, DefineComponentOptions } from "./defineComponent.js";
-export { checkMoleFractions, normalizeMoleFractions } from "./composition.js";
+export {
+  checkMoleFractions,
+  normalizeMoleFractions,
+  moleFractionsFromAmounts,
+} from "./composition.js";
 export type { CheckMoleFractionsOptions } from "./composition.js";
 export { AmbiguousNameError } from "./ambiguousNameError.js";
 export { parseFormula } from "./formula.js";
