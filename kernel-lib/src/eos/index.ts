@@ -1,2 +1,2 @@
 // Public exports of eos/ (filled by the area as it lands).
-export {};
+export * from "./multiparameter/index.js";

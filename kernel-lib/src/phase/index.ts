@@ -1,0 +1,18 @@
+// Public exports of phase/: pure-fluid phase equilibrium (saturation, critical point, phase of a
+// state). Mixture flash calculations will live here too.
+export { saturationAtTemperature, saturationAtPressure } from "./saturation.js";
+export type {
+  SaturationOptions,
+  SaturationAtPressureOptions,
+  SaturationResult,
+} from "./saturation.js";
+export { locateCriticalPoint } from "./criticalPoint.js";
+export type { CriticalPointOptions, CriticalPointResult } from "./criticalPoint.js";
+export { equalAreaIsotherm } from "./equalAreaIsotherm.js";
+export type {
+  EqualAreaIsotherm,
+  EqualAreaOptions,
+  IsothermLoopPoint,
+  IsothermRegion,
+} from "./equalAreaIsotherm.js";
+export type { SaturationHints } from "./pureFluid.js";

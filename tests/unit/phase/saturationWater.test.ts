@@ -1,0 +1,142 @@
+/**
+ * Saturation of water with IAPWS-95, against IAPWS R6-95(2018) Table 8 and the fixed points of
+ * Wagner and Pruss (2002). Reference values are from memory of those publications (named per
+ * value). Table 8 prints nine significant digits: tolerance relative 1e-8 (half a unit in the
+ * ninth digit is at most 5e-9 relative); h and s in Table 8 are in the IAPWS-95 reference state
+ * (u = s = 0 for the saturated liquid at the triple point), which is the direct path's state.
+ */
+import { describe, expect, it } from "vitest";
+import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referencePropertiesTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceProperties.js";
+import { locateCriticalPoint } from "../../../kernel-lib/src/phase/criticalPoint.js";
+import {
+  saturationAtPressure,
+  saturationAtTemperature,
+} from "../../../kernel-lib/src/phase/saturation.js";
+import { equalAreaIsotherm } from "../../../kernel-lib/src/phase/equalAreaIsotherm.js";
+import { PhaseUnavailableError } from "../../../kernel-lib/src/errors.js";
+
+const water = referenceFluid("water");
+const M = 0.018015268; // kg/mol (IAPWS R6-95(2018))
+
+function expectRel(actual: number, expected: number, rel: number): void {
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
+}
+
+describe("IAPWS R6-95(2018) Table 8: saturation at 275, 450 and 625 K", () => {
+  // [T K, ps MPa, rho' kg/m3, rho'' kg/m3, h' kJ/kg, h'' kJ/kg, s' kJ/(kg K), s'' kJ/(kg K)]
+  // from memory of IAPWS R6-95(2018) Table 8.
+  const rows: number[][] = [
+    [
+      275, 0.698451167e-3, 0.999887406e3, 0.550664919e-2, 0.775972202e1, 0.250428995e4,
+      0.28309467e-1, 0.910660121e1,
+    ],
+    [
+      450, 0.932203564, 0.89034125e3, 0.48120036e1, 0.749161585e3, 0.277441078e4, 0.210865845e1,
+      0.660921221e1,
+    ],
+    [
+      625, 0.169082693e2, 0.567090385e3, 0.11829028e3, 0.168626976e4, 0.255071625e4, 0.380194683e1,
+      0.518506121e1,
+    ],
+  ];
+  for (const [T, ps, rhoL, rhoV, hL, hV, sL, sV] of rows) {
+    it(`T = ${T} K`, () => {
+      const sat = saturationAtTemperature(water, T);
+      expect(sat.start).toBe("ancillary equations");
+      expectRel(sat.pressurePa / 1e6, ps, 1e-8);
+      expectRel(sat.liquidDensityMolPerM3 * M, rhoL, 1e-8);
+      expectRel(sat.vaporDensityMolPerM3 * M, rhoV, 1e-8);
+      const L = referencePropertiesTRho(water, T, sat.liquidDensityMolPerM3);
+      const V = referencePropertiesTRho(water, T, sat.vaporDensityMolPerM3);
+      expectRel(L.h / M / 1e3, hL, 1e-8);
+      expectRel(V.h / M / 1e3, hV, 1e-8);
+      expectRel(L.s / M / 1e3, sL, 1e-8);
+      expectRel(V.s / M / 1e3, sV, 1e-8);
+      // h_vap from alpha_r alone equals the difference of the absolute enthalpies.
+      expectRel(sat.enthalpyOfVaporizationJPerMol / M / 1e3, hV - hL, 2e-8);
+      expectRel(sat.entropyOfVaporizationJPerMolK / M / 1e3, sV - sL, 2e-8);
+    });
+  }
+});
+
+describe("IAPWS-95 fixed points", () => {
+  it("critical point from the equation's own conditions: 647.096 K, 322 kg/m3, 22.064 MPa", () => {
+    // IAPWS R6-95(2018) eqs. (1)-(3) (from memory); the equation was constrained to this point.
+    // Tolerances: T and P to 1e-9 relative; the density, fixed by a very flat (dP/drho) near
+    // the critical point, to 1e-6 relative.
+    const c = locateCriticalPoint(water);
+    expectRel(c.temperatureK, 647.096, 1e-9);
+    expectRel(c.pressurePa, 22.064e6, 1e-9);
+    expectRel(c.densityMolPerM3 * M, 322, 1e-6);
+  });
+
+  it("triple point: p = 611.654771 Pa, rho' = 999.793 kg/m3, rho'' = 0.00485458 kg/m3", () => {
+    // From memory of Wagner and Pruss, J. Phys. Chem. Ref. Data 31, 387 (2002), section 2.3 and
+    // Table 13.1 (values computed from IAPWS-95 at 273.16 K); tolerance half a unit in the last
+    // printed digit.
+    const s = saturationAtTemperature(water, 273.16);
+    expect(Math.abs(s.pressurePa - 611.654771)).toBeLessThan(5e-7);
+    expect(Math.abs(s.liquidDensityMolPerM3 * M - 999.793)).toBeLessThan(5e-4);
+    expect(Math.abs(s.vaporDensityMolPerM3 * M - 0.00485458)).toBeLessThan(5e-9);
+    // The reference state: u' = 0 and s' = 0 at the triple point (IAPWS-95 convention).
+    const L = referencePropertiesTRho(water, 273.16, s.liquidDensityMolPerM3);
+    expect(Math.abs(L.u)).toBeLessThan(1e-6);
+    expect(Math.abs(L.s)).toBeLessThan(1e-9);
+  });
+
+  it("normal boiling point 373.124 K at 101325 Pa", () => {
+    // From memory of Wagner and Pruss (2002), section 2.3 (normal boiling temperature on ITS-90
+    // computed from IAPWS-95: 373.124 K); tolerance half a unit in the third decimal.
+    const s = saturationAtPressure(water, 101325);
+    expect(Math.abs(s.temperatureK - 373.124)).toBeLessThan(5e-4);
+    expect(Math.abs(s.pressurePa / 101325 - 1)).toBeLessThan(1e-11);
+  });
+});
+
+describe("IAPWS-95 saturation: robustness", () => {
+  it("converges from the triple point to within 1e-4 K of the critical temperature", () => {
+    let previous = 0;
+    for (const T of [273.16, 300, 400, 500, 600, 640, 646, 647, 647.09, 647.096 - 1e-4]) {
+      const s = saturationAtTemperature(water, T);
+      expect(s.residual.gibbs).toBeLessThan(1e-12);
+      expect(s.residual.pressure).toBeLessThan(1e-12);
+      expect(s.pressurePa).toBeGreaterThan(previous);
+      expect(s.liquidDensityMolPerM3).toBeGreaterThan(water.critical.densityMolPerM3);
+      expect(s.vaporDensityMolPerM3).toBeLessThan(water.critical.densityMolPerM3);
+      previous = s.pressurePa;
+    }
+  });
+
+  it("the spinodal route (no ancillaries) agrees with the ancillary route", () => {
+    // Strip the ancillary equations: only the ResidualModel interface remains.
+    const bare = {
+      info: water.info,
+      gasConstant: water.gasConstant,
+      residual: water.residual.bind(water),
+      maxDensity: water.maxDensity.bind(water),
+      pseudoCritical: () => ({ ...water.critical, rule: "published" }),
+    };
+    for (const T of [400, 600, 645]) {
+      const a = saturationAtTemperature(water, T);
+      const b = saturationAtTemperature(bare, T);
+      expect(b.start).toBe("spinodals");
+      expectRel(b.pressurePa, a.pressurePa, 1e-10);
+      expectRel(b.liquidDensityMolPerM3, a.liquidDensityMolPerM3, 1e-10);
+      expectRel(b.vaporDensityMolPerM3, a.vaporDensityMolPerM3, 1e-10);
+    }
+  });
+
+  it("equal areas on the IAPWS-95 isotherm at 600 K", () => {
+    const iso = equalAreaIsotherm(water, 600);
+    expect(Math.abs(iso.areas.netJPerMol)).toBeLessThan(
+      1e-8 * iso.areas.aboveTieLineJPerMol + iso.areas.errorEstimateJPerMol,
+    );
+  });
+
+  it("refuses temperatures at or above the critical point", () => {
+    expect(() => saturationAtTemperature(water, 647.096)).toThrow(PhaseUnavailableError);
+    expect(() => saturationAtTemperature(water, 700)).toThrow(/critical temperature/);
+    expect(() => saturationAtPressure(water, 22.1e6)).toThrow(PhaseUnavailableError);
+  });
+});
