@@ -5,3 +5,4 @@
 export * from "./core.js";
 export * from "./display/index.js";
 export * from "./records/index.js";
+export { readPvtCsvFile } from "./pvt/readPvtCsvFile.js";

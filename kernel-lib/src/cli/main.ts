@@ -21,6 +21,10 @@ const commands: Record<string, Command> = {
     summary: "eval [request.json]     evaluate states from a JSON request (file or stdin)",
     load: async () => (await import("./eval.js")).evalCommand,
   },
+  pvt: {
+    summary: "pvt <file.csv>          departure functions from measured P-V-T data",
+    load: async () => (await import("./pvt.js")).pvtCommand,
+  },
 };
 
 function usage(): string {

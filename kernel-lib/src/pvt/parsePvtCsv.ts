@@ -2,7 +2,7 @@
  * Reads measured P-V-T data from CSV text (browser-safe: takes a string; the Node CLI reads the
  * file). Headers carry units: `T [K]`, `rho [mol/L]` or `v [cm3/mol]`, `P [MPa]`, and optional
  * standard uncertainties `u(T) [K]`, `u(rho) [...]` or `u(v) [...]`, `u(P) [...]` in any unit
- * the column-unit table knows. Lines starting with `#` are comments (provenance).
+ * the units module knows for that dimension (columnUnits.ts). Lines starting with `#` are comments (provenance).
  *
  * Refused, with file, line and column and what was expected: a missing or unknown column, a
  * header without a unit, a unit that does not parse, a row with the wrong number of cells, a
@@ -232,7 +232,7 @@ export function parsePvtCsv(text: string, options: ParsePvtCsvOptions = {}): Pvt
     source,
     points: kept,
     setAside,
-    columns: columns.map((c) => ({ header: c.header, quantity: c.role, unit: c.toSI.siUnit })),
+    columns: columns.map((c) => ({ header: c.header, quantity: c.role, unit: c.toSI.siUnit + (c.toSI.note ? ` (${c.toSI.note})` : "") })),
     comments: comments.map((c) => c.text),
   };
 }
