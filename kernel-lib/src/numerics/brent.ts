@@ -41,7 +41,7 @@ const EPS = Number.EPSILON;
  *
  * @example
  * ```ts
- *  findRootBrent((x) => x * x - 2, 0, 2).value; // ≈ 1.41421356237310 (sqrt 2, to within 4 eps)
+ * findRootBrent((x) => x * x - 2, 0, 2).value; // ≈ 1.41421356237310 (sqrt 2, to within 4 eps)
  * ```
  * @throws InputError if lo or hi is not finite, or an option is invalid.
  * @throws SolverError if f(lo) and f(hi) have the same sign, f returns NaN or an infinite value,
