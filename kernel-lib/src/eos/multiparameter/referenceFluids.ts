@@ -7,9 +7,11 @@ import { UnknownNameError } from "../../errors.js";
 import type { ReferenceFluidData } from "./fluidData.js";
 import { buildReferenceFluid, type ReferenceFluid } from "./referenceFluid.js";
 import water from "./data/water.json";
+import carbonDioxide from "./data/carbon-dioxide.json";
 
 const DATA: Readonly<Record<string, ReferenceFluidData>> = {
   water: water as ReferenceFluidData,
+  "carbon-dioxide": carbonDioxide as ReferenceFluidData,
 };
 
 const built = new Map<string, ReferenceFluid>();
