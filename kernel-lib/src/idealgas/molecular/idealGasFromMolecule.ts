@@ -15,15 +15,25 @@
  *   min = 20 K for atoms and level-summed linear rotors; otherwise max(50 K, 5 theta_rot,max),
  *         where theta_rot,max is the largest rotational temperature of a classical rotor
  *         (water: 201 K, ammonia: 72 K, hydrogen sulfide: 75 K, the rest: 50 K);
- *   max = 3000 K. Above about 1000 K the harmonic-oscillator / rigid-rotor model misses
- *         anharmonicity and vibration-rotation coupling; cp errors grow to about 1-3 % at 3000 K
- *         (more for H2 and molecules with low-frequency or large-amplitude modes). Dissociation and
- *         ionisation are not modelled.
- * Outside the range every function throws OutOfRangeError; a temperature that is not a finite
- * positive number throws InputError.
+ *   max = 1500 K by default, the judgement being where the rigid-rotor harmonic-oscillator model
+ *         stays adequate: it lacks anharmonicity and vibration-rotation coupling, so cp falls
+ *         below the tables as T rises. Against NIST-JANAF and the correlation route, cp is low by
+ *         < 0.5 % at 300 K, up to about 1.5 % at 1000 K (NH3, H2) and up to about 2 % at 1500 K
+ *         (H2, H2O); at 2500 K by up to about 4 % (H2, H2O). The option `maxTemperatureK` raises
+ *         the limit up to 3000 K for users who accept that; dissociation and ionisation are never
+ *         modelled.
+ * Range policy shared with the correlation route (idealgas/temperatureRange.ts): inside the range
+ * values are computed; up to `extrapolationMargin` (default 10 %) beyond a limit they are computed
+ * by the same formulas (the mixture layer attaches an "extrapolated" warning); further out every
+ * function throws OutOfRangeError. A temperature that is not a finite positive number throws
+ * InputError.
  */
 import { OutOfRangeError } from "../../errors.js";
-import { requirePositive } from "../../validate.js";
+import {
+  checkTemperatureRange,
+  DEFAULT_EXTRAPOLATION_MARGIN,
+  type TemperatureRangeOptions,
+} from "../temperatureRange.js";
 import { STANDARD_TEMPERATURE_K, type IdealGasPure } from "../types.js";
 import { electronicContribution } from "./electronic.js";
 import { harmonicVibrationContribution, type HarmonicMode } from "./harmonicVibration.js";
@@ -47,8 +57,8 @@ export type TorsionTreatment = "hindered-rotor" | "harmonic" | "free-rotor";
 /** How the rotation of a linear molecule is treated. */
 export type LinearRotorTreatment = "auto" | "classical" | "level-sum";
 
-/** Options of idealGasFromMolecule. */
-export interface MolecularIdealGasOptions {
+/** Options of idealGasFromMolecule (plus `extrapolationMargin`, see TemperatureRangeOptions). */
+export interface MolecularIdealGasOptions extends TemperatureRangeOptions {
   /**
    * Treatment of torsions that have an internal-rotor entry. Default "hindered-rotor" (exact levels
    * of V0/2 (1 - cos n phi)). "harmonic" uses the observed torsional fundamental from the vibration
@@ -64,6 +74,12 @@ export interface MolecularIdealGasOptions {
    * enthalpyFrom298, is then evaluated with the classical rotor slightly outside that range).
    */
   readonly linearRotor?: LinearRotorTreatment;
+  /**
+   * Upper limit of the valid range, K. Default 1500 (MOLECULAR_DEFAULT_MAX_TEMPERATURE_K); at most
+   * 3000. Above 1500 K the harmonic model's cp is low by 1-4 % for several molecules (see header).
+   * Example: `idealGasFromMolecule("nitrogen", { maxTemperatureK: 3000 }).cp(2500)`.
+   */
+  readonly maxTemperatureK?: number;
 }
 
 /** The IdealGasPure contract plus the statistical-mechanics details, for inspection in a notebook. */
@@ -85,7 +101,9 @@ export interface MolecularIdealGas extends IdealGasPure {
   enthalpyFrom0K(temperatureK: number): number;
 }
 
-/** Highest temperature of the model, K. */
+/** Default upper limit of the valid range, K (see the header for why). */
+export const MOLECULAR_DEFAULT_MAX_TEMPERATURE_K = 1500;
+/** Highest upper limit a caller may choose with `maxTemperatureK`, K. */
 export const MOLECULAR_MAX_TEMPERATURE_K = 3000;
 
 /**
@@ -101,6 +119,24 @@ export function idealGasFromMolecule(
   const c = validateMolecularConstants(
     typeof molecule === "string" ? getMolecule(molecule) : molecule,
   );
+  const margin = options.extrapolationMargin ?? DEFAULT_EXTRAPOLATION_MARGIN;
+  if (!(margin >= 0 && margin < 1)) {
+    throw new OutOfRangeError({
+      input: "options.extrapolationMargin",
+      unit: "-",
+      validRange: "between 0 and 1 (fraction of the violated limit)",
+      received: margin,
+    });
+  }
+  const maxT = options.maxTemperatureK ?? MOLECULAR_DEFAULT_MAX_TEMPERATURE_K;
+  if (!(maxT >= 300 && maxT <= MOLECULAR_MAX_TEMPERATURE_K)) {
+    throw new OutOfRangeError({
+      input: "options.maxTemperatureK",
+      unit: "K",
+      validRange: `between 300 K and ${MOLECULAR_MAX_TEMPERATURE_K} K`,
+      received: maxT,
+    });
+  }
   const torsion = options.torsion ?? "hindered-rotor";
   if (!["hindered-rotor", "harmonic", "free-rotor"].includes(torsion)) {
     throw new OutOfRangeError({
@@ -142,7 +178,7 @@ export function idealGasFromMolecule(
       ? []
       : c.internalRotors.map((r) =>
           buildHinderedRotor(torsion === "free-rotor" ? { ...r, barrierInvCm: 0 } : r, {
-            maxTemperatureK: MOLECULAR_MAX_TEMPERATURE_K,
+            maxTemperatureK: maxT * (1 + margin),
           }),
         );
 
@@ -152,18 +188,35 @@ export function idealGasFromMolecule(
       : Math.max(...c.rotationalConstantsInvCm.map(wavenumberToKelvin));
   const minT =
     c.geometry === "atom" || levelSumLinear ? 20 : Math.max(50, Math.ceil(5 * classicalThetaMax));
-  const validTemperatureK = { min: minT, max: MOLECULAR_MAX_TEMPERATURE_K };
+  const validTemperatureK = Object.freeze({ min: minT, max: maxT });
+
+  const methodParts = [
+    "translation",
+    c.geometry === "atom"
+      ? ""
+      : levelSumLinear
+        ? c.nuclearSpinWeights
+          ? "rotational level sum (ortho/para equilibrium)"
+          : "rotational level sum"
+        : "classical rigid rotor",
+    c.vibrations.length > 0
+      ? torsion === "harmonic" && c.internalRotors.length > 0
+        ? "harmonic oscillators (torsion included)"
+        : "harmonic oscillators"
+      : "",
+    "electronic levels",
+    rotors.length > 0
+      ? torsion === "free-rotor"
+        ? "free internal rotor"
+        : "hindered internal rotor (exact levels)"
+      : "",
+  ].filter((s) => s !== "");
+  const method = `statistical mechanics (${methodParts.join(", ")})`;
 
   const check = (temperatureK: number): number => {
-    requirePositive("temperatureK", temperatureK, "K");
-    if (!(temperatureK >= minT && temperatureK <= MOLECULAR_MAX_TEMPERATURE_K)) {
-      throw new OutOfRangeError({
-        input: "temperatureK",
-        unit: "K",
-        validRange: `${minT} K to ${MOLECULAR_MAX_TEMPERATURE_K} K for ${c.id} (statistical-mechanics model)`,
-        received: temperatureK,
-      });
-    }
+    checkTemperatureRange(c.id, method, validTemperatureK, temperatureK, {
+      extrapolationMargin: margin,
+    });
     return temperatureK;
   };
 
@@ -207,25 +260,10 @@ export function idealGasFromMolecule(
   };
 
   const h298 = parts(STANDARD_TEMPERATURE_K).total.enthalpyFrom0K;
-  const methodParts = [
-    "translation",
-    c.geometry === "atom"
-      ? ""
-      : levelSumLinear
-        ? "rotational level sum (ortho/para equilibrium)"
-        : "classical rigid rotor",
-    c.vibrations.length > 0 ? "harmonic oscillators" : "",
-    "electronic levels",
-    rotors.length > 0
-      ? torsion === "free-rotor"
-        ? "free internal rotor"
-        : "hindered internal rotor (exact levels)"
-      : "",
-  ].filter((s) => s !== "");
 
   return {
     componentId: c.id,
-    method: `statistical mechanics (${methodParts.join(", ")})`,
+    method,
     source: c.sources.join("; "),
     validTemperatureK,
     constants: c,

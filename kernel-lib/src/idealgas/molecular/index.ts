@@ -2,6 +2,7 @@
 export {
   idealGasFromMolecule,
   MOLECULAR_MAX_TEMPERATURE_K,
+  MOLECULAR_DEFAULT_MAX_TEMPERATURE_K,
   type MolecularIdealGas,
   type MolecularIdealGasOptions,
   type TorsionTreatment,

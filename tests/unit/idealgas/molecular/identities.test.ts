@@ -22,7 +22,7 @@ describe("property identities (fast-check)", () => {
         fc.constantFrom(...torsions),
         fc.double({ min: 0, max: 1, noNaN: true }),
         (id, torsion, fraction) => {
-          const gas = idealGasFromMolecule(id, { torsion });
+          const gas = idealGasFromMolecule(id, { torsion, maxTemperatureK: 3000 });
           const { min, max } = gas.validTemperatureK;
           const t = min * 1.01 + fraction * (max * 0.99 - min * 1.01);
           const dt = 1e-3 * t;
@@ -56,7 +56,7 @@ describe("property identities (fast-check)", () => {
 
   it("h(T) - h(298.15) equals the difference of h - h(0 K)", () => {
     const gas = idealGasFromMolecule("methane");
-    for (const t of [100, 500, 2500]) {
+    for (const t of [100, 500, 1500]) {
       expect(gas.enthalpyFrom298(t)).toBeCloseTo(
         gas.enthalpyFrom0K(t) - gas.enthalpyFrom0K(298.15),
         8,

@@ -61,7 +61,10 @@ describe("molecule table", () => {
     const gas = idealGasFromMolecule("ethane");
     expect(gas.componentId).toBe("ethane");
     expect(gas.method).toContain("hindered internal rotor");
-    expect(gas.validTemperatureK).toEqual({ min: 50, max: 3000 });
+    expect(gas.validTemperatureK).toEqual({ min: 50, max: 1500 });
+    expect(idealGasFromMolecule("ethane", { maxTemperatureK: 3000 }).validTemperatureK.max).toBe(
+      3000,
+    );
     expect(idealGasFromMolecule("water").validTemperatureK.min).toBe(201);
   });
 });
@@ -132,10 +135,33 @@ describe("bad temperatures", () => {
     });
   }
 
-  it("refuses temperatures outside the model range with OutOfRangeError naming the range", () => {
-    expect(() => gas.cp(49)).toThrow(OutOfRangeError);
-    expect(() => gas.cp(3001)).toThrow(/50 K to 3000 K/);
+  it("shares the range policy of the correlation route: 10 % extrapolation, then OutOfRangeError", () => {
+    // Inside the margin the same formulas are used (the mixture layer adds the warning).
+    expect(gas.cp(46)).toBeGreaterThan(0);
+    expect(gas.cp(1640)).toBeGreaterThan(0);
+    expect(() => gas.cp(44)).toThrow(OutOfRangeError);
+    expect(() => gas.cp(1651)).toThrow(/50 K to 1500 K/);
     expect(() => idealGasFromMolecule("water").entropyStandard(150)).toThrow(/201 K/);
     expect(() => idealGasFromMolecule("hydrogen").cp(20)).not.toThrow();
+    const strict = idealGasFromMolecule("nitrogen", { extrapolationMargin: 0 });
+    expect(() => strict.cp(49)).toThrow(OutOfRangeError);
+    expect(() => strict.cp(1501)).toThrow(OutOfRangeError);
+    const wide = idealGasFromMolecule("nitrogen", {
+      maxTemperatureK: 3000,
+      extrapolationMargin: 0,
+    });
+    expect(wide.cp(3000)).toBeGreaterThan(0);
+    expect(() => wide.cp(3001)).toThrow(OutOfRangeError);
+    for (const bad of [3001, 299, NaN, Infinity]) {
+      expect(() => idealGasFromMolecule("nitrogen", { maxTemperatureK: bad })).toThrow(
+        /maxTemperatureK/,
+      );
+    }
+    expect(() => idealGasFromMolecule("nitrogen", { extrapolationMargin: -0.1 })).toThrow(
+      /extrapolationMargin/,
+    );
+    expect(() => idealGasFromMolecule("nitrogen", { extrapolationMargin: NaN })).toThrow(
+      OutOfRangeError,
+    );
   });
 });
