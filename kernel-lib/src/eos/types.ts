@@ -45,6 +45,15 @@ export interface ModelInfo {
   readonly componentIds: readonly string[];
 }
 
+/** A (pseudo-)critical point used for phase labels: K, Pa, mol/m3. */
+export interface PseudoCriticalPoint {
+  readonly temperatureK: number;
+  readonly pressurePa: number;
+  readonly densityMolPerM3: number;
+  /** How it was obtained, e.g. "critical point of the equation" or "Kay's rule". */
+  readonly rule: string;
+}
+
 export interface ResidualModel {
   readonly info: ModelInfo;
   /**
@@ -69,6 +78,12 @@ export interface ResidualModel {
    * When absent the engine searches for roots numerically.
    */
   densityRoots?(temperatureK: number, pressurePa: number, x: readonly number[]): number[];
+  /**
+   * Optional (added by the engine issue, additive): the model's own critical point for a pure fluid
+   * (exact for the cubics), or a pseudo-critical estimate for a mixture (a stated mixing rule). The
+   * state layer uses it only to label phases ("vapor", "liquid", "supercritical").
+   */
+  pseudoCritical?(x: readonly number[]): PseudoCriticalPoint;
   /** Optional: warnings for a state outside the model's validity range (empty when inside). */
   checkValidity?(
     temperatureK: number,

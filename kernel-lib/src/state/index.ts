@@ -1,2 +1,28 @@
-// Public exports of state/ (filled by the area as it lands).
-export {};
+// Public exports of state/: properties, states at (T, rho) and (T, P), inversions, fluids.
+export {
+  assembleState,
+  residualProperties,
+  residualGibbsTP,
+  pressureFromResidual,
+  dPdRho,
+} from "./properties.js";
+export type { StateInputs, ResidualSets } from "./properties.js";
+export { stateAtTP, stateAtTRho, densityRootsAtTP } from "./stateAt.js";
+export type { StateAtTPOptions, DensityRoot } from "./stateAt.js";
+export { findDensityRoots } from "./findDensityRoots.js";
+export type { DensityRootOptions } from "./findDensityRoots.js";
+export { phaseLabel } from "./phaseLabel.js";
+export { temperatureAtPH, temperatureAtPS } from "./inversions.js";
+export type { InversionOptions, InversionResult } from "./inversions.js";
+export type {
+  FluidBinding,
+  FluidState,
+  PhaseLabel,
+  PhaseRequest,
+  EnergySet,
+  PropertySet,
+  DepartureMethod,
+} from "./types.js";
+// The fluid object (fluid/) binds model, ideal gas and reference state over these functions.
+export { defineFluid } from "../fluid/defineFluid.js";
+export type { Fluid, FluidSpec, ConstantOverrides } from "../fluid/defineFluid.js";

@@ -1,0 +1,366 @@
+/**
+ * One implementation for every two-parameter cubic equation of state (see cubicFamilies.ts), with
+ * van der Waals one-fluid mixing,
+ *   a = sum_i sum_j x_i x_j sqrt(a_i a_j) (1 - k_ij),   b = sum_i x_i b_i,
+ * and its residual Helmholtz energy in closed form. With eps = b rho, D_k = 1 + delta_k eps and
+ * F(T) = a(T) / (b R T):
+ *   alpha_r = -ln(1 - eps) - F I(eps),
+ *   I(eps)  = ln(D_1 / D_2) / (delta1 - delta2)   (delta1 != delta2),   eps / (1 + delta eps) otherwise,
+ *   I'      = 1 / (D_1 D_2),   I'' = -(delta1/D_1 + delta2/D_2) I',
+ *   I'''    = [(delta1/D_1 + delta2/D_2)^2 + delta1^2/D_1^2 + delta2^2/D_2^2] I'.
+ * (The integral of (Z - 1)/rho from zero density; e.g. Michelsen & Mollerup, Thermodynamic Models,
+ * 2nd ed. 2007, chapter 3.) The composition derivative at constant T, V:
+ *   d(n alpha_r)/dn_i = -ln(1-eps) + (b_i/b) eps/(1-eps)
+ *                       - F [ (2 sum_j x_j a_ij / a - b_i/b) I + (b_i/b) eps I' ],
+ * which reduces to alpha_r + aD for a pure fluid. Pressure roots come from the cubic in Z,
+ *   Z^3 - (1 + B - uB) Z^2 + (A + wB^2 - uB - uB^2) Z - (AB + wB^2 + wB^3) = 0,
+ * u = delta1 + delta2, w = delta1 delta2, A = aP/(RT)^2, B = bP/(RT), keeping roots with Z > B.
+ */
+import { R } from "../../constants.js";
+import { OutOfRangeError, type ResultWarning } from "../../errors.js";
+import { realCubicRoots } from "../../numerics/cubicRoots.js";
+import { HyperDual } from "../../numerics/hyperDual.js";
+import type { ModelWithPressure } from "../pressureFunction.js";
+import type {
+  ModelInfo,
+  PseudoCriticalPoint,
+  ResidualDerivatives,
+  ResidualModel,
+  ResidualRequest,
+} from "../types.js";
+import { checkModelComponents, type ModelComponent } from "../modelComponent.js";
+import { resolveInteractions, type InteractionMatrix } from "../interaction/interactionTable.js";
+import { alphaSlope, evaluatePsi, type PsiValues } from "./alphaFunctions.js";
+import { CUBIC_FAMILIES, type CubicFamily, type CubicModelId } from "./cubicFamilies.js";
+
+/** Options of {@link createCubicModel}. */
+export interface CubicModelOptions {
+  /**
+   * Binary interaction matrix k_ij (N x N, symmetric, zero diagonal). Default: the values of
+   * eos/data/kij.json for this equation family, zero for pairs not listed (and reported in
+   * `interactions.defaultedPairs`).
+   */
+  kij?: readonly (readonly number[])[];
+}
+
+/** Mixture parameters at one (T, x): a (Pa m6/mol2), its T-derivatives, b (m3/mol). */
+export interface CubicMixtureParameters {
+  a: number;
+  /** da/dT, Pa m6/(mol2 K) */
+  aT: number;
+  /** d2a/dT2 */
+  aTT: number;
+  /** m3/mol */
+  b: number;
+}
+
+/** A cubic equation of state bound to its components: a ResidualModel plus its parameters. */
+export interface CubicModel extends ModelWithPressure {
+  readonly family: CubicFamily;
+  readonly components: readonly ModelComponent[];
+  /** The k_ij used, with the source of every pair. */
+  readonly interactions: InteractionMatrix;
+  /** Mixture a, da/dT, d2a/dT2 and b at (T, x) (a fresh object). */
+  mixtureParameters(temperatureK: number, x: readonly number[]): CubicMixtureParameters;
+}
+
+class CubicModelImpl implements CubicModel {
+  readonly info: ModelInfo;
+  readonly family: CubicFamily;
+  readonly components: readonly ModelComponent[];
+  readonly interactions: InteractionMatrix;
+  private readonly n: number;
+  private readonly sqrtAc: Float64Array;
+  private readonly bi: Float64Array;
+  private readonly slope: Float64Array;
+  private readonly tc: Float64Array;
+  private readonly oneMinusK: Float64Array;
+  private readonly delta1: number;
+  private readonly delta2: number;
+  // cache of the mixture at the last (T, x)
+  private cacheT = NaN;
+  private readonly cacheX: Float64Array;
+  private readonly psi: Float64Array;
+  private readonly dPsi: Float64Array;
+  private readonly d2Psi: Float64Array;
+  /** sum_j x_j a_ij at the cached state. */
+  private readonly sumA: Float64Array;
+  private mixA = NaN;
+  private mixAT = NaN;
+  private mixATT = NaN;
+  private mixB = NaN;
+  private readonly psiScratch: PsiValues = { psi: 0, dPsi: 0, d2Psi: 0 };
+
+  constructor(
+    family: CubicFamily,
+    components: readonly ModelComponent[],
+    options: CubicModelOptions,
+  ) {
+    checkModelComponents(components);
+    this.family = family;
+    this.components = components;
+    const n = components.length;
+    this.n = n;
+    const ids = components.map((c) => c.id);
+    this.info = { id: family.id, name: family.name, citation: family.citation, componentIds: ids };
+    this.interactions = resolveInteractions(ids, family.interactionFamily, options.kij);
+    this.sqrtAc = new Float64Array(n);
+    this.bi = new Float64Array(n);
+    this.slope = new Float64Array(n);
+    this.tc = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      const c = components[i];
+      const Tc = c.criticalTemperatureK;
+      const Pc = c.criticalPressurePa;
+      this.sqrtAc[i] = Math.sqrt((family.omegaA * R * R * Tc * Tc) / Pc);
+      this.bi[i] = (family.omegaB * R * Tc) / Pc;
+      this.slope[i] = alphaSlope(family.alpha, c.acentricFactor);
+      this.tc[i] = Tc;
+    }
+    this.oneMinusK = new Float64Array(n * n);
+    for (let i = 0; i < n; i++) {
+      for (let j = 0; j < n; j++) this.oneMinusK[i * n + j] = 1 - this.interactions.kij[i][j];
+    }
+    this.delta1 = family.delta1;
+    this.delta2 = family.delta2;
+    this.cacheX = new Float64Array(n);
+    this.psi = new Float64Array(n);
+    this.dPsi = new Float64Array(n);
+    this.d2Psi = new Float64Array(n);
+    this.sumA = new Float64Array(n);
+  }
+
+  /** Fills the cache for (T, x) unless it already holds it. */
+  private update(T: number, x: readonly number[]): void {
+    const n = this.n;
+    let same = T === this.cacheT;
+    if (same) {
+      for (let i = 0; i < n; i++) {
+        if (x[i] !== this.cacheX[i]) {
+          same = false;
+          break;
+        }
+      }
+    }
+    if (same) return;
+    const kind = this.family.alpha;
+    const out = this.psiScratch;
+    for (let i = 0; i < n; i++) {
+      evaluatePsi(kind, this.slope[i], T, this.tc[i], out);
+      const s = this.sqrtAc[i];
+      this.psi[i] = s * out.psi;
+      this.dPsi[i] = s * out.dPsi;
+      this.d2Psi[i] = s * out.d2Psi;
+      this.cacheX[i] = x[i];
+    }
+    let a = 0;
+    let aT = 0;
+    let aTT = 0;
+    let b = 0;
+    for (let i = 0; i < n; i++) {
+      const xi = x[i];
+      b += xi * this.bi[i];
+      let sA = 0;
+      let sT = 0;
+      const row = i * n;
+      for (let j = 0; j < n; j++) {
+        const w = x[j] * this.oneMinusK[row + j];
+        sA += w * this.psi[j];
+        sT += w * this.dPsi[j];
+      }
+      // a_ij = s_i s_j (1-k_ij), s = sqrt(a_c) psi
+      this.sumA[i] = this.psi[i] * sA;
+      a += xi * this.psi[i] * sA;
+      aT += 2 * xi * this.dPsi[i] * sA;
+      aTT += 2 * xi * (this.d2Psi[i] * sA + this.dPsi[i] * sT);
+    }
+    this.mixA = a;
+    this.mixAT = aT;
+    this.mixATT = aTT;
+    this.mixB = b;
+    this.cacheT = T;
+  }
+
+  /**
+   * P(T, rho, x) written directly from the equation with hyper-dual arithmetic (independent of the
+   * closed-form alpha_r above; the numeric departure route integrates it).
+   */
+  readonly pressureFunction = (T: HyperDual, rho: HyperDual, x: readonly number[]): HyperDual => {
+    const n = this.n;
+    const s: HyperDual[] = [];
+    for (let i = 0; i < n; i++) {
+      const tr = T.div(this.tc[i]);
+      let psi: HyperDual;
+      if (this.family.alpha === "constant") psi = HyperDual.constant(1);
+      else if (this.family.alpha === "redlich-kwong") psi = tr.pow(-0.25);
+      else psi = tr.sqrt().neg().add(1).mul(this.slope[i]).add(1);
+      s.push(psi.mul(this.sqrtAc[i]));
+    }
+    let a = HyperDual.constant(0);
+    let b = 0;
+    for (let i = 0; i < n; i++) {
+      let row = HyperDual.constant(0);
+      for (let j = 0; j < n; j++) row = row.add(s[j].mul(x[j] * this.oneMinusK[i * n + j]));
+      a = a.add(s[i].mul(row).mul(x[i]));
+      b += x[i] * this.bi[i];
+    }
+    const repulsive = rho.mul(R).mul(T).div(rho.mul(-b).add(1));
+    const d1 = rho.mul(this.delta1 * b).add(1);
+    const d2 = rho.mul(this.delta2 * b).add(1);
+    return repulsive.sub(a.mul(rho).mul(rho).div(d1.mul(d2)));
+  };
+
+  mixtureParameters(temperatureK: number, x: readonly number[]): CubicMixtureParameters {
+    this.update(temperatureK, x);
+    return { a: this.mixA, aT: this.mixAT, aTT: this.mixATT, b: this.mixB };
+  }
+
+  residual(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+    request?: ResidualRequest,
+  ): ResidualDerivatives {
+    const T = temperatureK;
+    this.update(T, x);
+    const a = this.mixA;
+    const b = this.mixB;
+    const eps = b * densityMolPerM3;
+    if (!(eps < 1)) {
+      throw new OutOfRangeError({
+        input: "densityMolPerM3",
+        unit: "mol/m3",
+        validRange: `below the close-packing limit 1/b = ${1 / b} mol/m3 of ${this.info.name}`,
+        received: densityMolPerM3,
+      });
+    }
+    const d1 = this.delta1;
+    const d2 = this.delta2;
+    const D1 = 1 + d1 * eps;
+    const D2 = 1 + d2 * eps;
+    const I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
+    const I1 = 1 / (D1 * D2);
+    const g1 = d1 / D1 + d2 / D2;
+    const I2 = -g1 * I1;
+    const I3 = (g1 * g1 + (d1 * d1) / (D1 * D1) + (d2 * d2) / (D2 * D2)) * I1;
+    const bRT = b * R * T;
+    const F = a / bRT;
+    const TF = (T * this.mixAT - a) / bRT;
+    const TTF = (T * T * this.mixATT - 2 * T * this.mixAT + 2 * a) / bRT;
+    const oneMinusEps = 1 - eps;
+    const logTerm = -Math.log1p(-eps);
+    const q = eps / oneMinusEps;
+    const alphaR = logTerm - F * I;
+    const result: {
+      a: number;
+      aD: number;
+      aDD: number;
+      aT: number;
+      aTT: number;
+      aDT: number;
+      aDDD: number;
+      dnA?: number[];
+    } = {
+      a: alphaR,
+      aD: q - F * eps * I1,
+      aDD: q * q - F * eps * eps * I2,
+      aT: -TF * I,
+      aTT: -TTF * I,
+      aDT: -TF * eps * I1,
+      aDDD: 2 * q * q * q - F * eps * eps * eps * I3,
+    };
+    if (request?.composition) {
+      const n = this.n;
+      const dnA = new Array<number>(n);
+      for (let i = 0; i < n; i++) {
+        const bRatio = this.bi[i] / b;
+        dnA[i] =
+          logTerm + bRatio * q - F * ((2 * this.sumA[i]) / a - bRatio) * I - F * bRatio * eps * I1;
+      }
+      result.dnA = dnA;
+    }
+    return result;
+  }
+
+  maxDensity(temperatureK: number, x: readonly number[]): number {
+    this.update(temperatureK, x);
+    return 1 / this.mixB;
+  }
+
+  densityRoots(temperatureK: number, pressurePa: number, x: readonly number[]): number[] {
+    const T = temperatureK;
+    this.update(T, x);
+    const RT = R * T;
+    const A = (this.mixA * pressurePa) / (RT * RT);
+    const B = (this.mixB * pressurePa) / RT;
+    const u = this.delta1 + this.delta2;
+    const w = this.delta1 * this.delta2;
+    const { roots } = realCubicRoots(
+      1,
+      -(1 + B - u * B),
+      A + w * B * B - u * B - u * B * B,
+      -(A * B + w * B * B + w * B * B * B),
+    );
+    const out: number[] = [];
+    // ascending Z means descending density; return densities ascending
+    for (let k = roots.length - 1; k >= 0; k--) {
+      const Z = roots[k];
+      if (Z > B) {
+        const rho = pressurePa / (Z * RT);
+        if (out.length === 0 || rho !== out[out.length - 1]) out.push(rho);
+      }
+    }
+    return out;
+  }
+
+  pseudoCritical(x: readonly number[]): PseudoCriticalPoint {
+    let Tc = 0;
+    let Pc = 0;
+    for (let i = 0; i < this.n; i++) {
+      Tc += x[i] * this.components[i].criticalTemperatureK;
+      Pc += x[i] * this.components[i].criticalPressurePa;
+    }
+    return {
+      temperatureK: Tc,
+      pressurePa: Pc,
+      densityMolPerM3: Pc / (this.family.criticalZ * R * Tc),
+      rule:
+        this.n === 1
+          ? "critical point of the equation (Tc, Pc of the component, Zc of the equation)"
+          : "Kay's rule (mole-fraction averages of Tc and Pc) with Zc of the equation",
+    };
+  }
+
+  checkValidity(temperatureK: number, _rho: number, _x: readonly number[]): ResultWarning[] {
+    const warnings: ResultWarning[] = [];
+    const kind = this.family.alpha;
+    if (kind === "constant" || kind === "redlich-kwong") return warnings;
+    for (let i = 0; i < this.n; i++) {
+      evaluatePsi(kind, this.slope[i], temperatureK, this.tc[i], this.psiScratch);
+      if (!(this.psiScratch.psi > 0)) {
+        warnings.push({
+          code: "model-limitation",
+          message: `${this.components[i].id}: the Soave-type alpha function passes its minimum at T = ${temperatureK} K (Tr = ${(temperatureK / this.tc[i]).toFixed(2)}); a(T) rises again with T there, which is unphysical`,
+        });
+      }
+    }
+    return warnings;
+  }
+}
+
+/**
+ * Builds a cubic equation of state for these components.
+ *
+ * @example
+ * ```ts
+ * const pr = createCubicModel("peng-robinson", [getComponent("methane")]);
+ * pr.residual(300, 1000, [1]).aD; // Z - 1 at 300 K and 1000 mol/m3
+ * ```
+ */
+export function createCubicModel(
+  id: CubicModelId,
+  components: readonly ModelComponent[],
+  options: CubicModelOptions = {},
+): CubicModel {
+  return new CubicModelImpl(CUBIC_FAMILIES[id], components, options);
+}

@@ -1,0 +1,246 @@
+/**
+ * A fluid: components, model, interaction parameters, ideal-gas route and reference state bound
+ * together, with the state functions as methods. The entry point notebooks and `isochor eval` use.
+ *
+ *   const gas = defineFluid({ components: ["hydrogen", "methane"], model: "peng-robinson" });
+ *   gas.stateAtTP(310, 25e5, [0.7, 0.3]).molar.h;
+ */
+import { InputError } from "../errors.js";
+import type { Component } from "../components/types.js";
+import { getComponent } from "../components/getComponent.js";
+import type { IdealGasMixture, IdealGasPure, ReferenceState } from "../idealgas/types.js";
+import { idealGasFromCorrelation } from "../idealgas/correlationPure.js";
+import { idealGasMixture } from "../idealgas/mixture.js";
+import { idealGasFromMolecule } from "../idealgas/molecular/index.js";
+import type { ResidualModel } from "../eos/types.js";
+import { createModel, type ModelId } from "../eos/createModel.js";
+import { hasPressureFunction } from "../eos/pressureFunction.js";
+import type { InteractionNote } from "../eos/interaction/interactionTable.js";
+import { modelFromPressure } from "../departure/pressureModel.js";
+import type { IntegrationOptions } from "../departure/integrateIsotherm.js";
+import {
+  stateAtTP,
+  stateAtTRho,
+  densityRootsAtTP,
+  type DensityRoot,
+  type StateAtTPOptions,
+} from "../state/stateAt.js";
+import {
+  temperatureAtPH,
+  temperatureAtPS,
+  type InversionOptions,
+  type InversionResult,
+} from "../state/inversions.js";
+import type { DepartureMethod, FluidBinding, FluidState } from "../state/types.js";
+
+/** Per-component overrides of the table's constants (SI). */
+export interface ConstantOverrides {
+  /** K */
+  criticalTemperatureK?: number;
+  /** Pa */
+  criticalPressurePa?: number;
+  acentricFactor?: number;
+  /** kg/mol */
+  molarMassKgPerMol?: number;
+  /** m3/mol */
+  criticalVolumeM3PerMol?: number;
+}
+
+/** Options of {@link defineFluid}. */
+export interface FluidSpec {
+  /** Component ids (or names the component table knows), or Component records. */
+  components: readonly (string | Component)[];
+  /** A built-in model id, or any ResidualModel (e.g. from modelFromPressure). Default "peng-robinson". */
+  model?: ModelId | ResidualModel;
+  /** Binary interaction matrix k_ij. Default: eos/data/kij.json, zero where unknown. */
+  kij?: readonly (readonly number[])[];
+  /** Overrides of the table constants, one entry (or undefined) per component. */
+  constants?: readonly (ConstantOverrides | undefined)[];
+  /** Ideal-gas route: "correlation" (default), "molecular", or your own IdealGasMixture. */
+  idealGas?: "correlation" | "molecular" | IdealGasMixture;
+  /** Zero of h and s. Default: the formation basis. */
+  referenceState?: ReferenceState;
+  /**
+   * "closed-form" (default) uses the model's own alpha_r; "numeric" integrates the model's pressure
+   * function along the isotherm (departure/), to check one against the other.
+   */
+  departure?: DepartureMethod;
+  /** Volume translation for built-in cubic models (see eos/volumeTranslation.ts). */
+  volumeTranslation?: "peneloux" | readonly number[];
+  /** Quadrature options of the numeric route. */
+  integration?: Omit<IntegrationOptions, "composition" | "maxDensityMolPerM3">;
+}
+
+/** A bound fluid with its state functions. */
+export interface Fluid extends FluidBinding {
+  readonly components: readonly Component[];
+  readonly componentIds: readonly string[];
+  /** k_ij provenance (built-in models with mixing rules; empty otherwise). */
+  readonly interactionNotes: readonly InteractionNote[];
+  /** Pairs whose k_ij was defaulted to zero, e.g. "hydrogen/methane". */
+  readonly defaultedPairs: readonly string[];
+  /** State at T (K), P (Pa); x may be omitted for a pure fluid. */
+  stateAtTP(
+    temperatureK: number,
+    pressurePa: number,
+    x?: readonly number[],
+    options?: StateAtTPOptions,
+  ): FluidState;
+  /** State at T (K), rho (mol/m3). */
+  stateAtTRho(temperatureK: number, densityMolPerM3: number, x?: readonly number[]): FluidState;
+  /** Every density root at (T, P). */
+  densityRoots(temperatureK: number, pressurePa: number, x?: readonly number[]): DensityRoot[];
+  /** T at (P, h) in one phase (valves). */
+  temperatureAtPH(
+    pressurePa: number,
+    enthalpyJPerMol: number,
+    x?: readonly number[],
+    options?: InversionOptions,
+  ): InversionResult;
+  /** T at (P, s) in one phase (compressors, expanders). */
+  temperatureAtPS(
+    pressurePa: number,
+    entropyJPerMolK: number,
+    x?: readonly number[],
+    options?: InversionOptions,
+  ): InversionResult;
+}
+
+function resolveComponents(spec: FluidSpec): Component[] {
+  if (!(Array.isArray(spec.components) && spec.components.length > 0)) {
+    throw new InputError({
+      input: "components",
+      unit: "-",
+      validRange: "a non-empty list of component ids or records",
+      received: spec.components,
+    });
+  }
+  return spec.components.map((c, i) => {
+    const base = typeof c === "string" ? getComponent(c) : c;
+    const o = spec.constants?.[i];
+    if (!o) return base;
+    return {
+      ...base,
+      criticalTemperatureK: o.criticalTemperatureK ?? base.criticalTemperatureK,
+      criticalPressurePa: o.criticalPressurePa ?? base.criticalPressurePa,
+      acentricFactor: o.acentricFactor ?? base.acentricFactor,
+      molarMassKgPerMol: o.molarMassKgPerMol ?? base.molarMassKgPerMol,
+      criticalVolumeM3PerMol: o.criticalVolumeM3PerMol ?? base.criticalVolumeM3PerMol,
+    };
+  });
+}
+
+function bindMethods(model: ResidualModel): ResidualModel {
+  // class-based models use `this`; copy their methods bound so spreading keeps them working
+  const m = model as unknown as Record<string, unknown>;
+  const out: Record<string, unknown> = {};
+  for (const key of ["residual", "maxDensity", "densityRoots", "pseudoCritical", "checkValidity"]) {
+    const f = m[key];
+    if (typeof f === "function") out[key] = (f as (...a: unknown[]) => unknown).bind(model);
+  }
+  return out as unknown as ResidualModel;
+}
+
+/**
+ * Binds components, model, k_ij, ideal-gas route and reference state into a fluid.
+ *
+ * @example
+ * ```ts
+ * const fuelGas = defineFluid({ components: ["hydrogen", "methane", "ethane"], model: "peng-robinson" });
+ * const s = fuelGas.stateAtTP(313.15, 25e5, [0.6, 0.3, 0.1]);
+ * s.residual.h; // J/mol, enthalpy departure at the same T and P
+ * ```
+ */
+export function defineFluid(spec: FluidSpec): Fluid {
+  const components = resolveComponents(spec);
+  const ids = components.map((c) => c.id);
+  const modelSpec = spec.model ?? "peng-robinson";
+  let model: ResidualModel =
+    typeof modelSpec === "string"
+      ? createModel(modelSpec, components, {
+          kij: spec.kij,
+          volumeTranslation: spec.volumeTranslation,
+        })
+      : modelSpec;
+  const departureMethod: DepartureMethod = spec.departure ?? "closed-form";
+  if (departureMethod === "numeric") {
+    if (!hasPressureFunction(model)) {
+      throw new InputError({
+        input: "departure",
+        unit: "-",
+        validRange: `"closed-form" for a model without a hyper-dual pressure function (${model.info.name})`,
+        received: "numeric",
+      });
+    }
+    const base = model;
+    const bound = bindMethods(base);
+    const numeric = modelFromPressure({
+      name: `${base.info.name}, departures by numerical integration`,
+      components: ids,
+      pressure: base.pressureFunction,
+      maxDensity: (T, x) => bound.maxDensity(T, x),
+      citation: base.info.citation,
+      gasConstant: base.gasConstant,
+      integration: spec.integration,
+    });
+    model = {
+      ...numeric,
+      info: { ...base.info, name: numeric.info.name, citation: numeric.info.citation },
+      densityRoots: bound.densityRoots,
+      pseudoCritical: bound.pseudoCritical,
+      checkValidity: (T, rho, x) => [
+        ...(bound.checkValidity ? bound.checkValidity(T, rho, x) : []),
+        ...numeric.checkValidity!(T, rho, x),
+      ],
+    };
+  }
+  if (model.info.componentIds.length !== components.length) {
+    throw new InputError({
+      input: "model",
+      unit: "-",
+      validRange: `a model for ${components.length} components (${ids.join(", ")})`,
+      received: model.info.componentIds,
+    });
+  }
+  let idealGas: IdealGasMixture;
+  const route = spec.idealGas ?? "correlation";
+  if (route === "correlation" || route === "molecular") {
+    const pures: IdealGasPure[] = components.map((c) =>
+      route === "correlation" ? idealGasFromCorrelation(c) : idealGasFromMolecule(c.id),
+    );
+    idealGas = idealGasMixture(pures, { referenceState: spec.referenceState, components });
+  } else {
+    idealGas = route;
+  }
+  const interactions = (
+    model as { interactions?: { notes: InteractionNote[]; defaultedPairs: string[] } }
+  ).interactions;
+  const binding: FluidBinding = {
+    model,
+    idealGas,
+    molarMassesKgPerMol: components.map((c) => c.molarMassKgPerMol),
+    departureMethod,
+  };
+  const xOf = (x: readonly number[] | undefined): readonly number[] => {
+    if (x !== undefined) return x;
+    if (components.length === 1) return [1];
+    throw new InputError({
+      input: "x",
+      unit: "mol/mol",
+      validRange: `${components.length} mole fractions (required for a mixture)`,
+      received: x,
+    });
+  };
+  return {
+    ...binding,
+    components,
+    componentIds: ids,
+    interactionNotes: interactions?.notes ?? [],
+    defaultedPairs: interactions?.defaultedPairs ?? [],
+    stateAtTP: (T, P, x, options) => stateAtTP(binding, T, P, xOf(x), options),
+    stateAtTRho: (T, rho, x) => stateAtTRho(binding, T, rho, xOf(x)),
+    densityRoots: (T, P, x) => densityRootsAtTP(binding, T, P, xOf(x)),
+    temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),
+    temperatureAtPS: (P, s, x, options) => temperatureAtPS(binding, P, s, xOf(x), options),
+  };
+}

@@ -1,0 +1,23 @@
+/** Input checks shared by every state entry point (T, P, rho, x), so each error reads the same. */
+import { requirePositive } from "../validate.js";
+import { checkMoleFractions } from "../components/composition.js";
+
+/** Requires T > 0 (finite), K. */
+export function checkTemperature(temperatureK: number, input = "temperatureK"): void {
+  requirePositive(input, temperatureK, "K");
+}
+
+/** Requires P > 0 (finite), Pa. */
+export function checkPressure(pressurePa: number, input = "pressurePa"): void {
+  requirePositive(input, pressurePa, "Pa");
+}
+
+/** Requires rho > 0 (finite), mol/m3. */
+export function checkDensity(densityMolPerM3: number, input = "densityMolPerM3"): void {
+  requirePositive(input, densityMolPerM3, "mol/m3");
+}
+
+/** Mole fractions: one per component, each in [0, 1], summing to 1 within 1e-9. */
+export function checkComposition(x: readonly number[], componentCount: number, input = "x"): void {
+  checkMoleFractions(x, componentCount, { input });
+}

@@ -1,0 +1,203 @@
+/**
+ * Every property of a state from the residual Helmholtz derivatives plus the ideal-gas part: the
+ * ONE place where property formulas live. With a = alpha_r and reduced derivatives aD, aDD, aT,
+ * aTT, aDT (eos/types.ts), and the relations of e.g. Span, Multiparameter Equations of State
+ * (Springer 2000), Table 3.3, or Michelsen & Mollerup, Thermodynamic Models, 2nd ed. (2007), ch. 2:
+ *   Z = 1 + aD,  P = rho R T Z
+ *   same T and density ("TV"):  a_r/RT = a,  u_r/RT = -aT,  h_r/RT = aD - aT,
+ *                               s_r/R = -a - aT,  g_r/RT = a + aD
+ *   same T and P ("TP"): h, u unchanged; s_r += R ln Z; a_r, g_r -= R T ln Z
+ *   cv = cv0 - R (2 aT + aTT)
+ *   (dP/drho)_T = R T (1 + 2 aD + aDD),   (dP/dT)_rho = rho R (1 + aD + aDT)
+ *   cp = cv + T (dP/dT)^2 / (rho^2 (dP/drho)),   w^2 = (cp/cv) (dP/drho) / M
+ *   kappa_T = 1 / (rho dP/drho),  beta = kappa_T dP/dT,  mu_JT = (T beta - 1) / (rho cp),
+ *   isentropic exponent k = (cp/cv) (rho / P) (dP/drho)
+ *   ln phi_i = d(n alpha_r)/dn_i - ln Z
+ * Absolute values add the ideal gas at the same T and DENSITY (ideal-gas pressure rho R T, mixing
+ * included) plus the "TV" residuals; this equals ideal gas at (T, P) plus the "TP" residuals, and it
+ * stays defined where P <= 0 (a stretched liquid) or Z <= 0, where ln Z does not exist. There the
+ * TP residuals and ln phi are NaN and a warning says why.
+ */
+import { R as R_CODATA } from "../constants.js";
+import type { ResultWarning } from "../errors.js";
+import type { ResidualDerivatives } from "../eos/types.js";
+import type { IdealGasProperties } from "../idealgas/types.js";
+import type { DepartureMethod, EnergySet, FluidState, PhaseLabel } from "./types.js";
+import type { ModelInfo } from "../eos/types.js";
+
+/** Everything {@link assembleState} needs; the caller has already found the density. */
+export interface StateInputs {
+  readonly temperatureK: number;
+  readonly densityMolPerM3: number;
+  readonly x: readonly number[];
+  /** Residual derivatives at (T, rho, x), with dnA. */
+  readonly residual: ResidualDerivatives;
+  /** Ideal-gas mixture properties at (T, rho R T, x): the ideal gas at the same T and density. */
+  readonly ideal: IdealGasProperties;
+  /** Mixture molar mass, kg/mol. */
+  readonly molarMassKgPerMol: number;
+  readonly phase: PhaseLabel;
+  readonly model: ModelInfo;
+  readonly departureMethod: DepartureMethod;
+  /** Gas constant of the model, J/(mol K); default CODATA. */
+  readonly gasConstant?: number;
+  /** Warnings gathered so far (copied). */
+  readonly warnings?: readonly ResultWarning[];
+}
+
+/** Pressure (Pa) of a state from its residual derivative aD: P = rho R T (1 + aD). */
+export function pressureFromResidual(
+  temperatureK: number,
+  densityMolPerM3: number,
+  aD: number,
+  gasConstant: number = R_CODATA,
+): number {
+  return densityMolPerM3 * gasConstant * temperatureK * (1 + aD);
+}
+
+/**
+ * Residual Gibbs energy over RT at the same T and P, g_r/RT = a + aD - ln Z: the quantity that
+ * decides which density root is stable at a given (T, P).
+ */
+export function residualGibbsTP(residual: ResidualDerivatives): number {
+  const Z = 1 + residual.aD;
+  return residual.a + residual.aD - (Z > 0 ? Math.log(Z) : NaN);
+}
+
+/** (dP/drho)_T in Pa m3/mol from the derivatives: R T (1 + 2 aD + aDD). */
+export function dPdRho(
+  temperatureK: number,
+  residual: ResidualDerivatives,
+  gasConstant = R_CODATA,
+): number {
+  return gasConstant * temperatureK * (1 + 2 * residual.aD + residual.aDD);
+}
+
+/** Residual h, s, u, a, g in both conventions, J/mol and J/(mol K), with ln Z and ln phi. */
+export interface ResidualSets {
+  /** Relative to the ideal gas at the same T and density. */
+  readonly TV: EnergySet;
+  /** Relative to the ideal gas at the same T and pressure (NaN where Z <= 0). */
+  readonly TP: EnergySet;
+  readonly lnZ: number;
+  /** ln phi_i = dnA_i - ln Z (empty when the derivatives carry no dnA). */
+  readonly lnPhi: number[];
+}
+
+/** The departure functions of a state from its residual derivatives (formulas in the header). */
+export function residualProperties(
+  temperatureK: number,
+  d: ResidualDerivatives,
+  gasConstant: number = R_CODATA,
+): ResidualSets {
+  const RT = gasConstant * temperatureK;
+  const Z = 1 + d.aD;
+  const lnZ = Z > 0 ? Math.log(Z) : NaN;
+  const a = RT * d.a;
+  const u = -RT * d.aT;
+  const s = -gasConstant * (d.a + d.aT);
+  const h = RT * (d.aD - d.aT);
+  const g = RT * (d.a + d.aD);
+  const lnPhi: number[] = [];
+  if (d.dnA) for (let i = 0; i < d.dnA.length; i++) lnPhi.push(d.dnA[i] - lnZ);
+  return {
+    TV: { h, s, u, a, g },
+    TP: { h, s: s + gasConstant * lnZ, u, a: a - RT * lnZ, g: RT * residualGibbsTP(d) },
+    lnZ,
+    lnPhi,
+  };
+}
+
+/** Builds the full state record (see the header for every formula). */
+export function assembleState(input: StateInputs): FluidState {
+  const Rg = input.gasConstant ?? R_CODATA;
+  const T = input.temperatureK;
+  const rho = input.densityMolPerM3;
+  const d = input.residual;
+  const ig = input.ideal;
+  const RT = Rg * T;
+  const Z = 1 + d.aD;
+  const P = rho * RT * Z;
+  const res = residualProperties(T, d, Rg);
+  const hRes = res.TV.h;
+  const uRes = res.TV.u;
+  const aTV = res.TV.a;
+  const sTV = res.TV.s;
+  const gTV = res.TV.g;
+  const sTP = res.TP.s;
+  const aTP = res.TP.a;
+  const gTP = res.TP.g;
+  // derivatives and heat capacities
+  const dPdr = dPdRho(T, d, Rg);
+  const dPdT = rho * Rg * (1 + d.aD + d.aDT);
+  const cvRes = -Rg * (2 * d.aT + d.aTT);
+  const cv = ig.cv + cvRes;
+  const cp = cv + (T * dPdT * dPdT) / (rho * rho * dPdr);
+  const M = input.molarMassKgPerMol;
+  const warnings: ResultWarning[] = input.warnings ? input.warnings.slice() : [];
+  const stable = dPdr > 0;
+  const w2 = ((cp / cv) * dPdr) / M;
+  const speed = stable && w2 > 0 ? Math.sqrt(w2) : NaN;
+  if (!stable) {
+    warnings.push({
+      code: "model-limitation",
+      message: `mechanically unstable state: (dP/drho)_T = ${dPdr.toPrecision(4)} Pa m3/mol <= 0 at T = ${T} K, rho = ${rho} mol/m3 (inside the spinodal); cp, speed of sound and compressibilities are not physical here (speed of sound reported as NaN)`,
+    });
+  }
+  const kappaT = 1 / (rho * dPdr);
+  const beta = kappaT * dPdT;
+  const jt = (T * beta - 1) / (rho * cp);
+  const kappaS = ((cp / cv) * rho * dPdr) / P;
+  if (!(Z > 0)) {
+    warnings.push({
+      code: "model-limitation",
+      message: `P = ${P.toPrecision(4)} Pa <= 0 at T = ${T} K, rho = ${rho} mol/m3: departures at the same T and P and fugacity coefficients do not exist there (NaN); absolute h, s, u, a, g are still defined`,
+    });
+  }
+  // absolute: ideal gas at the same T and density plus the TV residuals
+  const h = ig.h + hRes;
+  const s = ig.s + sTV;
+  const u = ig.u + uRes;
+  const a = ig.a + aTV;
+  const g = ig.g + gTV;
+  const lnPhi = res.lnPhi;
+  for (const wg of ig.warnings) warnings.push(wg);
+  return {
+    temperatureK: T,
+    pressurePa: P,
+    densityMolPerM3: rho,
+    densityKgPerM3: rho * M,
+    x: input.x.slice(),
+    Z,
+    phase: input.phase,
+    molar: { h, s, u, a, g, cp, cv },
+    mass: { h: h / M, s: s / M, u: u / M, a: a / M, g: g / M, cp: cp / M, cv: cv / M },
+    residual: { h: hRes, s: sTP, u: uRes, a: aTP, g: gTP, cp: cp - ig.cp, cv: cvRes },
+    residualTV: { h: hRes, s: sTV, u: uRes, a: aTV, g: gTV },
+    lnPhi,
+    speedOfSoundMPerS: speed,
+    jouleThomsonKPerPa: jt,
+    isothermalCompressibilityPerPa: kappaT,
+    thermalExpansionPerK: beta,
+    isentropicExponent: kappaS,
+    dPdTPaPerK: dPdT,
+    dPdRhoPaM3PerMol: dPdr,
+    molarMassKgPerMol: M,
+    model: input.model,
+    referenceState: ig.referenceState,
+    departureMethod: input.departureMethod,
+    warnings: dedupe(warnings),
+  };
+}
+
+function dedupe(ws: ResultWarning[]): ResultWarning[] {
+  if (ws.length < 2) return ws;
+  const seen = new Set<string>();
+  const out: ResultWarning[] = [];
+  for (const w of ws) {
+    if (seen.has(w.message)) continue;
+    seen.add(w.message);
+    out.push(w);
+  }
+  return out;
+}

@@ -1,0 +1,206 @@
+/**
+ * States at (T, rho) and at (T, P). At (T, P): every density root of the model (closed form when
+ * the model offers `densityRoots`, else a scan plus Brent, findDensityRoots.ts), mechanically
+ * unstable roots ((dP/drho)_T <= 0) discarded, then either the stable one (lowest Gibbs energy; at
+ * equal T and P the ideal parts are equal, so the lowest g_r/RT = a + aD - ln Z) or the requested
+ * phase. Properties come from state/properties.ts.
+ */
+import { R as R_CODATA } from "../constants.js";
+import { OutOfRangeError, PhaseUnavailableError } from "../errors.js";
+import type { ResidualDerivatives } from "../eos/types.js";
+import { assembleState, dPdRho, residualGibbsTP } from "./properties.js";
+import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
+import { findDensityRoots, type DensityRootOptions } from "./findDensityRoots.js";
+import { phaseLabel } from "./phaseLabel.js";
+import type { FluidBinding, FluidState, PhaseLabel, PhaseRequest } from "./types.js";
+
+/** Options of {@link stateAtTP}. */
+export interface StateAtTPOptions {
+  /** Which phase: "stable" (default), "liquid" (densest root) or "vapor" (lightest root). */
+  phase?: PhaseRequest;
+  /** Options of the numerical root search (models without closed-form roots). */
+  rootSearch?: DensityRootOptions;
+}
+
+/** One density root at (T, P) with what decides between roots. */
+export interface DensityRoot {
+  /** mol/m3 */
+  readonly densityMolPerM3: number;
+  /** Residual Gibbs energy over RT at the same T and P. */
+  readonly gibbsResidualOverRT: number;
+  /** (dP/drho)_T > 0. */
+  readonly mechanicallyStable: boolean;
+}
+
+function mixtureMolarMass(binding: FluidBinding, x: readonly number[]): number {
+  let m = 0;
+  for (let i = 0; i < x.length; i++) m += x[i] * binding.molarMassesKgPerMol[i];
+  return m;
+}
+
+function finish(
+  binding: FluidBinding,
+  T: number,
+  rho: number,
+  x: readonly number[],
+  residual: ResidualDerivatives,
+  phase: PhaseLabel,
+  extraWarnings: readonly {
+    code: "outside-validity" | "extrapolated" | "model-limitation" | "accuracy";
+    message: string;
+  }[],
+): FluidState {
+  const model = binding.model;
+  const Rg = model.gasConstant ?? R_CODATA;
+  const ideal = binding.idealGas.at(T, rho * Rg * T, x);
+  const warnings = model.checkValidity
+    ? model.checkValidity(T, rho, x).concat(extraWarnings)
+    : extraWarnings;
+  return assembleState({
+    temperatureK: T,
+    densityMolPerM3: rho,
+    x,
+    residual,
+    ideal,
+    molarMassKgPerMol: mixtureMolarMass(binding, x),
+    phase,
+    model: model.info,
+    departureMethod: binding.departureMethod ?? "closed-form",
+    gasConstant: model.gasConstant,
+    warnings,
+  });
+}
+
+/**
+ * The state at temperature T (K), molar density rho (mol/m3) and mole fractions x.
+ *
+ * @throws InputError for non-positive or NaN T, rho, or bad mole fractions.
+ * @throws OutOfRangeError when rho is at or above the model's close-packing limit.
+ */
+export function stateAtTRho(
+  binding: FluidBinding,
+  temperatureK: number,
+  densityMolPerM3: number,
+  x: readonly number[],
+): FluidState {
+  const model = binding.model;
+  checkTemperature(temperatureK);
+  checkDensity(densityMolPerM3);
+  checkComposition(x, model.info.componentIds.length);
+  const max = model.maxDensity(temperatureK, x);
+  if (!(densityMolPerM3 < max)) {
+    throw new OutOfRangeError({
+      input: "densityMolPerM3",
+      unit: "mol/m3",
+      validRange: `below the model's maximum density ${max.toPrecision(6)} mol/m3 (close packing of ${model.info.name} at ${temperatureK} K)`,
+      received: densityMolPerM3,
+    });
+  }
+  const residual = model.residual(temperatureK, densityMolPerM3, x, { composition: true });
+  const Rg = model.gasConstant ?? R_CODATA;
+  const Z = 1 + residual.aD;
+  const P = densityMolPerM3 * Rg * temperatureK * Z;
+  const phase = phaseLabel(model, temperatureK, P, densityMolPerM3, x, "only", Z);
+  return finish(binding, temperatureK, densityMolPerM3, x, residual, phase, []);
+}
+
+/**
+ * Every density root at (T, P), ascending, with its residual Gibbs energy and stability flag.
+ * Inputs are not re-checked here (the public entry points check them).
+ */
+export function densityRootsAtTP(
+  binding: FluidBinding,
+  temperatureK: number,
+  pressurePa: number,
+  x: readonly number[],
+  options: { rootSearch?: DensityRootOptions } = {},
+): DensityRoot[] {
+  const model = binding.model;
+  const rhos = model.densityRoots
+    ? model.densityRoots(temperatureK, pressurePa, x)
+    : findDensityRoots(model, temperatureK, pressurePa, x, options.rootSearch);
+  const out: DensityRoot[] = [];
+  for (const rho of rhos) {
+    const r = model.residual(temperatureK, rho, x);
+    out.push({
+      densityMolPerM3: rho,
+      gibbsResidualOverRT: residualGibbsTP(r),
+      mechanicallyStable: dPdRho(temperatureK, r, model.gasConstant) > 0,
+    });
+  }
+  return out;
+}
+
+/**
+ * The state at temperature T (K), pressure P (Pa) and mole fractions x, in the stable or the
+ * requested phase.
+ *
+ * @throws PhaseUnavailableError when the requested phase has no density root here (says why), or
+ *   when the model has no density root at all at (T, P).
+ * @example
+ * ```ts
+ * const s = stateAtTP(fluid, 300, 50e5, [1], { phase: "stable" });
+ * s.Z; s.molar.h; s.lnPhi[0];
+ * ```
+ */
+export function stateAtTP(
+  binding: FluidBinding,
+  temperatureK: number,
+  pressurePa: number,
+  x: readonly number[],
+  options: StateAtTPOptions = {},
+): FluidState {
+  const model = binding.model;
+  checkTemperature(temperatureK);
+  checkPressure(pressurePa);
+  checkComposition(x, model.info.componentIds.length);
+  const request = options.phase ?? "stable";
+  const all = densityRootsAtTP(binding, temperatureK, pressurePa, x, options);
+  const roots = all.filter((r) => r.mechanicallyStable);
+  if (roots.length === 0) {
+    throw new PhaseUnavailableError(
+      `${model.info.name} has no mechanically stable density root at T = ${temperatureK} K, P = ${pressurePa} Pa` +
+        (all.length > 0
+          ? ` (roots found: ${all.map((r) => r.densityMolPerM3.toPrecision(6)).join(", ")} mol/m3, all with dP/drho <= 0)`
+          : " (no root at all: the pressure is beyond what the equation can reach at this temperature)"),
+    );
+  }
+  let chosen: DensityRoot;
+  let position: "lowest" | "highest" | "only";
+  if (roots.length === 1) {
+    chosen = roots[0];
+    position = "only";
+  } else if (request === "vapor") {
+    chosen = roots[0];
+    position = "lowest";
+  } else if (request === "liquid") {
+    chosen = roots[roots.length - 1];
+    position = "highest";
+  } else {
+    chosen = roots[0];
+    for (const r of roots) if (r.gibbsResidualOverRT < chosen.gibbsResidualOverRT) chosen = r;
+    position =
+      chosen === roots[0] ? "lowest" : chosen === roots[roots.length - 1] ? "highest" : "only";
+  }
+  const residual = model.residual(temperatureK, chosen.densityMolPerM3, x, { composition: true });
+  const Z = 1 + residual.aD;
+  const label = phaseLabel(model, temperatureK, pressurePa, chosen.densityMolPerM3, x, position, Z);
+  const warnings: { code: "model-limitation"; message: string }[] = [];
+  if (
+    roots.length === 1 &&
+    request !== "stable" &&
+    label !== "supercritical" &&
+    label !== request
+  ) {
+    throw new PhaseUnavailableError(
+      `no ${request} root at T = ${temperatureK} K, P = ${pressurePa} Pa: ${model.info.name} has a single stable density root there (${chosen.densityMolPerM3.toPrecision(6)} mol/m3, Z = ${Z.toPrecision(5)}), and it is ${label}-like (rule: state/phaseLabel.ts)`,
+    );
+  }
+  if (roots.length === 1 && request !== "stable" && label === "supercritical") {
+    warnings.push({
+      code: "model-limitation",
+      message: `requested phase "${request}" at a supercritical state (T and P above the (pseudo-)critical point): the single root is returned, and vapor and liquid are not distinct there`,
+    });
+  }
+  return finish(binding, temperatureK, chosen.densityMolPerM3, x, residual, label, warnings);
+}
