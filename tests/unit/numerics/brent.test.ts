@@ -32,6 +32,11 @@ describe("findRootBrent", () => {
     expect(Math.abs(r.value - 1 / 3)).toBeLessThanOrEqual(r.errorEstimate * 2 + 1e-15);
   });
 
+  it("accepts the bracket in either order (closed form: root ln 3)", () => {
+    const r = findRootBrent((x) => Math.exp(x) - 3, 4, -1);
+    expect(Math.abs(r.value - Math.log(3))).toBeLessThanOrEqual(4 * Number.EPSILON);
+  });
+
   it("returns an end point that is already a root", () => {
     expect(findRootBrent((x) => x - 1, 1, 2)).toEqual({
       value: 1,

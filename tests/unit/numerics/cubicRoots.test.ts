@@ -180,4 +180,34 @@ describe("realCubicRoots", () => {
       { numRuns: 2000 },
     );
   });
+
+  it("keeps full relative accuracy for roots spanning many decades (property via Vieta's relations)", () => {
+    // Roots 1, 10^-u and +-10^-v (the Z-cubic shape at low pressure). Vieta (closed form): for
+    // the polynomial actually given, x1 x2 x3 = -c0 and x1 x2 + x1 x3 + x2 x3 = c1 (monic). A
+    // root with only absolute accuracy ~eps would spoil the product by a relative 10^(u - 16).
+    fc.assert(
+      fc.property(
+        fc.double({ min: 2, max: 12, noNaN: true }),
+        fc.double({ min: 2, max: 12, noNaN: true }),
+        fc.boolean(),
+        (u, v, negative) => {
+          const r1 = 1;
+          const r2 = 10 ** -u;
+          const r3 = (negative ? -1 : 1) * 10 ** -v;
+          if (Math.abs(r2 - r3) < 1e-3 * Math.abs(r2)) return; // near-double: other test
+          const c2 = -(r1 + r2 + r3);
+          const c1 = r1 * r2 + r1 * r3 + r2 * r3;
+          const c0 = -r1 * r2 * r3;
+          const res = realCubicRoots(1, c2, c1, c0);
+          expect(res.roots).toHaveLength(3);
+          const [x1, x2, x3] = res.roots;
+          expect(rel(x1 * x2 * x3, -c0)).toBeLessThan(1e-12);
+          // The pair sum can cancel (r3 ~ -r2), so it is compared on the scale of its terms.
+          const terms = Math.abs(x1 * x2) + Math.abs(x1 * x3) + Math.abs(x2 * x3);
+          expect(Math.abs(x1 * x2 + x1 * x3 + x2 * x3 - c1)).toBeLessThan(1e-12 * terms);
+        },
+      ),
+      { numRuns: 1000 },
+    );
+  });
 });
