@@ -1,15 +1,14 @@
 /**
- * Display units for chart axes and table columns: the edge where SI values become the units an
- * engineer reads. Values inside the library stay SI (K, Pa, mol/m3, J/mol, J/(mol K), kg/m3).
+ * Display units for chart axes and table columns: which units each kind of quantity may be shown
+ * in, how each is printed, and the unit systems "SI" and "field". The conversion factors are NOT
+ * written here: every unit is looked up in units/ (the one conversion table of the library), so
+ * axes, tables and notebook inputs can never disagree. Values inside the library stay SI.
  *
- * Conversion factors are exact by definition unless noted, from NIST Special Publication 811
- * (2008 edition, Taylor and Thompson), Appendix B.8/B.9:
- *   1 lb = 0.45359237 kg; 1 ft = 0.3048 m; 1 in = 0.0254 m; standard gravity 9.80665 m/s2,
- *   so 1 lbf/in2 = 6894.757293168361 Pa; 1 atm = 101325 Pa; 1 bar = 1e5 Pa;
- *   1 Btu (International Table) = 1055.05585262 J, so 1 Btu/lb = 2326 J/kg and
- *   1 Btu/(lb degR) = 4186.8 J/(kg K); 1 degR = 5/9 K; degF = degR - 459.67.
+ * Mass-based kinds (massEnergy, massEntropy, massDensity, specificVolume) take values already on
+ * a per-kilogram SI basis (J/kg, J/(kg K), kg/m3, m3/kg): the builder divides by the molar mass.
  */
 import { UnknownNameError } from "../errors.js";
+import { lookupUnit } from "../units/lookupUnit.js";
 
 /** Kinds of quantity that charts and tables know how to show. */
 export type QuantityKind =
@@ -37,71 +36,61 @@ export interface DisplayUnit {
   readonly offset: number;
 }
 
-const LB_KG = 0.45359237;
-const FT_M = 0.3048;
-const PSI_PA = (LB_KG * 9.80665) / (0.0254 * 0.0254);
-const BTU_J = 1055.05585262;
-const LBMOL_MOL = LB_KG * 1000;
-const FT3_M3 = FT_M ** 3;
-
-function unit(id: string, symbol: string, siPerUnit: number, offset = 0): DisplayUnit {
-  return { id, symbol, scale: 1 / siPerUnit, offset };
+/** A display unit whose factor and offset come from the units/ table. */
+function unit(id: string, symbol: string): DisplayUnit {
+  const def = lookupUnit(id);
+  return { id, symbol, scale: 1 / def.factor, offset: -def.offset / def.factor };
 }
 
 /** Every display unit, by quantity kind. The first of each list is the plain SI unit. */
 export const DISPLAY_UNITS: Readonly<Record<QuantityKind, readonly DisplayUnit[]>> = {
-  temperature: [
-    unit("K", "K", 1),
-    unit("degC", "°C", 1, -273.15),
-    unit("degF", "°F", 5 / 9, -459.67),
-    unit("degR", "°R", 5 / 9),
-  ],
+  temperature: [unit("K", "K"), unit("degC", "°C"), unit("degF", "°F"), unit("degR", "°R")],
   pressure: [
-    unit("Pa", "Pa", 1),
-    unit("kPa", "kPa", 1e3),
-    unit("MPa", "MPa", 1e6),
-    unit("bar", "bar", 1e5),
-    unit("atm", "atm", 101325),
-    unit("psia", "psia", PSI_PA),
+    unit("Pa", "Pa"),
+    unit("kPa", "kPa"),
+    unit("MPa", "MPa"),
+    unit("bar", "bar"),
+    unit("atm", "atm"),
+    unit("psia", "psia"),
   ],
   molarDensity: [
-    unit("mol/m3", "mol/m³", 1),
-    unit("kmol/m3", "kmol/m³", 1e3),
-    unit("mol/L", "mol/L", 1e3),
-    unit("lbmol/ft3", "lbmol/ft³", LBMOL_MOL / FT3_M3),
+    unit("mol/m3", "mol/m³"),
+    unit("kmol/m3", "kmol/m³"),
+    unit("mol/L", "mol/L"),
+    unit("lbmol/ft3", "lbmol/ft³"),
   ],
   molarVolume: [
-    unit("m3/mol", "m³/mol", 1),
-    unit("m3/kmol", "m³/kmol", 1e-3),
-    unit("L/mol", "L/mol", 1e-3),
-    unit("cm3/mol", "cm³/mol", 1e-6),
-    unit("ft3/lbmol", "ft³/lbmol", FT3_M3 / LBMOL_MOL),
+    unit("m3/mol", "m³/mol"),
+    unit("m3/kmol", "m³/kmol"),
+    unit("L/mol", "L/mol"),
+    unit("cm3/mol", "cm³/mol"),
+    unit("ft3/lbmol", "ft³/lbmol"),
   ],
-  massDensity: [unit("kg/m3", "kg/m³", 1), unit("lb/ft3", "lb/ft³", LB_KG / FT3_M3)],
-  specificVolume: [unit("m3/kg", "m³/kg", 1), unit("ft3/lb", "ft³/lb", FT3_M3 / LB_KG)],
+  massDensity: [unit("kg/m3", "kg/m³"), unit("lb/ft3", "lb/ft³")],
+  specificVolume: [unit("m3/kg", "m³/kg"), unit("ft3/lb", "ft³/lb")],
   molarEnergy: [
-    unit("J/mol", "J/mol", 1),
-    unit("kJ/mol", "kJ/mol", 1e3),
-    unit("kJ/kmol", "kJ/kmol", 1e-3),
-    unit("Btu/lbmol", "Btu/lbmol", BTU_J / LBMOL_MOL),
+    unit("J/mol", "J/mol"),
+    unit("kJ/mol", "kJ/mol"),
+    unit("kJ/kmol", "kJ/kmol"),
+    unit("Btu/lbmol", "Btu/lbmol"),
   ],
   molarEntropy: [
-    unit("J/(mol K)", "J/(mol·K)", 1),
-    unit("kJ/(kmol K)", "kJ/(kmol·K)", 1),
-    unit("Btu/(lbmol degR)", "Btu/(lbmol·°R)", BTU_J / LBMOL_MOL / (5 / 9)),
+    unit("J/(mol K)", "J/(mol·K)"),
+    unit("kJ/(kmol K)", "kJ/(kmol·K)"),
+    unit("Btu/(lbmol degR)", "Btu/(lbmol·°R)"),
   ],
-  massEnergy: [
-    unit("J/kg", "J/kg", 1),
-    unit("kJ/kg", "kJ/kg", 1e3),
-    unit("Btu/lb", "Btu/lb", BTU_J / LB_KG),
-  ],
+  massEnergy: [unit("J/kg", "J/kg"), unit("kJ/kg", "kJ/kg"), unit("Btu/lb", "Btu/lb")],
   massEntropy: [
-    unit("J/(kg K)", "J/(kg·K)", 1),
-    unit("kJ/(kg K)", "kJ/(kg·K)", 1e3),
-    unit("Btu/(lb degR)", "Btu/(lb·°R)", BTU_J / LB_KG / (5 / 9)),
+    unit("J/(kg K)", "J/(kg·K)"),
+    unit("kJ/(kg K)", "kJ/(kg·K)"),
+    unit("Btu/(lb degR)", "Btu/(lb·°R)"),
   ],
-  speed: [unit("m/s", "m/s", 1), unit("ft/s", "ft/s", FT_M)],
-  dimensionless: [unit("-", "–", 1), unit("%", "%", 0.01)],
+  speed: [unit("m/s", "m/s"), unit("ft/s", "ft/s")],
+  // Dimensionless: not a unit of units/; a ratio shown as is or in per cent.
+  dimensionless: [
+    { id: "-", symbol: "–", scale: 1, offset: 0 },
+    { id: "%", symbol: "%", scale: 100, offset: 0 },
+  ],
 };
 
 /** Named unit systems: "SI" (SI with convenient prefixes) and "field" (US oilfield units). */

@@ -4,7 +4,7 @@
  * rule between the saturated liquid and vapour of each saturation row.
  */
 import { toDisplay } from "./displayUnits.js";
-import type { CriticalPoint, SaturationRow } from "./saturationInput.js";
+import type { ChartCriticalPoint, ChartSaturationRow } from "./saturationInput.js";
 import {
   curveRows,
   positionEncoding,
@@ -15,7 +15,10 @@ import {
 import { INK } from "./theme.js";
 
 /** How to read a diagram coordinate of a saturated phase (SI); undefined when missing. */
-export type PhaseCoordinate = (row: SaturationRow, phase: "liquid" | "vapor") => number | undefined;
+export type PhaseCoordinate = (
+  row: ChartSaturationRow,
+  phase: "liquid" | "vapor",
+) => number | undefined;
 
 /**
  * The dome: a filled two-phase band (horizontal area between liquid and vapour at each saturation
@@ -23,10 +26,10 @@ export type PhaseCoordinate = (row: SaturationRow, phase: "liquid" | "vapor") =>
  * `x` gives the abscissa of a phase; `y` the ordinate of a row (pressure or temperature).
  */
 export function domeLayers(
-  rows: readonly SaturationRow[],
+  rows: readonly ChartSaturationRow[],
   critical: { x?: number; y: number } | undefined,
   x: PhaseCoordinate,
-  y: (row: SaturationRow) => number,
+  y: (row: ChartSaturationRow) => number,
   xAxis: AxisPlan,
   yAxis: AxisPlan,
   warnings: WarningList,
@@ -92,10 +95,10 @@ export function domeLayers(
 
 /** Lines of constant vapour quality q (mole fraction vapour), by the lever rule, x = xl + q (xv - xl). */
 export function qualityLayers(
-  rows: readonly SaturationRow[],
+  rows: readonly ChartSaturationRow[],
   qualities: readonly number[],
   x: PhaseCoordinate,
-  y: (row: SaturationRow) => number,
+  y: (row: ChartSaturationRow) => number,
   xAxis: AxisPlan,
   yAxis: AxisPlan,
   warnings: WarningList,
@@ -143,7 +146,7 @@ export function qualityLayers(
 
 /** The critical point: an open diamond and a small plain-text label. */
 export function criticalLayers(
-  point: CriticalPoint | undefined,
+  point: ChartCriticalPoint | undefined,
   xSI: number | undefined,
   ySI: number | undefined,
   xAxis: AxisPlan,

@@ -12,8 +12,8 @@ import { criticalLayers, domeLayers } from "./domeLayers.js";
 import {
   checkCritical,
   checkSaturation,
-  type CriticalPoint,
-  type SaturationRow,
+  type ChartCriticalPoint,
+  type ChartSaturationRow,
 } from "./saturationInput.js";
 import {
   checkArray,
@@ -31,7 +31,7 @@ import {
 import { INK } from "./theme.js";
 
 /** A point of an isotherm, SI. */
-export interface IsothermPoint {
+export interface IsothermChartPoint {
   /** Molar density, mol/m3. */
   densityMolPerM3: number;
   /** Pressure, Pa (may be negative inside a van der Waals loop). */
@@ -39,7 +39,7 @@ export interface IsothermPoint {
 }
 
 /** The result of an equal-area construction on one subcritical isotherm, SI. */
-export interface EqualAreaResult {
+export interface ChartEqualArea {
   /** Vapour pressure at this temperature, Pa. */
   pressurePa: number;
   /** Saturated liquid density, mol/m3. */
@@ -49,24 +49,24 @@ export interface EqualAreaResult {
 }
 
 /** One isotherm: its temperature, points (sample in density), optional equal-area result. */
-export interface IsothermCurve {
+export interface IsothermChartCurve {
   /** Temperature, K. */
   temperatureK: number;
   /** Legend label (plain text). Default: the temperature in the chosen unit, e.g. "190 K". */
   label?: string;
   /** Points along the isotherm, any order of density. */
-  points: readonly IsothermPoint[];
+  points: readonly IsothermChartPoint[];
   /** Equal-area construction at this temperature (subcritical only). */
-  equalArea?: EqualAreaResult;
+  equalArea?: ChartEqualArea;
 }
 
 /** Data of {@link isothermChart}. */
 export interface IsothermChartData {
-  isotherms: readonly IsothermCurve[];
+  isotherms: readonly IsothermChartCurve[];
   /** Saturation rows (liquid and vapour densities) for the boundary. Default: none. */
-  saturation?: readonly SaturationRow[];
+  saturation?: readonly ChartSaturationRow[];
   /** Critical point (with densityMolPerM3) to mark. Default: none. */
-  critical?: CriticalPoint;
+  critical?: ChartCriticalPoint;
 }
 
 /** Options of {@link isothermChart}. */
@@ -217,7 +217,7 @@ export function isothermChart(
 
 /** Tie lines at the vapour pressure and the lobes between loop and tie line. */
 function equalAreaLayers(
-  isotherms: readonly IsothermCurve[],
+  isotherms: readonly IsothermChartCurve[],
   curves: readonly { label: string; points: readonly { x: number; y: number }[] }[],
   xOf: (rho: number) => number,
   xAxis: AxisPlan,

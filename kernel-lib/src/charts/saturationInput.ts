@@ -7,7 +7,7 @@ import { InputError } from "../errors.js";
 import { requireFinite, requirePositive } from "../validate.js";
 
 /** One coexisting phase at saturation; fill the fields the diagram needs. */
-export interface SaturatedPhase {
+export interface ChartSaturatedPhase {
   /** Molar density, mol/m3. */
   densityMolPerM3?: number;
   /** Molar enthalpy, J/mol (any consistent reference state). */
@@ -17,17 +17,17 @@ export interface SaturatedPhase {
 }
 
 /** One saturation state: T, vapour pressure, and both phases. */
-export interface SaturationRow {
+export interface ChartSaturationRow {
   /** Saturation temperature, K. */
   temperatureK: number;
   /** Vapour pressure, Pa. */
   pressurePa: number;
-  liquid: SaturatedPhase;
-  vapor: SaturatedPhase;
+  liquid: ChartSaturatedPhase;
+  vapor: ChartSaturatedPhase;
 }
 
 /** The critical point, SI, with the fields the diagram needs. */
-export interface CriticalPoint {
+export interface ChartCriticalPoint {
   /** Critical temperature, K. */
   temperatureK: number;
   /** Critical pressure, Pa. */
@@ -41,7 +41,9 @@ export interface CriticalPoint {
 }
 
 /** Sorts saturation rows by temperature and checks T and P (positive, finite). */
-export function checkSaturation(rows: readonly SaturationRow[] | undefined): SaturationRow[] {
+export function checkSaturation(
+  rows: readonly ChartSaturationRow[] | undefined,
+): ChartSaturationRow[] {
   if (rows === undefined) return [];
   if (!Array.isArray(rows)) {
     throw new InputError({
@@ -67,7 +69,9 @@ export function checkSaturation(rows: readonly SaturationRow[] | undefined): Sat
 }
 
 /** Checks a critical point (T and P positive and finite). */
-export function checkCritical(point: CriticalPoint | undefined): CriticalPoint | undefined {
+export function checkCritical(
+  point: ChartCriticalPoint | undefined,
+): ChartCriticalPoint | undefined {
   if (point === undefined) return undefined;
   requirePositive("critical.temperatureK", point.temperatureK, "K");
   requirePositive("critical.pressurePa", point.pressurePa, "Pa");

@@ -77,7 +77,7 @@ export class WarningList {
 }
 
 /** A point of a curve, SI. */
-export interface XY {
+export interface ChartXY {
   readonly x: number;
   readonly y: number;
 }
@@ -101,7 +101,7 @@ export interface LineRow {
  * once per curve in `warnings`.
  */
 export function curveRows(
-  curves: readonly { label: string; points: readonly XY[] }[],
+  curves: readonly { label: string; points: readonly ChartXY[] }[],
   xAxis: AxisPlan,
   yAxis: AxisPlan,
   warnings: WarningList,
@@ -258,4 +258,99 @@ export function topLevel(
     usermeta: { isochor: meta },
   };
   return spec;
+}
+
+/** A line layer of labelled series (colour and dash per series, merged legend, tooltip). */
+export function seriesLineLayer(
+  rows: readonly LineRow[],
+  labels: readonly string[],
+  legendTitle: string,
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+): Record<string, unknown> {
+  return {
+    data: { values: rows },
+    mark: { type: "line", clip: true },
+    encoding: {
+      x: positionEncoding("x", xAxis),
+      y: positionEncoding("y", yAxis),
+      ...seriesEncodings(labels, legendTitle),
+      order: { field: "order", type: "quantitative" },
+      detail: { field: "path", type: "nominal" },
+      tooltip: lineTooltip(xAxis, yAxis, legendTitle),
+    },
+  };
+}
+
+/**
+ * A family of thin guide lines in one style (isentropes, isobars, quality lines), each labelled in
+ * plain text at its last drawn point.
+ */
+export function guideLineLayers(
+  rows: readonly LineRow[],
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+  style: { color: string; strokeDash: number[]; strokeWidth?: number; tooltipTitle: string },
+): Record<string, unknown>[] {
+  if (rows.length === 0) return [];
+  const last = new Map<string, LineRow>();
+  for (const r of rows) last.set(r.series, r);
+  const labels = [...last.values()].map((r) => ({ x: r.x, y: r.y, label: r.series }));
+  return [
+    {
+      data: { values: rows },
+      mark: {
+        type: "line",
+        color: style.color,
+        strokeDash: style.strokeDash,
+        strokeWidth: style.strokeWidth ?? 1,
+        clip: true,
+      },
+      encoding: {
+        x: positionEncoding("x", xAxis),
+        y: positionEncoding("y", yAxis),
+        order: { field: "order", type: "quantitative" },
+        detail: { field: "path", type: "nominal" },
+        tooltip: lineTooltip(xAxis, yAxis, style.tooltipTitle),
+      },
+    },
+    {
+      data: { values: labels },
+      mark: {
+        type: "text",
+        color: style.color,
+        fontSize: 9,
+        align: "left",
+        dx: 3,
+        dy: -4,
+        clip: true,
+      },
+      encoding: {
+        x: positionEncoding("x", xAxis),
+        y: positionEncoding("y", yAxis),
+        text: { field: "label", type: "nominal" },
+      },
+    },
+  ];
+}
+
+/** Checks an optional [low, high] range option in SI and converts it to a display domain. */
+export function rangeOption(
+  input: string,
+  range: readonly [number, number] | undefined,
+  axis: AxisPlan,
+  unitSI: string,
+  scaleSI: (v: number) => number = (v) => v,
+): void {
+  if (range === undefined) return;
+  const [lo, hi] = Array.isArray(range) ? range : [NaN, NaN];
+  if (!(Number.isFinite(lo) && Number.isFinite(hi) && hi > lo && (!axis.log || lo > 0))) {
+    throw new InputError({
+      input,
+      unit: unitSI,
+      validRange: axis.log ? "[low, high] with 0 < low < high" : "[low, high] with high > low",
+      received: range,
+    });
+  }
+  axis.domain = [toDisplay(scaleSI(lo), axis.unit), toDisplay(scaleSI(hi), axis.unit)];
 }

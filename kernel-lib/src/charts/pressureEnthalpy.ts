@@ -1,0 +1,203 @@
+/**
+ * Pressure-enthalpy diagram, pressure on a logarithmic axis (so the dilute vapour and the
+ * near-critical region both get room): two-phase dome, isotherms, isentropes and lines of constant
+ * vapour quality (drawn from the saturation rows by the lever rule).
+ */
+import { InputError } from "../errors.js";
+import { requireFinite, requirePositive } from "../validate.js";
+import type { ChartSpec } from "./chartSpec.js";
+import { toDisplay } from "./displayUnits.js";
+import { criticalLayers, domeLayers, qualityLayers } from "./domeLayers.js";
+import { energyBasis } from "./energyBasis.js";
+import {
+  checkCritical,
+  checkSaturation,
+  type ChartCriticalPoint,
+  type ChartSaturationRow,
+} from "./saturationInput.js";
+import {
+  checkArray,
+  curveRows,
+  guideLineLayers,
+  planAxis,
+  rangeOption,
+  seriesLineLayer,
+  shortNumber,
+  topLevel,
+  WarningList,
+  type BaseChartOptions,
+} from "./specParts.js";
+import { INK } from "./theme.js";
+
+/** A point on a P-h diagram, SI per mole. */
+export interface PressureEnthalpyPoint {
+  /** Pressure, Pa. */
+  pressurePa: number;
+  /** Molar enthalpy, J/mol (same reference state as the saturation rows). */
+  enthalpyJPerMol: number;
+}
+
+/** Data of {@link pressureEnthalpyChart}. */
+export interface PressureEnthalpyData {
+  /** Saturation rows with liquid and vapour enthalpy: the dome and the quality lines. */
+  saturation?: readonly ChartSaturationRow[];
+  /** Critical point (with enthalpyJPerMol) to mark and to close the dome. */
+  critical?: ChartCriticalPoint;
+  /** Isotherms (legend, colour and dash per isotherm). */
+  isotherms?: readonly {
+    temperatureK: number;
+    label?: string;
+    points: readonly PressureEnthalpyPoint[];
+  }[];
+  /** Isentropes (thin guide lines, labelled with their entropy). */
+  isentropes?: readonly {
+    entropyJPerMolK: number;
+    label?: string;
+    points: readonly PressureEnthalpyPoint[];
+  }[];
+}
+
+/** Options of {@link pressureEnthalpyChart}. */
+export interface PressureEnthalpyChartOptions extends BaseChartOptions {
+  /** Vapour qualities of the quality lines (0 < q < 1). Default [0.2, 0.4, 0.6, 0.8]. */
+  qualities?: readonly number[];
+  /** Molar mass, kg/mol: show enthalpy per kg instead of per mole. Default: per mole. */
+  molarMassKgPerMol?: number;
+  /** Logarithmic pressure axis. Default true. */
+  logP?: boolean;
+  /** Pressure axis range, Pa. Default: fitted to the data. */
+  pressureRangePa?: readonly [number, number];
+  /** Enthalpy axis range, J/mol. Default: fitted to the data. */
+  enthalpyRangeJPerMol?: readonly [number, number];
+}
+
+/**
+ * Builds a P-h diagram.
+ * @example pressureEnthalpyChart({ saturation, critical, isotherms }, { molarMassKgPerMol: 0.04410 })
+ */
+export function pressureEnthalpyChart(
+  data: PressureEnthalpyData,
+  options: PressureEnthalpyChartOptions = {},
+): ChartSpec {
+  const saturation = checkSaturation(data.saturation);
+  const critical = checkCritical(data.critical);
+  const isotherms = checkArray("isotherms", data.isotherms);
+  const isentropes = checkArray("isentropes", data.isentropes);
+  if (saturation.length === 0 && isotherms.length === 0 && isentropes.length === 0) {
+    throw new InputError({
+      input: "data",
+      unit: "-",
+      validRange: "saturation rows, isotherms or isentropes",
+      received: "nothing to draw",
+    });
+  }
+  const qualities = checkQualities(options.qualities ?? [0.2, 0.4, 0.6, 0.8]);
+  const basis = energyBasis(options.molarMassKgPerMol);
+  const warnings = new WarningList();
+  const xAxis = planAxis(basis.energyKind, `${basis.adjective} enthalpy h`, options.units);
+  const yAxis = planAxis("pressure", "Pressure P", options.units, options.logP ?? true);
+  const temperatureUnit = planAxis("temperature", "T", options.units).unit;
+  const entropyUnit = planAxis(basis.entropyKind, "s", options.units).unit;
+  rangeOption("pressureRangePa", options.pressureRangePa, yAxis, "Pa");
+  rangeOption("enthalpyRangeJPerMol", options.enthalpyRangeJPerMol, xAxis, "J/mol", basis.perBasis);
+
+  const hOf = (r: ChartSaturationRow, phase: "liquid" | "vapor") => {
+    const h = r[phase].enthalpyJPerMol;
+    return h === undefined ? undefined : basis.perBasis(h);
+  };
+  const pOf = (r: ChartSaturationRow) => r.pressurePa;
+  const toXY = (p: PressureEnthalpyPoint) => ({
+    x: basis.perBasis(p.enthalpyJPerMol),
+    y: p.pressurePa,
+  });
+
+  const layers: Record<string, unknown>[] = [];
+  const criticalH =
+    critical?.enthalpyJPerMol !== undefined ? basis.perBasis(critical.enthalpyJPerMol) : undefined;
+  layers.push(
+    ...domeLayers(
+      saturation,
+      critical && criticalH !== undefined ? { x: criticalH, y: critical.pressurePa } : undefined,
+      hOf,
+      pOf,
+      xAxis,
+      yAxis,
+      warnings,
+    ),
+  );
+  layers.push(...qualityLayers(saturation, qualities, hOf, pOf, xAxis, yAxis, warnings));
+
+  const isentropeRows = curveRows(
+    isentropes.map((c, i) => {
+      requireFinite(`isentropes[${i}].entropyJPerMolK`, c.entropyJPerMolK, "J/(mol K)");
+      return {
+        label:
+          c.label ??
+          `s = ${shortNumber(toDisplay(basis.perBasis(c.entropyJPerMolK), entropyUnit))}`,
+        points: checkArray(`isentropes[${i}].points`, c.points).map(toXY),
+      };
+    }),
+    xAxis,
+    yAxis,
+    warnings,
+    "s",
+  );
+  layers.push(
+    ...guideLineLayers(isentropeRows, xAxis, yAxis, {
+      color: "#3f7f74",
+      strokeDash: [6, 2, 1, 2],
+      tooltipTitle: `Isentrope (${entropyUnit.symbol})`,
+    }),
+  );
+
+  const labels = isotherms.map((c, i) => {
+    requirePositive(`isotherms[${i}].temperatureK`, c.temperatureK, "K");
+    return (
+      c.label ??
+      `${shortNumber(toDisplay(c.temperatureK, temperatureUnit))} ${temperatureUnit.symbol}`
+    );
+  });
+  const isothermRows = curveRows(
+    isotherms.map((c, i) => ({
+      label: labels[i],
+      points: checkArray(`isotherms[${i}].points`, c.points).map(toXY),
+    })),
+    xAxis,
+    yAxis,
+    warnings,
+  );
+  if (isothermRows.length > 0)
+    layers.push(seriesLineLayer(isothermRows, labels, "Isotherm", xAxis, yAxis));
+  layers.push(...criticalLayers(critical, criticalH, critical?.pressurePa, xAxis, yAxis));
+
+  return topLevel(
+    "pressure-enthalpy",
+    "Pressure-enthalpy diagram",
+    options,
+    [
+      xAxis,
+      yAxis,
+      { ...yAxis, kind: "temperature", unit: temperatureUnit },
+      { ...yAxis, kind: basis.entropyKind, unit: entropyUnit },
+    ],
+    warnings,
+    { layer: layers },
+    basis.mass ? { molarMassKgPerMol: basis.molarMassKgPerMol } : {},
+  );
+}
+
+/** Checks quality values: each strictly between 0 and 1. */
+export function checkQualities(qualities: readonly number[]): readonly number[] {
+  const list = checkArray("qualities", qualities);
+  list.forEach((q, i) => {
+    if (!(q > 0 && q < 1)) {
+      throw new InputError({
+        input: `qualities[${i}]`,
+        unit: "-",
+        validRange: "0 < q < 1",
+        received: q,
+      });
+    }
+  });
+  return list;
+}

@@ -1,0 +1,225 @@
+/**
+ * A process path (a list of states: a compressor, a valve, a cooler, ...) drawn as numbered points
+ * joined in order, on a P-h or T-s diagram: over a diagram built by this library (units, basis and
+ * scales are read from its metadata) or on its own axes.
+ */
+import { InputError } from "../errors.js";
+import { requireFinite, requirePositive } from "../validate.js";
+import { chartMeta, type ChartSpec } from "./chartSpec.js";
+import { resolveUnit, toDisplay, type UnitChoice } from "./displayUnits.js";
+import { energyBasis } from "./energyBasis.js";
+import {
+  checkArray,
+  planAxis,
+  positionEncoding,
+  topLevel,
+  WarningList,
+  type AxisPlan,
+  type BaseChartOptions,
+} from "./specParts.js";
+import { INK } from "./theme.js";
+
+/** One state of a process path, SI per mole. */
+export interface ProcessPathState {
+  /** Name of the state (plain text), e.g. "compressor discharge". Default: its number. */
+  label?: string;
+  /** Temperature, K (needed on T-s). */
+  temperatureK?: number;
+  /** Pressure, Pa (needed on P-h). */
+  pressurePa?: number;
+  /** Molar enthalpy, J/mol (needed on P-h). */
+  enthalpyJPerMol?: number;
+  /** Molar entropy, J/(mol K) (needed on T-s). */
+  entropyJPerMolK?: number;
+}
+
+/** Which diagram a path is drawn on. */
+export type PathDiagram = "pressure-enthalpy" | "temperature-entropy";
+
+/** Options of {@link processPathChart}. */
+export interface ProcessPathOptions extends BaseChartOptions {
+  /** Diagram. Default "pressure-enthalpy". */
+  diagram?: PathDiagram;
+  /** Molar mass, kg/mol, for a per-kg basis. Default: per mole. */
+  molarMassKgPerMol?: number;
+  /** Logarithmic pressure axis on P-h. Default true. */
+  logP?: boolean;
+}
+
+/** A process path on its own axes (no dome). */
+export function processPathChart(
+  states: readonly ProcessPathState[],
+  options: ProcessPathOptions = {},
+): ChartSpec {
+  const diagram = checkDiagram(options.diagram ?? "pressure-enthalpy");
+  const basis = energyBasis(options.molarMassKgPerMol);
+  const { xAxis, yAxis } = pathAxes(
+    diagram,
+    options.units,
+    basis.adjective,
+    basis.energyKind,
+    basis.entropyKind,
+    options.logP ?? true,
+  );
+  const warnings = new WarningList();
+  const layers = pathLayers(states, diagram, xAxis, yAxis, basis.perBasis);
+  return topLevel(
+    diagram === "pressure-enthalpy" ? "pressure-enthalpy" : "temperature-entropy",
+    "Process path",
+    options,
+    [xAxis, yAxis],
+    warnings,
+    { layer: layers },
+    basis.mass ? { molarMassKgPerMol: basis.molarMassKgPerMol } : {},
+  );
+}
+
+/**
+ * Returns a copy of a P-h or T-s diagram built by this library with a process path drawn over it,
+ * in the diagram's own units and basis. The input spec is not changed.
+ * @example withProcessPath(pressureEnthalpyChart(data), [inlet, discharge, afterCooler])
+ */
+export function withProcessPath(spec: ChartSpec, states: readonly ProcessPathState[]): ChartSpec {
+  const meta = chartMeta(spec);
+  if (
+    !meta ||
+    (meta.chart !== "pressure-enthalpy" && meta.chart !== "temperature-entropy") ||
+    !Array.isArray(spec.layer)
+  ) {
+    throw new InputError({
+      input: "spec",
+      unit: "-",
+      validRange: "a P-h or T-s diagram built by pressureEnthalpyChart or temperatureEntropyChart",
+      received: meta?.chart ?? "another spec",
+    });
+  }
+  const diagram = meta.chart as PathDiagram;
+  const basis = energyBasis(meta.molarMassKgPerMol);
+  const units: UnitChoice = { system: "SI", ...meta.units };
+  const logP = spec.layer.some((l) => {
+    const enc = l.encoding as { y?: { scale?: { type?: string } } } | undefined;
+    return enc?.y?.scale?.type === "log";
+  });
+  const { xAxis, yAxis } = pathAxes(
+    diagram,
+    units,
+    basis.adjective,
+    basis.energyKind,
+    basis.entropyKind,
+    logP,
+  );
+  // Keep any fixed domain of the diagram so the shared scale is unchanged.
+  const copy = JSON.parse(JSON.stringify(spec)) as ChartSpec;
+  const layers = pathLayers(states, diagram, xAxis, yAxis, basis.perBasis);
+  copy.layer = [...(copy.layer as ChartSpec[]), ...(layers as ChartSpec[])];
+  return copy;
+}
+
+function checkDiagram(d: string): PathDiagram {
+  if (d !== "pressure-enthalpy" && d !== "temperature-entropy") {
+    throw new InputError({
+      input: "diagram",
+      unit: "-",
+      validRange: '"pressure-enthalpy" or "temperature-entropy"',
+      received: d,
+    });
+  }
+  return d;
+}
+
+function pathAxes(
+  diagram: PathDiagram,
+  units: UnitChoice | undefined,
+  adjective: string,
+  energyKind: ReturnType<typeof energyBasis>["energyKind"],
+  entropyKind: ReturnType<typeof energyBasis>["entropyKind"],
+  logP: boolean,
+): { xAxis: AxisPlan; yAxis: AxisPlan } {
+  // Validate the unit choice early (resolveUnit throws on unknown names).
+  resolveUnit("pressure", units);
+  return diagram === "pressure-enthalpy"
+    ? {
+        xAxis: planAxis(energyKind, `${adjective} enthalpy h`, units),
+        yAxis: planAxis("pressure", "Pressure P", units, logP),
+      }
+    : {
+        xAxis: planAxis(entropyKind, `${adjective} entropy s`, units),
+        yAxis: planAxis("temperature", "Temperature T", units),
+      };
+}
+
+function pathLayers(
+  states: readonly ProcessPathState[],
+  diagram: PathDiagram,
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+  perBasis: (v: number) => number,
+): Record<string, unknown>[] {
+  const list = checkArray("states", states);
+  if (list.length === 0) {
+    throw new InputError({
+      input: "states",
+      unit: "-",
+      validRange: "at least one state",
+      received: states,
+    });
+  }
+  const rows = list.map((s, i) => {
+    let x: number;
+    let y: number;
+    if (diagram === "pressure-enthalpy") {
+      x = perBasis(
+        requireFinite(`states[${i}].enthalpyJPerMol`, s.enthalpyJPerMol as number, "J/mol"),
+      );
+      y = requirePositive(`states[${i}].pressurePa`, s.pressurePa as number, "Pa");
+    } else {
+      x = perBasis(
+        requireFinite(`states[${i}].entropyJPerMolK`, s.entropyJPerMolK as number, "J/(mol K)"),
+      );
+      y = requirePositive(`states[${i}].temperatureK`, s.temperatureK as number, "K");
+    }
+    return {
+      x: toDisplay(x, xAxis.unit),
+      y: toDisplay(y, yAxis.unit),
+      order: i,
+      step: String(i + 1),
+      label: s.label === undefined ? `state ${i + 1}` : String(s.label),
+      tag: s.label === undefined ? String(i + 1) : `${i + 1} ${String(s.label)}`,
+    };
+  });
+  const enc = { x: positionEncoding("x", xAxis), y: positionEncoding("y", yAxis) };
+  return [
+    {
+      data: { values: rows },
+      mark: { type: "line", color: INK.path, strokeWidth: 2.2, clip: true },
+      encoding: { ...enc, order: { field: "order", type: "quantitative" } },
+    },
+    {
+      data: { values: rows },
+      mark: { type: "point", filled: true, color: INK.path, size: 70, clip: true },
+      encoding: {
+        ...enc,
+        tooltip: [
+          { field: "step", type: "nominal", title: "Step" },
+          { field: "label", type: "nominal", title: "State" },
+          { field: "x", type: "quantitative", title: xAxis.title, format: ".5~g" },
+          { field: "y", type: "quantitative", title: yAxis.title, format: ".5~g" },
+        ],
+      },
+    },
+    {
+      data: { values: rows },
+      mark: {
+        type: "text",
+        color: INK.path,
+        fontSize: 10.5,
+        fontWeight: 600,
+        align: "left",
+        dx: 7,
+        dy: -7,
+        clip: true,
+      },
+      encoding: { ...enc, text: { field: "tag", type: "nominal" } },
+    },
+  ];
+}

@@ -1,0 +1,148 @@
+/**
+ * Temperature-entropy diagram: two-phase dome, isobars (legend, colour and dash per isobar) and
+ * lines of constant vapour quality from the saturation rows (lever rule).
+ */
+import { InputError } from "../errors.js";
+import { requirePositive } from "../validate.js";
+import type { ChartSpec } from "./chartSpec.js";
+import { toDisplay } from "./displayUnits.js";
+import { criticalLayers, domeLayers, qualityLayers } from "./domeLayers.js";
+import { energyBasis } from "./energyBasis.js";
+import { checkQualities } from "./pressureEnthalpy.js";
+import {
+  checkCritical,
+  checkSaturation,
+  type ChartCriticalPoint,
+  type ChartSaturationRow,
+} from "./saturationInput.js";
+import {
+  checkArray,
+  curveRows,
+  planAxis,
+  rangeOption,
+  seriesLineLayer,
+  shortNumber,
+  topLevel,
+  WarningList,
+  type BaseChartOptions,
+} from "./specParts.js";
+
+/** A point on a T-s diagram, SI per mole. */
+export interface TemperatureEntropyPoint {
+  /** Temperature, K. */
+  temperatureK: number;
+  /** Molar entropy, J/(mol K) (same reference state as the saturation rows). */
+  entropyJPerMolK: number;
+}
+
+/** Data of {@link temperatureEntropyChart}. */
+export interface TemperatureEntropyData {
+  /** Saturation rows with liquid and vapour entropy: the dome and the quality lines. */
+  saturation?: readonly ChartSaturationRow[];
+  /** Critical point (with entropyJPerMolK). */
+  critical?: ChartCriticalPoint;
+  /** Isobars, one series each. */
+  isobars?: readonly {
+    pressurePa: number;
+    label?: string;
+    points: readonly TemperatureEntropyPoint[];
+  }[];
+}
+
+/** Options of {@link temperatureEntropyChart}. */
+export interface TemperatureEntropyChartOptions extends BaseChartOptions {
+  /** Vapour qualities of the quality lines (0 < q < 1). Default [0.2, 0.4, 0.6, 0.8]. */
+  qualities?: readonly number[];
+  /** Molar mass, kg/mol: show entropy per kg. Default: per mole. */
+  molarMassKgPerMol?: number;
+  /** Temperature axis range, K. Default: fitted to the data. */
+  temperatureRangeK?: readonly [number, number];
+  /** Entropy axis range, J/(mol K). Default: fitted to the data. */
+  entropyRangeJPerMolK?: readonly [number, number];
+}
+
+/**
+ * Builds a T-s diagram.
+ * @example temperatureEntropyChart({ saturation, critical, isobars }, { units: "field" })
+ */
+export function temperatureEntropyChart(
+  data: TemperatureEntropyData,
+  options: TemperatureEntropyChartOptions = {},
+): ChartSpec {
+  const saturation = checkSaturation(data.saturation);
+  const critical = checkCritical(data.critical);
+  const isobars = checkArray("isobars", data.isobars);
+  if (saturation.length === 0 && isobars.length === 0) {
+    throw new InputError({
+      input: "data",
+      unit: "-",
+      validRange: "saturation rows or isobars",
+      received: "nothing to draw",
+    });
+  }
+  const qualities = checkQualities(options.qualities ?? [0.2, 0.4, 0.6, 0.8]);
+  const basis = energyBasis(options.molarMassKgPerMol);
+  const warnings = new WarningList();
+  const xAxis = planAxis(basis.entropyKind, `${basis.adjective} entropy s`, options.units);
+  const yAxis = planAxis("temperature", "Temperature T", options.units);
+  const pressureUnit = planAxis("pressure", "P", options.units).unit;
+  rangeOption("temperatureRangeK", options.temperatureRangeK, yAxis, "K");
+  rangeOption(
+    "entropyRangeJPerMolK",
+    options.entropyRangeJPerMolK,
+    xAxis,
+    "J/(mol K)",
+    basis.perBasis,
+  );
+
+  const sOf = (r: ChartSaturationRow, phase: "liquid" | "vapor") => {
+    const s = r[phase].entropyJPerMolK;
+    return s === undefined ? undefined : basis.perBasis(s);
+  };
+  const tOf = (r: ChartSaturationRow) => r.temperatureK;
+  const criticalS =
+    critical?.entropyJPerMolK !== undefined ? basis.perBasis(critical.entropyJPerMolK) : undefined;
+
+  const layers: Record<string, unknown>[] = [];
+  layers.push(
+    ...domeLayers(
+      saturation,
+      critical && criticalS !== undefined ? { x: criticalS, y: critical.temperatureK } : undefined,
+      sOf,
+      tOf,
+      xAxis,
+      yAxis,
+      warnings,
+    ),
+  );
+  layers.push(...qualityLayers(saturation, qualities, sOf, tOf, xAxis, yAxis, warnings));
+  const labels = isobars.map((c, i) => {
+    requirePositive(`isobars[${i}].pressurePa`, c.pressurePa, "Pa");
+    return (
+      c.label ?? `${shortNumber(toDisplay(c.pressurePa, pressureUnit))} ${pressureUnit.symbol}`
+    );
+  });
+  const rows = curveRows(
+    isobars.map((c, i) => ({
+      label: labels[i],
+      points: checkArray(`isobars[${i}].points`, c.points).map((p) => ({
+        x: basis.perBasis(p.entropyJPerMolK),
+        y: p.temperatureK,
+      })),
+    })),
+    xAxis,
+    yAxis,
+    warnings,
+  );
+  if (rows.length > 0) layers.push(seriesLineLayer(rows, labels, "Isobar", xAxis, yAxis));
+  layers.push(...criticalLayers(critical, criticalS, critical?.temperatureK, xAxis, yAxis));
+  return topLevel(
+    "temperature-entropy",
+    "Temperature-entropy diagram",
+    options,
+    [xAxis, yAxis, { ...yAxis, kind: "pressure", unit: pressureUnit }],
+    warnings,
+    { layer: layers },
+    basis.mass ? { molarMassKgPerMol: basis.molarMassKgPerMol } : {},
+  );
+}
