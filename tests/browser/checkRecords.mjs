@@ -44,6 +44,13 @@ export async function checkRecords(htmlFiles, options = {}) {
   if (!existsSync(chromiumPath)) {
     throw new Error(`checkRecords: no Chromium at ${chromiumPath}`);
   }
+  if (!htmlFiles.some((file) => existsSync(file))) {
+    return htmlFiles.map((file) => ({
+      name: basename(file),
+      ok: false,
+      message: `no such file: ${file}`,
+    }));
+  }
   const userDataDir = mkdtempSync(join(tmpdir(), "isochor-check-"));
   const context = await chromium.launchPersistentContext(userDataDir, {
     executablePath: chromiumPath,
