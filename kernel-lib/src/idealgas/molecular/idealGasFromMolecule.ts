@@ -116,8 +116,12 @@ export function idealGasFromMolecule(
   molecule: string | MolecularConstants,
   options: MolecularIdealGasOptions = {},
 ): MolecularIdealGas {
-  const c = validateMolecularConstants(
-    typeof molecule === "string" ? getMolecule(molecule) : molecule,
+  // A private deep copy: later edits of the caller's object (in another cell) cannot change
+  // this model behind its memoised values.
+  const c: MolecularConstants = JSON.parse(
+    JSON.stringify(
+      validateMolecularConstants(typeof molecule === "string" ? getMolecule(molecule) : molecule),
+    ),
   );
   const margin = options.extrapolationMargin ?? DEFAULT_EXTRAPOLATION_MARGIN;
   if (!(margin >= 0 && margin < 1)) {
@@ -255,23 +259,31 @@ export function idealGasFromMolecule(
     const internalRotation = sumContributions(rotors.map((r) => r.contribution(t)));
     const total = sumContributions([translation, rot, vibration, electronic, internalRotation]);
     lastT = t;
-    lastParts = { translation, rotation: rot, vibration, electronic, internalRotation, total };
+    lastParts = Object.freeze({
+      translation: Object.freeze(translation),
+      rotation: Object.freeze(rot),
+      vibration: Object.freeze(vibration),
+      electronic: Object.freeze(electronic),
+      internalRotation: Object.freeze(internalRotation),
+      total: Object.freeze(total),
+    });
     return lastParts;
   };
 
   const h298 = parts(STANDARD_TEMPERATURE_K).total.enthalpyFrom0K;
 
-  return {
+  return Object.freeze({
     componentId: c.id,
     method,
     source: c.sources.join("; "),
     validTemperatureK,
     constants: c,
     torsion,
-    contributions: (temperatureK) => parts(check(temperatureK)),
-    cp: (temperatureK) => parts(check(temperatureK)).total.cp,
-    enthalpyFrom0K: (temperatureK) => parts(check(temperatureK)).total.enthalpyFrom0K,
-    enthalpyFrom298: (temperatureK) => parts(check(temperatureK)).total.enthalpyFrom0K - h298,
-    entropyStandard: (temperatureK) => parts(check(temperatureK)).total.entropy,
-  };
+    contributions: (temperatureK: number) => parts(check(temperatureK)),
+    cp: (temperatureK: number) => parts(check(temperatureK)).total.cp,
+    enthalpyFrom0K: (temperatureK: number) => parts(check(temperatureK)).total.enthalpyFrom0K,
+    enthalpyFrom298: (temperatureK: number) =>
+      parts(check(temperatureK)).total.enthalpyFrom0K - h298,
+    entropyStandard: (temperatureK: number) => parts(check(temperatureK)).total.entropy,
+  });
 }

@@ -105,7 +105,11 @@ export interface ThermoContribution {
 }
 
 /** The zero contribution (e.g. the rotation of an atom). */
-export const NO_CONTRIBUTION: ThermoContribution = { cp: 0, enthalpyFrom0K: 0, entropy: 0 };
+export const NO_CONTRIBUTION: ThermoContribution = Object.freeze({
+  cp: 0,
+  enthalpyFrom0K: 0,
+  entropy: 0,
+});
 
 /** Sum of contributions. */
 export function sumContributions(parts: readonly ThermoContribution[]): ThermoContribution {

@@ -165,3 +165,25 @@ describe("bad temperatures", () => {
     );
   });
 });
+
+describe("no shared mutable state", () => {
+  it("editing the caller's constants after construction does not change the model", () => {
+    const mine = JSON.parse(JSON.stringify(getMolecule("carbon-monoxide"))) as {
+      -readonly [K in keyof MolecularConstants]: MolecularConstants[K];
+    };
+    const gas = idealGasFromMolecule(mine);
+    const before = gas.entropyStandard(400);
+    mine.rotationalConstantsInvCm = [10];
+    mine.molarMassKgPerMol = 1;
+    expect(gas.entropyStandard(401)).toBeGreaterThan(before);
+    expect(gas.entropyStandard(400)).toBe(before);
+  });
+
+  it("the memoised contributions cannot be altered by a caller", () => {
+    const gas = idealGasFromMolecule("methane");
+    const parts = gas.contributions(500);
+    expect(Object.isFrozen(parts)).toBe(true);
+    expect(Object.isFrozen(parts.total)).toBe(true);
+    expect(gas.contributions(500).total.cp).toBe(parts.total.cp);
+  });
+});
