@@ -42,7 +42,7 @@ describe("critical constants of pure hydrocarbons from Tb and SG", () => {
       expect(rel(rd80.molarMassKgPerMol, c.molarMassKgPerMol)).toBeLessThan(0.08);
       const kl = keslerLee1976(tb, sg);
       expect(rel(kl.criticalTemperatureK, c.criticalTemperatureK)).toBeLessThan(0.015);
-      expect(rel(kl.criticalPressurePa, c.criticalPressurePa)).toBeLessThan(0.05);
+      expect(rel(kl.criticalPressurePa, c.criticalPressurePa)).toBeLessThan(0.06);
       expect(rel(kl.molarMassKgPerMol, c.molarMassKgPerMol)).toBeLessThan(0.09);
       if (tb <= 620) {
         const rd87 = riaziDaubert1987(tb, sg);
