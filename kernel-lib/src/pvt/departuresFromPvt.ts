@@ -63,12 +63,16 @@ export interface PvtState {
   /** Smoothed pressure at (T, rho), Pa. */
   pressurePa: number;
   residual: DepartureSet;
-  /** Combined standard uncertainty: propagated (Monte Carlo, or linearised if MC is off) and quadrature. */
+  /** Combined standard uncertainty: propagated (Monte Carlo, or linearised if MC is off) and the method estimate. */
   uncertainty: DepartureSet;
   monteCarlo?: DepartureSet;
   linearised?: DepartureSet;
-  /** Method error estimate: quadrature + low-density-bridge truncation (isochore route; zeros on the surface route). */
-  quadrature: DepartureSet;
+  /**
+   * Method error estimate: quadrature + low-density-bridge truncation (isochore route) and, when no
+   * u(P) was stated, the change of the result when every fit order is raised by one (the scatter
+   * then measures the fit's own misfit, whose effect on slopes is systematic, not random).
+   */
+  method: DepartureSet;
 }
 
 export interface PvtIsotherm {
@@ -191,6 +195,9 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
   let sigmaPerturb: number[];
   let quadrature: DepartureSet[][] = [];
 
+  /** Raised to 1 once, to estimate the fit-order part of the method error (see PvtState.method). */
+  let orderBump = 0;
+  const distinctTs = groups.map((g) => new Set(g.members.map((i) => (T[i] as number).toPrecision(10))).size);
   const fitAllIsochores = (P: readonly number[]) =>
     groups.map((g, k) =>
       fitIsochore(
@@ -198,7 +205,9 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
         g.members.map((i) => T[i] as number),
         g.members.map((i) => (P[i] as number) + (shift[i] as number)),
         sigmaEff ? g.members.map((i) => sigmaEff?.[i] as number) : undefined,
-        isochoreFits.length > 0 ? { order: (isochoreFits[k] as IsochoreFit).order } : options.isochore,
+        isochoreFits.length > 0
+          ? { order: Math.min((isochoreFits[k] as IsochoreFit).order + orderBump, (distinctTs[k] as number) - 1) }
+          : options.isochore,
       ),
     );
 
@@ -305,9 +314,15 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
       nodeSets.push(idx);
     }
     const surfSigma = sigmaEff;
-    const frozen = { ...options.surface, ...surfaceOrder, gasConstant: R };
+    const distinctTemperatures = new Set(T.map((t) => t.toPrecision(8))).size;
     evaluate = (P) => {
-      const s = P === P0 ? surfaceFit : fitVirialSurface(surfacePoints(P), surfSigma, frozen);
+      const frozen = {
+        ...options.surface,
+        gasConstant: R,
+        densityTerms: surfaceOrder.densityTerms + orderBump,
+        temperatureTerms: Math.min(surfaceOrder.temperatureTerms + orderBump, distinctTemperatures),
+      };
+      const s = P === P0 && orderBump === 0 ? surfaceFit : fitVirialSurface(surfacePoints(P), surfSigma, frozen);
       const sf = s.surface;
       return {
         pressures: isothermTs.map((t, k) => (nodeSets[k] as number[]).map((i) => {
@@ -335,6 +350,31 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
 
   const nominal = evaluate(P0);
   const nominalFlat = flatten(nominal);
+  if (!stated) {
+    orderBump = 1;
+    let bumped: number[] | undefined;
+    try {
+      bumped = flatten(evaluate(P0));
+    } catch {
+      bumped = undefined; // a higher order is not admissible everywhere: no estimate, said below
+    }
+    orderBump = 0;
+    if (bumped) {
+      let at = 0;
+      nominal.departures.forEach((iso, k) => {
+        iso.forEach((_, j) => {
+          const q = (quadrature[k] as DepartureSet[])[j] as DepartureSet;
+          for (const [m, key] of DEPARTURE_KEYS.entries()) {
+            q[key] = Math.hypot(q[key], (bumped[at + m] as number) - (nominalFlat[at + m] as number));
+          }
+          at += DEPARTURE_KEYS.length;
+        });
+        at += 2;
+      });
+    } else {
+      diagnostics.push({ code: "fit-order-estimate", severity: "info", message: "no u(P) stated and the fit orders cannot be raised by one: the uncertainty rests on the scatter alone" });
+    }
+  }
   const mc = mcSamples > 0 ? monteCarloPropagation((P) => flatten(evaluate(P)), P0, sigmaPerturb, mcSamples, seed) : undefined;
   const lin = wantLinear || !mc ? linearisedPropagation((P) => flatten(evaluate(P)), P0, sigmaPerturb, nominalFlat) : undefined;
   const primary = (mc ?? lin)?.standardUncertainty ?? [];
@@ -363,7 +403,7 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
         uncertainty,
         ...(m ? { monteCarlo: m } : {}),
         ...(l ? { linearised: l } : {}),
-        quadrature: quad,
+        method: quad,
       };
     });
     // B: propagated part, and in the isochore route the bridge's own (fit + truncation) estimate.
