@@ -7,8 +7,18 @@ import { InputError, UnknownNameError } from "../../errors.js";
 import table from "./data/molecules.json";
 import type { MolecularConstants } from "./types.js";
 
-const MOLECULES: readonly MolecularConstants[] = (table as { molecules: MolecularConstants[] })
-  .molecules;
+function deepFreeze<T>(value: T): T {
+  if (typeof value === "object" && value !== null && !Object.isFrozen(value)) {
+    for (const v of Object.values(value)) deepFreeze(v);
+    Object.freeze(value);
+  }
+  return value;
+}
+
+/** The shipped table, frozen so that no cell can change it for the rest of a session. */
+const MOLECULES: readonly MolecularConstants[] = deepFreeze(
+  (table as { molecules: MolecularConstants[] }).molecules,
+);
 
 /** Ids of the molecules shipped with the library, in table order. */
 export function listMolecules(): readonly string[] {

@@ -187,3 +187,14 @@ describe("no shared mutable state", () => {
     expect(gas.contributions(500).total.cp).toBe(parts.total.cp);
   });
 });
+
+describe("shipped table is read-only", () => {
+  it("getMolecule returns a deeply frozen record", () => {
+    const ethane = getMolecule("ethane");
+    expect(Object.isFrozen(ethane)).toBe(true);
+    expect(Object.isFrozen(ethane.vibrations[0])).toBe(true);
+    expect(() => {
+      (ethane.rotationalConstantsInvCm as number[])[0] = 1;
+    }).toThrow(TypeError);
+  });
+});
