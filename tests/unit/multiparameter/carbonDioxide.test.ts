@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referencePropertiesTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceProperties.js";
+import { referenceStateTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
 import { locateCriticalPoint } from "../../../kernel-lib/src/phase/criticalPoint.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 
@@ -65,15 +65,15 @@ describe("carbon dioxide: reference state and ideal part", () => {
     // Span and Wagner (1996), section 6.2 (from memory). Evaluated at a density 1e-6 of that of
     // the ideal gas at 0.101325 MPa, where s_ig = R ln(1e6) exactly and residual parts are ~1e-9.
     const rho0 = 101325 / (co2.gasConstant * 298.15);
-    const p = referencePropertiesTRho(co2, 298.15, rho0 * 1e-6);
-    expect(Math.abs(p.h)).toBeLessThan(1e-3);
-    expect(Math.abs(p.s - co2.gasConstant * Math.log(1e6))).toBeLessThan(1e-6);
+    const p = referenceStateTRho(co2, 298.15, rho0 * 1e-6);
+    expect(Math.abs(p.molar.h)).toBeLessThan(1e-3);
+    expect(Math.abs(p.molar.s - co2.gasConstant * Math.log(1e6))).toBeLessThan(1e-6);
   });
 
   it("ideal-gas cp at 298.15 K: 37.135 J/(mol K)", () => {
     // NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998), CO2 at 298.15 K (from memory);
     // the Span-Wagner ideal part was fitted to such data within about 0.02 %.
-    const p = referencePropertiesTRho(co2, 298.15, 1e-6);
-    expect(Math.abs(p.cp / 37.135 - 1)).toBeLessThan(5e-4);
+    const p = referenceStateTRho(co2, 298.15, 1e-6);
+    expect(Math.abs(p.molar.cp / 37.135 - 1)).toBeLessThan(5e-4);
   });
 });

@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referencePropertiesTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceProperties.js";
+import { referenceStateTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
 import { locateCriticalPoint } from "../../../kernel-lib/src/phase/criticalPoint.js";
 import {
   saturationAtPressure,
@@ -47,12 +47,12 @@ describe("IAPWS R6-95(2018) Table 8: saturation at 275, 450 and 625 K", () => {
       expectRel(sat.pressurePa / 1e6, ps, 1e-8);
       expectRel(sat.liquidDensityMolPerM3 * M, rhoL, 1e-8);
       expectRel(sat.vaporDensityMolPerM3 * M, rhoV, 1e-8);
-      const L = referencePropertiesTRho(water, T, sat.liquidDensityMolPerM3);
-      const V = referencePropertiesTRho(water, T, sat.vaporDensityMolPerM3);
-      expectRel(L.h / M / 1e3, hL, 1e-8);
-      expectRel(V.h / M / 1e3, hV, 1e-8);
-      expectRel(L.s / M / 1e3, sL, 1e-8);
-      expectRel(V.s / M / 1e3, sV, 1e-8);
+      const L = referenceStateTRho(water, T, sat.liquidDensityMolPerM3);
+      const V = referenceStateTRho(water, T, sat.vaporDensityMolPerM3);
+      expectRel(L.molar.h / M / 1e3, hL, 1e-8);
+      expectRel(V.molar.h / M / 1e3, hV, 1e-8);
+      expectRel(L.molar.s / M / 1e3, sL, 1e-8);
+      expectRel(V.molar.s / M / 1e3, sV, 1e-8);
       // h_vap from alpha_r alone equals the difference of the absolute enthalpies.
       expectRel(sat.enthalpyOfVaporizationJPerMol / M / 1e3, hV - hL, 2e-8);
       expectRel(sat.entropyOfVaporizationJPerMolK / M / 1e3, sV - sL, 2e-8);
@@ -80,9 +80,9 @@ describe("IAPWS-95 fixed points", () => {
     expect(Math.abs(s.liquidDensityMolPerM3 * M - 999.793)).toBeLessThan(5e-4);
     expect(Math.abs(s.vaporDensityMolPerM3 * M - 0.00485458)).toBeLessThan(5e-9);
     // The reference state: u' = 0 and s' = 0 at the triple point (IAPWS-95 convention).
-    const L = referencePropertiesTRho(water, 273.16, s.liquidDensityMolPerM3);
-    expect(Math.abs(L.u)).toBeLessThan(1e-6);
-    expect(Math.abs(L.s)).toBeLessThan(1e-9);
+    const L = referenceStateTRho(water, 273.16, s.liquidDensityMolPerM3);
+    expect(Math.abs(L.molar.u)).toBeLessThan(1e-6);
+    expect(Math.abs(L.molar.s)).toBeLessThan(1e-9);
   });
 
   it("normal boiling point 373.124 K at 101325 Pa", () => {

@@ -7,8 +7,9 @@ export type {
   ValidityStatus,
 } from "./referenceFluid.js";
 export { buildReferenceFluid } from "./referenceFluid.js";
-export { referencePropertiesTRho } from "./referenceProperties.js";
-export type { ReferenceProperties, ReferencePropertiesOptions } from "./referenceProperties.js";
+export { referenceStateTRho, referenceStateTP, referenceFluidBinding } from "./referenceStates.js";
+export type { ReferenceStateOptions } from "./referenceStates.js";
+export { referenceIdealGasPure, referenceIdealGasMixture } from "./referenceIdealGas.js";
 export type { ReferenceFluidData, AncillaryData } from "./fluidData.js";
 export type { ReducedHelmholtz, ResidualPartData } from "./residualPart.js";
 export type { IdealPartData } from "./idealPart.js";

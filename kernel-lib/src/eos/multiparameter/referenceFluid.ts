@@ -15,6 +15,7 @@ import type { ReferenceState } from "../../idealgas/types.js";
 import { compileAncillary, type Ancillary } from "./ancillary.js";
 import type { RangeData, ReferenceFluidData } from "./fluidData.js";
 import { compileIdealPart, type IdealPart } from "./idealPart.js";
+import { referenceDensityRoots } from "./referenceDensity.js";
 import {
   compileResidualPart,
   emptyReducedHelmholtz,
@@ -121,7 +122,7 @@ export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
     return "outside";
   }
 
-  return {
+  const fluid: ReferenceFluid = {
     info,
     gasConstant: R,
     data,
@@ -181,5 +182,17 @@ export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
       };
     },
     validityStatus,
+    pseudoCritical() {
+      return {
+        temperatureK: data.critical.temperatureK,
+        pressurePa: data.critical.pressurePa,
+        densityMolPerM3: data.critical.densityKgPerM3 / M,
+        rule: "published critical point of the equation",
+      };
+    },
+    densityRoots(temperatureK: number, pressurePa: number): number[] {
+      return referenceDensityRoots(fluid, temperatureK, pressurePa);
+    },
   };
+  return fluid;
 }

@@ -8,10 +8,14 @@ import type { ReferenceFluidData } from "./fluidData.js";
 import { buildReferenceFluid, type ReferenceFluid } from "./referenceFluid.js";
 import water from "./data/water.json";
 import carbonDioxide from "./data/carbon-dioxide.json";
+import methane from "./data/methane.json";
+import nitrogen from "./data/nitrogen.json";
 
 const DATA: Readonly<Record<string, ReferenceFluidData>> = {
   water: water as ReferenceFluidData,
   "carbon-dioxide": carbonDioxide as ReferenceFluidData,
+  methane: methane as ReferenceFluidData,
+  nitrogen: nitrogen as ReferenceFluidData,
 };
 
 const built = new Map<string, ReferenceFluid>();

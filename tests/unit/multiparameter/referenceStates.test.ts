@@ -1,0 +1,141 @@
+/**
+ * Reference fluids through the engine's state functions: density at given (T, P) on the stable
+ * branch (IAPWS R6-95 Table 7 inverted), the ideal part through the IdealGasPure contract, the
+ * registry, and the validity policy.
+ */
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import {
+  referenceFluid,
+  referenceFluidIds,
+} from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import {
+  referenceStateTP,
+  referenceStateTRho,
+} from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceIdealGasPure } from "../../../kernel-lib/src/eos/multiparameter/referenceIdealGas.js";
+import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
+import { InputError, OutOfRangeError, UnknownNameError } from "../../../kernel-lib/src/errors.js";
+
+const water = referenceFluid("water");
+const M = 0.018015268;
+
+describe("density at given (T, P): IAPWS R6-95(2018) Table 7 inverted", () => {
+  // [T K, p MPa, rho kg/m3] from memory of R6-95(2018) Table 7. The pressure is printed to nine
+  // digits, so the density it implies is known to about 5e-9 / (rho/p dp/drho) relative; the
+  // tolerance 1e-7 relative covers that for every row (the stiff liquid rows constrain rho best).
+  const rows: [number, number, number][] = [
+    [300, 0.992418352e-1, 996.556],
+    [300, 0.200022515e2, 1005.308],
+    [300, 0.700004704e3, 1188.202],
+    [500, 0.999679423e-1, 0.435],
+    [500, 0.999938125, 4.532],
+    [500, 0.100003858e2, 838.025],
+    [500, 0.700000405e3, 1084.564],
+    [647, 0.220384756e2, 358.0],
+    [900, 0.100062559, 0.241],
+    [900, 0.20000069e2, 52.615],
+    [900, 0.700000006e3, 870.769],
+  ];
+  for (const [T, p, rho] of rows) {
+    it(`T = ${T} K, p = ${p} MPa -> ${rho} kg/m3`, () => {
+      const s = referenceStateTP(water, T, p * 1e6);
+      // 647 K, 22.0384756 MPa lies 7e-5 MPa above the saturation pressure (22.0384057 MPa).
+      const tol = T === 647 ? 2e-6 : 1e-7;
+      expect(Math.abs(s.densityKgPerM3 / rho - 1)).toBeLessThan(tol);
+      expect(s.referenceState.kind).toBe("fluid-convention");
+    });
+  }
+
+  it("picks the stable branch on both sides of the saturation pressure (no spurious roots)", () => {
+    for (const T of [300, 400, 550, 640, 647.09]) {
+      const sat = saturationAtTemperature(water, T);
+      const above = referenceStateTP(water, T, sat.pressurePa * 1.001);
+      const below = referenceStateTP(water, T, sat.pressurePa * 0.999);
+      expect(above.densityMolPerM3).toBeGreaterThanOrEqual(sat.liquidDensityMolPerM3);
+      expect(below.densityMolPerM3).toBeLessThanOrEqual(sat.vaporDensityMolPerM3);
+      expect(above.phase).toBe("liquid");
+      expect(below.phase).toBe("vapor");
+    }
+  });
+
+  it("round trip (T, rho) -> P -> rho over random single-phase states", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 280, max: 1200, noNaN: true }),
+        fc.double({ min: 1e3, max: 5e8, noNaN: true }),
+        (T, P) => {
+          const s = referenceStateTP(water, T, P);
+          const back = referenceStateTRho(water, T, s.densityMolPerM3);
+          // A liquid's pressure is a small difference of large terms (rho R T (1 + aD), 1 + aD near
+          // 0), so the round trip is judged on the scale rho R T, not on P.
+          const scale = Math.max(P, s.densityMolPerM3 * water.gasConstant * T);
+          expect(Math.abs(back.pressurePa - P)).toBeLessThan(1e-9 * scale);
+          expect(s.dPdRhoPaM3PerMol).toBeGreaterThan(0);
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
+});
+
+describe("ideal part through the IdealGasPure contract", () => {
+  it("water: cp(298.15 K) = 33.58 J/(mol K), S(298.15 K, 1 bar) = 188.835 J/(mol K)", () => {
+    // cp: NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998), H2O(g) at 298.15 K: 33.590
+    // J/(mol K) (from memory); IAPWS-95's ideal part (Cooper 1982 form) agrees within 0.1 %.
+    // S: CODATA Key Values (Cox, Wagman and Medvedev 1989), the anchor of the entropy.
+    const ig = referenceIdealGasPure(water);
+    expect(Math.abs(ig.cp(298.15) / 33.59 - 1)).toBeLessThan(1e-3);
+    expect(Math.abs(ig.entropyStandard(298.15) - 188.835)).toBeLessThan(1e-9);
+    expect(ig.enthalpyFrom298(298.15)).toBe(0);
+  });
+
+  it("dh/dT = cp and ds/dT = cp/T (identities, central differences)", () => {
+    for (const id of referenceFluidIds()) {
+      const ig = referenceIdealGasPure(referenceFluid(id));
+      for (const T of [250, 400, 800]) {
+        const h = 1e-3;
+        const dh = (ig.enthalpyFrom298(T + h) - ig.enthalpyFrom298(T - h)) / (2 * h);
+        const ds = (ig.entropyStandard(T + h) - ig.entropyStandard(T - h)) / (2 * h);
+        expect(Math.abs(dh / ig.cp(T) - 1)).toBeLessThan(1e-7);
+        expect(Math.abs((ds * T) / ig.cp(T) - 1)).toBeLessThan(1e-7);
+      }
+    }
+  });
+
+  it("refuses a bad temperature", () => {
+    const ig = referenceIdealGasPure(water);
+    for (const bad of [NaN, 0, -5, Infinity]) expect(() => ig.cp(bad)).toThrow(InputError);
+  });
+});
+
+describe("registry and validity policy", () => {
+  it("ships water, carbon dioxide, methane and nitrogen", () => {
+    expect(referenceFluidIds().sort()).toEqual(["carbon-dioxide", "methane", "nitrogen", "water"]);
+    expect(() => referenceFluid("steam")).toThrow(UnknownNameError);
+    expect(() => referenceFluid("carbon dioxide")).toThrow(UnknownNameError);
+  });
+
+  it("warns outside the published range and refuses beyond the extrapolation range", () => {
+    // IAPWS-95 is valid to 1273 K; 2000 K is inside the extrapolation range (to 5000 K).
+    const hot = referenceStateTRho(water, 2000, 100);
+    expect(hot.warnings.some((w) => w.code === "outside-validity" && /1273/.test(w.message))).toBe(
+      true,
+    );
+    expect(() => referenceStateTRho(water, 6000, 100)).toThrow(OutOfRangeError);
+    expect(() => referenceStateTP(water, 6000, 1e5)).toThrow(/allowOutsideRange/);
+    const forced = referenceStateTRho(water, 6000, 100, { allowOutsideRange: true });
+    expect(forced.warnings.some((w) => /not trustworthy/.test(w.message))).toBe(true);
+    const inside = referenceStateTP(water, 400, 1e6);
+    expect(inside.warnings.filter((w) => w.code === "outside-validity")).toEqual([]);
+  });
+
+  it("refuses NaN, zero, negative and infinite inputs", () => {
+    for (const bad of [NaN, 0, -1, Infinity]) {
+      expect(() => referenceStateTRho(water, bad, 100)).toThrow(InputError);
+      expect(() => referenceStateTRho(water, 300, bad)).toThrow(InputError);
+      expect(() => referenceStateTP(water, bad, 1e5)).toThrow(InputError);
+      expect(() => referenceStateTP(water, 300, bad)).toThrow(InputError);
+    }
+  });
+});
