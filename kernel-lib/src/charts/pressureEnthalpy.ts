@@ -27,7 +27,6 @@ import {
   WarningList,
   type BaseChartOptions,
 } from "./specParts.js";
-import { INK } from "./theme.js";
 
 /** A point on a P-h diagram, SI per mole. */
 export interface PressureEnthalpyPoint {

@@ -31,7 +31,9 @@ export function logGrid(start: number, stop: number, n: number): number[] {
   const a = Math.log(start);
   const b = Math.log(stop);
   const out: number[] = [];
-  for (let i = 0; i < n; i++) out.push(i === n - 1 ? stop : Math.exp(a + ((b - a) * i) / (n - 1)));
+  for (let i = 0; i < n; i++) {
+    out.push(i === 0 ? start : i === n - 1 ? stop : Math.exp(a + ((b - a) * i) / (n - 1)));
+  }
   return out;
 }
 

@@ -1,3 +1,4 @@
+/* eslint-disable @typescript-eslint/no-explicit-any -- the tests read into plain JSON specs */
 import { describe, expect, it } from "vitest";
 import { isothermChart } from "../../../kernel-lib/src/charts/isotherms.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
