@@ -92,6 +92,56 @@ describe("harmonic limit (V0 large)", () => {
   });
 });
 
+describe("classical hindered rotor and the Pitzer-Gwinn approximation", () => {
+  // Classical partition function of V0/2 (1 - cos n phi) (closed form, Pitzer & Gwinn,
+  // J. Chem. Phys. 10 (1942) 428):
+  //   q_cl = (1/sigma) sqrt(pi T / theta_B) exp(-x) I0(x),  x = V0 / (2 kB T).
+  // Pitzer-Gwinn: q_PG = q_cl * q_HO,quantum / q_HO,classical, with the harmonic wavenumber
+  // n sqrt(V0 B); accurate to a few percent in q (McClurg, Flagan & Goddard, J. Chem. Phys. 106
+  // (1997) 6675, from memory), i.e. a few hundredths of R in s.
+  const lnI0 = (x: number) => {
+    let term = 1;
+    let sum = 1;
+    for (let k = 1; k < 500 && term > 1e-17 * sum; k++) {
+      term *= (x / 2) ** 2 / (k * k);
+      sum += term;
+    }
+    return Math.log(sum);
+  };
+  const cases = [100, 1012, 4000].map((v0) => {
+    const rotor = { ...methyl, barrierInvCm: v0 };
+    const model = buildHinderedRotor(rotor);
+    const thetaB = wavenumberToKelvin(model.rotationalConstantInvCm);
+    const thetaV = wavenumberToKelvin(v0);
+    const nu = hinderedRotorHarmonicWavenumber(rotor);
+    const lnQcl = (t: number) =>
+      Math.log(Math.sqrt((Math.PI * t) / thetaB) / 3) - thetaV / (2 * t) + lnI0(thetaV / (2 * t));
+    const sCl = (t: number) => {
+      const h = 1e-4 * t;
+      return R * (lnQcl(t) + (t * (lnQcl(t + h) - lnQcl(t - h))) / (2 * h));
+    };
+    const sPg = (t: number) =>
+      sCl(t) +
+      harmonicVibrationContribution([{ wavenumberInvCm: nu, degeneracy: 1 }], t).entropy -
+      R * (Math.log(t / wavenumberToKelvin(nu)) + 1);
+    return { v0, model, sCl, sPg };
+  });
+
+  it("the quantum levels tend to the classical rotor at high T (3000 K: within 0.005 R)", () => {
+    for (const c of cases) {
+      expect(Math.abs(c.model.contribution(3000).entropy - c.sCl(3000)) / R).toBeLessThan(0.005);
+    }
+  });
+
+  it("Pitzer-Gwinn agrees within 0.04 R in s from 100 K to 3000 K, barriers 100 to 4000 cm^-1", () => {
+    for (const c of cases) {
+      for (const t of [100, 300, 1000, 3000]) {
+        expect(Math.abs(c.model.contribution(t).entropy - c.sPg(t)) / R).toBeLessThan(0.04);
+      }
+    }
+  });
+});
+
 describe("basis convergence and input checks", () => {
   it("a larger basis does not change the thermodynamic functions", () => {
     const a = buildHinderedRotor(methyl);
