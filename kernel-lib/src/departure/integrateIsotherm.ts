@@ -14,13 +14,18 @@
  * D_i Z by central differences in mole fraction, h = 1e-5 (forward three-point where x_i < 2h);
  * error O(h^2) (about 1e-10 for smooth mixing rules) plus rounding eps/h (about 1e-11).
  *
- * Quadrature: adaptive Gauss-Kronrod 7-15 (numerics/gaussKronrod.ts, QUADPACK QAG). The
- * integrand (Z-1)/rho' is finite at rho' -> 0 (it tends to the second virial coefficient), and
- * the Kronrod nodes never touch 0, so no 0/0 is formed; "series start": below rho' = 1e-12 rho the
- * integrand is taken as its value at that point (the first term of its virial series), an error
- * below 1e-12 of the integral. When the model has a finite maximum density rho_max (close
- * packing), the variable is changed to s = -ln(1 - rho'/rho_max), drho' = (rho_max - rho') ds,
- * which removes the 1/(rho_max - rho') growth of the repulsive term and keeps dense liquids cheap.
+ * Series start: the integrand (Z-1)/rho' tends to the second virial coefficient B as rho' -> 0,
+ * but computed from P it loses digits there (Z - 1 is a difference of nearly equal numbers: at
+ * |Z - 1| = 1e-12 only four digits remain). So below a switch density rho_s, chosen where
+ * |Z - 1| is about 1e-6 (ten digits left), each integrand is replaced by its virial series to
+ * second order, F(rho') = c0 + c1 rho' + c2 rho'^2, fitted through rho_s/4, rho_s/2 and rho_s and
+ * integrated exactly; the neglected cubic term is of relative size (B rho_s)^3 ~ 1e-18, and the
+ * quadratic term itself, |c2| r^3 / 3, is reported as the error estimate of that piece (a
+ * conservative bound). This also gives full relative accuracy at densities far below rho_s.
+ * Above rho_s: adaptive Gauss-Kronrod 7-15 (numerics/gaussKronrod.ts, QUADPACK QAG). When the
+ * model has a finite maximum density rho_max (close packing), the variable is changed to
+ * s = -ln(1 - rho'/rho_max), drho' = (rho_max - rho') ds, which removes the 1/(rho_max - rho')
+ * growth of the repulsive term and keeps dense liquids cheap.
  */
 import { R as R_CODATA } from "../constants.js";
 import { integrateAdaptive } from "../numerics/gaussKronrod.js";
@@ -67,23 +72,105 @@ export interface IntegratedResidual {
 
 const COMPOSITION_STEP = 1e-5;
 
+/** F(rho') ~ c0 + c1 rho' + c2 rho'^2 below the switch density (see the header). */
+export interface SeriesStart {
+  /** Switch density rho_s, mol/m3. */
+  readonly densityMolPerM3: number;
+  /** c0 of the three integrands [alpha, T alpha_T, T^2 alpha_TT] (units of 1/rho). */
+  readonly c0: Float64Array;
+  /** c1 of the three integrands. */
+  readonly c1: Float64Array;
+  /** c2 of the three integrands. */
+  readonly c2: Float64Array;
+}
+
+/** Quadratic through (r/4, f1), (r/2, f2), (r, f3): coefficients [c0, c1, c2] of c0 + c1 t + c2 t^2. */
+export function quadraticThrough(
+  r: number,
+  f1: number,
+  f2: number,
+  f3: number,
+): [number, number, number] {
+  // Newton divided differences on t1 = r/4, t2 = r/2, t3 = r
+  const t1 = 0.25 * r;
+  const t2 = 0.5 * r;
+  const d12 = (f2 - f1) / (t2 - t1);
+  const d23 = (f3 - f2) / (r - t2);
+  const c2 = (d23 - d12) / (r - t1);
+  const c1 = d12 - c2 * (t1 + t2);
+  const c0 = f1 - c1 * t1 - c2 * t1 * t1;
+  return [c0, c1, c2];
+}
+
+/** Integral of c0 + c1 t + c2 t^2 over [0, r] and the size of its quadratic part. */
+function seriesPiece(
+  c0: number,
+  c1: number,
+  c2: number,
+  r: number,
+): { value: number; error: number } {
+  const q = (c2 * r * r * r) / 3;
+  return { value: c0 * r + 0.5 * c1 * r * r + q, error: Math.abs(q) };
+}
+
 /** The integrands along one isotherm, in the integration variable u (see the header). */
 export interface IsothermIntegrands {
   /** u at density rho (mol/m3). */
   toVariable(densityMolPerM3: number): number;
   /** rho' at u. */
   densityAt(u: number): number;
+  /** drho'/du at u. */
+  jacobianAt(u: number): number;
   /**
-   * Integrands at u: [alpha_r, T dalpha_r/dT, T^2 d2alpha_r/dT2, and the finite-difference error
-   * bounds of the last two], memoised by u so the three quadratures share their nodes.
+   * Integrands at u, times drho'/du: [alpha_r, T dalpha_r/dT, T^2 d2alpha_r/dT2, and the
+   * finite-difference error bounds of the last two], memoised by u so the three quadratures share
+   * their nodes.
    */
   values(u: number): Float64Array;
-  /** drho'/du / rho': the Jacobian of u times the 1/rho' of the integrands. */
-  weightAt(u: number, densityMolPerM3: number): number;
+  /** The series start below rho_s. */
+  readonly series: SeriesStart;
+  /** Integral of the series over [0, r] (r <= rho_s) for integrand k, with its error bound. */
+  seriesIntegral(k: number, r: number): { value: number; error: number };
   /** Pressure evaluations so far. */
   evaluations(): number;
   /** Memoised node values (for the finite-difference error bound). */
-  memo: Map<number, Float64Array>;
+  readonly memo: Map<number, Float64Array>;
+}
+
+/** Integrands without the Jacobian at density rho' (written into out[0..4]). */
+function rawIntegrands(
+  evaluator: PressureEvaluator,
+  T: number,
+  r: number,
+  x: readonly number[],
+  RT: number,
+  series: PressureSeries,
+  out: Float64Array,
+): void {
+  evaluator.alongTemperature(T, r, x, series);
+  const inv = 1 / (r * r * RT);
+  out[0] = (series.p / (r * RT) - 1) / r;
+  out[1] = (T * series.d1 - series.p) * inv;
+  out[2] = (T * T * series.d2 - 2 * T * series.d1 + 2 * series.p) * inv;
+  out[3] = T * series.d1Error * inv;
+  out[4] = T * T * series.d2Error * inv;
+}
+
+/**
+ * Switch density where |Z - 1| is about 1e-6, found from the slope of Z - 1 at a probe density
+ * (two refinements), capped at half the close-packing density and at 1e8 times the probe.
+ */
+function switchDensity(zMinusOne: (r: number) => number, probe: number, rhoMax: number): number {
+  const cap = Math.min(Number.isFinite(rhoMax) ? 0.5 * rhoMax : Infinity, probe * 1e8);
+  let r = Math.min(probe, cap);
+  for (let k = 0; k < 3; k++) {
+    const z = Math.abs(zMinusOne(r));
+    if (!(z > 0)) return Math.min(cap, r * 1e4);
+    const next = Math.min(cap, (r * 1e-6) / z);
+    if (Math.abs(next / r - 1) < 0.5) return next;
+    r = next;
+  }
+  return r;
 }
 
 /** Builds the integrands of one isotherm (T, x), with the close-packing change of variable. */
@@ -93,44 +180,58 @@ export function isothermIntegrands(
   x: readonly number[],
   gasConstant: number,
   maxDensityMolPerM3: number,
-  floorDensityMolPerM3: number,
+  probeDensityMolPerM3: number,
 ): IsothermIntegrands {
   const T = temperatureK;
   const RT = gasConstant * T;
   const rhoMax = maxDensityMolPerM3;
   const transformed = Number.isFinite(rhoMax);
-  const floor = floorDensityMolPerM3;
-  const densityAt = (u: number): number => {
-    const r = transformed ? -rhoMax * Math.expm1(-u) : u;
-    return r < floor ? floor : r;
-  };
-  const weightAt = (u: number, r: number): number =>
-    transformed ? (rhoMax * Math.exp(-u)) / r : 1 / r;
+  const densityAt = (u: number): number => (transformed ? -rhoMax * Math.expm1(-u) : u);
+  const jacobianAt = (u: number): number => (transformed ? rhoMax * Math.exp(-u) : 1);
   let count = 0;
-  const series: PressureSeries = { p: 0, d1: 0, d2: 0, d1Error: 0, d2Error: 0 };
+  const ps: PressureSeries = { p: 0, d1: 0, d2: 0, d1Error: 0, d2Error: 0 };
+  const rs = switchDensity(
+    (r) => {
+      count++;
+      return evaluator.value(T, r, x) / (r * RT) - 1;
+    },
+    probeDensityMolPerM3,
+    rhoMax,
+  );
+  const f1 = new Float64Array(5);
+  const f2 = new Float64Array(5);
+  const f3 = new Float64Array(5);
+  rawIntegrands(evaluator, T, 0.25 * rs, x, RT, ps, f1);
+  rawIntegrands(evaluator, T, 0.5 * rs, x, RT, ps, f2);
+  rawIntegrands(evaluator, T, rs, x, RT, ps, f3);
+  count += 3;
+  const c0 = new Float64Array(3);
+  const c1 = new Float64Array(3);
+  const c2 = new Float64Array(3);
+  for (let k = 0; k < 3; k++) {
+    [c0[k], c1[k], c2[k]] = quadraticThrough(rs, f1[k], f2[k], f3[k]);
+  }
   const memo = new Map<number, Float64Array>();
+  const raw = new Float64Array(5);
   const values = (u: number): Float64Array => {
     let v = memo.get(u);
     if (v) return v;
     const r = densityAt(u);
-    const w = weightAt(u, r);
-    evaluator.alongTemperature(T, r, x, series);
+    const j = jacobianAt(u);
+    rawIntegrands(evaluator, T, r, x, RT, ps, raw);
     count++;
-    const inv = 1 / (r * RT);
     v = new Float64Array(5);
-    v[0] = w * (series.p * inv - 1);
-    v[1] = w * (T * series.d1 - series.p) * inv;
-    v[2] = w * (T * T * series.d2 - 2 * T * series.d1 + 2 * series.p) * inv;
-    v[3] = w * T * series.d1Error * inv;
-    v[4] = w * T * T * series.d2Error * inv;
+    for (let k = 0; k < 5; k++) v[k] = j * raw[k];
     memo.set(u, v);
     return v;
   };
   return {
     toVariable: (rho) => (transformed ? -Math.log1p(-rho / rhoMax) : rho),
     densityAt,
+    jacobianAt,
     values,
-    weightAt,
+    series: { densityMolPerM3: rs, c0, c1, c2 },
+    seriesIntegral: (k, r) => seriesPiece(c0[k], c1[k], c2[k], r),
     evaluations: () => count,
     memo,
   };
@@ -169,6 +270,82 @@ export function endpointDerivatives(
 }
 
 /**
+ * Endpoint derivatives, taken from the series start when rho is below the switch density (where
+ * Z - 1 computed from P would have lost its digits): with Z - 1 = rho F(rho), F = c0 + c1 rho +
+ * c2 rho^2, aD = rho F, aDD = rho^2 F', aDDD = rho^3 F'', aDT = rho F_T (the second integrand).
+ */
+export function endpointWithSeries(
+  evaluator: PressureEvaluator,
+  line: IsothermIntegrands,
+  temperatureK: number,
+  densityMolPerM3: number,
+  x: readonly number[],
+  gasConstant: number,
+): EndpointDerivatives {
+  const rho = densityMolPerM3;
+  const s = line.series;
+  if (!(rho < s.densityMolPerM3))
+    return endpointDerivatives(evaluator, temperatureK, rho, x, gasConstant);
+  const F = s.c0[0] + s.c1[0] * rho + s.c2[0] * rho * rho;
+  const aD = rho * F;
+  return {
+    pressurePa: rho * gasConstant * temperatureK * (1 + aD),
+    aD,
+    aDD: rho * rho * (s.c1[0] + 2 * s.c2[0] * rho),
+    aDDD: 2 * s.c2[0] * rho * rho * rho,
+    aDT: rho * (s.c0[1] + s.c1[1] * rho + s.c2[1] * rho * rho),
+  };
+}
+
+/** Quadrature tolerances of one integral; looser where the integrand carries differencing noise. */
+function tolerances(
+  options: IntegrationOptions,
+  noisy: boolean,
+): { relTolerance: number; absTolerance: number; maxSubdivisions: number } {
+  const rel = options.relTolerance ?? 1e-11;
+  const abs = options.absTolerance ?? 1e-14;
+  return {
+    relTolerance: noisy ? Math.max(rel, 1e-9) : rel,
+    absTolerance: noisy ? Math.max(abs, 1e-12) : abs,
+    maxSubdivisions: options.maxSubdivisions ?? 200,
+  };
+}
+
+/**
+ * Integral of integrand k of `line` from 0 to rho: the series below rho_s, quadrature above.
+ * Returns { value, errorEstimate }.
+ */
+export function integrateFromZero(
+  line: IsothermIntegrands,
+  k: number,
+  fromDensity: number,
+  toDensity: number,
+  quad: { relTolerance: number; absTolerance: number; maxSubdivisions: number },
+): { value: number; errorEstimate: number } {
+  const rs = line.series.densityMolPerM3;
+  let value = 0;
+  let err = 0;
+  if (fromDensity < rs) {
+    const top = line.seriesIntegral(k, Math.min(rs, toDensity));
+    const bottom = line.seriesIntegral(k, fromDensity);
+    value += top.value - bottom.value;
+    err += top.error + bottom.error;
+  }
+  const start = Math.max(fromDensity, rs);
+  if (toDensity > start) {
+    const q = integrateAdaptive(
+      (u) => line.values(u)[k],
+      line.toVariable(start),
+      line.toVariable(toDensity),
+      quad,
+    );
+    value += q.value;
+    err += q.errorEstimate;
+  }
+  return { value, errorEstimate: err };
+}
+
+/**
  * alpha_r and all its derivatives at (T, rho, x) from a pressure function (see the header).
  *
  * @example
@@ -189,25 +366,14 @@ export function integrateResidual(
   const Rg = options.gasConstant ?? R_CODATA;
   const RT = Rg * T;
   const rhoMax = options.maxDensityMolPerM3 ?? Infinity;
-  const quad = {
-    relTolerance: options.relTolerance ?? 1e-11,
-    absTolerance: options.absTolerance ?? 1e-14,
-    maxSubdivisions: options.maxSubdivisions ?? 200,
-  };
-  const line = isothermIntegrands(
-    evaluator,
-    T,
-    x,
-    Rg,
-    rhoMax > rho ? rhoMax : Infinity,
-    rho * 1e-12,
-  );
-  const upper = line.toVariable(rho);
-  const ia = integrateAdaptive((u) => line.values(u)[0], 0, upper, quad);
-  const iT = integrateAdaptive((u) => line.values(u)[1], 0, upper, quad);
-  const iTT = integrateAdaptive((u) => line.values(u)[2], 0, upper, quad);
-  const fd = finiteDifferenceBound(evaluator, line, upper);
-  const end = endpointDerivatives(evaluator, T, rho, x, Rg);
+  const line = isothermIntegrands(evaluator, T, x, Rg, rhoMax > rho ? rhoMax : Infinity, rho);
+  const exactQuad = tolerances(options, false);
+  const derivQuad = tolerances(options, !evaluator.exact);
+  const ia = integrateFromZero(line, 0, 0, rho, exactQuad);
+  const iT = integrateFromZero(line, 1, 0, rho, derivQuad);
+  const iTT = integrateFromZero(line, 2, 0, rho, derivQuad);
+  const fd = finiteDifferenceBound(evaluator, line, rho);
+  const end = endpointWithSeries(evaluator, line, T, rho, x, Rg);
   let evaluations = line.evaluations() + 2;
   const aD = end.aD;
   const derivatives: {
@@ -235,6 +401,12 @@ export function integrateResidual(
     dnAErrors = new Array<number>(n);
     const xp = new Array<number>(n);
     const xm = new Array<number>(n);
+    const rs = line.series.densityMolPerM3;
+    // differenced integrand: rounding noise about eps/h = 2e-11 per node, so 1e-10 absolute at best
+    const compQuad = {
+      ...tolerances(options, true),
+      absTolerance: Math.max(options.absTolerance ?? 0, 1e-10),
+    };
     for (let i = 0; i < n; i++) {
       let onVertex = true;
       for (let k = 0; k < n; k++) if ((k === i ? 1 - x[k] : -x[k]) !== 0) onVertex = false;
@@ -251,31 +423,41 @@ export function integrateResidual(
       const shift = (target: number[], t: number): void => {
         for (let k = 0; k < n; k++) target[k] = x[k] + t * ((k === i ? 1 : 0) - x[k]);
       };
-      const integrand = (u: number): number => {
-        const r = line.densityAt(u);
-        const w = line.weightAt(u, r);
-        let dz: number;
+      // D_i Z / rho' at density r
+      const raw = (r: number): number => {
         if (central) {
           shift(xp, h);
           shift(xm, -h);
-          dz = (zAt(xp, r) - zAt(xm, r)) / (2 * h);
           evaluations += 2;
-        } else {
-          const z0 = zAt(x, r);
-          shift(xp, h);
-          const z1 = zAt(xp, r);
-          shift(xm, 2 * h);
-          const z2 = zAt(xm, r);
-          dz = (-3 * z0 + 4 * z1 - z2) / (2 * h);
-          evaluations += 3;
+          return (zAt(xp, r) - zAt(xm, r)) / (2 * h * r);
         }
-        return w * dz;
+        const z0 = zAt(x, r);
+        shift(xp, h);
+        const z1 = zAt(xp, r);
+        shift(xm, 2 * h);
+        const z2 = zAt(xm, r);
+        evaluations += 3;
+        return (-3 * z0 + 4 * z1 - z2) / (2 * h * r);
       };
-      const id = integrateAdaptive(integrand, 0, upper, quad);
-      dnA[i] = derivatives.a + aD + id.value;
+      // series start for this integrand too
+      const [s0, s1, s2] = quadraticThrough(rs, raw(0.25 * rs), raw(0.5 * rs), raw(rs));
+      const piece = seriesPiece(s0, s1, s2, Math.min(rs, rho));
+      let value = piece.value;
+      let err = piece.error;
+      if (rho > rs) {
+        const q = integrateAdaptive(
+          (u) => line.jacobianAt(u) * raw(line.densityAt(u)),
+          line.toVariable(rs),
+          line.toVariable(rho),
+          compQuad,
+        );
+        value += q.value;
+        err += q.errorEstimate;
+      }
+      dnA[i] = derivatives.a + aD + value;
       // quadrature errors plus an assumed differencing error of 1e-9 relative
       // (h = 1e-5: truncation O(h^2) ~ 1e-10, rounding eps/h ~ 2e-11)
-      dnAErrors[i] = ia.errorEstimate + id.errorEstimate + Math.abs(id.value) * 1e-9;
+      dnAErrors[i] = ia.errorEstimate + err + Math.abs(value) * 1e-9;
     }
     derivatives.dnA = dnA;
   }
@@ -293,20 +475,21 @@ export function integrateResidual(
 }
 
 /**
- * Bound of the finite-difference error in the T-derivative integrals: the largest memoised
- * node error times the integration length (zero for the exact hyper-dual route).
+ * Bound of the finite-difference error in the T-derivative integrals: the largest memoised node
+ * error (per unit density) times the density range (zero for the exact hyper-dual route).
  */
 export function finiteDifferenceBound(
   evaluator: PressureEvaluator,
   line: IsothermIntegrands,
-  length: number,
+  densityMolPerM3: number,
 ): { aT: number; aTT: number } {
   if (evaluator.exact) return { aT: 0, aTT: 0 };
   let t = 0;
   let tt = 0;
-  for (const v of line.memo.values()) {
-    t = Math.max(t, Math.abs(v[3]));
-    tt = Math.max(tt, Math.abs(v[4]));
+  for (const [u, v] of line.memo) {
+    const j = line.jacobianAt(u);
+    t = Math.max(t, Math.abs(v[3] / j));
+    tt = Math.max(tt, Math.abs(v[4] / j));
   }
-  return { aT: t * length, aTT: tt * length };
+  return { aT: t * densityMolPerM3, aTT: tt * densityMolPerM3 };
 }

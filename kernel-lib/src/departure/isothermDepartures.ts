@@ -5,11 +5,10 @@
  */
 import { R as R_CODATA } from "../constants.js";
 import { InputError, OutOfRangeError } from "../errors.js";
-import { integrateAdaptive } from "../numerics/gaussKronrod.js";
 import { checkComposition, checkTemperature } from "../state/checkInputs.js";
 import { residualProperties } from "../state/properties.js";
 import type { EnergySet } from "../state/types.js";
-import { endpointDerivatives, isothermIntegrands } from "./integrateIsotherm.js";
+import { endpointWithSeries, integrateFromZero, isothermIntegrands } from "./integrateIsotherm.js";
 import type { PressureModel } from "./pressureModel.js";
 
 /** One grid point of an isotherm. */
@@ -88,25 +87,24 @@ export function isothermDepartures(
     maxSubdivisions: opts.maxSubdivisions ?? 200,
   };
   const ev = model.evaluator;
-  const line = isothermIntegrands(ev, T, x, Rg, rhoMax, densitiesMolPerM3[0] * 1e-12);
+  const line = isothermIntegrands(ev, T, x, Rg, rhoMax, densitiesMolPerM3[0]);
   let a = 0;
   let aT = 0;
   let aTT = 0;
   let err = 0;
-  let uPrev = 0;
+  let prev = 0;
   let endpointEvaluations = 0;
   const points: IsothermDeparturePoint[] = [];
   for (const rho of densitiesMolPerM3) {
-    const u = line.toVariable(rho);
-    const ia = integrateAdaptive((v) => line.values(v)[0], uPrev, u, quad);
-    const iT = integrateAdaptive((v) => line.values(v)[1], uPrev, u, quad);
-    const iTT = integrateAdaptive((v) => line.values(v)[2], uPrev, u, quad);
+    const ia = integrateFromZero(line, 0, prev, rho, quad);
+    const iT = integrateFromZero(line, 1, prev, rho, quad);
+    const iTT = integrateFromZero(line, 2, prev, rho, quad);
     a += ia.value;
     aT += iT.value;
     aTT += iTT.value;
     err += ia.errorEstimate;
-    uPrev = u;
-    const end = endpointDerivatives(ev, T, rho, x, Rg);
+    prev = rho;
+    const end = endpointWithSeries(ev, line, T, rho, x, Rg);
     endpointEvaluations += 2;
     const sets = residualProperties(T, { a, aD: end.aD, aDD: end.aDD, aT, aTT, aDT: end.aDT }, Rg);
     points.push({
