@@ -16,17 +16,20 @@ Executes each notebook top to bottom in a fresh TypeScript session (tslab, in-pr
 and writes <name>.ipynb (executed) and <name>.html (calculation record) into the output folder.
 
 options:
-  --out <dir>   output folder (default: out/records under the current directory)
-  -h, --help    show this help
+  --out <dir>                output folder (default: out/records under the current directory)
+  --cell-timeout <seconds>   interrupt and fail a cell that runs longer (default 600)
+  -h, --help                 show this help
 `;
 
 interface ParsedArgs {
   outDir: string;
+  cellTimeoutMs?: number;
   notebooks: string[];
 }
 
 function parseArgs(argv: string[], cwd: string): ParsedArgs | { error: string } | "help" {
   let outDir = path.join(cwd, "out", "records");
+  let cellTimeoutMs: number | undefined;
   const notebooks: string[] = [];
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i];
@@ -35,6 +38,20 @@ function parseArgs(argv: string[], cwd: string): ParsedArgs | { error: string } 
       const value = arg === "--out" ? argv[++i] : arg.slice("--out=".length);
       if (value === undefined || value === "") return { error: "--out needs a folder" };
       outDir = path.resolve(cwd, value);
+    } else if (arg === "--cell-timeout" || arg.startsWith("--cell-timeout=")) {
+      const value = arg === "--cell-timeout" ? argv[++i] : arg.slice("--cell-timeout=".length);
+      const seconds = Number(value);
+      if (
+        value === undefined ||
+        value.trim() === "" ||
+        !(seconds > 0) ||
+        !Number.isFinite(seconds)
+      ) {
+        return {
+          error: `--cell-timeout needs a number of seconds > 0; received ${JSON.stringify(value ?? null)}`,
+        };
+      }
+      cellTimeoutMs = seconds * 1000;
     } else if (arg === "--") {
       notebooks.push(...argv.slice(i + 1));
       break;
@@ -45,7 +62,7 @@ function parseArgs(argv: string[], cwd: string): ParsedArgs | { error: string } 
     }
   }
   if (notebooks.length === 0) return { error: "no notebook given" };
-  return { outDir, notebooks };
+  return { outDir, notebooks, cellTimeoutMs };
 }
 
 function seconds(ms: number): string {
@@ -110,6 +127,7 @@ export async function runCommand(argv: string[], io: CliIo): Promise<number> {
     process.chdir(io.cwd);
     const records = await runNotebooks(parsed.notebooks, {
       outDir: parsed.outDir,
+      cellTimeoutMs: parsed.cellTimeoutMs,
       onProgress: progressPrinter(io, io.cwd),
     });
     io.stdout(

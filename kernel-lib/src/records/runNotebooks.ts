@@ -287,6 +287,14 @@ export async function runNotebooks(
   options: RunNotebooksOptions = {},
 ): Promise<NotebookRecord[]> {
   const outDir = path.resolve(options.outDir ?? path.join("out", "records"));
+  if (options.cellTimeoutMs !== undefined && !(options.cellTimeoutMs > 0)) {
+    throw new InputError({
+      input: "options.cellTimeoutMs",
+      unit: "ms",
+      validRange: "> 0",
+      received: options.cellTimeoutMs,
+    });
+  }
   const planned = plan(paths, outDir);
   fs.mkdirSync(outDir, { recursive: true });
   const records: NotebookRecord[] = [];

@@ -67,6 +67,11 @@ describe("isochor run (runCommand)", () => {
     const noDir = captureIo(work);
     expect(await runCommand(["a.ipynb", "--out"], noDir)).toBe(2);
     expect(noDir.err.join("")).toMatch(/--out needs a folder/);
+    const badTimeout = captureIo(work);
+    expect(await runCommand(["--cell-timeout", "-3", "a.ipynb"], badTimeout)).toBe(2);
+    expect(badTimeout.err.join("")).toMatch(
+      /--cell-timeout needs a number of seconds > 0; received "-3"/,
+    );
     const help = captureIo(work);
     expect(await runCommand(["--help"], help)).toBe(0);
     expect(help.out.join("")).toMatch(/^usage: isochor run \[--out <dir>\] <notebook.ipynb...>/);
