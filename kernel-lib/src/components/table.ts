@@ -22,9 +22,10 @@ export interface RawComponentRecord {
   /** As listed by the source; the Component's Zc is recomputed from Pc, Vc, Tc. */
   criticalCompressibility: number;
   acentricFactor: number;
-  enthalpyOfFormationKJPerMol: number;
-  gibbsEnergyOfFormationKJPerMol: number;
-  absoluteEntropyJPerMolK: number;
+  /** null when not included (see the formation source). */
+  enthalpyOfFormationKJPerMol: number | null;
+  gibbsEnergyOfFormationKJPerMol: number | null;
+  absoluteEntropyJPerMolK: number | null;
   idealGasCp: CpCorrelation;
   sources: {
     critical: string;
@@ -77,12 +78,12 @@ function fromRaw(r: RawComponentRecord): Component {
       criticalVolumeM3PerMol: r.criticalVolumeCm3PerMol * 1e-6,
       acentricFactor: r.acentricFactor,
       normalBoilingPointK: r.normalBoilingPointK,
-      enthalpyOfFormationJPerMol: r.enthalpyOfFormationKJPerMol * 1000,
-      gibbsEnergyOfFormationJPerMol: r.gibbsEnergyOfFormationKJPerMol * 1000,
-      absoluteEntropyJPerMolK: r.absoluteEntropyJPerMolK,
+      enthalpyOfFormationJPerMol: (r.enthalpyOfFormationKJPerMol ?? NaN) * 1000,
+      gibbsEnergyOfFormationJPerMol: (r.gibbsEnergyOfFormationKJPerMol ?? NaN) * 1000,
+      absoluteEntropyJPerMolK: r.absoluteEntropyJPerMolK ?? NaN,
       idealGasCp: r.idealGasCp,
       sources: {
-        critical: cite(r.sources.critical),
+        critical: cite(r.sources.critical) + note,
         boilingPoint: cite(r.sources.boilingPoint) + note,
         formation: cite(r.sources.formation),
         entropy: cite(r.sources.entropy),
