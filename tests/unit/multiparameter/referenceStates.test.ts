@@ -18,7 +18,6 @@ import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturatio
 import { InputError, OutOfRangeError, UnknownNameError } from "../../../kernel-lib/src/errors.js";
 
 const water = referenceFluid("water");
-const M = 0.018015268;
 
 describe("density at given (T, P): IAPWS R6-95(2018) Table 7 inverted", () => {
   // [T K, p MPa, rho kg/m3] from memory of R6-95(2018) Table 7. The pressure is printed to nine
