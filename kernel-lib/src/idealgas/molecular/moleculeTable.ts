@@ -75,11 +75,20 @@ export function validateMolecularConstants(c: MolecularConstants): MolecularCons
       ? c.id
       : fail("id", "-", "a non-empty string", c.id);
   const p = (field: string) => `${id}.${field}`;
-  if (!isPositiveFinite(c.molarMassKgPerMol) || c.molarMassKgPerMol > 10) {
+  if (typeof c.formula !== "string") fail(p("formula"), "-", "a string", c.formula);
+  if (
+    !Array.isArray(c.sources) ||
+    c.sources.length === 0 ||
+    !c.sources.every((x) => typeof x === "string")
+  ) {
+    fail(p("sources"), "-", "a non-empty array of citation strings", c.sources);
+  }
+  // Upper bound 1 kg/mol: catches g/mol by mistake even for H2 (2.016) and He (4.003).
+  if (!isPositiveFinite(c.molarMassKgPerMol) || c.molarMassKgPerMol > 1) {
     fail(
       p("molarMassKgPerMol"),
       "kg/mol",
-      "a finite number > 0 and <= 10 (kg/mol, not g/mol)",
+      "a finite number > 0 and <= 1 (kg/mol, not g/mol)",
       c.molarMassKgPerMol,
     );
   }

@@ -83,6 +83,10 @@ describe("user-supplied constants", () => {
     const bad = (patch: Partial<MolecularConstants>) => () =>
       idealGasFromMolecule({ ...co, ...patch } as MolecularConstants);
     expect(bad({ molarMassKgPerMol: 28.01 })).toThrow(/kg\/mol/);
+    expect(bad({ molarMassKgPerMol: 2.016 })).toThrow(/not g\/mol/);
+    expect(bad({ sources: [] })).toThrow(/sources/);
+    expect(bad({ sources: undefined as never })).toThrow(/sources/);
+    expect(bad({ formula: 7 as never })).toThrow(/formula/);
     expect(bad({ molarMassKgPerMol: NaN })).toThrow(InputError);
     expect(bad({ symmetryNumber: 1.5 })).toThrow(/symmetryNumber/);
     expect(bad({ rotationalConstantsInvCm: [1, 2, 3] })).toThrow(/rotationalConstantsInvCm/);
