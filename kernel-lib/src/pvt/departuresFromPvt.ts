@@ -194,6 +194,8 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
   let nodeSets: number[][]; // per isotherm: isochore indices (isochore route) or densities' point indices
   let sigmaPerturb: number[];
   let quadrature: DepartureSet[][] = [];
+  /** Isochore route: the nominal bridge results (with truncation estimates), per isotherm. */
+  let nominalBridges: IsothermDepartures[] = [];
 
   /** Raised to 1 once, to estimate the fit-order part of the method error (see PvtState.method). */
   let orderBump = 0;
@@ -263,6 +265,7 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
     // Bridge weights and degrees frozen from the nominal fits.
     const nominalNodes = isothermTs.map((t, k) => nodesAt(isochoreFits, nodeSets[k] as number[], t, true));
     const nominalRaw = nominalNodes.map((nodes) => integrateIsotherm(nodes, { gasConstant: R, bridge: options.bridge }));
+    nominalBridges = nominalRaw;
     const degrees = nominalRaw.map((r) => ({ a: r.bridgeA.degree, s: r.bridgeS.degree }));
     const frozenU = nominalNodes.map((nd) => ({ uP: nd.uPressurePa, uS: nd.uSlopePaPerK }));
     // Method error: quadrature estimate + bridge truncation estimate (systematic, added in quadrature to the propagated part).
@@ -281,7 +284,7 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
         const nodes = nodesAt(fits, nodeSets[k] as number[], t, false);
         return integrateIsotherm(
           { ...nodes, uPressurePa: (frozenU[k] as { uP?: readonly number[] }).uP, uSlopePaPerK: (frozenU[k] as { uS?: readonly number[] }).uS },
-          { gasConstant: R, bridge: options.bridge, bridgeDegrees: degrees[k] },
+          { gasConstant: R, bridge: { ...options.bridge, estimateTruncation: false }, bridgeDegrees: degrees[k] },
         );
       });
       return {
@@ -407,10 +410,10 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
       };
     });
     // B: propagated part, and in the isochore route the bridge's own (fit + truncation) estimate.
-    const uB = Math.hypot(primary[cursor] as number, nominal.raw?.[k]?.uB ?? 0);
+    const uB = Math.hypot(primary[cursor] as number, nominalBridges[k]?.uB ?? 0);
     const uC = primary[cursor + 1] as number;
     cursor += 2;
-    const raw = nominal.raw?.[k];
+    const raw = nominalBridges[k];
     const Cv = nominal.C[k];
     isotherms.push({
       temperatureK: t,

@@ -16,6 +16,13 @@ export interface IsochoreFitOptions {
   order?: number;
   /** Highest order tried. Default 6. */
   maxOrder?: number;
+  /**
+   * Lowest order tried. Default 2 when the isochore has 4 or more distinct temperatures, else 1:
+   * the slope (dP/dT)_rho is what the route needs, and a straight line, which AICc often prefers
+   * on short noisy isochores, biases the slope at the ends of the range by the neglected curvature
+   * (model-selection bias that the stated uncertainty cannot cover; seen in the coverage test).
+   */
+  minOrder?: number;
 }
 
 export interface IsochoreFit {
@@ -59,7 +66,10 @@ export function fitIsochore(
   const sigma = sigmaPa ?? temperaturesK.map(() => 1);
   const orders: number[] = [];
   if (options.order !== undefined) orders.push(options.order);
-  else for (let k = 1; k <= Math.min(options.maxOrder ?? 6, distinct - 1); k++) orders.push(k);
+  else {
+    const lo = Math.min(options.minOrder ?? (distinct >= 4 ? 2 : 1), distinct - 1);
+    for (let k = lo; k <= Math.min(options.maxOrder ?? 6, distinct - 1); k++) orders.push(k);
+  }
   let best: { score: number; order: number; fit: WeightedLeastSquaresResult } | undefined;
   for (const order of orders) {
     if (order + 1 > distinct) continue;

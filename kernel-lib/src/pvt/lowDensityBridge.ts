@@ -18,8 +18,10 @@ import { weightedLeastSquares } from "./weightedLeastSquares.js";
 export interface BridgeOptions {
   /** Number of lowest-density nodes used. Default 5 (or all, if fewer). */
   nodes?: number;
-  /** Fixed polynomial degree (0, 1 or 2). Default: chosen by AICc. */
+  /** Fixed polynomial degree (0 to 3). Default: chosen by AICc. */
   degree?: number;
+  /** Compute the truncation estimates (two more small fits). Default true. */
+  estimateTruncation?: boolean;
 }
 
 export interface BridgeResult {
@@ -98,7 +100,8 @@ export function lowDensityBridge(
     integral += (g[i] as number) * (best.coef[i] as number);
     for (let j = 0; j < g.length; j++) v += (g[i] as number) * ((best.cov[i] as number[])[j] as number) * (g[j] as number);
   }
-  const other = integralOf(best.degree + 1) ?? integralOf(best.degree - 1);
+  const other =
+    options.estimateTruncation === false ? undefined : (integralOf(best.degree + 1) ?? integralOf(best.degree - 1));
   return {
     truncation: other === undefined ? 0 : Math.abs(other.integral - integral),
     truncationAtZero: other === undefined ? 0 : Math.abs(other.c0 - (best.coef[0] as number)),
