@@ -117,6 +117,25 @@ describe("harmonic vibrations", () => {
   });
 });
 
+describe("where the naive oscillator formula fails", () => {
+  it("x = 1e-12: expm1-based functions stay exact, the naive e^x - 1 loses 4 digits", () => {
+    // Series (closed form): cv/R = 1 - x^2/12, s/R = 1 - ln x + O(x^2), (h - h0)/RT = 1 - x/2.
+    const x = 1e-12;
+    const t = 3000;
+    const c = harmonicVibrationContribution(
+      [{ wavenumberInvCm: (x * t) / SECOND_RADIATION_CONSTANT_CM_K, degeneracy: 1 }],
+      t,
+    );
+    const sExact = 1 - Math.log(x);
+    expect(Math.abs(c.entropy / R - sExact)).toBeLessThan(1e-9);
+    expect(c.cp / R).toBeCloseTo(1, 10);
+    expect(c.enthalpyFrom0K / (R * t)).toBeCloseTo(1, 10);
+    // The textbook formula evaluated literally:
+    const naiveS = x / (Math.exp(x) - 1) - Math.log(1 - Math.exp(-x));
+    expect(Math.abs(naiveS - sExact)).toBeGreaterThan(1e-6);
+  });
+});
+
 describe("electronic levels", () => {
   it("O2 at 298.15 K: only the triplet ground state counts, s = R ln 3", () => {
     const c = electronicContribution(
