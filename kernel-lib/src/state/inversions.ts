@@ -95,20 +95,27 @@ function invert(
       `no ${phase} state at the starting temperature ${guess} K and P = ${pressurePa} Pa (${tried.join("; ")}); give initialGuessK inside the phase`,
     );
   }
-  // h and s rise with T: step up when below the target, down when above
+  // h and s rise with T: step up when below the target, down when above, with steps growing from
+  // 2 % (doubling each time); a refused temperature (outside a correlation's range, no such phase)
+  // shrinks the step instead, so the search stops at the edge of what can be evaluated
   const up = fa < 0;
   let b = a;
   let fb = fa;
-  for (let k = 0; k < 60; k++) {
-    const next = up ? Math.min(b * 1.25, tMax) : Math.max(b / 1.25, tMin);
+  let step = 0.02;
+  for (let k = 0; k < 80 && step > 1e-6; k++) {
+    const next = up ? Math.min(b * (1 + step), tMax) : Math.max(b / (1 + step), tMin);
     if (next === b) break;
     const fn = safe(next);
-    if (!Number.isFinite(fn)) break;
+    if (!Number.isFinite(fn)) {
+      step /= 4;
+      continue;
+    }
     a = b;
     fa = fb;
     b = next;
     fb = fn;
     if (fa < 0 !== fb < 0 || fb === 0) break;
+    step = Math.min(step * 2, 1);
   }
   if (!(fa < 0 !== fb < 0 || fb === 0)) {
     throw new SolverError(
