@@ -13,6 +13,11 @@
  *   int cp/T dT = A ln T + B [x coth x - ln|sinh x|] - D [y tanh y - ln cosh y]  (+ const)
  * (differentiate to check: d/dT of x coth x - ln sinh x is x^2 csch^2 x / T). When C = 0 the B term
  * is the constant B (x/sinh x -> 1), integrated as B T and B ln T; when E = 0 the D term vanishes.
+ *
+ * Rounding: the polynomial integrals use ln(1 + (T2-T1)/T1) and T2^n - T1^n = (T2-T1) sum T2^j T1^(n-1-j),
+ * so short steps keep full relative precision. The Aly-Lee integrals are differences of the
+ * antiderivatives, whose relative rounding error grows as the step shrinks (about 1e-9 for a
+ * 1e-3 K step): fine for finite differences of that size, not for much smaller ones.
  */
 import { R } from "../constants.js";
 import type { AlyLeeCp, CpCorrelation, PolynomialCp } from "../components/types.js";
@@ -37,7 +42,7 @@ export function correlationCpIntegral(
   if (correlation.form === "polynomial") {
     return integratePiecewise(correlation, t1K, t2K, (a, lo, hi) => {
       let sum = 0;
-      for (let k = 0; k < a.length; k++) sum += (a[k] * (hi ** (k + 1) - lo ** (k + 1))) / (k + 1);
+      for (let k = 0; k < a.length; k++) sum += (a[k] * powerDifference(hi, lo, k + 1)) / (k + 1);
       return R * sum;
     });
   }
@@ -52,12 +57,26 @@ export function correlationCpOverTIntegral(
 ): number {
   if (correlation.form === "polynomial") {
     return integratePiecewise(correlation, t1K, t2K, (a, lo, hi) => {
-      let sum = a.length > 0 ? a[0] * Math.log(hi / lo) : 0;
-      for (let k = 1; k < a.length; k++) sum += (a[k] * (hi ** k - lo ** k)) / k;
+      let sum = a.length > 0 ? a[0] * Math.log1p((hi - lo) / lo) : 0;
+      for (let k = 1; k < a.length; k++) sum += (a[k] * powerDifference(hi, lo, k)) / k;
       return R * sum;
     });
   }
   return alyLeeS(correlation, t2K) - alyLeeS(correlation, t1K);
+}
+
+/**
+ * hi^n - lo^n as (hi - lo) * sum_j hi^j lo^(n-1-j): no cancellation between two large powers when
+ * hi and lo are close (a short temperature step), where the naive difference loses digits.
+ */
+function powerDifference(hi: number, lo: number, n: number): number {
+  let sum = 0;
+  let hiPower = 1;
+  for (let j = 0; j < n; j++) {
+    sum += hiPower * lo ** (n - 1 - j);
+    hiPower *= hi;
+  }
+  return (hi - lo) * sum;
 }
 
 function segmentFor(correlation: PolynomialCp, temperatureK: number) {

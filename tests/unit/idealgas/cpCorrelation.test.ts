@@ -29,10 +29,13 @@ describe("closed-form integrals of every table correlation agree with Simpson qu
       let hq = 0;
       let sq = 0;
       let lo = a;
-      for (const hi of joints) {
+      for (const joint of joints) {
+        // Stop a hair short of the joint so that every node uses this segment's polynomial
+        // (the segments of a fit may differ by ~1e-4 at the joint; cp is taken from the upper one there).
+        const hi = joint * (1 - 1e-14);
         hq += simpson(f, lo, hi);
         sq += simpson((u) => f(Math.exp(u)), Math.log(lo), Math.log(hi));
-        lo = hi;
+        lo = joint;
       }
       const h = correlationCpIntegral(cp, a, b);
       const s = correlationCpOverTIntegral(cp, a, b);
@@ -88,5 +91,20 @@ describe("Aly-Lee edge cases", () => {
         },
       ),
     );
+  });
+});
+
+describe("short temperature steps (where a naive hi^n - lo^n loses digits)", () => {
+  it("int cp dT over [T, T + 1e-7 K] equals cp(T) * 1e-7 to 1e-8 relative (methane, degree-6 fit)", () => {
+    // Mean-value theorem, closed form: the integral over a tiny step is cp times the step (the cp
+    // change over 1e-7 K is ~1e-10 relative). Computing T2^7 - T1^7 directly cancels ~15 digits.
+    const cp = listComponents().find((c) => c.id === "methane")!.idealGasCp;
+    for (const t of [300, 800, 1400]) {
+      const d = t + 1e-7 - t; // the step actually represented in floating point
+      const exact = correlationCp(cp, t + d / 2) * d;
+      expect(Math.abs(correlationCpIntegral(cp, t, t + d) / exact - 1)).toBeLessThan(1e-8);
+      const sExact = (correlationCp(cp, t + d / 2) / (t + d / 2)) * d;
+      expect(Math.abs(correlationCpOverTIntegral(cp, t, t + d) / sExact - 1)).toBeLessThan(1e-8);
+    }
   });
 });
