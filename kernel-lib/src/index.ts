@@ -5,4 +5,5 @@
 export * from "./core.js";
 export * from "./display/index.js";
 export * from "./records/index.js";
+export * from "./progress/index.js";
 export { readPvtCsvFile } from "./pvt/readPvtCsvFile.js";
