@@ -54,8 +54,10 @@ function parseArgs(argv: string[]): Args | { error: string } | "help" {
     if (arg === "-h" || arg === "--help") return "help";
     const eq = arg.indexOf("=");
     const name = arg.startsWith("--") && eq > 0 ? arg.slice(0, eq) : arg;
-    const value = (): string | undefined => (arg.startsWith("--") && eq > 0 ? arg.slice(eq + 1) : argv[++i]);
-    const num = (v: string | undefined) => (v !== undefined && /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(v) ? Number(v) : Number.NaN);
+    const value = (): string | undefined =>
+      arg.startsWith("--") && eq > 0 ? arg.slice(eq + 1) : argv[++i];
+    const num = (v: string | undefined) =>
+      v !== undefined && /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(v) ? Number(v) : Number.NaN;
     switch (name) {
       case "--component":
         component = value();
@@ -63,31 +65,36 @@ function parseArgs(argv: string[]): Args | { error: string } | "help" {
         break;
       case "--M": {
         const m = num(value());
-        if (!(m > 0 && m <= 5)) return { error: "--M needs a molar mass in kg/mol, > 0 and <= 5 (e.g. 0.04401 for CO2)" };
+        if (!(m > 0 && m <= 5))
+          return { error: "--M needs a molar mass in kg/mol, > 0 and <= 5 (e.g. 0.04401 for CO2)" };
         molarMassKgPerMol = m;
         break;
       }
       case "--route": {
         const r = value();
-        if (r !== "auto" && r !== "isochores" && r !== "surface") return { error: "--route must be auto, isochores or surface" };
+        if (r !== "auto" && r !== "isochores" && r !== "surface")
+          return { error: "--route must be auto, isochores or surface" };
         route.route = r;
         break;
       }
       case "--isotherms": {
         const list = (value() ?? "").split(",").map((s) => num(s.trim()));
-        if (list.length === 0 || !list.every((t) => t > 0 && t < Infinity)) return { error: "--isotherms needs temperatures in K, > 0, comma-separated" };
+        if (list.length === 0 || !list.every((t) => t > 0 && t < Infinity))
+          return { error: "--isotherms needs temperatures in K, > 0, comma-separated" };
         route.isothermsK = list;
         break;
       }
       case "--seed": {
         const s = num(value());
-        if (!(Number.isInteger(s) && s >= 0 && s < 2 ** 32)) return { error: "--seed needs an integer in [0, 2^32)" };
+        if (!(Number.isInteger(s) && s >= 0 && s < 2 ** 32))
+          return { error: "--seed needs an integer in [0, 2^32)" };
         route.seed = s;
         break;
       }
       case "--samples": {
         const s = num(value());
-        if (!(Number.isInteger(s) && s >= 0 && s <= 100000)) return { error: "--samples needs an integer from 0 to 100000" };
+        if (!(Number.isInteger(s) && s >= 0 && s <= 100000))
+          return { error: "--samples needs an integer from 0 to 100000" };
         route.monteCarloSamples = s;
         break;
       }
@@ -99,7 +106,8 @@ function parseArgs(argv: string[]): Args | { error: string } | "help" {
   }
   if (file === undefined) return { error: "give a CSV file" };
   if (component !== undefined) {
-    if (molarMassKgPerMol !== undefined) return { error: "give either --component or --M, not both" };
+    if (molarMassKgPerMol !== undefined)
+      return { error: "give either --component or --M, not both" };
     try {
       molarMassKgPerMol = getComponent(component).molarMassKgPerMol;
     } catch (e) {
@@ -111,7 +119,13 @@ function parseArgs(argv: string[]): Args | { error: string } | "help" {
 
 /** The JSON response of issue 6 item 8. */
 export function pvtResponse(result: PvtRouteResult): unknown {
-  const pick = (d: { s: number; u: number; a: number; h: number; g: number }) => ({ s: d.s, u: d.u, a: d.a, h: d.h, g: d.g });
+  const pick = (d: { s: number; u: number; a: number; h: number; g: number }) => ({
+    s: d.s,
+    u: d.u,
+    a: d.a,
+    h: d.h,
+    g: d.g,
+  });
   const mc = result.uncertaintyMethod.monteCarlo;
   const conventions = {
     code: "conventions",
@@ -132,13 +146,25 @@ export function pvtResponse(result: PvtRouteResult): unknown {
       })),
     })),
     virial: { B: result.isotherms.map((i) => i.B), uB: result.isotherms.map((i) => i.uB) },
-    diagnostics: [conventions, ...result.diagnostics.map((d) => ({ code: d.code, severity: d.severity, message: d.message }))],
+    diagnostics: [
+      conventions,
+      ...result.diagnostics.map((d) => ({
+        code: d.code,
+        severity: d.severity,
+        message: d.message,
+      })),
+    ],
   };
 }
 
 function summary(file: string, nPoints: number, result: PvtRouteResult): string {
-  const lines = [`isochor pvt: ${file}: ${nPoints} points, route "${result.route}", ${result.isotherms.length} isotherm(s)`];
-  if (result.setAside.length > 0) lines.push(`  set aside: ${result.setAside.map((s) => `line ${s.line} (${s.reason})`).join("; ")}`);
+  const lines = [
+    `isochor pvt: ${file}: ${nPoints} points, route "${result.route}", ${result.isotherms.length} isotherm(s)`,
+  ];
+  if (result.setAside.length > 0)
+    lines.push(
+      `  set aside: ${result.setAside.map((s) => `line ${s.line} (${s.reason})`).join("; ")}`,
+    );
   for (const iso of result.isotherms) {
     const last = iso.states[iso.states.length - 1];
     lines.push(
@@ -148,9 +174,12 @@ function summary(file: string, nPoints: number, result: PvtRouteResult): string 
           : ""),
     );
   }
-  for (const d of result.diagnostics.filter((x) => x.severity !== "info")) lines.push(`  ${d.severity}: ${d.message}`);
+  for (const d of result.diagnostics.filter((x) => x.severity !== "info"))
+    lines.push(`  ${d.severity}: ${d.message}`);
   const mc = result.uncertaintyMethod.monteCarlo;
-  lines.push(`  uncertainties: ${mc ? `Monte Carlo seed ${mc.seed}, ${mc.samples} samples` : "linearised"} (k = 1)`);
+  lines.push(
+    `  uncertainties: ${mc ? `Monte Carlo seed ${mc.seed}, ${mc.samples} samples` : "linearised"} (k = 1)`,
+  );
   return lines.join("\n") + "\n";
 }
 

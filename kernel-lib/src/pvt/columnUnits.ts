@@ -36,14 +36,23 @@ const DIMENSION: Record<ColumnQuantity, Dimension> = {
   density: "molar-density",
   volume: "molar-volume",
 };
-const SI: Record<ColumnQuantity, string> = { temperature: "K", pressure: "Pa", density: "mol/m3", volume: "m3/mol" };
+const SI: Record<ColumnQuantity, string> = {
+  temperature: "K",
+  pressure: "Pa",
+  density: "mol/m3",
+  volume: "m3/mol",
+};
 
 /**
  * Converts a column unit to SI for the given quantity: density to mol/m3, volume to m3/mol,
  * pressure to Pa (absolute), temperature to K. Mass-based units need `molarMassKgPerMol`.
  * Returns the affine map, or a refusal saying what was expected.
  */
-export function columnUnitToSI(quantity: ColumnQuantity, unitText: string, molarMassKgPerMol?: number): AffineToSI | UnitRefusal {
+export function columnUnitToSI(
+  quantity: ColumnQuantity,
+  unitText: string,
+  molarMassKgPerMol?: number,
+): AffineToSI | UnitRefusal {
   const dimension = DIMENSION[quantity];
   let def;
   try {

@@ -22,7 +22,11 @@ export interface ModelComparisonPoint {
   pressureDifferencePa: number;
 }
 
-export function compareWithModel(result: PvtRouteResult, model: ResidualModel, x: readonly number[] = [1]): ModelComparisonPoint[] {
+export function compareWithModel(
+  result: PvtRouteResult,
+  model: ResidualModel,
+  x: readonly number[] = [1],
+): ModelComparisonPoint[] {
   const R = model.gasConstant ?? CODATA_R;
   const out: ModelComparisonPoint[] = [];
   for (const iso of result.isotherms) {
@@ -30,8 +34,15 @@ export function compareWithModel(result: PvtRouteResult, model: ResidualModel, x
     for (const s of iso.states) {
       const d = model.residual(t, s.densityMolPerM3, x);
       const m = departuresFromReduced(t, d, R);
-      const diff = Object.fromEntries(DEPARTURE_KEYS.map((k) => [k, s.residual[k] - m[k]])) as unknown as DepartureSet;
-      const z = Object.fromEntries(DEPARTURE_KEYS.map((k) => [k, s.uncertainty[k] > 0 ? diff[k] / s.uncertainty[k] : Number.NaN])) as unknown as DepartureSet;
+      const diff = Object.fromEntries(
+        DEPARTURE_KEYS.map((k) => [k, s.residual[k] - m[k]]),
+      ) as unknown as DepartureSet;
+      const z = Object.fromEntries(
+        DEPARTURE_KEYS.map((k) => [
+          k,
+          s.uncertainty[k] > 0 ? diff[k] / s.uncertainty[k] : Number.NaN,
+        ]),
+      ) as unknown as DepartureSet;
       out.push({
         temperatureK: t,
         densityMolPerM3: s.densityMolPerM3,

@@ -37,13 +37,30 @@ export function departuresFromIntegrals(
   const RT = gasConstant * temperatureK;
   const u = aResJPerMol + temperatureK * sResJPerMolK;
   const lnPhi = aResJPerMol / RT + compressibility - 1 - Math.log(compressibility);
-  return { a: aResJPerMol, s: sResJPerMolK, u, h: u + RT * (compressibility - 1), g: RT * lnPhi, lnPhi };
+  return {
+    a: aResJPerMol,
+    s: sResJPerMolK,
+    u,
+    h: u + RT * (compressibility - 1),
+    g: RT * lnPhi,
+    lnPhi,
+  };
 }
 
 /** From reduced residual derivatives (any ResidualModel, or the fitted surface). */
-export function departuresFromReduced(temperatureK: number, d: ResidualDerivatives, gasConstant: number): DepartureSet {
+export function departuresFromReduced(
+  temperatureK: number,
+  d: ResidualDerivatives,
+  gasConstant: number,
+): DepartureSet {
   const RT = gasConstant * temperatureK;
-  return departuresFromIntegrals(temperatureK, 1 + d.aD, RT * d.a, gasConstant * (-d.a - d.aT), gasConstant);
+  return departuresFromIntegrals(
+    temperatureK,
+    1 + d.aD,
+    RT * d.a,
+    gasConstant * (-d.a - d.aT),
+    gasConstant,
+  );
 }
 
 export const DEPARTURE_KEYS = ["a", "s", "u", "h", "g", "lnPhi"] as const;

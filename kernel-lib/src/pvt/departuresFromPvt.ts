@@ -85,7 +85,14 @@ export interface PvtIsotherm {
   C?: number;
   uC?: number;
   /** Isochore route: the bridge from zero density to the first node. */
-  bridge?: { toDensityMolPerM3: number; aJPerMol: number; uAJPerMol: number; sJPerMolK: number; uSJPerMolK: number; degree: number };
+  bridge?: {
+    toDensityMolPerM3: number;
+    aJPerMol: number;
+    uAJPerMol: number;
+    sJPerMolK: number;
+    uSJPerMolK: number;
+    degree: number;
+  };
 }
 
 export interface PvtRouteResult {
@@ -95,7 +102,11 @@ export interface PvtRouteResult {
   isochoreFits: IsochoreFit[];
   diagnostics: PvtDiagnostic[];
   setAside: SetAsidePoint[];
-  uncertaintyMethod: { monteCarlo?: { seed: number; samples: number }; linearised: boolean; sigmaSource: "stated" | "from-scatter" };
+  uncertaintyMethod: {
+    monteCarlo?: { seed: number; samples: number };
+    linearised: boolean;
+    sigmaSource: "stated" | "from-scatter";
+  };
   gasConstant: number;
 }
 
@@ -117,25 +128,47 @@ function flatten(v: RouteValues): number[] {
   return out;
 }
 
-export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions = {}): PvtRouteResult {
+export function departuresFromPvt(
+  dataset: PvtDataset,
+  options: PvtRouteOptions = {},
+): PvtRouteResult {
   const R = options.gasConstant ?? CODATA_R;
   const pts = dataset.points;
   const n = pts.length;
   const diagnostics: PvtDiagnostic[] = [];
   if (!(n >= 6)) {
-    throw new InputError({ input: `${dataset.source} points`, unit: "-", validRange: "at least 6 accepted points", received: n });
+    throw new InputError({
+      input: `${dataset.source} points`,
+      unit: "-",
+      validRange: "at least 6 accepted points",
+      received: n,
+    });
   }
   const stated = pts.every((p) => p.uPressurePa !== undefined);
   if (!stated && pts.some((p) => p.uPressurePa !== undefined)) {
-    diagnostics.push({ code: "partial-uncertainties", severity: "warning", message: "u(P) is given for some points only: all points were weighted equally and the uncertainty taken from the scatter" });
+    diagnostics.push({
+      code: "partial-uncertainties",
+      severity: "warning",
+      message:
+        "u(P) is given for some points only: all points were weighted equally and the uncertainty taken from the scatter",
+    });
   }
   const T = pts.map((p) => p.temperatureK);
   const rho = pts.map((p) => p.densityMolPerM3);
   const P0 = pts.map((p) => p.pressurePa);
 
   // (1) Surface: first with u(P) only, then with effective variances.
-  const surfacePoints = (P: readonly number[]) => pts.map((p, i) => ({ temperatureK: p.temperatureK, densityMolPerM3: p.densityMolPerM3, pressurePa: P[i] as number }));
-  let surfaceFit = fitVirialSurface(surfacePoints(P0), stated ? pts.map((p) => p.uPressurePa as number) : undefined, { gasConstant: R, ...options.surface });
+  const surfacePoints = (P: readonly number[]) =>
+    pts.map((p, i) => ({
+      temperatureK: p.temperatureK,
+      densityMolPerM3: p.densityMolPerM3,
+      pressurePa: P[i] as number,
+    }));
+  let surfaceFit = fitVirialSurface(
+    surfacePoints(P0),
+    stated ? pts.map((p) => p.uPressurePa as number) : undefined,
+    { gasConstant: R, ...options.surface },
+  );
   const slopeT = (s: VirialSurface, t: number, r: number) => {
     const d = surfaceDerivatives(s, t, r);
     return r * R * (1 + d.aD + d.aDT);
@@ -147,8 +180,10 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
   let sigmaEff: number[] | undefined;
   if (stated) {
     sigmaEff = pts.map((p) => {
-      const dT = slopeT(surfaceFit.surface, p.temperatureK, p.densityMolPerM3) * (p.uTemperatureK ?? 0);
-      const dR = slopeRho(surfaceFit.surface, p.temperatureK, p.densityMolPerM3) * (p.uDensityMolPerM3 ?? 0);
+      const dT =
+        slopeT(surfaceFit.surface, p.temperatureK, p.densityMolPerM3) * (p.uTemperatureK ?? 0);
+      const dR =
+        slopeRho(surfaceFit.surface, p.temperatureK, p.densityMolPerM3) * (p.uDensityMolPerM3 ?? 0);
       return Math.sqrt((p.uPressurePa as number) ** 2 + dT * dT + dR * dR);
     });
     surfaceFit = fitVirialSurface(surfacePoints(P0), sigmaEff, {
@@ -158,8 +193,12 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
       temperatureTerms: surfaceFit.surface.temperatureTerms,
     });
   }
-  const surfaceOrder = { densityTerms: surfaceFit.surface.densityTerms, temperatureTerms: surfaceFit.surface.temperatureTerms };
-  for (const r of surfaceFit.diagnostics.recommendations) diagnostics.push({ code: "surface-fit", severity: "warning", message: r });
+  const surfaceOrder = {
+    densityTerms: surfaceFit.surface.densityTerms,
+    temperatureTerms: surfaceFit.surface.temperatureTerms,
+  };
+  for (const r of surfaceFit.diagnostics.recommendations)
+    diagnostics.push({ code: "surface-fit", severity: "warning", message: r });
 
   // (2) Isochores.
   const minT = options.minIsochoreTemperatures ?? 3;
@@ -169,7 +208,10 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
   // Density correction to the group mean, frozen from the nominal surface.
   const shift = new Array<number>(n).fill(0);
   for (const g of groups) {
-    for (const i of g.members) shift[i] = slopeRho(surfaceFit.surface, T[i] as number, rho[i] as number) * (g.densityMolPerM3 - (rho[i] as number));
+    for (const i of g.members)
+      shift[i] =
+        slopeRho(surfaceFit.surface, T[i] as number, rho[i] as number) *
+        (g.densityMolPerM3 - (rho[i] as number));
   }
   const wantRoute = options.route ?? "auto";
   const isochoreRoute = wantRoute === "isochores" || (wantRoute === "auto" && groups.length >= 3);
@@ -199,7 +241,9 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
 
   /** Raised to 1 once, to estimate the fit-order part of the method error (see PvtState.method). */
   let orderBump = 0;
-  const distinctTs = groups.map((g) => new Set(g.members.map((i) => (T[i] as number).toPrecision(10))).size);
+  const distinctTs = groups.map(
+    (g) => new Set(g.members.map((i) => (T[i] as number).toPrecision(10))).size,
+  );
   const fitAllIsochores = (P: readonly number[]) =>
     groups.map((g, k) =>
       fitIsochore(
@@ -208,19 +252,32 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
         g.members.map((i) => (P[i] as number) + (shift[i] as number)),
         sigmaEff ? g.members.map((i) => sigmaEff?.[i] as number) : undefined,
         isochoreFits.length > 0
-          ? { order: Math.min((isochoreFits[k] as IsochoreFit).order + orderBump, (distinctTs[k] as number) - 1) }
+          ? {
+              order: Math.min(
+                (isochoreFits[k] as IsochoreFit).order + orderBump,
+                (distinctTs[k] as number) - 1,
+              ),
+            }
           : options.isochore,
       ),
     );
 
   if (isochoreRoute) {
     isochoreFits = fitAllIsochores(P0);
-    for (const f of isochoreFits) for (const r of f.diagnostics.recommendations) diagnostics.push({ code: "isochore-fit", severity: "warning", message: r });
+    for (const f of isochoreFits)
+      for (const r of f.diagnostics.recommendations)
+        diagnostics.push({ code: "isochore-fit", severity: "warning", message: r });
     const maxShift = Math.max(...shift.map((s, i) => Math.abs(s) / (sigmaEff?.[i] ?? Infinity)));
     if (maxShift > 1) {
-      diagnostics.push({ code: "density-correction", severity: "info", message: `pressures were moved to their isochore's mean density by up to ${maxShift.toFixed(1)} u(P) (first-order, with the surface's (dP/drho)_T)` });
+      diagnostics.push({
+        code: "density-correction",
+        severity: "info",
+        message: `pressures were moved to their isochore's mean density by up to ${maxShift.toFixed(1)} u(P) (first-order, with the surface's (dP/drho)_T)`,
+      });
     }
-    const candidates = options.isothermsK ? options.isothermsK.map((t) => ({ temperatureK: t })) : clusterTemperatures(T, tolT);
+    const candidates = options.isothermsK
+      ? options.isothermsK.map((t) => ({ temperatureK: t }))
+      : clusterTemperatures(T, tolT);
     isothermTs = [];
     nodeSets = [];
     for (const c of candidates) {
@@ -263,8 +320,12 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
       nodeSets.push(idx);
     }
     // Bridge weights and degrees frozen from the nominal fits.
-    const nominalNodes = isothermTs.map((t, k) => nodesAt(isochoreFits, nodeSets[k] as number[], t, true));
-    const nominalRaw = nominalNodes.map((nodes) => integrateIsotherm(nodes, { gasConstant: R, bridge: options.bridge }));
+    const nominalNodes = isothermTs.map((t, k) =>
+      nodesAt(isochoreFits, nodeSets[k] as number[], t, true),
+    );
+    const nominalRaw = nominalNodes.map((nodes) =>
+      integrateIsotherm(nodes, { gasConstant: R, bridge: options.bridge }),
+    );
     nominalBridges = nominalRaw;
     const degrees = nominalRaw.map((r) => ({ a: r.bridgeA.degree, s: r.bridgeS.degree }));
     const frozenU = nominalNodes.map((nd) => ({ uP: nd.uPressurePa, uS: nd.uSlopePaPerK }));
@@ -283,12 +344,24 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
       const raw = isothermTs.map((t, k) => {
         const nodes = nodesAt(fits, nodeSets[k] as number[], t, false);
         return integrateIsotherm(
-          { ...nodes, uPressurePa: (frozenU[k] as { uP?: readonly number[] }).uP, uSlopePaPerK: (frozenU[k] as { uS?: readonly number[] }).uS },
-          { gasConstant: R, bridge: { ...options.bridge, estimateTruncation: false }, bridgeDegrees: degrees[k] },
+          {
+            ...nodes,
+            uPressurePa: (frozenU[k] as { uP?: readonly number[] }).uP,
+            uSlopePaPerK: (frozenU[k] as { uS?: readonly number[] }).uS,
+          },
+          {
+            gasConstant: R,
+            bridge: { ...options.bridge, estimateTruncation: false },
+            bridgeDegrees: degrees[k],
+          },
         );
       });
       return {
-        pressures: raw.map((r, k) => (nodeSets[k] as number[]).map((j) => (fits[j] as IsochoreFit).evaluate(r.temperatureK).pressurePa)),
+        pressures: raw.map((r, k) =>
+          (nodeSets[k] as number[]).map(
+            (j) => (fits[j] as IsochoreFit).evaluate(r.temperatureK).pressurePa,
+          ),
+        ),
         departures: raw.map((r) => r.departures),
         B: raw.map((r) => r.B),
         C: raw.map((r) => r.C),
@@ -297,11 +370,18 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
     };
     // Perturbation sigma per point: stated (Birge-enlarged by its isochore) or the isochore's scatter.
     sigmaPerturb = new Array<number>(n).fill(0);
-    const surfRed = surfaceFit.diagnostics.degreesOfFreedom > 0 ? surfaceFit.diagnostics.reducedChiSquare : 1;
+    const surfRed =
+      surfaceFit.diagnostics.degreesOfFreedom > 0 ? surfaceFit.diagnostics.reducedChiSquare : 1;
     for (let i = 0; i < n; i++) {
-      sigmaPerturb[i] = sigmaEff ? (sigmaEff[i] as number) * Math.sqrt(Math.max(1, surfRed)) : (P0[i] as number) * Math.sqrt(surfRed);
+      sigmaPerturb[i] = sigmaEff
+        ? (sigmaEff[i] as number) * Math.sqrt(Math.max(1, surfRed))
+        : (P0[i] as number) * Math.sqrt(surfRed);
     }
-    groups.forEach((g, k) => g.members.forEach((i, j) => (sigmaPerturb[i] = (isochoreFits[k] as IsochoreFit).sigmaPa[j] as number)));
+    groups.forEach((g, k) =>
+      g.members.forEach(
+        (i, j) => (sigmaPerturb[i] = (isochoreFits[k] as IsochoreFit).sigmaPa[j] as number),
+      ),
+    );
   } else {
     // Surface route: nodes are the measured densities at each isotherm.
     const clusters = options.isothermsK
@@ -325,30 +405,52 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
         densityTerms: surfaceOrder.densityTerms + orderBump,
         temperatureTerms: Math.min(surfaceOrder.temperatureTerms + orderBump, distinctTemperatures),
       };
-      const s = P === P0 && orderBump === 0 ? surfaceFit : fitVirialSurface(surfacePoints(P), surfSigma, frozen);
+      const s =
+        P === P0 && orderBump === 0
+          ? surfaceFit
+          : fitVirialSurface(surfacePoints(P), surfSigma, frozen);
       const sf = s.surface;
       return {
-        pressures: isothermTs.map((t, k) => (nodeSets[k] as number[]).map((i) => {
-          const d = surfaceDerivatives(sf, t, rho[i] as number);
-          return (rho[i] as number) * R * t * (1 + d.aD);
-        })),
-        departures: isothermTs.map((t, k) => (nodeSets[k] as number[]).map((i) => departuresFromReduced(t, surfaceDerivatives(sf, t, rho[i] as number), R))),
+        pressures: isothermTs.map((t, k) =>
+          (nodeSets[k] as number[]).map((i) => {
+            const d = surfaceDerivatives(sf, t, rho[i] as number);
+            return (rho[i] as number) * R * t * (1 + d.aD);
+          }),
+        ),
+        departures: isothermTs.map((t, k) =>
+          (nodeSets[k] as number[]).map((i) =>
+            departuresFromReduced(t, surfaceDerivatives(sf, t, rho[i] as number), R),
+          ),
+        ),
         B: isothermTs.map((t) => virialFromSurface(sf, t, 1)),
         C: isothermTs.map((t) => (sf.densityTerms >= 2 ? virialFromSurface(sf, t, 2) : undefined)),
       };
     };
-    const red = surfaceFit.diagnostics.degreesOfFreedom > 0 ? surfaceFit.diagnostics.reducedChiSquare : 1;
-    sigmaPerturb = pts.map((p, i) => (sigmaEff ? (sigmaEff[i] as number) * Math.sqrt(Math.max(1, red)) : p.pressurePa * Math.sqrt(red)));
+    const red =
+      surfaceFit.diagnostics.degreesOfFreedom > 0 ? surfaceFit.diagnostics.reducedChiSquare : 1;
+    sigmaPerturb = pts.map((p, i) =>
+      sigmaEff
+        ? (sigmaEff[i] as number) * Math.sqrt(Math.max(1, red))
+        : p.pressurePa * Math.sqrt(red),
+    );
     quadrature = nodeSets.map((set) => set.map(() => ({ a: 0, s: 0, u: 0, h: 0, g: 0, lnPhi: 0 })));
     // Two-phase check along each isotherm on the surface.
     isothermTs.forEach((t, k) => {
       const set = nodeSets[k] as number[];
       const bad = set.filter((i) => !(slopeRho(surfaceFit.surface, t, rho[i] as number) > 0));
       if (bad.length > 0) {
-        diagnostics.push({ code: "two-phase", severity: "warning", message: `isotherm ${t.toFixed(2)} K: the fitted surface has (dP/drho)_T <= 0 at ${bad.length} node(s): mechanically unstable; the isotherm may cross the two-phase region and those departures are not meaningful` });
+        diagnostics.push({
+          code: "two-phase",
+          severity: "warning",
+          message: `isotherm ${t.toFixed(2)} K: the fitted surface has (dP/drho)_T <= 0 at ${bad.length} node(s): mechanically unstable; the isotherm may cross the two-phase region and those departures are not meaningful`,
+        });
       }
     });
-    diagnostics.push({ code: "route", severity: "info", message: `route "surface": fewer than 3 isochores with ${minT}+ temperatures; departures from the fitted virial-type surface (${surfaceOrder.densityTerms} density x ${surfaceOrder.temperatureTerms} temperature terms), valid only inside the fitted range` });
+    diagnostics.push({
+      code: "route",
+      severity: "info",
+      message: `route "surface": fewer than 3 isochores with ${minT}+ temperatures; departures from the fitted virial-type surface (${surfaceOrder.densityTerms} density x ${surfaceOrder.temperatureTerms} temperature terms), valid only inside the fitted range`,
+    });
   }
 
   const nominal = evaluate(P0);
@@ -368,25 +470,43 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
         iso.forEach((_, j) => {
           const q = (quadrature[k] as DepartureSet[])[j] as DepartureSet;
           for (const [m, key] of DEPARTURE_KEYS.entries()) {
-            q[key] = Math.hypot(q[key], (bumped[at + m] as number) - (nominalFlat[at + m] as number));
+            q[key] = Math.hypot(
+              q[key],
+              (bumped[at + m] as number) - (nominalFlat[at + m] as number),
+            );
           }
           at += DEPARTURE_KEYS.length;
         });
         at += 2;
       });
     } else {
-      diagnostics.push({ code: "fit-order-estimate", severity: "info", message: "no u(P) stated and the fit orders cannot be raised by one: the uncertainty rests on the scatter alone" });
+      diagnostics.push({
+        code: "fit-order-estimate",
+        severity: "info",
+        message:
+          "no u(P) stated and the fit orders cannot be raised by one: the uncertainty rests on the scatter alone",
+      });
     }
   }
-  const mc = mcSamples > 0 ? monteCarloPropagation((P) => flatten(evaluate(P)), P0, sigmaPerturb, mcSamples, seed) : undefined;
-  const lin = wantLinear || !mc ? linearisedPropagation((P) => flatten(evaluate(P)), P0, sigmaPerturb, nominalFlat) : undefined;
+  const mc =
+    mcSamples > 0
+      ? monteCarloPropagation((P) => flatten(evaluate(P)), P0, sigmaPerturb, mcSamples, seed)
+      : undefined;
+  const lin =
+    wantLinear || !mc
+      ? linearisedPropagation((P) => flatten(evaluate(P)), P0, sigmaPerturb, nominalFlat)
+      : undefined;
   const primary = (mc ?? lin)?.standardUncertainty ?? [];
 
   // Assemble.
   const isotherms: PvtIsotherm[] = [];
   let cursor = 0;
   const take = (arr: number[] | undefined, start: number): DepartureSet | undefined =>
-    arr ? (Object.fromEntries(DEPARTURE_KEYS.map((key, j) => [key, arr[start + j] as number])) as unknown as DepartureSet) : undefined;
+    arr
+      ? (Object.fromEntries(
+          DEPARTURE_KEYS.map((key, j) => [key, arr[start + j] as number]),
+        ) as unknown as DepartureSet)
+      : undefined;
   let worstRatio = 0;
   nominal.departures.forEach((iso, k) => {
     const t = isothermTs[k] as number;
@@ -395,12 +515,16 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
       cursor += DEPARTURE_KEYS.length;
       const prop = take(primary, at) as DepartureSet;
       const quad = (quadrature[k] as DepartureSet[])[j] as DepartureSet;
-      const uncertainty = Object.fromEntries(DEPARTURE_KEYS.map((key) => [key, Math.hypot(prop[key], quad[key])])) as unknown as DepartureSet;
+      const uncertainty = Object.fromEntries(
+        DEPARTURE_KEYS.map((key) => [key, Math.hypot(prop[key], quad[key])]),
+      ) as unknown as DepartureSet;
       const m = take(mc?.standardUncertainty, at);
       const l = take(lin?.standardUncertainty, at);
       if (m && l && l.s > 0) worstRatio = Math.max(worstRatio, Math.abs(m.s / l.s - 1));
       return {
-        densityMolPerM3: isochoreRoute ? (isochoreFits[(nodeSets[k] as number[])[j] as number] as IsochoreFit).densityMolPerM3 : (rho[(nodeSets[k] as number[])[j] as number] as number),
+        densityMolPerM3: isochoreRoute
+          ? (isochoreFits[(nodeSets[k] as number[])[j] as number] as IsochoreFit).densityMolPerM3
+          : (rho[(nodeSets[k] as number[])[j] as number] as number),
         pressurePa: (nominal.pressures[k] as number[])[j] as number,
         residual: d,
         uncertainty,
@@ -436,15 +560,33 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
     });
   });
   if (mc && lin && worstRatio > 0.3) {
-    diagnostics.push({ code: "uncertainty-methods", severity: "info", message: `Monte Carlo and linearised uncertainties of s_res differ by up to ${(100 * worstRatio).toFixed(0)} % (Monte Carlo reported; the difference shrinks with more samples, or reveals a nonlinear route)` });
+    diagnostics.push({
+      code: "uncertainty-methods",
+      severity: "info",
+      message: `Monte Carlo and linearised uncertainties of s_res differ by up to ${(100 * worstRatio).toFixed(0)} % (Monte Carlo reported; the difference shrinks with more samples, or reveals a nonlinear route)`,
+    });
   }
   if (isochoreRoute) {
     if (surfaceFit.diagnostics.runs.z < -2) {
-      diagnostics.push({ code: "maxwell-consistency", severity: "info", message: "the global surface itself shows a residual pattern, so the slope cross-check against it is inconclusive (raise the surface order with options.surface, or add data)" });
-    } else diagnostics.push(...slopeConsistency(isochoreFits, surfaceFit.surface, isothermTs, nodeSets, slopeT, R));
+      diagnostics.push({
+        code: "maxwell-consistency",
+        severity: "info",
+        message:
+          "the global surface itself shows a residual pattern, so the slope cross-check against it is inconclusive (raise the surface order with options.surface, or add data)",
+      });
+    } else
+      diagnostics.push(
+        ...slopeConsistency(isochoreFits, surfaceFit.surface, isothermTs, nodeSets, slopeT, R),
+      );
   }
   if (dataset.setAside.length > 0) {
-    diagnostics.push({ code: "set-aside", severity: "info", message: `${dataset.setAside.length} point(s) set aside at import: ` + dataset.setAside.map((s) => `line ${s.line} (${s.reason})`).join("; ") });
+    diagnostics.push({
+      code: "set-aside",
+      severity: "info",
+      message:
+        `${dataset.setAside.length} point(s) set aside at import: ` +
+        dataset.setAside.map((s) => `line ${s.line} (${s.reason})`).join("; "),
+    });
   }
   return {
     route: isochoreRoute ? "isochores" : "surface",
@@ -453,12 +595,21 @@ export function departuresFromPvt(dataset: PvtDataset, options: PvtRouteOptions 
     isochoreFits,
     diagnostics,
     setAside: [...dataset.setAside],
-    uncertaintyMethod: { ...(mc ? { monteCarlo: { seed, samples: mc.samples } } : {}), linearised: lin !== undefined, sigmaSource: stated ? "stated" : "from-scatter" },
+    uncertaintyMethod: {
+      ...(mc ? { monteCarlo: { seed, samples: mc.samples } } : {}),
+      linearised: lin !== undefined,
+      sigmaSource: stated ? "stated" : "from-scatter",
+    },
     gasConstant: R,
   };
 }
 
-function nodesAt(fits: readonly IsochoreFit[], idx: readonly number[], t: number, withU: boolean): IsothermNodes {
+function nodesAt(
+  fits: readonly IsochoreFit[],
+  idx: readonly number[],
+  t: number,
+  withU: boolean,
+): IsothermNodes {
   const ev = idx.map((k) => (fits[k] as IsochoreFit).evaluate(t));
   return {
     temperatureK: t,
@@ -475,7 +626,8 @@ function nodesAt(fits: readonly IsochoreFit[], idx: readonly number[], t: number
 export function virialFromSurface(s: VirialSurface, temperatureK: number, k: number): number {
   const tau = s.temperatureScale / temperatureK;
   let v = 0;
-  for (let j = 0; j < s.temperatureTerms; j++) v += (s.coefficients[(k - 1) * s.temperatureTerms + j] as number) * tau ** j;
+  for (let j = 0; j < s.temperatureTerms; j++)
+    v += (s.coefficients[(k - 1) * s.temperatureTerms + j] as number) * tau ** j;
   return v / s.densityScale ** k;
 }
 
@@ -501,15 +653,26 @@ function slopeConsistency(
       const e = f.evaluate(t);
       const r = f.densityMolPerM3;
       const sS = slopeT(surface, t, r);
-      const g = surfaceBasis(surface, "aD", t, r).map((v, q) => r * gasConstant * (v + (surfaceBasis(surface, "aDT", t, r)[q] as number)));
+      const g = surfaceBasis(surface, "aD", t, r).map(
+        (v, q) => r * gasConstant * (v + (surfaceBasis(surface, "aDT", t, r)[q] as number)),
+      );
       const uS = Math.sqrt(surfaceVariance(surface, g));
       const u = Math.hypot(e.uSlopePaPerK, uS);
       checked++;
-      if (u > 0 && Math.abs(e.slopePaPerK - sS) > 3 * u) flagged.push(`${t.toFixed(2)} K, ${r.toPrecision(5)} mol/m3 (${((e.slopePaPerK - sS) / u).toFixed(1)} u)`);
+      if (u > 0 && Math.abs(e.slopePaPerK - sS) > 3 * u)
+        flagged.push(
+          `${t.toFixed(2)} K, ${r.toPrecision(5)} mol/m3 (${((e.slopePaPerK - sS) / u).toFixed(1)} u)`,
+        );
     }
   });
   if (flagged.length === 0) {
-    return [{ code: "maxwell-consistency", severity: "info", message: `isochoric slopes of the isochore fits agree with the global surface within 3 u at all ${checked} nodes` }];
+    return [
+      {
+        code: "maxwell-consistency",
+        severity: "info",
+        message: `isochoric slopes of the isochore fits agree with the global surface within 3 u at all ${checked} nodes`,
+      },
+    ];
   }
   return [
     {

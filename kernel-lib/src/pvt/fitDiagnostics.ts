@@ -50,7 +50,9 @@ export function fitDiagnostics(
         `${subject}: reduced chi-square ${red.toFixed(2)} > 3: the data scatter more than their stated uncertainties (or the order is too low); uncertainties were enlarged by sqrt(${red.toFixed(2)})`,
       );
     } else if (red < 0.1) {
-      rec.push(`${subject}: reduced chi-square ${red.toFixed(3)} < 0.1: the stated uncertainties look too large, or the order is too high`);
+      rec.push(
+        `${subject}: reduced chi-square ${red.toFixed(3)} < 0.1: the stated uncertainties look too large, or the order is too high`,
+      );
     }
   }
   if (runs.z < -2) {
@@ -59,7 +61,9 @@ export function fitDiagnostics(
     );
   }
   if (fit.conditionNumber > 1e8) {
-    rec.push(`${subject}: condition number ${fit.conditionNumber.toExponential(2)}: coefficients ill-determined; lower the order`);
+    rec.push(
+      `${subject}: condition number ${fit.conditionNumber.toExponential(2)}: coefficients ill-determined; lower the order`,
+    );
   }
   return {
     subject,

@@ -53,13 +53,22 @@ export function fitVirialSurface(
   const gas = options.gasConstant ?? R;
   const n = points.length;
   if (!(n >= 3)) {
-    throw new InputError({ input: "points", unit: "-", validRange: "at least 3 points for a surface fit", received: n });
+    throw new InputError({
+      input: "points",
+      unit: "-",
+      validRange: "at least 3 points for a surface fit",
+      received: n,
+    });
   }
   const temperatureScale = points.reduce((s, p) => s + p.temperatureK, 0) / n;
   const densityScale = Math.max(...points.map((p) => p.densityMolPerM3));
   const y = points.map((p) => p.pressurePa / (p.densityMolPerM3 * gas * p.temperatureK) - 1);
   const scaleKnown = sigmaPa !== undefined;
-  const sigma = points.map((p, i) => (sigmaPa ? (sigmaPa[i] as number) : p.pressurePa) / (p.densityMolPerM3 * gas * p.temperatureK));
+  const sigma = points.map(
+    (p, i) =>
+      (sigmaPa ? (sigmaPa[i] as number) : p.pressurePa) /
+      (p.densityMolPerM3 * gas * p.temperatureK),
+  );
   // Unit weights in P when unknown: sigma_y = P/(rho R T) ~ Z, i.e. relative pressure weights.
   const candidates: [number, number][] = [];
   const dMax = options.densityTerms ?? options.maxDensityTerms ?? 6;
@@ -92,7 +101,9 @@ export function fitVirialSurface(
       input: "points",
       unit: "-",
       validRange: "enough distinct temperatures and densities for at least one surface order",
-      received: `${n} points at ${distinctT} temperatures` + (lastError instanceof Error ? ` (${lastError.message})` : ""),
+      received:
+        `${n} points at ${distinctT} temperatures` +
+        (lastError instanceof Error ? ` (${lastError.message})` : ""),
     });
   }
   const { d, t, fit } = best;
@@ -100,7 +111,12 @@ export function fitVirialSurface(
   const red = dof > 0 ? fit.chiSquare / dof : 1;
   const factor = scaleKnown ? Math.max(1, red) : dof > 0 ? red : 1;
   const covariance = fit.covariance.map((row) => row.map((v) => v * factor));
-  const order = points.map((_, i) => i).sort((a, b) => (points[a] as SurfacePoint).densityMolPerM3 - (points[b] as SurfacePoint).densityMolPerM3);
+  const order = points
+    .map((_, i) => i)
+    .sort(
+      (a, b) =>
+        (points[a] as SurfacePoint).densityMolPerM3 - (points[b] as SurfacePoint).densityMolPerM3,
+    );
   const diagnostics = fitDiagnostics(
     `surface fit (${d} density x ${t} temperature terms)`,
     fit,
@@ -124,6 +140,8 @@ export function fitVirialSurface(
     surface,
     fit,
     diagnostics,
-    pressureResidualsPa: points.map((p, i) => (fit.residuals[i] as number) * p.densityMolPerM3 * gas * p.temperatureK),
+    pressureResidualsPa: points.map(
+      (p, i) => (fit.residuals[i] as number) * p.densityMolPerM3 * gas * p.temperatureK,
+    ),
   };
 }

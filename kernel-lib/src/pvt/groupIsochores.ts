@@ -12,8 +12,13 @@ export interface IsochoreGroup {
   members: number[];
 }
 
-export function groupIsochores(densities: readonly number[], relativeTolerance: number): IsochoreGroup[] {
-  const order = densities.map((_, i) => i).sort((a, b) => (densities[a] as number) - (densities[b] as number));
+export function groupIsochores(
+  densities: readonly number[],
+  relativeTolerance: number,
+): IsochoreGroup[] {
+  const order = densities
+    .map((_, i) => i)
+    .sort((a, b) => (densities[a] as number) - (densities[b] as number));
   const groups: IsochoreGroup[] = [];
   let current: number[] = [];
   let first = 0;
@@ -37,12 +42,21 @@ export function groupIsochores(densities: readonly number[], relativeTolerance: 
 }
 
 /** Clusters temperatures (sorted) whose neighbours lie within `toleranceK`; returns cluster means. */
-export function clusterTemperatures(temperaturesK: readonly number[], toleranceK: number): { temperatureK: number; members: number[] }[] {
-  const order = temperaturesK.map((_, i) => i).sort((a, b) => (temperaturesK[a] as number) - (temperaturesK[b] as number));
+export function clusterTemperatures(
+  temperaturesK: readonly number[],
+  toleranceK: number,
+): { temperatureK: number; members: number[] }[] {
+  const order = temperaturesK
+    .map((_, i) => i)
+    .sort((a, b) => (temperaturesK[a] as number) - (temperaturesK[b] as number));
   const out: { temperatureK: number; members: number[] }[] = [];
   let cur: number[] = [];
   const flush = () => {
-    if (cur.length > 0) out.push({ temperatureK: cur.reduce((s, i) => s + (temperaturesK[i] as number), 0) / cur.length, members: cur });
+    if (cur.length > 0)
+      out.push({
+        temperatureK: cur.reduce((s, i) => s + (temperaturesK[i] as number), 0) / cur.length,
+        members: cur,
+      });
   };
   for (const i of order) {
     const t = temperaturesK[i] as number;

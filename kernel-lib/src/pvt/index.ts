@@ -9,7 +9,10 @@ export type { PvtArrays, PvtFromArraysOptions } from "./pvtFromArrays.js";
 export { columnUnitToSI } from "./columnUnits.js";
 export type { ColumnQuantity, AffineToSI } from "./columnUnits.js";
 export { weightedLeastSquares } from "./weightedLeastSquares.js";
-export type { WeightedLeastSquaresOptions, WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
+export type {
+  WeightedLeastSquaresOptions,
+  WeightedLeastSquaresResult,
+} from "./weightedLeastSquares.js";
 export { seededRandom } from "./seededRandom.js";
 export type { SeededRandom } from "./seededRandom.js";
 export { runsTest } from "./runsTest.js";
@@ -18,7 +21,11 @@ export type { FitDiagnostics } from "./fitDiagnostics.js";
 export { fitIsochore } from "./isochoreFit.js";
 export type { IsochoreFit, IsochoreFitOptions } from "./isochoreFit.js";
 export { fitVirialSurface } from "./fitVirialSurface.js";
-export type { FitVirialSurfaceOptions, VirialSurfaceFit, SurfacePoint } from "./fitVirialSurface.js";
+export type {
+  FitVirialSurfaceOptions,
+  VirialSurfaceFit,
+  SurfacePoint,
+} from "./fitVirialSurface.js";
 export { surfaceDerivatives } from "./virialSurface.js";
 export type { VirialSurface } from "./virialSurface.js";
 export { surfaceResidualModel } from "./surfaceResidualModel.js";
@@ -28,9 +35,18 @@ export type { CumulativeIntegral } from "./irregularQuadrature.js";
 export { lowDensityBridge } from "./lowDensityBridge.js";
 export type { BridgeOptions, BridgeResult } from "./lowDensityBridge.js";
 export { integrateIsotherm } from "./integrateIsotherm.js";
-export type { IsothermNodes, IsothermDepartures, IntegrateIsothermOptions } from "./integrateIsotherm.js";
+export type {
+  IsothermNodes,
+  IsothermDepartures,
+  IntegrateIsothermOptions,
+} from "./integrateIsotherm.js";
 export { departuresFromPvt, virialFromSurface } from "./departuresFromPvt.js";
-export type { PvtRouteOptions, PvtRouteResult, PvtIsotherm, PvtState } from "./departuresFromPvt.js";
+export type {
+  PvtRouteOptions,
+  PvtRouteResult,
+  PvtIsotherm,
+  PvtState,
+} from "./departuresFromPvt.js";
 export type { DepartureSet } from "./departureSet.js";
 export type { PvtDiagnostic } from "./pvtDiagnostic.js";
 export { compareWithModel } from "./compareWithModel.js";

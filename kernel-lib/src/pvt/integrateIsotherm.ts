@@ -53,33 +53,58 @@ export interface IntegrateIsothermOptions {
   gasConstant: number;
 }
 
-export function integrateIsotherm(nodes: IsothermNodes, options: IntegrateIsothermOptions): IsothermDepartures {
+export function integrateIsotherm(
+  nodes: IsothermNodes,
+  options: IntegrateIsothermOptions,
+): IsothermDepartures {
   const T = nodes.temperatureK;
   const R = options.gasConstant;
   const rho = nodes.densityMolPerM3;
   const fA = rho.map((r, k) => ((nodes.pressurePa[k] as number) - r * R * T) / (r * r));
   const fS = rho.map((r, k) => (r * R - (nodes.slopePaPerK[k] as number)) / (r * r));
-  const sA = nodes.uPressurePa ? rho.map((r, k) => (nodes.uPressurePa as readonly number[])[k] as number / (r * r)) : undefined;
-  const sS = nodes.uSlopePaPerK ? rho.map((r, k) => (nodes.uSlopePaPerK as readonly number[])[k] as number / (r * r)) : undefined;
-  const bridgeA = lowDensityBridge(rho, fA, sA, { ...options.bridge, degree: options.bridgeDegrees?.a ?? options.bridge?.degree });
-  const bridgeS = lowDensityBridge(rho, fS, sS, { ...options.bridge, degree: options.bridgeDegrees?.s ?? options.bridge?.degree });
+  const sA = nodes.uPressurePa
+    ? rho.map((r, k) => ((nodes.uPressurePa as readonly number[])[k] as number) / (r * r))
+    : undefined;
+  const sS = nodes.uSlopePaPerK
+    ? rho.map((r, k) => ((nodes.uSlopePaPerK as readonly number[])[k] as number) / (r * r))
+    : undefined;
+  const bridgeA = lowDensityBridge(rho, fA, sA, {
+    ...options.bridge,
+    degree: options.bridgeDegrees?.a ?? options.bridge?.degree,
+  });
+  const bridgeS = lowDensityBridge(rho, fS, sS, {
+    ...options.bridge,
+    degree: options.bridgeDegrees?.s ?? options.bridge?.degree,
+  });
   const qA = cumulativeIrregular(rho, fA);
   const qS = cumulativeIrregular(rho, fS);
   const departures = rho.map((r, k) => {
     const Z = (nodes.pressurePa[k] as number) / (r * R * T);
-    return departuresFromIntegrals(T, Z, bridgeA.integral + (qA.values[k] as number), bridgeS.integral + (qS.values[k] as number), R);
+    return departuresFromIntegrals(
+      T,
+      Z,
+      bridgeA.integral + (qA.values[k] as number),
+      bridgeS.integral + (qS.values[k] as number),
+      R,
+    );
   });
   const RT = R * T;
   return {
     temperatureK: T,
     departures,
-    quadratureError: rho.map((_, k) => ({ a: qA.errorEstimates[k] as number, s: qS.errorEstimates[k] as number })),
+    quadratureError: rho.map((_, k) => ({
+      a: qA.errorEstimates[k] as number,
+      s: qS.errorEstimates[k] as number,
+    })),
     bridgeA,
     bridgeS,
     B: (bridgeA.coefficients[0] as number) / RT,
     uB: Math.hypot(bridgeA.coefficientUncertainties[0] as number, bridgeA.truncationAtZero) / RT,
     ...(bridgeA.degree >= 1
-      ? { C: (bridgeA.coefficients[1] as number) / RT, uC: (bridgeA.coefficientUncertainties[1] as number) / RT }
+      ? {
+          C: (bridgeA.coefficients[1] as number) / RT,
+          uC: (bridgeA.coefficientUncertainties[1] as number) / RT,
+        }
       : {}),
   };
 }

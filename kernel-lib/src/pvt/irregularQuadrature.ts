@@ -21,7 +21,16 @@ export interface CumulativeIntegral {
 }
 
 /** Integral over [a, b] of the parabola through (x0,f0), (x1,f1), (x2,f2) (Newton form). */
-function parabolaIntegral(x0: number, x1: number, x2: number, f0: number, f1: number, f2: number, a: number, b: number): number {
+function parabolaIntegral(
+  x0: number,
+  x1: number,
+  x2: number,
+  f0: number,
+  f1: number,
+  f2: number,
+  a: number,
+  b: number,
+): number {
   const d01 = (f1 - f0) / (x1 - x0);
   const d12 = (f2 - f1) / (x2 - x1);
   const d012 = (d12 - d01) / (x2 - x0);
@@ -30,17 +39,34 @@ function parabolaIntegral(x0: number, x1: number, x2: number, f0: number, f1: nu
   const A = a - x0;
   const B = a - x1;
   // int_0^h (A + t) dt = A h + h^2/2;  int_0^h (A + t)(B + t) dt = A B h + (A + B) h^2/2 + h^3/3.
-  return f0 * h + d01 * (A * h + (h * h) / 2) + d012 * (A * B * h + ((A + B) * h * h) / 2 + (h * h * h) / 3);
+  return (
+    f0 * h +
+    d01 * (A * h + (h * h) / 2) +
+    d012 * (A * B * h + ((A + B) * h * h) / 2 + (h * h * h) / 3)
+  );
 }
 
-export function cumulativeIrregular(x: readonly number[], f: readonly number[]): CumulativeIntegral {
+export function cumulativeIrregular(
+  x: readonly number[],
+  f: readonly number[],
+): CumulativeIntegral {
   const n = x.length;
   if (n !== f.length || n < 1) {
-    throw new InputError({ input: "x, f", unit: "-", validRange: "equal, non-zero lengths", received: `${x.length}, ${f.length}` });
+    throw new InputError({
+      input: "x, f",
+      unit: "-",
+      validRange: "equal, non-zero lengths",
+      received: `${x.length}, ${f.length}`,
+    });
   }
   for (let i = 1; i < n; i++) {
     if (!((x[i] as number) > (x[i - 1] as number))) {
-      throw new InputError({ input: `x[${i}]`, unit: "-", validRange: `> x[${i - 1}] = ${x[i - 1]} (strictly increasing nodes)`, received: x[i] });
+      throw new InputError({
+        input: `x[${i}]`,
+        unit: "-",
+        validRange: `> x[${i - 1}] = ${x[i - 1]} (strictly increasing nodes)`,
+        received: x[i],
+      });
     }
   }
   const values = [0];
@@ -50,8 +76,32 @@ export function cumulativeIrregular(x: readonly number[], f: readonly number[]):
     const b = x[k + 1] as number;
     const trap = 0.5 * (b - a) * ((f[k] as number) + (f[k + 1] as number));
     const parts: number[] = [];
-    if (k >= 1) parts.push(parabolaIntegral(x[k - 1] as number, a, b, f[k - 1] as number, f[k] as number, f[k + 1] as number, a, b));
-    if (k + 2 < n) parts.push(parabolaIntegral(a, b, x[k + 2] as number, f[k] as number, f[k + 1] as number, f[k + 2] as number, a, b));
+    if (k >= 1)
+      parts.push(
+        parabolaIntegral(
+          x[k - 1] as number,
+          a,
+          b,
+          f[k - 1] as number,
+          f[k] as number,
+          f[k + 1] as number,
+          a,
+          b,
+        ),
+      );
+    if (k + 2 < n)
+      parts.push(
+        parabolaIntegral(
+          a,
+          b,
+          x[k + 2] as number,
+          f[k] as number,
+          f[k + 1] as number,
+          f[k + 2] as number,
+          a,
+          b,
+        ),
+      );
     let piece: number;
     let err: number;
     if (parts.length === 2) {

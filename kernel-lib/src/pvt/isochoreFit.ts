@@ -37,7 +37,12 @@ export interface IsochoreFit {
   /** Standard deviation used for each point, Pa (stated, or from the scatter). */
   readonly sigmaPa: readonly number[];
   /** P (Pa) and dP/dT (Pa/K) at T, with standard uncertainties. */
-  evaluate(temperatureK: number): { pressurePa: number; slopePaPerK: number; uPressurePa: number; uSlopePaPerK: number };
+  evaluate(temperatureK: number): {
+    pressurePa: number;
+    slopePaPerK: number;
+    uPressurePa: number;
+    uSlopePaPerK: number;
+  };
 }
 
 export function fitIsochore(
@@ -94,7 +99,9 @@ export function fitIsochore(
   // Stated sigmas: enlarge when the scatter is larger (Birge ratio); unknown: scale from the scatter.
   const factor = scaleKnown ? (dof > 0 ? Math.max(1, red) : 1) : dof > 0 ? red : 0;
   const cov = fit.covariance.map((r) => r.map((v) => v * factor));
-  const sortIdx = temperaturesK.map((_, i) => i).sort((a, b) => (temperaturesK[a] as number) - (temperaturesK[b] as number));
+  const sortIdx = temperaturesK
+    .map((_, i) => i)
+    .sort((a, b) => (temperaturesK[a] as number) - (temperaturesK[b] as number));
   const diagnostics = fitDiagnostics(
     `isochore ${densityMolPerM3.toPrecision(6)} mol/m3 (order ${order})`,
     fit,
@@ -102,7 +109,9 @@ export function fitIsochore(
     scaleKnown ? "stated" : "from-scatter",
   );
   const c = fit.coefficients;
-  const usedSigma = scaleKnown ? sigma.map((s) => s * Math.sqrt(Math.max(1, dof > 0 ? red : 1))) : sigma.map(() => Math.sqrt(factor));
+  const usedSigma = scaleKnown
+    ? sigma.map((s) => s * Math.sqrt(Math.max(1, dof > 0 ? red : 1)))
+    : sigma.map(() => Math.sqrt(factor));
   return {
     densityMolPerM3,
     order,
@@ -117,7 +126,9 @@ export function fitIsochore(
       const gS = c.map((_, j) => (j === 0 ? 0 : (j * x ** (j - 1)) / half));
       const quad = (g: number[]) => {
         let v = 0;
-        for (let i = 0; i < g.length; i++) for (let j = 0; j < g.length; j++) v += (g[i] as number) * ((cov[i] as number[])[j] as number) * (g[j] as number);
+        for (let i = 0; i < g.length; i++)
+          for (let j = 0; j < g.length; j++)
+            v += (g[i] as number) * ((cov[i] as number[])[j] as number) * (g[j] as number);
         return Math.sqrt(Math.max(v, 0));
       };
       let P = 0;

@@ -68,7 +68,10 @@ export function lowDensityBridge(
     const design = x.map((r) => Array.from({ length: degree + 1 }, (_, j) => (r / scale) ** j));
     const c = weightedLeastSquares(design, y, s).coefficients;
     return {
-      integral: c.reduce((acc, cj, j) => acc + (cj / scale ** j) * (toDensity ** (j + 1) / (j + 1)), 0),
+      integral: c.reduce(
+        (acc, cj, j) => acc + (cj / scale ** j) * (toDensity ** (j + 1) / (j + 1)),
+        0,
+      ),
       c0: c[0] as number,
     };
   };
@@ -86,22 +89,30 @@ export function lowDensityBridge(
         score,
         degree,
         coef: fit.coefficients.map((c, j) => c / scale ** j),
-        cov: fit.covariance.map((row, i) => row.map((v, j) => (v * factor) / (scale ** i * scale ** j))),
+        cov: fit.covariance.map((row, i) =>
+          row.map((v, j) => (v * factor) / (scale ** i * scale ** j)),
+        ),
       };
     }
   }
   if (!best) {
-    throw new SolverError("low-density bridge fit", `no admissible degree among ${degrees.join(", ")} with ${m} nodes`);
+    throw new SolverError(
+      "low-density bridge fit",
+      `no admissible degree among ${degrees.join(", ")} with ${m} nodes`,
+    );
   }
   const g = best.coef.map((_, j) => toDensity ** (j + 1) / (j + 1));
   let integral = 0;
   let v = 0;
   for (let i = 0; i < g.length; i++) {
     integral += (g[i] as number) * (best.coef[i] as number);
-    for (let j = 0; j < g.length; j++) v += (g[i] as number) * ((best.cov[i] as number[])[j] as number) * (g[j] as number);
+    for (let j = 0; j < g.length; j++)
+      v += (g[i] as number) * ((best.cov[i] as number[])[j] as number) * (g[j] as number);
   }
   const other =
-    options.estimateTruncation === false ? undefined : (integralOf(best.degree + 1) ?? integralOf(best.degree - 1));
+    options.estimateTruncation === false
+      ? undefined
+      : (integralOf(best.degree + 1) ?? integralOf(best.degree - 1));
   return {
     truncation: other === undefined ? 0 : Math.abs(other.integral - integral),
     truncationAtZero: other === undefined ? 0 : Math.abs(other.c0 - (best.coef[0] as number)),

@@ -79,13 +79,18 @@ function parseHeader(
   let unit: string;
   if (um) {
     const base = NAMES[um[1] ?? ""];
-    if (base === undefined) fail(`an uncertainty column of one of: ${KNOWN}`, JSON.stringify(header));
+    if (base === undefined)
+      fail(`an uncertainty column of one of: ${KNOWN}`, JSON.stringify(header));
     role = ("u" + base) as Role;
     unit = um[2] ?? "";
   } else if (m) {
     const base = NAMES[(m[1] ?? "").trim()];
     if (base === undefined) {
-      fail(`a column named one of: ${KNOWN}`, JSON.stringify(header), "remove or rename the column");
+      fail(
+        `a column named one of: ${KNOWN}`,
+        JSON.stringify(header),
+        "remove or rename the column",
+      );
     }
     role = base;
     unit = m[2] ?? "";
@@ -98,7 +103,8 @@ function parseHeader(
     );
   }
   const r = role as Role;
-  if (unit.trim() === "") fail(`a unit in the brackets of ${JSON.stringify(header)}`, "an empty unit");
+  if (unit.trim() === "")
+    fail(`a unit in the brackets of ${JSON.stringify(header)}`, "an empty unit");
   const conv = columnUnitToSI(ROLE_QUANTITY[r], unit, molarMass);
   if (!isAffineToSI(conv)) return fail(conv.expected, `unit ${JSON.stringify(unit)}`, conv.hint);
   return { role: r, header, index, toSI: conv };
@@ -146,7 +152,8 @@ export function parsePvtCsv(text: string, options: ParsePvtCsvOptions = {}): Pvt
     });
   if (!byRole.has("T")) throw missing("temperature (T [unit])");
   if (!byRole.has("P")) throw missing("pressure (P [unit])");
-  if (!byRole.has("rho") && !byRole.has("v")) throw missing("density (rho [unit]) or volume (v [unit])");
+  if (!byRole.has("rho") && !byRole.has("v"))
+    throw missing("density (rho [unit]) or volume (v [unit])");
   const conflict = (a: Role, b: Role) => {
     const ca = byRole.get(a);
     const cb = byRole.get(b);
@@ -181,7 +188,14 @@ export function parsePvtCsv(text: string, options: ParsePvtCsvOptions = {}): Pvt
     for (const c of columns) {
       const cell = row.cells[c.index] ?? "";
       const fail = (expected: string, found: string) =>
-        new PvtFormatError({ source, line: row.line, column: c.index + 1, header: c.header, expected, found });
+        new PvtFormatError({
+          source,
+          line: row.line,
+          column: c.index + 1,
+          header: c.header,
+          expected,
+          found,
+        });
       if (!NUMBER.test(cell)) {
         throw fail("a number", cell === "" ? "an empty cell" : JSON.stringify(cell));
       }
@@ -232,7 +246,11 @@ export function parsePvtCsv(text: string, options: ParsePvtCsvOptions = {}): Pvt
     source,
     points: kept,
     setAside,
-    columns: columns.map((c) => ({ header: c.header, quantity: c.role, unit: c.toSI.siUnit + (c.toSI.note ? ` (${c.toSI.note})` : "") })),
+    columns: columns.map((c) => ({
+      header: c.header,
+      quantity: c.role,
+      unit: c.toSI.siUnit + (c.toSI.note ? ` (${c.toSI.note})` : ""),
+    })),
     comments: comments.map((c) => c.text),
   };
 }

@@ -43,7 +43,10 @@ export function monteCarloPropagation(
       m2[k] = (m2[k] as number) + d * ((out[k] as number) - (mean[k] as number));
     }
   }
-  return { standardUncertainty: (m2 ?? []).map((v) => Math.sqrt(v / Math.max(samples - 1, 1))), samples };
+  return {
+    standardUncertainty: (m2 ?? []).map((v) => Math.sqrt(v / Math.max(samples - 1, 1))),
+    samples,
+  };
 }
 
 export function linearisedPropagation(

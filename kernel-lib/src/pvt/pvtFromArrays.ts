@@ -43,7 +43,12 @@ export function pvtFromArrays(arrays: PvtArrays, options: PvtFromArraysOptions =
   const fail = (line: number, header: string, expected: string, found: string) =>
     new PvtFormatError({ source, line, column: 0, header, expected, found });
   if (arrays.densityMolPerM3 !== undefined && arrays.molarVolumeM3PerMol !== undefined) {
-    throw fail(0, "densityMolPerM3", "either densityMolPerM3 or molarVolumeM3PerMol, not both", "both");
+    throw fail(
+      0,
+      "densityMolPerM3",
+      "either densityMolPerM3 or molarVolumeM3PerMol, not both",
+      "both",
+    );
   }
   const dens = arrays.densityMolPerM3 ?? arrays.molarVolumeM3PerMol;
   const densName = arrays.densityMolPerM3 !== undefined ? "densityMolPerM3" : "molarVolumeM3PerMol";
@@ -58,14 +63,27 @@ export function pvtFromArrays(arrays: PvtArrays, options: PvtFromArraysOptions =
   ];
   for (const [name, arr] of required) {
     if (!Array.isArray(arr) || arr.length !== n) {
-      throw fail(0, name, `an array of ${n} numbers (as temperatureK)`, `${Array.isArray(arr) ? arr.length : typeof arr}`);
+      throw fail(
+        0,
+        name,
+        `an array of ${n} numbers (as temperatureK)`,
+        `${Array.isArray(arr) ? arr.length : typeof arr}`,
+      );
     }
   }
-  const perPoint = (name: string, u: number | readonly number[] | undefined): ((i: number) => number | undefined) => {
+  const perPoint = (
+    name: string,
+    u: number | readonly number[] | undefined,
+  ): ((i: number) => number | undefined) => {
     if (u === undefined) return () => undefined;
     if (typeof u === "number") return () => u;
     if (!Array.isArray(u) || u.length !== n) {
-      throw fail(0, name, `one number or an array of ${n}`, `${Array.isArray(u) ? u.length : typeof u}`);
+      throw fail(
+        0,
+        name,
+        `one number or an array of ${n}`,
+        `${Array.isArray(u) ? u.length : typeof u}`,
+      );
     }
     return (i) => u[i];
   };
@@ -82,7 +100,12 @@ export function pvtFromArrays(arrays: PvtArrays, options: PvtFromArraysOptions =
   const points: PvtPoint[] = [];
   for (let i = 0; i < n; i++) {
     const T = positive("temperatureK", i, arrays.temperatureK[i], "K") as number;
-    const d = positive(densName, i, dens[i], densName === "densityMolPerM3" ? "mol/m3" : "m3/mol") as number;
+    const d = positive(
+      densName,
+      i,
+      dens[i],
+      densName === "densityMolPerM3" ? "mol/m3" : "m3/mol",
+    ) as number;
     const P = positive("pressurePa", i, arrays.pressurePa[i], "Pa") as number;
     const rho = densName === "densityMolPerM3" ? d : 1 / d;
     points.push({

@@ -9,7 +9,10 @@ import type { ParsePvtCsvOptions } from "./parsePvtCsv.js";
 import type { PvtDataset } from "./types.js";
 
 /** Reads `path` (UTF-8) and parses it; error messages name the file. */
-export function readPvtCsvFile(path: string, options: Omit<ParsePvtCsvOptions, "source"> = {}): PvtDataset {
+export function readPvtCsvFile(
+  path: string,
+  options: Omit<ParsePvtCsvOptions, "source"> = {},
+): PvtDataset {
   let text: string;
   try {
     text = fs.readFileSync(path, "utf8");

@@ -24,7 +24,12 @@ export interface SeededRandom {
 /** Creates a generator from an integer seed in [0, 2^32). */
 export function seededRandom(seed: number): SeededRandom {
   if (!(Number.isInteger(seed) && seed >= 0 && seed < 2 ** 32)) {
-    throw new InputError({ input: "seed", unit: "-", validRange: "an integer in [0, 2^32)", received: seed });
+    throw new InputError({
+      input: "seed",
+      unit: "-",
+      validRange: "an integer in [0, 2^32)",
+      received: seed,
+    });
   }
   let sm = seed >>> 0;
   const splitmix32 = (): number => {

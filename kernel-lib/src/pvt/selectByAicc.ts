@@ -4,7 +4,12 @@
  * uncertainties -2 ln L = chi2 (up to a constant); with unit weights and unknown scale it is
  * n ln(RSS/n). A candidate needs n - k - 1 > 0.
  */
-export function aicc(chiSquareOrRss: number, observations: number, coefficients: number, scaleKnown: boolean): number {
+export function aicc(
+  chiSquareOrRss: number,
+  observations: number,
+  coefficients: number,
+  scaleKnown: boolean,
+): number {
   const n = observations;
   const k = coefficients;
   if (!(n - k - 1 > 0)) return Number.POSITIVE_INFINITY;

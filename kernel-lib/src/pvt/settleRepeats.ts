@@ -9,7 +9,8 @@ import { PvtFormatError } from "./pvtFormatError.js";
 import type { PvtPoint, SetAsidePoint } from "./types.js";
 
 function sameState(a: PvtPoint, b: PvtPoint): boolean {
-  const close = (x: number, y: number) => Math.abs(x - y) <= 1e-12 * Math.max(Math.abs(x), Math.abs(y));
+  const close = (x: number, y: number) =>
+    Math.abs(x - y) <= 1e-12 * Math.max(Math.abs(x), Math.abs(y));
   return close(a.temperatureK, b.temperatureK) && close(a.densityMolPerM3, b.densityMolPerM3);
 }
 

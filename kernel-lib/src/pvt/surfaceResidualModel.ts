@@ -23,7 +23,10 @@ export interface SurfaceModelOptions {
   gasConstant?: number;
 }
 
-export function surfaceResidualModel(surface: VirialSurface, options: SurfaceModelOptions = {}): ResidualModel {
+export function surfaceResidualModel(
+  surface: VirialSurface,
+  options: SurfaceModelOptions = {},
+): ResidualModel {
   const { minTemperatureK, maxTemperatureK, maxDensityMolPerM3 } = surface.range;
   return {
     info: {
@@ -35,11 +38,15 @@ export function surfaceResidualModel(surface: VirialSurface, options: SurfaceMod
       componentIds: options.componentIds ?? ["fluid"],
     },
     ...(options.gasConstant !== undefined ? { gasConstant: options.gasConstant } : {}),
-    residual: (temperatureK, densityMolPerM3) => surfaceDerivatives(surface, temperatureK, densityMolPerM3),
+    residual: (temperatureK, densityMolPerM3) =>
+      surfaceDerivatives(surface, temperatureK, densityMolPerM3),
     maxDensity: () => Infinity,
     checkValidity(temperatureK, densityMolPerM3): ResultWarning[] {
       const out: ResultWarning[] = [];
-      if (!(temperatureK >= minTemperatureK && temperatureK <= maxTemperatureK) || !(densityMolPerM3 <= maxDensityMolPerM3)) {
+      if (
+        !(temperatureK >= minTemperatureK && temperatureK <= maxTemperatureK) ||
+        !(densityMolPerM3 <= maxDensityMolPerM3)
+      ) {
         out.push({
           code: "extrapolated",
           message: `state (${temperatureK} K, ${densityMolPerM3} mol/m3) is outside the fitted data (${minTemperatureK}-${maxTemperatureK} K, up to ${maxDensityMolPerM3.toPrecision(5)} mol/m3)`,

@@ -91,8 +91,13 @@ function dot(a: readonly number[], b: readonly number[]): number {
 }
 
 /** Reduced residual Helmholtz derivatives of the surface (eos/types.ts convention). */
-export function surfaceDerivatives(s: VirialSurface, temperatureK: number, densityMolPerM3: number): ResidualDerivatives {
-  const q = (name: SurfaceQuantity) => dot(surfaceBasis(s, name, temperatureK, densityMolPerM3), s.coefficients);
+export function surfaceDerivatives(
+  s: VirialSurface,
+  temperatureK: number,
+  densityMolPerM3: number,
+): ResidualDerivatives {
+  const q = (name: SurfaceQuantity) =>
+    dot(surfaceBasis(s, name, temperatureK, densityMolPerM3), s.coefficients);
   return { a: q("a"), aD: q("aD"), aDD: q("aDD"), aT: q("aT"), aTT: q("aTT"), aDT: q("aDT") };
 }
 
@@ -101,7 +106,8 @@ export function surfaceVariance(s: VirialSurface, gradient: readonly number[]): 
   let v = 0;
   for (let i = 0; i < gradient.length; i++) {
     const row = s.covariance[i] as readonly number[];
-    for (let j = 0; j < gradient.length; j++) v += (gradient[i] as number) * (row[j] as number) * (gradient[j] as number);
+    for (let j = 0; j < gradient.length; j++)
+      v += (gradient[i] as number) * (row[j] as number) * (gradient[j] as number);
   }
   return Math.max(v, 0);
 }

@@ -61,7 +61,12 @@ export function weightedLeastSquares(
     });
   }
   if (y.length !== m || sigma.length !== m) {
-    throw new InputError({ input: "y, sigma", unit: "-", validRange: `length ${m}`, received: `${y.length}, ${sigma.length}` });
+    throw new InputError({
+      input: "y, sigma",
+      unit: "-",
+      validRange: `length ${m}`,
+      received: `${y.length}, ${sigma.length}`,
+    });
   }
   // Weighted design (row i divided by sigma_i), then columns scaled to unit 2-norm.
   const a: number[][] = [];
@@ -69,10 +74,21 @@ export function weightedLeastSquares(
   for (let i = 0; i < m; i++) {
     const s = sigma[i] as number;
     if (!(s > 0 && s < Infinity)) {
-      throw new InputError({ input: `sigma[${i}]`, unit: "-", validRange: "a finite number > 0", received: s });
+      throw new InputError({
+        input: `sigma[${i}]`,
+        unit: "-",
+        validRange: "a finite number > 0",
+        received: s,
+      });
     }
     const row = design[i] as readonly number[];
-    if (row.length !== n) throw new InputError({ input: `design[${i}]`, unit: "-", validRange: `${n} columns`, received: row.length });
+    if (row.length !== n)
+      throw new InputError({
+        input: `design[${i}]`,
+        unit: "-",
+        validRange: `${n} columns`,
+        received: row.length,
+      });
     a.push(row.map((v) => v / s));
     b.push((y[i] as number) / s);
   }
@@ -103,7 +119,8 @@ export function weightedLeastSquares(
       let dot = 0;
       for (let i = k; i < m; i++) dot += (v[i - k] as number) * ((a[i] as number[])[j] as number);
       const f = (2 * dot) / vnorm2;
-      for (let i = k; i < m; i++) (a[i] as number[])[j] = ((a[i] as number[])[j] as number) - f * (v[i - k] as number);
+      for (let i = k; i < m; i++)
+        (a[i] as number[])[j] = ((a[i] as number[])[j] as number) - f * (v[i - k] as number);
     }
     let dot = 0;
     for (let i = k; i < m; i++) dot += (v[i - k] as number) * (b[i] as number);
@@ -111,7 +128,8 @@ export function weightedLeastSquares(
     for (let i = k; i < m; i++) b[i] = (b[i] as number) - f * (v[i - k] as number);
   }
   const R: number[][] = [];
-  for (let i = 0; i < n; i++) R.push(Array.from({ length: n }, (_, j) => (j < i ? 0 : ((a[i] as number[])[j] as number))));
+  for (let i = 0; i < n; i++)
+    R.push(Array.from({ length: n }, (_, j) => (j < i ? 0 : ((a[i] as number[])[j] as number))));
   const sv = singularValues(R);
   const smax = Math.max(...sv);
   const smin = Math.min(...sv);
@@ -136,7 +154,8 @@ export function weightedLeastSquares(
     (Rinv[j] as number[])[j] = 1 / ((R[j] as number[])[j] as number);
     for (let i = j - 1; i >= 0; i--) {
       let s = 0;
-      for (let k = i + 1; k <= j; k++) s += ((R[i] as number[])[k] as number) * ((Rinv[k] as number[])[j] as number);
+      for (let k = i + 1; k <= j; k++)
+        s += ((R[i] as number[])[k] as number) * ((Rinv[k] as number[])[j] as number);
       (Rinv[i] as number[])[j] = -s / ((R[i] as number[])[i] as number);
     }
   }
@@ -144,7 +163,8 @@ export function weightedLeastSquares(
   for (let i = 0; i < n; i++) {
     for (let j = 0; j < n; j++) {
       let s = 0;
-      for (let k = Math.max(i, j); k < n; k++) s += ((Rinv[i] as number[])[k] as number) * ((Rinv[j] as number[])[k] as number);
+      for (let k = Math.max(i, j); k < n; k++)
+        s += ((Rinv[i] as number[])[k] as number) * ((Rinv[j] as number[])[k] as number);
       (covariance[i] as number[])[j] = s / ((colScale[i] as number) * (colScale[j] as number));
     }
   }
@@ -173,7 +193,11 @@ export function weightedLeastSquares(
 }
 
 /** Singular values of a small square matrix by one-sided Jacobi (Hestenes 1958). */
-export function singularValues(matrix: readonly (readonly number[])[], tolerance = 1e-15, maxSweeps = 60): number[] {
+export function singularValues(
+  matrix: readonly (readonly number[])[],
+  tolerance = 1e-15,
+  maxSweeps = 60,
+): number[] {
   const n = matrix.length;
   const u = matrix.map((r) => r.slice());
   for (let sweep = 0; sweep < maxSweeps; sweep++) {

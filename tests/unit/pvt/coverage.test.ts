@@ -7,7 +7,13 @@ import { departuresPR, pressurePR, secondVirialPR } from "./pengRobinsonTruth.js
 // the truth being the closed-form Peng-Robinson CO2 departures. A 95 % interval (1.96 u, normal
 // coverage factor, JCGM 100:2008 G.3) should cover the truth in close to 95 % of the cases; the
 // issue's acceptance band is 90-99 %.
-const spec = { densities: geometric(200, 6000, 6), temperatures: range(310, 370, 7), pressure: pressurePR, relativeUP: 2e-4, uT: 0.005 };
+const spec = {
+  densities: geometric(200, 6000, 6),
+  temperatures: range(310, 370, 7),
+  pressure: pressurePR,
+  relativeUP: 2e-4,
+  uT: 0.005,
+};
 const KEYS = ["a", "s", "u", "h", "g"] as const;
 
 function coverage(seeds: number[], samples: number) {
@@ -16,7 +22,10 @@ function coverage(seeds: number[], samples: number) {
   let bInside = 0;
   let bTotal = 0;
   for (const seed of seeds) {
-    const r = departuresFromPvt(campaign({ ...spec, seed }), { monteCarloSamples: samples, linearised: samples === 0 });
+    const r = departuresFromPvt(campaign({ ...spec, seed }), {
+      monteCarloSamples: samples,
+      linearised: samples === 0,
+    });
     for (const iso of r.isotherms) {
       const t = iso.temperatureK;
       const B = secondVirialPR(t);
@@ -36,7 +45,10 @@ function coverage(seeds: number[], samples: number) {
 
 describe("uncertainty coverage over many seeds", () => {
   it("linearised uncertainties: 95 % intervals cover the truth in 90-99 % of 120 noisy campaigns", () => {
-    const c = coverage(Array.from({ length: 120 }, (_, i) => 1000 + i), 0);
+    const c = coverage(
+      Array.from({ length: 120 }, (_, i) => 1000 + i),
+      0,
+    );
     expect(c.total).toBeGreaterThan(5000);
     expect(c.rate).toBeGreaterThanOrEqual(0.9);
     expect(c.rate).toBeLessThanOrEqual(0.99);
@@ -45,7 +57,10 @@ describe("uncertainty coverage over many seeds", () => {
   });
 
   it("Monte Carlo uncertainties (seeded, 100 samples): coverage in 90-99 % over 30 campaigns", () => {
-    const c = coverage(Array.from({ length: 30 }, (_, i) => 5000 + i), 100);
+    const c = coverage(
+      Array.from({ length: 30 }, (_, i) => 5000 + i),
+      100,
+    );
     expect(c.rate).toBeGreaterThanOrEqual(0.9);
     expect(c.rate).toBeLessThanOrEqual(0.99);
   });
@@ -56,7 +71,9 @@ describe("uncertainty coverage over many seeds", () => {
     const b = departuresFromPvt(ds, { monteCarloSamples: 30, seed: 9 });
     const c = departuresFromPvt(ds, { monteCarloSamples: 30, seed: 10 });
     expect(b.isotherms[2]?.states[3]?.uncertainty).toEqual(a.isotherms[2]?.states[3]?.uncertainty);
-    expect(c.isotherms[2]?.states[3]?.uncertainty.s).not.toBe(a.isotherms[2]?.states[3]?.uncertainty.s);
+    expect(c.isotherms[2]?.states[3]?.uncertainty.s).not.toBe(
+      a.isotherms[2]?.states[3]?.uncertainty.s,
+    );
     expect(a.uncertaintyMethod.monteCarlo).toEqual({ seed: 9, samples: 30 });
   });
 });

@@ -1,5 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { compareWithModel, departuresFromPvt, surfaceResidualModel } from "../../../kernel-lib/src/pvt/index.js";
+import {
+  compareWithModel,
+  departuresFromPvt,
+  surfaceResidualModel,
+} from "../../../kernel-lib/src/pvt/index.js";
 import type { PvtRouteResult } from "../../../kernel-lib/src/pvt/index.js";
 import type { ResidualModel } from "../../../kernel-lib/src/eos/types.js";
 import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/index.js";
@@ -9,13 +13,19 @@ import { departuresPR, pressurePR, secondVirialPR } from "./pengRobinsonTruth.js
 
 const KEYS = ["a", "s", "u", "h", "g"] as const;
 
-function worst(result: PvtRouteResult, truth: (T: number, rho: number) => Record<(typeof KEYS)[number], number>) {
+function worst(
+  result: PvtRouteResult,
+  truth: (T: number, rho: number) => Record<(typeof KEYS)[number], number>,
+) {
   let maxErr = { s: 0, h: 0 };
   let maxZ = 0;
   for (const iso of result.isotherms) {
     for (const st of iso.states) {
       const tr = truth(iso.temperatureK, st.densityMolPerM3);
-      maxErr = { s: Math.max(maxErr.s, Math.abs(st.residual.s - tr.s)), h: Math.max(maxErr.h, Math.abs(st.residual.h - tr.h)) };
+      maxErr = {
+        s: Math.max(maxErr.s, Math.abs(st.residual.s - tr.s)),
+        h: Math.max(maxErr.h, Math.abs(st.residual.h - tr.h)),
+      };
       for (const k of KEYS) {
         const z = Math.abs(st.residual[k] - tr[k]) / st.uncertainty[k];
         maxZ = Math.max(maxZ, z);
@@ -26,8 +36,16 @@ function worst(result: PvtRouteResult, truth: (T: number, rho: number) => Record
 }
 
 // Supercritical CO2 (Tc = 304.13 K), gas to near-critical densities (rho_c ~ 10.6 kmol/m3).
-const coarse = { densities: geometric(100, 7000, 9), temperatures: range(310, 400, 10), pressure: pressurePR };
-const dense = { densities: geometric(50, 7000, 17), temperatures: range(310, 400, 19), pressure: pressurePR };
+const coarse = {
+  densities: geometric(100, 7000, 9),
+  temperatures: range(310, 400, 10),
+  pressure: pressurePR,
+};
+const dense = {
+  densities: geometric(50, 7000, 17),
+  temperatures: range(310, 400, 19),
+  pressure: pressurePR,
+};
 
 describe("departuresFromPvt on noise-free synthetic data (Peng-Robinson CO2 as the closed-form truth)", () => {
   const rc = departuresFromPvt(campaign(coarse), { monteCarloSamples: 0 });
@@ -82,7 +100,13 @@ describe("departuresFromPvt against a reference equation (IAPWS-95 water, noise-
     const RT = Rw * T;
     const Z = 1 + d.aD;
     const lnPhi = d.a + d.aD - Math.log(Z);
-    return { a: RT * d.a, s: Rw * (-d.a - d.aT), u: -RT * d.aT, h: RT * (d.aD - d.aT), g: RT * lnPhi };
+    return {
+      a: RT * d.a,
+      s: Rw * (-d.a - d.aT),
+      u: -RT * d.aT,
+      h: RT * (d.aD - d.aT),
+      g: RT * lnPhi,
+    };
   };
   const result = departuresFromPvt(
     campaign({ densities: geometric(40, 2500, 14), temperatures: range(700, 850, 16), pressure }),
@@ -118,7 +142,18 @@ describe("departuresFromPvt: routes, refusals and the model hand-off", () => {
       });
     });
     const r = departuresFromPvt(
-      { source: "iso", points: T.map((t, i) => ({ temperatureK: t, densityMolPerM3: D[i]!, pressurePa: P[i]!, line: i + 2 })), setAside: [], columns: [], comments: [] },
+      {
+        source: "iso",
+        points: T.map((t, i) => ({
+          temperatureK: t,
+          densityMolPerM3: D[i]!,
+          pressurePa: P[i]!,
+          line: i + 2,
+        })),
+        setAside: [],
+        columns: [],
+        comments: [],
+      },
       { monteCarloSamples: 0 },
     );
     expect(r.route).toBe("surface");
@@ -134,7 +169,11 @@ describe("departuresFromPvt: routes, refusals and the model hand-off", () => {
     // density inside the dome (positive throughout at these T), which the route must detect
     // instead of integrating through.
     const r = departuresFromPvt(
-      campaign({ densities: [500, 1000, 2000, 3500, 5000, 7000, 9000, 11000, 13000, 15000], temperatures: range(292, 300, 5), pressure: pressurePR }),
+      campaign({
+        densities: [500, 1000, 2000, 3500, 5000, 7000, 9000, 11000, 13000, 15000],
+        temperatures: range(292, 300, 5),
+        pressure: pressurePR,
+      }),
       { monteCarloSamples: 0 },
     );
     const refusal = r.diagnostics.find((d) => d.code === "two-phase");
@@ -147,9 +186,17 @@ describe("departuresFromPvt: routes, refusals and the model hand-off", () => {
   });
 
   it("refuses route 'isochores' when the data have no isochores, and too few points", () => {
-    const ds = campaign({ densities: [100, 200], temperatures: range(300, 340, 5), pressure: pressurePR });
+    const ds = campaign({
+      densities: [100, 200],
+      temperatures: range(300, 340, 5),
+      pressure: pressurePR,
+    });
     expect(() => departuresFromPvt(ds, { route: "isochores" })).toThrow(InputError);
-    const tiny = campaign({ densities: [100], temperatures: [300, 310, 320], pressure: pressurePR });
+    const tiny = campaign({
+      densities: [100],
+      temperatures: [300, 310, 320],
+      pressure: pressurePR,
+    });
     expect(() => departuresFromPvt(tiny)).toThrow(/at least 6/);
   });
 
@@ -165,14 +212,20 @@ describe("departuresFromPvt: routes, refusals and the model hand-off", () => {
     expect(model.checkValidity?.(500, rho, [1])[0]?.code).toBe("extrapolated");
     // reduced derivatives are consistent: aT by central difference of a (step 1e-3 K)
     const h = 1e-3;
-    const aT = (T * (model.residual(T + h, rho, [1]).a - model.residual(T - h, rho, [1]).a)) / (2 * h);
+    const aT =
+      (T * (model.residual(T + h, rho, [1]).a - model.residual(T - h, rho, [1]).a)) / (2 * h);
     expect(d.aT).toBeCloseTo(aT, 8);
   });
 
   it("compares the data-derived departures with a model (PR itself: differences within 3 u)", () => {
     const r = departuresFromPvt(campaign(coarse), { monteCarloSamples: 0 });
     const prModel: ResidualModel = {
-      info: { id: "pr-test", name: "PR CO2 (test)", citation: "Peng & Robinson 1976", componentIds: ["carbon-dioxide"] },
+      info: {
+        id: "pr-test",
+        name: "PR CO2 (test)",
+        citation: "Peng & Robinson 1976",
+        componentIds: ["carbon-dioxide"],
+      },
       residual(T, rho) {
         const d = departuresPR(T, rho);
         const RT = 8.314462618 * T;

@@ -5,7 +5,10 @@ import { InputError } from "../../../kernel-lib/src/errors.js";
 describe("cumulativeIrregular", () => {
   it("is exact for a quadratic on irregular nodes (local parabolas are exact; closed form x^3/3 - x)", () => {
     const x = [0, 0.13, 0.4, 0.45, 1.1, 1.7, 2.0];
-    const r = cumulativeIrregular(x, x.map((v) => v * v - 1));
+    const r = cumulativeIrregular(
+      x,
+      x.map((v) => v * v - 1),
+    );
     x.forEach((v, k) => expect(r.values[k]).toBeCloseTo(v ** 3 / 3 - v, 13));
   });
 

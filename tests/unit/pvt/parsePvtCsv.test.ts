@@ -41,7 +41,9 @@ describe("parsePvtCsv", () => {
   });
 
   it("reads mass densities with a molar mass (kg/m3 / (kg/mol) = mol/m3)", () => {
-    const d = parsePvtCsv("T [K],rho [kg/m3],P [Pa]\n300,44.0098,2.3e6\n", { molarMassKgPerMol: 0.0440098 });
+    const d = parsePvtCsv("T [K],rho [kg/m3],P [Pa]\n300,44.0098,2.3e6\n", {
+      molarMassKgPerMol: 0.0440098,
+    });
     expect(d.points[0]?.densityMolPerM3).toBeCloseTo(1000, 9);
   });
 

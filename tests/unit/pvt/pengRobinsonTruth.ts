@@ -37,7 +37,10 @@ export function secondVirialPR(T: number): number {
 }
 
 /** Residual properties of PR at (T, rho): a, s (same T and density), u, h, g = R T ln phi (same T, P). */
-export function departuresPR(T: number, rho: number): { a: number; s: number; u: number; h: number; g: number; lnPhi: number } {
+export function departuresPR(
+  T: number,
+  rho: number,
+): { a: number; s: number; u: number; h: number; g: number; lnPhi: number } {
   const b = bPR;
   const { a, dadT } = aOf(T);
   const L = Math.log((1 + (1 + SQ2) * b * rho) / (1 + (1 - SQ2) * b * rho));
@@ -48,5 +51,12 @@ export function departuresPR(T: number, rho: number): { a: number; s: number; u:
   const Z = pressurePR(T, rho) / (rho * R * T);
   const RT = R * T;
   const lnPhi = alphaR + Z - 1 - Math.log(Z);
-  return { a: RT * alphaR, s: R * (-alphaR - aT), u: -RT * aT, h: RT * (-aT + Z - 1), g: RT * lnPhi, lnPhi };
+  return {
+    a: RT * alphaR,
+    s: R * (-alphaR - aT),
+    u: -RT * aT,
+    h: RT * (-aT + Z - 1),
+    g: RT * lnPhi,
+    lnPhi,
+  };
 }
