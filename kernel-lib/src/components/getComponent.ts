@@ -82,3 +82,21 @@ function searchList(include: readonly Component[]): readonly Component[] {
   const ids = new Set(include.map((c) => c.id));
   return [...include, ...tableComponents().filter((c) => !ids.has(c.id))];
 }
+
+/**
+ * A Component passed through unchanged, or a name looked up with `getComponent`. Lets functions
+ * accept either `"methane"` or a component built in a cell.
+ */
+export function resolveComponent(
+  nameOrComponent: string | Component,
+  options: GetComponentOptions = {},
+): Component {
+  if (
+    typeof nameOrComponent === "object" &&
+    nameOrComponent !== null &&
+    typeof nameOrComponent.id === "string"
+  ) {
+    return nameOrComponent;
+  }
+  return getComponent(nameOrComponent as string, options);
+}

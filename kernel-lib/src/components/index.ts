@@ -8,7 +8,12 @@ export type {
   PolynomialCpSegment,
   AlyLeeCp,
 } from "./types.js";
-export { getComponent, listComponents, normalizeComponentName } from "./getComponent.js";
+export {
+  getComponent,
+  listComponents,
+  normalizeComponentName,
+  resolveComponent,
+} from "./getComponent.js";
 export type { GetComponentOptions } from "./getComponent.js";
 export { defineComponent } from "./defineComponent.js";
 export type { ComponentSpec, DefineComponentOptions } from "./defineComponent.js";

@@ -10,6 +10,7 @@
  */
 import { InputError } from "../errors.js";
 import type { Component } from "../components/types.js";
+import { resolveComponent } from "../components/getComponent.js";
 import {
   correlationCp,
   correlationCpIntegral,
@@ -27,16 +28,18 @@ export interface CorrelationIdealGas extends IdealGasPure {
 }
 
 /**
- * Ideal-gas model of a component from its heat-capacity correlation.
+ * Ideal-gas model of a component from its heat-capacity correlation. Takes a Component or a name
+ * for `getComponent` (id, formula, CAS number or synonym).
  *
  * @param options.extrapolationMargin allowed extrapolation beyond the correlation's range as a
  *   fraction of the limit (default 0.1); further out every method throws OutOfRangeError.
  * @example idealGasFromCorrelation(getComponent("methane")).cp(500) // ~ 46.5 J/(mol K)
  */
 export function idealGasFromCorrelation(
-  component: Component,
+  componentOrName: Component | string,
   options: TemperatureRangeOptions = {},
 ): CorrelationIdealGas {
+  const component = resolveComponent(componentOrName);
   const correlation = component.idealGasCp;
   const formName =
     correlation.form === "polynomial" ? "polynomial cp correlation" : "Aly-Lee cp correlation";

@@ -12,5 +12,3 @@ export { keslerLee1976, KESLER_LEE_1976 } from "./keslerLee.js";
 export { leeKeslerAcentricFactor } from "./leeKeslerAcentric.js";
 export { keslerLeeIdealGasCp, KESLER_LEE_CP_1976, KESLER_LEE_CP_RANGE_K } from "./keslerLeeCp.js";
 export { watsonK } from "./watsonK.js";
-export { checkValidity } from "./validity.js";
-export type { ValidityInterval } from "./validity.js";

@@ -107,3 +107,10 @@ describe("provenance", () => {
     expect(pure("benzene").method).toContain("Aly-Lee");
   });
 });
+
+describe("inputs", () => {
+  it("accepts a component or a name", () => {
+    expect(idealGasFromCorrelation("CH4").cp(400)).toBe(pure("methane").cp(400));
+    expect(() => idealGasFromCorrelation("metane")).toThrow(/closest: methane/);
+  });
+});
