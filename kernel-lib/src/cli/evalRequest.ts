@@ -1,0 +1,267 @@
+/**
+ * The `isochor eval` request: parsing and checking, with the JSON path of every problem.
+ *
+ * Request (names fixed by issue 4; other tools depend on them):
+ *   { "model": "ideal-gas" | "virial" | "van-der-waals" | "redlich-kwong" | "soave-redlich-kwong" |
+ *              "peng-robinson" | "peng-robinson-1978" | "lee-kesler",
+ *     "components": [ids], "x": [mole fractions] (optional for one component),
+ *     "kij": [[...]] (optional), "constants": [{"Tc": K, "Pc": Pa, "omega": -, "M": kg/mol}] (optional,
+ *     per-component overrides; null or {} keeps the table), "departure": "closed-form" | "numeric",
+ *     "reference": "formation" | {"kind": "zero-at", "T": K, "P": Pa}, "idealGas": "correlation" |
+ *     "molecular", "phase": "stable" | "liquid" | "vapor",
+ *     "states": [{"T": K, "P": Pa} | {"T": K, "rho": mol/m3}] }
+ * Structural problems (wrong types, missing fields, unknown names) refuse the whole request with a
+ * RequestError naming the JSON path; physically bad values inside a state (T <= 0, ...) become an
+ * error entry for that state only.
+ */
+import { RequestError } from "../errors.js";
+import { isModelId, MODEL_IDS, type ModelId } from "../eos/createModel.js";
+import type { ReferenceState } from "../idealgas/types.js";
+import type { ConstantOverrides } from "../fluid/defineFluid.js";
+import type { DepartureMethod, PhaseRequest } from "../state/types.js";
+
+/** One requested state. */
+export type EvalState =
+  | { readonly kind: "TP"; readonly T: number; readonly P: number }
+  | { readonly kind: "TRho"; readonly T: number; readonly rho: number };
+
+/** A checked request. */
+export interface EvalRequest {
+  readonly model: ModelId;
+  readonly components: readonly string[];
+  readonly x: readonly number[];
+  readonly kij?: readonly (readonly number[])[];
+  readonly constants?: readonly (ConstantOverrides | undefined)[];
+  readonly departure: DepartureMethod;
+  readonly reference: ReferenceState;
+  readonly idealGas: "correlation" | "molecular";
+  readonly phase: PhaseRequest;
+  readonly states: readonly EvalState[];
+}
+
+type Json = unknown;
+
+function isObject(v: Json): v is Record<string, Json> {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+
+function describe(v: Json): string {
+  if (v === null) return "null";
+  if (Array.isArray(v)) return "an array";
+  return typeof v === "string"
+    ? JSON.stringify(v)
+    : typeof v === "object"
+      ? "an object"
+      : String(v);
+}
+
+function number(v: Json, path: string): number {
+  if (typeof v !== "number" || !Number.isFinite(v)) {
+    throw new RequestError(path, `expected a number, got ${describe(v)}`);
+  }
+  return v;
+}
+
+function oneOf<T extends string>(v: Json, path: string, choices: readonly T[], fallback: T): T {
+  if (v === undefined) return fallback;
+  if (typeof v !== "string" || !(choices as readonly string[]).includes(v)) {
+    throw new RequestError(
+      path,
+      `expected one of ${choices.map((c) => JSON.stringify(c)).join(", ")}, got ${describe(v)}`,
+    );
+  }
+  return v as T;
+}
+
+const KNOWN_KEYS = new Set([
+  "model",
+  "components",
+  "x",
+  "kij",
+  "constants",
+  "departure",
+  "reference",
+  "idealGas",
+  "phase",
+  "states",
+]);
+
+/**
+ * Checks a parsed JSON request and returns it typed.
+ *
+ * @throws RequestError with the JSON path of the first problem.
+ */
+export function parseEvalRequest(raw: Json): EvalRequest {
+  if (!isObject(raw))
+    throw new RequestError("$", `expected a request object, got ${describe(raw)}`);
+  for (const key of Object.keys(raw)) {
+    if (!KNOWN_KEYS.has(key)) {
+      throw new RequestError(
+        `$.${key}`,
+        `unknown field; the request fields are ${[...KNOWN_KEYS].join(", ")}`,
+      );
+    }
+  }
+  const model = raw.model;
+  if (typeof model !== "string")
+    throw new RequestError("$.model", `expected a model name, got ${describe(model)}`);
+  if (!isModelId(model)) {
+    throw new RequestError(
+      "$.model",
+      `unknown model ${JSON.stringify(model)}; models: ${MODEL_IDS.join(", ")}`,
+    );
+  }
+  const comps = raw.components;
+  if (!Array.isArray(comps) || comps.length === 0) {
+    throw new RequestError(
+      "$.components",
+      `expected a non-empty array of component ids, got ${describe(comps)}`,
+    );
+  }
+  comps.forEach((c, i) => {
+    if (typeof c !== "string" || c.trim() === "") {
+      throw new RequestError(`$.components[${i}]`, `expected a component id, got ${describe(c)}`);
+    }
+  });
+  const n = comps.length;
+  let x: number[];
+  if (raw.x === undefined) {
+    if (n !== 1) throw new RequestError("$.x", `mole fractions are required for ${n} components`);
+    x = [1];
+  } else {
+    if (!Array.isArray(raw.x) || raw.x.length !== n) {
+      throw new RequestError(
+        "$.x",
+        `expected an array of ${n} mole fractions, got ${describe(raw.x)}`,
+      );
+    }
+    x = raw.x.map((v, i) => number(v, `$.x[${i}]`));
+    x.forEach((v, i) => {
+      if (!(v >= 0 && v <= 1))
+        throw new RequestError(`$.x[${i}]`, `a mole fraction must be between 0 and 1, got ${v}`);
+    });
+    const sum = x.reduce((p, q) => p + q, 0);
+    if (!(Math.abs(sum - 1) <= 1e-9)) {
+      throw new RequestError("$.x", `mole fractions must sum to 1 within 1e-9, they sum to ${sum}`);
+    }
+  }
+  let kij: number[][] | undefined;
+  if (raw.kij !== undefined) {
+    if (!Array.isArray(raw.kij) || raw.kij.length !== n) {
+      throw new RequestError("$.kij", `expected an ${n} x ${n} matrix, got ${describe(raw.kij)}`);
+    }
+    kij = raw.kij.map((row, i) => {
+      if (!Array.isArray(row) || row.length !== n) {
+        throw new RequestError(
+          `$.kij[${i}]`,
+          `expected a row of ${n} numbers, got ${describe(row)}`,
+        );
+      }
+      return row.map((v, j) => number(v, `$.kij[${i}][${j}]`));
+    });
+  }
+  let constants: (ConstantOverrides | undefined)[] | undefined;
+  if (raw.constants !== undefined) {
+    if (!Array.isArray(raw.constants) || raw.constants.length !== n) {
+      throw new RequestError(
+        "$.constants",
+        `expected an array of ${n} entries (null or {} keeps the table), got ${describe(raw.constants)}`,
+      );
+    }
+    constants = raw.constants.map((c, i) => {
+      const path = `$.constants[${i}]`;
+      if (c === null) return undefined;
+      if (!isObject(c))
+        throw new RequestError(path, `expected an object or null, got ${describe(c)}`);
+      const names: Record<string, keyof ConstantOverrides> = {
+        Tc: "criticalTemperatureK",
+        Pc: "criticalPressurePa",
+        omega: "acentricFactor",
+        M: "molarMassKgPerMol",
+        Vc: "criticalVolumeM3PerMol",
+      };
+      const out: ConstantOverrides = {};
+      for (const [key, value] of Object.entries(c)) {
+        const field = names[key];
+        if (!field)
+          throw new RequestError(
+            `${path}.${key}`,
+            `unknown constant; use Tc (K), Pc (Pa), omega, M (kg/mol), Vc (m3/mol)`,
+          );
+        const v = number(value, `${path}.${key}`);
+        if (key !== "omega" && !(v > 0))
+          throw new RequestError(`${path}.${key}`, `must be > 0, got ${v}`);
+        out[field] = v;
+      }
+      return out;
+    });
+  }
+  const departure = oneOf(
+    raw.departure,
+    "$.departure",
+    ["closed-form", "numeric"] as const,
+    "closed-form",
+  );
+  const idealGas = oneOf(
+    raw.idealGas,
+    "$.idealGas",
+    ["correlation", "molecular"] as const,
+    "correlation",
+  );
+  const phase = oneOf(raw.phase, "$.phase", ["stable", "liquid", "vapor"] as const, "stable");
+  let reference: ReferenceState = { kind: "formation" };
+  if (raw.reference !== undefined && raw.reference !== "formation") {
+    const r = raw.reference;
+    if (!isObject(r) || r.kind !== "zero-at") {
+      throw new RequestError(
+        "$.reference",
+        `expected "formation" or {"kind": "zero-at", "T": K, "P": Pa}, got ${describe(r)}`,
+      );
+    }
+    const T = number(r.T, "$.reference.T");
+    const P = number(r.P, "$.reference.P");
+    if (!(T > 0)) throw new RequestError("$.reference.T", `must be > 0 K, got ${T}`);
+    if (!(P > 0)) throw new RequestError("$.reference.P", `must be > 0 Pa, got ${P}`);
+    reference = { kind: "zero-at", temperatureK: T, pressurePa: P };
+  }
+  if (!Array.isArray(raw.states) || raw.states.length === 0) {
+    throw new RequestError(
+      "$.states",
+      `expected a non-empty array of states, got ${describe(raw.states)}`,
+    );
+  }
+  const states: EvalState[] = raw.states.map((s, i) => {
+    const path = `$.states[${i}]`;
+    if (!isObject(s))
+      throw new RequestError(
+        path,
+        `expected {"T": K, "P": Pa} or {"T": K, "rho": mol/m3}, got ${describe(s)}`,
+      );
+    for (const key of Object.keys(s)) {
+      if (key !== "T" && key !== "P" && key !== "rho") {
+        throw new RequestError(
+          `${path}.${key}`,
+          `unknown state field; use T (K) with P (Pa) or rho (mol/m3)`,
+        );
+      }
+    }
+    const T = number(s.T, `${path}.T`);
+    if (s.P !== undefined && s.rho !== undefined)
+      throw new RequestError(path, "give P or rho, not both");
+    if (s.P !== undefined) return { kind: "TP", T, P: number(s.P, `${path}.P`) };
+    if (s.rho !== undefined) return { kind: "TRho", T, rho: number(s.rho, `${path}.rho`) };
+    throw new RequestError(path, "missing P (Pa) or rho (mol/m3)");
+  });
+  return {
+    model,
+    components: comps as string[],
+    x,
+    kij,
+    constants,
+    departure,
+    reference,
+    idealGas,
+    phase,
+    states,
+  };
+}
