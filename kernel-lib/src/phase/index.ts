@@ -16,3 +16,18 @@ export type {
   IsothermRegion,
 } from "./equalAreaIsotherm.js";
 export type { SaturationHints } from "./pureFluid.js";
+export { pureFluidPhaseAt, pureFluidStateTP } from "./pureFluidPhase.js";
+export type { PhaseAtOptions, PurePhaseResult } from "./pureFluidPhase.js";
+export {
+  stateAtTemperatureQuality,
+  stateAtPressureQuality,
+  stateAtPressureEnthalpy,
+  stateAtPressureEntropy,
+} from "./twoPhaseState.js";
+export type {
+  TwoPhaseState,
+  TwoPhaseEnergies,
+  SinglePhaseResult,
+  PureFluidStateResult,
+  DomeInversionOptions,
+} from "./twoPhaseState.js";

@@ -6,8 +6,10 @@
  * Method at given T:
  * 1. Starting values: the model's published ancillary equations when it has them (reference
  *    fluids; e.g. W. Wagner and A. Pruss, J. Phys. Chem. Ref. Data 22, 783 (1993) for water);
- *    otherwise (cubic and other models) the spinodals of the isotherm: the inflection density
- *    where (dP/drho)_T is least, then the two densities where (dP/drho)_T = 0 on either side.
+ *    for models with closed-form density roots (cubics), Newton on the pressure with those roots
+ *    (closedFormRootsRoute below); otherwise the spinodals of the isotherm: the first and last
+ *    densities where (dP/drho)_T = 0, found by a density scan (or, near the critical point, from
+ *    the least-stiffness density outward).
  * 2. Newton's method on (rho_L, rho_V) for the two conditions, scaled by RT; the Jacobian follows
  *    from d(g/RT)/d(rho) = (dP/drho)_T / (rho R T) (Gibbs-Duhem), as in Y. Akasaka, "A Reliable
  *    and Useful Method to Determine the Saturation State from Helmholtz Energy Equations of
@@ -22,7 +24,7 @@
  * Enthalpy of vaporisation from alpha_r only (the ideal-gas part cancels at equal T):
  *   h_vap = R T [(aD - aT)_V - (aD - aT)_L],   s_vap = h_vap / T.
  */
-import { InputError, PhaseUnavailableError, SolverError } from "../errors.js";
+import { InputError, PhaseUnavailableError, SolverError, type ResultWarning } from "../errors.js";
 import type { ResidualModel } from "../eos/types.js";
 import { findRootBrent } from "../numerics/brent.js";
 import { requirePositive } from "../validate.js";
@@ -70,11 +72,16 @@ export interface SaturationResult {
   readonly iterations: number;
   /** Final |P_L - P_V| / (rho_L R T) and |g_L - g_V| / RT. */
   readonly residual: { readonly pressure: number; readonly gibbs: number };
-  /** How the start values were obtained: "ancillary equations", "spinodals" or "given". */
-  readonly start: "ancillary equations" | "spinodals" | "given";
+  /**
+   * How the start values were obtained: "ancillary equations" (published), "closed-form roots"
+   * (Newton on the pressure with the model's own density roots), "spinodals" or "given".
+   */
+  readonly start: "ancillary equations" | "closed-form roots" | "spinodals" | "given";
   /** The model's critical point (from its own equations). */
   readonly critical: CriticalPointResult;
   readonly model: string;
+  /** Below a published triple point, outside a published validity range, ... (empty when none). */
+  readonly warnings: readonly ResultWarning[];
 }
 
 interface NewtonOutcome {
@@ -269,6 +276,61 @@ function spinodalRoute(
   return { rhoL: liquidAt(root.value), rhoV: vaporAt(root.value) };
 }
 
+/**
+ * Route for models with all density roots in closed form (`densityRoots`, e.g. cubics): Newton's
+ * method on the pressure for Delta g(P) = g_L - g_V = 0 with the exact slope
+ * d(Delta g / RT)/dP = (v_L - v_V) / RT (Gibbs-Duhem), the two outer roots of the cubic giving
+ * the phase densities; safeguarded by bisection in ln P on a bracket that is narrowed whenever
+ * the equation has fewer than three roots (one root below rho_c: P too low; above: too high).
+ * The start is Wilson's estimate with omega = 0, ln(P/Pc) = 5.373 (1 - Tc/T) (G. M. Wilson,
+ * 1968; as in Michelsen & Mollerup, Thermodynamic Models, 2nd ed. (2007), ch. 10).
+ * Returns undefined when the model never shows three roots (then the spinodal route is used).
+ */
+function closedFormRootsRoute(
+  model: ResidualModel,
+  T: number,
+  Rg: number,
+  critical: CriticalPointResult,
+): { rhoL: number; rhoV: number } | undefined {
+  const roots = model.densityRoots;
+  if (!roots) return undefined;
+  const RT = Rg * T;
+  const rhoC = critical.densityMolPerM3;
+  let lnLo = -Infinity; // ln P known too low (vapour only)
+  let lnHi = Math.log(critical.pressurePa); // ln P known too high
+  let lnP = lnHi + 5.373 * (1 - critical.temperatureK / T);
+  for (let k = 0; k < 200; k++) {
+    const P = Math.exp(lnP);
+    const r = roots.call(model, T, P, PURE);
+    let next: number;
+    if (r.length >= 3) {
+      const rhoV = r[0];
+      const rhoL = r[r.length - 1];
+      const dl = model.residual(T, rhoL, PURE);
+      const dv = model.residual(T, rhoV, PURE);
+      const f = Math.log(rhoL) + dl.a + dl.aD - (Math.log(rhoV) + dv.a + dv.aD);
+      if (f > 0) lnLo = lnP;
+      else lnHi = lnP;
+      const slope = (1 / rhoL - 1 / rhoV) / RT; // d f / dP
+      const step = f / (slope * P); // Newton step in ln P
+      if (Math.abs(f) < 1e-13 || Math.abs(step) < 1e-15) return { rhoL, rhoV };
+      next = lnP - step;
+    } else if (r.length >= 1 && r[0] < rhoC) {
+      lnLo = lnP;
+      next = NaN;
+    } else {
+      lnHi = lnP;
+      next = NaN;
+    }
+    if (!(next > lnLo && next < lnHi)) {
+      next = Number.isFinite(lnLo) ? 0.5 * (lnLo + lnHi) : lnHi - Math.max(1, 2 * (lnHi - lnP));
+    }
+    if (Number.isFinite(lnLo) && lnHi - lnLo < 1e-15) return undefined;
+    lnP = next;
+  }
+  return undefined;
+}
+
 function validateOptions(options: SaturationOptions): { tolerance: number; maxIterations: number } {
   const tolerance = options.tolerance ?? 1e-12;
   if (!(tolerance > 0 && tolerance < 1)) {
@@ -342,10 +404,17 @@ export function saturationAtTemperature(
     rhoL0 = est.liquidDensityMolPerM3;
     rhoV0 = est.vaporDensityMolPerM3;
   } else {
-    start = "spinodals";
-    const r = spinodalRoute(model, T, Rg, critical);
-    rhoL0 = r.rhoL;
-    rhoV0 = r.rhoV;
+    const closed = closedFormRootsRoute(model, T, Rg, critical);
+    if (closed) {
+      start = "closed-form roots";
+      rhoL0 = closed.rhoL;
+      rhoV0 = closed.rhoV;
+    } else {
+      start = "spinodals";
+      const r = spinodalRoute(model, T, Rg, critical);
+      rhoL0 = r.rhoL;
+      rhoV0 = r.rhoV;
+    }
   }
   let out = newtonSaturation(model, T, Rg, rhoL0, rhoV0, tolerance, maxIterations, L, V);
   const trivial = (o: NewtonOutcome): boolean =>
@@ -365,6 +434,20 @@ export function saturationAtTemperature(
   isothermPoint(model, T, out.rhoL, Rg, L);
   isothermPoint(model, T, out.rhoV, Rg, V);
   const hVap = Rg * T * (V.hResRT - L.hResRT);
+  const warnings: ResultWarning[] = [];
+  const triple = (model as SaturationHints).triple;
+  if (triple && T < triple.temperatureK) {
+    warnings.push({
+      code: "extrapolated",
+      message: `T = ${T} K is below the triple point (${triple.temperatureK} K) of ${model.info.name}: the stable phase there is solid, and this vapour-liquid equilibrium is metastable`,
+    });
+  }
+  if (model.checkValidity) {
+    for (const w of model.checkValidity(T, out.rhoL, PURE)) warnings.push(w);
+    for (const w of model.checkValidity(T, out.rhoV, PURE)) {
+      if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
+    }
+  }
   return {
     temperatureK: T,
     // The vapour-side pressure: rho_V R T (1 + aD_V) has no cancellation, while the liquid-side
@@ -380,6 +463,7 @@ export function saturationAtTemperature(
     start,
     critical,
     model: model.info.name,
+    warnings,
   };
 }
 
