@@ -44,6 +44,14 @@ export interface PvtRouteOptions {
   minIsochoreTemperatures?: number;
   /** Fewest nodes (isochores) on an isotherm. Default 3. */
   minIsothermNodes?: number;
+  /**
+   * Isochore route, stated u(P) only: a point whose residual on its isochore fit exceeds this many
+   * effective standard uncertainties is set aside (worst first, one at a time, refitting; at most
+   * 5 % of the points) and listed with the reason. Default 4.5 (a normal deviate beyond 4.5 has a
+   * probability of 7e-6, so a genuine point is almost never set aside; common practice, no source).
+   * Infinity turns the screening off.
+   */
+  outlierThreshold?: number;
   isochore?: IsochoreFitOptions;
   surface?: FitVirialSurfaceOptions;
   bridge?: BridgeOptions;
@@ -205,6 +213,45 @@ export function departuresFromPvt(
   const groups = groupIsochores(rho, options.isochoreTolerance ?? 2e-3).filter(
     (g) => new Set(g.members.map((i) => (T[i] as number).toPrecision(10))).size >= minT,
   );
+  const routeSetAside: SetAsidePoint[] = [];
+  // Outlier screening on the isochores (needs stated uncertainties to judge a residual).
+  const threshold = options.outlierThreshold ?? 4.5;
+  const willUseIsochores =
+    options.route === "isochores" || ((options.route ?? "auto") === "auto" && groups.length >= 3);
+  if (sigmaEff && Number.isFinite(threshold) && willUseIsochores) {
+    const maxOut = Math.floor(0.05 * n);
+    for (let round = 0; round < maxOut; round++) {
+      let worst: { g: number; j: number; z: number } | undefined;
+      groups.forEach((g, gi) => {
+        const distinct = new Set(g.members.map((i) => (T[i] as number).toPrecision(10))).size;
+        if (distinct < 4) return; // too few points to judge one of them
+        const f = fitIsochore(
+          g.densityMolPerM3,
+          g.members.map((i) => T[i] as number),
+          g.members.map((i) => P0[i] as number),
+          g.members.map((i) => sigmaEff?.[i] as number),
+          options.isochore,
+        );
+        f.residualsPa.forEach((r, j) => {
+          const z = Math.abs(r) / (sigmaEff?.[g.members[j] as number] as number);
+          if (z > threshold && (!worst || z > worst.z)) worst = { g: gi, j, z };
+        });
+      });
+      if (!worst) break;
+      const w: { g: number; j: number; z: number } = worst;
+      const grp = groups[w.g] as { members: number[]; densityMolPerM3: number };
+      const i = grp.members[w.j] as number;
+      grp.members.splice(w.j, 1);
+      const p = pts[i] as PvtDataset["points"][number];
+      routeSetAside.push({
+        line: p.line,
+        temperatureK: p.temperatureK,
+        densityMolPerM3: p.densityMolPerM3,
+        pressurePa: p.pressurePa,
+        reason: `outlier: residual ${w.z.toFixed(1)} u(P) on the isochore at ${grp.densityMolPerM3.toPrecision(6)} mol/m3 (threshold ${threshold})`,
+      });
+    }
+  }
   // Density correction to the group mean, frozen from the nominal surface.
   const shift = new Array<number>(n).fill(0);
   for (const g of groups) {
@@ -215,6 +262,21 @@ export function departuresFromPvt(
   }
   const wantRoute = options.route ?? "auto";
   const isochoreRoute = wantRoute === "isochores" || (wantRoute === "auto" && groups.length >= 3);
+  if (isochoreRoute) {
+    const used = new Set(groups.flatMap((g) => g.members));
+    const out = new Set(routeSetAside.map((s) => s.line));
+    pts.forEach((p) => {
+      if (!used.has(pts.indexOf(p)) && !out.has(p.line)) {
+        routeSetAside.push({
+          line: p.line,
+          temperatureK: p.temperatureK,
+          densityMolPerM3: p.densityMolPerM3,
+          pressurePa: p.pressurePa,
+          reason: `not on an isochore with ${minT} or more temperatures: used in the global surface fit only`,
+        });
+      }
+    });
+  }
   if (wantRoute === "isochores" && groups.length < 3) {
     throw new InputError({
       input: "route",
@@ -579,6 +641,15 @@ export function departuresFromPvt(
         ...slopeConsistency(isochoreFits, surfaceFit.surface, isothermTs, nodeSets, slopeT, R),
       );
   }
+  if (routeSetAside.length > 0) {
+    diagnostics.push({
+      code: "set-aside",
+      severity: routeSetAside.some((s) => s.reason.startsWith("outlier")) ? "warning" : "info",
+      message:
+        `${routeSetAside.length} point(s) set aside by the route: ` +
+        routeSetAside.map((s) => `line ${s.line} (${s.reason})`).join("; "),
+    });
+  }
   if (dataset.setAside.length > 0) {
     diagnostics.push({
       code: "set-aside",
@@ -594,7 +665,7 @@ export function departuresFromPvt(
     surfaceFit,
     isochoreFits,
     diagnostics,
-    setAside: [...dataset.setAside],
+    setAside: [...dataset.setAside, ...routeSetAside],
     uncertaintyMethod: {
       ...(mc ? { monteCarlo: { seed, samples: mc.samples } } : {}),
       linearised: lin !== undefined,
