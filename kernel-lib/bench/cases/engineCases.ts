@@ -1,0 +1,100 @@
+/**
+ * Engine cases of issue 4: all properties at (T, P) for pure and ten-component PR, one state's
+ * departures by numerical integration and in closed form (same model and state), and an h-s
+ * surface on a 200 x 200 T-P grid.
+ */
+import { defineFluid } from "../../src/fluid/defineFluid.js";
+import { createModel } from "../../src/eos/createModel.js";
+import { modelFromPressure } from "../../src/departure/pressureModel.js";
+import { residualProperties } from "../../src/state/properties.js";
+import { getComponent } from "../../src/components/getComponent.js";
+import type { BenchCase } from "../harness.js";
+
+const TEN = [
+  "nitrogen",
+  "carbon-dioxide",
+  "methane",
+  "ethane",
+  "propane",
+  "isobutane",
+  "n-butane",
+  "isopentane",
+  "n-pentane",
+  "n-hexane",
+];
+const X10 = [0.02, 0.03, 0.7, 0.1, 0.06, 0.02, 0.03, 0.015, 0.015, 0.01];
+
+// states cycled through so no cache sees the same temperature twice in a row
+const TEMPERATURES = Array.from({ length: 16 }, (_, i) => 290 + 2.5 * i);
+
+export const engineCases: BenchCase[] = [
+  {
+    name: "pr-pure-TP",
+    description: "all properties of pure methane (PR) at given T, P (16 states cycled)",
+    targetSeconds: 0.5e-6,
+    setup() {
+      const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+      let k = 0;
+      return () => fluid.stateAtTP(TEMPERATURES[k++ & 15], 5e6);
+    },
+  },
+  {
+    name: "pr-mix10-TP",
+    description: "all properties of a ten-component natural gas (PR) at given T, P",
+    targetSeconds: 5e-6,
+    setup() {
+      const fluid = defineFluid({ components: TEN, model: "peng-robinson" });
+      let k = 0;
+      return () => fluid.stateAtTP(TEMPERATURES[k++ & 15], 5e6, X10);
+    },
+  },
+  {
+    name: "departure-numeric",
+    description:
+      "residual alpha_r, T and T^2 derivatives (h, s, u, a, g, ln phi) of methane (PR) at 300 K, 5 MPa by adaptive quadrature of the hyper-dual pressure, relTolerance 1e-10",
+    targetSeconds: 30e-6,
+    setup() {
+      const pr = createModel("peng-robinson", [getComponent("methane")]);
+      const rho = pr.densityRoots!(300, 5e6, [1])[0];
+      const numeric = modelFromPressure({
+        name: "PR methane, numeric",
+        components: ["methane"],
+        pressure: pr.pressureFunction,
+        maxDensity: (T, x) => pr.maxDensity(T, x),
+        integration: { relTolerance: 1e-10 },
+      });
+      return () => residualProperties(300, numeric.residual(300, rho, [1], { composition: true }));
+    },
+  },
+  {
+    name: "departure-closed-form",
+    description: "the same departures from the closed-form PR alpha_r",
+    setup() {
+      const pr = createModel("peng-robinson", [getComponent("methane")]);
+      const rho = pr.densityRoots!(300, 5e6, [1])[0];
+      return () => residualProperties(300, pr.residual(300, rho, [1], { composition: true }));
+    },
+  },
+  {
+    name: "surface-200x200",
+    description: "h and s of methane (PR) on a 200 x 200 grid, 200-500 K, 0.1-20 MPa",
+    targetSeconds: 40e-3,
+    setup() {
+      const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+      const h = new Float64Array(200 * 200);
+      const s = new Float64Array(200 * 200);
+      return () => {
+        for (let i = 0; i < 200; i++) {
+          const T = 200 + (300 * i) / 199;
+          for (let j = 0; j < 200; j++) {
+            const P = 1e5 + ((20e6 - 1e5) * j) / 199;
+            const st = fluid.stateAtTP(T, P);
+            h[i * 200 + j] = st.molar.h;
+            s[i * 200 + j] = st.molar.s;
+          }
+        }
+        return h[0] + s[0];
+      };
+    },
+  },
+];

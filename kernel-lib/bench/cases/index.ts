@@ -1,0 +1,5 @@
+/** Every benchmark case, in print order. Other areas add their case lists here. */
+import type { BenchCase } from "../harness.js";
+import { engineCases } from "./engineCases.js";
+
+export const allCases: BenchCase[] = [...engineCases];
