@@ -4,7 +4,8 @@
  *
  * 1980 form: Riazi, M.R., Daubert, T.E. (1980), "Simplify property predictions", Hydrocarbon
  * Processing 59(3), 115-116:  theta = a Tb^b SG^c, here with Tb in K (the coefficients converted
- * from the paper's degrees Rankine and psia as given by Riazi 2005, ASTM MNL50, eq. 2.38):
+ * from the paper's degrees Rankine and psia; the converted set is also printed in Riazi 2005,
+ * ASTM MNL50, ch. 2; equation numbers not checked):
  *   M        = 1.6607e-4 Tb^2.1962  SG^-1.0164
  *   Tc  (K)  = 19.06232  Tb^0.58848 SG^0.3596
  *   Pc (bar) = 5.53027e7 Tb^-2.3125 SG^2.3201
@@ -13,11 +14,12 @@
  *
  * 1987 form: Riazi, M.R., Daubert, T.E. (1987), "Characterization parameters for petroleum fractions",
  * Ind. Eng. Chem. Res. 26, 755-759:  theta = a exp(b Tb + c SG + d Tb SG) Tb^e SG^f, Tb in K
- * (Riazi 2005, eqs. 2.50, 2.63, 2.64):
+ * (as printed in Riazi 2005, ASTM MNL50, ch. 2; equation numbers not checked):
  *   M        = 42.965    exp( 2.097e-4 Tb - 7.78712 SG + 2.08476e-3 Tb SG) Tb^1.26007 SG^4.98308
  *   Tc  (K)  = 9.5233    exp(-9.314e-4 Tb - 0.544442 SG + 6.4791e-4 Tb SG) Tb^0.81067 SG^0.53691
  *   Pc (bar) = 3.1958e5  exp(-8.505e-3 Tb - 4.8014 SG + 5.749e-3 Tb SG)     Tb^-0.4844 SG^4.0846
  * Range: M 70-700 for M (Tb 300-850 K); 70-300 for Tc and Pc (Tb 300-620 K); SG 0.63-0.97.
+ * `riaziDaubert1987` returns all three, so it applies the tighter Tc/Pc range to its input.
  * All coefficients and ranges are from the author's memory of the papers and of Riazi (2005).
  */
 import type { ResultWarning } from "../errors.js";
@@ -41,7 +43,7 @@ export interface FractionCriticalEstimate {
 export const RIAZI_DAUBERT_1980 =
   "Riazi & Daubert (1980), Hydrocarbon Processing 59(3), 115-116 (coefficients from memory)";
 export const RIAZI_DAUBERT_1987 =
-  "Riazi & Daubert (1987), Ind. Eng. Chem. Res. 26, 755-759, as given in Riazi (2005), ASTM MNL50, eqs. 2.50, 2.63, 2.64 (from memory)";
+  "Riazi & Daubert (1987), Ind. Eng. Chem. Res. 26, 755-759, as printed in Riazi (2005), ASTM MNL50, ch. 2 (from memory)";
 
 /** Riazi-Daubert (1980): M, Tc, Pc, Vc from Tb (K) and SG. */
 export function riaziDaubert1980(
