@@ -366,7 +366,7 @@ export function departuresFromPvt(
           message:
             `isotherm ${t.toFixed(2)} K: the pressure does not rise between ${r0.toPrecision(5)} and ${r1.toPrecision(5)} mol/m3, so the isotherm appears to cross the two-phase region (or the data there contradict mechanical stability); ` +
             `departures above ${r0.toPrecision(5)} mol/m3 are not reported at this temperature: the data cannot be integrated through the dome. ` +
-            "Integrate at a supercritical temperature instead (the path around the critical point), or supply saturation data for a Clapeyron crossing (not yet supported)",
+            "For states beyond it, integrate at a supercritical temperature and come down the isochore with a measured or modelled cv (departuresAroundCriticalPoint); a Clapeyron crossing with saturation data is not yet supported",
         });
         idx = idx.slice(0, cut);
       }

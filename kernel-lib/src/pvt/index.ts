@@ -51,3 +51,9 @@ export type { DepartureSet } from "./departureSet.js";
 export type { PvtDiagnostic } from "./pvtDiagnostic.js";
 export { compareWithModel } from "./compareWithModel.js";
 export type { ModelComparisonPoint } from "./compareWithModel.js";
+export { departuresAroundCriticalPoint } from "./aroundCriticalPoint.js";
+export type {
+  AroundCriticalPointRequest,
+  AroundCriticalPointResult,
+  ResidualCvInput,
+} from "./aroundCriticalPoint.js";
