@@ -5,6 +5,7 @@
  */
 import raw from "./data/components.json";
 import { defineComponent } from "./defineComponent.js";
+import type { ResultWarning } from "../errors.js";
 import type { Component, CpCorrelation } from "./types.js";
 
 /** One record of data/components.json as stored (customary units, source keys). */
@@ -35,6 +36,8 @@ export interface RawComponentRecord {
     heatCapacity: string;
   };
   note?: string;
+  /** Warnings carried by the component (e.g. a group-contribution cp). */
+  warnings?: ResultWarning[];
 }
 
 /** The whole JSON file. */
@@ -89,6 +92,7 @@ function fromRaw(r: RawComponentRecord): Component {
         entropy: cite(r.sources.entropy),
         heatCapacity: cite(r.sources.heatCapacity),
       },
+      warnings: r.warnings ?? [],
     },
     { origin: "table" },
   );

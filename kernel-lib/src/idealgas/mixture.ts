@@ -6,7 +6,9 @@
  *   u  = h - R T,  g = h - T s,  a = u - T s,  cp = sum x_i cp_i,  cv = cp - R
  * (e.g. Smith, Van Ness & Abbott, Introduction to Chemical Engineering Thermodynamics, 7th ed.,
  * ch. 10, ideal-gas mixture model). Components with x_i = 0 contribute nothing (0 ln 0 = 0) and are
- * not evaluated, so a zero entry never triggers a range error.
+ * not evaluated, so a zero entry never triggers a range error. Warnings a component carries (e.g. a
+ * group-contribution cp, or a pseudo-component estimated outside its correlation's range) are passed
+ * on to every result in which that component is present.
  */
 import { R } from "../constants.js";
 import { InputError, type ResultWarning } from "../errors.js";
@@ -109,6 +111,9 @@ export function idealGasMixture(
           pushUnique(warnings, w);
         }
       }
+      const carried =
+        components?.[i] ?? (pure as IdealGasPure & { component?: Component }).component;
+      for (const w of carried?.warnings ?? []) pushUnique(warnings, w);
       const ref = pureReferenceValues(pure, temperatureK, referenceState, components?.[i]);
       h += x[i] * ref.h;
       s += x[i] * (ref.s - R * Math.log(pressurePa / ref.pressurePa) - R * Math.log(x[i]));

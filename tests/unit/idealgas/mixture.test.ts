@@ -181,3 +181,16 @@ describe("bad input", () => {
     ).toThrow(InputError);
   });
 });
+
+describe("component warnings reach the result", () => {
+  it("a Joback-cp component passes its accuracy warning on, once", () => {
+    const m = idealGasMixture([
+      idealGasFromCorrelation(getComponent("methylcyclohexane")),
+      idealGasFromCorrelation(getComponent("toluene")),
+    ]);
+    const r = m.at(400, 1e5, [0.5, 0.5]);
+    expect(r.warnings.filter((w) => w.code === "accuracy")).toHaveLength(1);
+    expect(r.warnings[0].message).toContain("Joback");
+    expect(m.at(400, 1e5, [0, 1]).warnings).toHaveLength(0);
+  });
+});

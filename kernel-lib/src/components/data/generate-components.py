@@ -249,6 +249,10 @@ add("acetone","Acetone","C3H6O","67-64-1",["propanone","2-propanone","dimethyl k
 import re
 EL = {"C": 5.74, "H": 65.34, "O": 102.576, "N": 95.8045, "S": 32.054, "Cl": 111.5405}
 for c in C:
+    if c["sources"]["heatCapacity"] == "joback":
+        c["warnings"] = [{"code": "accuracy", "message": c["id"] + ": ideal-gas cp from Joback group contributions, typically a few per cent off (about 4 % low for methylcyclohexane at 298 K); check against measured data for design work."}]
+    if c["sources"]["formation"] == "no-formation":
+        c.setdefault("warnings", []).append({"code": "model-limitation", "message": c["id"] + ": no enthalpy of formation or absolute entropy in the table; only a zero-at reference state works for it."})
     if c["absoluteEntropyJPerMolK"] is None and c["enthalpyOfFormationKJPerMol"] is not None:
         sel = sum(EL[e]*(int(n) if n else 1) for e, n in re.findall(r"([A-Z][a-z]?)(\d*)", c["formula"]))
         c["absoluteEntropyJPerMolK"] = round((c["enthalpyOfFormationKJPerMol"]-c["gibbsEnergyOfFormationKJPerMol"])*1000/298.15 + sel, 2)
