@@ -74,3 +74,4 @@ export { modelVsDataChart } from "./modelVsData.js";
 export type { ChartMeasuredPoint, ModelVsDataInput, ModelVsDataOptions } from "./modelVsData.js";
 export { processPathChart, withProcessPath } from "./processPath.js";
 export type { PathDiagram, ProcessPathOptions, ProcessPathState } from "./processPath.js";
+export * from "./sample/index.js";

@@ -1,0 +1,55 @@
+/**
+ * Departure curves of a fluid for the departure chart: the stable state at each (T, P) from
+ * state/stateAtTP, its residual h, s, u, a, g relative to the ideal gas at the same T and P
+ * (`residual`) or at the same T and density (`residualTV`).
+ */
+import { requirePositive } from "../../validate.js";
+import { stateAtTP } from "../../state/stateAt.js";
+import type { FluidBinding } from "../../state/types.js";
+import type { DepartureCurve } from "../departures.js";
+import { tryPoint, type SampleProgress } from "./sampleGuard.js";
+
+/** Options of {@link departuresFromFluid}. */
+export interface DepartureSampleOptions {
+  /** Mole fractions. Default [1]. */
+  x?: readonly number[];
+  /** Convention: "TP" (same T and P; default) or "TV" (same T and density). */
+  convention?: "TP" | "TV";
+  /** Progress callback (items done, total), e.g. a progress display's `set`. */
+  onProgress?: SampleProgress;
+}
+
+/**
+ * Departures along isotherms at the given pressures (Pa).
+ * @example departureChart(departuresFromFluid(fluid, [250, 300, 350], logGrid(1e5, 2e7, 60)), { property: ["h", "s"] })
+ */
+export function departuresFromFluid(
+  fluid: FluidBinding,
+  temperaturesK: readonly number[],
+  pressuresPa: readonly number[],
+  options: DepartureSampleOptions = {},
+): DepartureCurve[] {
+  const x = options.x ?? [1];
+  const total = temperaturesK.length * pressuresPa.length;
+  let done = 0;
+  pressuresPa.forEach((p, j) => requirePositive(`pressuresPa[${j}]`, p, "Pa"));
+  return temperaturesK.map((T, i) => {
+    requirePositive(`temperaturesK[${i}]`, T, "K");
+    const points = pressuresPa.map((P) => {
+      const s = tryPoint(() => stateAtTP(fluid, T, P, x));
+      options.onProgress?.(++done, total);
+      if (!s) return { pressurePa: P, h: NaN, s: NaN, u: NaN, a: NaN, g: NaN };
+      const r = options.convention === "TV" ? s.residualTV : s.residual;
+      return {
+        pressurePa: P,
+        densityMolPerM3: s.densityMolPerM3,
+        h: r.h,
+        s: r.s,
+        u: r.u,
+        a: r.a,
+        g: r.g,
+      };
+    });
+    return { temperatureK: T, points };
+  });
+}

@@ -1,0 +1,7 @@
+import type { QuantityKind } from "../displayUnits.js";
+
+/** Name (plain text) and kind of a sampled quantity. */
+export interface DisplayQuantityKindInput {
+  name: string;
+  kind: QuantityKind;
+}
