@@ -107,7 +107,7 @@ export function departuresAroundCriticalPoint(
   let intCvOverT: number;
   let uIntCv = 0;
   let uIntCvOverT = 0;
-  let quadErr = 0;
+  let quadErr: number;
   const cv = request.cvResidual;
   if (typeof cv === "function") {
     const a = integrateAdaptive(cv, T, Tv, { relTolerance: 1e-10 });
