@@ -100,6 +100,31 @@ export function defineComponent(
     return value;
   };
 
+  const optionalString = (field: "name" | "formula" | "casNumber") => {
+    const value = spec[field];
+    if (!(value === undefined || typeof value === "string")) {
+      throw new InputError({
+        input: where(field),
+        unit: "-",
+        validRange: "a string",
+        received: value,
+      });
+    }
+  };
+  optionalString("name");
+  optionalString("formula");
+  optionalString("casNumber");
+  if (!(
+    spec.synonyms === undefined ||
+    (Array.isArray(spec.synonyms) && spec.synonyms.every((x: unknown) => typeof x === "string"))
+  )) {
+    throw new InputError({
+      input: where("synonyms"),
+      unit: "-",
+      validRange: "an array of strings",
+      received: spec.synonyms,
+    });
+  }
   const molarMass = positive("molarMassKgPerMol", spec.molarMassKgPerMol, "kg/mol", 10);
   const tc = positive("criticalTemperatureK", spec.criticalTemperatureK, "K");
   const pc = positive("criticalPressurePa", spec.criticalPressurePa, "Pa");

@@ -73,6 +73,9 @@ describe("defineComponent", () => {
       /below the critical temperature/,
     );
     expect(() => defineComponent({ ...base, id: " " })).toThrow(InputError);
+    expect(() => defineComponent({ ...base, synonyms: "x" as never })).toThrow(/synonyms/);
+    expect(() => defineComponent({ ...base, formula: 12 as never })).toThrow(/formula/);
+    expect(() => defineComponent(null as never)).toThrow(InputError);
     expect(() => defineComponent({ ...base, enthalpyOfFormationJPerMol: Infinity })).toThrow(
       InputError,
     );

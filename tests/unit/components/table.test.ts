@@ -199,6 +199,8 @@ const WEBBOOK_CP298: Record<string, number> = {
   "sulfur-dioxide": 39.87,
   "hydrogen-cyanide": 35.86,
   "nitrous-oxide": 38.62,
+  "methyl-mercaptan": 50.25,
+  "ethyl-mercaptan": 72.68,
   methylcyclohexane: 135.0,
 };
 describe("cp at 298.15 K against the NIST Chemistry WebBook (from memory)", () => {

@@ -17,7 +17,7 @@ SOURCES = {
  "burcat": "Burcat, A., Ruscic, B. (2005), Third Millennium Ideal Gas and Condensed Phase Thermochemical Database, ANL-05/20 / TAE 960, NASA 7-coefficient polynomials (from memory)",
  "perry-aly-lee": "Perry's Chemical Engineers' Handbook, 8th ed. (2008), Table 2-156: ideal-gas heat capacities in the Aly-Lee (DIPPR 107) form, from the DIPPR 801 database (coefficients from memory)",
  "benson-fit": "cubic cp/R polynomial fitted by least squares (this project) to group-additivity heat capacities at 300, 400, 500, 600, 800 and 1000 K from Benson, S.W. (1976), Thermochemical Kinetics, 2nd ed., Wiley, Table A.1 (group values from memory); expect about 1-2 % uncertainty; the fit is used from 298.15 K (Benson's lowest tabulated temperature is 300 K) to 1000 K",
- "joback": "Joback, K.G., Reid, R.C. (1987), Chem. Eng. Commun. 57, 233-243, group contributions for ideal-gas cp (group values from memory of Poling et al. 2001, Table 2-2); stated range 273-1000 K; expect errors of a few per cent (about 4 % low for methylcyclohexane at 298 K)",
+ "joback": "Joback, K.G., Reid, R.C. (1987), Chem. Eng. Commun. 57, 233-243, group contributions for ideal-gas cp (group values from memory of Poling et al. 2001, Table 2-2); stated range 273-1000 K; expect errors of a few per cent (about 4 % low for methylcyclohexane, within 1 % for the mercaptans at 298 K)",
  "no-formation": "not included: the author could not recall reliable values (NaN; use a zero-at reference state)",
  "rrho-linear": "rigid-rotor harmonic-oscillator ideal-gas cp of a linear molecule (7/2 R plus Planck-Einstein terms) from the fundamental wavenumbers (COS: 859, 520 x2, 2062 cm-1; CS2: 658, 397 x2, 1535 cm-1; from memory of Shimanouchi 1972, NSRDS-NBS 39), fitted by least squares (this project) to degree-5 polynomials on 200-600 K and 600-1500 K (fit error < 0.05 %); anharmonicity neglected (a few tenths of a per cent at 1000 K)",
  "derived-entropy": "derived from the enthalpy and Gibbs energy of formation: S = (Hf - Gf)/298.15 K + sum of the element entropies (CODATA 1989 key values); not an independent value",
@@ -64,6 +64,7 @@ JG = {
  "rCH": (-2.05e1, 1.62e-1, -1.60e-4, 6.24e-8),
  "OH": (2.57e1, -6.91e-2, 1.77e-4, -9.88e-8),
  "NH2": (2.69e1, -4.12e-2, 1.64e-4, -9.76e-8),
+ "SH": (3.53e1, -7.58e-2, 1.85e-4, -1.03e-7),
 }
 def joback(groups):
     a = sum(JG[g][0]*n for g, n in groups.items()) - 37.93
@@ -136,6 +137,10 @@ add("carbonyl-sulfide","Carbonyl sulfide","COS","463-58-1",["COS","carbon oxysul
     rrho_linear([(859,1),(520,2),(2062,1)]),form="janaf",ent="janaf",cps="rrho-linear")
 add("carbon-disulfide","Carbon disulfide","CS2","75-15-0",["CS2"],76.141,319.37,552.0,79.0,160.0,0.275,0.109,116.94,66.9,237.98,
     rrho_linear([(658,1),(397,2),(1535,1)]),form="janaf",ent="janaf",cps="rrho-linear")
+add("methyl-mercaptan","Methyl mercaptan","CH4S","74-93-1",["methanethiol","MeSH"],48.107,279.11,469.95,72.30,145.0,0.268,0.153,-22.9,-9.3,255.2,
+    joback({"CH3":1,"SH":1}),cps="joback")
+add("ethyl-mercaptan","Ethyl mercaptan","C2H6S","75-08-1",["ethanethiol","EtSH"],62.134,308.15,499.15,54.90,207.0,0.274,0.191,-46.1,-4.8,296.2,
+    joback({"CH3":1,"CH2":1,"SH":1}),cps="joback")
 add("ammonia","Ammonia","H3N","7664-41-7",["NH3"],17.031,239.82,405.40,113.53,72.47,0.244,0.257,-45.898,-16.367,192.774,
     gri(200,6000,low=[4.28602740,-4.66052300e-3,2.17185130e-5,-2.28088870e-8,8.26380460e-12],high=[2.63445210,5.66625600e-3,-1.72786760e-6,2.38671610e-10,-1.25787860e-14]),form="janaf",ent="janaf",cps="gri30")
 add("nitric-oxide","Nitric oxide","NO","10102-43-9",["NO","nitrogen monoxide"],30.006,121.38,180.0,64.80,58.0,0.251,0.583,90.291,86.600,210.758,
