@@ -431,8 +431,7 @@ export function saturationAtTemperature(
         (trivial(out) ? "; the two densities collapsed to one (trivial solution)" : ""),
     );
   }
-  isothermPoint(model, T, out.rhoL, Rg, L);
-  isothermPoint(model, T, out.rhoV, Rg, V);
+  // L and V hold the converged phases (the Newton loop evaluates before it tests convergence).
   const hVap = Rg * T * (V.hResRT - L.hResRT);
   const warnings: ResultWarning[] = [];
   const triple = (model as SaturationHints).triple;
@@ -442,12 +441,8 @@ export function saturationAtTemperature(
       message: `T = ${T} K is below the triple point (${triple.temperatureK} K) of ${model.info.name}: the stable phase there is solid, and this vapour-liquid equilibrium is metastable`,
     });
   }
-  if (model.checkValidity) {
-    for (const w of model.checkValidity(T, out.rhoL, PURE)) warnings.push(w);
-    for (const w of model.checkValidity(T, out.rhoV, PURE)) {
-      if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
-    }
-  }
+  // Both phases share T and P, so one validity check (on the vapour, evaluated last) covers both.
+  if (model.checkValidity) for (const w of model.checkValidity(T, out.rhoV, PURE)) warnings.push(w);
   return {
     temperatureK: T,
     // The vapour-side pressure: rho_V R T (1 + aD_V) has no cancellation, while the liquid-side

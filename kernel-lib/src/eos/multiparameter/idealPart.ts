@@ -53,7 +53,8 @@ export function compileIdealPart(data: IdealPartData): IdealPart {
     for (let i = 0; i < em.length; i++) {
       const x = et[i] * tau;
       const e = Math.exp(-x);
-      const oneMinus = -Math.expm1(-x);
+      // 1 - e is exact enough: x = theta tau stays above ~0.1 for published terms and T < 5000 K.
+      const oneMinus = 1 - e;
       f += em[i] * Math.log(oneMinus);
       // tau d/dtau: m x e / (1 - e); tau^2 d2/dtau2: -m x^2 e / (1 - e)^2
       const r = e / oneMinus;

@@ -10,7 +10,7 @@
  *   aT = -tau phi_t, aTT = tau^2 phi_tt + 2 tau phi_t, aDT = -delta tau phi_dt.
  */
 import type { ResultWarning } from "../../errors.js";
-import type { ModelInfo, ResidualDerivatives, ResidualModel } from "../types.js";
+import type { ModelInfo, ResidualDerivatives, ResidualModel, ResidualRequest } from "../types.js";
 import type { ReferenceState } from "../../idealgas/types.js";
 import { compileAncillary, type Ancillary } from "./ancillary.js";
 import type { RangeData, ReferenceFluidData } from "./fluidData.js";
@@ -57,8 +57,16 @@ export interface ReferenceFluid extends ResidualModel {
   readonly reducing: { readonly temperatureK: number; readonly densityMolPerM3: number };
   /** The zero of h, s, u of results computed with {@link ReferenceFluid.idealReduced}. */
   readonly referenceState: ReferenceState;
-  /** phi_r and reduced derivatives at (tau, delta), written into `out` (no allocation). */
-  residualReduced(tau: number, delta: number, out: ReducedHelmholtz): ReducedHelmholtz;
+  /**
+   * phi_r and reduced derivatives at (tau, delta), written into `out` (no allocation); `third`
+   * also computes delta^3 phi_ddd of non-analytic terms (else NaN when the equation has them).
+   */
+  residualReduced(
+    tau: number,
+    delta: number,
+    out: ReducedHelmholtz,
+    third?: boolean,
+  ): ReducedHelmholtz;
   /** phi_0 (publication's reference state) and reduced derivatives at (tau, delta). */
   idealReduced(tau: number, delta: number, out: ReducedHelmholtz): ReducedHelmholtz;
   /** Saturation estimate from the ancillary equations; T below the critical temperature. */
@@ -105,7 +113,24 @@ export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
     anc.reducingTemperatureK,
     densityScale(anc.vaporDensity.unit),
   );
+  // Memo of the last evaluation: the engine asks for the same (T, rho) several times per state
+  // (residual, validity check), and each evaluation is the dominant cost.
   const scratch = emptyReducedHelmholtz();
+  let memoT = NaN;
+  let memoRho = NaN;
+  const evaluateMemo = (temperatureK: number, densityMolPerM3: number): ReducedHelmholtz => {
+    if (temperatureK === memoT && densityMolPerM3 === memoRho) return scratch;
+    residualPart.evaluate(Tred / temperatureK, densityMolPerM3 / rhoRed, scratch);
+    memoT = temperatureK;
+    memoRho = densityMolPerM3;
+    return scratch;
+  };
+  const publishedCritical = Object.freeze({
+    temperatureK: data.critical.temperatureK,
+    pressurePa: data.critical.pressurePa,
+    densityMolPerM3: data.critical.densityKgPerM3 / M,
+    rule: "published critical point of the equation",
+  });
   const info: ModelInfo = {
     id: "reference",
     name: data.name,
@@ -136,27 +161,55 @@ export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
     reducing: { temperatureK: Tred, densityMolPerM3: rhoRed },
     referenceState: { kind: "fluid-convention", description: data.referenceState },
     validityDescription,
-    residual(temperatureK: number, densityMolPerM3: number): ResidualDerivatives {
-      const tau = Tred / temperatureK;
-      const r = residualPart.evaluate(tau, densityMolPerM3 / rhoRed, scratch);
-      return {
-        a: r.f,
-        aD: r.fD,
-        aDD: r.fDD,
-        aDDD: r.fDDD,
-        aT: -r.fT,
-        aTT: r.fTT + 2 * r.fT,
-        aDT: -r.fDT,
+    residual(
+      temperatureK: number,
+      densityMolPerM3: number,
+      _x: readonly number[],
+      request?: ResidualRequest,
+    ): ResidualDerivatives {
+      const r = evaluateMemo(temperatureK, densityMolPerM3);
+      // One object literal per case (no spreads: this runs in the engine's tight loops).
+      const third = !Number.isNaN(r.fDDD);
+      if (request?.composition) {
         // A pure fluid: d(n alpha_r)/dn = alpha_r + rho d(alpha_r)/d(rho).
-        dnA: [r.f + r.fD],
-      };
+        return third
+          ? {
+              a: r.f,
+              aD: r.fD,
+              aDD: r.fDD,
+              aDDD: r.fDDD,
+              aT: -r.fT,
+              aTT: r.fTT + 2 * r.fT,
+              aDT: -r.fDT,
+              dnA: [r.f + r.fD],
+            }
+          : {
+              a: r.f,
+              aD: r.fD,
+              aDD: r.fDD,
+              aT: -r.fT,
+              aTT: r.fTT + 2 * r.fT,
+              aDT: -r.fDT,
+              dnA: [r.f + r.fD],
+            };
+      }
+      return third
+        ? {
+            a: r.f,
+            aD: r.fD,
+            aDD: r.fDD,
+            aDDD: r.fDDD,
+            aT: -r.fT,
+            aTT: r.fTT + 2 * r.fT,
+            aDT: -r.fDT,
+          }
+        : { a: r.f, aD: r.fD, aDD: r.fDD, aT: -r.fT, aTT: r.fTT + 2 * r.fT, aDT: -r.fDT };
     },
     maxDensity(): number {
       return Infinity;
     },
     checkValidity(temperatureK: number, densityMolPerM3: number): ResultWarning[] {
-      const tau = Tred / temperatureK;
-      const r = residualPart.evaluate(tau, densityMolPerM3 / rhoRed, scratch);
+      const r = evaluateMemo(temperatureK, densityMolPerM3);
       const pressurePa = densityMolPerM3 * R * temperatureK * (1 + r.fD);
       const status = validityStatus(temperatureK, pressurePa);
       if (status === "inside") return [];
@@ -172,7 +225,7 @@ export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
         },
       ];
     },
-    residualReduced: (tau, delta, out) => residualPart.evaluate(tau, delta, out),
+    residualReduced: (tau, delta, out, third) => residualPart.evaluate(tau, delta, out, third),
     idealReduced: (tau, delta, out) => idealPart.evaluate(tau, delta, out),
     saturationEstimate(temperatureK: number): SaturationEstimate {
       return {
@@ -183,12 +236,7 @@ export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
     },
     validityStatus,
     pseudoCritical() {
-      return {
-        temperatureK: data.critical.temperatureK,
-        pressurePa: data.critical.pressurePa,
-        densityMolPerM3: data.critical.densityKgPerM3 / M,
-        rule: "published critical point of the equation",
-      };
+      return publishedCritical;
     },
     densityRoots(temperatureK: number, pressurePa: number): number[] {
       return referenceDensityRoots(fluid, temperatureK, pressurePa);

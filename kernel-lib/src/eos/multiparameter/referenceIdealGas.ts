@@ -91,7 +91,8 @@ export function referenceIdealGasMixture(fluid: ReferenceFluid): IdealGasMixture
     at(temperatureK: number, pressurePa: number, x: readonly number[]): IdealGasProperties {
       requirePositive("temperatureK", temperatureK, "K");
       requirePositive("pressurePa", pressurePa, "Pa");
-      checkMoleFractions(x, 1, { input: "x" });
+      // Fast path for the one valid composition; anything else gets the full check (and its error).
+      if (!(x.length === 1 && x[0] === 1)) checkMoleFractions(x, 1, { input: "x" });
       return {
         temperatureK,
         pressurePa,

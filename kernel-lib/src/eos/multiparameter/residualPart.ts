@@ -88,8 +88,15 @@ export function emptyReducedHelmholtz(): ReducedHelmholtz {
 
 /** The compiled residual part; create with {@link compileResidualPart}. */
 export interface ResidualPart {
-  /** Adds nothing, allocates nothing: overwrites `out` with phi_r and its reduced derivatives. */
-  evaluate(tau: number, delta: number, out: ReducedHelmholtz): ReducedHelmholtz;
+  /**
+   * Allocates nothing: overwrites `out` with phi_r and its reduced derivatives. The third delta
+   * derivative of the non-analytic terms (a central difference, three times their cost) is
+   * computed only when `third` is true; otherwise `out.fDDD` is NaN for an equation that has
+   * non-analytic terms (and exact for one that has none).
+   */
+  evaluate(tau: number, delta: number, out: ReducedHelmholtz, third?: boolean): ReducedHelmholtz;
+  /** True when the equation has non-analytic terms (fDDD then needs `third`). */
+  readonly hasNonAnalytic: boolean;
   /** Number of terms (for reports). */
   readonly termCount: number;
 }
@@ -135,12 +142,16 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
     if (ptInt[i] >= 0) maxT = Math.max(maxT, ptInt[i]);
   }
   const ng = data.gaussian.length;
-  const gauss = data.gaussian.map((g) => ({ ...g }));
+  const gauss = data.gaussian.map((g) => ({
+    ...g,
+    tInt: Number.isInteger(g.t) && g.t >= 0 && g.t <= MAX_INT_POWER ? g.t : -1,
+  }));
   for (const g of gauss) {
     if (!Number.isInteger(g.d) || g.d < 0 || g.d > MAX_INT_POWER) {
       throw new RangeError(`Gaussian term: d must be an integer 0..${MAX_INT_POWER}, got ${g.d}`);
     }
     maxD = Math.max(maxD, g.d);
+    if (g.tInt >= 0) maxT = Math.max(maxT, g.tInt);
   }
   const nonAnalytic = data.nonAnalytic.map((x) => ({ ...x }));
   const dPow = new Float64Array(Math.max(maxD, maxL) + 1);
@@ -149,7 +160,12 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
   const expG = new Float64Array(maxL + 1); // g of the cached exp, to share exp() only for equal g
   const scratch = emptyReducedHelmholtz();
 
-  function evaluate(tau: number, delta: number, out: ReducedHelmholtz): ReducedHelmholtz {
+  function evaluate(
+    tau: number,
+    delta: number,
+    out: ReducedHelmholtz,
+    third = false,
+  ): ReducedHelmholtz {
     let f = 0;
     let fD = 0;
     let fDD = 0;
@@ -207,8 +223,7 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
       const g = gauss[i];
       const dd = delta - g.epsilon;
       const dt = tau - g.gamma;
-      const tauT =
-        Number.isInteger(g.t) && g.t >= 0 && g.t < tPow.length ? tPow[g.t] : Math.exp(g.t * lnTau);
+      const tauT = g.tInt >= 0 ? tPow[g.tInt] : Math.exp(g.t * lnTau);
       const base = g.n * dPow[g.d] * tauT * Math.exp(-g.alpha * dd * dd - g.beta * dt * dt);
       const fr = g.d - 2 * g.alpha * delta * dd;
       const fr1 = -2 * g.alpha * delta * (2 * delta - g.epsilon);
@@ -234,6 +249,10 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
       fT += scratch.fT;
       fTT += scratch.fTT;
       fDT += scratch.fDT;
+      if (!third) {
+        fDDD = NaN;
+        continue;
+      }
       // Third delta derivative by central difference of the analytic second derivative.
       const hStep = 1e-6 * delta;
       nonAnalyticTerm(nonAnalytic[i], tau, delta + hStep, scratch);
@@ -253,7 +272,11 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
     return out;
   }
 
-  return { evaluate, termCount: np + ng + nonAnalytic.length };
+  return {
+    evaluate,
+    termCount: np + ng + nonAnalytic.length,
+    hasNonAnalytic: nonAnalytic.length > 0,
+  };
 }
 
 /**
