@@ -81,6 +81,9 @@ async function checkOne(context, file, timeoutMs) {
     problems.push(`request outside file:// blocked: ${url.slice(0, 200)}`);
     return route.abort("blockedbyclient");
   });
+  page.on("websocket", (socket) =>
+    problems.push(`websocket opened: ${socket.url().slice(0, 200)}`),
+  );
   page.on("pageerror", (error) => problems.push(`page error: ${error.message}`));
   page.on("console", (message) => {
     if (message.type() === "error") problems.push(`console error: ${message.text().slice(0, 300)}`);

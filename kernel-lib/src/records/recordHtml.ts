@@ -56,6 +56,22 @@ function pre(className: string, content: string): string {
   return `<pre class="${className}">${escapeHtml(stripAnsi(content))}</pre>`;
 }
 
+/**
+ * The record's own guarantee that it loads nothing: no fetch, frame, font or image from anywhere
+ * but the page itself (data: URIs). Inline scripts run (charts); vega compiles its expressions
+ * with Function, hence 'unsafe-eval'.
+ */
+const CONTENT_SECURITY_POLICY = [
+  "default-src 'none'",
+  "script-src 'unsafe-inline' 'unsafe-eval'",
+  "style-src 'unsafe-inline'",
+  "img-src data:",
+  "font-src data:",
+  "connect-src 'none'",
+  "form-action 'none'",
+  "base-uri 'none'",
+].join("; ");
+
 const IMAGE_TYPES = ["image/png", "image/jpeg", "image/gif"];
 
 /** Renders one rich output bundle, richest type first. */
@@ -213,6 +229,7 @@ export function recordHtml(input: RecordInput): string {
 <head>
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
+<meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}">
 <meta name="generator" content="isochor ${escapeHtml(env.isochorVersion)} (isochor run)">
 <title>${escapeHtml(input.title)} - calculation record</title>
 <style>${CSS}</style>

@@ -134,6 +134,18 @@ function plan(paths: string[], outDir: string): PlannedNotebook[] {
   });
 }
 
+/** A notebook saved with tslab's JavaScript kernel ("jslab") runs as JavaScript; all others as TypeScript. */
+function isJavaScriptNotebook(notebook: Notebook): boolean {
+  const kernelspec = notebook.metadata.kernelspec as
+    { name?: unknown; language?: unknown } | undefined;
+  const languageInfo = notebook.metadata.language_info as { name?: unknown } | undefined;
+  return (
+    kernelspec?.name === "jslab" ||
+    kernelspec?.language === "javascript" ||
+    (kernelspec === undefined && languageInfo?.name === "javascript")
+  );
+}
+
 function titleOf(notebook: Notebook, absolute: string): string {
   for (const cell of notebook.cells) {
     if (cell.cell_type !== "markdown") continue;
@@ -182,6 +194,7 @@ async function runOne(
   const env = runEnvironment(path.dirname(absolute));
   const session = TslabSession.open(path.dirname(absolute), {
     cellTimeoutMs: options.cellTimeoutMs,
+    isJS: isJavaScriptNotebook(notebook),
   });
   const cellTimesMs: Array<number | undefined> = cells.map(() => undefined);
   try {

@@ -77,6 +77,8 @@ export interface CellRun {
 
 /** Options of {@link TslabSession.open}. */
 export interface TslabSessionOptions {
+  /** JavaScript notebooks (tslab's "jslab" kernel): cells are JavaScript, not TypeScript. Default false. */
+  isJS?: boolean;
   /** A cell still running after this long (ms) is interrupted and fails. Default 600000 (10 min). */
   cellTimeoutMs?: number;
 }
@@ -137,12 +139,12 @@ export class TslabSession {
     const previousCwd = process.cwd();
     process.chdir(notebookDir);
     try {
-      const node = tslab.createConverter({ isBrowser: false });
+      const node = tslab.createConverter({ isJS: options.isJS ?? false, isBrowser: false });
       let browser: TslabConverter | undefined;
       const convs = {
         node,
         get browser(): TslabConverter {
-          browser ??= tslab.createConverter({ isBrowser: true });
+          browser ??= tslab.createConverter({ isJS: options.isJS ?? false, isBrowser: true });
           return browser;
         },
         close(): void {

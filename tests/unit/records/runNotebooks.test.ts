@@ -156,6 +156,10 @@ describe("runNotebooks on a good notebook (one run shared by the tests below)", 
     expect(html).toContain("step 2 of 2");
     expect(html).not.toContain("step 1 of 2</pre>");
     expect(html).toContain("All 6 code cells ran to completion");
+    // The page forbids itself any load from outside (Content Security Policy).
+    expect(html).toContain(
+      `<meta http-equiv="Content-Security-Policy" content="default-src 'none';`,
+    );
     // No chart in this notebook: no runtime, and nothing that could load from the network.
     expect(html).not.toContain("data-isochor-once");
     expect(html).not.toMatch(/(src|href)="(https?:)?\/\//);
