@@ -57,3 +57,5 @@ export type {
   AroundCriticalPointResult,
   ResidualCvInput,
 } from "./aroundCriticalPoint.js";
+export { residualCvFromPvt, checkCalorimetry } from "./residualCv.js";
+export type { ResidualCvProfile, ResidualCvMeasurement } from "./residualCv.js";

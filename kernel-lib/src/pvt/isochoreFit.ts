@@ -37,6 +37,8 @@ export interface IsochoreFit {
   /** Standard deviation used for each point, Pa (stated, or from the scatter). */
   readonly sigmaPa: readonly number[];
   /** P (Pa) and dP/dT (Pa/K) at T, with standard uncertainties. */
+  /** (d2P/dT2)_rho at T, Pa/K2, with its standard uncertainty (0 for a straight line). */
+  curvature(temperatureK: number): { curvaturePaPerK2: number; uCurvaturePaPerK2: number };
   evaluate(temperatureK: number): {
     pressurePa: number;
     slopePaPerK: number;
@@ -138,6 +140,18 @@ export function fitIsochore(
         S += (c[j] as number) * (gS[j] as number);
       }
       return { pressurePa: P, slopePaPerK: S, uPressurePa: quad(gP), uSlopePaPerK: quad(gS) };
+    },
+    curvature(temperatureK: number) {
+      const x = (temperatureK - mid) / half;
+      const g = c.map((_, j) => (j < 2 ? 0 : (j * (j - 1) * x ** (j - 2)) / (half * half)));
+      let v = 0;
+      let C = 0;
+      for (let i = 0; i < g.length; i++) {
+        C += (c[i] as number) * (g[i] as number);
+        for (let j = 0; j < g.length; j++)
+          v += (g[i] as number) * ((cov[i] as number[])[j] as number) * (g[j] as number);
+      }
+      return { curvaturePaPerK2: C, uCurvaturePaPerK2: Math.sqrt(Math.max(v, 0)) };
     },
   };
 }

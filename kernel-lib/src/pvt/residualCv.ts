@@ -1,0 +1,137 @@
+/**
+ * Residual isochoric heat capacity from P-V-T data, and the calorimetric consistency check of
+ * issue 6 item 6. Differentiating s_res along the isochore (integrateIsotherm.ts) gives
+ *
+ *   cv_res(T, rho) = -T int_0^rho (d2P/dT2)_rho' / rho'^2 drho'
+ *
+ * (e.g. Smith, Van Ness & Abbott, 7th ed., §6.2 with (dcv/dv)_T = T (d2P/dT2)_v), evaluated with
+ * the isochore fits' curvature at the route's nodes, the low-density bridge (with
+ * P = rho R T (1 + B rho + ...) the integrand tends to -R T (2 dB/dT + T d2B/dT2), finite) and the
+ * irregular cumulative quadrature. Each node's
+ * curvature comes from a different isochore fit, so the node errors are independent and the
+ * standard uncertainty is propagated linearly through the (linear) bridge + quadrature map.
+ * Needs isochore orders >= 2 (a straight line has no curvature).
+ */
+import { InputError } from "../errors.js";
+import type { PvtRouteResult } from "./departuresFromPvt.js";
+import type { PvtDiagnostic } from "./pvtDiagnostic.js";
+import { cumulativeIrregular } from "./irregularQuadrature.js";
+import { lowDensityBridge } from "./lowDensityBridge.js";
+
+export interface ResidualCvProfile {
+  temperatureK: number;
+  densityMolPerM3: number[];
+  /** cv - cv_ig at each node, J/(mol K). */
+  cvResidualJPerMolK: number[];
+  uCvResidualJPerMolK: number[];
+}
+
+/** cv_res along the isotherm T (a reported isotherm of the isochore route), at its nodes. */
+export function residualCvFromPvt(result: PvtRouteResult, temperatureK: number): ResidualCvProfile {
+  const iso = result.isotherms.find(
+    (i) => Math.abs(i.temperatureK - temperatureK) <= 1e-6 * temperatureK,
+  );
+  if (result.route !== "isochores" || !iso) {
+    throw new InputError({
+      input: "temperatureK",
+      unit: "K",
+      validRange: `a reported isotherm of the isochore route (${result.isotherms.map((i) => i.temperatureK.toFixed(2)).join(", ")})`,
+      received: temperatureK,
+    });
+  }
+  const T = iso.temperatureK;
+  const rho = iso.states.map((s) => s.densityMolPerM3);
+  const fits = rho.map((r) => result.isochoreFits.find((f) => f.densityMolPerM3 === r));
+  const curv = fits.map((f) =>
+    f ? f.curvature(T) : { curvaturePaPerK2: Number.NaN, uCurvaturePaPerK2: 0 },
+  );
+  const f = rho.map(
+    (r, k) => (-T * (curv[k] as { curvaturePaPerK2: number }).curvaturePaPerK2) / (r * r),
+  );
+  const u = rho.map(
+    (r, k) => (T * (curv[k] as { uCurvaturePaPerK2: number }).uCurvaturePaPerK2) / (r * r),
+  );
+  const degree = lowDensityBridge(rho, f, u.every((x) => x > 0) ? u : undefined).degree;
+  const integrate = (values: readonly number[]) => {
+    const b = lowDensityBridge(rho, values, undefined, { degree, estimateTruncation: false });
+    const q = cumulativeIrregular(rho, values);
+    return q.values.map((v) => v + b.integral);
+  };
+  const nominal = integrate(f);
+  const variance = nominal.map(() => 0);
+  for (let k = 0; k < rho.length; k++) {
+    const bumped = f.slice();
+    bumped[k] = (bumped[k] as number) + (u[k] as number);
+    integrate(bumped).forEach(
+      (v, j) => (variance[j] = (variance[j] as number) + (v - (nominal[j] as number)) ** 2),
+    );
+  }
+  return {
+    temperatureK: T,
+    densityMolPerM3: rho,
+    cvResidualJPerMolK: nominal,
+    uCvResidualJPerMolK: variance.map(Math.sqrt),
+  };
+}
+
+/** A calorimetric measurement on one of the isochores, reduced to its residual part. */
+export interface ResidualCvMeasurement {
+  temperatureK: number;
+  /** Must be the density of an isochore of the route (same cell), mol/m3, within 1e-3 relative. */
+  densityMolPerM3: number;
+  /** Measured cv minus the ideal-gas cv at T (idealgas module), J/(mol K). */
+  cvResidualJPerMolK: number;
+  /** Standard uncertainty of the measured value, J/(mol K). */
+  uCvResidualJPerMolK: number;
+}
+
+/**
+ * Compares measured residual cv with the one derived from the P-V-T data; flags every
+ * measurement that differs by more than 3 combined standard uncertainties.
+ */
+export function checkCalorimetry(
+  result: PvtRouteResult,
+  measurements: readonly ResidualCvMeasurement[],
+): {
+  points: { measurement: ResidualCvMeasurement; fromPvt: number; uFromPvt: number; z: number }[];
+  diagnostics: PvtDiagnostic[];
+} {
+  const points = measurements.map((m, i) => {
+    const profile = residualCvFromPvt(result, m.temperatureK);
+    const k = profile.densityMolPerM3.findIndex((r) => Math.abs(r / m.densityMolPerM3 - 1) <= 1e-3);
+    if (k < 0) {
+      throw new InputError({
+        input: `measurements[${i}].densityMolPerM3`,
+        unit: "mol/m3",
+        validRange: `an isochore density of the route at ${m.temperatureK} K (${profile.densityMolPerM3.map((r) => r.toPrecision(6)).join(", ")})`,
+        received: m.densityMolPerM3,
+      });
+    }
+    const fromPvt = profile.cvResidualJPerMolK[k] as number;
+    const uFromPvt = profile.uCvResidualJPerMolK[k] as number;
+    const z = (m.cvResidualJPerMolK - fromPvt) / Math.hypot(m.uCvResidualJPerMolK, uFromPvt);
+    return { measurement: m, fromPvt, uFromPvt, z };
+  });
+  const bad = points.filter((p) => !(Math.abs(p.z) <= 3));
+  const diagnostics: PvtDiagnostic[] = [
+    bad.length === 0
+      ? {
+          code: "calorimetric-consistency",
+          severity: "info",
+          message: `all ${points.length} calorimetric cv values agree with the P-V-T data within 3 u`,
+        }
+      : {
+          code: "calorimetric-consistency",
+          severity: "warning",
+          message:
+            `${bad.length} of ${points.length} calorimetric cv values contradict the P-V-T data (> 3 u): ` +
+            bad
+              .map(
+                (p) =>
+                  `${p.measurement.temperatureK} K, ${p.measurement.densityMolPerM3.toPrecision(5)} mol/m3 (${p.z.toFixed(1)} u)`,
+              )
+              .join("; "),
+        },
+  ];
+  return { points, diagnostics };
+}
