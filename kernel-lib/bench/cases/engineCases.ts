@@ -9,6 +9,38 @@ import { modelFromPressure } from "../../src/departure/pressureModel.js";
 import { residualProperties } from "../../src/state/properties.js";
 import { getComponent } from "../../src/components/getComponent.js";
 import type { BenchCase } from "../harness.js";
+import type { IdealGasMixture, IdealGasProperties } from "../../src/idealgas/types.js";
+import { R } from "../../src/constants.js";
+
+/**
+ * A constant-cp ideal gas (cp = 4R), for the diagnostic "-residual-only" cases: it isolates the
+ * engine's own cost (roots, residual model, properties) from the ideal-gas correlations.
+ */
+const constantCpIdealGas: IdealGasMixture = {
+  components: [],
+  referenceState: { kind: "zero-at", temperatureK: 298.15, pressurePa: 1e5 },
+  at(T: number, P: number, x: readonly number[]): IdealGasProperties {
+    const cp = 4 * R;
+    let mixing = 0;
+    for (const xi of x) if (xi > 0) mixing -= R * xi * Math.log(xi);
+    const h = cp * (T - 298.15);
+    const s = cp * Math.log(T / 298.15) - R * Math.log(P / 1e5) + mixing;
+    const u = h - R * T;
+    return {
+      temperatureK: T,
+      pressurePa: P,
+      h,
+      s,
+      u,
+      a: u - T * s,
+      g: h - T * s,
+      cp,
+      cv: cp - R,
+      referenceState: this.referenceState,
+      warnings: [],
+    };
+  },
+};
 
 const TEN = [
   "nitrogen",
@@ -44,6 +76,33 @@ export const engineCases: BenchCase[] = [
     targetSeconds: 5e-6,
     setup() {
       const fluid = defineFluid({ components: TEN, model: "peng-robinson" });
+      let k = 0;
+      return () => fluid.stateAtTP(TEMPERATURES[k++ & 15], 5e6, X10);
+    },
+  },
+  {
+    name: "pr-pure-TP-residual-only",
+    description:
+      "diagnostic: pr-pure-TP with a constant-cp ideal gas (engine cost without the cp correlations)",
+    setup() {
+      const fluid = defineFluid({
+        components: ["methane"],
+        model: "peng-robinson",
+        idealGas: constantCpIdealGas,
+      });
+      let k = 0;
+      return () => fluid.stateAtTP(TEMPERATURES[k++ & 15], 5e6);
+    },
+  },
+  {
+    name: "pr-mix10-TP-residual-only",
+    description: "diagnostic: pr-mix10-TP with a constant-cp ideal gas",
+    setup() {
+      const fluid = defineFluid({
+        components: TEN,
+        model: "peng-robinson",
+        idealGas: constantCpIdealGas,
+      });
       let k = 0;
       return () => fluid.stateAtTP(TEMPERATURES[k++ & 15], 5e6, X10);
     },

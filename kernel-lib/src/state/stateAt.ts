@@ -155,48 +155,56 @@ export function stateAtTP(
   checkPressure(pressurePa);
   checkComposition(x, model.info.componentIds.length);
   const request = options.phase ?? "stable";
-  const all = densityRootsAtTP(binding, temperatureK, pressurePa, x, options);
-  const roots = all.filter((r) => r.mechanicallyStable);
-  if (roots.length === 0) {
+  const rhos = model.densityRoots
+    ? model.densityRoots(temperatureK, pressurePa, x)
+    : findDensityRoots(model, temperatureK, pressurePa, x, options.rootSearch);
+  // evaluate every mechanically stable root once (with composition derivatives: the chosen one
+  // needs them, and there are at most a few roots)
+  const stableRhos: number[] = [];
+  const stableResiduals: ResidualDerivatives[] = [];
+  for (let k = 0; k < rhos.length; k++) {
+    const r = model.residual(temperatureK, rhos[k], x, { composition: true });
+    if (dPdRho(temperatureK, r, model.gasConstant) > 0) {
+      stableRhos.push(rhos[k]);
+      stableResiduals.push(r);
+    }
+  }
+  const count = stableRhos.length;
+  if (count === 0) {
     throw new PhaseUnavailableError(
       `${model.info.name} has no mechanically stable density root at T = ${temperatureK} K, P = ${pressurePa} Pa` +
-        (all.length > 0
-          ? ` (roots found: ${all.map((r) => r.densityMolPerM3.toPrecision(6)).join(", ")} mol/m3, all with dP/drho <= 0)`
+        (rhos.length > 0
+          ? ` (roots found: ${rhos.map((r) => r.toPrecision(6)).join(", ")} mol/m3, all with dP/drho <= 0)`
           : " (no root at all: the pressure is beyond what the equation can reach at this temperature)"),
     );
   }
-  let chosen: DensityRoot;
-  let position: "lowest" | "highest" | "only";
-  if (roots.length === 1) {
-    chosen = roots[0];
-    position = "only";
-  } else if (request === "vapor") {
-    chosen = roots[0];
-    position = "lowest";
-  } else if (request === "liquid") {
-    chosen = roots[roots.length - 1];
-    position = "highest";
-  } else {
-    chosen = roots[0];
-    for (const r of roots) if (r.gibbsResidualOverRT < chosen.gibbsResidualOverRT) chosen = r;
-    position =
-      chosen === roots[0] ? "lowest" : chosen === roots[roots.length - 1] ? "highest" : "only";
+  let index = 0;
+  if (count > 1) {
+    if (request === "liquid") index = count - 1;
+    else if (request === "stable") {
+      let best = residualGibbsTP(stableResiduals[0]);
+      for (let k = 1; k < count; k++) {
+        const g = residualGibbsTP(stableResiduals[k]);
+        if (g < best) {
+          best = g;
+          index = k;
+        }
+      }
+    }
   }
-  const residual = model.residual(temperatureK, chosen.densityMolPerM3, x, { composition: true });
+  const position: "lowest" | "highest" | "only" =
+    count === 1 ? "only" : index === 0 ? "lowest" : index === count - 1 ? "highest" : "only";
+  const chosen = { densityMolPerM3: stableRhos[index] };
+  const residual = stableResiduals[index];
   const Z = 1 + residual.aD;
   const label = phaseLabel(model, temperatureK, pressurePa, chosen.densityMolPerM3, x, position, Z);
   const warnings: { code: "model-limitation"; message: string }[] = [];
-  if (
-    roots.length === 1 &&
-    request !== "stable" &&
-    label !== "supercritical" &&
-    label !== request
-  ) {
+  if (count === 1 && request !== "stable" && label !== "supercritical" && label !== request) {
     throw new PhaseUnavailableError(
       `no ${request} root at T = ${temperatureK} K, P = ${pressurePa} Pa: ${model.info.name} has a single stable density root there (${chosen.densityMolPerM3.toPrecision(6)} mol/m3, Z = ${Z.toPrecision(5)}), and it is ${label}-like (rule: state/phaseLabel.ts)`,
     );
   }
-  if (roots.length === 1 && request !== "stable" && label === "supercritical") {
+  if (count === 1 && request !== "stable" && label === "supercritical") {
     warnings.push({
       code: "model-limitation",
       message: `requested phase "${request}" at a supercritical state (T and P above the (pseudo-)critical point): the single root is returned, and vapor and liquid are not distinct there`,

@@ -93,3 +93,29 @@ describe("numeric departures agree with the closed forms to 1e-9", () => {
     }
   }
 });
+
+describe("numeric departures agree with the closed forms of the virial and Lee-Kesler models", () => {
+  for (const id of ["virial", "lee-kesler"] as const) {
+    for (const c of [
+      { ids: ["methane"], x: [1], T: 300, rho: 1500 },
+      { ids: ["methane", "ethane", "nitrogen"], x: [0.8, 0.15, 0.05], T: 320, rho: 2500 },
+    ]) {
+      it(`${id}: ${c.ids.join("+")} at ${c.T} K, ${c.rho} mol/m3`, () => {
+        const closed = createModel(id, comps(...c.ids));
+        const numeric = modelFromPressure({
+          name: "numeric",
+          components: c.ids,
+          pressure: closed.pressureFunction,
+        });
+        const a = residualProperties(c.T, closed.residual(c.T, c.rho, c.x, { composition: true }));
+        const b = residualProperties(c.T, numeric.residual(c.T, c.rho, c.x, { composition: true }));
+        const RT = R * c.T;
+        for (const k of ["h", "u", "a", "g"] as const) {
+          expect(Math.abs(a.TP[k] - b.TP[k]) / Math.max(Math.abs(a.TP[k]), RT)).toBeLessThan(1e-9);
+        }
+        expect(Math.abs(a.TP.s - b.TP.s) / Math.max(Math.abs(a.TP.s), R)).toBeLessThan(1e-9);
+        a.lnPhi.forEach((l, i) => expect(Math.abs(l - b.lnPhi[i])).toBeLessThan(1e-8));
+      });
+    }
+  }
+});
