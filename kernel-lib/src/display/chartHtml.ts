@@ -3,12 +3,17 @@
  * vega-embed view when scripts run and the runtime (vegaRuntimeScript) is on the page.
  *
  *   <figure class="isochor-chart" id=... data-isochor-chart="static">
- *     <div class="isochor-chart-static"> SVG </div>         shown until the live view is up
+ *     <div class="isochor-chart-static"><img src="data:image/svg+xml;base64,..."></div>
+ *                                                            shown until the live view is up
  *     <div class="isochor-chart-live"></div>                 vega-embed renders here
  *     <script type="application/json"> spec </script>        escaped for the script element
  *     <script> boot </script>                                waits for window.vegaEmbed, embeds
  *     <figcaption> caption (escaped) </figcaption>
  *   </figure>
+ *
+ * The static chart is an <img> with the SVG as a data: URI, not inline <svg>: the classic
+ * notebook's sanitizer removes inline SVG from untrusted outputs (a notebook reopened after
+ * nbconvert or `isochor run` is untrusted) but keeps images, so the fallback survives there.
  *
  * Marker for checkers: `data-isochor-chart` goes "static" -> "live" once vega-embed has rendered,
  * or "failed" (with a console error) if it could not. Untrusted notebooks and pages without
@@ -79,6 +84,17 @@ function bootScript(id: string, runtimeWaitMs: number): string {
 })();`;
 }
 
+/** The chart's title text, for the static image's alt text. */
+function chartTitle(spec: VegaLiteSpec): string | undefined {
+  const title = spec.title;
+  if (typeof title === "string") return title;
+  if (Array.isArray(title)) return title.join(" ");
+  if (title && typeof title === "object") {
+    return Array.isArray(title.text) ? title.text.join(" ") : String(title.text);
+  }
+  return undefined;
+}
+
 /**
  * Builds the HTML fragment for one chart: static SVG now, live vega-embed view when scripts run.
  * @param spec A Vega-Lite v6 specification with inline data.
@@ -110,6 +126,11 @@ export async function chartHtml(
     });
   }
   const svg = await renderSvg(spec);
+  const width = /^<svg[^>]*\swidth="([\d.]+)"/.exec(svg)?.[1];
+  const height = /^<svg[^>]*\sheight="([\d.]+)"/.exec(svg)?.[1];
+  const size = width && height ? ` width="${width}" height="${height}"` : "";
+  const alt = escapeHtml(options.caption ?? chartTitle(spec) ?? "Chart");
+  const image = `<img${size} alt="${alt}" src="data:image/svg+xml;base64,${Buffer.from(svg, "utf8").toString("base64")}">`;
   const id = newChartId();
   const caption =
     options.caption !== undefined
@@ -118,7 +139,7 @@ export async function chartHtml(
   return (
     (includeRuntime ? vegaRuntimeScript() + "\n" : "") +
     `<figure class="isochor-chart" id="${id}" ${CHART_STATE_ATTRIBUTE}="static" style="margin:0.5em 0">` +
-    `<div class="isochor-chart-static">${svg}</div>` +
+    `<div class="isochor-chart-static">${image}</div>` +
     `<div class="isochor-chart-live" style="display:none"></div>` +
     `<script type="application/json" class="isochor-chart-spec">${jsonForScript(spec)}</script>` +
     `<script>${bootScript(id, runtimeWaitMs)}</script>` +

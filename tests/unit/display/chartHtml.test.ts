@@ -25,9 +25,20 @@ function scriptElements(html: string): string[] {
 }
 
 describe("chartHtml", () => {
-  it("contains the static SVG, the spec as data, one boot script, and the static marker", async () => {
+  it("contains the static SVG (as an image), the spec as data, one boot script, and the static marker", async () => {
     const html = await chartHtml(spec);
-    expect(html).toContain("<svg");
+    // Inline <svg> would be stripped by the classic notebook's sanitizer when untrusted; an image is kept.
+    expect(html).not.toContain("<svg");
+    const image =
+      /<div class="isochor-chart-static"><img width="(\d+)" height="(\d+)" alt="([^"]*)" src="data:image\/svg\+xml;base64,([A-Za-z0-9+/=]+)"><\/div>/.exec(
+        html,
+      );
+    expect(image).not.toBeNull();
+    const svg = Buffer.from(image?.[4] ?? "", "base64").toString("utf8");
+    expect(svg.startsWith("<svg")).toBe(true);
+    expect(svg).toContain(`width="${image?.[1]}"`);
+    expect(svg.match(/aria-roledescription="bar"/g)).toHaveLength(2);
+    expect(image?.[3]).toBe(escapeHtml(hostile)); // alt text: the title, escaped
     expect(html).toContain(`${CHART_STATE_ATTRIBUTE}="static"`);
     // Exactly two script elements: the spec (JSON data, not code) and the boot script.
     expect(scriptElements(html)).toEqual([
