@@ -29,7 +29,7 @@ integration along isotherms, uncertainties. CSV headers: T [unit], rho [unit] (o
 P [unit], optional u(T) [unit], u(rho) [unit] (or u(v)), u(P) [unit]; '#' lines are comments.
 
 options:
-  --component <id>     component (for its molar mass, when densities are mass-based)
+  --component <id>     component: its molar mass (mass-based densities) and critical temperature
   --M <kg/mol>         molar mass, kg/mol (instead of --component)
   --route <r>          auto (default), isochores, or surface
   --isotherms <T,...>  isotherms to report, K (default: the measured temperatures)
@@ -109,7 +109,9 @@ function parseArgs(argv: string[]): Args | { error: string } | "help" {
     if (molarMassKgPerMol !== undefined)
       return { error: "give either --component or --M, not both" };
     try {
-      molarMassKgPerMol = getComponent(component).molarMassKgPerMol;
+      const c = getComponent(component);
+      molarMassKgPerMol = c.molarMassKgPerMol;
+      route.criticalTemperatureK = c.criticalTemperatureK;
     } catch (e) {
       return { error: e instanceof Error ? e.message : String(e) };
     }

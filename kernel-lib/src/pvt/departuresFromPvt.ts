@@ -52,6 +52,18 @@ export interface PvtRouteOptions {
    * Infinity turns the screening off.
    */
   outlierThreshold?: number;
+  /**
+   * Integrate across a density gap where a measured isochore does not cover the isotherm's
+   * temperature. Default false: such a gap is where an isochoric campaign usually meets the
+   * two-phase region (the fluid could not be measured there as one phase), so the isotherm stops
+   * before it, with a refusal that says so.
+   */
+  integrateAcrossGaps?: boolean;
+  /**
+   * Critical temperature of the fluid, K, when known (the CLI takes it from --component): below it,
+   * a warning reminds that a dome between two nodes with no isochore in between cannot be seen.
+   */
+  criticalTemperatureK?: number;
   isochore?: IsochoreFitOptions;
   surface?: FitVirialSurfaceOptions;
   bridge?: BridgeOptions;
@@ -348,6 +360,54 @@ export function departuresFromPvt(
         .map((f, k) => ({ f, k }))
         .filter(({ f }) => t >= f.minTemperatureK - tolT && t <= f.maxTemperatureK + tolT)
         .map(({ k }) => k);
+      // Gap check: an isochore between two nodes that was not measured at this T (its data lie
+      // elsewhere in T) marks a region the campaign could not reach in one phase at T.
+      if (!options.integrateAcrossGaps) {
+        for (let j = 1; j < idx.length; j++) {
+          const lo = (isochoreFits[idx[j - 1] as number] as IsochoreFit).densityMolPerM3;
+          const hi = (isochoreFits[idx[j] as number] as IsochoreFit).densityMolPerM3;
+          const missing = isochoreFits.filter(
+            (f) => f.densityMolPerM3 > lo && f.densityMolPerM3 < hi,
+          );
+          if (missing.length > 0) {
+            const m = missing[0] as IsochoreFit;
+            diagnostics.push({
+              code: "two-phase",
+              severity: "refusal",
+              message:
+                `isotherm ${t.toFixed(2)} K: the isochore at ${m.densityMolPerM3.toPrecision(5)} mol/m3 lies between the nodes ${lo.toPrecision(5)} and ${hi.toPrecision(5)} mol/m3 but was measured only from ${m.minTemperatureK.toFixed(2)} to ${m.maxTemperatureK.toFixed(2)} K, ` +
+                `so at ${t.toFixed(2)} K the fluid there was probably two-phase; departures above ${lo.toPrecision(5)} mol/m3 are not reported at this temperature (the data cannot be integrated through the dome). ` +
+                "Use departuresAroundCriticalPoint for liquid states, or pass integrateAcrossGaps if the gap is only a gap in the campaign",
+            });
+            idx = idx.slice(0, j);
+            break;
+          }
+        }
+      }
+      if (
+        options.criticalTemperatureK !== undefined &&
+        t < options.criticalTemperatureK &&
+        idx.length > 1
+      ) {
+        let gap = 0;
+        let at = 0;
+        for (let j = 1; j < idx.length; j++) {
+          const r =
+            (isochoreFits[idx[j] as number] as IsochoreFit).densityMolPerM3 /
+            (isochoreFits[idx[j - 1] as number] as IsochoreFit).densityMolPerM3;
+          if (r > gap) {
+            gap = r;
+            at = j;
+          }
+        }
+        diagnostics.push({
+          code: "below-critical",
+          severity: "warning",
+          message:
+            `isotherm ${t.toFixed(2)} K is below the critical temperature ${options.criticalTemperatureK} K: the route checks that P rises with density and that no measured isochore is missing at this T, but cannot see a dome between two nodes with nothing measured in between; ` +
+            `make sure the widest density step (${(isochoreFits[idx[at - 1] as number] as IsochoreFit).densityMolPerM3.toPrecision(5)} to ${(isochoreFits[idx[at] as number] as IsochoreFit).densityMolPerM3.toPrecision(5)} mol/m3) does not straddle the saturated densities`,
+        });
+      }
       // Two-phase check: the smoothed pressure must rise with density along the isotherm.
       const Ps = idx.map((k) => (isochoreFits[k] as IsochoreFit).evaluate(t).pressurePa);
       let cut = idx.length;

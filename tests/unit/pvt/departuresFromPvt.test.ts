@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import {
+  pvtFromArrays,
   compareWithModel,
   departuresFromPvt,
   surfaceResidualModel,
@@ -239,5 +240,57 @@ describe("departuresFromPvt: routes, refusals and the model hand-off", () => {
     const cmp = compareWithModel(r, prModel);
     expect(cmp).toHaveLength(90);
     for (const c of cmp) for (const k of KEYS) expect(Math.abs(c.z[k])).toBeLessThan(3);
+  });
+});
+
+describe("departuresFromPvt: an isochoric campaign that meets the dome (no loop in the data)", () => {
+  // Vapour isochores (<= 2 kmol/m3) and liquid ones (>= 21 kmol/m3) measured from 285 K; the ones
+  // in between only from 310 K (above Tc = 304.13 K), as a cell that meets the two-phase region
+  // would. The smoothed P still rises with density at 290 K, so only the gap check can stop the
+  // route from integrating straight across the dome.
+  function domeCampaign() {
+    const T: number[] = [];
+    const D: number[] = [];
+    const dens = [100, 250, 600, 1200, 2000, 4000, 8000, 12000, 17000, 21000, 22000, 23000];
+    for (const d of dens) {
+      for (const t of d <= 2000 || d >= 21000 ? range(285, 400, 24) : range(310, 400, 19)) {
+        T.push(t);
+        D.push(d);
+      }
+    }
+    return pvtFromArrays({
+      temperatureK: T,
+      densityMolPerM3: D,
+      pressurePa: T.map((t, i) => pressurePR(t, D[i]!)),
+    });
+  }
+
+  it("stops the 290 K isotherm at the gap and says why", () => {
+    const r = departuresFromPvt(domeCampaign(), { monteCarloSamples: 0, isothermsK: [290, 350] });
+    const refusal = r.diagnostics.find((d) => d.code === "two-phase");
+    expect(refusal?.severity).toBe("refusal");
+    expect(refusal?.message).toMatch(
+      /isotherm 290.00 K: the isochore at 4000.0 mol\/m3 lies between the nodes 2000.0 and 21000 mol\/m3/,
+    );
+    const at290 = r.isotherms.find((i) => i.temperatureK === 290)!;
+    expect(at290.states.map((s) => s.densityMolPerM3)).toEqual([100, 250, 600, 1200, 2000]);
+    // the vapour part is still right (PR closed form)
+    for (const s of at290.states)
+      expect(Math.abs(s.residual.h - departuresPR(290, s.densityMolPerM3).h)).toBeLessThan(
+        3 * s.uncertainty.h + 0.05,
+      );
+    // the supercritical isotherm keeps every node
+    expect(r.isotherms.find((i) => i.temperatureK === 350)!.states).toHaveLength(12);
+  });
+
+  it("warns below the critical temperature when it is given", () => {
+    const r = departuresFromPvt(domeCampaign(), {
+      monteCarloSamples: 0,
+      isothermsK: [290],
+      criticalTemperatureK: 304.13,
+    });
+    expect(r.diagnostics.some((d) => d.code === "below-critical" && d.severity === "warning")).toBe(
+      true,
+    );
   });
 });
