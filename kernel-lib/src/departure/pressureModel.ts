@@ -155,6 +155,7 @@ function build(
     ): ResidualDerivatives {
       return integrate(T, rho, x, request).derivatives;
     },
+    pressure: (T: number, rho: number, x: readonly number[]) => evaluator.value(T, rho, x),
     maxDensity,
     checkValidity(T: number, rho: number, x: readonly number[]): ResultWarning[] {
       const r =

@@ -79,6 +79,12 @@ export interface ResidualModel {
    */
   densityRoots?(temperatureK: number, pressurePa: number, x: readonly number[]): number[];
   /**
+   * Optional (added by the engine issue, additive): the pressure P(T, rho, x) in Pa alone, for
+   * models where the full residual is expensive (pressure-function models integrate); root searches
+   * use it when present. Must equal rho R T (1 + aD).
+   */
+  pressure?(temperatureK: number, densityMolPerM3: number, x: readonly number[]): number;
+  /**
    * Optional (added by the engine issue, additive): the model's own critical point for a pure fluid
    * (exact for the cubics), or a pseudo-critical estimate for a mixture (a stated mixing rule). The
    * state layer uses it only to label phases ("vapor", "liquid", "supercritical").

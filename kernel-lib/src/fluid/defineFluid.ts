@@ -12,11 +12,12 @@ import type { IdealGasMixture, IdealGasPure, ReferenceState } from "../idealgas/
 import { idealGasFromCorrelation } from "../idealgas/correlationPure.js";
 import { idealGasMixture } from "../idealgas/mixture.js";
 import { idealGasFromMolecule } from "../idealgas/molecular/index.js";
-import type { ResidualModel } from "../eos/types.js";
+import type { PseudoCriticalPoint, ResidualModel } from "../eos/types.js";
+import { R } from "../constants.js";
 import { createModel, type ModelId } from "../eos/createModel.js";
 import { hasPressureFunction } from "../eos/pressureFunction.js";
 import type { InteractionNote } from "../eos/interaction/interactionTable.js";
-import { modelFromPressure } from "../departure/pressureModel.js";
+import { modelFromPressure, type PressureModel } from "../departure/pressureModel.js";
 import type { IntegrationOptions } from "../departure/integrateIsotherm.js";
 import {
   stateAtTP,
@@ -130,11 +131,46 @@ function resolveComponents(spec: FluidSpec): Component[] {
   });
 }
 
+/**
+ * Kay's rule (W. B. Kay, Ind. Eng. Chem. 28 (1936) 1014): mole-fraction averages of Tc, Pc and Vc;
+ * Vc from Zc = 0.29 when the table has none (common practice, no source).
+ */
+function kayPseudoCritical(
+  components: readonly Component[],
+  x: readonly number[],
+): PseudoCriticalPoint {
+  let T = 0;
+  let P = 0;
+  let V = 0;
+  components.forEach((c, i) => {
+    T += x[i] * c.criticalTemperatureK;
+    P += x[i] * c.criticalPressurePa;
+    V +=
+      x[i] *
+      (c.criticalVolumeM3PerMol > 0
+        ? c.criticalVolumeM3PerMol
+        : (0.29 * R * c.criticalTemperatureK) / c.criticalPressurePa);
+  });
+  return {
+    temperatureK: T,
+    pressurePa: P,
+    densityMolPerM3: 1 / V,
+    rule: "Kay's rule on the component table",
+  };
+}
+
 function bindMethods(model: ResidualModel): ResidualModel {
   // class-based models use `this`; copy their methods bound so spreading keeps them working
   const m = model as unknown as Record<string, unknown>;
   const out: Record<string, unknown> = {};
-  for (const key of ["residual", "maxDensity", "densityRoots", "pseudoCritical", "checkValidity"]) {
+  for (const key of [
+    "residual",
+    "maxDensity",
+    "densityRoots",
+    "pseudoCritical",
+    "checkValidity",
+    "pressure",
+  ]) {
     const f = m[key];
     if (typeof f === "function") out[key] = (f as (...a: unknown[]) => unknown).bind(model);
   }
@@ -162,8 +198,12 @@ export function defineFluid(spec: FluidSpec): Fluid {
           volumeTranslation: spec.volumeTranslation,
         })
       : modelSpec;
-  const departureMethod: DepartureMethod = spec.departure ?? "closed-form";
-  if (departureMethod === "numeric") {
+  // a model built from a pressure function is numeric by nature
+  const isPressureModel = typeof (model as Partial<PressureModel>).integrate === "function";
+  const departureMethod: DepartureMethod = isPressureModel
+    ? "numeric"
+    : (spec.departure ?? "closed-form");
+  if (departureMethod === "numeric" && !isPressureModel) {
     if (!hasPressureFunction(model)) {
       throw new InputError({
         input: "departure",
@@ -192,6 +232,17 @@ export function defineFluid(spec: FluidSpec): Fluid {
         ...(bound.checkValidity ? bound.checkValidity(T, rho, x) : []),
         ...numeric.checkValidity!(T, rho, x),
       ],
+    };
+  }
+  if (!model.pseudoCritical) {
+    // phase labels need a (pseudo-)critical point: Kay's rule on the table constants
+    const labelled = bindMethods(model);
+    model = {
+      ...model,
+      ...labelled,
+      info: model.info,
+      gasConstant: model.gasConstant,
+      pseudoCritical: (x) => kayPseudoCritical(components, x),
     };
   }
   if (model.info.componentIds.length !== components.length) {

@@ -38,9 +38,12 @@ export function findDensityRoots(
   const upper = Number.isFinite(maxDensity)
     ? maxDensity * (1 - 1e-9)
     : (options.searchLimitMolPerM3 ?? 1e6);
+  const pressureOf = model.pressure
+    ? (rho: number) => model.pressure!(T, rho, x)
+    : (rho: number) => rho * RT * (1 + model.residual(T, rho, x).aD);
   const f = (rho: number): number => {
     try {
-      return rho * RT * (1 + model.residual(T, rho, x).aD) - pressurePa;
+      return pressureOf(rho) - pressurePa;
     } catch {
       return NaN;
     }

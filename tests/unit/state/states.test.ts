@@ -237,3 +237,39 @@ describe("bad input is refused with typed errors", () => {
     expect(note!.source).toMatch(/from memory/);
   });
 });
+
+describe("states of a user pressure-function model (numerical root search)", () => {
+  it("finds all three roots, picks the stable one, and matches the closed-form fluid", async () => {
+    const { modelFromPressure } =
+      await import("../../../kernel-lib/src/departure/pressureModel.js");
+    const closed = defineFluid({ components: ["propane"], model: "peng-robinson" });
+    const pr = createModel("peng-robinson", comps("propane"));
+    const user = defineFluid({
+      components: ["propane"],
+      model: modelFromPressure({
+        name: "PR typed by hand",
+        components: ["propane"],
+        pressure: pr.pressureFunction,
+        maxDensity: (T, x) => pr.maxDensity(T, x),
+      }),
+    });
+    const rootsUser = user.densityRoots(300, 5e5);
+    const rootsClosed = closed.densityRoots(300, 5e5);
+    expect(rootsUser.length).toBe(3);
+    rootsUser.forEach((r, i) =>
+      expect(r.densityMolPerM3 / rootsClosed[i].densityMolPerM3).toBeCloseTo(1, 10),
+    );
+    for (const [T, P] of [
+      [300, 5e5],
+      [300, 30e5],
+      [400, 60e5],
+    ]) {
+      const a = closed.stateAtTP(T, P);
+      const b = user.stateAtTP(T, P);
+      expect(b.departureMethod).toBe("numeric");
+      expect(b.phase).toBe(a.phase);
+      expect(Math.abs(b.molar.h - a.molar.h)).toBeLessThan(1e-6 * R * T);
+      expect(Math.abs(b.molar.s - a.molar.s)).toBeLessThan(1e-8 * R * 10);
+    }
+  });
+});
