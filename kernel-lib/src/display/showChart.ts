@@ -33,19 +33,26 @@ interface TslabDisplay {
  */
 export async function showChart(spec: VegaLiteSpec, options: ShowChartOptions = {}): Promise<void> {
   const session = displaySession();
-  const includeRuntime = options.includeRuntime ?? !session.runtimeSent;
-  const html = await chartHtml(spec, { includeRuntime, caption: options.caption });
-  // eslint-disable-next-line @typescript-eslint/no-require-imports
-  const tslab = require("tslab") as TslabDisplay;
-  try {
-    tslab.display.html(html);
-  } catch (error) {
-    throw new Error(
-      "showChart displays in a tslab notebook cell (or under `isochor run`); outside one, use " +
-        "chartHtml() for HTML or savePng() for an image. tslab said: " +
-        (error instanceof Error ? error.message : String(error)),
-      { cause: error },
-    );
-  }
+  const wasSent = session.runtimeSent;
+  const includeRuntime = options.includeRuntime ?? !wasSent;
+  // Claimed before the await, so two charts started together do not both carry the runtime.
   if (includeRuntime) session.runtimeSent = true;
+  try {
+    const html = await chartHtml(spec, { includeRuntime, caption: options.caption });
+    // eslint-disable-next-line @typescript-eslint/no-require-imports
+    const tslab = require("tslab") as TslabDisplay;
+    try {
+      tslab.display.html(html);
+    } catch (error) {
+      throw new Error(
+        "showChart displays in a tslab notebook cell (or under `isochor run`); outside one, use " +
+          "chartHtml() for HTML or savePng() for an image. tslab said: " +
+          (error instanceof Error ? error.message : String(error)),
+        { cause: error },
+      );
+    }
+  } catch (error) {
+    session.runtimeSent = wasSent;
+    throw error;
+  }
 }
