@@ -24,7 +24,13 @@
  * Enthalpy of vaporisation from alpha_r only (the ideal-gas part cancels at equal T):
  *   h_vap = R T [(aD - aT)_V - (aD - aT)_L],   s_vap = h_vap / T.
  */
-import { InputError, PhaseUnavailableError, SolverError, type ResultWarning } from "../errors.js";
+import {
+  InputError,
+  OutOfRangeError,
+  PhaseUnavailableError,
+  SolverError,
+  type ResultWarning,
+} from "../errors.js";
 import type { ResidualModel } from "../eos/types.js";
 import { findRootBrent } from "../numerics/brent.js";
 import { requirePositive } from "../validate.js";
@@ -51,6 +57,11 @@ export interface SaturationOptions {
   maxIterations?: number;
   /** Starting densities (mol/m3); default from ancillaries or spinodals. */
   start?: { liquidDensityMolPerM3: number; vaporDensityMolPerM3: number };
+  /**
+   * For models that publish a validity range (reference fluids): solve even at temperatures
+   * beyond the equation's extrapolation range instead of refusing. Default false.
+   */
+  allowOutsideRange?: boolean;
 }
 
 /** A saturation state. */
@@ -379,6 +390,23 @@ export function saturationAtTemperature(
     throw new PhaseUnavailableError(
       `no saturation state at T = ${T} K: at or above the critical temperature ${critical.temperatureK} K of ${model.info.name} (located from its own equations); above it the fluid is one phase at every pressure`,
     );
+  }
+  const ranged = model as ResidualModel & {
+    validityStatus?: (temperatureK: number, pressurePa: number) => string;
+    validityDescription?: string;
+  };
+  if (
+    !options.allowOutsideRange &&
+    typeof ranged.validityStatus === "function" &&
+    ranged.validityStatus(T, 0) === "outside"
+  ) {
+    throw new OutOfRangeError({
+      input: "temperatureK",
+      unit: "K",
+      validRange: ranged.validityDescription ?? "the model's validity range",
+      received: T,
+      hint: "pass { allowOutsideRange: true } to solve the equation there anyway",
+    });
   }
   const Rg = gasConstantOf(model);
   const L = emptyIsothermPoint();

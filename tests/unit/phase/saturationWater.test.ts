@@ -14,7 +14,7 @@ import {
   saturationAtTemperature,
 } from "../../../kernel-lib/src/phase/saturation.js";
 import { equalAreaIsotherm } from "../../../kernel-lib/src/phase/equalAreaIsotherm.js";
-import { PhaseUnavailableError } from "../../../kernel-lib/src/errors.js";
+import { OutOfRangeError, PhaseUnavailableError } from "../../../kernel-lib/src/errors.js";
 
 const water = referenceFluid("water");
 const M = 0.018015268; // kg/mol (IAPWS R6-95(2018))
@@ -138,5 +138,18 @@ describe("IAPWS-95 saturation: robustness", () => {
     expect(() => saturationAtTemperature(water, 647.096)).toThrow(PhaseUnavailableError);
     expect(() => saturationAtTemperature(water, 700)).toThrow(/critical temperature/);
     expect(() => saturationAtPressure(water, 22.1e6)).toThrow(PhaseUnavailableError);
+  });
+});
+
+describe("IAPWS-95 saturation: validity range", () => {
+  it("warns below the triple point, refuses below the extrapolation range unless asked", () => {
+    // 260 K: supercooled liquid, inside this library's extrapolation range (200 K) for IAPWS-95.
+    const cold = saturationAtTemperature(water, 260);
+    expect(cold.warnings.some((w) => /triple point/.test(w.message))).toBe(true);
+    expect(cold.warnings.some((w) => w.code === "outside-validity")).toBe(true);
+    expect(() => saturationAtTemperature(water, 150)).toThrow(OutOfRangeError);
+    expect(() => saturationAtTemperature(water, 150)).toThrow(/allowOutsideRange/);
+    const inside = saturationAtTemperature(water, 400);
+    expect(inside.warnings).toEqual([]);
   });
 });
