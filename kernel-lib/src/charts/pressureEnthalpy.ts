@@ -9,6 +9,7 @@ import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
 import { criticalLayers, domeLayers, qualityLayers } from "./domeLayers.js";
 import { energyBasis } from "./energyBasis.js";
+import { INK } from "./theme.js";
 import {
   checkCritical,
   checkSaturation,
@@ -143,7 +144,7 @@ export function pressureEnthalpyChart(
   );
   layers.push(
     ...guideLineLayers(isentropeRows, xAxis, yAxis, {
-      color: "#3f7f74",
+      color: INK.isentrope,
       strokeDash: [6, 2, 1, 2],
       tooltipTitle: `Isentrope (${entropyUnit.symbol})`,
     }),

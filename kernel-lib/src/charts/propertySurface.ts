@@ -132,7 +132,8 @@ export function propertySurfaceChart(
     if (skipped > 0) warnings.add(`${skipped} grid cell(s) without a finite value are left blank.`);
     layers.push({
       data: { values: cells },
-      mark: { type: "rect", strokeWidth: 0 },
+      // A hairline stroke in the cell's own colour hides the anti-aliasing seams between cells.
+      mark: { type: "rect", strokeWidth: 0.6 },
       encoding: {
         x: positionEncoding("x", xAxis),
         x2: { field: "x2" },
@@ -144,12 +145,26 @@ export function propertySurfaceChart(
           title: vAxis.title,
           scale: { scheme: HEATMAP_SCHEME },
         },
+        stroke: {
+          field: "value",
+          type: "quantitative",
+          scale: { scheme: HEATMAP_SCHEME },
+          legend: null,
+        },
         tooltip: [{ field: "value", type: "quantitative", title: vAxis.title, format: ".5~g" }],
       },
     });
   }
 
-  const isolines = gridIsolines({ xs: ts, ys: ps, values }, levelsSI, { logY: logP });
+  const isolines = gridIsolines({ xs: ts, ys: ps, values }, levelsSI, { logY: logP }).map(
+    (iso) => ({
+      level: iso.level,
+      lines:
+        saturation.length >= 2
+          ? iso.lines.flatMap((l) => cutAtJump(l, saturation, ts, ps))
+          : iso.lines,
+    }),
+  );
   const lineRows: Record<string, unknown>[] = [];
   const labelRows: Record<string, unknown>[] = [];
   isolines.forEach((iso, k) => {
@@ -212,12 +227,16 @@ export function propertySurfaceChart(
       },
     });
   }
-  if (saturation.length >= 2) {
+  // The vapour-pressure curve, within the grid's temperature range.
+  const inGrid = saturation.filter(
+    (r) => r.temperatureK >= ts[0] && r.temperatureK <= ts[ts.length - 1],
+  );
+  if (inGrid.length >= 2) {
     const rows = curveRows(
       [
         {
           label: "vapour pressure",
-          points: saturation.map((r) => ({ x: r.temperatureK, y: r.pressurePa })),
+          points: inGrid.map((r) => ({ x: r.temperatureK, y: r.pressurePa })),
         },
       ],
       xAxis,
@@ -305,4 +324,52 @@ function chooseLevels(
       .map((t) => fromDisplay(t, axis.unit));
   }
   return checkArray("levels", levels).map((v, i) => requireFinite(`levels[${i}]`, v, "SI"));
+}
+
+/**
+ * A property jumps across the vapour-pressure curve (liquid on one side, vapour on the other), and
+ * marching squares then lays every level between the two values along the curve, cell by cell.
+ * Those stretches say nothing: the parts of an isoline within one grid cell of the curve are cut.
+ */
+function cutAtJump(
+  line: readonly { x: number; y: number }[],
+  saturation: readonly ChartSaturationRow[],
+  ts: readonly number[],
+  ps: readonly number[],
+): { x: number; y: number }[][] {
+  const sat = saturation.map((r) => ({ t: r.temperatureK, lnp: Math.log(r.pressurePa) }));
+  const dT = (ts[ts.length - 1] - ts[0]) / (ts.length - 1);
+  const dLnP = (Math.log(ps[ps.length - 1]) - Math.log(ps[0])) / (ps.length - 1);
+  const lnPsat = (t: number): number | undefined => {
+    if (t < sat[0].t || t > sat[sat.length - 1].t) return undefined;
+    let k = 1;
+    while (k < sat.length - 1 && sat[k].t < t) k++;
+    const f = (t - sat[k - 1].t) / (sat[k].t - sat[k - 1].t);
+    return sat[k - 1].lnp + f * (sat[k].lnp - sat[k - 1].lnp);
+  };
+  const tSat = (lnp: number): number | undefined => {
+    if (lnp < sat[0].lnp || lnp > sat[sat.length - 1].lnp) return undefined;
+    let k = 1;
+    while (k < sat.length - 1 && sat[k].lnp < lnp) k++;
+    const f = (lnp - sat[k - 1].lnp) / (sat[k].lnp - sat[k - 1].lnp);
+    return sat[k - 1].t + f * (sat[k].t - sat[k - 1].t);
+  };
+  const near = (p: { x: number; y: number }) => {
+    const lnp = Math.log(p.y);
+    const a = lnPsat(p.x);
+    const b = tSat(lnp);
+    return (
+      (a !== undefined && Math.abs(lnp - a) < dLnP) || (b !== undefined && Math.abs(p.x - b) < dT)
+    );
+  };
+  const out: { x: number; y: number }[][] = [];
+  let current: { x: number; y: number }[] = [];
+  for (const p of line) {
+    if (near(p)) {
+      if (current.length >= 2) out.push(current);
+      current = [];
+    } else current.push(p);
+  }
+  if (current.length >= 2) out.push(current);
+  return out;
 }

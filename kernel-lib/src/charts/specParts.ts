@@ -293,9 +293,17 @@ export function guideLineLayers(
   style: { color: string; strokeDash: number[]; strokeWidth?: number; tooltipTitle: string },
 ): Record<string, unknown>[] {
   if (rows.length === 0) return [];
-  const last = new Map<string, LineRow>();
-  for (const r of rows) last.set(r.series, r);
-  const labels = [...last.values()].map((r) => ({ x: r.x, y: r.y, label: r.series }));
+  // Label each line at three quarters of its drawn length (the ends are often clipped).
+  const bySeries = new Map<string, LineRow[]>();
+  for (const r of rows) {
+    const list = bySeries.get(r.series) ?? [];
+    list.push(r);
+    bySeries.set(r.series, list);
+  }
+  const labels = [...bySeries.values()].map((list) => {
+    const r = list[Math.floor(0.75 * (list.length - 1))];
+    return { x: r.x, y: r.y, label: r.series };
+  });
   return [
     {
       data: { values: rows },

@@ -45,6 +45,8 @@ export const INK = {
   critical: "#b0302a",
   /** Quality lines and other guides. */
   guide: "#8a857b",
+  /** Isentropes on a P-h diagram. */
+  isentrope: "#8c6d46",
   /** Process paths drawn over a diagram. */
   path: "#b0302a",
   /** Background of the plot. */
@@ -102,6 +104,8 @@ export function themeConfig(): Record<string, unknown> {
       symbolStrokeWidth: 2,
       symbolSize: 260,
       symbolType: "stroke",
+      titleLimit: 260,
+      labelLimit: 220,
     },
     line: { strokeWidth: 1.6, strokeCap: "round" },
     point: { filled: true, size: 36 },

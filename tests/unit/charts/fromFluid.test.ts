@@ -1,4 +1,3 @@
-/* eslint-disable @typescript-eslint/no-explicit-any -- the tests read into plain JSON specs */
 import { beforeAll, describe, expect, it } from "vitest";
 import { defineFluid, type Fluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
@@ -113,6 +112,14 @@ describe("charts from a Peng-Robinson ethane fluid", () => {
       onProgress: () => calls++,
     });
     expect(calls).toBe(24);
+    // Below Tc the jump from vapour to liquid is drawn at the vapour pressure: two points there.
+    const psat = saturationAtTemperature(fluid.model, 250).pressurePa;
+    const atSat = dep[0].points.filter((p) => p.pressurePa === psat);
+    expect(atSat.length).toBe(2);
+    expect(atSat[1].h! - atSat[0].h!).toBeCloseTo(
+      -saturationAtTemperature(fluid.model, 250).enthalpyOfVaporizationJPerMol,
+      3,
+    );
     // Residual enthalpy of a real gas is negative at moderate pressure (attractive forces).
     expect(dep[1].points[5].h!).toBeLessThan(0);
     expect(schemaErrors(departureChart(dep, { property: ["h", "s"] }))).toEqual([]);

@@ -4,9 +4,10 @@
  * (`residual`) or at the same T and density (`residualTV`).
  */
 import { requirePositive } from "../../validate.js";
-import { stateAtTP } from "../../state/stateAt.js";
-import type { FluidBinding } from "../../state/types.js";
-import type { DepartureCurve } from "../departures.js";
+import { saturationAtTemperature } from "../../phase/saturation.js";
+import { stateAtTP, stateAtTRho } from "../../state/stateAt.js";
+import type { FluidBinding, FluidState } from "../../state/types.js";
+import type { DepartureCurve, DeparturePoint } from "../departures.js";
 import { tryPoint, type SampleProgress } from "./sampleGuard.js";
 
 /** Options of {@link departuresFromFluid}. */
@@ -35,13 +36,10 @@ export function departuresFromFluid(
   pressuresPa.forEach((p, j) => requirePositive(`pressuresPa[${j}]`, p, "Pa"));
   return temperaturesK.map((T, i) => {
     requirePositive(`temperaturesK[${i}]`, T, "K");
-    const points = pressuresPa.map((P) => {
-      const s = tryPoint(() => stateAtTP(fluid, T, P, x));
-      options.onProgress?.(++done, total);
-      if (!s) return { pressurePa: P, h: NaN, s: NaN, u: NaN, a: NaN, g: NaN };
+    const pick = (s: FluidState): DeparturePoint => {
       const r = options.convention === "TV" ? s.residualTV : s.residual;
       return {
-        pressurePa: P,
+        pressurePa: s.pressurePa,
         densityMolPerM3: s.densityMolPerM3,
         h: r.h,
         s: r.s,
@@ -49,7 +47,30 @@ export function departuresFromFluid(
         a: r.a,
         g: r.g,
       };
+    };
+    const points: DeparturePoint[] = pressuresPa.map((P) => {
+      const s = tryPoint(() => stateAtTP(fluid, T, P, x));
+      options.onProgress?.(++done, total);
+      if (!s) return { pressurePa: P, h: NaN, s: NaN, u: NaN, a: NaN, g: NaN };
+      return pick(s);
     });
+    // A pure fluid below Tc jumps from vapour to liquid at the vapour pressure: add both
+    // saturated states there so the jump is drawn vertical, at the right pressure.
+    if (x.length === 1) {
+      const sat = tryPoint(() => saturationAtTemperature(fluid.model, T));
+      const lo = Math.min(...pressuresPa);
+      const hi = Math.max(...pressuresPa);
+      if (sat && sat.pressurePa > lo && sat.pressurePa < hi) {
+        const vapor = pick(stateAtTRho(fluid, T, sat.vaporDensityMolPerM3, x));
+        const liquid = pick(stateAtTRho(fluid, T, sat.liquidDensityMolPerM3, x));
+        // Both at the saturation pressure (a stable sort keeps vapour before liquid).
+        points.push(
+          { ...vapor, pressurePa: sat.pressurePa },
+          { ...liquid, pressurePa: sat.pressurePa },
+        );
+        points.sort((a, b) => (a.pressurePa as number) - (b.pressurePa as number));
+      }
+    }
     return { temperatureK: T, points };
   });
 }
