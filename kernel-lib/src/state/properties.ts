@@ -14,7 +14,10 @@
  *   isentropic exponent k = (cp/cv) (rho / P) (dP/drho)
  *   ln phi_i = d(n alpha_r)/dn_i - ln Z
  * Absolute values add the ideal gas at the same T and DENSITY (ideal-gas pressure rho R T, mixing
- * included) plus the "TV" residuals; this equals ideal gas at (T, P) plus the "TP" residuals, and it
+ * included) plus the "TV" residuals. The ideal gas may be supplied at any pressure P_ig (so one
+ * evaluation serves a whole isotherm); it is moved to rho R T by its only pressure dependence,
+ * s -= R ln(rho R T / P_ig), a and g += R T ln(rho R T / P_ig) (h, u, cp, cv do not depend on P).
+ * The sum this equals ideal gas at (T, P) plus the "TP" residuals, and it
  * stays defined where P <= 0 (a stretched liquid) or Z <= 0, where ln Z does not exist. There the
  * TP residuals and ln phi are NaN and a warning says why.
  */
@@ -32,7 +35,7 @@ export interface StateInputs {
   readonly x: readonly number[];
   /** Residual derivatives at (T, rho, x), with dnA. */
   readonly residual: ResidualDerivatives;
-  /** Ideal-gas mixture properties at (T, rho R T, x): the ideal gas at the same T and density. */
+  /** Ideal-gas mixture properties at (T, any pressure, x); moved to rho R T here (see the header). */
   readonly ideal: IdealGasProperties;
   /** Mixture molar mass, kg/mol. */
   readonly molarMassKgPerMol: number;
@@ -155,11 +158,12 @@ export function assembleState(input: StateInputs): FluidState {
     });
   }
   // absolute: ideal gas at the same T and density plus the TV residuals
+  const lnPressureShift = Math.log((rho * RT) / ig.pressurePa);
   const h = ig.h + hRes;
-  const s = ig.s + sTV;
+  const s = ig.s - Rg * lnPressureShift + sTV;
   const u = ig.u + uRes;
-  const a = ig.a + aTV;
-  const g = ig.g + gTV;
+  const a = ig.a + RT * lnPressureShift + aTV;
+  const g = ig.g + RT * lnPressureShift + gTV;
   const lnPhi = res.lnPhi;
   for (const wg of ig.warnings) warnings.push(wg);
   return {

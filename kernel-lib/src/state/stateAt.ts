@@ -8,6 +8,7 @@
 import { R as R_CODATA } from "../constants.js";
 import { OutOfRangeError, PhaseUnavailableError } from "../errors.js";
 import type { ResidualDerivatives } from "../eos/types.js";
+import type { IdealGasProperties } from "../idealgas/types.js";
 import { assembleState, dPdRho, residualGibbsTP } from "./properties.js";
 import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
 import { findDensityRoots, type DensityRootOptions } from "./findDensityRoots.js";
@@ -38,6 +39,26 @@ function mixtureMolarMass(binding: FluidBinding, x: readonly number[]): number {
   return m;
 }
 
+/** Pressure at which the ideal-gas part is evaluated (moved to rho R T in properties.ts), Pa. */
+const IDEAL_GAS_PRESSURE_PA = 1e5;
+
+// last ideal-gas evaluation per binding: states along an isotherm (surfaces, flash iterations,
+// root comparisons) reuse it; a binding is immutable, so the cache is keyed by (T, x) only
+const idealCache = new WeakMap<
+  FluidBinding,
+  { T: number; x: number[]; value: IdealGasProperties }
+>();
+
+function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): IdealGasProperties {
+  const hit = idealCache.get(binding);
+  if (hit && hit.T === T && hit.x.length === x.length && hit.x.every((v, i) => v === x[i])) {
+    return hit.value;
+  }
+  const value = binding.idealGas.at(T, IDEAL_GAS_PRESSURE_PA, x);
+  idealCache.set(binding, { T, x: x.slice(), value });
+  return value;
+}
+
 function finish(
   binding: FluidBinding,
   T: number,
@@ -51,8 +72,7 @@ function finish(
   }[],
 ): FluidState {
   const model = binding.model;
-  const Rg = model.gasConstant ?? R_CODATA;
-  const ideal = binding.idealGas.at(T, rho * Rg * T, x);
+  const ideal = idealGasAt(binding, T, x);
   const warnings = model.checkValidity
     ? model.checkValidity(T, rho, x).concat(extraWarnings)
     : extraWarnings;

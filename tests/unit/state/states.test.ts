@@ -65,6 +65,19 @@ describe("roots and phases (pure propane, Peng-Robinson)", () => {
     expect(Math.abs(s.residual.h)).toBeLessThan(0.01);
     expect(Math.abs(s.lnPhi[0])).toBeLessThan(1e-5);
   });
+  it("absolute = ideal gas at the same T and P + departure at the same T and P (h, s, g)", () => {
+    for (const [T, P] of [
+      [300, 5e5],
+      [300, 30e5],
+      [420, 60e5],
+    ]) {
+      const s = propane.stateAtTP(T, P);
+      const ig = propane.idealGas.at(T, P, [1]);
+      expect(s.molar.h).toBeCloseTo(ig.h + s.residual.h, 7);
+      expect(s.molar.s).toBeCloseTo(ig.s + s.residual.s, 9);
+      expect(s.molar.g).toBeCloseTo(ig.g + s.residual.g, 7);
+    }
+  });
   it("carries model, reference state, mass properties and warnings", () => {
     const s = propane.stateAtTP(350, 10e5);
     expect(s.model.id).toBe("peng-robinson");
