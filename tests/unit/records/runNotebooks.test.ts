@@ -138,15 +138,26 @@ describe("runNotebooks on a good notebook (one run shared by the tests below)", 
     expect(html).toContain("Raw &lt;b&gt;HTML&lt;/b&gt; stays text.");
     expect(html).toContain(`Node ${process.version}`);
     expect(html).toContain("tslab 1.0.22");
-    let commit = "unknown";
+    // Other commits may land while the suite runs: check the recorded commit exists in this
+    // checkout's history (git cat-file), rather than comparing with HEAD now.
+    const metadata = executed.metadata as { isochor: { run: { gitCommit: string } } };
+    const commit = metadata.isochor.run.gitCommit;
+    let insideGit = true;
     try {
-      commit = execFileSync("git", ["rev-parse", "HEAD"], { cwd: fixtures, encoding: "utf8" })
-        .trim()
-        .slice(0, 12);
+      execFileSync("git", ["rev-parse", "--git-dir"], { cwd: fixtures, stdio: "ignore" });
     } catch {
-      // not a git checkout: the record says "unknown"
+      insideGit = false;
     }
-    expect(html).toContain(commit);
+    if (insideGit) {
+      expect(commit).toMatch(/^[0-9a-f]{40}$/);
+      expect(() =>
+        execFileSync("git", ["cat-file", "-e", `${commit}^{commit}`], { cwd: fixtures }),
+      ).not.toThrow();
+      expect(html).toContain(`commit <code>${commit.slice(0, 12)}</code>`);
+    } else {
+      expect(commit).toBe("unknown");
+      expect(html).toContain("unknown (not a git checkout)");
+    }
     expect(html).toContain(
       "console.log(&quot;sum of pressures/Pa&quot;, pressuresPa.reduce((a, b) =&gt; a + b, 0));",
     );
