@@ -1,5 +1,6 @@
 /** Every benchmark case, in print order. Other areas add their case lists here. */
 import type { BenchCase } from "../harness.js";
 import { engineCases } from "./engineCases.js";
+import { referenceCases } from "./referenceCases.js";
 
-export const allCases: BenchCase[] = [...engineCases];
+export const allCases: BenchCase[] = [...engineCases, ...referenceCases];

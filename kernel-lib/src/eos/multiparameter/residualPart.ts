@@ -114,6 +114,10 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
   const pd = new Int32Array(np);
   const pt = new Float64Array(np);
   const ptInt = new Int32Array(np); // integer tau exponent or -1 when non-integer/negative
+  // Exponents that are multiples of 1/8 (all published ones here): tau^t = tau^floor(t) *
+  // (tau^(1/8))^(8 frac(t)), with tau^(1/8) from three square roots, instead of exp(t ln tau).
+  const ptFloor = new Int32Array(np);
+  const ptEighths = new Int32Array(np); // 0..7, or -1 when t is not a multiple of 1/8
   const pl = new Int32Array(np);
   const pg = new Float64Array(np);
   let maxD = 1;
@@ -135,6 +139,15 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
     pd[i] = term.d;
     pt[i] = term.t;
     ptInt[i] = Number.isInteger(term.t) && term.t >= 0 && term.t <= MAX_INT_POWER ? term.t : -1;
+    const eighths = term.t * 8;
+    const fl = Math.floor(term.t);
+    if (ptInt[i] < 0 && Number.isInteger(eighths) && Math.abs(fl) <= MAX_INT_POWER) {
+      ptFloor[i] = fl;
+      ptEighths[i] = eighths - 8 * fl;
+      maxT = Math.max(maxT, Math.abs(fl));
+    } else {
+      ptEighths[i] = -1;
+    }
     pl[i] = term.l;
     pg[i] = term.g ?? 1;
     maxD = Math.max(maxD, term.d);
@@ -156,6 +169,7 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
   const nonAnalytic = data.nonAnalytic.map((x) => ({ ...x }));
   const dPow = new Float64Array(Math.max(maxD, maxL) + 1);
   const tPow = new Float64Array(maxT + 1);
+  const q8 = new Float64Array(8);
   const expCache = new Float64Array(maxL + 1);
   const expG = new Float64Array(maxL + 1); // g of the cached exp, to share exp() only for equal g
   const scratch = emptyReducedHelmholtz();
@@ -179,10 +193,18 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
     for (let k = 1; k < tPow.length; k++) tPow[k] = tPow[k - 1] * tau;
     for (let k = 0; k < expCache.length; k++) expG[k] = NaN;
     const lnTau = Math.log(tau);
+    q8[0] = 1;
+    q8[1] = Math.sqrt(Math.sqrt(Math.sqrt(tau)));
+    for (let k = 2; k < 8; k++) q8[k] = q8[k - 1] * q8[1];
 
     for (let i = 0; i < np; i++) {
       const ti = pt[i];
-      const tauT = ptInt[i] >= 0 ? tPow[ptInt[i]] : Math.exp(ti * lnTau);
+      let tauT: number;
+      if (ptInt[i] >= 0) tauT = tPow[ptInt[i]];
+      else if (ptEighths[i] >= 0) {
+        const fl = ptFloor[i];
+        tauT = (fl >= 0 ? tPow[fl] : 1 / tPow[-fl]) * q8[ptEighths[i]];
+      } else tauT = Math.exp(ti * lnTau);
       const l = pl[i];
       const di = pd[i];
       let base = pn[i] * dPow[di] * tauT;
@@ -279,10 +301,91 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
   };
 }
 
+/** Geometry shared by non-analytic terms with equal (a, beta, A, B) at one (tau, delta). */
+interface NonAnalyticGeometry {
+  a: number;
+  beta: number;
+  A: number;
+  B: number;
+  tau: number;
+  delta: number;
+  dm1: number;
+  s: number;
+  tm1: number;
+  p1: number;
+  theta: number;
+  Delta: number;
+  DeltaD: number;
+  DeltaDD: number;
+  inv2b: number;
+}
+
+const geometry: NonAnalyticGeometry = {
+  a: NaN,
+  beta: NaN,
+  A: NaN,
+  B: NaN,
+  tau: NaN,
+  delta: NaN,
+  dm1: 0,
+  s: 0,
+  tm1: 0,
+  p1: 0,
+  theta: 0,
+  Delta: 0,
+  DeltaD: 0,
+  DeltaDD: 0,
+  inv2b: 0,
+};
+
+function updateGeometry(c: NonAnalyticTermData, tau: number, delta: number): NonAnalyticGeometry {
+  const g = geometry;
+  if (
+    g.tau === tau &&
+    g.delta === delta &&
+    g.a === c.a &&
+    g.beta === c.beta &&
+    g.A === c.A &&
+    g.B === c.B
+  ) {
+    return g;
+  }
+  const dm1 = delta - 1;
+  const s = dm1 * dm1;
+  const tm1 = tau - 1;
+  const inv2b = 1 / (2 * c.beta);
+  // s^(1/(2 beta) - 1) and s^(a - 1): both exponents positive for the published terms.
+  const p1 = s === 0 ? 0 : Math.pow(s, inv2b - 1);
+  const pa1 = s === 0 ? 0 : Math.pow(s, c.a - 1);
+  const theta = -tm1 + c.A * s * p1;
+  const E = ((c.A * theta * 2) / c.beta) * p1 + 2 * c.B * c.a * pa1; // Delta_d / (delta - 1)
+  g.a = c.a;
+  g.beta = c.beta;
+  g.A = c.A;
+  g.B = c.B;
+  g.tau = tau;
+  g.delta = delta;
+  g.dm1 = dm1;
+  g.s = s;
+  g.tm1 = tm1;
+  g.p1 = p1;
+  g.inv2b = inv2b;
+  g.theta = theta;
+  g.Delta = theta * theta + c.B * s * pa1;
+  g.DeltaD = dm1 * E;
+  g.DeltaDD =
+    E +
+    4 * c.B * c.a * (c.a - 1) * pa1 +
+    2 * (c.A / c.beta) * (c.A / c.beta) * s * p1 * p1 +
+    ((c.A * theta * 4) / c.beta) * (inv2b - 1) * p1;
+  return g;
+}
+
 /**
  * One non-analytic term and its derivatives, written as in IAPWS R6-95(2018) Table 5, with the
  * factor (delta - 1) cancelled analytically so that delta = 1 is not a 0/0. At exactly
  * tau = delta = 1 (Delta = 0) the derivatives are singular; delta is then moved by 1e-12.
+ * Terms that share (a, beta, A, B) share theta and Delta (computed once per state).
  * Writes reduced derivatives (fDDD left 0).
  */
 function nonAnalyticTerm(
@@ -293,28 +396,14 @@ function nonAnalyticTerm(
 ): void {
   let delta = deltaIn;
   if (delta === 1 && tau === 1) delta = 1 + 1e-12;
-  const dm1 = delta - 1;
-  const s = dm1 * dm1;
-  const tm1 = tau - 1;
-  const inv2b = 1 / (2 * c.beta);
-  // s^(1/(2 beta) - 1) and s^(a - 1): both exponents positive for the published terms.
-  const p1 = s === 0 ? 0 : Math.pow(s, inv2b - 1);
-  const pa1 = s === 0 ? 0 : Math.pow(s, c.a - 1);
-  const theta = -tm1 + c.A * s * p1;
-  const Delta = theta * theta + c.B * s * pa1;
+  const g = updateGeometry(c, tau, delta);
+  const { dm1, s, tm1, p1, theta, Delta, DeltaD, DeltaDD } = g;
   const psi = Math.exp(-c.C * s - c.D * tm1 * tm1);
   const psiD = -2 * c.C * dm1 * psi;
   const psiDD = (2 * c.C * s - 1) * 2 * c.C * psi;
   const psiT = -2 * c.D * tm1 * psi;
   const psiTT = (2 * c.D * tm1 * tm1 - 1) * 2 * c.D * psi;
   const psiDT = 4 * c.C * c.D * dm1 * tm1 * psi;
-  const E = ((c.A * theta * 2) / c.beta) * p1 + 2 * c.B * c.a * pa1; // Delta_d / (delta - 1)
-  const DeltaD = dm1 * E;
-  const DeltaDD =
-    E +
-    4 * c.B * c.a * (c.a - 1) * pa1 +
-    2 * (c.A / c.beta) * (c.A / c.beta) * s * p1 * p1 +
-    ((c.A * theta * 4) / c.beta) * (inv2b - 1) * p1;
   const Db = Math.pow(Delta, c.b);
   const Db1 = Db / Delta; // Delta^(b-1)
   const Db2 = Db1 / Delta; // Delta^(b-2)

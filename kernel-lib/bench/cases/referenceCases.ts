@@ -1,0 +1,60 @@
+/**
+ * Reference-equation and saturation cases of issue 5: all properties of water (IAPWS-95) at given
+ * T and density and at given T and P, water saturation at given T, and Peng-Robinson saturation at
+ * given T. Each call varies the state so that no memo or cache answers it.
+ */
+import { referenceFluid } from "../../src/eos/multiparameter/referenceFluids.js";
+import {
+  referenceStateTP,
+  referenceStateTRho,
+} from "../../src/eos/multiparameter/referenceStates.js";
+import { saturationAtTemperature } from "../../src/phase/saturation.js";
+import { defineFluid } from "../../src/fluid/defineFluid.js";
+import type { BenchCase } from "../harness.js";
+
+const MW = 0.018015268; // kg/mol, IAPWS-95
+
+export const referenceCases: BenchCase[] = [
+  {
+    name: "reference-water-Trho",
+    description:
+      "IAPWS-95 water, all properties at given T and density (liquid 300-499 K, 900 kg/m3)",
+    targetSeconds: 3e-6,
+    setup() {
+      const water = referenceFluid("water");
+      let i = 0;
+      return () => referenceStateTRho(water, 300 + (i++ % 200), 900 / MW);
+    },
+  },
+  {
+    name: "reference-water-TP",
+    description:
+      "IAPWS-95 water, all properties at given T and P (5 MPa, 300-599 K: liquid and vapour)",
+    targetSeconds: 15e-6,
+    setup() {
+      const water = referenceFluid("water");
+      let i = 0;
+      return () => referenceStateTP(water, 300 + (i++ % 300), 5e6);
+    },
+  },
+  {
+    name: "saturation-water-T",
+    description: "IAPWS-95 water saturation at given T (300-639 K)",
+    targetSeconds: 50e-6,
+    setup() {
+      const water = referenceFluid("water");
+      let i = 0;
+      return () => saturationAtTemperature(water, 300 + (i++ % 340));
+    },
+  },
+  {
+    name: "saturation-pr-T",
+    description: "Peng-Robinson propane saturation at given T (200-359 K)",
+    targetSeconds: 20e-6,
+    setup() {
+      const propane = defineFluid({ components: ["propane"], model: "peng-robinson" });
+      let i = 0;
+      return () => saturationAtTemperature(propane.model, 200 + (i++ % 160));
+    },
+  },
+];
