@@ -87,6 +87,16 @@ function fluidOf(request: EvalRequest): Fluid {
       departure: request.departure,
     });
   } catch (e) {
+    if (
+      e instanceof UnknownNameError &&
+      e.kind !== "component" &&
+      request.idealGas === "molecular"
+    ) {
+      throw new RequestError(
+        "$.idealGas",
+        `${e.message} (the molecular route needs molecular constants for every component)`,
+      );
+    }
     if (e instanceof UnknownNameError && e.kind === "component") {
       const i = request.components.indexOf(e.received);
       throw new RequestError(i >= 0 ? `$.components[${i}]` : "$.components", e.message);

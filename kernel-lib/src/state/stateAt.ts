@@ -112,7 +112,7 @@ export function stateAtTRho(
     throw new OutOfRangeError({
       input: "densityMolPerM3",
       unit: "mol/m3",
-      validRange: `below the model's maximum density ${max.toPrecision(6)} mol/m3 (close packing of ${model.info.name} at ${temperatureK} K)`,
+      validRange: `below the model's maximum density ${max.toPrecision(6)} mol/m3 (close packing, or the search limit of a model without one: ${model.info.name} at ${temperatureK} K)`,
       received: densityMolPerM3,
     });
   }

@@ -154,3 +154,33 @@ describe("isochor eval", () => {
     expect((base.states[0] as { Z: number }).Z).not.toBe((over.states[0] as { Z: number }).Z);
   });
 });
+
+describe("isochor eval: ideal-gas routes and reference states", () => {
+  it("the molecular route gives nearly the same h as the correlation route, and zero-at references zero h at (T0, P0) for the ideal gas", () => {
+    const base = { model: "peng-robinson", components: ["methane"], states: [{ T: 300, P: 1e5 }] };
+    const c = runEvalRequest({ ...base, idealGas: "correlation" }).states[0] as {
+      h: number;
+      cp: number;
+    };
+    const m = runEvalRequest({ ...base, idealGas: "molecular" }).states[0] as {
+      h: number;
+      cp: number;
+    };
+    // both routes reproduce JANAF cp of methane at 300 K within about 1 % (idealgas/ tests)
+    expect(Math.abs(c.cp - m.cp) / c.cp).toBeLessThan(0.01);
+    const z = runEvalRequest({ ...base, reference: { kind: "zero-at", T: 300, P: 1e5 } })
+      .states[0] as {
+      h: number;
+      residual: { h: number };
+    };
+    // h = 0 + residual h at the reference point itself
+    expect(z.h).toBeCloseTo(z.residual.h, 9);
+  });
+  it("refuses a bad reference object with its path", async () => {
+    const io = fakeIo(
+      JSON.stringify({ ...request, reference: { kind: "zero-at", T: -3, P: 1e5 } }),
+    );
+    expect(await evalCommand([], io)).toBe(2);
+    expect(JSON.parse(io.out).error.path).toBe("$.reference.T");
+  });
+});
