@@ -377,7 +377,7 @@ export function departuresFromPvt(
               message:
                 `isotherm ${t.toFixed(2)} K: the isochore at ${m.densityMolPerM3.toPrecision(5)} mol/m3 lies between the nodes ${lo.toPrecision(5)} and ${hi.toPrecision(5)} mol/m3 but was measured only from ${m.minTemperatureK.toFixed(2)} to ${m.maxTemperatureK.toFixed(2)} K, ` +
                 `so at ${t.toFixed(2)} K the fluid there was probably two-phase; departures above ${lo.toPrecision(5)} mol/m3 are not reported at this temperature (the data cannot be integrated through the dome). ` +
-                "Use departuresAroundCriticalPoint for liquid states, or pass integrateAcrossGaps if the gap is only a gap in the campaign",
+                "Reach liquid states with departuresAroundCriticalPoint (measured or modelled cv) or departuresAcrossDome (measured saturation data), or pass integrateAcrossGaps if the gap is only a gap in the campaign",
             });
             idx = idx.slice(0, j);
             break;
@@ -426,7 +426,7 @@ export function departuresFromPvt(
           message:
             `isotherm ${t.toFixed(2)} K: the pressure does not rise between ${r0.toPrecision(5)} and ${r1.toPrecision(5)} mol/m3, so the isotherm appears to cross the two-phase region (or the data there contradict mechanical stability); ` +
             `departures above ${r0.toPrecision(5)} mol/m3 are not reported at this temperature: the data cannot be integrated through the dome. ` +
-            "For states beyond it, integrate at a supercritical temperature and come down the isochore with a measured or modelled cv (departuresAroundCriticalPoint); a Clapeyron crossing with saturation data is not yet supported",
+            "For states beyond it, integrate at a supercritical temperature and come down the isochore with a measured or modelled cv (departuresAroundCriticalPoint), or cross the dome with measured saturation data (departuresAcrossDome)",
         });
         idx = idx.slice(0, cut);
       }

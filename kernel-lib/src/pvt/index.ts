@@ -59,3 +59,5 @@ export type {
 } from "./aroundCriticalPoint.js";
 export { residualCvFromPvt, checkCalorimetry } from "./residualCv.js";
 export type { ResidualCvProfile, ResidualCvMeasurement } from "./residualCv.js";
+export { departuresAcrossDome } from "./acrossDome.js";
+export type { SaturationData, DomeState, AcrossDomeResult } from "./acrossDome.js";

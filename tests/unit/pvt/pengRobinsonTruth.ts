@@ -19,7 +19,7 @@ const kappa = 0.37464 + 1.54226 * CO2.omega - 0.26992 * CO2.omega ** 2;
 const a0 = (0.45724 * R * R * CO2.Tc * CO2.Tc) / CO2.Pc;
 export const bPR = (0.0778 * R * CO2.Tc) / CO2.Pc;
 
-function aOf(T: number): { a: number; dadT: number } {
+export function aOf(T: number): { a: number; dadT: number } {
   const sr = Math.sqrt(T / CO2.Tc);
   const alphaSqrt = 1 + kappa * (1 - sr);
   return { a: a0 * alphaSqrt * alphaSqrt, dadT: (-a0 * kappa * alphaSqrt) / Math.sqrt(T * CO2.Tc) };
@@ -59,4 +59,57 @@ export function departuresPR(
     g: RT * lnPhi,
     lnPhi,
   };
+}
+
+/**
+ * Saturation of PR CO2 at T by equal fugacity (Brent on the pressure between the cubic's
+ * spinodal-bounded three-root range), with dPsat/dT from the Clapeyron equation
+ * (h_V - h_L) / (T (v_V - v_L)), all from the closed forms above.
+ */
+export function saturationPR(T: number): {
+  pressurePa: number;
+  slopePaPerK: number;
+  rhoV: number;
+  rhoL: number;
+} {
+  const b = bPR;
+  const { a } = aOf(T);
+  const roots = (P: number): number[] => {
+    const A = (a * P) / (R * T) ** 2;
+    const B = (b * P) / (R * T);
+    const c2 = -(1 - B);
+    const c1 = A - 3 * B * B - 2 * B;
+    const c0 = -(A * B - B * B - B * B * B);
+    // Real roots of Z^3 + c2 Z^2 + c1 Z + c0 by bisection-safe Newton from both ends.
+    const f = (z: number) => ((z + c2) * z + c1) * z + c0;
+    const df = (z: number) => (3 * z + 2 * c2) * z + c1;
+    const polish = (z0: number) => {
+      let z = z0;
+      for (let i = 0; i < 100; i++) z -= f(z) / df(z);
+      return z;
+    };
+    return [polish(B + 1e-9), polish(1.5)];
+  };
+  const lnPhiDiff = (P: number) => {
+    const [zL, zV] = roots(P) as [number, number];
+    return departuresPR(T, P / (zV * R * T)).lnPhi - departuresPR(T, P / (zL * R * T)).lnPhi;
+  };
+  let lo = 1e5;
+  let hi = 7.3e6;
+  for (let i = 0; i < 200; i++) {
+    const mid = 0.5 * (lo + hi);
+    const zs = roots(mid);
+    if (!(Math.abs((zs[0] as number) - (zs[1] as number)) > 1e-6)) {
+      hi = mid; // one root only: above the loop's range
+      continue;
+    }
+    if (lnPhiDiff(mid) > 0) hi = mid;
+    else lo = mid;
+  }
+  const P = 0.5 * (lo + hi);
+  const [zL, zV] = roots(P) as [number, number];
+  const rhoV = P / (zV * R * T);
+  const rhoL = P / (zL * R * T);
+  const dh = departuresPR(T, rhoV).h - departuresPR(T, rhoL).h;
+  return { pressurePa: P, slopePaPerK: dh / (T * (1 / rhoV - 1 / rhoL)), rhoV, rhoL };
 }
