@@ -174,7 +174,12 @@ describe("tslab sink", () => {
     const { tslabSink } = await import("../../../kernel-lib/src/progress/progressSinks.js");
     const html: string[] = [];
     const f = fakes();
-    const p = startProgress({ label: "surface", total: 4, sink: tslabSink({ html: (s) => html.push(s) }), now: f.now });
+    const p = startProgress({
+      label: "surface",
+      total: 4,
+      sink: tslabSink({ html: (s) => html.push(s) }),
+      now: f.now,
+    });
     f.advance(200);
     p.tick(2);
     f.advance(200);
