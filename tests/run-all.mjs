@@ -1,9 +1,9 @@
 // `npm test`: every check the project runs, in order, with one plain closing line
 // "N passed, N failed" (vitest cases count one each; every other step counts one).
 //   1. type-check (kernel-lib, widgets, tests)   2. lint (typescript-eslint)   3. format (Prettier)
-//   4. vitest (unit, property and bad-input tests)
-//   5. build (kernel-lib to CommonJS + .d.ts, widgets bundle for the browser)
-//   6. the public .d.ts compiles under tslab's TypeScript 5.0
+//   4. build (kernel-lib to CommonJS + .d.ts, widgets bundle for the browser)
+//   5. the public .d.ts compiles under tslab's TypeScript 5.0
+//   6. vitest (unit, property and bad-input tests; some use the build)
 //   7. every notebook executed through `isochor run` (records into out/test-records/)
 //   8. every record checked in headless Chromium (live charts, no page errors, no request off file://)
 // Without Chromium the browser checks are skipped with a message; with CI=true that is a failure.
@@ -83,7 +83,39 @@ step("format check", process.execPath, [
   ".",
 ]);
 
-// 4. vitest, counted case by case from its JSON report.
+// 4. build (before vitest: the display and records tests use kernel-lib/dist).
+const built = step("build", "npm", ["run", "build"]);
+
+// 5. the .d.ts must suit tslab's TypeScript 5.0 (tslab compiles notebook cells with it).
+if (built) {
+  const consumerDir = join(outDir, "ts50-consumer");
+  mkdirSync(consumerDir, { recursive: true });
+  writeFileSync(
+    join(consumerDir, "consumer.ts"),
+    'import * as isochor from "isochor";\nexport const keys: string[] = Object.keys(isochor);\n',
+  );
+  writeFileSync(
+    join(consumerDir, "tsconfig.json"),
+    JSON.stringify({
+      compilerOptions: {
+        strict: true,
+        noEmit: true,
+        module: "commonjs",
+        moduleResolution: "node",
+        target: "ES2022",
+        types: ["node"],
+        typeRoots: [join(root, "node_modules", "@types")],
+        baseUrl: ".",
+        paths: { isochor: [join(root, "kernel-lib")] },
+      },
+      files: ["consumer.ts"],
+    }),
+  );
+  const ts50 = join(root, "node_modules", "@tslab", "typescript-for-tslab", "bin", "tsc");
+  step("public .d.ts under tslab's TypeScript 5.0", process.execPath, [ts50, "-p", consumerDir]);
+}
+
+// 6. vitest, counted case by case from its JSON report.
 console.log("\n== vitest");
 const vitestJson = join(outDir, "vitest.json");
 const vitest = run(
@@ -115,38 +147,6 @@ if (existsSync(vitestJson)) {
   );
 } else {
   record("vitest", false, `no JSON report (exit ${vitest.status})`);
-}
-
-// 5. build.
-const built = step("build", "npm", ["run", "build"]);
-
-// 6. the .d.ts must suit tslab's TypeScript 5.0 (tslab compiles notebook cells with it).
-if (built) {
-  const consumerDir = join(outDir, "ts50-consumer");
-  mkdirSync(consumerDir, { recursive: true });
-  writeFileSync(
-    join(consumerDir, "consumer.ts"),
-    'import * as isochor from "isochor";\nexport const keys: string[] = Object.keys(isochor);\n',
-  );
-  writeFileSync(
-    join(consumerDir, "tsconfig.json"),
-    JSON.stringify({
-      compilerOptions: {
-        strict: true,
-        noEmit: true,
-        module: "commonjs",
-        moduleResolution: "node",
-        target: "ES2022",
-        types: ["node"],
-        typeRoots: [join(root, "node_modules", "@types")],
-        baseUrl: ".",
-        paths: { isochor: [join(root, "kernel-lib")] },
-      },
-      files: ["consumer.ts"],
-    }),
-  );
-  const ts50 = join(root, "node_modules", "@tslab", "typescript-for-tslab", "bin", "tsc");
-  step("public .d.ts under tslab's TypeScript 5.0", process.execPath, [ts50, "-p", consumerDir]);
 }
 
 // 7. notebooks through the runner.
