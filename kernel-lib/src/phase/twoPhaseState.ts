@@ -196,20 +196,32 @@ function acrossDome(
   if (target >= yL && target <= yV) {
     return mix(binding, sat, (target - yL) / (yV - yL));
   }
+  // Start the single-phase inversion at twice the temperature offset that the saturated phase's
+  // cp predicts (dT = dh / cp, or T ds / cp), so the first bracket step lands on the saturation
+  // temperature and brackets the root without leaving the models' temperature ranges.
+  const offset = (phase: FluidState): number => {
+    const dy = Math.abs(target - phase.molar[property]);
+    const dT = property === "h" ? dy / phase.molar.cp : (Tsat * dy) / phase.molar.cp;
+    return Number.isFinite(dT) && dT > 0 ? 2 * dT : 0.1 * Tsat;
+  };
+  const below = Tsat * (1 - 1e-9);
+  const above = Tsat * (1 + 1e-9);
   if (target < yL) {
+    const lo = Math.min(tMin, below);
     const r = invert(binding, pressurePa, target, [1], {
       phase: "liquid",
-      initialGuessK: Tsat * (1 - 1e-9),
-      minTemperatureK: Math.min(tMin, Tsat * (1 - 1e-9)),
-      maxTemperatureK: Tsat * (1 - 1e-9),
+      initialGuessK: Math.min(below, Math.max(lo, Tsat - offset(L))),
+      minTemperatureK: lo,
+      maxTemperatureK: below,
     });
     return { kind: "single-phase", state: r.state };
   }
+  const hi = Math.max(tMax, above);
   const r = invert(binding, pressurePa, target, [1], {
     phase: "vapor",
-    initialGuessK: Tsat * (1 + 1e-9),
-    minTemperatureK: Tsat * (1 + 1e-9),
-    maxTemperatureK: Math.max(tMax, Tsat * (1 + 1e-9)),
+    initialGuessK: Math.max(above, Math.min(hi, Tsat + offset(V))),
+    minTemperatureK: above,
+    maxTemperatureK: hi,
   });
   return { kind: "single-phase", state: r.state };
 }

@@ -12,7 +12,10 @@ import {
   saturationAtTemperature,
 } from "../../../kernel-lib/src/phase/saturation.js";
 import { equalAreaIsotherm } from "../../../kernel-lib/src/phase/equalAreaIsotherm.js";
-import { stateAtTemperatureQuality } from "../../../kernel-lib/src/phase/twoPhaseState.js";
+import {
+  stateAtPressureEnthalpy,
+  stateAtTemperatureQuality,
+} from "../../../kernel-lib/src/phase/twoPhaseState.js";
 import { pureFluidPhaseAt } from "../../../kernel-lib/src/phase/pureFluidPhase.js";
 import { PhaseUnavailableError } from "../../../kernel-lib/src/errors.js";
 
@@ -111,5 +114,23 @@ describe("cubic models: saturation", () => {
     ).toBeLessThan(1e-9 * Math.abs(wet.molar.h) + 1e-9);
     expect(pureFluidPhaseAt(fluid.model, 320, s.pressurePa * 1.01).phase).toBe("liquid");
     expect(() => pureFluidPhaseAt(fluid.model, 320, s.pressurePa)).toThrow(PhaseUnavailableError);
+  });
+});
+
+describe("cubic model: (P, h) across the dome", () => {
+  it("Peng-Robinson propane at its 320 K saturation pressure: liquid, wet and vapour targets", () => {
+    const fluid = defineFluid({ components: ["propane"], model: "peng-robinson" });
+    const P = saturationAtTemperature(fluid.model, 320).pressurePa;
+    const wet = stateAtTemperatureQuality(fluid, 320, 0.5);
+    const mid = stateAtPressureEnthalpy(fluid, P, wet.molar.h);
+    expect(mid.kind).toBe("two-phase");
+    if (mid.kind === "two-phase") expect(Math.abs(mid.quality - 0.5)).toBeLessThan(1e-8);
+    const liquid = stateAtPressureEnthalpy(fluid, P, wet.liquid.molar.h - 400);
+    const vapor = stateAtPressureEnthalpy(fluid, P, wet.vapor.molar.h + 400);
+    expect(liquid.kind === "single-phase" && liquid.state.temperatureK < 320).toBe(true);
+    expect(vapor.kind === "single-phase" && vapor.state.temperatureK > 320).toBe(true);
+    if (liquid.kind === "single-phase") {
+      expect(Math.abs(liquid.state.molar.h - (wet.liquid.molar.h - 400))).toBeLessThan(1e-5);
+    }
   });
 });
