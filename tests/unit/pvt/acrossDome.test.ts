@@ -5,6 +5,7 @@ import {
   pvtFromArrays,
 } from "../../../kernel-lib/src/pvt/index.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
+import type { DomeState } from "../../../kernel-lib/src/pvt/index.js";
 import { range } from "./campaign.js";
 import { departuresPR, pressurePR, saturationPR } from "./pengRobinsonTruth.js";
 
@@ -55,13 +56,10 @@ describe("departuresAcrossDome (Clapeyron crossing with saturation data)", () =>
 
   it("reaches the saturated phases and the compressed liquid, matching PR's closed form within 3 u", () => {
     const r = departuresAcrossDome(result, { temperatureK: T, saturation });
-    const check = (
-      rho: number,
-      st: { residual: Record<string, number>; uncertainty: Record<string, number> },
-    ) => {
+    const check = (rho: number, st: DomeState) => {
       const truth = departuresPR(T, rho);
       for (const k of ["a", "s", "u", "h", "g"] as const) {
-        expect(Math.abs(st.residual[k]! - truth[k])).toBeLessThanOrEqual(3 * st.uncertainty[k]!);
+        expect(Math.abs(st.residual[k] - truth[k])).toBeLessThanOrEqual(3 * st.uncertainty[k]);
       }
     };
     check(sat.rhoV, r.saturatedVapor);
