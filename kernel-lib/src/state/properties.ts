@@ -177,7 +177,7 @@ export function assembleState(input: StateInputs): FluidState {
     molar: { h, s, u, a, g, cp, cv },
     mass: { h: h / M, s: s / M, u: u / M, a: a / M, g: g / M, cp: cp / M, cv: cv / M },
     residual: { h: hRes, s: sTP, u: uRes, a: aTP, g: gTP, cp: cp - ig.cp, cv: cvRes },
-    residualTV: { h: hRes, s: sTV, u: uRes, a: aTV, g: gTV },
+    residualTV: res.TV,
     lnPhi,
     speedOfSoundMPerS: speed,
     jouleThomsonKPerPa: jt,

@@ -51,8 +51,15 @@ const idealCache = new WeakMap<
 
 function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): IdealGasProperties {
   const hit = idealCache.get(binding);
-  if (hit && hit.T === T && hit.x.length === x.length && hit.x.every((v, i) => v === x[i])) {
-    return hit.value;
+  if (hit && hit.T === T && hit.x.length === x.length) {
+    let same = true;
+    for (let i = 0; i < x.length; i++) {
+      if (hit.x[i] !== x[i]) {
+        same = false;
+        break;
+      }
+    }
+    if (same) return hit.value;
   }
   const value = binding.idealGas.at(T, IDEAL_GAS_PRESSURE_PA, x);
   idealCache.set(binding, { T, x: x.slice(), value });
@@ -73,9 +80,8 @@ function finish(
 ): FluidState {
   const model = binding.model;
   const ideal = idealGasAt(binding, T, x);
-  const warnings = model.checkValidity
-    ? model.checkValidity(T, rho, x).concat(extraWarnings)
-    : extraWarnings;
+  const own = model.checkValidity ? model.checkValidity(T, rho, x) : [];
+  const warnings = extraWarnings.length === 0 ? own : own.concat(extraWarnings);
   return assembleState({
     temperatureK: T,
     densityMolPerM3: rho,

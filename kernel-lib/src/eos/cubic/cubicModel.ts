@@ -25,7 +25,6 @@ import type {
   ModelInfo,
   PseudoCriticalPoint,
   ResidualDerivatives,
-  ResidualModel,
   ResidualRequest,
 } from "../types.js";
 import { checkModelComponents, type ModelComponent } from "../modelComponent.js";
@@ -251,16 +250,18 @@ class CubicModelImpl implements CubicModel {
     const logTerm = -Math.log1p(-eps);
     const q = eps / oneMinusEps;
     const alphaR = logTerm - F * I;
-    const result: {
-      a: number;
-      aD: number;
-      aDD: number;
-      aT: number;
-      aTT: number;
-      aDT: number;
-      aDDD: number;
-      dnA?: number[];
-    } = {
+    let dnA: number[] | undefined;
+    if (request?.composition) {
+      const n = this.n;
+      dnA = new Array<number>(n);
+      for (let i = 0; i < n; i++) {
+        const bRatio = this.bi[i] / b;
+        dnA[i] =
+          logTerm + bRatio * q - F * ((2 * this.sumA[i]) / a - bRatio) * I - F * bRatio * eps * I1;
+      }
+    }
+    // one object shape whether or not dnA is requested
+    const result: ResidualDerivatives = {
       a: alphaR,
       aD: q - F * eps * I1,
       aDD: q * q - F * eps * eps * I2,
@@ -268,17 +269,8 @@ class CubicModelImpl implements CubicModel {
       aTT: -TTF * I,
       aDT: -TF * eps * I1,
       aDDD: 2 * q * q * q - F * eps * eps * eps * I3,
+      dnA,
     };
-    if (request?.composition) {
-      const n = this.n;
-      const dnA = new Array<number>(n);
-      for (let i = 0; i < n; i++) {
-        const bRatio = this.bi[i] / b;
-        dnA[i] =
-          logTerm + bRatio * q - F * ((2 * this.sumA[i]) / a - bRatio) * I - F * bRatio * eps * I1;
-      }
-      result.dnA = dnA;
-    }
     return result;
   }
 
@@ -313,7 +305,21 @@ class CubicModelImpl implements CubicModel {
     return out;
   }
 
+  private lastPseudo: { x: number[]; value: PseudoCriticalPoint } | undefined;
+
   pseudoCritical(x: readonly number[]): PseudoCriticalPoint {
+    const last = this.lastPseudo;
+    if (last && last.x.length === x.length) {
+      let same = true;
+      for (let i = 0; i < x.length; i++) if (last.x[i] !== x[i]) same = false;
+      if (same) return last.value;
+    }
+    const value = this.computePseudoCritical(x);
+    this.lastPseudo = { x: x.slice(), value };
+    return value;
+  }
+
+  private computePseudoCritical(x: readonly number[]): PseudoCriticalPoint {
     let Tc = 0;
     let Pc = 0;
     for (let i = 0; i < this.n; i++) {
