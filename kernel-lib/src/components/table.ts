@@ -61,12 +61,17 @@ export function tableComponents(): readonly Component[] {
 }
 
 function fromRaw(r: RawComponentRecord): Component {
-  const cite = (key: string) => {
-    const text = rawComponentTable.sources[key];
-    if (text === undefined)
-      throw new Error(`components.json: ${r.id} cites unknown source key "${key}"`);
-    return text;
-  };
+  // A key "a+b" cites two sources in order (e.g. a low-temperature segment, then the correlation above).
+  const cite = (keys: string) =>
+    keys
+      .split("+")
+      .map((key) => {
+        const text = rawComponentTable.sources[key];
+        if (text === undefined)
+          throw new Error(`components.json: ${r.id} cites unknown source key "${key}"`);
+        return text;
+      })
+      .join("; ");
   const note = r.note ? ` Note: ${r.note}.` : "";
   return defineComponent(
     {

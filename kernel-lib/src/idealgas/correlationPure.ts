@@ -43,7 +43,7 @@ export function idealGasFromCorrelation(
   const correlation = component.idealGasCp;
   const formName =
     correlation.form === "polynomial" ? "polynomial cp correlation" : "Aly-Lee cp correlation";
-  const method = `heat-capacity correlation (${formName})`;
+  const method = `heat-capacity correlation (${formName}: ${shortSource(component.sources.heatCapacity)})`;
   const range = { min: correlation.minTemperatureK, max: correlation.maxTemperatureK };
   const check = (t: number) => checkTemperatureRange(component.id, method, range, t, options);
   return Object.freeze({
@@ -79,4 +79,14 @@ export function idealGasFromCorrelation(
       return s298 + correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, temperatureK);
     },
   });
+}
+
+/**
+ * The citation up to its first ":" or ";" (author, year, table), at most 140 characters, so a
+ * method name says which correlation it is without the whole provenance note.
+ */
+function shortSource(source: string): string {
+  const cut = source.search(/[:;]/);
+  const head = (cut > 0 ? source.slice(0, cut) : source).trim();
+  return head.length > 140 ? `${head.slice(0, 139)}…` : head;
 }

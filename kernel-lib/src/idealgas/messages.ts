@@ -3,6 +3,7 @@
  * can match them. Each says what is wrong and what to do.
  */
 import type { ResultWarning } from "../errors.js";
+import { listMolecules } from "./molecular/moleculeTable.js";
 
 /** A temperature outside a method's range but within the allowed extrapolation margin. */
 export function extrapolatedTemperatureWarning(
@@ -25,4 +26,47 @@ export function pushUnique(warnings: ResultWarning[], warning: ResultWarning): v
   if (!warnings.some((w) => w.code === warning.code && w.message === warning.message)) {
     warnings.push(warning);
   }
+}
+
+/**
+ * What an engineer can do about a temperature outside a method's range beyond the allowed
+ * extrapolation: the molecular route when the species has molecular constants (and the refusal came
+ * from a correlation), a wider correlation, or a larger extrapolation margin (with the margin that
+ * would reach the temperature asked, when one below 1 would).
+ */
+export function outOfRangeAdvice(
+  componentId: string,
+  method: string,
+  range: { readonly min: number; readonly max: number },
+  temperatureK: number,
+): string {
+  const choices: string[] = [];
+  const isCorrelation = method.startsWith("heat-capacity correlation");
+  if (isCorrelation && listMolecules().includes(componentId)) {
+    choices.push(
+      `use the statistical-mechanics route, which has molecular constants for ${componentId} ` +
+        `(idealGasFromMolecule("${componentId}"), or idealGas: "molecular" in defineFluid)`,
+    );
+  }
+  choices.push(
+    isCorrelation
+      ? `give ${componentId} a cp correlation valid at ${temperatureK} K (defineComponent with ` +
+          `your own idealGasCp, cited)`
+      : "use a model valid at this temperature",
+  );
+  const needed =
+    temperatureK < range.min ? 1 - temperatureK / range.min : temperatureK / range.max - 1;
+  const margin = Math.ceil(needed * 100) / 100;
+  if (margin < 1) {
+    const caution = /Benson|Joback/.test(method)
+      ? " (group-contribution cp fits extrapolated below about 270 K read low: about 3-5 % at " +
+        "233 K and 10 % at 200 K for the n-alkanes against Perry's Aly-Lee correlations)"
+      : "";
+    const factory = isCorrelation ? "idealGasFromCorrelation" : "idealGasFromMolecule";
+    choices.push(
+      `accept an extrapolated value with a warning: ${factory}("${componentId}", ` +
+        `{ extrapolationMargin: ${margin} }), and the same option to idealGasMixture${caution}`,
+    );
+  }
+  return `To go on: ${choices.join("; or ")}`;
 }

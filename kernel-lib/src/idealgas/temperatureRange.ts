@@ -5,10 +5,12 @@
  *   by extrapolation and an "extrapolated" warning is returned;
  * - further out: refused with OutOfRangeError.
  * The margin is 0.10 (10 % of the limit) unless the caller passes another one.
+ * The refusal names the component, the method, its range, the temperature asked and what to do
+ * (messages.ts, outOfRangeAdvice).
  */
 import { OutOfRangeError, type ResultWarning } from "../errors.js";
 import { requirePositive } from "../validate.js";
-import { extrapolatedTemperatureWarning } from "./messages.js";
+import { extrapolatedTemperatureWarning, outOfRangeAdvice } from "./messages.js";
 
 /** Default allowed extrapolation beyond a method's temperature range, as a fraction of the limit. */
 export const DEFAULT_EXTRAPOLATION_MARGIN = 0.1;
@@ -52,7 +54,7 @@ export function checkTemperatureRange(
       unit: "K",
       validRange: `${range.min} K to ${range.max} K (extrapolation allowed to ${round(lo)}-${round(hi)} K)`,
       received: temperatureK,
-      hint: "Use a model valid at this temperature, or widen the allowed extrapolation with the extrapolationMargin option",
+      hint: outOfRangeAdvice(componentId, method, range, temperatureK),
     });
   }
   return [extrapolatedTemperatureWarning(componentId, method, temperatureK, range)];

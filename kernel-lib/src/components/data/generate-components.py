@@ -16,12 +16,14 @@ SOURCES = {
  "gri30": "Smith, G.P. et al. (1999), GRI-Mech 3.0 thermodynamic data: NASA 7-coefficient polynomials (cp/R, two segments joined at 1000 K) fitted to JANAF and Burcat data (coefficients from memory)",
  "burcat": "Burcat, A., Ruscic, B. (2005), Third Millennium Ideal Gas and Condensed Phase Thermochemical Database, ANL-05/20 / TAE 960, NASA 7-coefficient polynomials (from memory)",
  "perry-aly-lee": "Perry's Chemical Engineers' Handbook, 8th ed. (2008), Table 2-156: ideal-gas heat capacities in the Aly-Lee (DIPPR 107) form, from the DIPPR 801 database (coefficients from memory)",
- "benson-fit": "cubic cp/R polynomial fitted by least squares (this project) to group-additivity heat capacities at 300, 400, 500, 600, 800 and 1000 K from Benson, S.W. (1976), Thermochemical Kinetics, 2nd ed., Wiley, Table A.1 (group values from memory); expect about 1-2 % uncertainty; the fit is used from 298.15 K (Benson's lowest tabulated temperature is 300 K) to 1000 K",
- "joback": "Joback, K.G., Reid, R.C. (1987), Chem. Eng. Commun. 57, 233-243, group contributions for ideal-gas cp (group values from memory of Poling et al. 2001, Table 2-2); stated range 273-1000 K; expect errors of a few per cent (about 4 % low for methylcyclohexane, within 1 % for the mercaptans at 298 K)",
+ "benson-fit": "Benson group additivity, cubic cp/R polynomial fitted by least squares (this project) to the group heat capacities at 300, 400, 500, 600, 800 and 1000 K of Benson, S.W. (1976), Thermochemical Kinetics, 2nd ed., Wiley, Table A.1 (group values from memory); expect about 1-2 % uncertainty; the fit is used from 298.15 K (Benson's lowest tabulated temperature is 300 K) to 1000 K. Not extended lower: the same fit for n-butane to n-decane reads 3-5 % below Perry's Aly-Lee correlations at 233 K and about 10 % below at 200 K",
+ "joback": "Joback, K.G., Reid, R.C. (1987), Chem. Eng. Commun. 57, 233-243, group contributions for ideal-gas cp (group values from memory of Poling et al. 2001, Table 2-2); stated range 273-1000 K (not extended lower: for ethanol and n-butane the Joback cp reads 4-5 % below Perry's Aly-Lee correlations at 233 K); expect errors of a few per cent (about 4 % low for methylcyclohexane, within 1 % for the mercaptans at 298 K)",
  "no-formation": "not included: the author could not recall reliable values (NaN; use a zero-at reference state)",
  "rrho-linear": "rigid-rotor harmonic-oscillator ideal-gas cp of a linear molecule (7/2 R plus Planck-Einstein terms) from the fundamental wavenumbers (COS: 859, 520 x2, 2062 cm-1; CS2: 658, 397 x2, 1535 cm-1; from memory of Shimanouchi 1972, NSRDS-NBS 39), fitted by least squares (this project) to degree-5 polynomials on 200-600 K and 600-1500 K (fit error < 0.05 %); anharmonicity neglected (a few tenths of a per cent at 1000 K)",
  "derived-entropy": "derived from the enthalpy and Gibbs energy of formation: S = (Hf - Gf)/298.15 K + sum of the element entropies (CODATA 1989 key values); not an independent value",
  "janaf-fit-methane": "degree-6 cp/R polynomial fitted by least squares (this project) to the NIST-JANAF methane table (Chase 1998) at 200, 298.15 and 300-1500 K in 100 K steps (table values from memory; above 298 K they agree with a rigid-rotor harmonic-oscillator calculation from the four fundamental frequencies to 0.01 %); fit error below 0.08 %",
+ "perry-aly-lee-propane": "Perry's Chemical Engineers' Handbook, 8th ed. (2008), Table 2-156 (DIPPR 107 / Aly-Lee form, from the DIPPR 801 database): propane C1 = 0.5192e5, C2 = 1.9245e5, C3 = 1.6265e3, C4 = 1.168e5, C5 = 723.6 (J/(kmol K) and K), 200-1500 K (coefficients from memory of the handbook; cp(298.15 K) = 73.47 J/(mol K) against 73.6 in the NIST WebBook, and within 1 % of the GRI-Mech 3.0 polynomial from 300 to 1500 K, which it replaces because that one starts at 300 K)",
+ "rrho-low": "Rigid-rotor harmonic-oscillator cp fit (this project) below the first segment joint, the correlation cited next above it; below the joint, a cp/R polynomial fitted by least squares to the rigid-rotor harmonic-oscillator heat capacity from the molecular constants of idealgas/molecular/data/molecules.json (classical rotation, harmonic fundamentals), which for these rigid molecules is exact at these temperatures to well within 0.1 % (at 100 and 200 K it reproduces NIST-JANAF, e.g. CH4 33.258 and 33.473 J/(mol K), from memory of Chase 1998); fit error < 0.02 %; cp jump at the joint < 0.2 %",
  "nist-fluid": "NIST Chemistry WebBook fluid data (Lemmon, McLinden & Friend), critical point and boiling point (from memory)",
  "iapws95": "Wagner, W., Pruss, A. (2002), The IAPWS Formulation 1995 for the thermodynamic properties of ordinary water substance, J. Phys. Chem. Ref. Data 31, 387-535: critical point (Tc, Pc, rho_c = 322 kg/m3)",
 }
@@ -90,6 +92,40 @@ def rrho_linear(modes, lo=200, mid=600, hi=1500, deg=5):
         segs.append({"minTemperatureK": a, "maxTemperatureK": b, "coefficients": c[::-1]})
     return {"form": "polynomial", "minTemperatureK": lo, "maxTemperatureK": hi, "segments": segs}
 
+MOLECULES = {m["id"]: m for m in json.load(open(os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "..", "idealgas", "molecular", "data", "molecules.json")))["molecules"]}
+
+def rrho_cpr(mol_id, T):
+    """cp/R of the rigid-rotor harmonic oscillator from the shipped molecular constants (valid where
+    rotation is classical and the molecule has no internal rotor; electronic levels above
+    5000 cm-1 contribute nothing below 300 K and are ignored)."""
+    m = MOLECULES[mol_id]
+    assert not m["internalRotors"] and all(e["energyInvCm"] == 0 or e["energyInvCm"] > 5000 for e in m["electronicLevels"])
+    cp = np.full_like(T, 3.5 if m["geometry"] == "linear" else 4.0)
+    for v in m["vibrations"]:
+        x = 1.438776877*v["wavenumberInvCm"]/T
+        cp += v["degeneracy"]*x*x*np.exp(x)/np.expm1(x)**2
+    return cp
+
+def with_rrho_low(cp, mol_id, lo, joint, deg=5):
+    """Prepends a low-temperature segment lo..joint fitted to the rigid-rotor harmonic-oscillator cp
+    (see SOURCES["rrho-low"]); the correlation above starts at the joint."""
+    # lowest degree (up to deg) that fits within 2e-4: raw-power polynomials of high degree on a
+    # short interval cancel badly when integrated (cp/T) in double precision
+    T = np.linspace(lo, joint, 81)
+    for d in range(0, deg + 1):
+        c = np.polyfit(T, rrho_cpr(mol_id, T), d)
+        c = [float("%.9e" % v) for v in c]
+        err = np.max(np.abs(np.polyval(c, T)/rrho_cpr(mol_id, T)-1))
+        if err < 2e-4:
+            break
+    assert err < 2e-4, (mol_id, err)
+    segs = [dict(sg) for sg in cp["segments"] if sg["maxTemperatureK"] > joint]
+    segs[0]["minTemperatureK"] = joint
+    above = np.polyval(segs[0]["coefficients"][::-1], joint)
+    assert abs(above/np.polyval(c, joint)-1) < 2e-3, (mol_id, above, np.polyval(c, joint))
+    return {"form": "polynomial", "minTemperatureK": lo, "maxTemperatureK": cp["maxTemperatureK"],
+            "segments": [{"minTemperatureK": lo, "maxTemperatureK": joint, "coefficients": c[::-1]}] + segs}
+
 def benson(groups):
     cp = np.zeros(6)
     for g, n in groups.items():
@@ -114,25 +150,25 @@ def add(id, name, formula, cas, syn, M, Tb, Tc, Pc, Vc, Zc, w, Hf, Gf, S, cp, cr
 add("hydrogen","Hydrogen","H2","1333-74-0",["H2"],2.016,20.28,33.19,13.13,64.1,0.305,-0.216,0,0,130.680,
     gri(200,3500,low=[2.34433112,7.98052075e-3,-1.94781510e-5,2.01572094e-8,-7.37611761e-12],high=[3.33727920,-4.94024731e-5,4.99456778e-7,-1.79566394e-10,2.00255376e-14]),form="janaf",ent="janaf",cps="gri30")
 add("nitrogen","Nitrogen","N2","7727-37-9",["N2"],28.014,77.35,126.20,33.98,90.1,0.289,0.037,0,0,191.609,
-    gri(200,6000,low=[3.53100528,-1.23660988e-4,-5.02999433e-7,2.43530612e-9,-1.40881235e-12],high=[2.95257637,1.39690040e-3,-4.92631603e-7,7.86010195e-11,-4.60755204e-15]),form="janaf",ent="janaf",cps="burcat")
+    with_rrho_low(gri(200,6000,low=[3.53100528,-1.23660988e-4,-5.02999433e-7,2.43530612e-9,-1.40881235e-12],high=[2.95257637,1.39690040e-3,-4.92631603e-7,7.86010195e-11,-4.60755204e-15]),"nitrogen",100,200),form="janaf",ent="janaf",cps="rrho-low+burcat")
 add("oxygen","Oxygen","O2","7782-44-7",["O2"],31.999,90.17,154.58,50.43,73.4,0.288,0.022,0,0,205.147,
-    gri(200,3500,low=[3.78245636,-2.99673416e-3,9.84730201e-6,-9.68129509e-9,3.24372837e-12],high=[3.28253784,1.48308754e-3,-7.57966669e-7,2.09470555e-10,-2.16717794e-14]),form="janaf",ent="janaf",cps="gri30")
+    with_rrho_low(gri(200,3500,low=[3.78245636,-2.99673416e-3,9.84730201e-6,-9.68129509e-9,3.24372837e-12],high=[3.28253784,1.48308754e-3,-7.57966669e-7,2.09470555e-10,-2.16717794e-14]),"oxygen",100,200),form="janaf",ent="janaf",cps="rrho-low+gri30")
 add("argon","Argon","Ar","7440-37-1",["Ar"],39.948,87.27,150.86,48.98,74.57,0.291,-0.002,0,0,154.845,CONST(),form="janaf",ent="janaf",cps="janaf")
 add("helium","Helium","He","7440-59-7",["He","helium-4"],4.003,4.22,5.19,2.27,57.4,0.302,-0.390,0,0,126.152,CONST(),tb="nist-fluid",form="janaf",ent="janaf",cps="janaf")
 add("neon","Neon","Ne","7440-01-9",["Ne"],20.180,27.10,44.49,26.79,41.87,0.303,-0.0387,0,0,146.327,CONST(),crit="nist-fluid",form="codata",ent="codata",cps="janaf")
 add("krypton","Krypton","Kr","7439-90-9",["Kr"],83.798,119.73,209.48,55.25,92.17,0.292,-0.0009,0,0,164.084,CONST(),crit="nist-fluid",form="codata",ent="codata",cps="janaf")
 add("xenon","Xenon","Xe","7440-63-3",["Xe"],131.293,165.05,289.73,58.42,119.0,0.289,0.0036,0,0,169.684,CONST(),crit="nist-fluid",form="codata",ent="codata",cps="janaf")
 add("carbon-monoxide","Carbon monoxide","CO","630-08-0",["CO"],28.010,81.66,132.85,34.94,93.1,0.292,0.045,-110.527,-137.163,197.653,
-    gri(200,3500,low=[3.57953347,-6.10353680e-4,1.01681433e-6,9.07005884e-10,-9.04424499e-13],high=[2.71518561,2.06252743e-3,-9.98825771e-7,2.30053008e-10,-2.03647716e-14]),form="janaf",ent="janaf",cps="gri30")
+    with_rrho_low(gri(200,3500,low=[3.57953347,-6.10353680e-4,1.01681433e-6,9.07005884e-10,-9.04424499e-13],high=[2.71518561,2.06252743e-3,-9.98825771e-7,2.30053008e-10,-2.03647716e-14]),"carbon-monoxide",100,200),form="janaf",ent="janaf",cps="rrho-low+gri30")
 add("carbon-dioxide","Carbon dioxide","CO2","124-38-9",["CO2"],44.010,194.67,304.12,73.74,94.07,0.274,0.225,-393.522,-394.389,213.795,
-    gri(200,3500,low=[2.35677352,8.98459677e-3,-7.12356269e-6,2.45919022e-9,-1.43699548e-13],high=[3.85746029,4.41437026e-3,-2.21481404e-6,5.23490188e-10,-4.72084164e-14]),form="janaf",ent="janaf",cps="gri30",
+    with_rrho_low(gri(200,3500,low=[2.35677352,8.98459677e-3,-7.12356269e-6,2.45919022e-9,-1.43699548e-13],high=[3.85746029,4.41437026e-3,-2.21481404e-6,5.23490188e-10,-4.72084164e-14]),"carbon-dioxide",100,200),form="janaf",ent="janaf",cps="rrho-low+gri30",
     note="CO2 has no liquid at 1 atm: the 'normal boiling point' is the normal sublimation point")
 add("water","Water","H2O","7732-18-5",["H2O","steam"],18.015,373.12,647.096,220.64,55.95,0.229,0.3443,-241.826,-228.582,188.834,
     gri(200,3500,low=[4.19864056,-2.03643410e-3,6.52040211e-6,-5.48797062e-9,1.77197817e-12],high=[3.03399249,2.17691804e-3,-1.64072518e-7,-9.70419870e-11,1.68200992e-14]),crit="iapws95",tb="poling5",form="janaf",ent="janaf",cps="gri30")
 add("hydrogen-sulfide","Hydrogen sulfide","H2S","7783-06-4",["H2S","sour gas"],34.082,212.84,373.4,89.63,98.6,0.284,0.090,-20.6,-33.4,205.81,
     alylee(100,1500,0.33288,0.26086,0.9134,-0.17979,949.4),form="codata",ent="codata")
 add("sulfur-dioxide","Sulfur dioxide","O2S","7446-09-5",["SO2"],64.065,263.13,430.80,78.84,122.2,0.269,0.245,-296.81,-300.09,248.223,
-    gri(200,6000,low=[3.26653380,5.32379020e-3,6.84375520e-7,-5.28100470e-9,2.55904540e-12],high=[5.24513640,1.97042040e-3,-8.03757690e-7,1.51499690e-10,-1.05580040e-14]),form="codata",ent="codata",cps="burcat")
+    with_rrho_low(gri(200,6000,low=[3.26653380,5.32379020e-3,6.84375520e-7,-5.28100470e-9,2.55904540e-12],high=[5.24513640,1.97042040e-3,-8.03757690e-7,1.51499690e-10,-1.05580040e-14]),"sulfur-dioxide",100,273.15),form="codata",ent="codata",cps="rrho-low+burcat")
 add("carbonyl-sulfide","Carbonyl sulfide","COS","463-58-1",["COS","carbon oxysulfide"],60.075,223.0,378.8,63.49,137.0,0.276,0.097,-142.09,-169.2,231.57,
     rrho_linear([(859,1),(520,2),(2062,1)]),form="janaf",ent="janaf",cps="rrho-linear")
 add("carbon-disulfide","Carbon disulfide","CS2","75-15-0",["CS2"],76.141,319.37,552.0,79.0,160.0,0.275,0.109,116.94,66.9,237.98,
@@ -156,11 +192,11 @@ add("chlorine","Chlorine","Cl2","7782-50-5",["Cl2"],70.906,239.12,416.9,79.91,12
 
 # ---- n-alkanes
 add("methane","Methane","CH4","74-82-8",["C1","CH4"],16.043,111.66,190.56,45.99,98.6,0.286,0.011,-74.873,-50.768,186.251,
-    poly(200,1500,[5.46363337,-0.0184728187,7.41265412e-05,-1.06820644e-07,8.15639829e-11,-3.25587649e-14,5.33044089e-18]),form="janaf",ent="janaf",cps="janaf-fit-methane")
+    with_rrho_low(poly(200,1500,[5.46363337,-0.0184728187,7.41265412e-05,-1.06820644e-07,8.15639829e-11,-3.25587649e-14,5.33044089e-18]),"methane",100,300),form="janaf",ent="janaf",cps="rrho-low+janaf-fit-methane")
 add("ethane","Ethane","C2H6","74-84-0",["C2"],30.070,184.55,305.32,48.72,145.5,0.279,0.099,-83.82,-31.86,229.2,
     gri(200,3500,low=[4.29142492,-5.50154270e-3,5.99438288e-5,-7.08466285e-8,2.68685771e-11],high=[1.07188150,2.16852677e-2,-1.00256067e-5,2.21412001e-9,-1.90002890e-13]),cps="gri30")
 add("propane","Propane","C3H8","74-98-6",["C3"],44.097,231.02,369.83,42.48,200.0,0.276,0.152,-104.68,-24.29,270.3,
-    gri(300,5000,low=[0.93355381,0.026424579,6.1059727e-6,-2.1977499e-8,9.5149253e-12],high=[7.5341368,0.018872239,-6.2718491e-6,9.1475649e-10,-4.7838069e-14]),cps="gri30")
+    alylee(200,1500,0.5192,1.9245,1.6265,1.168,723.6),cps="perry-aly-lee-propane")
 add("n-butane","n-Butane","C4H10","106-97-8",["butane","nC4","n-C4"],58.123,272.66,425.12,37.96,255.0,0.274,0.200,-125.79,-16.57,310.0,
     alylee(200,1500,0.7134,2.43,1.63,1.5033,730.42))
 add("isobutane","Isobutane","C4H10","75-28-5",["2-methylpropane","iC4","i-C4","i-butane"],58.123,261.34,407.85,36.40,262.7,0.278,0.186,-134.99,-21.44,295.4,
@@ -198,7 +234,7 @@ add("n-hexadecane","n-Hexadecane","C16H34","544-76-3",["hexadecane","cetane","nC
 
 # ---- olefins, diolefins, acetylene
 add("ethylene","Ethylene","C2H4","74-85-1",["ethene","C2="],28.054,169.42,282.34,50.41,131.1,0.281,0.087,52.467,68.421,219.330,
-    gri(200,3500,low=[3.95920148,-7.57052247e-3,5.70990292e-5,-6.91588753e-8,2.69884373e-11],high=[2.03611116,1.46454151e-2,-6.71077915e-6,1.47222923e-9,-1.25706061e-13]),form="janaf",ent="janaf",cps="gri30")
+    with_rrho_low(gri(200,3500,low=[3.95920148,-7.57052247e-3,5.70990292e-5,-6.91588753e-8,2.69884373e-11],high=[2.03611116,1.46454151e-2,-6.71077915e-6,1.47222923e-9,-1.25706061e-13]),"ethylene",100,298.15),form="janaf",ent="janaf",cps="rrho-low+gri30")
 add("propylene","Propylene","C3H6","115-07-1",["propene","C3="],42.081,225.46,364.90,46.00,181.0,0.274,0.142,20.23,62.72,267.0,
     poling(50,1000,3.834,3.893,4.688,-6.013,2.283),cps="poling5-cp",crit="rpp4",tb="poling5")
 add("1-butene","1-Butene","C4H8","106-98-9",["but-1-ene","1-C4="],56.108,266.92,419.50,40.20,239.3,0.277,0.194,-0.54,70.37,307.86,
