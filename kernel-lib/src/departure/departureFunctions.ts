@@ -9,6 +9,13 @@ import { checkComposition, checkDensity, checkTemperature } from "../state/check
 import { residualProperties } from "../state/properties.js";
 import type { EnergySet } from "../state/types.js";
 import type { PressureModel } from "./pressureModel.js";
+import type { ResidualModel } from "../eos/types.js";
+import type { IntegratedResidual } from "./integrateIsotherm.js";
+
+/** Type guard: was this model built from a pressure function (so its departures are integrated)? */
+export function isPressureModel(model: ResidualModel): model is PressureModel {
+  return typeof (model as Partial<PressureModel>).integrate === "function";
+}
 
 /** Departures at one (T, rho, x). J/mol and J/(mol K). */
 export interface DepartureResult {
@@ -39,7 +46,8 @@ export interface DepartureFunctionOptions {
 }
 
 /**
- * Residual A, S, U, H, G and ln phi of a pressure-function model at (T, rho, x).
+ * Residual A, S, U, H, G and ln phi at (T, rho, x): integrated (with error estimates) for a
+ * pressure-function model, from the closed form (error estimate 0) for any other model.
  *
  * @example
  * ```ts
@@ -49,7 +57,7 @@ export interface DepartureFunctionOptions {
  * ```
  */
 export function departureFunctions(
-  model: PressureModel,
+  model: ResidualModel,
   temperatureK: number,
   densityMolPerM3: number,
   x: readonly number[],
@@ -58,9 +66,15 @@ export function departureFunctions(
   checkTemperature(temperatureK);
   checkDensity(densityMolPerM3);
   checkComposition(x, model.info.componentIds.length);
-  const r = model.integrate(temperatureK, densityMolPerM3, x, {
-    composition: options.composition ?? true,
-  });
+  const request = { composition: options.composition ?? true };
+  const r: IntegratedResidual = isPressureModel(model)
+    ? model.integrate(temperatureK, densityMolPerM3, x, request)
+    : {
+        derivatives: model.residual(temperatureK, densityMolPerM3, x, request),
+        errorEstimate: { a: 0, aT: 0, aTT: 0 },
+        evaluations: 0,
+        derivativeMethod: "closed form (the model's own residual Helmholtz energy)",
+      };
   const Rg = model.gasConstant ?? R_CODATA;
   const RT = Rg * temperatureK;
   const sets = residualProperties(temperatureK, r.derivatives, Rg);

@@ -21,7 +21,7 @@ export type {
   PlainPressureModelSpec,
   PressureModelSpecBase,
 } from "./pressureModel.js";
-export { departureFunctions } from "./departureFunctions.js";
+export { departureFunctions, isPressureModel } from "./departureFunctions.js";
 export type { DepartureResult, DepartureFunctionOptions } from "./departureFunctions.js";
 export { isothermDepartures } from "./isothermDepartures.js";
 export type { IsothermDepartureResult, IsothermDeparturePoint } from "./isothermDepartures.js";

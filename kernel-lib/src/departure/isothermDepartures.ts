@@ -1,7 +1,8 @@
 /**
- * Cumulative departures along one isotherm on a density grid, in one pass (for charts): the
- * integrals of integrateIsotherm.ts are accumulated panel by panel, [0, rho_1], [rho_1, rho_2],
- * ..., each by adaptive Gauss-Kronrod, so the cost is that of one integration to the last density.
+ * Cumulative departures along one isotherm on a density grid, in one pass (for charts). For a
+ * pressure-function model the integrals of integrateIsotherm.ts are accumulated panel by panel, [0, rho_1], [rho_1, rho_2],
+ * ..., each by adaptive Gauss-Kronrod, so the cost is that of one integration to the last density;
+ * any other model is evaluated point by point from its closed form.
  */
 import { R as R_CODATA } from "../constants.js";
 import { InputError, OutOfRangeError } from "../errors.js";
@@ -9,7 +10,8 @@ import { checkComposition, checkTemperature } from "../state/checkInputs.js";
 import { residualProperties } from "../state/properties.js";
 import type { EnergySet } from "../state/types.js";
 import { endpointWithSeries, integrateFromZero, isothermIntegrands } from "./integrateIsotherm.js";
-import type { PressureModel } from "./pressureModel.js";
+import type { ResidualModel } from "../eos/types.js";
+import { isPressureModel } from "./departureFunctions.js";
 
 /** One grid point of an isotherm. */
 export interface IsothermDeparturePoint {
@@ -42,7 +44,7 @@ export interface IsothermDepartureResult {
  * ```
  */
 export function isothermDepartures(
-  model: PressureModel,
+  model: ResidualModel,
   temperatureK: number,
   densitiesMolPerM3: readonly number[],
   x: readonly number[],
@@ -79,6 +81,26 @@ export function isothermDepartures(
       validRange: `below the model's maximum density ${rhoMax} mol/m3`,
       received: last,
     });
+  }
+  if (!isPressureModel(model)) {
+    // closed-form model: each point from its own residual (no integration, no error)
+    return {
+      temperatureK: T,
+      points: densitiesMolPerM3.map((rho) => {
+        const d = model.residual(T, rho, x);
+        const sets = residualProperties(T, d, Rg);
+        return {
+          densityMolPerM3: rho,
+          pressurePa: rho * Rg * T * (1 + d.aD),
+          Z: 1 + d.aD,
+          sameTemperatureAndDensity: sets.TV,
+          sameTemperatureAndPressure: sets.TP,
+          alphaErrorEstimate: 0,
+        };
+      }),
+      evaluations: 0,
+      derivativeMethod: "closed form (the model's own residual Helmholtz energy)",
+    };
   }
   const opts = model.integrationOptions;
   const quad = {

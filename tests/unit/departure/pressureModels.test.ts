@@ -145,3 +145,29 @@ describe("mixture pressure functions: composition derivatives", () => {
       expect(Math.abs(at.dnA![i] - bt.derivatives.dnA![i])).toBeLessThan(1e-8);
   });
 });
+
+describe("departures of closed-form models through the same functions", () => {
+  it("departureFunctions and isothermDepartures accept any model (closed form, zero error)", () => {
+    const pr = createModel("peng-robinson", comps("methane"));
+    const numeric = modelFromPressure({
+      name: "PR numeric",
+      components: ["methane"],
+      pressure: pr.pressureFunction,
+      maxDensity: (T, x) => pr.maxDensity(T, x),
+    });
+    const a = departureFunctions(pr, 250, 5000, [1]);
+    const b = departureFunctions(numeric, 250, 5000, [1]);
+    expect(a.errorEstimate.h).toBe(0);
+    expect(a.derivativeMethod).toMatch(/closed form/);
+    expect(Math.abs(a.sameTemperatureAndPressure.h - b.sameTemperatureAndPressure.h)).toBeLessThan(
+      1e-9 * R * 250,
+    );
+    const la = isothermDepartures(pr, 250, [100, 1000, 5000], [1]);
+    const lb = isothermDepartures(numeric, 250, [100, 1000, 5000], [1]);
+    la.points.forEach((p, k) =>
+      expect(
+        Math.abs(p.sameTemperatureAndDensity.s - lb.points[k].sameTemperatureAndDensity.s),
+      ).toBeLessThan(1e-9 * R),
+    );
+  });
+});
