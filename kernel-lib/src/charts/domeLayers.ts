@@ -7,6 +7,7 @@ import { toDisplay } from "./displayUnits.js";
 import type { ChartCriticalPoint, ChartSaturationRow } from "./saturationInput.js";
 import {
   curveRows,
+  plotValue,
   positionEncoding,
   shortNumber,
   type AxisPlan,
@@ -47,9 +48,9 @@ export function domeLayers(
       (!yAxis.log || yy > 0);
     if (!ok) continue;
     fillValues.push({
-      x: toDisplay(xl, xAxis.unit),
-      x2: toDisplay(xv, xAxis.unit),
-      y: toDisplay(yy, yAxis.unit),
+      x: plotValue(xl, xAxis.unit),
+      x2: plotValue(xv, xAxis.unit),
+      y: plotValue(yy, yAxis.unit),
     });
   }
   const boundary = [

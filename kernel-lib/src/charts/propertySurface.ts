@@ -21,6 +21,7 @@ import {
   checkText,
   curveRows,
   planAxis,
+  plotValue,
   positionEncoding,
   shortNumber,
   topLevel,
@@ -54,6 +55,11 @@ export interface PropertySurfaceChartOptions extends BaseChartOptions {
   logP?: boolean;
   /** Draw the heat map (false: isolines only). Default true. */
   heatmap?: boolean;
+  /**
+   * Most heat-map cells written into the spec; a finer grid is drawn with every k-th sample
+   * (isolines always use the full grid). Keeps records small. Default 12000 (about 110 x 110).
+   */
+  maxHeatmapCells?: number;
 }
 
 /**
@@ -109,23 +115,46 @@ export function propertySurfaceChart(
 
   const layers: Record<string, unknown>[] = [];
   if (options.heatmap ?? true) {
-    const xEdges = edges(ts, false);
-    const yEdges = edges(ps, logP);
+    const maxCells = options.maxHeatmapCells ?? 12000;
+    if (!(Number.isInteger(maxCells) && maxCells >= 4)) {
+      throw new InputError({
+        input: "maxHeatmapCells",
+        unit: "-",
+        validRange: "an integer >= 4",
+        received: maxCells,
+      });
+    }
+    const stride = Math.max(1, Math.ceil(Math.sqrt((ts.length * ps.length) / maxCells)));
+    const iKeep = strided(ts.length, stride);
+    const jKeep = strided(ps.length, stride);
+    if (stride > 1) {
+      warnings.add(
+        `The heat map shows every ${stride}th grid sample (${iKeep.length} x ${jKeep.length} cells); isolines use the full grid. Raise maxHeatmapCells to draw all.`,
+      );
+    }
+    const xEdges = edges(
+      iKeep.map((i) => ts[i]),
+      false,
+    );
+    const yEdges = edges(
+      jKeep.map((j) => ps[j]),
+      logP,
+    );
     const cells: Record<string, number>[] = [];
     let skipped = 0;
-    for (let i = 0; i < ts.length; i++) {
-      for (let j = 0; j < ps.length; j++) {
-        const v = values[i][j];
+    for (let i = 0; i < iKeep.length; i++) {
+      for (let j = 0; j < jKeep.length; j++) {
+        const v = values[iKeep[i]][jKeep[j]];
         if (!Number.isFinite(v)) {
           skipped++;
           continue;
         }
         cells.push({
-          x: toDisplay(xEdges[i], xAxis.unit),
-          x2: toDisplay(xEdges[i + 1], xAxis.unit),
-          y: toDisplay(yEdges[j], yAxis.unit),
-          y2: toDisplay(yEdges[j + 1], yAxis.unit),
-          value: toDisplay(v, vAxis.unit),
+          x: plotValue(xEdges[i], xAxis.unit),
+          x2: plotValue(xEdges[i + 1], xAxis.unit),
+          y: plotValue(yEdges[j], yAxis.unit),
+          y2: plotValue(yEdges[j + 1], yAxis.unit),
+          value: plotValue(v, vAxis.unit),
         });
       }
     }
@@ -174,8 +203,8 @@ export function propertySurfaceChart(
       if (line.length > longest.length) longest = line;
       line.forEach((p, order) =>
         lineRows.push({
-          x: toDisplay(p.x, xAxis.unit),
-          y: toDisplay(p.y, yAxis.unit),
+          x: plotValue(p.x, xAxis.unit),
+          y: plotValue(p.y, yAxis.unit),
           level: label,
           path: `${k}:${m}`,
           order,
@@ -371,5 +400,13 @@ function cutAtJump(
     } else current.push(p);
   }
   if (current.length >= 2) out.push(current);
+  return out;
+}
+
+/** Indices 0, k, 2k, ... and always the last one. */
+function strided(n: number, k: number): number[] {
+  const out: number[] = [];
+  for (let i = 0; i < n; i += k) out.push(i);
+  if (out[out.length - 1] !== n - 1) out.push(n - 1);
   return out;
 }

@@ -126,8 +126,8 @@ export function curveRows(
       }
       open = true;
       rows.push({
-        x: toDisplay(p.x, xAxis.unit),
-        y: toDisplay(p.y, yAxis.unit),
+        x: plotValue(p.x, xAxis.unit),
+        y: plotValue(p.y, yAxis.unit),
         series: curve.label,
         path: `${pathPrefix}${s}:${segment}`,
         order: rows.length,
@@ -185,6 +185,14 @@ export function lineTooltip(xAxis: AxisPlan, yAxis: AxisPlan, seriesTitle: strin
     { field: "x", type: "quantitative", title: xAxis.title, format: ".4~g" },
     { field: "y", type: "quantitative", title: yAxis.title, format: ".4~g" },
   ];
+}
+
+/**
+ * A coordinate in display units as written into a spec: 7 significant figures (a relative
+ * 1e-7, far below a pixel), which keeps specs of dense curves and heat maps about half the size.
+ */
+export function plotValue(valueSI: number, unit: DisplayUnit): number {
+  return Number(toDisplay(valueSI, unit).toPrecision(7));
 }
 
 /** Checks a plot dimension option. */

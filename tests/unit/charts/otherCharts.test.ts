@@ -293,3 +293,28 @@ describe("modelVsDataChart", () => {
     expect(() => modelVsDataChart({ ...input, data: [] })).toThrow(InputError);
   });
 });
+
+describe("propertySurfaceChart on a fine grid", () => {
+  it("caps the heat map cells, keeps the grid's corners, says so once", () => {
+    const ts = Array.from({ length: 200 }, (_, i) => 250 + i);
+    const ps = Array.from({ length: 200 }, (_, j) => 1e5 * Math.pow(10, (2 * j) / 199));
+    const values = ts.map((T) => ps.map((P) => P / (R * T)));
+    const spec = propertySurfaceChart(
+      {
+        temperaturesK: ts,
+        pressuresPa: ps,
+        values,
+        quantity: { name: "ρ ideal gas", kind: "molarDensity" },
+      },
+      { maxHeatmapCells: 2500 },
+    );
+    const rect = allLayers(spec).find((l) => (l.mark as any).type === "rect")!;
+    const cells = values.length && (rect.data as any).values.length;
+    expect(cells).toBeLessThanOrEqual(2601); // stride 4: 50 samples + the last on each axis
+    const xs = (rect.data as any).values.map((r: any) => r.x);
+    const x2s = (rect.data as any).values.map((r: any) => r.x2);
+    expect(Math.min(...xs)).toBeLessThan(250);
+    expect(Math.max(...x2s)).toBeGreaterThan(449);
+    expect(chartMeta(spec)!.warnings.filter((w) => /every 4th/.test(w)).length).toBe(1);
+  });
+});
