@@ -6,7 +6,7 @@
  * any proportion): such a request is refused with a PhaseUnavailableError that says what to give
  * instead. The labels are those of state/types.ts.
  */
-import { PhaseUnavailableError } from "../errors.js";
+import { PhaseUnavailableError, type ResultWarning } from "../errors.js";
 import type { ResidualModel } from "../eos/types.js";
 import { stateAtTP } from "../state/stateAt.js";
 import type { FluidBinding, FluidState, PhaseLabel } from "../state/types.js";
@@ -34,6 +34,8 @@ export interface PurePhaseResult {
   readonly critical: CriticalPointResult;
   /** The rule applied, in words. */
   readonly reason: string;
+  /** Warnings of the saturation state consulted (e.g. below the triple point). */
+  readonly warnings: readonly ResultWarning[];
 }
 
 /**
@@ -60,7 +62,7 @@ export function pureFluidPhaseAt(
   const critical = locateCriticalPoint(model);
   const T = temperatureK;
   const P = pressurePa;
-  const base = { temperatureK: T, pressurePa: P, critical };
+  const base = { temperatureK: T, pressurePa: P, critical, warnings: [] as ResultWarning[] };
   if (T >= critical.temperatureK) {
     return P >= critical.pressurePa
       ? { ...base, phase: "supercritical", reason: "T >= Tc and P >= Pc" }
@@ -73,6 +75,7 @@ export function pureFluidPhaseAt(
       `T = ${T} K, P = ${P} Pa lies on the saturation line of ${model.info.name} (saturation pressure ${psat} Pa at ${T} K): liquid and vapour coexist there in any proportion, so (T, P) does not fix the state of a pure fluid; give a quality (stateAtTemperatureQuality), or (P, h) or (P, s), or ask for the saturated liquid or vapour`,
     );
   }
+  base.warnings.push(...sat.warnings);
   return P > psat
     ? {
         ...base,

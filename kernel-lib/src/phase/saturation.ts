@@ -528,9 +528,11 @@ export function saturationAtPressure(
   // Start: from the ancillary (bisected) or Clausius-Clapeyron between Tc and 0.7 Tc.
   let T: number;
   {
-    const s7 = saturationAtTemperature(model, 0.7 * Tc, options);
+    // Anchor of the Clausius-Clapeyron start: 0.7 Tc, or the triple point when that is higher.
+    const tAnchor = Math.max(0.7 * Tc, hints.triple ? hints.triple.temperatureK : 0);
+    const s7 = saturationAtTemperature(model, tAnchor, options);
     const slope =
-      (Math.log(critical.pressurePa) - Math.log(s7.pressurePa)) / (1 / (0.7 * Tc) - 1 / Tc);
+      (Math.log(critical.pressurePa) - Math.log(s7.pressurePa)) / (1 / tAnchor - 1 / Tc);
     const invT = 1 / Tc + (Math.log(critical.pressurePa) - lnP) / slope;
     T = Math.min(Math.max(1 / invT, tLo), Tc * (1 - 1e-7));
   }
