@@ -61,3 +61,5 @@ export { residualCvFromPvt, checkCalorimetry } from "./residualCv.js";
 export type { ResidualCvProfile, ResidualCvMeasurement } from "./residualCv.js";
 export { departuresAcrossDome } from "./acrossDome.js";
 export type { SaturationData, DomeState, AcrossDomeResult } from "./acrossDome.js";
+export { surfacePressureModel } from "./surfacePressureModel.js";
+export type { SurfacePressureModelOptions } from "./surfacePressureModel.js";

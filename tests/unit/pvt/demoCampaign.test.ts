@@ -5,6 +5,13 @@ import { corvidK320CampaignCsv } from "../../../notebooks/data/corvidK320Campaig
 import { main } from "../../../kernel-lib/src/cli/main.js";
 import type { CliIo } from "../../../kernel-lib/src/cli/io.js";
 import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/index.js";
+import { createModel } from "../../../kernel-lib/src/eos/index.js";
+import { getComponent } from "../../../kernel-lib/src/components/index.js";
+import {
+  compareWithModel,
+  departuresFromPvt,
+  parsePvtCsv,
+} from "../../../kernel-lib/src/pvt/index.js";
 
 const FILE = path.join(__dirname, "../../../notebooks/data/corvid-k320-co2-pvt.csv");
 
@@ -62,5 +69,19 @@ describe("demo campaign (invented Corvid Point K-320 CO2, synthetic from Span-Wa
       const B = co2.residual(iso.T, 1e-3, [1]).aD / 1e-3;
       expect(Math.abs(json.virial.B[k] - B)).toBeLessThanOrEqual(3 * json.virial.uB[k]);
     });
+  });
+
+  it("compared with library models: Span-Wagner agrees, Peng-Robinson is measurably off in dense CO2", () => {
+    const co2 = getComponent("carbon-dioxide");
+    const data = parsePvtCsv(fs.readFileSync(FILE, "utf8"), {
+      molarMassKgPerMol: co2.molarMassKgPerMol,
+    });
+    const result = departuresFromPvt(data, { monteCarloSamples: 0 });
+    const sw = compareWithModel(result, referenceFluid("carbon-dioxide"));
+    const pr = compareWithModel(result, createModel("peng-robinson", [co2]));
+    const beyond = (c: typeof sw) => c.filter((p) => Math.abs(p.z.h) > 3).length / c.length;
+    expect(beyond(sw)).toBeLessThan(0.03);
+    expect(beyond(pr)).toBeGreaterThan(0.5);
+    expect(Math.max(...pr.map((p) => Math.abs(p.difference.h)))).toBeGreaterThan(100); // J/mol
   });
 });

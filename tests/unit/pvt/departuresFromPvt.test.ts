@@ -3,6 +3,8 @@ import {
   pvtFromArrays,
   compareWithModel,
   departuresFromPvt,
+  surfaceDerivatives,
+  surfacePressureModel,
   surfaceResidualModel,
 } from "../../../kernel-lib/src/pvt/index.js";
 import type { PvtRouteResult } from "../../../kernel-lib/src/pvt/index.js";
@@ -216,6 +218,22 @@ describe("departuresFromPvt: routes, refusals and the model hand-off", () => {
     const aT =
       (T * (model.residual(T + h, rho, [1]).a - model.residual(T - h, rho, [1]).a)) / (2 * h);
     expect(d.aT).toBeCloseTo(aT, 8);
+  });
+
+  it("hands the surface to the engine's own integrator (modelFromPressure): same derivatives as the closed form", () => {
+    const r = departuresFromPvt(campaign(coarse), { monteCarloSamples: 0 });
+    const engine = surfacePressureModel(r.surfaceFit.surface);
+    for (const [T, rho] of [
+      [320, 300],
+      [355, 3000],
+      [395, 6500],
+    ] as const) {
+      const a = engine.residual(T, rho, [1]);
+      const b = surfaceDerivatives(r.surfaceFit.surface, T, rho);
+      for (const k of ["a", "aD", "aT", "aDD", "aTT", "aDT"] as const) {
+        expect(Math.abs(a[k] - b[k])).toBeLessThan(1e-9 * (1 + Math.abs(b[k])));
+      }
+    }
   });
 
   it("compares the data-derived departures with a model (PR itself: differences within 3 u)", () => {
