@@ -57,7 +57,7 @@ export interface PropertySurfaceChartOptions extends BaseChartOptions {
   heatmap?: boolean;
   /**
    * Most heat-map cells written into the spec; a finer grid is drawn with every k-th sample
-   * (isolines always use the full grid). Keeps records small. Default 12000 (about 110 x 110).
+   * (isolines always use the full grid). Keeps records small (about 70 bytes per cell). Default 8000 (about 90 x 90).
    */
   maxHeatmapCells?: number;
 }
@@ -115,7 +115,7 @@ export function propertySurfaceChart(
 
   const layers: Record<string, unknown>[] = [];
   if (options.heatmap ?? true) {
-    const maxCells = options.maxHeatmapCells ?? 12000;
+    const maxCells = options.maxHeatmapCells ?? 8000;
     if (!(Number.isInteger(maxCells) && maxCells >= 4)) {
       throw new InputError({
         input: "maxHeatmapCells",
