@@ -14,6 +14,7 @@ import {
   referenceStateTRho,
 } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
 import { referenceIdealGasPure } from "../../../kernel-lib/src/eos/multiparameter/referenceIdealGas.js";
+import { buildReferenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluid.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 import { InputError, OutOfRangeError, UnknownNameError } from "../../../kernel-lib/src/errors.js";
 
@@ -136,5 +137,33 @@ describe("registry and validity policy", () => {
       expect(() => referenceStateTP(water, bad, 1e5)).toThrow(InputError);
       expect(() => referenceStateTP(water, 300, bad)).toThrow(InputError);
     }
+  });
+});
+
+describe("data-file checks (buildReferenceFluid)", () => {
+  const good = water.data;
+  it("every shipped file passes", () => {
+    for (const id of referenceFluidIds()) {
+      expect(() => buildReferenceFluid(referenceFluid(id).data)).not.toThrow();
+    }
+  });
+  it("a malformed record fails with the path of the field", () => {
+    const badTerm = {
+      ...good,
+      residual: {
+        ...good.residual,
+        power: good.residual.power.map((t, i) => (i === 3 ? { ...t, d: 1.5 } : t)),
+      },
+    };
+    expect(() => buildReferenceFluid(badTerm)).toThrow(/data\.residual\.power\[3\]\.d/);
+    expect(() => buildReferenceFluid({ ...good, molarMassKgPerMol: NaN })).toThrow(InputError);
+    expect(() =>
+      buildReferenceFluid({
+        ...good,
+        gasConstantJPerMolK: undefined,
+        specificGasConstantJPerKgK: undefined,
+      }),
+    ).toThrow(/gasConstant/);
+    expect(() => buildReferenceFluid({ ...good, id: "Water Vapour" })).toThrow(/data\.id/);
   });
 });

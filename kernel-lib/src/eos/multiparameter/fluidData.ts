@@ -3,6 +3,7 @@
  * multiparameter Helmholtz equation, its reducing and fixed points, validity range, ancillary
  * equations for saturation starting values, and full citations. The format is isochor's own.
  */
+import { InputError } from "../../errors.js";
 import type { IdealPartData } from "./idealPart.js";
 import type { ResidualPartData } from "./residualPart.js";
 
@@ -74,4 +75,105 @@ export interface ReferenceFluidData {
   };
   /** Third-law entropy of the ideal gas at 298.15 K and 1 bar, J/(mol K) (source in citations). */
   readonly thirdLawEntropyJPerMolK: number;
+}
+
+/**
+ * Checks a reference-fluid data record before it is compiled, so a malformed file (or a user's own
+ * fluid passed to buildReferenceFluid) fails with the path of the bad field instead of producing
+ * NaN. Checks presence, finiteness and sign of every number the equation uses; not the physics.
+ *
+ * @throws InputError naming the field (e.g. "data.residual.power[3].d"), its range and the value.
+ */
+export function checkReferenceFluidData(data: ReferenceFluidData): void {
+  const fail = (input: string, validRange: string, received: unknown): never => {
+    throw new InputError({ input: `data.${input}`, unit: "-", validRange, received });
+  };
+  const finite = (path: string, v: unknown): void => {
+    if (!(typeof v === "number" && Number.isFinite(v))) fail(path, "a finite number", v);
+  };
+  const positive = (path: string, v: unknown): void => {
+    if (!(typeof v === "number" && v > 0 && v < Infinity)) fail(path, "a finite number > 0", v);
+  };
+  const list = (path: string, v: unknown): readonly Record<string, unknown>[] => {
+    if (!Array.isArray(v)) fail(path, "an array", v);
+    return v as readonly Record<string, unknown>[];
+  };
+  if (!data || typeof data !== "object") fail("", "a reference-fluid data object", data);
+  if (!(typeof data.id === "string" && /^[a-z0-9]+(-[a-z0-9]+)*$/.test(data.id))) {
+    fail("id", "a lower-case hyphenated component id", data.id);
+  }
+  positive("molarMassKgPerMol", data.molarMassKgPerMol);
+  if (data.gasConstantJPerMolK === undefined && data.specificGasConstantJPerKgK === undefined) {
+    fail("gasConstantJPerMolK", "given (or specificGasConstantJPerKgK)", undefined);
+  }
+  if (data.gasConstantJPerMolK !== undefined)
+    positive("gasConstantJPerMolK", data.gasConstantJPerMolK);
+  if (data.specificGasConstantJPerKgK !== undefined) {
+    positive("specificGasConstantJPerKgK", data.specificGasConstantJPerKgK);
+  }
+  positive("reducing.temperatureK", data.reducing?.temperatureK);
+  positive("reducing.densityKgPerM3", data.reducing?.densityKgPerM3);
+  positive("critical.temperatureK", data.critical?.temperatureK);
+  positive("critical.densityKgPerM3", data.critical?.densityKgPerM3);
+  positive("critical.pressurePa", data.critical?.pressurePa);
+  positive("triple.temperatureK", data.triple?.temperatureK);
+  positive("triple.pressurePa", data.triple?.pressurePa);
+  for (const r of ["validity", "validity.extrapolation"] as const) {
+    const range = r === "validity" ? data.validity : data.validity?.extrapolation;
+    positive(`${r}.temperatureK.min`, range?.temperatureK?.min);
+    positive(`${r}.temperatureK.max`, range?.temperatureK?.max);
+    positive(`${r}.pressurePa.max`, range?.pressurePa?.max);
+  }
+  finite("ideal.c0", data.ideal?.c0);
+  finite("ideal.c1", data.ideal?.c1);
+  finite("ideal.logTau", data.ideal?.logTau);
+  list("ideal.power", data.ideal?.power).forEach((t, i) => {
+    finite(`ideal.power[${i}].n`, t.n);
+    finite(`ideal.power[${i}].t`, t.t);
+  });
+  list("ideal.planckEinstein", data.ideal?.planckEinstein).forEach((t, i) => {
+    finite(`ideal.planckEinstein[${i}].m`, t.m);
+    positive(`ideal.planckEinstein[${i}].theta`, t.theta);
+  });
+  const integer = (path: string, v: unknown): void => {
+    if (!(typeof v === "number" && Number.isInteger(v) && v >= 0 && v <= 32)) {
+      fail(path, "an integer from 0 to 32", v);
+    }
+  };
+  list("residual.power", data.residual?.power).forEach((t, i) => {
+    finite(`residual.power[${i}].n`, t.n);
+    integer(`residual.power[${i}].d`, t.d);
+    finite(`residual.power[${i}].t`, t.t);
+    integer(`residual.power[${i}].l`, t.l);
+  });
+  list("residual.gaussian", data.residual?.gaussian).forEach((t, i) => {
+    for (const k of ["n", "t", "alpha", "beta", "gamma", "epsilon"]) {
+      finite(`residual.gaussian[${i}].${k}`, t[k]);
+    }
+    integer(`residual.gaussian[${i}].d`, t.d);
+  });
+  list("residual.nonAnalytic", data.residual?.nonAnalytic).forEach((t, i) => {
+    finite(`residual.nonAnalytic[${i}].n`, t.n);
+    for (const k of ["a", "b", "beta", "A", "B", "C", "D"]) {
+      positive(`residual.nonAnalytic[${i}].${k}`, t[k]);
+    }
+  });
+  const anc = data.ancillaries;
+  positive("ancillaries.reducingTemperatureK", anc?.reducingTemperatureK);
+  for (const k of ["pressure", "liquidDensity", "vaporDensity"] as const) {
+    const a = anc?.[k];
+    if (!a || !["ln-ratio-times-Tc-over-T", "ln-ratio", "ratio-minus-one"].includes(a.form)) {
+      fail(
+        `ancillaries.${k}.form`,
+        '"ln-ratio-times-Tc-over-T", "ln-ratio" or "ratio-minus-one"',
+        a?.form,
+      );
+    }
+    positive(`ancillaries.${k}.reducingValue`, a.reducingValue);
+    list(`ancillaries.${k}.terms`, a.terms).forEach((t, i) => {
+      finite(`ancillaries.${k}.terms[${i}].n`, t.n);
+      finite(`ancillaries.${k}.terms[${i}].t`, t.t);
+    });
+  }
+  positive("thirdLawEntropyJPerMolK", data.thirdLawEntropyJPerMolK);
 }

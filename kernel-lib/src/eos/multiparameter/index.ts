@@ -7,6 +7,7 @@ export type {
   ValidityStatus,
 } from "./referenceFluid.js";
 export { buildReferenceFluid } from "./referenceFluid.js";
+export { checkReferenceFluidData } from "./fluidData.js";
 export { referenceStateTRho, referenceStateTP, referenceFluidBinding } from "./referenceStates.js";
 export type { ReferenceStateOptions } from "./referenceStates.js";
 export { referenceIdealGasPure, referenceIdealGasMixture } from "./referenceIdealGas.js";

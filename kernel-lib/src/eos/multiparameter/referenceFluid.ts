@@ -13,7 +13,7 @@ import type { ResultWarning } from "../../errors.js";
 import type { ModelInfo, ResidualDerivatives, ResidualModel, ResidualRequest } from "../types.js";
 import type { ReferenceState } from "../../idealgas/types.js";
 import { compileAncillary, type Ancillary } from "./ancillary.js";
-import type { RangeData, ReferenceFluidData } from "./fluidData.js";
+import { checkReferenceFluidData, type RangeData, type ReferenceFluidData } from "./fluidData.js";
 import { compileIdealPart, type IdealPart } from "./idealPart.js";
 import { referenceDensityRoots } from "./referenceDensity.js";
 import {
@@ -89,13 +89,18 @@ function inside(r: RangeData, temperatureK: number, pressurePa: number): boolean
   );
 }
 
-/** Builds a {@link ReferenceFluid} from its data file. */
+/**
+ * Builds a {@link ReferenceFluid} from its data record (the shipped files, or a user's own in the
+ * same format).
+ *
+ * @throws InputError naming the first malformed field of the record.
+ */
 export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
+  checkReferenceFluidData(data);
   const M = data.molarMassKgPerMol;
   const R =
     data.gasConstantJPerMolK ??
     (data.specificGasConstantJPerKgK !== undefined ? data.specificGasConstantJPerKgK * M : NaN);
-  if (!(R > 0)) throw new RangeError(`fluid ${data.id}: no gas constant in its data file`);
   const Tred = data.reducing.temperatureK;
   const rhoRed = data.reducing.densityKgPerM3 / M;
   const residualPart: ResidualPart = compileResidualPart(data.residual);
