@@ -192,3 +192,17 @@ describe("textbook worked example: Redlich-Kwong departures", () => {
     expect(Math.abs(props.TP.s + 6.546) / 6.546).toBeLessThan(3e-3);
   });
 });
+
+describe("virial model warnings", () => {
+  it("warns for polar components (no polar term) and above half the critical density", () => {
+    const model = createVirialModel(comps("methane", "water"));
+    const w = model.checkValidity!(400, 10, [0.9, 0.1]);
+    expect(w.some((m) => /water/.test(m.message))).toBe(true);
+    const pure = createVirialModel(comps("methane"));
+    expect(pure.checkValidity!(300, 10, [1])).toHaveLength(0);
+    // methane rho_c = 1 / Vc, about 10 kmol/m3; 8000 mol/m3 is far beyond half of it
+    expect(pure.checkValidity!(300, 8000, [1]).some((m) => m.code === "outside-validity")).toBe(
+      true,
+    );
+  });
+});

@@ -5,7 +5,7 @@
  *   f0 = 0.1445 - 0.330/Tr - 0.1385/Tr^2 - 0.0121/Tr^3 - 0.000607/Tr^8,
  *   f1 = 0.0637 + 0.331/Tr^2 - 0.423/Tr^3 - 0.008/Tr^8.
  * The polar term f2 (a/Tr^6 - b/Tr^8) is not included: for water, ammonia, alcohols the result is
- * the non-polar estimate and carries a warning from the virial model.
+ * the non-polar estimate, and the virial model (virialModel.ts) warns for strongly polar components.
  * Temperature derivatives are exact: with y = 1/Tr, T dB/dT = (R Tc/Pc)(-y f_y) and
  * T^2 d2B/dT2 = (R Tc/Pc)(y^2 f_yy + 2 y f_y).
  */

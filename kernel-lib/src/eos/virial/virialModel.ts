@@ -15,12 +15,30 @@
  */
 import { R } from "../../constants.js";
 import { InputError, OutOfRangeError, type ResultWarning } from "../../errors.js";
-import type { ModelInfo, ResidualDerivatives, ResidualModel, ResidualRequest } from "../types.js";
+import type { ModelInfo, ResidualDerivatives, ResidualRequest } from "../types.js";
 import { checkModelComponents, type ModelComponent } from "../modelComponent.js";
 import { resolveInteractions, type InteractionMatrix } from "../interaction/interactionTable.js";
 import { tsonopoulosB, type SecondVirial } from "./tsonopoulos.js";
 import { HyperDual } from "../../numerics/hyperDual.js";
 import type { ModelWithPressure } from "../pressureFunction.js";
+
+/**
+ * Components whose second virial coefficient needs Tsonopoulos' polar term (his f2 with fitted a, b),
+ * which this model does not include: they get a warning.
+ */
+const STRONGLY_POLAR = new Set([
+  "water",
+  "ammonia",
+  "methanol",
+  "ethanol",
+  "monoethanolamine",
+  "acetone",
+  "sulfur-dioxide",
+  "hydrogen-cyanide",
+  "hydrogen-chloride",
+  "methyl-mercaptan",
+  "ethyl-mercaptan",
+]);
 
 /** Options of {@link createVirialModel}. */
 export interface VirialModelOptions {
@@ -190,6 +208,13 @@ export function createVirialModel(
     checkValidity(T: number, rho: number, x: readonly number[]): ResultWarning[] {
       const pcr = model.pseudoCritical!(x);
       const warnings: ResultWarning[] = [];
+      const polar = ids.filter((id, i) => x[i] > 0 && STRONGLY_POLAR.has(id));
+      if (polar.length > 0) {
+        warnings.push({
+          code: "model-limitation",
+          message: `${polar.join(", ")}: strongly polar or hydrogen-bonding; Tsonopoulos' polar term is not included, so B is the non-polar estimate and can be far too small in magnitude`,
+        });
+      }
       if (rho > 0.5 * pcr.densityMolPerM3) {
         warnings.push({
           code: "outside-validity",
