@@ -1,0 +1,132 @@
+/**
+ * Departures from P-V-T data with their uncertainty bands, as a Vega-Lite spec: one residual
+ * property against density, one colour per isotherm, a band of +/- k standard uncertainties
+ * (k = 2 by default, about 95 % for a normal distribution, JCGM 100:2008 §6.3), the data-derived
+ * states as points, and optionally a model's departures as dashed lines (from compareWithModel).
+ * A pure function: the returned spec is plain JSON the user may still edit. SI molar units on the
+ * axes (mol/m3; J/mol or J/(mol K)).
+ */
+import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
+import { InputError } from "../errors.js";
+import type { ModelComparisonPoint } from "./compareWithModel.js";
+import type { PvtRouteResult } from "./departuresFromPvt.js";
+
+export interface DepartureBandChartOptions {
+  /** Which residual property. Default "h". */
+  quantity?: "a" | "s" | "u" | "h" | "g";
+  /** Coverage factor of the band. Default 2. */
+  coverageFactor?: number;
+  /** A model comparison to overlay (dashed lines), and its label. */
+  model?: { label: string; points: readonly ModelComparisonPoint[] };
+  /** Chart title. Default "Residual <name> from P-V-T data". */
+  title?: string;
+  /** Size in px. Defaults 560 x 340. */
+  width?: number;
+  height?: number;
+}
+
+const NAMES = {
+  a: "Helmholtz energy",
+  s: "entropy",
+  u: "internal energy",
+  h: "enthalpy",
+  g: "Gibbs energy",
+};
+const UNITS = { a: "J/mol", s: "J/(mol K)", u: "J/mol", h: "J/mol", g: "J/mol" };
+
+export function departureBandChart(
+  result: PvtRouteResult,
+  options: DepartureBandChartOptions = {},
+): VegaLiteSpec {
+  const q = options.quantity ?? "h";
+  if (!(q in NAMES)) {
+    throw new InputError({
+      input: "options.quantity",
+      unit: "-",
+      validRange: "one of a, s, u, h, g",
+      received: q,
+    });
+  }
+  const k = options.coverageFactor ?? 2;
+  if (!(k > 0 && k < Infinity)) {
+    throw new InputError({
+      input: "options.coverageFactor",
+      unit: "-",
+      validRange: "a finite number > 0",
+      received: k,
+    });
+  }
+  const label = (t: number) => `${t.toFixed(1)} K`;
+  const rows = result.isotherms.flatMap((iso) =>
+    iso.states.map((s) => ({
+      isotherm: label(iso.temperatureK),
+      rho: s.densityMolPerM3,
+      value: s.residual[q],
+      lower: s.residual[q] - k * s.uncertainty[q],
+      upper: s.residual[q] + k * s.uncertainty[q],
+      u: s.uncertainty[q],
+    })),
+  );
+  const unit = UNITS[q];
+  const x = { field: "rho", type: "quantitative", title: "Molar density ρ / (mol/m3)" };
+  const color = { field: "isotherm", type: "nominal", title: "Isotherm", sort: null };
+  const layers: Record<string, unknown>[] = [
+    {
+      data: { values: rows },
+      mark: { type: "area", opacity: 0.25 },
+      encoding: {
+        x,
+        y: { field: "lower", type: "quantitative", title: `Residual ${NAMES[q]} / (${unit})` },
+        y2: { field: "upper" },
+        color,
+      },
+    },
+    {
+      data: { values: rows },
+      mark: { type: "line", point: true },
+      encoding: {
+        x,
+        y: { field: "value", type: "quantitative" },
+        color,
+        tooltip: [
+          { field: "isotherm", type: "nominal" },
+          { field: "rho", type: "quantitative", title: "ρ / (mol/m3)", format: ".5~g" },
+          { field: "value", type: "quantitative", title: `${q}_res / (${unit})`, format: ".5~g" },
+          { field: "u", type: "quantitative", title: `u / (${unit})`, format: ".2~g" },
+        ],
+      },
+    },
+  ];
+  if (options.model) {
+    layers.push({
+      data: {
+        values: options.model.points.map((p) => ({
+          isotherm: label(p.temperatureK),
+          rho: p.densityMolPerM3,
+          model: p.model[q],
+        })),
+      },
+      mark: { type: "line", strokeDash: [6, 4] },
+      encoding: { x, y: { field: "model", type: "quantitative" }, color },
+    });
+  }
+  return {
+    $schema: "https://vega.github.io/schema/vega-lite/v6.json",
+    title: {
+      text: options.title ?? `Residual ${NAMES[q]} from P-V-T data`,
+      subtitle:
+        `bands: ±${k} standard uncertainties` +
+        (options.model ? `; dashed: ${options.model.label}` : ""),
+    },
+    width: options.width ?? 560,
+    height: options.height ?? 340,
+    layer: layers,
+    usermeta: {
+      isochor: {
+        chart: "pvt-departure-band",
+        units: { molarDensity: "mol/m3", [q]: unit },
+        warnings: [],
+      },
+    },
+  } as VegaLiteSpec;
+}

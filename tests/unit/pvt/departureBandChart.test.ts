@@ -1,0 +1,55 @@
+import { describe, expect, it } from "vitest";
+import {
+  compareWithModel,
+  departureBandChart,
+  departuresFromPvt,
+  surfaceResidualModel,
+} from "../../../kernel-lib/src/pvt/index.js";
+import { InputError } from "../../../kernel-lib/src/errors.js";
+import { compileSpec, schemaErrors } from "../charts/specCheck.js";
+import { campaign, geometric, range } from "./campaign.js";
+import { pressurePR } from "./pengRobinsonTruth.js";
+
+describe("departureBandChart", () => {
+  const result = departuresFromPvt(
+    campaign({
+      densities: geometric(200, 6000, 6),
+      temperatures: range(310, 370, 4),
+      pressure: pressurePR,
+      relativeUP: 2e-4,
+      seed: 3,
+    }),
+    { monteCarloSamples: 0 },
+  );
+
+  it("validates against the Vega-Lite schema and compiles, with bands of +/- 2 u around every state", async () => {
+    const spec = departureBandChart(result, { quantity: "s" });
+    expect(schemaErrors(spec)).toEqual([]);
+    const { warnings } = await compileSpec(spec);
+    expect(warnings).toEqual([]);
+    const rows = (
+      spec.layer as {
+        data: { values: { value: number; lower: number; upper: number; u: number }[] };
+      }[]
+    )[0]!.data.values;
+    expect(rows).toHaveLength(4 * 6);
+    for (const r of rows) {
+      expect(r.upper - r.value).toBeCloseTo(2 * r.u, 12);
+      expect(r.value - r.lower).toBeCloseTo(2 * r.u, 12);
+    }
+  });
+
+  it("overlays a model as a third layer and names it in the subtitle", async () => {
+    const cmp = compareWithModel(result, surfaceResidualModel(result.surfaceFit.surface));
+    const spec = departureBandChart(result, { model: { label: "surface fit", points: cmp } });
+    expect((spec.layer as unknown[]).length).toBe(3);
+    expect(JSON.stringify(spec.title)).toMatch(/dashed: surface fit/);
+    expect(schemaErrors(spec)).toEqual([]);
+    await compileSpec(spec);
+  });
+
+  it("refuses an unknown quantity and a bad coverage factor", () => {
+    expect(() => departureBandChart(result, { quantity: "x" as "h" })).toThrow(InputError);
+    expect(() => departureBandChart(result, { coverageFactor: Number.NaN })).toThrow(InputError);
+  });
+});
