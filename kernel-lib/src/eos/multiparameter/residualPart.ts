@@ -15,9 +15,15 @@
  *
  * Derivatives are returned "reduced" (multiplied by the variable): delta phi_d, delta^2 phi_dd,
  * delta^3 phi_ddd, tau phi_t, tau^2 phi_tt, delta tau phi_dt. For the power, exponential and
- * Gaussian terms all are analytic. For the non-analytic terms delta^3 phi_ddd is obtained by a
- * central difference of their analytic phi_dd (step 1e-6 delta; relative error about 1e-9 of
- * those two or three terms), which is adequate for the critical-point work it serves.
+ * Gaussian terms all are analytic. For the non-analytic terms delta^3 phi_ddd is obtained, only
+ * when asked for (`third`), by a central difference of their analytic phi_dd (step 1e-6 delta;
+ * relative error about 1e-9 of those two or three terms); otherwise it is NaN, and the model
+ * leaves aDDD out so that callers fall back on their own differences.
+ *
+ * Speed (this runs in the engine's tight loops): integer powers of delta and tau come from tables
+ * of repeated products, exponents that are multiples of 1/8 from tau^(1/8) (three square roots),
+ * terms with equal exp(-g delta^l) share one exp(), and non-analytic terms with equal
+ * (a, beta, A, B) share theta and Delta.
  */
 
 /** One power term (l = 0) or exponential term (l > 0): n delta^d tau^t exp(-g delta^l). */
