@@ -15,7 +15,10 @@ import {
   pureFluidPhaseAt,
   pureFluidStateTP,
 } from "../../../kernel-lib/src/phase/pureFluidPhase.js";
-import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
+import {
+  saturationAtPressure,
+  saturationAtTemperature,
+} from "../../../kernel-lib/src/phase/saturation.js";
 
 describe("phase at (T, P) and the state found there agree", () => {
   for (const id of referenceFluidIds()) {
@@ -47,6 +50,25 @@ describe("phase at (T, P) and the state found there agree", () => {
           },
         ),
         { numRuns: 80 },
+      );
+    });
+  }
+});
+
+describe("saturation at given P inverts saturation at given T", () => {
+  for (const id of referenceFluidIds()) {
+    it(id, () => {
+      const fluid = referenceFluid(id);
+      const Tt = fluid.triple.temperatureK;
+      const Tc = fluid.critical.temperatureK;
+      fc.assert(
+        fc.property(fc.double({ min: 0, max: 1, noNaN: true }), (u) => {
+          const T = Tt + u * (Tc - 0.01 - Tt);
+          const p = saturationAtTemperature(fluid, T).pressurePa;
+          const back = saturationAtPressure(fluid, p);
+          expect(Math.abs(back.temperatureK - T)).toBeLessThan(1e-9 * T);
+        }),
+        { numRuns: 20 },
       );
     });
   }
