@@ -15,7 +15,7 @@ export function extrapolatedTemperatureWarning(
   return {
     code: "extrapolated",
     message:
-      `${componentId}: ${temperatureK} K is outside the ${range.min}-${range.max} K range of its ` +
+      `${componentId}: ${kelvin(temperatureK)} K is outside the ${range.min}-${range.max} K range of its ` +
       `${method}; the value is extrapolated. Check it against another source, or use a component ` +
       `with a wider-range correlation.`,
   };
@@ -50,7 +50,7 @@ export function outOfRangeAdvice(
   }
   choices.push(
     isCorrelation
-      ? `give ${componentId} a cp correlation valid at ${temperatureK} K (defineComponent with ` +
+      ? `give ${componentId} a cp correlation valid at ${kelvin(temperatureK)} K (defineComponent with ` +
           `your own idealGasCp, cited)`
       : "use a model valid at this temperature",
   );
@@ -69,4 +69,9 @@ export function outOfRangeAdvice(
     );
   }
   return `To go on: ${choices.join("; or ")}`;
+}
+
+/** A temperature for a message: rounded to 1e-6 K, so 273.15 + (-80) reads 193.15, not 193.14999999999998. */
+function kelvin(temperatureK: number): string {
+  return String(Number(temperatureK.toFixed(6)));
 }
