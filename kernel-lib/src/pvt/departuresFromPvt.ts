@@ -277,8 +277,8 @@ export function departuresFromPvt(
   if (isochoreRoute) {
     const used = new Set(groups.flatMap((g) => g.members));
     const out = new Set(routeSetAside.map((s) => s.line));
-    pts.forEach((p) => {
-      if (!used.has(pts.indexOf(p)) && !out.has(p.line)) {
+    pts.forEach((p, i) => {
+      if (!used.has(i) && !out.has(p.line)) {
         routeSetAside.push({
           line: p.line,
           temperatureK: p.temperatureK,
@@ -519,6 +519,16 @@ export function departuresFromPvt(
       nodeSets.push(idx);
     }
     const surfSigma = sigmaEff;
+    const { minTemperatureK: tLo, maxTemperatureK: tHi } = surfaceFit.surface.range;
+    for (const t of isothermTs) {
+      if (!(t >= tLo - tolT && t <= tHi + tolT)) {
+        diagnostics.push({
+          code: "extrapolated",
+          severity: "warning",
+          message: `isotherm ${t.toFixed(2)} K lies outside the measured temperatures (${tLo.toFixed(2)} to ${tHi.toFixed(2)} K): its departures are an extrapolation of the surface fit`,
+        });
+      }
+    }
     const distinctTemperatures = new Set(T.map((t) => t.toPrecision(8))).size;
     evaluate = (P) => {
       const frozen = {

@@ -105,3 +105,39 @@ describe("isochor pvt", () => {
     expect(err.join("")).toMatch(/readable CSV file/);
   });
 });
+
+describe("isochor pvt on data measured along isotherms (surface route)", () => {
+  it("answers with the same JSON shape and says which route it took", async () => {
+    const rows = ["T [degC],v [L/mol],P [bar],u(P) [bar]"];
+    [320, 340, 360, 380].forEach((t, k) => {
+      for (const d of [150, 400, 900, 1600, 2600, 3800]) {
+        const rho = d * (1 + 0.02 * k);
+        rows.push(
+          `${(t - 273.15).toFixed(2)},${(1000 / rho).toFixed(9)},${(pressurePR(t, rho) / 1e5).toFixed(7)},0.002`,
+        );
+      }
+    });
+    const { io, out, err } = capture(tmp);
+    expect(
+      await main(["pvt", write("isotherms.csv", rows.join("\n") + "\n"), "--samples", "0"], io),
+    ).toBe(0);
+    const json = JSON.parse(out.join(""));
+    expect(Object.keys(json).sort()).toEqual(["diagnostics", "isotherms", "virial"]);
+    expect(json.isotherms).toHaveLength(4);
+    expect(json.isotherms[0].points).toHaveLength(6);
+    expect(json.diagnostics.some((d: { code: string }) => d.code === "route")).toBe(true);
+    expect(err.join("")).toMatch(/route "surface"/);
+  });
+
+  it("refuses too few points with exit code 1 and nothing on stdout", async () => {
+    const { io, out, err } = capture(tmp);
+    expect(
+      await main(
+        ["pvt", write("few.csv", "T [K],rho [mol/m3],P [Pa]\n300,100,2.4e5\n310,100,2.5e5\n")],
+        io,
+      ),
+    ).toBe(1);
+    expect(out.join("")).toBe("");
+    expect(err.join("")).toMatch(/at least 6 accepted points/);
+  });
+});
