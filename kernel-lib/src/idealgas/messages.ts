@@ -45,7 +45,8 @@ export function outOfRangeAdvice(
   if (isCorrelation && listMolecules().includes(componentId)) {
     choices.push(
       `use the statistical-mechanics route, which has molecular constants for ${componentId} ` +
-        `(idealGasFromMolecule("${componentId}"), or idealGas: "molecular" in defineFluid)`,
+        `(idealGasFromMolecule("${componentId}"), or idealGas: "molecular" in defineFluid; its ` +
+        `validTemperatureK says how far down it goes)`,
     );
   }
   choices.push(
