@@ -23,6 +23,7 @@ export {
   stateAtPressureQuality,
   stateAtPressureEnthalpy,
   stateAtPressureEntropy,
+  stateAtTemperatureDensity,
 } from "./twoPhaseState.js";
 export type {
   TwoPhaseState,

@@ -150,6 +150,35 @@ export function stateAtPressureQuality(
   return mix(binding, saturationAtPressure(binding.model, pressurePa, options), quality);
 }
 
+/**
+ * The pure fluid at temperature T (K) and overall molar density rho (mol/m3), e.g. a closed
+ * vessel: two-phase with its quality when rho lies between the saturated vapour and liquid
+ * densities (q from v = (1 - q) v_L + q v_V), else the single-phase state at (T, rho).
+ *
+ * @throws InputError for bad T or rho.
+ */
+export function stateAtTemperatureDensity(
+  binding: FluidBinding,
+  temperatureK: number,
+  densityMolPerM3: number,
+  options: SaturationOptions = {},
+): PureFluidStateResult {
+  requirePure(binding.model, "a state at given (T, rho)");
+  requirePositive("temperatureK", temperatureK, "K");
+  requirePositive("densityMolPerM3", densityMolPerM3, "mol/m3");
+  const critical = locateCriticalPoint(binding.model);
+  if (temperatureK < critical.temperatureK) {
+    const sat = saturationAtTemperature(binding.model, temperatureK, options);
+    const rhoL = sat.liquidDensityMolPerM3;
+    const rhoV = sat.vaporDensityMolPerM3;
+    if (densityMolPerM3 > rhoV && densityMolPerM3 < rhoL) {
+      const q = (1 / densityMolPerM3 - 1 / rhoL) / (1 / rhoV - 1 / rhoL);
+      return mix(binding, sat, q);
+    }
+  }
+  return { kind: "single-phase", state: stateAtTRho(binding, temperatureK, densityMolPerM3, [1]) };
+}
+
 /** Options of {@link stateAtPressureEnthalpy} and {@link stateAtPressureEntropy}. */
 export interface DomeInversionOptions extends SaturationOptions {
   /** Initial guess for a supercritical-pressure inversion, K. Default the critical temperature. */

@@ -15,6 +15,7 @@ import {
   stateAtPressureEnthalpy,
   stateAtPressureEntropy,
   stateAtPressureQuality,
+  stateAtTemperatureDensity,
   stateAtTemperatureQuality,
 } from "../../../kernel-lib/src/phase/twoPhaseState.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
@@ -162,5 +163,26 @@ describe("(P, h) and (P, s) across the dome", () => {
     const r = stateAtPressureEnthalpy(steam, 30e6, s.molar.h);
     expect(r.kind).toBe("single-phase");
     if (r.kind === "single-phase") expect(Math.abs(r.state.temperatureK - 800)).toBeLessThan(1e-6);
+  });
+});
+
+describe("(T, rho): a closed vessel", () => {
+  it("inside the dome: quality from the lever rule on volumes (R6-95 Table 8 densities, 450 K)", () => {
+    // v = (1 - q)/rho' + q/rho'' with rho' = 890.341250, rho'' = 4.81200360 kg/m3 (Table 8)
+    const q = 0.2;
+    const v = (1 - q) / 0.89034125e3 + q / 0.48120036e1;
+    const r = stateAtTemperatureDensity(steam, 450, 1 / v / M);
+    expect(r.kind).toBe("two-phase");
+    if (r.kind === "two-phase") {
+      expect(Math.abs(r.quality - q)).toBeLessThan(1e-8);
+      expect(rel(r.pressurePa / 1e6, ps450)).toBeLessThan(1e-8);
+    }
+  });
+  it("outside the dome or above Tc: the single-phase state", () => {
+    const liquid = stateAtTemperatureDensity(steam, 450, 950 / M);
+    const hot = stateAtTemperatureDensity(steam, 700, 300 / M);
+    expect(liquid.kind).toBe("single-phase");
+    expect(hot.kind).toBe("single-phase");
+    expect(() => stateAtTemperatureDensity(steam, 450, NaN)).toThrow(InputError);
   });
 });
