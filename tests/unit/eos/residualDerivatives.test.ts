@@ -89,3 +89,22 @@ describe("closed-form residual derivatives match differences of alpha_r", () => 
     checkDerivatives(createModel("peng-robinson", comps(...MIX), { kij }), 300, 5000, XMIX);
   });
 });
+
+describe("departures vanish as the density goes to zero (every model)", () => {
+  for (const id of MODEL_IDS) {
+    it(`${id}: alpha_r and its derivatives scale like rho (ratio of values at rho and rho/10 is 10)`, () => {
+      const model = createModel(id, comps(...MIX));
+      const a = model.residual(300, 1e-3, XMIX, { composition: true });
+      const b = model.residual(300, 1e-4, XMIX, { composition: true });
+      for (const k of ["a", "aD", "aT", "aTT", "aDT"] as const) {
+        if (a[k] === 0) {
+          expect(b[k]).toBe(0); // the ideal gas
+          continue;
+        }
+        expect(a[k] / b[k]).toBeCloseTo(10, 4);
+        expect(Math.abs(a[k])).toBeLessThan(1e-3);
+      }
+      a.dnA!.forEach((d) => expect(Math.abs(d)).toBeLessThan(1e-3));
+    });
+  }
+});
