@@ -160,9 +160,19 @@ function rawIntegrands(
  * Switch density where |Z - 1| is about 1e-6, found from the slope of Z - 1 at a probe density
  * (two refinements), capped at half the close-packing density and at 1e8 times the probe.
  */
-function switchDensity(zMinusOne: (r: number) => number, probe: number, rhoMax: number): number {
+function switchDensity(
+  zMinusOne: (r: number) => number,
+  probe: number,
+  rhoMax: number,
+  probeZMinusOne?: number,
+): number {
   const cap = Math.min(Number.isFinite(rhoMax) ? 0.5 * rhoMax : Infinity, probe * 1e8);
   let r = Math.min(probe, cap);
+  // a known Z - 1 at the probe well above the target (1e-4) places rho_s in one step: the series
+  // region is where Z - 1 is linear in rho, and a factor of ten either way is harmless
+  if (probeZMinusOne !== undefined && r === probe && Math.abs(probeZMinusOne) >= 1e-4) {
+    return (r * 1e-6) / Math.abs(probeZMinusOne);
+  }
   for (let k = 0; k < 3; k++) {
     const z = Math.abs(zMinusOne(r));
     if (!(z > 0)) return Math.min(cap, r * 1e4);
@@ -181,6 +191,7 @@ export function isothermIntegrands(
   gasConstant: number,
   maxDensityMolPerM3: number,
   probeDensityMolPerM3: number,
+  probeZMinusOne?: number,
 ): IsothermIntegrands {
   const T = temperatureK;
   const RT = gasConstant * T;
@@ -197,6 +208,7 @@ export function isothermIntegrands(
     },
     probeDensityMolPerM3,
     rhoMax,
+    probeZMinusOne,
   );
   const f1 = new Float64Array(5);
   const f2 = new Float64Array(5);
@@ -366,14 +378,25 @@ export function integrateResidual(
   const Rg = options.gasConstant ?? R_CODATA;
   const RT = Rg * T;
   const rhoMax = options.maxDensityMolPerM3 ?? Infinity;
-  const line = isothermIntegrands(evaluator, T, x, Rg, rhoMax > rho ? rhoMax : Infinity, rho);
+  // the endpoint first: its Z - 1 also places the series start
+  const direct = endpointDerivatives(evaluator, T, rho, x, Rg);
+  const line = isothermIntegrands(
+    evaluator,
+    T,
+    x,
+    Rg,
+    rhoMax > rho ? rhoMax : Infinity,
+    rho,
+    direct.aD,
+  );
   const exactQuad = tolerances(options, false);
   const derivQuad = tolerances(options, !evaluator.exact);
   const ia = integrateFromZero(line, 0, 0, rho, exactQuad);
   const iT = integrateFromZero(line, 1, 0, rho, derivQuad);
   const iTT = integrateFromZero(line, 2, 0, rho, derivQuad);
   const fd = finiteDifferenceBound(evaluator, line, rho);
-  const end = endpointWithSeries(evaluator, line, T, rho, x, Rg);
+  const end =
+    rho < line.series.densityMolPerM3 ? endpointWithSeries(evaluator, line, T, rho, x, Rg) : direct;
   let evaluations = line.evaluations() + 2;
   const aD = end.aD;
   const derivatives: {
@@ -402,10 +425,11 @@ export function integrateResidual(
     const xp = new Array<number>(n);
     const xm = new Array<number>(n);
     const rs = line.series.densityMolPerM3;
-    // differenced integrand: rounding noise about eps/h = 2e-11 per node, so 1e-10 absolute at best
+    // differenced integrand: rounding noise about eps/h = 2e-11 in D_i Z per node, integrated
+    // against 1/rho over many decades of density: about 1e-9 absolute at best
     const compQuad = {
       ...tolerances(options, true),
-      absTolerance: Math.max(options.absTolerance ?? 0, 1e-10),
+      absTolerance: Math.max(options.absTolerance ?? 0, 1e-9),
     };
     for (let i = 0; i < n; i++) {
       let onVertex = true;
