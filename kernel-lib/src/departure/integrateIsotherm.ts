@@ -12,7 +12,9 @@
  * Composition derivatives: d(n alpha_r)/dn_i = alpha_r + aD + D_i alpha_r, D_i the directional
  * derivative along x + h (e_i - x) (which stays on the simplex), integrated the same way with
  * D_i Z by central differences in mole fraction, h = 1e-5 (forward three-point where x_i < 2h);
- * error O(h^2) (about 1e-10 for smooth mixing rules) plus rounding eps/h (about 1e-11).
+ * error O(h^2) (about 1e-10 for smooth mixing rules) plus rounding eps/h (about 2e-11 per node,
+ * which integrated against 1/rho over many decades of density limits ln phi of a mixture to about
+ * 1e-9 absolute; pure fluids need no differencing).
  *
  * Series start: the integrand (Z-1)/rho' tends to the second virial coefficient B as rho' -> 0,
  * but computed from P it loses digits there (Z - 1 is a difference of nearly equal numbers: at
