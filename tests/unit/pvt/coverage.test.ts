@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { departuresFromPvt } from "../../../kernel-lib/src/pvt/index.js";
+import { departuresFromPvt, pvtFromArrays } from "../../../kernel-lib/src/pvt/index.js";
+import { seededRandom } from "../../../kernel-lib/src/pvt/seededRandom.js";
 import { campaign, geometric, range } from "./campaign.js";
 import { departuresPR, pressurePR, secondVirialPR } from "./pengRobinsonTruth.js";
 
@@ -63,6 +64,44 @@ describe("uncertainty coverage over many seeds", () => {
     );
     expect(c.rate).toBeGreaterThanOrEqual(0.9);
     expect(c.rate).toBeLessThanOrEqual(0.99);
+  });
+
+  it("surface route (data on isotherms): coverage in 90-99 % over 40 campaigns", () => {
+    let inside = 0;
+    let total = 0;
+    for (let seed = 1; seed <= 40; seed++) {
+      const rng = seededRandom(seed);
+      const T: number[] = [];
+      const D: number[] = [];
+      const P: number[] = [];
+      const U: number[] = [];
+      [320, 335, 350, 365, 380].forEach((t, k) =>
+        geometric(100, 5000, 10).forEach((d) => {
+          const rho = d * (1 + 0.03 * k); // each isotherm at its own densities
+          const p = pressurePR(t, rho);
+          T.push(t);
+          D.push(rho);
+          P.push(p + 2e-4 * p * rng.normal());
+          U.push(2e-4 * p);
+        }),
+      );
+      const r = departuresFromPvt(
+        pvtFromArrays({ temperatureK: T, densityMolPerM3: D, pressurePa: P, uPressurePa: U }),
+        { monteCarloSamples: 0 },
+      );
+      expect(r.route).toBe("surface");
+      for (const iso of r.isotherms) {
+        for (const st of iso.states) {
+          const tr = departuresPR(iso.temperatureK, st.densityMolPerM3);
+          for (const k of KEYS) {
+            total++;
+            if (Math.abs(st.residual[k] - tr[k]) <= 1.96 * st.uncertainty[k]) inside++;
+          }
+        }
+      }
+    }
+    expect(inside / total).toBeGreaterThanOrEqual(0.9);
+    expect(inside / total).toBeLessThanOrEqual(0.99);
   });
 
   it("the same seed reproduces the same Monte Carlo uncertainty exactly", () => {
