@@ -32,11 +32,11 @@ function cpuSeconds(): number {
 
 let sink: unknown;
 
-/** Median seconds per call of `fn`. */
+/** Median seconds per call of `fn` (CPU and wall clock). */
 export function measure(
   fn: () => unknown,
   options: { samples?: number; batchSeconds?: number } = {},
-): number {
+): Timing {
   const samples = options.samples ?? 15;
   const batchSeconds = options.batchSeconds ?? 0.02;
   // size the batch
