@@ -54,8 +54,8 @@ function stiffness(model: ResidualModel, T: number, rho: number): number {
 }
 
 /**
- * Critical point of a pure-fluid model from its own equations (cached per model object when no
- * guess is given).
+ * Critical point of a pure-fluid model from its own equations (cached per model object: the first
+ * successful location is reused, whatever guess a later call gives).
  *
  * @example
  * ```ts
@@ -69,10 +69,9 @@ export function locateCriticalPoint(
   options: CriticalPointOptions = {},
 ): CriticalPointResult {
   requirePure(model, "the critical point");
-  if (!options.guess) {
-    const hit = cache.get(model);
-    if (hit) return hit;
-  }
+  // One critical point per model object: once located (from any guess) it is reused.
+  const hit = cache.get(model);
+  if (hit) return hit;
   const guess = options.guess ?? criticalGuessOf(model);
   if (!guess || !(guess.temperatureK > 0) || !(guess.densityMolPerM3 > 0)) {
     throw new InputError({
@@ -128,6 +127,6 @@ export function locateCriticalPoint(
     method:
       "nested Brent: inflection density from d2P/drho2 = 0, temperature from (dP/drho)_T = 0 there",
   };
-  if (!options.guess) cache.set(model, result);
+  cache.set(model, result);
   return result;
 }

@@ -22,6 +22,8 @@ export interface PhaseAtOptions {
    * Default 1e-9 (the saturation pressure itself is solved to about 1e-12).
    */
   saturationBand?: number;
+  /** Critical-point guess for models that offer none (K, mol/m3); see SaturationOptions. */
+  criticalGuess?: { temperatureK: number; densityMolPerM3: number };
 }
 
 /** The phase at (T, P) and why. */
@@ -59,7 +61,7 @@ export function pureFluidPhaseAt(
   requirePositive("pressurePa", pressurePa, "Pa");
   const band = options.saturationBand ?? 1e-9;
   requirePositive("options.saturationBand", band, "-");
-  const critical = locateCriticalPoint(model);
+  const critical = locateCriticalPoint(model, { guess: options.criticalGuess });
   const T = temperatureK;
   const P = pressurePa;
   const base = { temperatureK: T, pressurePa: P, critical, warnings: [] as ResultWarning[] };

@@ -58,6 +58,11 @@ export interface SaturationOptions {
   /** Starting densities (mol/m3); default from ancillaries or spinodals. */
   start?: { liquidDensityMolPerM3: number; vaporDensityMolPerM3: number };
   /**
+   * Critical-point guess for models that offer none (no `pseudoCritical`, no published point),
+   * e.g. a user's pressure-function model: T in K, density in mol/m3.
+   */
+  criticalGuess?: { temperatureK: number; densityMolPerM3: number };
+  /**
    * For models that publish a validity range (reference fluids): solve even at temperatures
    * beyond the equation's extrapolation range instead of refusing. Default false.
    */
@@ -384,7 +389,7 @@ export function saturationAtTemperature(
   requirePure(model, "saturation");
   requirePositive("temperatureK", temperatureK, "K");
   const { tolerance, maxIterations } = validateOptions(options);
-  const critical = locateCriticalPoint(model);
+  const critical = locateCriticalPoint(model, { guess: options.criticalGuess });
   const T = temperatureK;
   if (!(T < critical.temperatureK)) {
     throw new PhaseUnavailableError(
@@ -513,7 +518,7 @@ export function saturationAtPressure(
   requirePositive("pressurePa", pressurePa, "Pa");
   validateOptions(options);
   const pTol = options.pressureTolerance ?? 1e-12;
-  const critical = locateCriticalPoint(model);
+  const critical = locateCriticalPoint(model, { guess: options.criticalGuess });
   if (!(pressurePa < critical.pressurePa)) {
     throw new PhaseUnavailableError(
       `no saturation state at P = ${pressurePa} Pa: at or above the critical pressure ${critical.pressurePa} Pa of ${model.info.name}`,

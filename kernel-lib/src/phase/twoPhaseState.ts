@@ -166,7 +166,7 @@ export function stateAtTemperatureDensity(
   requirePure(binding.model, "a state at given (T, rho)");
   requirePositive("temperatureK", temperatureK, "K");
   requirePositive("densityMolPerM3", densityMolPerM3, "mol/m3");
-  const critical = locateCriticalPoint(binding.model);
+  const critical = locateCriticalPoint(binding.model, { guess: options.criticalGuess });
   if (temperatureK < critical.temperatureK) {
     const sat = saturationAtTemperature(binding.model, temperatureK, options);
     const rhoL = sat.liquidDensityMolPerM3;
@@ -204,7 +204,7 @@ function acrossDome(
     property === "h" ? "J/mol" : "J/(mol K)",
   );
   const invert = property === "h" ? temperatureAtPH : temperatureAtPS;
-  const critical = locateCriticalPoint(binding.model);
+  const critical = locateCriticalPoint(binding.model, { guess: options.criticalGuess });
   const tMin = options.minTemperatureK ?? 20;
   const tMax = options.maxTemperatureK ?? 3000;
   if (!(pressurePa < critical.pressurePa)) {
