@@ -11,6 +11,7 @@ import {
   referenceFluidIds,
 } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
 import { referenceFluidBinding } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { locateCriticalPoint } from "../../../kernel-lib/src/phase/criticalPoint.js";
 import {
   pureFluidPhaseAt,
   pureFluidStateTP,
@@ -70,6 +71,21 @@ describe("saturation at given P inverts saturation at given T", () => {
         }),
         { numRuns: 20 },
       );
+    });
+  }
+});
+
+describe("near the critical point", () => {
+  for (const id of referenceFluidIds()) {
+    it(`${id}: saturation at Tc - 1e-6 K and at P = Pc (1 - 1e-7)`, () => {
+      const fluid = referenceFluid(id);
+      const c = locateCriticalPoint(fluid);
+      const s = saturationAtTemperature(fluid, c.temperatureK - 1e-6);
+      expect(s.liquidDensityMolPerM3).toBeGreaterThan(s.vaporDensityMolPerM3 * (1 + 1e-5));
+      expect(s.residual.gibbs).toBeLessThan(1e-12);
+      const p = saturationAtPressure(fluid, c.pressurePa * (1 - 1e-7));
+      expect(p.temperatureK).toBeLessThan(c.temperatureK);
+      expect(c.temperatureK - p.temperatureK).toBeLessThan(1e-4);
     });
   }
 });
