@@ -1,6 +1,7 @@
 /**
  * `isochor run [--out <dir>] <notebook.ipynb...>`: executes notebooks in-process through tslab
- * (no Jupyter) and writes, for each, the executed notebook and an HTML calculation record.
+ * (no Jupyter) and writes, for each, the executed notebook and an HTML record of the run, plus the
+ * calculation records the notebook started with startRecord (HTML and Markdown).
  * Exit codes: 0 all notebooks ran; 1 a notebook is missing, not a notebook, or a cell failed
  * (nothing written for it); 2 usage error.
  */
@@ -13,7 +14,11 @@ import type { CliIo } from "./io.js";
 const USAGE = `usage: isochor run [--out <dir>] <notebook.ipynb...>
 
 Executes each notebook top to bottom in a fresh TypeScript session (tslab, in-process, no Jupyter)
-and writes <name>.ipynb (executed) and <name>.html (calculation record) into the output folder.
+and writes into the output folder:
+  <name>.ipynb          the executed notebook
+  <name>.html           the record of the run (every cell and output)
+  <name>.record.html    the calculation record started in the notebook with startRecord()
+  <name>.record.md      the same record as Markdown (a second record: <name>.record-2.*)
 
 options:
   --out <dir>                output folder (default: out/records under the current directory)
@@ -101,6 +106,9 @@ function progressPrinter(io: CliIo, cwd: string): (event: RunProgress) => void {
           `      done in ${seconds(event.elapsedMs)} -> ${shown(cwd, event.recordPath)}, ` +
             `${shown(cwd, event.executedPath)}\n`,
         );
+        for (const file of event.calculationRecordPaths ?? []) {
+          io.stdout(`      calculation record -> ${shown(cwd, file)}\n`);
+        }
         break;
       default:
         break;

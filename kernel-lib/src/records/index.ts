@@ -3,6 +3,8 @@
  *
  *   readNotebook -> TslabSession (tslab converter + executor, outputs captured) -> executed .ipynb
  *                                                                               -> recordHtml
+ *   startRecord (in a cell) -> input/model/results/chart/answer -> show() in the cell
+ *                           -> registry -> runner writes <name>.record.html and <name>.record.md
  */
 export { runNotebooks } from "./runNotebooks.js";
 export type { RunNotebooksOptions, RunProgress, NotebookRecord } from "./runNotebooks.js";
@@ -25,3 +27,21 @@ export type {
 export { recordHtml } from "./recordHtml.js";
 export type { RecordInput } from "./recordHtml.js";
 export type { RunEnvironment } from "./environment.js";
+export { startRecord, CalculationRecord } from "./calculationRecord.js";
+export type {
+  StartRecordOptions,
+  RecordedInput,
+  RecordInputOptions,
+  RecordBasis,
+  ResolvedBasis,
+  RecordResultsOptions,
+  RecordedTable,
+  RecordChartOptions,
+  RecordedChart,
+  RecordedWarning,
+  CalculationRecordContent,
+} from "./calculationRecord.js";
+export type { ModelEntry, ModelEntryOptions, RecordableModel } from "./modelEntry.js";
+export { processSafetyCaution, SAFETY_TOPICS, isSafetyTopic } from "./processCaution.js";
+export type { SafetyTopic } from "./processCaution.js";
+export { escapeMarkdown } from "./calculationMarkdown.js";

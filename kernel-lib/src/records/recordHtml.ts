@@ -61,7 +61,7 @@ function pre(className: string, content: string): string {
  * but the page itself (data: URIs). Inline scripts run (charts); vega compiles its expressions
  * with Function, hence 'unsafe-eval'.
  */
-const CONTENT_SECURITY_POLICY = [
+export const CONTENT_SECURITY_POLICY = [
   "default-src 'none'",
   "script-src 'unsafe-inline' 'unsafe-eval'",
   "style-src 'unsafe-inline'",

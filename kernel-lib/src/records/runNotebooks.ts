@@ -5,7 +5,9 @@
  *   check every path (exists, nbformat 4, no two outputs with one name)      nothing run yet
  *   for each notebook:  TslabSession in its folder -> cells in order -> outputs captured
  *                       first failing cell: RunnerError (notebook, cell, error), nothing written
- *                       success: <name>.ipynb and <name>.html written to temp names, then renamed
+ *                       success: <name>.ipynb and <name>.html written to temp names, then renamed,
+ *                       plus <name>.record.html / .record.md for each calculation record the
+ *                       notebook started (startRecord; the second is <name>.record-2.*, ...)
  *
  * A failed notebook also loses any record of it left by an earlier run, so no file in the output
  * folder claims to be the record of a notebook that does not run today.
@@ -20,6 +22,7 @@ import type { CodeCell, Notebook, NotebookOutput } from "./notebookFormat.js";
 import { joinText, readNotebook } from "./notebookFormat.js";
 import { recordHtml } from "./recordHtml.js";
 import { RunnerError } from "./runnerError.js";
+import { registeredRecords, resetRecordRegistry } from "./recordRegistry.js";
 import { TslabSession } from "./tslabSession.js";
 
 /** Progress events, for a terminal display. */
@@ -49,6 +52,8 @@ export type RunProgress =
       elapsedMs: number;
       recordPath: string;
       executedPath: string;
+      /** Calculation records written (HTML and Markdown paths), in the order started. */
+      calculationRecordPaths: string[];
     };
 
 /** Options of {@link runNotebooks}. */
@@ -69,14 +74,38 @@ export interface NotebookRecord {
   recordPath: string;
   codeCells: number;
   elapsedMs: number;
+  /** Calculation records the notebook started (startRecord), as written files. */
+  calculationRecords: Array<{ title: string; htmlPath: string; markdownPath: string }>;
 }
 
 interface PlannedNotebook {
   name: string;
   absolute: string;
   notebook: Notebook;
+  stem: string;
+  outDir: string;
   executedPath: string;
   recordPath: string;
+}
+
+/** File names of the n-th calculation record of a notebook (n from 1). */
+function calculationRecordFiles(planned: PlannedNotebook, n: number): { html: string; md: string } {
+  const base = path.join(planned.outDir, `${planned.stem}.record${n === 1 ? "" : `-${n}`}`);
+  return { html: `${base}.html`, md: `${base}.md` };
+}
+
+/** Calculation-record files of this notebook in the output folder (from any run). */
+function existingCalculationRecords(planned: PlannedNotebook): string[] {
+  const escaped = planned.stem.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+  const pattern = new RegExp(`^${escaped}\\.record(-\\d+)?\\.(html|md)$`);
+  try {
+    return fs
+      .readdirSync(planned.outDir)
+      .filter((f) => pattern.test(f))
+      .map((f) => path.join(planned.outDir, f));
+  } catch {
+    return [];
+  }
 }
 
 /** Writes `content` to a temporary file beside `target` (renamed into place once all are written). */
@@ -128,6 +157,8 @@ function plan(paths: string[], outDir: string): PlannedNotebook[] {
       name,
       absolute,
       notebook,
+      stem,
+      outDir,
       executedPath: path.join(outDir, `${stem}.ipynb`),
       recordPath: path.join(outDir, `${stem}.html`),
     };
@@ -192,6 +223,7 @@ async function runOne(
     codeCells: codeCellNumbers.length,
   });
   const env = runEnvironment(path.dirname(absolute));
+  resetRecordRegistry();
   const session = TslabSession.open(path.dirname(absolute), {
     cellTimeoutMs: options.cellTimeoutMs,
     isJS: isJavaScriptNotebook(notebook),
@@ -258,22 +290,45 @@ async function runOne(
     cells,
     cellTimesMs,
   });
+  // Calculation records the notebook started; rendered after the run (charts already drawn).
+  const startedRecords = registeredRecords();
+  resetRecordRegistry();
+  const calculationRecords: NotebookRecord["calculationRecords"] = [];
+  const files: Array<{ target: string; content: string }> = [
+    { target: planned.executedPath, content: executedNotebookJson(notebook, env, startedAt) },
+    { target: planned.recordPath, content: html },
+  ];
+  for (let i = 0; i < startedRecords.length; i++) {
+    const { html: recordHtmlText, markdown } = await startedRecords[i].renderFiles();
+    const target = calculationRecordFiles(planned, i + 1);
+    files.push(
+      { target: target.html, content: recordHtmlText },
+      { target: target.md, content: markdown },
+    );
+    calculationRecords.push({
+      title: startedRecords[i].title,
+      htmlPath: target.html,
+      markdownPath: target.md,
+    });
+  }
+  const keep = new Set(files.map((f) => f.target));
+  const stale = existingCalculationRecords(planned).filter((f) => !keep.has(f));
   const temps: string[] = [];
   try {
-    temps.push(writeTemp(planned.executedPath, executedNotebookJson(notebook, env, startedAt)));
-    temps.push(writeTemp(planned.recordPath, html));
-    fs.renameSync(temps[0], planned.executedPath);
-    fs.renameSync(temps[1], planned.recordPath);
+    for (const f of files) temps.push(writeTemp(f.target, f.content));
+    files.forEach((f, i) => fs.renameSync(temps[i], f.target));
   } catch (error) {
     temps.forEach(removeQuietly);
     throw error;
   }
+  stale.forEach(removeQuietly);
   progress({
     kind: "notebook-done",
     notebook: name,
     elapsedMs,
     recordPath: planned.recordPath,
     executedPath: planned.executedPath,
+    calculationRecordPaths: calculationRecords.flatMap((r) => [r.htmlPath, r.markdownPath]),
   });
   return {
     notebook: name,
@@ -282,6 +337,7 @@ async function runOne(
     recordPath: planned.recordPath,
     codeCells: codeCellNumbers.length,
     elapsedMs,
+    calculationRecords,
   };
 }
 
@@ -317,6 +373,8 @@ export async function runNotebooks(
     } catch (error) {
       removeQuietly(planned[i].executedPath);
       removeQuietly(planned[i].recordPath);
+      existingCalculationRecords(planned[i]).forEach(removeQuietly);
+      resetRecordRegistry();
       throw error;
     }
   }

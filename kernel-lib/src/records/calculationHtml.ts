@@ -1,0 +1,314 @@
+/**
+ * HTML of a calculation record: an engineering calculation sheet, numbered sections, print-ready.
+ *
+ *   head block   "Calculation record" kicker, title, facts (prepared, by, site, isochor, commit)
+ *   1 Question   2 Answer   3 Cautions (boxed)   4 Inputs (as given | SI | source)
+ *   5 Models (citation, reference state, validity, ideal gas, k_ij)   6 Results (tables, charts)
+ *   7 Warnings   8 Environment
+ *
+ * Every string from the caller is escaped; the only markup not built here comes from tables/ and
+ * display/chartHtml, which escape their own text. Anchors are `<record anchor>-<id>` so two records
+ * on one page never collide. Styles are scoped under `.isochor-calc` so the fragment can sit in a
+ * notebook cell without touching the page around it.
+ */
+import { escapeHtml } from "../display/escapeHtml.js";
+import { vegaRuntimeScript } from "../display/vegaRuntime.js";
+import { formatSignificant } from "../tables/formatNumber.js";
+import type { CalculationRecordContent, RecordedInput } from "./calculationRecord.js";
+import { basisLinks } from "./calculationRecord.js";
+import type { ModelEntry } from "./modelEntry.js";
+import { CONTENT_SECURITY_POLICY } from "./recordHtml.js";
+
+const CSS = `
+.isochor-calc { --c-ink:#1f2a33; --c-muted:#5b6770; --c-rule:#c9d1d7; --c-band:#f3f5f6;
+  --c-accent:#1f5f7a; --c-caution:#9a3b12; --c-warn:#7a5a00;
+  color:var(--c-ink); font:14px/1.5 system-ui,"Segoe UI","DejaVu Sans",Helvetica,Arial,sans-serif;
+  max-width:60rem; }
+.isochor-calc * { box-sizing:border-box; }
+.isochor-calc .calc-head { border:2px solid var(--c-ink); display:grid;
+  grid-template-columns: 1fr auto; margin-bottom:1.2rem; }
+.isochor-calc .calc-head .calc-titlebox { padding:.7rem .9rem; border-right:1px solid var(--c-ink); }
+.isochor-calc .calc-kicker { font-size:.7rem; letter-spacing:.16em; text-transform:uppercase;
+  color:var(--c-accent); font-weight:700; }
+.isochor-calc h1.calc-title { font-size:1.35rem; line-height:1.25; margin:.2rem 0 0; }
+.isochor-calc dl.calc-facts { margin:0; display:grid; grid-template-columns:max-content minmax(9rem,16rem);
+  font-size:.78rem; }
+.isochor-calc dl.calc-facts dt, .isochor-calc dl.calc-facts dd { margin:0; padding:.18rem .6rem;
+  border-bottom:1px solid var(--c-rule); }
+.isochor-calc dl.calc-facts dt { color:var(--c-muted); text-transform:uppercase; letter-spacing:.06em;
+  font-size:.68rem; padding-top:.25rem; }
+.isochor-calc dl.calc-facts dd { font-variant-numeric:tabular-nums; overflow-wrap:anywhere; }
+.isochor-calc section.calc-section { margin:0 0 1.3rem; }
+.isochor-calc h2 { font-size:1rem; margin:0 0 .5rem; padding-bottom:.2rem; border-bottom:1px solid var(--c-ink);
+  display:flex; gap:.6rem; align-items:baseline; }
+.isochor-calc h2 .num { color:var(--c-accent); font-variant-numeric:tabular-nums; min-width:1.2rem; }
+.isochor-calc h3 { font-size:.92rem; margin:.8rem 0 .3rem; }
+.isochor-calc p { margin:.3rem 0; }
+.isochor-calc .calc-question { font-size:1.02rem; }
+.isochor-calc .calc-answer { border-left:4px solid var(--c-accent); background:var(--c-band); padding:.5rem .8rem; }
+.isochor-calc .calc-caution { border:2px solid var(--c-caution); padding:.55rem .8rem; margin:.4rem 0; }
+.isochor-calc .calc-caution b { color:var(--c-caution); text-transform:uppercase; letter-spacing:.08em;
+  font-size:.75rem; display:block; margin-bottom:.15rem; }
+.isochor-calc table.calc-grid { border-collapse:collapse; width:100%; font-size:.84rem; }
+.isochor-calc table.calc-grid th, .isochor-calc table.calc-grid td { border-bottom:1px solid var(--c-rule);
+  padding:.22rem .5rem; text-align:left; vertical-align:top; }
+.isochor-calc table.calc-grid th { font-size:.7rem; text-transform:uppercase; letter-spacing:.06em;
+  color:var(--c-muted); font-weight:600; border-bottom:1px solid var(--c-ink); }
+.isochor-calc td.num { text-align:right; font-variant-numeric:tabular-nums; white-space:nowrap; }
+.isochor-calc .calc-id { font-weight:700; color:var(--c-accent); white-space:nowrap; }
+.isochor-calc .calc-model { border-top:1px solid var(--c-rule); padding-top:.4rem; margin-top:.6rem; }
+.isochor-calc .calc-model:first-of-type { border-top:0; margin-top:0; }
+.isochor-calc dl.calc-kv { display:grid; grid-template-columns:10rem 1fr; margin:.2rem 0; font-size:.86rem; }
+.isochor-calc dl.calc-kv dt { color:var(--c-muted); }
+.isochor-calc dl.calc-kv dd { margin:0 0 .2rem; }
+.isochor-calc .calc-item { margin:.7rem 0 1rem; overflow-x:auto; }
+.isochor-calc .calc-basis { font-size:.78rem; color:var(--c-muted); }
+.isochor-calc a { color:var(--c-accent); }
+.isochor-calc ul.calc-warnings { margin:.2rem 0; padding-left:1.2rem; }
+.isochor-calc ul.calc-warnings li { margin:.15rem 0; }
+.isochor-calc .calc-code { font:600 .72rem ui-monospace,"DejaVu Sans Mono",monospace; color:var(--c-warn);
+  text-transform:uppercase; }
+.isochor-calc .muted { color:var(--c-muted); }
+.isochor-calc figure.isochor-chart img { max-width:100%; height:auto; }
+.isochor-calc code { font:.82rem ui-monospace,"DejaVu Sans Mono",monospace; }
+@media print {
+  .isochor-calc { font-size:9.5pt; max-width:none; }
+  .isochor-calc section.calc-section, .isochor-calc .calc-item, .isochor-calc .calc-model { break-inside:avoid; }
+  .isochor-calc h2 { break-after:avoid; }
+  .isochor-calc a { color:inherit; text-decoration:none; }
+  .isochor-calc .calc-answer { background:none; }
+}
+`;
+
+const PAGE_CSS = `
+html { background:#e9edf0; }
+body { margin:0 auto; max-width:64rem; background:#fff; padding:2rem 2.4rem 2.6rem; }
+footer.calc-foot { margin-top:2rem; border-top:1px solid #c9d1d7; padding-top:.5rem; font-size:.75rem; color:#5b6770;
+  font-family:system-ui,"DejaVu Sans",Arial,sans-serif; }
+@media print { html { background:none; } body { padding:0; max-width:none; } @page { size:A4; margin:15mm 14mm 17mm; } }
+`;
+
+function e(text: string | undefined): string {
+  return escapeHtml(text ?? "");
+}
+
+function formatDate(date: Date): string {
+  return date
+    .toISOString()
+    .replace("T", " ")
+    .replace(/\.\d+Z$/, " UTC");
+}
+
+function num(value: number): string {
+  return formatSignificant(value, { digits: 6 });
+}
+
+/** A recorded value in full: as given, or in SI to 10 significant figures (no trailing zeros). */
+function values(v: number | readonly number[]): string {
+  const one = (x: number) => String(Number(x.toPrecision(10)));
+  return typeof v === "number" ? one(v) : v.map(one).join(", ");
+}
+
+function section(n: number, title: string, body: string): string {
+  return `<section class="calc-section"><h2><span class="num">${n}</span>${e(title)}</h2>${body}</section>`;
+}
+
+function inputRows(anchor: string, inputs: readonly RecordedInput[]): string {
+  if (inputs.length === 0) return `<p class="muted">No inputs recorded.</p>`;
+  const rows = inputs.map((i) => {
+    const notes = [
+      i.source !== undefined ? e(i.source) : `<span class="muted">source not given</span>`,
+      i.note !== undefined ? e(i.note) : "",
+      i.atmosphericPressurePa !== undefined
+        ? `gauge converted with atmospheric pressure ${num(i.atmosphericPressurePa)} Pa`
+        : "",
+      i.difference ? "a difference (no offset)" : "",
+    ].filter((s) => s !== "");
+    return (
+      `<tr id="${anchor}-${i.id}"><td class="calc-id">${i.id}</td><td>${e(i.label)}</td>` +
+      `<td class="num">${values(i.value)} ${e(i.unit === "-" ? "" : i.unit)}</td>` +
+      `<td class="num">${values(i.valueSI)} ${e(i.unitSI === "-" ? "" : i.unitSI)}</td>` +
+      `<td>${notes.join("<br>")}</td></tr>`
+    );
+  });
+  return (
+    `<table class="calc-grid"><thead><tr><th>Id</th><th>Quantity</th><th>As given</th><th>SI (used)</th>` +
+    `<th>Source</th></tr></thead><tbody>${rows.join("")}</tbody></table>`
+  );
+}
+
+function modelBlock(anchor: string, m: ModelEntry): string {
+  const kv: string[] = [];
+  const add = (k: string, v: string) => kv.push(`<dt>${e(k)}</dt><dd>${v}</dd>`);
+  add("Model", `${e(m.name)} <span class="muted">(<code>${e(m.modelId)}</code>)</span>`);
+  add("Citation", e(m.citation));
+  add("Components", e(m.componentIds.join(", ")) || `<span class="muted">none listed</span>`);
+  if (m.referenceState !== undefined) add("Reference state", e(m.referenceState));
+  add(
+    "Validity",
+    m.validity.length > 0
+      ? m.validity.map(e).join("<br>")
+      : `<span class="muted">no range known to the library; see the citation</span>`,
+  );
+  if (m.idealGas.length > 0) {
+    add(
+      "Ideal gas",
+      m.idealGas
+        .map(
+          (g) =>
+            `${e(g.componentId)}: ${e(g.method)}, ${num(g.validTemperatureK.min)}-${num(g.validTemperatureK.max)} K; ${e(g.source)}`,
+        )
+        .join("<br>"),
+    );
+  }
+  if (m.interaction.length > 0) {
+    add(
+      "k_ij",
+      `<table class="calc-grid"><thead><tr><th>Pair</th><th>k_ij</th><th>Source</th></tr></thead><tbody>` +
+        m.interaction
+          .map(
+            (p) =>
+              `<tr><td>${e(p.pair)}</td><td class="num">${num(p.kij)}</td><td>${e(p.source)}</td></tr>`,
+          )
+          .join("") +
+        `</tbody></table>`,
+    );
+  }
+  if (m.defaultedPairs.length > 0)
+    add("Defaulted k_ij", `set to zero: ${e(m.defaultedPairs.join(", "))}`);
+  for (const n of m.notes) add("Note", e(n));
+  return (
+    `<div class="calc-model" id="${anchor}-${m.id}"><h3><span class="calc-id">${m.id}</span> ${e(m.label)}</h3>` +
+    `<dl class="calc-kv">${kv.join("")}</dl></div>`
+  );
+}
+
+/** The record as an HTML fragment (no runtime script, scoped styles). */
+export function calculationRecordFragment(c: CalculationRecordContent): string {
+  const env = c.environment;
+  const facts: string[] = [];
+  const fact = (k: string, v: string) => facts.push(`<dt>${e(k)}</dt><dd>${v}</dd>`);
+  fact("Prepared", formatDate(c.createdAt));
+  if (c.author !== undefined) fact("By", e(c.author));
+  if (c.site !== undefined) fact("Site", e(c.site));
+  fact("isochor", e(env.isochorVersion));
+  fact(
+    "Commit",
+    env.gitCommit === "unknown"
+      ? "unknown"
+      : `<code>${e(env.gitCommit.slice(0, 12))}</code>${env.gitDirty ? " + local changes" : ""}`,
+  );
+  fact("Record", `<code>${e(c.anchor)}</code>`);
+
+  let n = 0;
+  const parts: string[] = [];
+  parts.push(section(++n, "Question", `<p class="calc-question">${e(c.question)}</p>`));
+  if (c.answers.length > 0) {
+    parts.push(
+      section(
+        ++n,
+        "Answer",
+        `<div class="calc-answer">${c.answers.map((a) => `<p>${e(a)}</p>`).join("")}</div>`,
+      ),
+    );
+  }
+  if (c.cautions.length > 0) {
+    parts.push(
+      section(
+        ++n,
+        "Cautions",
+        c.cautions
+          .map((t) => `<div class="calc-caution" role="note"><b>Caution</b>${e(t)}</div>`)
+          .join(""),
+      ),
+    );
+  }
+  parts.push(section(++n, "Inputs", inputRows(c.anchor, c.inputs)));
+  parts.push(
+    section(
+      ++n,
+      "Models",
+      c.models.length > 0
+        ? c.models.map((m) => modelBlock(c.anchor, m)).join("")
+        : `<p class="muted">No model recorded.</p>`,
+    ),
+  );
+  const items = c.items.map((item) => {
+    if (item.kind === "table")
+      return `<div class="calc-item" id="${c.anchor}-${item.table.id}">${item.table.html}</div>`;
+    const chart = item.chart;
+    return (
+      `<div class="calc-item" id="${c.anchor}-${chart.id}">${chart.html}` +
+      `<div class="calc-basis">Basis of ${chart.id}: ${basisLinks(c.anchor, chart.basis)}</div></div>`
+    );
+  });
+  parts.push(
+    section(
+      ++n,
+      "Results",
+      items.length > 0
+        ? `<p class="calc-basis">Each row and chart names its basis: the model entry (M) and inputs (I) it was computed from.</p>${items.join("")}`
+        : `<p class="muted">No results recorded.</p>`,
+    ),
+  );
+  parts.push(
+    section(
+      ++n,
+      "Warnings raised",
+      c.warnings.length > 0
+        ? `<ul class="calc-warnings">${c.warnings
+            .map((w) => {
+              const detail = [w.from.join(", "), w.count > 1 ? `${w.count} times` : ""]
+                .filter((t) => t !== "")
+                .join("; ");
+              return (
+                `<li><span class="calc-code">${e(w.code)}</span> ${e(w.message)}` +
+                (detail !== "" ? ` <span class="muted">(${e(detail)})</span>` : "") +
+                `</li>`
+              );
+            })
+            .join("")}</ul>`
+        : `<p>None: no result passed to this record carried a warning.</p>`,
+    ),
+  );
+  parts.push(
+    section(
+      ++n,
+      "Environment",
+      `<dl class="calc-kv"><dt>isochor</dt><dd>${e(env.isochorVersion)}</dd>` +
+        `<dt>Git commit</dt><dd><code>${e(env.gitCommit)}</code>${env.gitDirty ? " (working tree had uncommitted changes)" : ""}</dd>` +
+        `<dt>Node</dt><dd>${e(env.nodeVersion)}</dd>` +
+        `<dt>tslab</dt><dd>${e(env.tslabVersion)} (TypeScript ${e(env.typescriptVersion)})</dd>` +
+        `<dt>Prepared</dt><dd>${formatDate(c.createdAt)}</dd></dl>`,
+    ),
+  );
+  return (
+    `<div class="isochor-calc" id="${c.anchor}"><style>${CSS}</style>` +
+    `<header class="calc-head"><div class="calc-titlebox"><div class="calc-kicker">Calculation record</div>` +
+    `<h1 class="calc-title">${e(c.title)}</h1></div><dl class="calc-facts">${facts.join("")}</dl></header>` +
+    parts.join("\n") +
+    `</div>`
+  );
+}
+
+/** The record as a standalone HTML document: charts live from the inline runtime, no network. */
+export function calculationRecordDocument(c: CalculationRecordContent): string {
+  const hasCharts = c.items.some((i) => i.kind === "chart");
+  return `<!doctype html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}">
+<meta name="generator" content="isochor ${e(c.environment.isochorVersion)} (calculation record)">
+<title>${e(c.title)} - calculation record</title>
+<style>${PAGE_CSS}</style>
+${hasCharts ? vegaRuntimeScript() : ""}
+</head>
+<body>
+${calculationRecordFragment(c)}
+<footer class="calc-foot">Calculation record ${e(c.anchor)} written by isochor ${e(c.environment.isochorVersion)}. Charts are drawn from data embedded in this page; nothing is loaded from the network. A Markdown copy of this record has the same content without the charts.</footer>
+</body>
+</html>
+`;
+}

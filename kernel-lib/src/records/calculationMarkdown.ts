@@ -1,0 +1,166 @@
+/**
+ * Markdown of a calculation record: the same sections and ids as the HTML record, for review in a
+ * repository or a merge request. Charts cannot be drawn in Markdown: each is listed with its
+ * caption and basis, and the HTML record has it.
+ *
+ * Every caller string is escaped (CommonMark backslash escapes of the characters that start
+ * inline markup, including `<` and `&`, so no HTML can pass through a Markdown renderer, and of a
+ * block marker at its start) and kept on one line.
+ */
+import { formatSignificant } from "../tables/formatNumber.js";
+import type { CalculationRecordContent } from "./calculationRecord.js";
+import { basisText } from "./calculationRecord.js";
+
+/** Escapes text for Markdown inline content, on one line. */
+export function escapeMarkdown(text: string): string {
+  return (
+    String(text)
+      // eslint-disable-next-line no-control-regex
+      .replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, " ")
+      .replace(/[\\`*_{}[\]<>!|&~]/g, (c) => `\\${c}`)
+  );
+}
+
+/**
+ * Escapes text that starts a line (a paragraph, a quote): as {@link escapeMarkdown}, and a block
+ * marker at its start (heading, list, numbered list, rule) stays text.
+ */
+export function escapeMarkdownBlock(text: string): string {
+  return escapeMarkdown(text)
+    .replace(/^(\s*)([#+=-])/, "$1\\$2")
+    .replace(/^(\s*\d+)([.)])/, "$1\\$2");
+}
+
+function num(value: number): string {
+  return formatSignificant(value, { digits: 6 });
+}
+
+/** A recorded value in full: as given, or in SI to 10 significant figures (no trailing zeros). */
+function values(v: number | readonly number[]): string {
+  const one = (x: number) => String(Number(x.toPrecision(10)));
+  return typeof v === "number" ? one(v) : v.map(one).join(", ");
+}
+
+function formatDate(date: Date): string {
+  return date
+    .toISOString()
+    .replace("T", " ")
+    .replace(/\.\d+Z$/, " UTC");
+}
+
+/** The record as Markdown text. */
+export function calculationRecordMarkdown(c: CalculationRecordContent): string {
+  const m = escapeMarkdown;
+  const env = c.environment;
+  const out: string[] = [];
+  out.push(`# Calculation record: ${m(c.title)}`, "");
+  const facts = [
+    `Prepared ${formatDate(c.createdAt)}`,
+    c.author !== undefined ? `by ${m(c.author)}` : undefined,
+    c.site !== undefined ? `site: ${m(c.site)}` : undefined,
+    `isochor ${m(env.isochorVersion)}, commit ${m(env.gitCommit)}${env.gitDirty ? " with local changes" : ""}`,
+    `record ${m(c.anchor)}`,
+  ].filter((s): s is string => s !== undefined);
+  out.push(facts.join(" · "), "");
+  let n = 0;
+  const heading = (title: string) => out.push(`## ${++n}. ${title}`, "");
+  heading("Question");
+  out.push(escapeMarkdownBlock(c.question), "");
+  if (c.answers.length > 0) {
+    heading("Answer");
+    c.answers.forEach((a) => out.push(`> ${escapeMarkdownBlock(a)}`, ">"));
+    out.pop();
+    out.push("");
+  }
+  if (c.cautions.length > 0) {
+    heading("Cautions");
+    c.cautions.forEach((t) => out.push(`> **CAUTION.** ${m(t)}`, ""));
+  }
+  heading("Inputs");
+  if (c.inputs.length === 0) out.push("No inputs recorded.", "");
+  else {
+    out.push(
+      "| Id | Quantity | As given | SI (used) | Source |",
+      "| :--- | :--- | ---: | ---: | :--- |",
+    );
+    for (const i of c.inputs) {
+      const notes = [
+        i.source !== undefined ? m(i.source) : "source not given",
+        i.note !== undefined ? m(i.note) : "",
+        i.atmosphericPressurePa !== undefined
+          ? `gauge converted with atmospheric pressure ${num(i.atmosphericPressurePa)} Pa`
+          : "",
+        i.difference ? "a difference (no offset)" : "",
+      ].filter((s) => s !== "");
+      out.push(
+        `| ${i.id} | ${m(i.label)} | ${values(i.value)} ${m(i.unit === "-" ? "" : i.unit)} | ` +
+          `${values(i.valueSI)} ${m(i.unitSI === "-" ? "" : i.unitSI)} | ${notes.join("; ")} |`,
+      );
+    }
+    out.push("");
+  }
+  heading("Models");
+  if (c.models.length === 0) out.push("No model recorded.", "");
+  for (const model of c.models) {
+    out.push(`### ${model.id}: ${m(model.label)}`, "");
+    out.push(`- Model: ${m(model.name)} (${m(model.modelId)})`);
+    out.push(`- Citation: ${m(model.citation)}`);
+    out.push(`- Components: ${m(model.componentIds.join(", ")) || "none listed"}`);
+    if (model.referenceState !== undefined)
+      out.push(`- Reference state: ${m(model.referenceState)}`);
+    out.push(
+      `- Validity: ${model.validity.length > 0 ? model.validity.map(m).join(" ") : "no range known to the library; see the citation"}`,
+    );
+    for (const g of model.idealGas) {
+      out.push(
+        `- Ideal gas, ${m(g.componentId)}: ${m(g.method)}, ${num(g.validTemperatureK.min)}\\-${num(g.validTemperatureK.max)} K; ${m(g.source)}`,
+      );
+    }
+    for (const p of model.interaction)
+      out.push(`- k\\_ij ${m(p.pair)} = ${num(p.kij)} (${m(p.source)})`);
+    if (model.defaultedPairs.length > 0) {
+      out.push(`- Defaulted k\\_ij (set to zero): ${m(model.defaultedPairs.join(", "))}`);
+    }
+    for (const note of model.notes) out.push(`- Note: ${m(note)}`);
+    out.push("");
+  }
+  heading("Results");
+  if (c.items.length === 0) out.push("No results recorded.", "");
+  else
+    out.push(
+      "Each row and chart names its basis: the model entry (M) and inputs (I) it was computed from.",
+      "",
+    );
+  for (const item of c.items) {
+    if (item.kind === "table") out.push(item.table.markdown, "");
+    else {
+      const chart = item.chart;
+      const what = [chart.caption, chart.title].find((s) => s !== undefined);
+      out.push(
+        `**${chart.id}** (chart, drawn in the HTML record)${what !== undefined ? `: ${m(what)}` : ""}. Basis: ${basisText(chart.basis)}.`,
+        "",
+      );
+    }
+  }
+  heading("Warnings raised");
+  if (c.warnings.length === 0)
+    out.push("None: no result passed to this record carried a warning.", "");
+  else {
+    for (const w of c.warnings) {
+      const detail = [w.from.join(", "), w.count > 1 ? `${w.count} times` : ""]
+        .filter((t) => t !== "")
+        .join("; ");
+      out.push(`- **${m(w.code)}** ${m(w.message)}${detail !== "" ? ` (${m(detail)})` : ""}`);
+    }
+    out.push("");
+  }
+  heading("Environment");
+  out.push(
+    `- isochor ${m(env.isochorVersion)}`,
+    `- git commit ${m(env.gitCommit)}${env.gitDirty ? " (working tree had uncommitted changes)" : ""}`,
+    `- Node ${m(env.nodeVersion)}; tslab ${m(env.tslabVersion)} (TypeScript ${m(env.typescriptVersion)})`,
+    `- prepared ${formatDate(c.createdAt)}`,
+    "",
+  );
+  return out.join("\n");
+}

@@ -1,0 +1,676 @@
+/**
+ * A calculation record that a notebook fills as it goes: the question, the inputs (as given and in
+ * SI, with their sources), the models (citations, reference state, validity, k_ij provenance), the
+ * results tables and charts (each tied to the model and inputs it used), the warnings the engine
+ * raised, the cautions, and the environment. It shows itself in a cell (`show()`), and
+ * `isochor run` writes it as `<notebook>.record.html` and `<notebook>.record.md`.
+ *
+ *   startRecord({ question }) -> input() / model() -> results() / chart() -> answer() -> show()
+ *                                 ids I1.., M1..       ids T1.., C1.. (basis: M and I ids)
+ *
+ * Every string given here is plain text: the renderers escape it for HTML and Markdown.
+ */
+import { randomBytes } from "node:crypto";
+import { InputError } from "../errors.js";
+import type { ResultWarning } from "../errors.js";
+import { SI_UNITS } from "../units/dimension.js";
+import { getDefaultAtmosphericPressure } from "../units/atmosphericPressure.js";
+import { lookupUnit } from "../units/lookupUnit.js";
+import { toSI } from "../units/convert.js";
+import type { TableColumn, TableOptions } from "../tables/columns.js";
+import { tableHtml } from "../tables/tableHtml.js";
+import { tableMarkdown } from "../tables/tableText.js";
+import { chartMeta } from "../charts/chartSpec.js";
+import { chartHtml } from "../display/chartHtml.js";
+import { displaySession } from "../display/displaySession.js";
+import { vegaRuntimeScript } from "../display/vegaRuntime.js";
+import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
+import { runEnvironment, type RunEnvironment } from "./environment.js";
+import {
+  modelEntry,
+  type ModelEntry,
+  type ModelEntryOptions,
+  type RecordableModel,
+} from "./modelEntry.js";
+import { checkSafetyTopics, processSafetyCaution, type SafetyTopic } from "./processCaution.js";
+import { calculationRecordFragment, calculationRecordDocument } from "./calculationHtml.js";
+import { calculationRecordMarkdown } from "./calculationMarkdown.js";
+import { registerRecord } from "./recordRegistry.js";
+
+/** Options of {@link startRecord}. */
+export interface StartRecordOptions {
+  /** The question the calculation answers (plain text). Required. */
+  question: string;
+  /** Short title. Default: the question. */
+  title?: string;
+  /** Who prepared the calculation (plain text). Default: not shown. */
+  author?: string;
+  /** Site, unit or equipment (plain text), e.g. "Corvid Point Refinery (invented), FG-100". */
+  site?: string;
+  /**
+   * Safety topics this calculation touches. Any topic adds the standard caution automatically
+   * (see {@link processSafetyCaution}). Default: none.
+   */
+  topics?: SafetyTopic[];
+  /** Register the record so `isochor run` writes its files. Default true. */
+  register?: boolean;
+}
+
+/** An input as recorded: value as given, value in SI, where it came from. */
+export interface RecordedInput {
+  /** Record-local id, "I1", "I2", ... */
+  readonly id: string;
+  readonly label: string;
+  /** The value as given, in `unit`. */
+  readonly value: number | readonly number[];
+  /** The unit as given ("-" for a dimensionless value). */
+  readonly unit: string;
+  /** The value in SI (`unitSI`), what the calculation uses. */
+  readonly valueSI: number | readonly number[];
+  /** SI unit on the library's molar basis, e.g. "Pa" ("-" for dimensionless). */
+  readonly unitSI: string;
+  readonly source?: string;
+  readonly note?: string;
+  /** Atmospheric pressure used for a gauge unit, Pa. */
+  readonly atmosphericPressurePa?: number;
+  /** The value is a difference (no offset, no atmosphere). */
+  readonly difference: boolean;
+}
+
+/** Options of {@link CalculationRecord.input}. */
+export interface RecordInputOptions {
+  /** Where the value came from (plain text), e.g. "DCS tag PT-2101, invented". Default: not given. */
+  source?: string;
+  /** A note (plain text). Default: none. */
+  note?: string;
+  /** Molar mass for mass-based units, kg/mol. Default: none (mass units are then refused). */
+  molarMassKgPerMol?: number;
+  /** Atmospheric pressure for gauge units, Pa. Default: the notebook-wide default. */
+  atmosphericPressurePa?: number;
+  /** The value is a difference (1 degC = 1 K). Default false. */
+  difference?: boolean;
+}
+
+/** What a result or chart was computed from: a model entry and inputs, by object or id. */
+export interface RecordBasis {
+  model?: ModelEntry | string;
+  inputs?: ReadonlyArray<RecordedInput | string>;
+}
+
+/** A resolved basis: ids only. */
+export interface ResolvedBasis {
+  modelId?: string;
+  inputIds: string[];
+}
+
+/** Options of {@link CalculationRecord.results}. */
+export interface RecordResultsOptions extends TableOptions, RecordBasis {
+  /** Basis of one row, when rows differ (overrides `model` / `inputs` for that row). */
+  rowBasis?: (row: Record<string, unknown>, index: number) => RecordBasis;
+}
+
+/** A results table as recorded. */
+export interface RecordedTable {
+  readonly id: string;
+  readonly caption?: string;
+  /** The table's HTML with a Basis column of links (escaped text; links made by the record). */
+  readonly html: string;
+  readonly markdown: string;
+  readonly rows: number;
+}
+
+/** Options of {@link CalculationRecord.chart}. */
+export interface RecordChartOptions extends RecordBasis {
+  /** Caption under the chart (plain text). Default: none. */
+  caption?: string;
+}
+
+/** A chart as recorded. */
+export interface RecordedChart {
+  readonly id: string;
+  readonly title?: string;
+  readonly caption?: string;
+  readonly basis: ResolvedBasis;
+  /** The chart fragment (static SVG plus live view); the runtime is not included. */
+  readonly html: string;
+}
+
+/** A warning collected into the record, de-duplicated. */
+export interface RecordedWarning {
+  readonly code: string;
+  readonly message: string;
+  /** Where it was raised (table or chart ids, labels), de-duplicated. */
+  readonly from: string[];
+  /** How many times it was collected. */
+  readonly count: number;
+}
+
+/** The record's content, for renderers (read-only snapshot). */
+export interface CalculationRecordContent {
+  readonly anchor: string;
+  readonly title: string;
+  readonly question: string;
+  readonly author?: string;
+  readonly site?: string;
+  readonly createdAt: Date;
+  readonly environment: RunEnvironment;
+  readonly topics: readonly SafetyTopic[];
+  readonly inputs: readonly RecordedInput[];
+  readonly models: readonly ModelEntry[];
+  /** Tables and charts in the order they were added. */
+  readonly items: ReadonlyArray<
+    { kind: "table"; table: RecordedTable } | { kind: "chart"; chart: RecordedChart }
+  >;
+  readonly warnings: readonly RecordedWarning[];
+  readonly cautions: readonly string[];
+  readonly answers: readonly string[];
+}
+
+function requireText(value: unknown, input: string): string {
+  if (typeof value !== "string" || value.trim() === "") {
+    throw new InputError({ input, unit: "-", validRange: "a non-empty string", received: value });
+  }
+  return value;
+}
+
+function optionalText(value: unknown, input: string): string | undefined {
+  if (value === undefined) return undefined;
+  if (typeof value !== "string") {
+    throw new InputError({ input, unit: "-", validRange: "a string", received: value });
+  }
+  return value;
+}
+
+function isWarning(value: unknown): value is ResultWarning {
+  const v = value as Partial<ResultWarning> | null;
+  return (
+    v !== null &&
+    typeof v === "object" &&
+    typeof v.message === "string" &&
+    typeof v.code === "string"
+  );
+}
+
+const DIMENSIONLESS = new Set(["-", "", "1"]);
+
+/**
+ * A calculation record being filled. Create it with {@link startRecord}.
+ */
+export class CalculationRecord {
+  readonly anchor: string;
+  readonly title: string;
+  readonly question: string;
+  readonly author?: string;
+  readonly site?: string;
+  readonly createdAt: Date;
+  readonly environment: RunEnvironment;
+  private readonly topicList: SafetyTopic[];
+  private readonly inputList: RecordedInput[] = [];
+  private readonly modelList: ModelEntry[] = [];
+  private readonly itemList: Array<
+    { kind: "table"; table: RecordedTable } | { kind: "chart"; chart: RecordedChart }
+  > = [];
+  private readonly warningMap = new Map<
+    string,
+    { code: string; message: string; from: Set<string>; count: number }
+  >();
+  private readonly cautionList: string[] = [];
+  private readonly answerList: string[] = [];
+  private readonly pending = new Set<Promise<unknown>>();
+  private tableCount = 0;
+  private chartCount = 0;
+
+  /** @internal Use {@link startRecord}. */
+  constructor(options: StartRecordOptions) {
+    if (options === null || typeof options !== "object") {
+      throw new InputError({
+        input: "options",
+        unit: "-",
+        validRange: "{ question: string, ... }",
+        received: options,
+      });
+    }
+    this.question = requireText(options.question, "options.question");
+    this.title = optionalText(options.title, "options.title") ?? this.question;
+    this.author = optionalText(options.author, "options.author");
+    this.site = optionalText(options.site, "options.site");
+    this.topicList = checkSafetyTopics(options.topics, "options.topics");
+    this.createdAt = new Date();
+    this.environment = runEnvironment(process.cwd());
+    this.anchor = "rec-" + randomBytes(4).toString("hex");
+  }
+
+  /** Safety topics of this record. */
+  get topics(): readonly SafetyTopic[] {
+    return [...this.topicList];
+  }
+
+  /** Tags the record with safety topics (the standard caution then appears). Returns the record. */
+  tag(...topics: SafetyTopic[]): this {
+    for (const t of checkSafetyTopics(topics, "topics")) {
+      if (!this.topicList.includes(t)) this.topicList.push(t);
+    }
+    return this;
+  }
+
+  /**
+   * Records an input: the value as given, converted to SI through units/.
+   * @param label What it is, e.g. "NHT-2 recycle gas pressure".
+   * @param value A number, or a list of numbers (a composition).
+   * @param unit Unit as written ("barg", "degC", "kJ/kg", ...) or "-" for dimensionless.
+   * @returns The recorded input; use `.valueSI` in the calculation and pass it to `results()`.
+   * @example const P = rec.input("inlet pressure", 32, "barg", { source: "DCS tag PT-2101, invented" });
+   */
+  input(
+    label: string,
+    value: number | readonly number[],
+    unit: string,
+    options: RecordInputOptions = {},
+  ): RecordedInput {
+    requireText(label, "label");
+    if (typeof unit !== "string") {
+      throw new InputError({
+        input: "unit",
+        unit: "-",
+        validRange: 'a unit string or "-"',
+        received: unit,
+      });
+    }
+    const values = Array.isArray(value) ? (value as readonly number[]) : [value as number];
+    if (values.length === 0) {
+      throw new InputError({
+        input: label,
+        unit,
+        validRange: "a number or a non-empty list",
+        received: value,
+      });
+    }
+    const source = optionalText(options.source, "options.source");
+    const note = optionalText(options.note, "options.note");
+    const id = `I${this.inputList.length + 1}`;
+    let unitSI: string;
+    let converted: number[];
+    let atmosphericPressurePa: number | undefined;
+    if (DIMENSIONLESS.has(unit.trim())) {
+      converted = values.map((v, i) => {
+        if (typeof v !== "number" || !Number.isFinite(v)) {
+          throw new InputError({
+            input: Array.isArray(value) ? `${label}[${i}]` : label,
+            unit: "-",
+            validRange: "a finite number",
+            received: v,
+          });
+        }
+        return v;
+      });
+      unitSI = "-";
+    } else {
+      const def = lookupUnit(unit);
+      unitSI = SI_UNITS[def.dimension];
+      converted = values.map((v, i) =>
+        toSI(v, unit, {
+          molarMassKgPerMol: options.molarMassKgPerMol,
+          atmosphericPressurePa: options.atmosphericPressurePa,
+          difference: options.difference,
+          input: Array.isArray(value) ? `${label}[${i}]` : label,
+        }),
+      );
+      if (def.gauge && !options.difference) {
+        atmosphericPressurePa = options.atmosphericPressurePa ?? getDefaultAtmosphericPressure();
+      }
+    }
+    const recorded: RecordedInput = Object.freeze({
+      id,
+      label,
+      value: Array.isArray(value) ? Object.freeze([...values]) : values[0],
+      unit,
+      valueSI: Array.isArray(value) ? Object.freeze(converted) : converted[0],
+      unitSI,
+      source,
+      note,
+      atmosphericPressurePa,
+      difference: options.difference ?? false,
+    });
+    this.inputList.push(recorded);
+    return recorded;
+  }
+
+  /**
+   * Records a model: from a Fluid it pulls the citation, reference state, validity, ideal-gas
+   * routes, k_ij sources and the pairs defaulted to zero (which also become a warning).
+   * @example const m = rec.model(gas, { label: "Fuel-gas streams, Peng-Robinson" });
+   */
+  model(subject: RecordableModel, options: ModelEntryOptions = {}): ModelEntry {
+    const entry = modelEntry(`M${this.modelList.length + 1}`, subject, options);
+    this.modelList.push(entry);
+    if (entry.defaultedPairs.length > 0) {
+      this.addWarning(
+        {
+          code: "model-limitation",
+          message: `k_ij set to zero for lack of a tabulated value: ${entry.defaultedPairs.join(", ")}`,
+        },
+        entry.id,
+      );
+    }
+    return entry;
+  }
+
+  /**
+   * Records a results table (rendered with tables/), with a Basis column linking each row to the
+   * model entry and inputs it used. Warnings carried by the rows (`row.warnings`) are collected.
+   * @param rows Row objects, SI values (e.g. FluidState objects or your own).
+   * @param columns Column specs of tables/ (units to show, significant figures).
+   * @example rec.results(states, cols, { caption: "Inlet states", model: m, inputs: [T, P] })
+   */
+  results(
+    rows: readonly Record<string, unknown>[],
+    columns: readonly TableColumn[],
+    options: RecordResultsOptions = {},
+  ): RecordedTable {
+    const id = `T${this.tableCount + 1}`;
+    const caption = optionalText(options.caption, "options.caption");
+    if (!Array.isArray(rows)) {
+      throw new InputError({
+        input: "rows",
+        unit: "-",
+        validRange: "an array of objects",
+        received: rows,
+      });
+    }
+    if (options.rowBasis !== undefined && typeof options.rowBasis !== "function") {
+      throw new InputError({
+        input: "options.rowBasis",
+        unit: "-",
+        validRange: "a function (row, index) => { model, inputs }",
+        received: options.rowBasis,
+      });
+    }
+    const tableBasis = this.resolveBasis(options, "options");
+    const bases = rows.map((row, i) =>
+      options.rowBasis
+        ? this.resolveBasis({ ...options, ...options.rowBasis(row, i) }, `rowBasis(row ${i})`)
+        : tableBasis,
+    );
+    // The Basis cell goes through tables/ as a random token (escaped like any text), then the token
+    // is replaced by links built here; user text cannot forge a token it cannot guess.
+    const nonce = randomBytes(6).toString("hex");
+    const token = (i: number) => `isochor-basis-${nonce}-${i}-end`;
+    const basisKey = `__isochorBasis_${nonce}`;
+    const withToken = rows.map((row, i) => ({ ...row, [basisKey]: token(i) }));
+    const withText = rows.map((row, i) => ({ ...row, [basisKey]: basisText(bases[i]) }));
+    const tableColumns: TableColumn[] = [...columns, { key: basisKey, label: "Basis", text: true }];
+    const tableOptions: TableOptions = {
+      caption: caption !== undefined ? `${id}. ${caption}` : id,
+      note: options.note,
+      units: options.units,
+      molarMassKgPerMol: options.molarMassKgPerMol,
+      missing: options.missing,
+    };
+    let html = tableHtml(withToken, tableColumns, tableOptions);
+    bases.forEach((b, i) => {
+      html = html.replace(token(i), basisLinks(this.anchor, b));
+    });
+    const markdown = tableMarkdown(withText, tableColumns, tableOptions);
+    rows.forEach((row) => this.collectWarnings(row, { from: id }));
+    this.tableCount += 1;
+    const table: RecordedTable = Object.freeze({ id, caption, html, markdown, rows: rows.length });
+    this.itemList.push({ kind: "table", table });
+    return table;
+  }
+
+  /**
+   * Records a chart: drawn now (static SVG), live in the HTML record. Warnings the chart builder
+   * raised (`usermeta.isochor.warnings`) are collected.
+   * @example await rec.chart(pressureEnthalpyChart(data), { caption: "Letdown path", model: m })
+   */
+  async chart(spec: VegaLiteSpec, options: RecordChartOptions = {}): Promise<RecordedChart> {
+    if (spec === null || typeof spec !== "object" || Array.isArray(spec)) {
+      throw new InputError({
+        input: "spec",
+        unit: "-",
+        validRange: "a Vega-Lite spec object",
+        received: spec,
+      });
+    }
+    const caption = optionalText(options.caption, "options.caption");
+    const basis = this.resolveBasis(options, "options");
+    this.chartCount += 1;
+    const id = `C${this.chartCount}`;
+    const slot: { kind: "chart"; chart: RecordedChart } = {
+      kind: "chart",
+      chart: { id, caption, basis, html: "" },
+    };
+    this.itemList.push(slot); // keeps its place even if another chart finishes first
+    const work = chartHtml(spec, { caption: caption !== undefined ? `${id}. ${caption}` : id });
+    this.pending.add(work);
+    try {
+      const html = await work;
+      const title = chartTitle(spec);
+      slot.chart = Object.freeze({ id, title, caption, basis, html });
+    } catch (error) {
+      this.itemList.splice(this.itemList.indexOf(slot), 1);
+      throw error;
+    } finally {
+      this.pending.delete(work);
+    }
+    for (const w of chartMeta(spec)?.warnings ?? []) {
+      this.addWarning({ code: "accuracy", message: w }, id);
+    }
+    return slot.chart;
+  }
+
+  /**
+   * Collects the warnings of results: a ResultWarning, a list of them, an object with `warnings`
+   * (a state, a saturation result, ...), or a list of such objects. De-duplicated by message.
+   * @param options.from Where they came from (plain text or an id). Default: not given.
+   * @returns How many warnings were found in `source`.
+   */
+  collectWarnings(source: unknown, options: { from?: string } = {}): number {
+    const from = optionalText(options.from, "options.from");
+    let found = 0;
+    const visit = (value: unknown, depth: number): void => {
+      if (value === null || typeof value !== "object" || depth > 3) return;
+      if (isWarning(value)) {
+        this.addWarning(value, from);
+        found += 1;
+        return;
+      }
+      if (Array.isArray(value)) {
+        value.forEach((v) => visit(v, depth + 1));
+        return;
+      }
+      const warnings = (value as { warnings?: unknown }).warnings;
+      if (Array.isArray(warnings)) warnings.forEach((w) => visit(w, depth + 1));
+    };
+    visit(source, 0);
+    return found;
+  }
+
+  /**
+   * Adds a caution. Without text, the standard caution for process calculations that can hurt
+   * someone (it names the record's topics).
+   */
+  caution(text?: string): this {
+    const given = optionalText(text, "text");
+    const caution = given ?? processSafetyCaution(this.topicList);
+    if (!this.cautionList.includes(caution)) this.cautionList.push(caution);
+    return this;
+  }
+
+  /** States the answer to the question (plain text; may be called more than once). */
+  answer(text: string): this {
+    this.answerList.push(requireText(text, "text"));
+    return this;
+  }
+
+  /** A snapshot of the content, with the automatic caution when the record has safety topics. */
+  content(): CalculationRecordContent {
+    const standard = processSafetyCaution(this.topicList);
+    const hasStandard = this.cautionList.some((c) => c.startsWith(standard.slice(0, 40)));
+    const cautions =
+      this.topicList.length > 0 && !hasStandard
+        ? [standard, ...this.cautionList]
+        : [...this.cautionList];
+    return {
+      anchor: this.anchor,
+      title: this.title,
+      question: this.question,
+      author: this.author,
+      site: this.site,
+      createdAt: this.createdAt,
+      environment: this.environment,
+      topics: [...this.topicList],
+      inputs: [...this.inputList],
+      models: [...this.modelList],
+      items: this.itemList.filter((i) => i.kind === "table" || i.chart.html !== ""),
+      warnings: [...this.warningMap.values()].map((w) => ({
+        code: w.code,
+        message: w.message,
+        from: [...w.from],
+        count: w.count,
+      })),
+      cautions,
+      answers: [...this.answerList],
+    };
+  }
+
+  /** Waits for charts still being drawn (started without `await`). */
+  async settled(): Promise<void> {
+    while (this.pending.size > 0) await Promise.allSettled([...this.pending]);
+  }
+
+  /** The record as an HTML fragment (scoped styles, no runtime), for a notebook cell. */
+  html(): string {
+    return calculationRecordFragment(this.content());
+  }
+
+  /** The record as a standalone HTML document (charts live, nothing loaded from the network). */
+  async document(): Promise<string> {
+    await this.settled();
+    return calculationRecordDocument(this.content());
+  }
+
+  /** The record as Markdown (charts are listed; they are drawn in the HTML record). */
+  async markdown(): Promise<string> {
+    await this.settled();
+    return calculationRecordMarkdown(this.content());
+  }
+
+  /** Shows the record so far in the current tslab cell. */
+  async show(): Promise<void> {
+    await this.settled();
+    const session = displaySession();
+    const hasCharts = this.itemList.some((i) => i.kind === "chart");
+    const includeRuntime = hasCharts && !session.runtimeSent;
+    const html = (includeRuntime ? vegaRuntimeScript() + "\n" : "") + this.html();
+    // eslint-disable-next-line @typescript-eslint/no-require-imports
+    const tslab = require("tslab") as { display: { html(s: string): void } };
+    tslab.display.html(html);
+    if (includeRuntime) session.runtimeSent = true;
+  }
+
+  private addWarning(warning: ResultWarning, from: string | undefined): void {
+    const key = `${warning.code}\u0000${warning.message}`;
+    let entry = this.warningMap.get(key);
+    if (!entry) {
+      entry = { code: warning.code, message: warning.message, from: new Set(), count: 0 };
+      this.warningMap.set(key, entry);
+    }
+    entry.count += 1;
+    if (from !== undefined) entry.from.add(from);
+  }
+
+  private resolveBasis(basis: RecordBasis, where: string): ResolvedBasis {
+    let modelId: string | undefined;
+    if (basis.model !== undefined) {
+      const id = typeof basis.model === "string" ? basis.model : basis.model?.id;
+      if (!this.modelList.some((m) => m.id === id)) {
+        throw new InputError({
+          input: `${where}.model`,
+          unit: "-",
+          validRange: `a model of this record (${this.modelList.map((m) => m.id).join(", ") || "none yet: call model() first"})`,
+          received: id ?? basis.model,
+        });
+      }
+      modelId = id;
+    }
+    const inputIds: string[] = [];
+    if (basis.inputs !== undefined) {
+      if (!Array.isArray(basis.inputs)) {
+        throw new InputError({
+          input: `${where}.inputs`,
+          unit: "-",
+          validRange: "an array of inputs",
+          received: basis.inputs,
+        });
+      }
+      basis.inputs.forEach((input, i) => {
+        const id = typeof input === "string" ? input : (input as RecordedInput | null)?.id;
+        if (!this.inputList.some((r) => r.id === id)) {
+          throw new InputError({
+            input: `${where}.inputs[${i}]`,
+            unit: "-",
+            validRange: `an input of this record (${this.inputList.map((r) => r.id).join(", ") || "none yet: call input() first"})`,
+            received: id ?? input,
+          });
+        }
+        if (!inputIds.includes(id as string)) inputIds.push(id as string);
+      });
+    }
+    return { modelId, inputIds };
+  }
+
+  /** @internal What the runner asks for. */
+  async renderFiles(): Promise<{ html: string; markdown: string }> {
+    await this.settled();
+    const content = this.content();
+    return {
+      html: calculationRecordDocument(content),
+      markdown: calculationRecordMarkdown(content),
+    };
+  }
+}
+
+function chartTitle(spec: VegaLiteSpec): string | undefined {
+  const title = spec.title;
+  if (typeof title === "string") return title;
+  if (Array.isArray(title)) return title.join(" ");
+  if (title && typeof title === "object")
+    return Array.isArray(title.text) ? title.text.join(" ") : String(title.text);
+  return undefined;
+}
+
+/** The basis in words: "M1; I1, I2". */
+export function basisText(basis: ResolvedBasis): string {
+  const parts = [basis.modelId, basis.inputIds.join(", ")].filter(
+    (s) => s !== undefined && s !== "",
+  );
+  return parts.length > 0 ? parts.join("; ") : "–";
+}
+
+/** The basis as links to the record's model and input entries (ids are generated, never user text). */
+export function basisLinks(anchor: string, basis: ResolvedBasis): string {
+  const link = (id: string) => `<a href="#${anchor}-${id}">${id}</a>`;
+  const parts: string[] = [];
+  if (basis.modelId !== undefined) parts.push(link(basis.modelId));
+  if (basis.inputIds.length > 0) parts.push(basis.inputIds.map(link).join(", "));
+  return parts.length > 0 ? parts.join("; ") : "–";
+}
+
+/**
+ * Starts a calculation record. In a notebook run by `isochor run` the record is also written as
+ * `<notebook>.record.html` and `<notebook>.record.md` beside the notebook's own record.
+ * @example
+ * const rec = startRecord({
+ *   question: "How far does the SGP-4 overhead gas cool across its letdown valve?",
+ *   site: "Corvid Point Refinery (invented)",
+ *   topics: ["low-metal-temperature"],
+ * });
+ */
+export function startRecord(options: StartRecordOptions): CalculationRecord {
+  const record = new CalculationRecord(options);
+  if (options.register ?? true) {
+    registerRecord({ title: record.title, renderFiles: () => record.renderFiles() });
+  }
+  return record;
+}
