@@ -273,7 +273,7 @@ export function calculationRecordFragment(c: CalculationRecordContent): string {
   );
   parts.push(
     section(
-      ++n,
+      n + 1,
       "Environment",
       `<dl class="calc-kv"><dt>isochor</dt><dd>${e(env.isochorVersion)}</dd>` +
         `<dt>Git commit</dt><dd><code>${e(env.gitCommit)}</code>${env.gitDirty ? " (working tree had uncommitted changes)" : ""}</dd>` +
