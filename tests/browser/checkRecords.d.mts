@@ -5,7 +5,23 @@ export interface RecordCheck {
   message: string;
 }
 export const DEFAULT_CHROMIUM_PATH: string;
+/** Global that security payloads set; it must stay undefined. */
+export const INJECTION_FLAG: string;
+export interface CheckRecordsOptions {
+  /** Chromium binary. Default /usr/lib/chromium/chromium. */
+  chromiumPath?: string;
+  /** Time for all charts of a record to go live, ms. Default 20000. */
+  timeoutMs?: number;
+  /** Strings each page must show as literal text (outside script/style). Default none. */
+  expectText?: string[];
+  /** Strings the live charts of each page must draw (SVG text). Default none. */
+  expectChartText?: string[];
+  /** Window properties that must stay undefined. Default [INJECTION_FLAG]. */
+  forbiddenGlobals?: string[];
+  /** Also check x.record.html, x.record-N.html beside each x.html. Default true. */
+  siblings?: boolean;
+}
 export function checkRecords(
   htmlFiles: string[],
-  options?: { chromiumPath?: string; timeoutMs?: number },
+  options?: CheckRecordsOptions,
 ): Promise<RecordCheck[]>;

@@ -1,4 +1,4 @@
-/* global document */
+/* global document, window */
 // Browser check of HTML calculation records (plain ESM, runs without a build step).
 //
 // Each record is opened from file:// in headless Chromium (playwright-core, system Chromium).
@@ -7,17 +7,26 @@
 //     the check),
 //   - the page raises no error and logs no console error,
 //   - every chart container (data-isochor-chart, set by chartHtml) reaches "live": vega-embed has
-//     drawn it from the inline runtime, and it holds a rendered <svg> or <canvas>.
+//     drawn it from the inline runtime, and it holds a rendered <svg> or <canvas>,
+//   - no injected script ran: the canary globals (default INJECTION_FLAG, which the security tests
+//     put in their <script> payloads) are still undefined after the charts went live,
+//   - optionally, given texts are on the page as literal text (options.expectText) or in the live
+//     charts' drawn SVG (options.expectChartText): a label "<script>..." shows as text.
+// A notebook record x.html is checked together with the calculation records beside it
+// (x.record.html, x.record-2.html, ...) unless options.siblings is false; they are reported as
+// separate results.
 //
 // CLI: node tests/browser/checkRecords.mjs [--chromium <path>] <record.html...>
 //      prints one line per record and exits 1 if any failed.
-import { mkdtempSync, rmSync, existsSync } from "node:fs";
+import { mkdtempSync, rmSync, existsSync, readdirSync } from "node:fs";
 import { tmpdir } from "node:os";
-import { basename, join, resolve } from "node:path";
+import { basename, dirname, join, resolve } from "node:path";
 import { pathToFileURL, fileURLToPath } from "node:url";
 import { chromium } from "playwright-core";
 
 export const DEFAULT_CHROMIUM_PATH = "/usr/lib/chromium/chromium";
+/** Global that security payloads set (`window.__isochorInjected = 1`); it must stay undefined. */
+export const INJECTION_FLAG = "__isochorInjected";
 const CHART_ATTRIBUTE = "data-isochor-chart";
 const CHROMIUM_ARGS = [
   "--headless",
@@ -33,14 +42,25 @@ const CHROMIUM_ARGS = [
 /**
  * Checks records in headless Chromium.
  * @param {string[]} htmlFiles paths of record files
- * @param {{ chromiumPath?: string, timeoutMs?: number }} [options]
+ * @param {{ chromiumPath?: string, timeoutMs?: number, expectText?: string[],
+ *   expectChartText?: string[], forbiddenGlobals?: string[], siblings?: boolean }} [options]
  *   chromiumPath: Chromium binary (default /usr/lib/chromium/chromium);
- *   timeoutMs: how long each record may take to make all charts live (default 20000 ms)
+ *   timeoutMs: how long each record may take to make all charts live (default 20000 ms);
+ *   expectText: strings each page must show as literal text (text nodes outside script/style);
+ *   expectChartText: strings each page's live charts must draw (text of their SVG);
+ *   forbiddenGlobals: window properties that must stay undefined (default [INJECTION_FLAG]);
+ *   siblings: also check x.record.html, x.record-N.html beside each x.html (default true)
  * @returns {Promise<Array<{ name: string, ok: boolean, message: string }>>}
  */
 export async function checkRecords(htmlFiles, options = {}) {
   const chromiumPath = options.chromiumPath ?? DEFAULT_CHROMIUM_PATH;
   const timeoutMs = options.timeoutMs ?? 20000;
+  const expectations = {
+    text: options.expectText ?? [],
+    chartText: options.expectChartText ?? [],
+    globals: options.forbiddenGlobals ?? [INJECTION_FLAG],
+  };
+  if (options.siblings ?? true) htmlFiles = withCalculationRecords(htmlFiles);
   if (!existsSync(chromiumPath)) {
     throw new Error(`checkRecords: no Chromium at ${chromiumPath}`);
   }
@@ -60,7 +80,7 @@ export async function checkRecords(htmlFiles, options = {}) {
   const results = [];
   try {
     for (const file of htmlFiles) {
-      results.push(await checkOne(context, file, timeoutMs));
+      results.push(await checkOne(context, file, timeoutMs, expectations));
     }
   } finally {
     await context.close();
@@ -69,7 +89,28 @@ export async function checkRecords(htmlFiles, options = {}) {
   return results;
 }
 
-async function checkOne(context, file, timeoutMs) {
+/** Adds the calculation records written beside notebook records (x.record.html, x.record-2.html). */
+function withCalculationRecords(files) {
+  const out = [];
+  for (const file of files) {
+    out.push(file);
+    if (/\.record(-\d+)?\.html$/.test(file) || !file.endsWith(".html") || !existsSync(file))
+      continue;
+    const dir = dirname(file);
+    const stem = basename(file).slice(0, -".html".length);
+    const siblings = readdirSync(dir)
+      .filter(
+        (f) =>
+          f.startsWith(`${stem}.record`) && /^\.record(-\d+)?\.html$/.test(f.slice(stem.length)),
+      )
+      .sort((a, b) => a.localeCompare(b, "en", { numeric: true }))
+      .map((f) => join(dir, f));
+    for (const sibling of siblings) if (!files.includes(sibling)) out.push(sibling);
+  }
+  return out;
+}
+
+async function checkOne(context, file, timeoutMs, expectations) {
   const name = basename(file);
   if (!existsSync(file)) return { name, ok: false, message: `no such file: ${file}` };
   const page = await context.newPage();
@@ -117,6 +158,32 @@ async function checkOne(context, file, timeoutMs) {
     }
     // Let late requests or errors surface.
     await page.waitForTimeout(200);
+    const seen = await page.evaluate(
+      ({ globals }) => {
+        const skip = new Set(["SCRIPT", "STYLE", "NOSCRIPT", "TEMPLATE"]);
+        const walker = document.createTreeWalker(document.body ?? document.documentElement, 4);
+        const parts = [];
+        for (let node = walker.nextNode(); node; node = walker.nextNode()) {
+          if (!skip.has(node.parentElement?.tagName ?? "")) parts.push(node.nodeValue ?? "");
+        }
+        const chartText = Array.from(
+          document.querySelectorAll(".isochor-chart-live svg"),
+          (svg) => svg.textContent ?? "",
+        ).join("\n");
+        const setGlobals = globals.filter((g) => typeof window[g] !== "undefined");
+        return { text: parts.join(""), chartText, setGlobals };
+      },
+      { globals: expectations.globals },
+    );
+    for (const g of seen.setGlobals) problems.push(`injected script ran: window.${g} is set`);
+    for (const t of expectations.text) {
+      if (!seen.text.includes(t))
+        problems.push(`text not shown: ${JSON.stringify(t).slice(0, 120)}`);
+    }
+    for (const t of expectations.chartText) {
+      if (!seen.chartText.includes(t))
+        problems.push(`text not drawn in a live chart: ${JSON.stringify(t).slice(0, 120)}`);
+    }
     const ok = problems.length === 0;
     const message = ok
       ? `${total} chart${total === 1 ? "" : "s"} live, no request outside file://, no page errors`

@@ -4,7 +4,11 @@ import * as fs from "node:fs";
 import * as os from "node:os";
 import * as path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { checkRecords, DEFAULT_CHROMIUM_PATH } from "../../browser/checkRecords.mjs";
+import {
+  checkRecords,
+  DEFAULT_CHROMIUM_PATH,
+  INJECTION_FLAG,
+} from "../../browser/checkRecords.mjs";
 
 const chromium = process.env.ISOCHOR_CHROMIUM ?? DEFAULT_CHROMIUM_PATH;
 
@@ -51,5 +55,35 @@ describe.skipIf(!fs.existsSync(chromium))("checkRecords (headless Chromium)", ()
       ok: false,
       message: `no such file: ${path.join(dir, "absent.html")}`,
     });
+  }, 60_000);
+
+  it("fails when an injected script ran or an expected text is not shown; checks sibling calculation records", async () => {
+    const escaped = "&lt;script&gt;window.__isochorInjected=1&lt;/script&gt;";
+    const files = [
+      page("escaped.html", `<p>${escaped}</p>`),
+      page("ran.html", `<p>x</p><script>window.${INJECTION_FLAG}=1</script>`),
+      page("hidden.html", `<p>nothing here</p><script>var t = "<b>label</b>";</script>`),
+    ];
+    page("escaped.record.html", `<p>calculation</p><script>window.${INJECTION_FLAG}=1</script>`);
+    const results = await checkRecords(files, {
+      chromiumPath: chromium,
+      timeoutMs: 1500,
+      expectText: ["<script>window.__isochorInjected=1</script>"],
+    });
+    const byName = Object.fromEntries(results.map((r) => [r.name, r]));
+    expect(byName["escaped.html"]).toMatchObject({ ok: true });
+    expect(byName["ran.html"].message).toContain(
+      `injected script ran: window.${INJECTION_FLAG} is set`,
+    );
+    // Text inside a <script> element is not "shown".
+    expect(byName["hidden.html"].message).toContain("text not shown");
+    // The sibling calculation record of escaped.html was found and checked on its own.
+    expect(byName["escaped.record.html"].message).toContain("injected script ran");
+    expect(results.map((r) => r.name)).toEqual([
+      "escaped.html",
+      "escaped.record.html",
+      "ran.html",
+      "hidden.html",
+    ]);
   }, 60_000);
 });
