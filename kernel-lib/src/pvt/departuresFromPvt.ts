@@ -25,6 +25,7 @@ import type { IsothermDepartures, IsothermNodes } from "./integrateIsotherm.js";
 import type { BridgeOptions } from "./lowDensityBridge.js";
 import { fitVirialSurface } from "./fitVirialSurface.js";
 import type { FitVirialSurfaceOptions, VirialSurfaceFit } from "./fitVirialSurface.js";
+import { familyThreshold } from "./familyThreshold.js";
 import { linearisedPropagation, monteCarloPropagation } from "./propagateUncertainty.js";
 import type { PvtDiagnostic } from "./pvtDiagnostic.js";
 import type { PvtDataset, SetAsidePoint } from "./types.js";
@@ -778,8 +779,9 @@ export function virialFromSurface(s: VirialSurface, temperatureK: number, k: num
 /**
  * Maxwell-consistency check between two independent smoothings of the same data: the isochoric
  * slope of each isochore fit against the global surface's (dP/dT)_rho at the same (T, rho). Where
- * they differ by more than 3 combined standard uncertainties the data contradict the smooth
- * Helmholtz surface (a local step, a bad isochore, or a surface order too low there).
+ * they differ by more than the family threshold (familyThreshold.ts: at least 3 combined standard
+ * uncertainties, more when many nodes are checked) the data contradict the smooth Helmholtz
+ * surface (a local step, a bad isochore, or a surface order too low there).
  */
 function slopeConsistency(
   fits: readonly IsochoreFit[],
@@ -791,6 +793,7 @@ function slopeConsistency(
 ): PvtDiagnostic[] {
   const flagged: string[] = [];
   let checked = 0;
+  const zMax = familyThreshold(nodeSets.reduce((acc, set) => acc + set.length, 0));
   Ts.forEach((t, k) => {
     for (const j of nodeSets[k] as number[]) {
       const f = fits[j] as IsochoreFit;
@@ -803,7 +806,7 @@ function slopeConsistency(
       const uS = Math.sqrt(surfaceVariance(surface, g));
       const u = Math.hypot(e.uSlopePaPerK, uS);
       checked++;
-      if (u > 0 && Math.abs(e.slopePaPerK - sS) > 3 * u)
+      if (u > 0 && Math.abs(e.slopePaPerK - sS) > zMax * u)
         flagged.push(
           `${t.toFixed(2)} K, ${r.toPrecision(5)} mol/m3 (${((e.slopePaPerK - sS) / u).toFixed(1)} u)`,
         );
@@ -814,7 +817,7 @@ function slopeConsistency(
       {
         code: "maxwell-consistency",
         severity: "info",
-        message: `isochoric slopes of the isochore fits agree with the global surface within 3 u at all ${checked} nodes`,
+        message: `isochoric slopes of the isochore fits agree with the global surface within ${zMax.toFixed(2)} u (family threshold for ${checked} checks) at all ${checked} nodes`,
       },
     ];
   }
@@ -822,7 +825,7 @@ function slopeConsistency(
     {
       code: "maxwell-consistency",
       severity: "warning",
-      message: `isochoric slopes disagree with the global surface by more than 3 u at ${flagged.length} of ${checked} nodes: ${flagged.slice(0, 8).join("; ")}${flagged.length > 8 ? "; ..." : ""}. The data contradict a smooth Helmholtz surface there, or the surface order is too low`,
+      message: `isochoric slopes disagree with the global surface by more than ${zMax.toFixed(2)} u (family threshold for ${checked} checks) at ${flagged.length} of ${checked} nodes: ${flagged.slice(0, 8).join("; ")}${flagged.length > 8 ? "; ..." : ""}. The data contradict a smooth Helmholtz surface there, or the surface order is too low`,
     },
   ];
 }
