@@ -7,3 +7,4 @@ export * from "./display/index.js";
 export * from "./records/index.js";
 export * from "./progress/index.js";
 export { readPvtCsvFile } from "./pvt/readPvtCsvFile.js";
+export * from "./explorers/index.js";

@@ -6,6 +6,11 @@
  */
 interface DisplaySession {
   runtimeSent: boolean;
+  /**
+   * Other once-per-page scripts already sent this session, by their RUNTIME_MARKER_ATTRIBUTE
+   * value (e.g. the explorers' bundle). Cleared with the runtime flag.
+   */
+  scriptsSent: Set<string>;
 }
 
 const KEY = Symbol.for("isochor.display.session");
@@ -14,9 +19,11 @@ export function displaySession(): DisplaySession {
   const holder = globalThis as unknown as Record<symbol, DisplaySession | undefined>;
   let session = holder[KEY];
   if (!session) {
-    session = { runtimeSent: false };
+    session = { runtimeSent: false, scriptsSent: new Set() };
     holder[KEY] = session;
   }
+  // a session made by an older copy of the library in the same process lacks the set
+  session.scriptsSent ??= new Set();
   return session;
 }
 
@@ -26,5 +33,7 @@ export function displaySession(): DisplaySession {
  * until the runtime is sent). The records runner calls it before each notebook.
  */
 export function resetDisplaySession(): void {
-  displaySession().runtimeSent = false;
+  const session = displaySession();
+  session.runtimeSent = false;
+  session.scriptsSent.clear();
 }

@@ -1,0 +1,104 @@
+/**
+ * The fluids an explorer switches between, built once per model and kept with what is expensive
+ * and does not change while a slider moves (the saturation dome, the critical point). One cache
+ * per explorer on the page; a slider move then costs only the curve it redraws.
+ *
+ * Browser-safe.
+ */
+import type { Component } from "../components/types.js";
+import { InputError } from "../errors.js";
+import { defineFluid } from "../fluid/defineFluid.js";
+import { referenceFluid, referenceFluidIds } from "../eos/multiparameter/index.js";
+import { referenceFluidBinding } from "../eos/multiparameter/index.js";
+import { isModelId } from "../eos/createModel.js";
+import { saturationFromModel, type SampledDome } from "../charts/sample/saturationFromModel.js";
+import { tryPoint } from "../charts/sample/sampleGuard.js";
+import type { FluidBinding } from "../state/types.js";
+import type { ExplorerModelId } from "./explorerState.js";
+
+/** A model of the explorer's components, with its display name. */
+export interface ExplorerFluid {
+  readonly id: ExplorerModelId;
+  /** Model name, e.g. "Peng-Robinson (1976)". */
+  readonly name: string;
+  readonly binding: FluidBinding;
+}
+
+/** Is a reference equation shipped for this (pure) fluid? */
+export function hasReferenceEquation(components: readonly Component[]): boolean {
+  return components.length === 1 && referenceFluidIds().includes(components[0].id);
+}
+
+/** Checks a model id against the components: built-in ids, or "reference" for a pure fluid that has one. */
+export function checkExplorerModelId(
+  id: unknown,
+  components: readonly Component[],
+  input = "model",
+): ExplorerModelId {
+  if (id === "reference") {
+    if (!hasReferenceEquation(components)) {
+      throw new InputError({
+        input,
+        unit: "-",
+        validRange: `"reference" only for a pure fluid with a reference equation (${referenceFluidIds().join(", ")})`,
+        received: `"reference" for ${components.map((c) => c.id).join(", ")}`,
+      });
+    }
+    return "reference";
+  }
+  if (typeof id !== "string" || !isModelId(id)) {
+    throw new InputError({
+      input,
+      unit: "-",
+      validRange: 'a built-in model id (e.g. "peng-robinson") or "reference"',
+      received: id,
+    });
+  }
+  return id;
+}
+
+/** Per-explorer cache of fluids and domes. */
+export class ExplorerFluids {
+  private readonly fluids = new Map<ExplorerModelId, ExplorerFluid>();
+  private readonly domes = new Map<ExplorerModelId, SampledDome | null>();
+  private readonly memo = new Map<string, unknown>();
+
+  constructor(readonly components: readonly Component[]) {}
+
+  /** The fluid of a model (built on first use). */
+  fluid(id: ExplorerModelId): ExplorerFluid {
+    let f = this.fluids.get(id);
+    if (!f) {
+      if (id === "reference") {
+        const ref = referenceFluid(this.components[0].id);
+        f = { id, name: ref.info.name, binding: referenceFluidBinding(ref) };
+      } else {
+        const fluid = defineFluid({ components: this.components, model: id });
+        f = { id, name: fluid.model.info.name, binding: fluid };
+      }
+      this.fluids.set(id, f);
+    }
+    return f;
+  }
+
+  /**
+   * The saturation dome of a pure fluid's model, with enthalpy and entropy (null for a mixture or
+   * a model without a vapour-liquid critical point, e.g. the ideal gas).
+   */
+  dome(id: ExplorerModelId): SampledDome | null {
+    if (!this.domes.has(id)) {
+      const dome =
+        this.components.length === 1
+          ? (tryPoint(() => saturationFromModel(this.fluid(id).binding, { points: 40 })) ?? null)
+          : null;
+      this.domes.set(id, dome);
+    }
+    return this.domes.get(id) ?? null;
+  }
+
+  /** Any other value that depends only on the model: computed once under `key`. */
+  once<T>(key: string, compute: () => T): T {
+    if (!this.memo.has(key)) this.memo.set(key, compute());
+    return this.memo.get(key) as T;
+  }
+}

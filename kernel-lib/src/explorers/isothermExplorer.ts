@@ -1,0 +1,107 @@
+/**
+ * Isotherm explorer: one isotherm of the chosen model in P-v (or P-rho) at the slider temperature,
+ * over the model's own saturation dome and critical point, with the equal-area construction below
+ * the critical temperature. Moving the slider through Tc shows the loop flatten into the critical
+ * inflection; switching models shows how far each cubic puts its dome from the reference equation.
+ *
+ * Curves: charts/sample/isothermsFromModel (pressure from the residual Helmholtz energy on a density
+ * grid); dome: charts/sample/saturationFromModel (cached per model); chart: charts/isothermChart.
+ *
+ * Browser-safe.
+ */
+import { isothermChart } from "../charts/isotherms.js";
+import { isothermsFromModel } from "../charts/sample/isothermsFromModel.js";
+import type { ControlValue, ExplorerDefinition } from "./explorerControls.js";
+import {
+  fluidSubtitle,
+  formatQuantity,
+  modelControl,
+  modelIn,
+  numberIn,
+  temperatureControl,
+  unknownControl,
+} from "./explorerCommon.js";
+import type { IsothermExplorerState } from "./explorerState.js";
+import type { ExplorerFluids } from "./explorerFluids.js";
+import { InputError } from "../errors.js";
+
+/** Legend label of the isotherm (its temperature is on the slider and in the status line). */
+const SLIDER_LABEL = "at the slider temperature";
+
+export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
+  controls(state, fluids) {
+    return [
+      temperatureControl(state.temperatureK, state.temperatureRangeK),
+      modelControl(state, fluids),
+      {
+        type: "select",
+        key: "abscissa",
+        label: "Abscissa",
+        options: [
+          { value: "molarVolume", label: "Molar volume (log)" },
+          { value: "density", label: "Molar density" },
+        ],
+        value: state.abscissa,
+      },
+    ];
+  },
+
+  update(state, key, value: ControlValue) {
+    if (key === "temperatureK") {
+      const [lo, hi] = state.temperatureRangeK;
+      return { ...state, temperatureK: numberIn(key, value, lo, hi, "K") };
+    }
+    if (key === "model") return { ...state, model: modelIn(state, value) };
+    if (key === "abscissa") {
+      if (value !== "molarVolume" && value !== "density") {
+        throw new InputError({
+          input: "abscissa",
+          unit: "-",
+          validRange: '"molarVolume" or "density"',
+          received: value,
+        });
+      }
+      return { ...state, abscissa: value };
+    }
+    throw unknownControl(key, ["temperatureK", "model", "abscissa"]);
+  },
+
+  chart(state, fluids: ExplorerFluids) {
+    const fluid = fluids.fluid(state.model);
+    const dome = fluids.dome(state.model);
+    const [curve] = isothermsFromModel(fluid.binding.model, [state.temperatureK], {
+      points: state.points,
+    });
+    // Fixed label and pressure axis per model: a slider move then changes only data, which the
+    // page redraws in place (widgets/src/explorers/liveChart.ts) instead of re-embedding.
+    const Pc = dome?.critical.pressurePa;
+    return isothermChart(
+      {
+        isotherms: [{ ...curve, label: SLIDER_LABEL }],
+        ...(dome ? { saturation: dome.saturation, critical: dome.critical } : {}),
+      },
+      {
+        x: state.abscissa,
+        ...(Pc !== undefined ? { pressureRangePa: [-0.5 * Pc, 2 * Pc] as const } : {}),
+        units: state.units,
+        width: state.width,
+        height: state.height,
+        title: state.title ?? "Isotherm",
+        subtitle: fluidSubtitle(state, fluids),
+      },
+    );
+  },
+
+  status(state, fluids) {
+    const dome = fluids.dome(state.model);
+    if (!dome) return "No vapour-liquid critical point for this model and composition.";
+    const Tc = dome.critical.temperatureK;
+    const T = `T = ${formatQuantity(state.temperatureK, "temperature", state.units)}. `;
+    return (
+      T +
+      (state.temperatureK < Tc
+        ? `Below the critical temperature (Tc = ${formatQuantity(Tc, "temperature", state.units)} in this model): the loop is replaced by the equal-area tie line at the vapour pressure.`
+        : `Above the critical temperature (Tc = ${formatQuantity(Tc, "temperature", state.units)} in this model): one phase at every density.`)
+    );
+  },
+};

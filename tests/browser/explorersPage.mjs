@@ -1,0 +1,90 @@
+// A standalone test page with one explorer of each kind, built from the Node side
+// (kernel-lib/dist: explorerHtml + the chart runtime + the explorers' bundle, each once), with the
+// same Content-Security-Policy as the calculation records: nothing may load from anywhere.
+// Used by the explorer browser checks (explorersCheck.mjs) and the benchmark (widgets/bench/).
+// Needs `npm run build` (kernel-lib/dist and widgets/dist).
+import { createRequire } from "node:module";
+import { mkdirSync, writeFileSync } from "node:fs";
+import { dirname, join, resolve } from "node:path";
+import { fileURLToPath } from "node:url";
+
+const root = resolve(dirname(fileURLToPath(import.meta.url)), "..", "..");
+const require = createRequire(import.meta.url);
+
+/** A title with markup in it: it must show as text and never run. */
+export const HOSTILE_TITLE = '<script>window.__isochorInjected = 1</script><b>bold?</b> & "quotes"';
+
+const CSP = [
+  "default-src 'none'",
+  "script-src 'unsafe-inline' 'unsafe-eval'",
+  "style-src 'unsafe-inline'",
+  "img-src data:",
+  "font-src data:",
+  "connect-src 'none'",
+  "form-action 'none'",
+  "base-uri 'none'",
+].join("; ");
+
+/** The explorers on the page: id of the wrapper element -> kind and options. */
+export const PAGE_EXPLORERS = [
+  {
+    id: "isotherms",
+    kind: "isotherms",
+    options: {
+      components: "carbon dioxide",
+      model: "peng-robinson",
+      temperatureK: 280,
+      points: 400,
+      title: HOSTILE_TITLE,
+    },
+  },
+  {
+    id: "departures",
+    kind: "departures",
+    options: {
+      components: ["methane", "propane"],
+      x: [0.7, 0.3],
+      temperatureK: 300,
+      points: 400,
+      properties: ["h", "s"],
+    },
+  },
+  {
+    id: "pressure-enthalpy",
+    kind: "pressure-enthalpy",
+    options: {
+      components: "propane",
+      model: "peng-robinson",
+      temperatureK: 300,
+      pressurePa: 5e5,
+      points: 400,
+    },
+  },
+];
+
+/**
+ * Writes the page.
+ * @param {string} file output path
+ * @returns {Promise<string>} the absolute path
+ */
+export async function writeExplorersPage(file) {
+  const lib = require(join(root, "kernel-lib", "dist", "index.js"));
+  const parts = [];
+  for (const e of PAGE_EXPLORERS) {
+    const html = await lib.explorerHtml(e.kind, e.options);
+    parts.push(`<section id="page-${e.id}"><h2>${e.kind}</h2>${html}</section>`);
+  }
+  const page = `<!doctype html>
+<html lang="en"><head><meta charset="utf-8">
+<meta http-equiv="Content-Security-Policy" content="${CSP}">
+<title>isochor explorers test page</title>
+${lib.vegaRuntimeScript()}
+${lib.widgetsBundleScript().script}
+</head><body>
+${parts.join("\n")}
+</body></html>`;
+  const out = resolve(file);
+  mkdirSync(dirname(out), { recursive: true });
+  writeFileSync(out, page);
+  return out;
+}
