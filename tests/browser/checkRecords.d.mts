@@ -14,7 +14,7 @@ export interface CheckRecordsOptions {
   timeoutMs?: number;
   /** Strings each page must show as literal text (outside script/style). Default none. */
   expectText?: string[];
-  /** Strings the live charts of each page must draw (SVG text). Default none. */
+  /** Strings every live chart of each page must draw (its SVG text). Default none. */
   expectChartText?: string[];
   /** Window properties that must stay undefined. Default [INJECTION_FLAG]. */
   forbiddenGlobals?: string[];

@@ -11,7 +11,7 @@
 //   - no injected script ran: the canary globals (default INJECTION_FLAG, which the security tests
 //     put in their <script> payloads) are still undefined after the charts went live,
 //   - optionally, given texts are on the page as literal text (options.expectText) or in the live
-//     charts' drawn SVG (options.expectChartText): a label "<script>..." shows as text.
+//     SVG of every live chart (options.expectChartText): a label "<script>..." shows as text.
 // A notebook record x.html is checked together with the calculation records beside it
 // (x.record.html, x.record-2.html, ...) unless options.siblings is false; they are reported as
 // separate results.
@@ -47,7 +47,7 @@ const CHROMIUM_ARGS = [
  *   chromiumPath: Chromium binary (default /usr/lib/chromium/chromium);
  *   timeoutMs: how long each record may take to make all charts live (default 20000 ms);
  *   expectText: strings each page must show as literal text (text nodes outside script/style);
- *   expectChartText: strings each page's live charts must draw (text of their SVG);
+ *   expectChartText: strings every live chart of each page must draw (text of its SVG);
  *   forbiddenGlobals: window properties that must stay undefined (default [INJECTION_FLAG]);
  *   siblings: also check x.record.html, x.record-N.html beside each x.html (default true)
  * @returns {Promise<Array<{ name: string, ok: boolean, message: string }>>}
@@ -166,12 +166,12 @@ async function checkOne(context, file, timeoutMs, expectations) {
         for (let node = walker.nextNode(); node; node = walker.nextNode()) {
           if (!skip.has(node.parentElement?.tagName ?? "")) parts.push(node.nodeValue ?? "");
         }
-        const chartText = Array.from(
+        const chartTexts = Array.from(
           document.querySelectorAll(".isochor-chart-live svg"),
           (svg) => svg.textContent ?? "",
-        ).join("\n");
+        );
         const setGlobals = globals.filter((g) => typeof window[g] !== "undefined");
-        return { text: parts.join(""), chartText, setGlobals };
+        return { text: parts.join(""), chartTexts, setGlobals };
       },
       { globals: expectations.globals },
     );
@@ -181,8 +181,11 @@ async function checkOne(context, file, timeoutMs, expectations) {
         problems.push(`text not shown: ${JSON.stringify(t).slice(0, 120)}`);
     }
     for (const t of expectations.chartText) {
-      if (!seen.chartText.includes(t))
-        problems.push(`text not drawn in a live chart: ${JSON.stringify(t).slice(0, 120)}`);
+      const missing = seen.chartTexts.filter((c) => !c.includes(t)).length;
+      if (seen.chartTexts.length === 0 || missing > 0)
+        problems.push(
+          `text not drawn in ${seen.chartTexts.length === 0 ? "any live chart (none)" : `${missing} of ${seen.chartTexts.length} live charts`}: ${JSON.stringify(t).slice(0, 120)}`,
+        );
     }
     const ok = problems.length === 0;
     const message = ok
