@@ -65,3 +65,5 @@ export { surfacePressureModel } from "./surfacePressureModel.js";
 export type { SurfacePressureModelOptions } from "./surfacePressureModel.js";
 export { departureBandChart } from "./departureBandChart.js";
 export type { DepartureBandChartOptions } from "./departureBandChart.js";
+export { departureResidualChart } from "./departureResidualChart.js";
+export type { DepartureResidualChartOptions } from "./departureResidualChart.js";

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import {
   compareWithModel,
   departureBandChart,
+  departureResidualChart,
   departuresFromPvt,
   surfaceResidualModel,
 } from "../../../kernel-lib/src/pvt/index.js";
@@ -46,6 +47,18 @@ describe("departureBandChart", () => {
     expect(JSON.stringify(spec.title)).toMatch(/dashed: surface fit/);
     expect(schemaErrors(spec)).toEqual([]);
     await compileSpec(spec);
+  });
+
+  it("residual chart: data minus model with the data's band around zero; schema-valid and compiles", async () => {
+    const cmp = compareWithModel(result, surfaceResidualModel(result.surfaceFit.surface));
+    const spec = departureResidualChart(result, cmp, { quantity: "s", modelLabel: "surface fit" });
+    expect(schemaErrors(spec)).toEqual([]);
+    const { warnings } = await compileSpec(spec);
+    expect(warnings).toEqual([]);
+    const rows = (spec.layer as { data: { values: { difference?: number }[] } }[])[1]!.data.values;
+    expect(rows).toHaveLength(cmp.length);
+    expect(rows[0]!.difference).toBe(cmp[0]!.difference.s);
+    expect(() => departureResidualChart(result, [])).toThrow(InputError);
   });
 
   it("refuses an unknown quantity and a bad coverage factor", () => {

@@ -1,0 +1,127 @@
+/**
+ * Residual plot of a model comparison (compareWithModel.ts): data-derived departure minus the
+ * model's, against density, one colour per isotherm, with the data's +/- k standard uncertainty
+ * band around zero: where a model's curve leaves the band, the data say it is wrong there.
+ * A pure function returning an editable Vega-Lite spec; SI molar units on the axes.
+ */
+import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
+import { InputError } from "../errors.js";
+import type { ModelComparisonPoint } from "./compareWithModel.js";
+import type { PvtRouteResult } from "./departuresFromPvt.js";
+
+export interface DepartureResidualChartOptions {
+  /** Which residual property. Default "h". */
+  quantity?: "a" | "s" | "u" | "h" | "g";
+  /** Coverage factor of the band. Default 2. */
+  coverageFactor?: number;
+  /** Model name for the title. Default "model". */
+  modelLabel?: string;
+  width?: number;
+  height?: number;
+}
+
+const UNITS = { a: "J/mol", s: "J/(mol K)", u: "J/mol", h: "J/mol", g: "J/mol" };
+
+export function departureResidualChart(
+  result: PvtRouteResult,
+  comparison: readonly ModelComparisonPoint[],
+  options: DepartureResidualChartOptions = {},
+): VegaLiteSpec {
+  const q = options.quantity ?? "h";
+  if (!(q in UNITS)) {
+    throw new InputError({
+      input: "options.quantity",
+      unit: "-",
+      validRange: "one of a, s, u, h, g",
+      received: q,
+    });
+  }
+  const k = options.coverageFactor ?? 2;
+  if (!(k > 0 && k < Infinity)) {
+    throw new InputError({
+      input: "options.coverageFactor",
+      unit: "-",
+      validRange: "a finite number > 0",
+      received: k,
+    });
+  }
+  if (comparison.length === 0) {
+    throw new InputError({
+      input: "comparison",
+      unit: "-",
+      validRange: "at least one compared state",
+      received: 0,
+    });
+  }
+  const label = (t: number) => `${t.toFixed(1)} K`;
+  const band = result.isotherms.flatMap((iso) =>
+    iso.states.map((s) => ({
+      isotherm: label(iso.temperatureK),
+      rho: s.densityMolPerM3,
+      lower: -k * s.uncertainty[q],
+      upper: k * s.uncertainty[q],
+    })),
+  );
+  const rows = comparison.map((p) => ({
+    isotherm: label(p.temperatureK),
+    rho: p.densityMolPerM3,
+    difference: p.difference[q],
+    z: p.z[q],
+  }));
+  const unit = UNITS[q];
+  const x = { field: "rho", type: "quantitative", title: "Molar density ρ / (mol/m3)" };
+  const color = { field: "isotherm", type: "nominal", title: "Isotherm", sort: null };
+  const model = options.modelLabel ?? "model";
+  return {
+    $schema: "https://vega.github.io/schema/vega-lite/v6.json",
+    title: {
+      text: `Data minus ${model}: residual ${q}`,
+      subtitle: `band: ±${k} standard uncertainties of the data`,
+    },
+    width: options.width ?? 560,
+    height: options.height ?? 260,
+    layer: [
+      {
+        data: { values: band },
+        mark: { type: "area", opacity: 0.2 },
+        encoding: {
+          x,
+          y: {
+            field: "lower",
+            type: "quantitative",
+            title: `Δ${q}_res (data − ${model}) / (${unit})`,
+          },
+          y2: { field: "upper" },
+          color,
+        },
+      },
+      {
+        data: { values: rows },
+        mark: { type: "line", point: true },
+        encoding: {
+          x,
+          y: { field: "difference", type: "quantitative" },
+          color,
+          tooltip: [
+            { field: "isotherm", type: "nominal" },
+            { field: "rho", type: "quantitative", format: ".5~g" },
+            { field: "difference", type: "quantitative", format: ".4~g" },
+            { field: "z", type: "quantitative", title: "difference / u", format: ".2f" },
+          ],
+        },
+      },
+      {
+        data: { values: [{ zero: 0 }] },
+        mark: { type: "rule", color: "#555" },
+        encoding: { y: { field: "zero", type: "quantitative" } },
+      },
+    ],
+    usermeta: {
+      isochor: {
+        chart: "pvt-departure-residuals",
+        units: { molarDensity: "mol/m3", [q]: unit },
+        warnings: [],
+      },
+    },
+  } as VegaLiteSpec;
+}
