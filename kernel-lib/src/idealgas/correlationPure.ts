@@ -18,6 +18,7 @@ import {
 } from "./cpCorrelation.js";
 import { checkTemperatureRange, type TemperatureRangeOptions } from "./temperatureRange.js";
 import { STANDARD_TEMPERATURE_K, type IdealGasPure } from "./types.js";
+import { registerUncheckedPure, type UncheckedPure } from "./uncheckedPure.js";
 
 /** An IdealGasPure built from a Component's cp correlation; keeps the component for its formation data. */
 export interface CorrelationIdealGas extends IdealGasPure {
@@ -45,8 +46,25 @@ export function idealGasFromCorrelation(
     correlation.form === "polynomial" ? "polynomial cp correlation" : "Aly-Lee cp correlation";
   const method = `heat-capacity correlation (${formName}: ${shortSource(component.sources.heatCapacity)})`;
   const range = { min: correlation.minTemperatureK, max: correlation.maxTemperatureK };
-  const check = (t: number) => checkTemperatureRange(component.id, method, range, t, options);
-  return Object.freeze({
+  const check = (t: number) => {
+    // inside the range with a valid margin there is nothing to report: skip the general check
+    const margin = options.extrapolationMargin;
+    if (
+      t > 0 &&
+      t >= range.min &&
+      t <= range.max &&
+      (margin === undefined || (margin >= 0 && margin < 1))
+    )
+      return;
+    checkTemperatureRange(component.id, method, range, t, options);
+  };
+  const unchecked: UncheckedPure = {
+    cp: (t) => correlationCp(correlation, t),
+    enthalpyFrom298: (t) => correlationCpIntegral(correlation, STANDARD_TEMPERATURE_K, t),
+    entropyFrom298: (t) => correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, t),
+    absoluteEntropy298: component.absoluteEntropyJPerMolK,
+  };
+  const pure: CorrelationIdealGas = Object.freeze({
     componentId: component.id,
     method,
     source: component.sources.heatCapacity,
@@ -79,6 +97,10 @@ export function idealGasFromCorrelation(
       return s298 + correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, temperatureK);
     },
   });
+  // with an invalid margin every public method throws; leave such a pure to the general path
+  const margin = options.extrapolationMargin;
+  if (margin === undefined || (margin >= 0 && margin < 1)) registerUncheckedPure(pure, unchecked);
+  return pure;
 }
 
 /**

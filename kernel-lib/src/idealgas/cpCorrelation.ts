@@ -40,11 +40,7 @@ export function correlationCpIntegral(
   t2K: number,
 ): number {
   if (correlation.form === "polynomial") {
-    return integratePiecewise(correlation, t1K, t2K, (a, lo, hi) => {
-      let sum = 0;
-      for (let k = 0; k < a.length; k++) sum += (a[k] * powerDifference(hi, lo, k + 1)) / (k + 1);
-      return R * sum;
-    });
+    return integratePiecewise(correlation, t1K, t2K, polynomialCpPiece);
   }
   return alyLeeH(correlation, t2K) - alyLeeH(correlation, t1K);
 }
@@ -56,27 +52,41 @@ export function correlationCpOverTIntegral(
   t2K: number,
 ): number {
   if (correlation.form === "polynomial") {
-    return integratePiecewise(correlation, t1K, t2K, (a, lo, hi) => {
-      let sum = a.length > 0 ? a[0] * Math.log1p((hi - lo) / lo) : 0;
-      for (let k = 1; k < a.length; k++) sum += (a[k] * powerDifference(hi, lo, k)) / k;
-      return R * sum;
-    });
+    return integratePiecewise(correlation, t1K, t2K, polynomialCpOverTPiece);
   }
   return alyLeeS(correlation, t2K) - alyLeeS(correlation, t1K);
 }
 
 /**
- * hi^n - lo^n as (hi - lo) * sum_j hi^j lo^(n-1-j): no cancellation between two large powers when
- * hi and lo are close (a short temperature step), where the naive difference loses digits.
+ * R sum_k a_k (hi^(k+1) - lo^(k+1)) / (k+1) over one segment. Each power difference is written
+ * hi^n - lo^n = (hi - lo) q_n with q_n = sum_j hi^j lo^(n-1-j), so a short step loses no digits to
+ * cancellation; q_n comes from the recurrence q_(n+1) = hi^n + lo q_n (q_1 = 1), one multiply-add
+ * per coefficient instead of a sum of powers.
  */
-function powerDifference(hi: number, lo: number, n: number): number {
+function polynomialCpPiece(a: readonly number[], lo: number, hi: number): number {
   let sum = 0;
-  let hiPower = 1;
-  for (let j = 0; j < n; j++) {
-    sum += hiPower * lo ** (n - 1 - j);
+  let q = 1; // q_(k+1)
+  let hiPower = 1; // hi^k
+  for (let k = 0; k < a.length; k++) {
+    sum += (a[k] * q) / (k + 1);
     hiPower *= hi;
+    q = hiPower + lo * q;
   }
-  return (hi - lo) * sum;
+  return R * (hi - lo) * sum;
+}
+
+/** R [a_0 ln(hi/lo) + sum_(k>=1) a_k (hi^k - lo^k) / k] over one segment (same recurrence). */
+function polynomialCpOverTPiece(a: readonly number[], lo: number, hi: number): number {
+  if (a.length === 0) return 0;
+  let sum = 0;
+  let q = 1; // q_k
+  let hiPower = 1; // hi^(k-1)
+  for (let k = 1; k < a.length; k++) {
+    sum += (a[k] * q) / k;
+    hiPower *= hi;
+    q = hiPower + lo * q;
+  }
+  return R * (a[0] * Math.log1p((hi - lo) / lo) + (hi - lo) * sum);
 }
 
 function segmentFor(correlation: PolynomialCp, temperatureK: number) {

@@ -18,7 +18,16 @@ import { requirePositive } from "../validate.js";
 import { pushUnique } from "./messages.js";
 import { formationReferenceState, pureReferenceValues } from "./referenceState.js";
 import { checkTemperatureRange, type TemperatureRangeOptions } from "./temperatureRange.js";
-import type { IdealGasMixture, IdealGasProperties, IdealGasPure, ReferenceState } from "./types.js";
+import {
+  STANDARD_PRESSURE_PA,
+  type IdealGasMixture,
+  type IdealGasProperties,
+  type IdealGasPure,
+  type ReferenceState,
+} from "./types.js";
+import { uncheckedPureOf, type UncheckedPure } from "./uncheckedPure.js";
+
+const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 
 /** Options for `idealGasMixture`. */
 export interface IdealGasMixtureOptions extends TemperatureRangeOptions {
@@ -79,11 +88,68 @@ export function idealGasMixture(
     requirePositive("referenceState.pressurePa", referenceState.pressurePa, "Pa");
   }
   const list = Object.freeze([...pures]);
+  const fast = prepareFastPath(list, referenceState, components);
 
   function at(temperatureK: number, pressurePa: number, x: readonly number[]): IdealGasProperties {
     requirePositive("temperatureK", temperatureK, "K");
     requirePositive("pressurePa", pressurePa, "Pa");
     checkMoleFractions(x, list.length);
+    return fastAt(temperatureK, pressurePa, x) ?? generalAt(temperatureK, pressurePa, x);
+  }
+
+  /**
+   * The common case without a branch that could warn or throw: every present component has an
+   * unchecked evaluator, carries no warnings, has its reference data, and T (and a zero-at T0) lies
+   * inside its range. Same formulas as generalAt; undefined when any condition fails.
+   */
+  function fastAt(
+    temperatureK: number,
+    pressurePa: number,
+    x: readonly number[],
+  ): IdealGasProperties | undefined {
+    if (fast === undefined) return undefined;
+    const margin = options.extrapolationMargin;
+    if (!(margin === undefined || (margin >= 0 && margin < 1))) return undefined;
+    let h = 0;
+    let s = 0;
+    let cp = 0;
+    for (let i = 0; i < list.length; i++) {
+      const xi = x[i];
+      if (xi === 0) continue;
+      const f = fast[i];
+      if (!(f.usable && temperatureK >= f.min && temperatureK <= f.max)) return undefined;
+      const ev = f.unchecked;
+      h += xi * (f.h0 + ev.enthalpyFrom298(temperatureK) - f.hShift);
+      s +=
+        xi *
+        (f.s0 +
+          ev.entropyFrom298(temperatureK) -
+          f.sShift -
+          R * Math.log(pressurePa / f.pressurePa) -
+          R * Math.log(xi));
+      cp += xi * ev.cp(temperatureK);
+    }
+    const u = h - R * temperatureK;
+    return Object.freeze({
+      temperatureK,
+      pressurePa,
+      h,
+      s,
+      u,
+      a: u - temperatureK * s,
+      g: h - temperatureK * s,
+      cp,
+      cv: cp - R,
+      referenceState,
+      warnings: NO_WARNINGS,
+    });
+  }
+
+  function generalAt(
+    temperatureK: number,
+    pressurePa: number,
+    x: readonly number[],
+  ): IdealGasProperties {
     const warnings: ResultWarning[] = [];
     let h = 0;
     let s = 0;
@@ -136,4 +202,67 @@ export function idealGasMixture(
   }
 
   return Object.freeze({ components: list, referenceState, at });
+}
+
+/** What the fast path needs of one component, computed once per mixture. */
+interface FastPure {
+  /** False when a call must take the general path (a warning or an error is possible). */
+  readonly usable: boolean;
+  readonly unchecked: UncheckedPure;
+  /** Range of the method, K. */
+  readonly min: number;
+  readonly max: number;
+  /** Formation basis: Hf(298.15 K), J/mol; zero-at: 0. */
+  readonly h0: number;
+  /** Formation basis: s°(298.15 K), J/(mol K); zero-at: 0. */
+  readonly s0: number;
+  /** Zero-at: h°(T0) - h°(298.15 K), J/mol; formation: 0. */
+  readonly hShift: number;
+  /** Zero-at: s°(T0) - s°(298.15 K), J/(mol K); formation: 0. */
+  readonly sShift: number;
+  /** Pressure at which the pure's entropy is referred, Pa. */
+  readonly pressurePa: number;
+}
+
+/**
+ * Per-component constants of the fast path, or undefined when a pure has no unchecked evaluator
+ * (a user's own IdealGasPure, the molecular route) so every call takes the general path.
+ */
+function prepareFastPath(
+  list: readonly IdealGasPure[],
+  referenceState: ReferenceState,
+  components: readonly Component[] | undefined,
+): FastPure[] | undefined {
+  if (referenceState.kind === "fluid-convention") return undefined;
+  const out: FastPure[] = [];
+  for (let i = 0; i < list.length; i++) {
+    const pure = list[i];
+    const unchecked = uncheckedPureOf(pure);
+    if (unchecked === undefined) return undefined;
+    const own = (pure as IdealGasPure & { component?: Component }).component;
+    const carried = components?.[i] ?? own;
+    const min = pure.validTemperatureK.min;
+    const max = pure.validTemperatureK.max;
+    let usable = (carried?.warnings ?? []).length === 0;
+    let h0 = 0;
+    let s0 = 0;
+    let hShift = 0;
+    let sShift = 0;
+    let pressurePa: number = STANDARD_PRESSURE_PA;
+    if (referenceState.kind === "formation") {
+      h0 = (components?.[i] ?? own)?.enthalpyOfFormationJPerMol ?? NaN;
+      s0 = unchecked.absoluteEntropy298;
+      usable &&= Number.isFinite(h0) && Number.isFinite(s0);
+    } else {
+      const t0 = referenceState.temperatureK;
+      usable &&= t0 >= min && t0 <= max;
+      if (usable) {
+        hShift = unchecked.enthalpyFrom298(t0);
+        sShift = unchecked.entropyFrom298(t0);
+      }
+      pressurePa = referenceState.pressurePa;
+    }
+    out.push({ usable, unchecked, min, max, h0, s0, hShift, sShift, pressurePa });
+  }
+  return out;
 }
