@@ -1,4 +1,4 @@
-/* global document, window, performance, Event, CustomEvent */
+/* global document, window, Event */
 // Browser checks of the explorers (headless Chromium through playwright-core, Debian's Chromium).
 //
 // On the test page (explorersPage.mjs: one explorer of each kind, records' CSP) and checks:
@@ -116,9 +116,16 @@ export async function checkExplorers(options = {}) {
     const page = await openGuarded(context, pageFile, problems);
     for (const e of PAGE_EXPLORERS) {
       const state = await page.evaluate(
-        (id) => document.querySelector(`#page-${id} .isochor-explorer`).getAttribute("data-isochor-explorer") +
-          " / chart " + document.querySelector(`#page-${id} [data-isochor-chart]`).getAttribute("data-isochor-chart") +
-          " / svg " + Boolean(document.querySelector(`#page-${id} .isochor-chart-live svg`)),
+        (id) =>
+          document
+            .querySelector(`#page-${id} .isochor-explorer`)
+            .getAttribute("data-isochor-explorer") +
+          " / chart " +
+          document
+            .querySelector(`#page-${id} [data-isochor-chart]`)
+            .getAttribute("data-isochor-chart") +
+          " / svg " +
+          Boolean(document.querySelector(`#page-${id} .isochor-chart-live svg`)),
         e.id,
       );
       add(`${e.id}: live`, state === "live / chart live / svg true", state);
@@ -131,7 +138,9 @@ export async function checkExplorers(options = {}) {
     }
     // Drag across the P-h diagram: the state point (and its table) must follow.
     const table = () =>
-      page.evaluate(() => document.querySelector("#page-pressure-enthalpy .isochor-explorer-table").textContent);
+      page.evaluate(
+        () => document.querySelector("#page-pressure-enthalpy .isochor-explorer-table").textContent,
+      );
     const tableBefore = await table();
     const box = await page.locator("#page-pressure-enthalpy .isochor-chart-live svg").boundingBox();
     const redrawn = page.evaluate(
@@ -139,7 +148,9 @@ export async function checkExplorers(options = {}) {
         new Promise((done) =>
           document
             .querySelector("#page-pressure-enthalpy .isochor-explorer")
-            .addEventListener("isochor-explorer-redraw", () => setTimeout(done, 300), { once: true }),
+            .addEventListener("isochor-explorer-redraw", () => setTimeout(done, 300), {
+              once: true,
+            }),
         ),
     );
     await page.mouse.move(box.x + box.width * 0.35, box.y + box.height * 0.5);
@@ -148,15 +159,25 @@ export async function checkExplorers(options = {}) {
     await page.mouse.up();
     await redrawn;
     const tableAfter = await table();
-    add("pressure-enthalpy: drag moves the state point", tableBefore !== tableAfter, tableBefore !== tableAfter ? "table changed" : "table unchanged");
+    add(
+      "pressure-enthalpy: drag moves the state point",
+      tableBefore !== tableAfter,
+      tableBefore !== tableAfter ? "table changed" : "table unchanged",
+    );
     // The hostile title: shown as text, not run, no element made from it.
     const hostile = await page.evaluate(
       (title) => ({
         injected: window.__isochorInjected === 1,
         bold: Array.from(document.querySelectorAll("#page-isotherms b")).length,
-        scriptsWithText: Array.from(document.scripts).filter((s) => s.textContent.includes("__isochorInjected = 1") && !s.type).length,
-        shown: Array.from(document.querySelectorAll("#page-isotherms .isochor-chart-live svg text")).some(
-          (t) => t.textContent.includes("<script>window.__isochorInjected") && title.startsWith(t.textContent),
+        scriptsWithText: Array.from(document.scripts).filter(
+          (s) => s.textContent.includes("__isochorInjected = 1") && !s.type,
+        ).length,
+        shown: Array.from(
+          document.querySelectorAll("#page-isotherms .isochor-chart-live svg text"),
+        ).some(
+          (t) =>
+            t.textContent.includes("<script>window.__isochorInjected") &&
+            title.startsWith(t.textContent),
         ),
       }),
       HOSTILE_TITLE,
@@ -174,7 +195,11 @@ export async function checkExplorers(options = {}) {
     await close();
     if (!options.pageFile) rmSync(pageFile, { force: true });
   }
-  add("no request outside file://, no page or console error", problems.length === 0, problems.join("; ") || "none");
+  add(
+    "no request outside file://, no page or console error",
+    problems.length === 0,
+    problems.join("; ") || "none",
+  );
   return results;
 }
 
@@ -182,13 +207,16 @@ if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.ur
   const chromiumPath = process.env.ISOCHOR_CHROMIUM ?? DEFAULT_CHROMIUM_PATH;
   checkExplorers({ chromiumPath }).then(
     (results) => {
-      for (const r of results) process.stdout.write(`${r.ok ? "ok  " : "FAIL"} ${r.name}: ${r.message}\n`);
+      for (const r of results)
+        process.stdout.write(`${r.ok ? "ok  " : "FAIL"} ${r.name}: ${r.message}\n`);
       const failed = results.filter((r) => !r.ok).length;
       process.stdout.write(`${results.length - failed} passed, ${failed} failed\n`);
       process.exitCode = failed > 0 ? 1 : 0;
     },
     (error) => {
-      process.stderr.write(`explorersCheck: ${error instanceof Error ? error.message : String(error)}\n`);
+      process.stderr.write(
+        `explorersCheck: ${error instanceof Error ? error.message : String(error)}\n`,
+      );
       process.exitCode = 1;
     },
   );
