@@ -5,6 +5,14 @@
  *                 "residual": {"h", "s", "u", "a", "g"}, "residualTV": {"s", "a", "g"}}
  *              | {"error": {"code", "message"}} ]}
  * all SI molar (J/mol, J/(mol K), m/s, K/Pa; residual = same T and P, residualTV = same T and density).
+ * States given by saturation or quality (pure fluids) add "quality" (vapour fraction, 0..1): at
+ * quality 0 or 1 the entry is the saturated liquid or vapour with every field; strictly inside the
+ * dome ("phase": "two-phase") rho, h, s, u and residual {h, s, u, a, g} are lever-rule averages of
+ * the saturated phases, lnPhi is the common value of both phases (equal fugacity), Z = P / (rho R T)
+ * with the overall density, and cp, cv, w, jt and residualTV (undefined for a two-phase mixture at
+ * one density) are null. Model "reference" evaluates the reference equation of the one component
+ * (eos/multiparameter) in its publication's reference state, refusing states beyond the
+ * equation's extrapolation range as error entries.
  * One bad state yields an error entry; a malformed request is refused (exit 2) with
  * {"error": {"code": "bad-request", "message", "path"}}; a problem in the fluid definition (an
  * unknown component, a bad k_ij) is refused the same way with the path of the field. Exit 0 otherwise.
@@ -13,7 +21,20 @@ import * as fs from "node:fs";
 import * as path from "node:path";
 import { IsochorError, RequestError, UnknownNameError, InputError } from "../errors.js";
 import { defineFluid, type Fluid } from "../fluid/defineFluid.js";
-import type { FluidState } from "../state/types.js";
+import { referenceFluid } from "../eos/multiparameter/referenceFluids.js";
+import {
+  referenceFluidBinding,
+  referenceStateTP,
+  referenceStateTRho,
+} from "../eos/multiparameter/referenceStates.js";
+import type { ReferenceFluid } from "../eos/multiparameter/referenceFluid.js";
+import {
+  stateAtPressureQuality,
+  stateAtTemperatureQuality,
+  type TwoPhaseState,
+} from "../phase/twoPhaseState.js";
+import { gasConstantOf } from "../phase/pureFluid.js";
+import type { FluidBinding, FluidState } from "../state/types.js";
 import { parseEvalRequest, type EvalRequest, type EvalState } from "./evalRequest.js";
 import type { CliIo } from "./io.js";
 
@@ -21,7 +42,9 @@ const USAGE = `usage: isochor eval [request.json | -]
 
 Reads a JSON request from the file (or standard input when absent or "-") and writes the states as
 JSON on standard output. Fields: model, components, x, kij, constants, departure, reference,
-idealGas, phase, states (see the engine documentation).
+idealGas, phase, states (see the engine documentation). A state is {"T", "P"}, {"T", "rho"},
+{"T" or "P", "saturated": "liquid"|"vapor"} or {"T" or "P", "quality"}; model "reference" takes one
+component with a reference equation (water, carbon-dioxide, methane, nitrogen).
 `;
 
 /** The response entry of one state. */
@@ -42,6 +65,26 @@ export type EvalStateResponse =
       lnPhi: number[];
       residual: { h: number; s: number; u: number; a: number; g: number };
       residualTV: { s: number; a: number; g: number };
+      quality?: number;
+      warnings?: string[];
+    }
+  | {
+      T: number;
+      P: number;
+      rho: number;
+      Z: number;
+      phase: "two-phase";
+      quality: number;
+      h: number;
+      s: number;
+      u: number;
+      cp: null;
+      cv: null;
+      w: null;
+      jt: null;
+      lnPhi: number[];
+      residual: { h: number; s: number; u: number; a: number; g: number };
+      residualTV: null;
       warnings?: string[];
     }
   | { error: { code: string; message: string } };
@@ -70,16 +113,82 @@ function toResponse(s: FluidState): EvalStateResponse {
     },
     residualTV: { s: s.residualTV.s, a: s.residualTV.a, g: s.residualTV.g },
   };
-  if (s.warnings.length > 0) out.warnings = s.warnings.map((w) => `${w.code}: ${w.message}`);
+  if (s.warnings.length > 0) out.warnings = warningTexts(s.warnings);
   return out;
 }
 
+const warningTexts = (warnings: readonly { code: string; message: string }[]): string[] =>
+  warnings.map((w) => `${w.code}: ${w.message}`);
+
+/**
+ * A state on or inside the dome. At quality 0 or 1 the saturated phase itself (every field, with
+ * its quality); strictly inside, the lever-rule mixture (see the file header for the fields).
+ */
+function toQualityResponse(t: TwoPhaseState, binding: FluidBinding): EvalStateResponse {
+  const sat = t.quality === 0 ? t.liquid : t.quality === 1 ? t.vapor : undefined;
+  if (sat) {
+    const out = toResponse(sat);
+    if (!("error" in out)) {
+      out.quality = t.quality;
+      const all = [...new Set([...warningTexts(t.warnings), ...(out.warnings ?? [])])];
+      if (all.length > 0) out.warnings = all;
+    }
+    return out;
+  }
+  const q = t.quality;
+  const lever = (l: number, v: number): number => (1 - q) * l + q * v;
+  const L = t.liquid.residual;
+  const V = t.vapor.residual;
+  // P v / (R T) with the overall molar volume and the model's own gas constant
+  const gasConstant = gasConstantOf(binding.model);
+  const out: EvalStateResponse = {
+    T: t.temperatureK,
+    P: t.pressurePa,
+    rho: t.densityMolPerM3,
+    Z: t.pressurePa / (t.densityMolPerM3 * gasConstant * t.temperatureK),
+    phase: "two-phase",
+    quality: q,
+    h: t.molar.h,
+    s: t.molar.s,
+    u: t.molar.u,
+    cp: null,
+    cv: null,
+    w: null,
+    jt: null,
+    lnPhi: t.liquid.lnPhi.slice(),
+    residual: {
+      h: lever(L.h, V.h),
+      s: lever(L.s, V.s),
+      u: lever(L.u, V.u),
+      a: lever(L.a, V.a),
+      g: lever(L.g, V.g),
+    },
+    residualTV: null,
+  };
+  if (t.warnings.length > 0) out.warnings = warningTexts(t.warnings);
+  return out;
+}
+
+/** What evaluates the states of a request: a fluid of the engine, or a reference equation. */
+type Evaluator =
+  | { readonly kind: "engine"; readonly fluid: Fluid }
+  | { readonly kind: "reference"; readonly fluid: ReferenceFluid; readonly binding: FluidBinding };
+
+function evaluatorOf(request: EvalRequest): Evaluator {
+  if (request.model === "reference") {
+    // the component id was checked against referenceFluidIds() by the parser
+    const fluid = referenceFluid(request.components[0]);
+    return { kind: "reference", fluid, binding: referenceFluidBinding(fluid) };
+  }
+  return { kind: "engine", fluid: fluidOf(request, request.model) };
+}
+
 /** Builds the fluid of a request; problems are reported with the path of the field. */
-function fluidOf(request: EvalRequest): Fluid {
+function fluidOf(request: EvalRequest, model: Exclude<EvalRequest["model"], "reference">): Fluid {
   try {
     return defineFluid({
       components: request.components,
-      model: request.model,
+      model,
       kij: request.kij,
       constants: request.constants,
       idealGas: request.idealGas,
@@ -115,13 +224,27 @@ function fluidOf(request: EvalRequest): Fluid {
 }
 
 /** Evaluates one state; any library error becomes an error entry. */
-function evaluate(fluid: Fluid, request: EvalRequest, st: EvalState): EvalStateResponse {
+function evaluate(ev: Evaluator, request: EvalRequest, st: EvalState): EvalStateResponse {
   try {
-    const s =
-      st.kind === "TP"
-        ? fluid.stateAtTP(st.T, st.P, request.x, { phase: request.phase })
-        : fluid.stateAtTRho(st.T, st.rho, request.x);
-    return toResponse(s);
+    const binding: FluidBinding = ev.kind === "engine" ? ev.fluid : ev.binding;
+    switch (st.kind) {
+      case "TP":
+        return toResponse(
+          ev.kind === "engine"
+            ? ev.fluid.stateAtTP(st.T, st.P, request.x, { phase: request.phase })
+            : referenceStateTP(ev.fluid, st.T, st.P, { phase: request.phase }),
+        );
+      case "TRho":
+        return toResponse(
+          ev.kind === "engine"
+            ? ev.fluid.stateAtTRho(st.T, st.rho, request.x)
+            : referenceStateTRho(ev.fluid, st.T, st.rho),
+        );
+      case "TQ":
+        return toQualityResponse(stateAtTemperatureQuality(binding, st.T, st.quality), binding);
+      case "PQ":
+        return toQualityResponse(stateAtPressureQuality(binding, st.P, st.quality), binding);
+    }
   } catch (e) {
     if (e instanceof IsochorError) return { error: { code: e.code, message: e.message } };
     return { error: { code: "internal", message: e instanceof Error ? e.message : String(e) } };
@@ -131,8 +254,8 @@ function evaluate(fluid: Fluid, request: EvalRequest, st: EvalState): EvalStateR
 /** Runs a parsed JSON request and returns the response object (exported for tests and notebooks). */
 export function runEvalRequest(raw: unknown): { states: EvalStateResponse[] } {
   const request = parseEvalRequest(raw);
-  const fluid = fluidOf(request);
-  return { states: request.states.map((st) => evaluate(fluid, request, st)) };
+  const ev = evaluatorOf(request);
+  return { states: request.states.map((st) => evaluate(ev, request, st)) };
 }
 
 /** JSON has no NaN: non-finite numbers are written as null. */

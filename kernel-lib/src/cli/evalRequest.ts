@@ -1,33 +1,60 @@
 /**
  * The `isochor eval` request: parsing and checking, with the JSON path of every problem.
  *
- * Request (names fixed by issue 4; other tools depend on them):
+ * Request (names fixed by issue 4; other tools depend on them; issue 5 adds "reference" and the
+ * saturation and quality state forms):
  *   { "model": "ideal-gas" | "virial" | "van-der-waals" | "redlich-kwong" | "soave-redlich-kwong" |
- *              "peng-robinson" | "peng-robinson-1978" | "lee-kesler",
+ *              "peng-robinson" | "peng-robinson-1978" | "lee-kesler" | "reference",
  *     "components": [ids], "x": [mole fractions] (optional for one component),
  *     "kij": [[...]] (optional), "constants": [{"Tc": K, "Pc": Pa, "omega": -, "M": kg/mol}] (optional,
  *     per-component overrides; null or {} keeps the table), "departure": "closed-form" | "numeric",
  *     "reference": "formation" | {"kind": "zero-at", "T": K, "P": Pa}, "idealGas": "correlation" |
  *     "molecular", "phase": "stable" | "liquid" | "vapor",
- *     "states": [{"T": K, "P": Pa} | {"T": K, "rho": mol/m3}] }
+ *     "states": [{"T": K, "P": Pa} | {"T": K, "rho": mol/m3}
+ *                | {"T": K, "saturated": "liquid" | "vapor"} | {"P": Pa, "saturated": ...}
+ *                | {"T": K, "quality": 0..1} | {"P": Pa, "quality": 0..1}] }
+ * "reference" takes exactly one component with a reference equation (referenceFluidIds(): water,
+ * carbon-dioxide, methane, nitrogen) in its publication's reference state, so "kij", "constants",
+ * "idealGas", "reference" and "departure": "numeric" are refused with it. Saturated and quality
+ * states need one component (pure-fluid saturation); "phase" does not apply to them.
  * Structural problems (wrong types, missing fields, unknown names) refuse the whole request with a
  * RequestError naming the JSON path; physically bad values inside a state (T <= 0, ...) become an
  * error entry for that state only.
  */
 import { RequestError } from "../errors.js";
 import { isModelId, MODEL_IDS, type ModelId } from "../eos/createModel.js";
+import { referenceFluidIds } from "../eos/multiparameter/referenceFluids.js";
 import type { ReferenceState } from "../idealgas/types.js";
 import type { ConstantOverrides } from "../fluid/defineFluid.js";
 import type { DepartureMethod, PhaseRequest } from "../state/types.js";
 
-/** One requested state. */
+/**
+ * One requested state. "TQ" and "PQ" are pure-fluid states on or inside the saturation dome at
+ * given T (K) or P (Pa) and quality (vapour fraction; {"saturated": "liquid"} is quality 0,
+ * "vapor" quality 1, `saturated` records which form was asked).
+ */
 export type EvalState =
   | { readonly kind: "TP"; readonly T: number; readonly P: number }
-  | { readonly kind: "TRho"; readonly T: number; readonly rho: number };
+  | { readonly kind: "TRho"; readonly T: number; readonly rho: number }
+  | {
+      readonly kind: "TQ";
+      readonly T: number;
+      readonly quality: number;
+      readonly saturated?: "liquid" | "vapor";
+    }
+  | {
+      readonly kind: "PQ";
+      readonly P: number;
+      readonly quality: number;
+      readonly saturated?: "liquid" | "vapor";
+    };
+
+/** The model ids eval accepts: the engine's built-in models plus "reference". */
+export type EvalModelId = ModelId | "reference";
 
 /** A checked request. */
 export interface EvalRequest {
-  readonly model: ModelId;
+  readonly model: EvalModelId;
   readonly components: readonly string[];
   readonly x: readonly number[];
   readonly kij?: readonly (readonly number[])[];
@@ -105,10 +132,10 @@ export function parseEvalRequest(raw: Json): EvalRequest {
   const model = raw.model;
   if (typeof model !== "string")
     throw new RequestError("$.model", `expected a model name, got ${describe(model)}`);
-  if (!isModelId(model)) {
+  if (!isModelId(model) && model !== "reference") {
     throw new RequestError(
       "$.model",
-      `unknown model ${JSON.stringify(model)}; models: ${MODEL_IDS.join(", ")}`,
+      `unknown model ${JSON.stringify(model)}; models: ${[...MODEL_IDS, "reference"].join(", ")}`,
     );
   }
   const comps = raw.components;
@@ -124,6 +151,7 @@ export function parseEvalRequest(raw: Json): EvalRequest {
     }
   });
   const n = comps.length;
+  if (model === "reference") checkReferenceRequest(raw, comps as string[]);
   let x: number[];
   if (raw.x === undefined) {
     if (n !== 1) throw new RequestError("$.x", `mole fractions are required for ${n} components`);
@@ -230,28 +258,7 @@ export function parseEvalRequest(raw: Json): EvalRequest {
       `expected a non-empty array of states, got ${describe(raw.states)}`,
     );
   }
-  const states: EvalState[] = raw.states.map((s, i) => {
-    const path = `$.states[${i}]`;
-    if (!isObject(s))
-      throw new RequestError(
-        path,
-        `expected {"T": K, "P": Pa} or {"T": K, "rho": mol/m3}, got ${describe(s)}`,
-      );
-    for (const key of Object.keys(s)) {
-      if (key !== "T" && key !== "P" && key !== "rho") {
-        throw new RequestError(
-          `${path}.${key}`,
-          `unknown state field; use T (K) with P (Pa) or rho (mol/m3)`,
-        );
-      }
-    }
-    const T = number(s.T, `${path}.T`);
-    if (s.P !== undefined && s.rho !== undefined)
-      throw new RequestError(path, "give P or rho, not both");
-    if (s.P !== undefined) return { kind: "TP", T, P: number(s.P, `${path}.P`) };
-    if (s.rho !== undefined) return { kind: "TRho", T, rho: number(s.rho, `${path}.rho`) };
-    throw new RequestError(path, "missing P (Pa) or rho (mol/m3)");
-  });
+  const states: EvalState[] = raw.states.map((s, i) => parseState(s, `$.states[${i}]`, n));
   return {
     model,
     components: comps as string[],
@@ -264,4 +271,94 @@ export function parseEvalRequest(raw: Json): EvalRequest {
     phase,
     states,
   };
+}
+
+const STATE_FORMS =
+  '{"T": K, "P": Pa}, {"T": K, "rho": mol/m3}, {"T": K or "P": Pa, "saturated": "liquid"|"vapor"} ' +
+  'or {"T": K or "P": Pa, "quality": 0..1}';
+const STATE_KEYS = new Set(["T", "P", "rho", "saturated", "quality"]);
+
+/** One state of the request; the form is decided by which fields are present. */
+function parseState(s: Json, path: string, componentCount: number): EvalState {
+  if (!isObject(s)) throw new RequestError(path, `expected ${STATE_FORMS}, got ${describe(s)}`);
+  for (const key of Object.keys(s)) {
+    if (!STATE_KEYS.has(key)) {
+      throw new RequestError(`${path}.${key}`, `unknown state field; the forms are ${STATE_FORMS}`);
+    }
+  }
+  const has = (key: string): boolean => s[key] !== undefined;
+  if (has("saturated") || has("quality")) {
+    if (has("saturated") && has("quality"))
+      throw new RequestError(path, "give saturated or quality, not both");
+    if (has("rho"))
+      throw new RequestError(
+        `${path}.rho`,
+        "a saturated or quality state is fixed by T or P alone",
+      );
+    if (has("T") === has("P"))
+      throw new RequestError(
+        path,
+        "a saturated or quality state needs exactly one of T (K) or P (Pa)",
+      );
+    if (componentCount !== 1) {
+      throw new RequestError(
+        path,
+        `saturated and quality states are pure-fluid states; the request has ${componentCount} components`,
+      );
+    }
+    let quality: number;
+    let saturated: "liquid" | "vapor" | undefined;
+    if (has("saturated")) {
+      saturated = oneOf(s.saturated, `${path}.saturated`, ["liquid", "vapor"] as const, "liquid");
+      quality = saturated === "liquid" ? 0 : 1;
+    } else {
+      // the range 0..1 is checked by the library (a bad value gives this state an error entry)
+      quality = number(s.quality, `${path}.quality`);
+    }
+    return has("T")
+      ? { kind: "TQ", T: number(s.T, `${path}.T`), quality, saturated }
+      : { kind: "PQ", P: number(s.P, `${path}.P`), quality, saturated };
+  }
+  const T = number(s.T, `${path}.T`);
+  if (has("P") && has("rho")) throw new RequestError(path, "give P or rho, not both");
+  if (has("P")) return { kind: "TP", T, P: number(s.P, `${path}.P`) };
+  if (has("rho")) return { kind: "TRho", T, rho: number(s.rho, `${path}.rho`) };
+  throw new RequestError(path, "missing P (Pa), rho (mol/m3), saturated or quality");
+}
+
+/**
+ * Model "reference": one component with a reference equation, in the publication's reference
+ * state and ideal part, so the fields that would change either are refused.
+ */
+function checkReferenceRequest(raw: Record<string, Json>, components: string[]): void {
+  const ids = referenceFluidIds();
+  if (components.length !== 1) {
+    throw new RequestError(
+      "$.components",
+      `model "reference" takes one component (one of ${ids.join(", ")}), got ${components.length}`,
+    );
+  }
+  if (!ids.includes(components[0])) {
+    throw new RequestError(
+      "$.components[0]",
+      `no reference equation for ${JSON.stringify(components[0])}; available: ${ids.join(", ")}`,
+    );
+  }
+  const fixed: [string, string][] = [
+    ["kij", "a pure fluid has no binary interaction parameters"],
+    ["constants", "the reference equation carries its own constants"],
+    ["idealGas", "the reference equation carries its own ideal-gas part"],
+    ["reference", "results are in the reference state of the equation's publication"],
+  ];
+  for (const [key, why] of fixed) {
+    if (raw[key] !== undefined) {
+      throw new RequestError(`$.${key}`, `not accepted with model "reference": ${why}`);
+    }
+  }
+  if (raw.departure !== undefined && raw.departure !== "closed-form") {
+    throw new RequestError(
+      "$.departure",
+      `model "reference" is evaluated from its own residual Helmholtz energy ("closed-form"), got ${describe(raw.departure)}`,
+    );
+  }
 }
