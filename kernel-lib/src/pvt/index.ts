@@ -8,14 +8,9 @@ export { pvtFromArrays } from "./pvtFromArrays.js";
 export type { PvtArrays, PvtFromArraysOptions } from "./pvtFromArrays.js";
 export { columnUnitToSI } from "./columnUnits.js";
 export type { ColumnQuantity, AffineToSI } from "./columnUnits.js";
-export { weightedLeastSquares } from "./weightedLeastSquares.js";
-export type {
-  WeightedLeastSquaresOptions,
-  WeightedLeastSquaresResult,
-} from "./weightedLeastSquares.js";
-export { seededRandom } from "./seededRandom.js";
-export type { SeededRandom } from "./seededRandom.js";
-export { runsTest } from "./runsTest.js";
+// Generic helpers (weightedLeastSquares, seededRandom, runsTest, cumulativeIrregular,
+// familyThreshold) are imported by path, not re-exported, so they cannot collide with numerics/.
+export type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
 export type { RunsTestResult } from "./runsTest.js";
 export type { FitDiagnostics } from "./fitDiagnostics.js";
 export { fitIsochore } from "./isochoreFit.js";
@@ -30,15 +25,13 @@ export { surfaceDerivatives } from "./virialSurface.js";
 export type { VirialSurface } from "./virialSurface.js";
 export { surfaceResidualModel } from "./surfaceResidualModel.js";
 export type { SurfaceModelOptions } from "./surfaceResidualModel.js";
-export { cumulativeIrregular } from "./irregularQuadrature.js";
-export type { CumulativeIntegral } from "./irregularQuadrature.js";
 export { lowDensityBridge } from "./lowDensityBridge.js";
 export type { BridgeOptions, BridgeResult } from "./lowDensityBridge.js";
-export { integrateIsotherm } from "./integrateIsotherm.js";
+export { integrateIsotherm as integratePvtIsotherm } from "./integrateIsotherm.js";
 export type {
-  IsothermNodes,
-  IsothermDepartures,
-  IntegrateIsothermOptions,
+  IsothermNodes as PvtIsothermNodes,
+  IsothermDepartures as PvtIsothermIntegrals,
+  IntegrateIsothermOptions as PvtIntegrateIsothermOptions,
 } from "./integrateIsotherm.js";
 export { departuresFromPvt, virialFromSurface } from "./departuresFromPvt.js";
 export type {
@@ -47,7 +40,7 @@ export type {
   PvtIsotherm,
   PvtState,
 } from "./departuresFromPvt.js";
-export type { DepartureSet } from "./departureSet.js";
+export type { DepartureSet as PvtDepartureSet } from "./departureSet.js";
 export type { PvtDiagnostic } from "./pvtDiagnostic.js";
 export { compareWithModel } from "./compareWithModel.js";
 export type { ModelComparisonPoint } from "./compareWithModel.js";
