@@ -12,6 +12,7 @@ import { InputError } from "../errors.js";
 import type { Component } from "../components/types.js";
 import { resolveComponent } from "../components/getComponent.js";
 import {
+  compileCorrelation,
   correlationCp,
   correlationCpIntegral,
   correlationCpOverTIntegral,
@@ -59,9 +60,7 @@ export function idealGasFromCorrelation(
     checkTemperatureRange(component.id, method, range, t, options);
   };
   const unchecked: UncheckedPure = {
-    cp: (t) => correlationCp(correlation, t),
-    enthalpyFrom298: (t) => correlationCpIntegral(correlation, STANDARD_TEMPERATURE_K, t),
-    entropyFrom298: (t) => correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, t),
+    evaluate: compileCorrelation(correlation).evaluate,
     absoluteEntropy298: component.absoluteEntropyJPerMolK,
   };
   const pure: CorrelationIdealGas = Object.freeze({

@@ -21,6 +21,7 @@
  */
 import { R } from "../constants.js";
 import type { AlyLeeCp, CpCorrelation, PolynomialCp } from "../components/types.js";
+import { STANDARD_TEMPERATURE_K } from "./types.js";
 
 /** Ideal-gas isobaric heat capacity cp°(T), J/(mol K). No range check (callers check ranges). */
 export function correlationCp(correlation: CpCorrelation, temperatureK: number): number {
@@ -161,4 +162,60 @@ function alyLeeS(c: AlyLeeCp, t: number): number {
   const bPart = c.cK === 0 ? Math.log(t) : xCoth(x) - logAbsSinh(x);
   const dPart = y * Math.tanh(y) - logCosh(y);
   return c.aJPerMolK * Math.log(t) + c.bJPerMolK * bPart - c.dJPerMolK * dPart;
+}
+
+/** cp°, h° - h°(298.15 K) and s° - s°(298.15 K) at one temperature (J/(mol K), J/mol, J/(mol K)). */
+export interface CpAndIntegrals {
+  cp: number;
+  hFrom298: number;
+  sFrom298: number;
+}
+
+/**
+ * A correlation compiled for repeated evaluation: `evaluate(T, out)` writes cp° and the integrals
+ * from 298.15 K into `out` (no allocation, no range check). Polynomials use the functions above
+ * unchanged. Aly-Lee shares its transcendental functions between cp, h and s (two exponentials
+ * per hyperbolic argument instead of a sinh, cosh, tanh, exp and log each) and keeps its
+ * antiderivatives at 298.15 K as constants; it agrees with the functions above to rounding.
+ */
+export function compileCorrelation(correlation: CpCorrelation): {
+  evaluate(temperatureK: number, out: CpAndIntegrals): void;
+} {
+  if (correlation.form === "polynomial") {
+    return {
+      evaluate(t, out) {
+        out.cp = correlationCp(correlation, t);
+        out.hFrom298 = correlationCpIntegral(correlation, STANDARD_TEMPERATURE_K, t);
+        out.sFrom298 = correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, t);
+      },
+    };
+  }
+  const c = correlation;
+  const scratch: CpAndIntegrals = { cp: 0, hFrom298: 0, sFrom298: 0 };
+  const alyLeeAll = (t: number, out: CpAndIntegrals, h0: number, s0: number): void => {
+    // x = C/T: with ex = e^-|x| and m = 1 - e^-2|x| (expm1: exact for small x),
+    // x/sinh x = 2|x| ex / m, x coth x = |x| (1 + ex^2) / m, ln|sinh x| = |x| + ln(m / 2)
+    const ax = Math.abs(c.cK / t);
+    const ex = Math.exp(-ax);
+    const mx = -Math.expm1(-2 * ax);
+    const xOverSinhX = ax === 0 ? 1 : (2 * ax * ex) / mx;
+    const xCothX = ax === 0 ? 1 : (ax * (1 + ex * ex)) / mx;
+    // y = E/T: y/cosh y = 2|y| ey / (1 + ey^2), y tanh y = |y| my / (1 + ey^2), ln cosh y = |y| + ln((1 + ey^2) / 2)
+    const ay = Math.abs(c.eK / t);
+    const ey = Math.exp(-ay);
+    const py = 1 + ey * ey;
+    const yOverCoshY = (2 * ay * ey) / py;
+    const yTanhY = (ay * -Math.expm1(-2 * ay)) / py;
+    const lnT = Math.log(t);
+    const bPart = c.cK === 0 ? lnT : xCothX - (ax + Math.log(mx / 2));
+    const dPart = yTanhY - (ay + Math.log(py / 2));
+    out.cp =
+      c.aJPerMolK + c.bJPerMolK * xOverSinhX * xOverSinhX + c.dJPerMolK * yOverCoshY * yOverCoshY;
+    out.hFrom298 = c.aJPerMolK * t + c.bJPerMolK * t * xCothX - c.dJPerMolK * t * yTanhY - h0;
+    out.sFrom298 = c.aJPerMolK * lnT + c.bJPerMolK * bPart - c.dJPerMolK * dPart - s0;
+  };
+  alyLeeAll(STANDARD_TEMPERATURE_K, scratch, 0, 0);
+  const h298 = scratch.hFrom298;
+  const s298 = scratch.sFrom298;
+  return { evaluate: (t, out) => alyLeeAll(t, out, h298, s298) };
 }

@@ -26,6 +26,7 @@ import {
   type ReferenceState,
 } from "./types.js";
 import { uncheckedPureOf, type UncheckedPure } from "./uncheckedPure.js";
+import type { CpAndIntegrals } from "./cpCorrelation.js";
 
 const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 
@@ -89,6 +90,8 @@ export function idealGasMixture(
   }
   const list = Object.freeze([...pures]);
   const fast = prepareFastPath(list, referenceState, components);
+  // one scratch record per mixture for the pure values of the fast path (no allocation per call)
+  const scratch: CpAndIntegrals = { cp: 0, hFrom298: 0, sFrom298: 0 };
 
   function at(temperatureK: number, pressurePa: number, x: readonly number[]): IdealGasProperties {
     requirePositive("temperatureK", temperatureK, "K");
@@ -118,16 +121,13 @@ export function idealGasMixture(
       if (xi === 0) continue;
       const f = fast[i];
       if (!(f.usable && temperatureK >= f.min && temperatureK <= f.max)) return undefined;
-      const ev = f.unchecked;
-      h += xi * (f.h0 + ev.enthalpyFrom298(temperatureK) - f.hShift);
+      const v = scratch;
+      f.unchecked.evaluate(temperatureK, v);
+      h += xi * (f.h0 + v.hFrom298 - f.hShift);
       s +=
         xi *
-        (f.s0 +
-          ev.entropyFrom298(temperatureK) -
-          f.sShift -
-          R * Math.log(pressurePa / f.pressurePa) -
-          R * Math.log(xi));
-      cp += xi * ev.cp(temperatureK);
+        (f.s0 + v.sFrom298 - f.sShift - R * Math.log(pressurePa / f.pressurePa) - R * Math.log(xi));
+      cp += xi * v.cp;
     }
     const u = h - R * temperatureK;
     return Object.freeze({
@@ -257,8 +257,10 @@ function prepareFastPath(
       const t0 = referenceState.temperatureK;
       usable &&= t0 >= min && t0 <= max;
       if (usable) {
-        hShift = unchecked.enthalpyFrom298(t0);
-        sShift = unchecked.entropyFrom298(t0);
+        const v: CpAndIntegrals = { cp: 0, hFrom298: 0, sFrom298: 0 };
+        unchecked.evaluate(t0, v);
+        hShift = v.hFrom298;
+        sShift = v.sFrom298;
       }
       pressurePa = referenceState.pressurePa;
     }

@@ -5,15 +5,12 @@
  * arrays); the mixture checks the range itself, once per component, and then calls these.
  */
 import type { IdealGasPure } from "./types.js";
+import type { CpAndIntegrals } from "./cpCorrelation.js";
 
 /** A pure's ideal-gas functions without range checks (the caller has checked T). */
 export interface UncheckedPure {
-  /** cp°(T), J/(mol K). */
-  cp(temperatureK: number): number;
-  /** h°(T) - h°(298.15 K), J/mol. */
-  enthalpyFrom298(temperatureK: number): number;
-  /** s°(T) - s°(298.15 K) at 1 bar, J/(mol K). */
-  entropyFrom298(temperatureK: number): number;
+  /** Writes cp°(T), h°(T) - h°(298.15 K) and s°(T) - s°(298.15 K) (at 1 bar) into `out`. */
+  evaluate(temperatureK: number, out: CpAndIntegrals): void;
   /** Third-law entropy at 298.15 K and 1 bar, J/(mol K) (NaN when unknown). */
   readonly absoluteEntropy298: number;
 }
