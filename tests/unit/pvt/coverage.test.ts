@@ -45,9 +45,9 @@ function coverage(seeds: number[], samples: number) {
 }
 
 describe("uncertainty coverage over many seeds", () => {
-  it("linearised uncertainties: 95 % intervals cover the truth in 90-99 % of 120 noisy campaigns", () => {
+  it("linearised uncertainties: 95 % intervals cover the truth in 90-99 % of 80 noisy campaigns", () => {
     const c = coverage(
-      Array.from({ length: 120 }, (_, i) => 1000 + i),
+      Array.from({ length: 80 }, (_, i) => 1000 + i),
       0,
     );
     expect(c.total).toBeGreaterThan(5000);
