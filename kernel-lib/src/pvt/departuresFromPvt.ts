@@ -180,6 +180,17 @@ export function departuresFromPvt(
   const T = pts.map((p) => p.temperatureK);
   const rho = pts.map((p) => p.densityMolPerM3);
   const P0 = pts.map((p) => p.pressurePa);
+  const temperatureClusters = clusterTemperatures(T, options.isothermToleranceK ?? 0.05).length;
+  if (temperatureClusters < 2) {
+    throw new InputError({
+      input: `${dataset.source} temperatures`,
+      unit: "K",
+      validRange:
+        "at least 2 distinct temperatures (the entropy, energy and enthalpy departures need the isochoric slope (dP/dT)_rho)",
+      received: `${temperatureClusters} temperature`,
+      hint: "data on a single isotherm give Z and the residual Helmholtz energy only; measure at least one more temperature",
+    });
+  }
 
   // (1) Surface: first with u(P) only, then with effective variances.
   const surfacePoints = (P: readonly number[]) =>

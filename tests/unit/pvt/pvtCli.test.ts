@@ -141,3 +141,15 @@ describe("isochor pvt on data measured along isotherms (surface route)", () => {
     expect(err.join("")).toMatch(/at least 6 accepted points/);
   });
 });
+
+describe("isochor pvt on a single isotherm", () => {
+  it("refuses: entropy and enthalpy need the isochoric slope, which one temperature cannot give", async () => {
+    const rows = ["T [K],rho [mol/m3],P [Pa]"];
+    for (const d of [100, 200, 400, 800, 1600, 3200, 5000])
+      rows.push(`330,${d},${pressurePR(330, d)}`);
+    const { io, out, err } = capture(tmp);
+    expect(await main(["pvt", write("one.csv", rows.join("\n") + "\n")], io)).toBe(1);
+    expect(out.join("")).toBe("");
+    expect(err.join("")).toMatch(/at least 2 distinct temperatures/);
+  });
+});
