@@ -56,7 +56,7 @@ export function columnUnitToSI(
   const dimension = DIMENSION[quantity];
   let def;
   try {
-    def = lookupUnit(unitText.trim(), dimension);
+    def = lookupUnit(unitText.trim().replace(/³/g, "3"), dimension);
   } catch (e) {
     return { expected: `a ${dimension} unit`, hint: e instanceof Error ? e.message : String(e) };
   }

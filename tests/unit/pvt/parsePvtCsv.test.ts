@@ -123,3 +123,18 @@ describe("parsePvtCsv", () => {
     expect(d.points[0]?.pressurePa).toBe(5);
   });
 });
+
+describe("parsePvtCsv header spellings", () => {
+  it("accepts a superscript-three in units and parentheses around the unit", () => {
+    const d = parsePvtCsv("T (K),ρ [mol/m³],P [kPa]\n300,1000,2300\n");
+    expect(d.points[0]?.densityMolPerM3).toBe(1000);
+    expect(d.points[0]?.pressurePa).toBe(2.3e6);
+  });
+
+  it("reads gauge pressures with the notebook-wide atmosphere and says so in the column description", () => {
+    const d = parsePvtCsv("T [K],rho [mol/m3],P [barg]\n300,1000,22\n");
+    // 22 barg = 22e5 Pa + 101325 Pa (units module default atmosphere, standard atmosphere by definition)
+    expect(d.points[0]?.pressurePa).toBeCloseTo(22e5 + 101325, 6);
+    expect(d.columns[2]?.unit).toMatch(/atmospheric pressure added/);
+  });
+});
