@@ -22,6 +22,8 @@ export interface ExplorerFluid {
   /** Model name, e.g. "Peng-Robinson (1976)". */
   readonly name: string;
   readonly binding: FluidBinding;
+  /** Lowest temperature of the dome, K (a reference equation's triple point). Default: 0.55 Tc. */
+  readonly lowestSaturationK?: number;
 }
 
 /** Is a reference equation shipped for this (pure) fluid? */
@@ -71,7 +73,12 @@ export class ExplorerFluids {
     if (!f) {
       if (id === "reference") {
         const ref = referenceFluid(this.components[0].id);
-        f = { id, name: ref.info.name, binding: referenceFluidBinding(ref) };
+        f = {
+          id,
+          name: ref.info.name,
+          binding: referenceFluidBinding(ref),
+          lowestSaturationK: ref.triple.temperatureK,
+        };
       } else {
         const fluid = defineFluid({ components: this.components, model: id });
         f = { id, name: fluid.model.info.name, binding: fluid };
@@ -87,9 +94,18 @@ export class ExplorerFluids {
    */
   dome(id: ExplorerModelId): SampledDome | null {
     if (!this.domes.has(id)) {
+      const fluid = this.fluid(id);
+      const Tc = this.components[0].criticalTemperatureK;
+      // start at the triple point where the equation has one (it refuses colder states)
+      const from =
+        fluid.lowestSaturationK !== undefined
+          ? Math.max(0.55, (fluid.lowestSaturationK * 1.0005) / Tc)
+          : 0.55;
       const dome =
         this.components.length === 1
-          ? (tryPoint(() => saturationFromModel(this.fluid(id).binding, { points: 40 })) ?? null)
+          ? (tryPoint(() =>
+              saturationFromModel(fluid.binding, { points: 40, fromReducedTemperature: from }),
+            ) ?? null)
           : null;
       this.domes.set(id, dome);
     }

@@ -24,6 +24,27 @@ import {
 import type { IsothermExplorerState } from "./explorerState.js";
 import type { ExplorerFluids } from "./explorerFluids.js";
 import { InputError } from "../errors.js";
+import type { ResidualModel } from "../eos/types.js";
+import type { SampledDome } from "../charts/sample/saturationFromModel.js";
+
+/**
+ * The model to sample: itself, or, when it has no finite maximum density (a reference equation
+ * has no covolume), a view of it capped at 1.1 x the densest saturated liquid of its dome.
+ */
+function sampledModel(model: ResidualModel, dome: SampledDome | null): ResidualModel {
+  if (Number.isFinite(model.maxDensity(300, [1]))) return model;
+  const densest = dome ? Math.max(...dome.saturation.map((r) => r.liquid.densityMolPerM3 ?? 0)) : 0;
+  if (!(densest > 0)) {
+    throw new InputError({
+      input: "model",
+      unit: "-",
+      validRange: "a model with a finite maximum density, or a pure fluid with a saturation dome",
+      received: model.info.name,
+    });
+  }
+  // The prototype chain keeps every method and field of the model; only maxDensity differs.
+  return Object.create(model, { maxDensity: { value: () => 1.1 * densest } }) as ResidualModel;
+}
 
 /** Legend label of the isotherm (its temperature is on the slider and in the status line). */
 const SLIDER_LABEL = "at the slider temperature";
@@ -69,7 +90,7 @@ export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
   chart(state, fluids: ExplorerFluids) {
     const fluid = fluids.fluid(state.model);
     const dome = fluids.dome(state.model);
-    const [curve] = isothermsFromModel(fluid.binding.model, [state.temperatureK], {
+    const [curve] = isothermsFromModel(sampledModel(fluid.binding.model, dome), [state.temperatureK], {
       points: state.points,
     });
     // Fixed label and pressure axis per model: a slider move then changes only data, which the

@@ -205,6 +205,7 @@ export class ExplorerView {
     const live = this.parts.live;
     live.style.cursor = "crosshair";
     live.style.touchAction = "none";
+    live.style.userSelect = "none"; // a drag must not select the chart's text
     const at = (event: PointerEvent): { x: number; y: number } | undefined => {
       const view = this.chart.vegaView;
       const svg = live.querySelector("svg");
@@ -226,6 +227,7 @@ export class ExplorerView {
       }
     };
     live.addEventListener("pointerdown", (event) => {
+      event.preventDefault();
       this.dragging = true;
       live.setPointerCapture(event.pointerId);
       move(event);
