@@ -36,3 +36,5 @@ export { checkModelComponents } from "./modelComponent.js";
 export type { ModelComponent } from "./modelComponent.js";
 export { hasPressureFunction } from "./pressureFunction.js";
 export type { HyperDualPressure, ModelWithPressure } from "./pressureFunction.js";
+// reference-quality multiparameter equations (IAPWS-95, Span-Wagner, ...)
+export * from "./multiparameter/index.js";
