@@ -1,14 +1,15 @@
 /**
- * The molar residual properties reported at one state, and how they follow from the reduced
- * residual Helmholtz derivatives (eos/types.ts): with alpha_r = a and Z = 1 + aD,
+ * The molar residual properties reported at one state. The formulas live in one place, the
+ * engine's state/properties.ts (residualProperties): with alpha_r = a and Z = 1 + aD,
  *   a_res = R T a,  u_res = -R T aT,  s_res = R (-a - aT)     (same T and density)
  *   h_res = R T (aD - aT)                                      (same in both conventions)
  *   ln phi = a + aD - ln(1 + aD),  g_res = R T ln phi          (same T and pressure)
- * (e.g. Span, Multiparameter Equations of State, Springer 2000, Table 3.1 in reduced form).
- * TODO(engine): when state/ exports its residual-property function, call it here instead, so the
- * formula lives in one place.
+ * The data route has the integrals a_res and s_res and Z instead of derivatives; they are turned
+ * into the equivalent reduced derivatives (a = a_res/RT, aD = Z - 1, aT = -(a_res + T s_res)/RT)
+ * and passed through the same function.
  */
 import type { ResidualDerivatives } from "../eos/types.js";
+import { residualProperties } from "../state/properties.js";
 
 /** Molar residual properties: J/mol (a, u, h, g), J/(mol K) (s), dimensionless (lnPhi). */
 export interface DepartureSet {
@@ -35,16 +36,18 @@ export function departuresFromIntegrals(
   gasConstant: number,
 ): DepartureSet {
   const RT = gasConstant * temperatureK;
-  const u = aResJPerMol + temperatureK * sResJPerMolK;
-  const lnPhi = aResJPerMol / RT + compressibility - 1 - Math.log(compressibility);
-  return {
-    a: aResJPerMol,
-    s: sResJPerMolK,
-    u,
-    h: u + RT * (compressibility - 1),
-    g: RT * lnPhi,
-    lnPhi,
-  };
+  return departuresFromReduced(
+    temperatureK,
+    {
+      a: aResJPerMol / RT,
+      aD: compressibility - 1,
+      aT: -(aResJPerMol + temperatureK * sResJPerMolK) / RT,
+      aDD: Number.NaN,
+      aTT: Number.NaN,
+      aDT: Number.NaN,
+    },
+    gasConstant,
+  );
 }
 
 /** From reduced residual derivatives (any ResidualModel, or the fitted surface). */
@@ -53,14 +56,15 @@ export function departuresFromReduced(
   d: ResidualDerivatives,
   gasConstant: number,
 ): DepartureSet {
-  const RT = gasConstant * temperatureK;
-  return departuresFromIntegrals(
-    temperatureK,
-    1 + d.aD,
-    RT * d.a,
-    gasConstant * (-d.a - d.aT),
-    gasConstant,
-  );
+  const r = residualProperties(temperatureK, d, gasConstant);
+  return {
+    a: r.TV.a,
+    s: r.TV.s,
+    u: r.TV.u,
+    h: r.TV.h,
+    g: r.TP.g,
+    lnPhi: r.TP.g / (gasConstant * temperatureK),
+  };
 }
 
 export const DEPARTURE_KEYS = ["a", "s", "u", "h", "g", "lnPhi"] as const;
