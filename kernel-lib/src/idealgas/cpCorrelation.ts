@@ -181,15 +181,7 @@ export interface CpAndIntegrals {
 export function compileCorrelation(correlation: CpCorrelation): {
   evaluate(temperatureK: number, out: CpAndIntegrals): void;
 } {
-  if (correlation.form === "polynomial") {
-    return {
-      evaluate(t, out) {
-        out.cp = correlationCp(correlation, t);
-        out.hFrom298 = correlationCpIntegral(correlation, STANDARD_TEMPERATURE_K, t);
-        out.sFrom298 = correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, t);
-      },
-    };
-  }
+  if (correlation.form === "polynomial") return compilePolynomial(correlation);
   const c = correlation;
   const scratch: CpAndIntegrals = { cp: 0, hFrom298: 0, sFrom298: 0 };
   const alyLeeAll = (t: number, out: CpAndIntegrals, h0: number, s0: number): void => {
@@ -218,4 +210,71 @@ export function compileCorrelation(correlation: CpCorrelation): {
   const h298 = scratch.hFrom298;
   const s298 = scratch.sFrom298;
   return { evaluate: (t, out) => alyLeeAll(t, out, h298, s298) };
+}
+
+/**
+ * A polynomial correlation compiled segment by segment. Each segment's integrals are written as
+ * polynomials in d = T - c about a centre c inside the segment (298.15 K when the segment holds it,
+ * else the segment's end nearest to it): int_c^T cp dT = R d sum_m B_m d^m and
+ * int_c^T (cp - R a_0)/T dT = R d sum_m E_m d^m (Taylor coefficients of the shifted polynomial,
+ * computed once), plus the exact integrals from 298.15 K to c. One Horner pass each, and no
+ * cancellation for T near c, like the power-difference form above.
+ */
+function compilePolynomial(correlation: PolynomialCp): {
+  evaluate(temperatureK: number, out: CpAndIntegrals): void;
+} {
+  const segments = correlation.segments;
+  const last = segments.length - 1;
+  const compiled = segments.map((segment, i) => {
+    const a = segment.coefficients;
+    const lower = i === 0 ? -Infinity : segments[i - 1].maxTemperatureK;
+    const upper = i === last ? Infinity : segment.maxTemperatureK;
+    const centre = Math.min(Math.max(STANDARD_TEMPERATURE_K, lower), upper);
+    // cp/R about the centre: b_m = sum_(k>=m) a_k C(k, m) c^(k-m); cp integral coefficients b_m/(m+1)
+    const b = shiftPolynomial(a, centre);
+    const cpIntegral = b.map((bm, m) => bm / (m + 1));
+    // sum_(k>=1) a_k T^k / k about the centre, without its constant term (it cancels)
+    const p = a.map((ak, k) => (k === 0 ? 0 : ak / k));
+    const overT = shiftPolynomial(p, centre).slice(1);
+    return {
+      maxTemperatureK: segment.maxTemperatureK,
+      coefficients: a,
+      centre,
+      a0: a.length > 0 ? a[0] : 0,
+      cpIntegral,
+      overT,
+      hOffset: correlationCpIntegral(correlation, STANDARD_TEMPERATURE_K, centre),
+      sOffset: correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, centre),
+    };
+  });
+  return {
+    evaluate(t, out) {
+      // the same segment choice as segmentFor, so cp is bit-for-bit correlationCp
+      let i = 0;
+      while (i < last && !(t < compiled[i].maxTemperatureK)) i++;
+      const g = compiled[i];
+      const a = g.coefficients;
+      let cp = 0;
+      for (let k = a.length - 1; k >= 0; k--) cp = cp * t + a[k];
+      out.cp = R * cp;
+      const d = t - g.centre;
+      let h = 0;
+      for (let m = g.cpIntegral.length - 1; m >= 0; m--) h = h * d + g.cpIntegral[m];
+      let s = 0;
+      for (let m = g.overT.length - 1; m >= 0; m--) s = s * d + g.overT[m];
+      out.hFrom298 = g.hOffset + R * d * h;
+      out.sFrom298 = g.sOffset + R * (g.a0 * Math.log1p(d / g.centre) + d * s);
+    },
+  };
+}
+
+/** Coefficients of sum_k a_k T^k rewritten in powers of d = T - c (Taylor shift, O(n^2)). */
+function shiftPolynomial(a: readonly number[], c: number): number[] {
+  // repeated synthetic division by (T - c) (Horner's scheme for the Taylor shift)
+  const b = a.slice();
+  const n = b.length;
+  for (let j = 0; j < n - 1; j++) {
+    for (let k = n - 2; k >= j; k--) b[k] += c * b[k + 1];
+  }
+  return b;
 }

@@ -27,6 +27,7 @@ import {
 } from "./types.js";
 import { uncheckedPureOf, type UncheckedPure } from "./uncheckedPure.js";
 import type { CpAndIntegrals } from "./cpCorrelation.js";
+import { registerLeanIdealGas, type IdealGasValues } from "./leanMixture.js";
 
 const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 
@@ -97,22 +98,37 @@ export function idealGasMixture(
     requirePositive("temperatureK", temperatureK, "K");
     requirePositive("pressurePa", pressurePa, "Pa");
     checkMoleFractions(x, list.length);
-    return fastAt(temperatureK, pressurePa, x) ?? generalAt(temperatureK, pressurePa, x);
+    const v: IdealGasValues = { h: 0, s: 0, u: 0, a: 0, g: 0, cp: 0, cv: 0 };
+    if (!fastInto(temperatureK, pressurePa, x, v)) return generalAt(temperatureK, pressurePa, x);
+    return Object.freeze({
+      temperatureK,
+      pressurePa,
+      h: v.h,
+      s: v.s,
+      u: v.u,
+      a: v.a,
+      g: v.g,
+      cp: v.cp,
+      cv: v.cv,
+      referenceState,
+      warnings: NO_WARNINGS,
+    });
   }
 
   /**
    * The common case without a branch that could warn or throw: every present component has an
    * unchecked evaluator, carries no warnings, has its reference data, and T (and a zero-at T0) lies
-   * inside its range. Same formulas as generalAt; undefined when any condition fails.
+   * inside its range. Same formulas as generalAt; writes into `out`, false when any condition fails.
    */
-  function fastAt(
+  function fastInto(
     temperatureK: number,
     pressurePa: number,
     x: readonly number[],
-  ): IdealGasProperties | undefined {
-    if (fast === undefined) return undefined;
+    out: IdealGasValues,
+  ): boolean {
+    if (fast === undefined || x.length !== list.length) return false;
     const margin = options.extrapolationMargin;
-    if (!(margin === undefined || (margin >= 0 && margin < 1))) return undefined;
+    if (!(margin === undefined || (margin >= 0 && margin < 1))) return false;
     let h = 0;
     let s = 0;
     let cp = 0;
@@ -120,7 +136,7 @@ export function idealGasMixture(
       const xi = x[i];
       if (xi === 0) continue;
       const f = fast[i];
-      if (!(f.usable && temperatureK >= f.min && temperatureK <= f.max)) return undefined;
+      if (!(f.usable && temperatureK >= f.min && temperatureK <= f.max)) return false;
       const v = scratch;
       f.unchecked.evaluate(temperatureK, v);
       h += xi * (f.h0 + v.hFrom298 - f.hShift);
@@ -130,19 +146,14 @@ export function idealGasMixture(
       cp += xi * v.cp;
     }
     const u = h - R * temperatureK;
-    return Object.freeze({
-      temperatureK,
-      pressurePa,
-      h,
-      s,
-      u,
-      a: u - temperatureK * s,
-      g: h - temperatureK * s,
-      cp,
-      cv: cp - R,
-      referenceState,
-      warnings: NO_WARNINGS,
-    });
+    out.h = h;
+    out.s = s;
+    out.u = u;
+    out.a = u - temperatureK * s;
+    out.g = h - temperatureK * s;
+    out.cp = cp;
+    out.cv = cp - R;
+    return true;
   }
 
   function generalAt(
@@ -201,7 +212,9 @@ export function idealGasMixture(
     });
   }
 
-  return Object.freeze({ components: list, referenceState, at });
+  const mixture: IdealGasMixture = Object.freeze({ components: list, referenceState, at });
+  registerLeanIdealGas(mixture, fastInto);
+  return mixture;
 }
 
 /** What the fast path needs of one component, computed once per mixture. */

@@ -6,9 +6,10 @@
  * phase. Properties come from state/properties.ts.
  */
 import { R as R_CODATA } from "../constants.js";
-import { OutOfRangeError, PhaseUnavailableError } from "../errors.js";
+import { OutOfRangeError, PhaseUnavailableError, type ResultWarning } from "../errors.js";
 import type { ResidualDerivatives } from "../eos/types.js";
-import type { IdealGasProperties } from "../idealgas/types.js";
+import type { IdealGasProperties, ReferenceState } from "../idealgas/types.js";
+import { leanIdealGasOf, type IdealGasValues } from "../idealgas/leanMixture.js";
 import { assembleState, dPdRho, residualGibbsTP } from "./properties.js";
 import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
 import { findDensityRoots, type DensityRootOptions } from "./findDensityRoots.js";
@@ -43,27 +44,70 @@ function mixtureMolarMass(binding: FluidBinding, x: readonly number[]): number {
 const IDEAL_GAS_PRESSURE_PA = 1e5;
 
 // last ideal-gas evaluation per binding: states along an isotherm (surfaces, flash iterations,
-// root comparisons) reuse it; a binding is immutable, so the cache is keyed by (T, x) only
-const idealCache = new WeakMap<
-  FluidBinding,
-  { T: number; x: number[]; value: IdealGasProperties }
->();
+// root comparisons) reuse it; a binding is immutable, so the cache is keyed by (T, x) only. The
+// entry is overwritten in place on a miss (no allocation), which is safe because assembleState
+// copies the numbers out before the next evaluation.
+interface IdealCacheEntry {
+  T: number;
+  x: number[];
+  value: IdealGasProperties;
+  /** The record the mixture's lean path writes into (idealgas/leanMixture.ts). */
+  readonly lean: IdealGasValues & {
+    temperatureK: number;
+    pressurePa: number;
+    referenceState: ReferenceState;
+    warnings: readonly ResultWarning[];
+  };
+}
+const idealCache = new WeakMap<FluidBinding, IdealCacheEntry>();
+const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 
 function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): IdealGasProperties {
-  const hit = idealCache.get(binding);
-  if (hit && hit.T === T && hit.x.length === x.length) {
+  let entry = idealCache.get(binding);
+  if (entry && entry.T === T && entry.x.length === x.length) {
     let same = true;
     for (let i = 0; i < x.length; i++) {
-      if (hit.x[i] !== x[i]) {
+      if (entry.x[i] !== x[i]) {
         same = false;
         break;
       }
     }
-    if (same) return hit.value;
+    if (same) return entry.value;
   }
-  const value = binding.idealGas.at(T, IDEAL_GAS_PRESSURE_PA, x);
-  idealCache.set(binding, { T, x: x.slice(), value });
-  return value;
+  if (entry === undefined) {
+    const mixture = binding.idealGas;
+    entry = {
+      T: NaN,
+      x: [],
+      value: undefined as unknown as IdealGasProperties,
+      lean: {
+        temperatureK: NaN,
+        pressurePa: IDEAL_GAS_PRESSURE_PA,
+        h: NaN,
+        s: NaN,
+        u: NaN,
+        a: NaN,
+        g: NaN,
+        cp: NaN,
+        cv: NaN,
+        referenceState: mixture.referenceState,
+        warnings: NO_WARNINGS,
+      },
+    };
+    idealCache.set(binding, entry);
+  }
+  // the inputs were checked by the public entry point, as the lean path requires
+  const lean = leanIdealGasOf(binding.idealGas);
+  if (lean !== undefined && lean(T, IDEAL_GAS_PRESSURE_PA, x, entry.lean)) {
+    entry.lean.temperatureK = T;
+    entry.value = entry.lean;
+  } else {
+    entry.value = binding.idealGas.at(T, IDEAL_GAS_PRESSURE_PA, x);
+  }
+  entry.T = T;
+  entry.x.length = x.length;
+  for (let i = 0; i < x.length; i++) entry.x[i] = x[i];
+  return entry.value;
 }
 
 function finish(
