@@ -5,7 +5,12 @@
  *
  * Browser-safe (the Node side calls it; the page could too).
  */
-import { resolveUnit, type UnitChoice } from "../charts/displayUnits.js";
+import {
+  DISPLAY_UNITS,
+  resolveUnit,
+  type QuantityKind,
+  type UnitChoice,
+} from "../charts/displayUnits.js";
 import type { DepartureProperty } from "../charts/departures.js";
 import { getComponent } from "../components/getComponent.js";
 import type { Component } from "../components/types.js";
@@ -188,7 +193,8 @@ function baseState(kind: ExplorerKind, options: ExplorerOptionsBase) {
     });
   }
   const units: UnitChoice = options.units ?? "SI";
-  resolveUnit("temperature", units); // throws UnknownNameError for a bad unit id
+  // throws UnknownNameError for a bad unit id of any quantity
+  for (const kind of Object.keys(DISPLAY_UNITS) as QuantityKind[]) resolveUnit(kind, units);
   if (options.title !== undefined && typeof options.title !== "string") {
     throw new InputError({
       input: "title",

@@ -90,9 +90,13 @@ export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
   chart(state, fluids: ExplorerFluids) {
     const fluid = fluids.fluid(state.model);
     const dome = fluids.dome(state.model);
-    const [curve] = isothermsFromModel(sampledModel(fluid.binding.model, dome), [state.temperatureK], {
-      points: state.points,
-    });
+    const [curve] = isothermsFromModel(
+      sampledModel(fluid.binding.model, dome),
+      [state.temperatureK],
+      {
+        points: state.points,
+      },
+    );
     // Fixed label and pressure axis per model: a slider move then changes only data, which the
     // page redraws in place (widgets/src/explorers/liveChart.ts) instead of re-embedding.
     const Pc = dome?.critical.pressurePa;
