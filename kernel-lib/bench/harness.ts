@@ -23,6 +23,10 @@ export interface Timing {
   cpu: number;
   /** Wall-clock time per call. */
   wall: number;
+  /** Fastest sample of process CPU time per call (least disturbed by other processes). */
+  cpuMin: number;
+  /** Number of samples behind the medians. */
+  samples: number;
 }
 
 function cpuSeconds(): number {
@@ -61,7 +65,8 @@ export function measure(
     cpu.push((cpuSeconds() - c0) / calls);
   }
   const median = (v: number[]) => v.sort((a, b) => a - b)[Math.floor(v.length / 2)];
-  return { cpu: median(cpu), wall: median(wall) };
+  const cpuMin = Math.min(...cpu);
+  return { cpu: median(cpu), wall: median(wall), cpuMin, samples };
 }
 
 /** Keeps results alive so the optimiser cannot drop the work. */
