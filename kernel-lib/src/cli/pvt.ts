@@ -134,7 +134,7 @@ export function pvtResponse(result: PvtRouteResult): unknown {
     severity: "info",
     message:
       "SI molar (J/mol, J/(mol K), m3/mol); s and a relative to the ideal gas at the same T and density; u and h (same in both conventions); g at the same T and pressure (R T ln phi); " +
-      `P is the smoothed pressure; uncertainties are standard (k = 1): ${mc ? `Monte Carlo, seed ${mc.seed}, ${mc.samples} samples` : "linearised"}, combined with the quadrature and low-density-bridge estimates; ` +
+      `P is the smoothed pressure; uncertainties are standard (k = 1): ${mc ? `Monte Carlo, seed ${mc.seed}, ${mc.samples} samples` : "linearised"}, combined with the method estimates (quadrature, low-density bridge, fit order); ` +
       `weights ${result.uncertaintyMethod.sigmaSource === "stated" ? "from the stated u(P), u(T), u(rho)" : "equal, scale from the scatter (no u(P) column)"}; route "${result.route}"; virial.B[k] belongs to isotherms[k]`,
   };
   return {
