@@ -189,6 +189,28 @@ export async function checkExplorers(options = {}) {
     );
     await page.waitForTimeout(200);
     await page.close();
+    // The classic notebook has RequireJS: with an AMD define on the page the explorers still go live.
+    const amdFile = pageFile.replace(/\.html$/, "") + "-requirejs.html";
+    await writeExplorersPage(amdFile, { requireJs: true });
+    try {
+      const amdPage = await openGuarded(context, amdFile, problems);
+      const amd = await amdPage.evaluate(() => ({
+        live: Array.from(document.querySelectorAll("[data-isochor-explorer]")).map((el) =>
+          el.getAttribute("data-isochor-explorer"),
+        ),
+        defines: window.__amdDefines,
+      }));
+      add(
+        "with RequireJS on the page (classic notebook) every explorer goes live",
+        amd.live.length === PAGE_EXPLORERS.length &&
+          amd.live.every((s) => s === "live") &&
+          amd.defines === 0,
+        JSON.stringify(amd),
+      );
+      await amdPage.close();
+    } finally {
+      rmSync(amdFile, { force: true });
+    }
   } catch (error) {
     problems.push(error instanceof Error ? error.message.split("\n")[0] : String(error));
   } finally {

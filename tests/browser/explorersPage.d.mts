@@ -5,4 +5,7 @@ export const PAGE_EXPLORERS: ReadonlyArray<{
   kind: string;
   options: Record<string, unknown>;
 }>;
-export function writeExplorersPage(file: string): Promise<string>;
+export function writeExplorersPage(
+  file: string,
+  options?: { requireJs?: boolean },
+): Promise<string>;

@@ -63,11 +63,19 @@ export const PAGE_EXPLORERS = [
 ];
 
 /**
+ * A stand-in for the classic notebook's RequireJS: a global AMD `define` that records anonymous
+ * module definitions. The runtime and the bundle must ignore it and still set their globals.
+ */
+const AMD_STUB = `<script>window.__amdDefines = 0; window.define = function () { window.__amdDefines++; }; window.define.amd = { jQuery: true }; window.require = function () {};</script>`;
+
+/**
  * Writes the page.
  * @param {string} file output path
+ * @param {{ requireJs?: boolean }} [options] requireJs: put an AMD `define` on the page first,
+ *   as the classic notebook has
  * @returns {Promise<string>} the absolute path
  */
-export async function writeExplorersPage(file) {
+export async function writeExplorersPage(file, options = {}) {
   const lib = require(join(root, "kernel-lib", "dist", "index.js"));
   const parts = [];
   for (const e of PAGE_EXPLORERS) {
@@ -78,6 +86,7 @@ export async function writeExplorersPage(file) {
 <html lang="en"><head><meta charset="utf-8">
 <meta http-equiv="Content-Security-Policy" content="${CSP}">
 <title>isochor explorers test page</title>
+${options.requireJs ? AMD_STUB : ""}
 ${lib.vegaRuntimeScript()}
 ${lib.widgetsBundleScript().script}
 </head><body>

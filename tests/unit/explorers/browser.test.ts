@@ -30,8 +30,8 @@ describe("explorers in Chromium", () => {
       const results = await checkExplorers({ chromiumPath });
       const failed = results.filter((r) => !r.ok).map((r) => `${r.name}: ${r.message}`);
       expect(failed).toEqual([]);
-      // every check ran (3 x live + 3 x slider + drag + escaping + network)
-      expect(results.length).toBe(9);
+      // every check ran (3 x live + 3 x slider + drag + escaping + RequireJS + network)
+      expect(results.length).toBe(10);
     },
     180_000,
   );
