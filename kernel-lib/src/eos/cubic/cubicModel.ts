@@ -127,6 +127,8 @@ class CubicModelImpl implements CubicModel {
     this.dPsi = new Float64Array(n);
     this.d2Psi = new Float64Array(n);
     this.sumA = new Float64Array(n);
+    this.scratchC0 = new Float64Array(n);
+    this.scratchC1 = new Float64Array(n);
   }
 
   /** Fills the cache for (T, x) unless it already holds it. */
@@ -182,32 +184,107 @@ class CubicModelImpl implements CubicModel {
 
   /**
    * P(T, rho, x) written directly from the equation with hyper-dual arithmetic (independent of the
-   * closed-form alpha_r above; the numeric departure route integrates it).
+   * closed-form alpha_r above; the numeric departure route integrates it):
+   *   P = rho R T / (1 - b rho) - a(T) rho^2 / ((1 + delta1 b rho)(1 + delta2 b rho)),
+   *   a(T) = sum_i sum_j x_i x_j (1 - k_ij) s_i s_j,  s_i = sqrt(a_c,i) psi_i(T).
+   * The integrator seeds either T or rho (pressureEvaluator.ts), so the variable that carries no
+   * derivative parts is handled as a plain number: fewer hyper-dual temporaries per call.
    */
   readonly pressureFunction = (T: HyperDual, rho: HyperDual, x: readonly number[]): HyperDual => {
-    const n = this.n;
-    const s: HyperDual[] = [];
-    for (let i = 0; i < n; i++) {
-      const tr = T.div(this.tc[i]);
-      let psi: HyperDual;
-      if (this.family.alpha === "constant") psi = HyperDual.constant(1);
-      else if (this.family.alpha === "redlich-kwong") psi = tr.pow(-0.25);
-      else psi = tr.sqrt().neg().add(1).mul(this.slope[i]).add(1);
-      s.push(psi.mul(this.sqrtAc[i]));
-    }
-    let a = HyperDual.constant(0);
-    let b = 0;
-    for (let i = 0; i < n; i++) {
-      let row = HyperDual.constant(0);
-      for (let j = 0; j < n; j++) row = row.add(s[j].mul(x[j] * this.oneMinusK[i * n + j]));
-      a = a.add(s[i].mul(row).mul(x[i]));
-      b += x[i] * this.bi[i];
+    const b = this.mixtureB(x);
+    const a = T.isConstant()
+      ? HyperDual.constant(this.plainAttraction(T.re, x))
+      : this.attraction(T, x);
+    if (rho.isConstant()) {
+      // rho a plain number: P = T [rho R / (1 - b rho)] - a [rho^2 / (D1 D2)]
+      const r = rho.re;
+      const repulsiveOverT = (r * R) / (1 - b * r);
+      const attractiveOverA = (r * r) / ((1 + this.delta1 * b * r) * (1 + this.delta2 * b * r));
+      return T.mul(repulsiveOverT).sub(a.mul(attractiveOverA));
     }
     const repulsive = rho.mul(R).mul(T).div(rho.mul(-b).add(1));
     const d1 = rho.mul(this.delta1 * b).add(1);
     const d2 = rho.mul(this.delta2 * b).add(1);
     return repulsive.sub(a.mul(rho).mul(rho).div(d1.mul(d2)));
   };
+
+  /** b = sum_i x_i b_i, m3/mol (pressure function). */
+  private mixtureB(x: readonly number[]): number {
+    let b = 0;
+    for (let i = 0; i < this.n; i++) b += x[i] * this.bi[i];
+    return b;
+  }
+
+  /** s_i = sqrt(a_c,i) psi_i(T) at a plain temperature (pressure function, T not seeded). */
+  private plainS(T: number, i: number): number {
+    const kind = this.family.alpha;
+    if (kind === "constant") return this.sqrtAc[i];
+    if (kind === "redlich-kwong") return this.sqrtAc[i] * Math.pow(T / this.tc[i], -0.25);
+    return this.sqrtAc[i] * (1 + this.slope[i] * (1 - Math.sqrt(T / this.tc[i])));
+  }
+
+  /** a(T) of the one-fluid rule at a plain temperature, Pa m6/mol2 (pressure function). */
+  private plainAttraction(T: number, x: readonly number[]): number {
+    const n = this.n;
+    let a = 0;
+    for (let i = 0; i < n; i++) {
+      let row = 0;
+      for (let j = 0; j < n; j++) row += x[j] * this.oneMinusK[i * n + j] * this.plainS(T, j);
+      a += x[i] * this.plainS(T, i) * row;
+    }
+    return a;
+  }
+
+  /**
+   * a(T) of the one-fluid rule with T hyper-dual (pressure function). s_i is linear in sqrt(T)
+   * (psi = 1 + m - (m / sqrt(Tc)) sqrt(T)) or in T^(-1/4) (Redlich-Kwong), so one hyper-dual power
+   * of T serves every component; the row sums sum_j x_j (1 - k_ij) s_j are linear and are summed
+   * part by part, leaving one hyper-dual product per component.
+   */
+  private attraction(T: HyperDual, x: readonly number[]): HyperDual {
+    const n = this.n;
+    const kind = this.family.alpha;
+    if (kind === "constant") return HyperDual.constant(this.plainAttraction(T.re, x));
+    const power = kind === "redlich-kwong" ? T.pow(-0.25) : T.sqrt();
+    // s_j = c0_j + c1_j * power
+    const c0 = this.scratchC0;
+    const c1 = this.scratchC1;
+    for (let j = 0; j < n; j++) {
+      const sAc = this.sqrtAc[j];
+      if (kind === "redlich-kwong") {
+        c0[j] = 0;
+        c1[j] = sAc * Math.pow(this.tc[j], 0.25);
+      } else {
+        c0[j] = sAc * (1 + this.slope[j]);
+        c1[j] = (-sAc * this.slope[j]) / Math.sqrt(this.tc[j]);
+      }
+    }
+    let aRe = 0;
+    let aE1 = 0;
+    let aE2 = 0;
+    let aE12 = 0;
+    for (let i = 0; i < n; i++) {
+      // row_i = sum_j w_ij s_j = (sum_j w_ij c0_j) + (sum_j w_ij c1_j) power
+      let r0 = 0;
+      let r1 = 0;
+      for (let j = 0; j < n; j++) {
+        const w = x[j] * this.oneMinusK[i * n + j];
+        r0 += w * c0[j];
+        r1 += w * c1[j];
+      }
+      const si = power.mul(c1[i]).add(c0[i]);
+      const term = si.mul(power.mul(r1).add(r0)).mul(x[i]);
+      aRe += term.re;
+      aE1 += term.e1;
+      aE2 += term.e2;
+      aE12 += term.e12;
+    }
+    return new HyperDual(aRe, aE1, aE2, aE12);
+  }
+
+  // per-component coefficients of s_j in the hyper-dual power of T (scratch, no allocation per call)
+  private readonly scratchC0: Float64Array;
+  private readonly scratchC1: Float64Array;
 
   mixtureParameters(temperatureK: number, x: readonly number[]): CubicMixtureParameters {
     this.update(temperatureK, x);
