@@ -13,10 +13,9 @@
  */
 import { escapeHtml } from "../display/escapeHtml.js";
 import { vegaRuntimeScript } from "../display/vegaRuntime.js";
-import { formatSignificant } from "../tables/formatNumber.js";
 import type { CalculationRecordContent, RecordedInput } from "./calculationRecord.js";
 import { basisLinks } from "./calculationRecord.js";
-import type { ModelEntry } from "./modelEntry.js";
+import { shortMethod, type ModelEntry } from "./modelEntry.js";
 import { CONTENT_SECURITY_POLICY } from "./recordHtml.js";
 
 const CSS = `
@@ -63,6 +62,8 @@ const CSS = `
 .isochor-calc dl.calc-kv dd { margin:0 0 .2rem; }
 .isochor-calc .calc-item { margin:.7rem 0 1rem; overflow-x:auto; }
 .isochor-calc .calc-basis { font-size:.78rem; color:var(--c-muted); }
+.isochor-calc .calc-basis-cell { white-space:nowrap; font-size:.8rem; }
+.isochor-calc table.calc-small { font-size:.78rem; }
 .isochor-calc a { color:var(--c-accent); }
 .isochor-calc ul.calc-warnings { margin:.2rem 0; padding-left:1.2rem; }
 .isochor-calc ul.calc-warnings li { margin:.15rem 0; }
@@ -82,6 +83,7 @@ const CSS = `
 
 const PAGE_CSS = `
 html { background:#e9edf0; }
+.isochor-calc { max-width:none; }
 body { margin:0 auto; max-width:64rem; background:#fff; padding:2rem 2.4rem 2.6rem; }
 footer.calc-foot { margin-top:2rem; border-top:1px solid #c9d1d7; padding-top:.5rem; font-size:.75rem; color:#5b6770;
   font-family:system-ui,"DejaVu Sans",Arial,sans-serif; }
@@ -99,14 +101,14 @@ function formatDate(date: Date): string {
     .replace(/\.\d+Z$/, " UTC");
 }
 
+/** A number in full, to 10 significant figures without trailing zeros (inputs, ranges, k_ij). */
 function num(value: number): string {
-  return formatSignificant(value, { digits: 6 });
+  return String(Number(value.toPrecision(10)));
 }
 
 /** A recorded value in full: as given, or in SI to 10 significant figures (no trailing zeros). */
 function values(v: number | readonly number[]): string {
-  const one = (x: number) => String(Number(x.toPrecision(10)));
-  return typeof v === "number" ? one(v) : v.map(one).join(", ");
+  return typeof v === "number" ? num(v) : v.map(num).join(", ");
 }
 
 function section(n: number, title: string, body: string): string {
@@ -153,19 +155,23 @@ function modelBlock(anchor: string, m: ModelEntry): string {
   if (m.idealGas.length > 0) {
     add(
       "Ideal gas",
-      m.idealGas
-        .map(
-          (g) =>
-            `${e(g.componentId)}: ${e(g.method)}, ${num(g.validTemperatureK.min)}-${num(g.validTemperatureK.max)} K; ${e(g.source)}`,
-        )
-        .join("<br>"),
+      `<table class="calc-grid calc-small"><thead><tr><th>Component</th><th>Route</th><th>Valid T</th><th>Source</th></tr></thead><tbody>` +
+        m.idealGas
+          .map(
+            (g) =>
+              `<tr><td>${e(g.componentId)}</td><td>${e(shortMethod(g.method))}</td>` +
+              `<td class="num">${num(g.validTemperatureK.min)}-${num(g.validTemperatureK.max)} K</td><td>${e(g.source)}</td></tr>`,
+          )
+          .join("") +
+        `</tbody></table>`,
     );
   }
-  if (m.interaction.length > 0) {
+  const known = m.interaction.filter((p) => !m.defaultedPairs.includes(p.pair));
+  if (known.length > 0) {
     add(
       "k_ij",
-      `<table class="calc-grid"><thead><tr><th>Pair</th><th>k_ij</th><th>Source</th></tr></thead><tbody>` +
-        m.interaction
+      `<table class="calc-grid calc-small"><thead><tr><th>Pair</th><th>k_ij</th><th>Source</th></tr></thead><tbody>` +
+        known
           .map(
             (p) =>
               `<tr><td>${e(p.pair)}</td><td class="num">${num(p.kij)}</td><td>${e(p.source)}</td></tr>`,
@@ -175,7 +181,7 @@ function modelBlock(anchor: string, m: ModelEntry): string {
     );
   }
   if (m.defaultedPairs.length > 0)
-    add("Defaulted k_ij", `set to zero: ${e(m.defaultedPairs.join(", "))}`);
+    add("Defaulted k_ij", `set to zero (no value known): ${e(m.defaultedPairs.join(", "))}`);
   for (const n of m.notes) add("Note", e(n));
   return (
     `<div class="calc-model" id="${anchor}-${m.id}"><h3><span class="calc-id">${m.id}</span> ${e(m.label)}</h3>` +
@@ -289,6 +295,11 @@ export function calculationRecordFragment(c: CalculationRecordContent): string {
     parts.join("\n") +
     `</div>`
   );
+}
+
+/** A piece of a record (a table, chart or answer shown as it is added), with the record's styles. */
+export function calculationRecordPiece(html: string): string {
+  return `<div class="isochor-calc"><style>${CSS}</style>${html}</div>`;
 }
 
 /** The record as a standalone HTML document: charts live from the inline runtime, no network. */

@@ -7,9 +7,9 @@
  * inline markup, including `<` and `&`, so no HTML can pass through a Markdown renderer, and of a
  * block marker at its start) and kept on one line.
  */
-import { formatSignificant } from "../tables/formatNumber.js";
 import type { CalculationRecordContent } from "./calculationRecord.js";
 import { basisText } from "./calculationRecord.js";
+import { shortMethod } from "./modelEntry.js";
 
 /** Escapes text for Markdown inline content, on one line. */
 export function escapeMarkdown(text: string): string {
@@ -31,14 +31,14 @@ export function escapeMarkdownBlock(text: string): string {
     .replace(/^(\s*\d+)([.)])/, "$1\\$2");
 }
 
+/** A number in full, to 10 significant figures without trailing zeros. */
 function num(value: number): string {
-  return formatSignificant(value, { digits: 6 });
+  return String(Number(value.toPrecision(10)));
 }
 
 /** A recorded value in full: as given, or in SI to 10 significant figures (no trailing zeros). */
 function values(v: number | readonly number[]): string {
-  const one = (x: number) => String(Number(x.toPrecision(10)));
-  return typeof v === "number" ? one(v) : v.map(one).join(", ");
+  return typeof v === "number" ? num(v) : v.map(num).join(", ");
 }
 
 function formatDate(date: Date): string {
@@ -113,13 +113,15 @@ export function calculationRecordMarkdown(c: CalculationRecordContent): string {
     );
     for (const g of model.idealGas) {
       out.push(
-        `- Ideal gas, ${m(g.componentId)}: ${m(g.method)}, ${num(g.validTemperatureK.min)}\\-${num(g.validTemperatureK.max)} K; ${m(g.source)}`,
+        `- Ideal gas, ${m(g.componentId)}: ${m(shortMethod(g.method))}, ${num(g.validTemperatureK.min)}-${num(g.validTemperatureK.max)} K; ${m(g.source)}`,
       );
     }
-    for (const p of model.interaction)
+    for (const p of model.interaction.filter((q) => !model.defaultedPairs.includes(q.pair)))
       out.push(`- k\\_ij ${m(p.pair)} = ${num(p.kij)} (${m(p.source)})`);
     if (model.defaultedPairs.length > 0) {
-      out.push(`- Defaulted k\\_ij (set to zero): ${m(model.defaultedPairs.join(", "))}`);
+      out.push(
+        `- Defaulted k\\_ij (set to zero, no value known): ${m(model.defaultedPairs.join(", "))}`,
+      );
     }
     for (const note of model.notes) out.push(`- Note: ${m(note)}`);
     out.push("");

@@ -33,7 +33,12 @@ import {
   type RecordableModel,
 } from "./modelEntry.js";
 import { checkSafetyTopics, processSafetyCaution, type SafetyTopic } from "./processCaution.js";
-import { calculationRecordFragment, calculationRecordDocument } from "./calculationHtml.js";
+import {
+  calculationRecordDocument,
+  calculationRecordFragment,
+  calculationRecordPiece,
+} from "./calculationHtml.js";
+import { escapeHtml } from "../display/escapeHtml.js";
 import { calculationRecordMarkdown } from "./calculationMarkdown.js";
 import { registerRecord } from "./recordRegistry.js";
 
@@ -54,6 +59,24 @@ export interface StartRecordOptions {
   topics?: SafetyTopic[];
   /** Register the record so `isochor run` writes its files. Default true. */
   register?: boolean;
+  /**
+   * Show each results table, chart and answer in the cell that adds it, so the record grows in
+   * the notebook as it is filled. Default: true inside a tslab kernel (or `isochor run`), false
+   * elsewhere (scripts, tests).
+   */
+  live?: boolean;
+}
+
+/** True when tslab's kernel side is loaded in this process (a notebook kernel or `isochor run`). */
+function inTslabKernel(): boolean {
+  return Object.keys(require.cache).some((k) => /[\\/]tslab[\\/]dist[\\/]jupyter\.js$/.test(k));
+}
+
+/** Displays HTML in the current tslab cell. */
+function displayHtml(html: string): void {
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const tslab = require("tslab") as { display: { html(s: string): void } };
+  tslab.display.html(html);
 }
 
 /** An input as recorded: value as given, value in SI, where it came from. */
@@ -193,6 +216,18 @@ function isWarning(value: unknown): value is ResultWarning {
 
 const DIMENSIONLESS = new Set(["-", "", "1"]);
 
+/** Node's hook for how util.inspect (and so a notebook cell's last value) prints an object. */
+const INSPECT = Symbol.for("nodejs.util.inspect.custom");
+
+/**
+ * Gives a record part a one-line printed form (a notebook prints a cell's last value, and the
+ * parts carry whole HTML tables), then freezes it. The hook is not enumerable: JSON is unchanged.
+ */
+function withSummary<T extends object>(value: T, summary: string): Readonly<T> {
+  Object.defineProperty(value, INSPECT, { value: () => summary, enumerable: false });
+  return Object.freeze(value);
+}
+
 /**
  * A calculation record being filled. Create it with {@link startRecord}.
  */
@@ -204,6 +239,8 @@ export class CalculationRecord {
   readonly site?: string;
   readonly createdAt: Date;
   readonly environment: RunEnvironment;
+  /** Tables, charts and answers show in the cell that adds them. */
+  readonly live: boolean;
   private readonly topicList: SafetyTopic[];
   private readonly inputList: RecordedInput[] = [];
   private readonly modelList: ModelEntry[] = [];
@@ -238,6 +275,27 @@ export class CalculationRecord {
     this.createdAt = new Date();
     this.environment = runEnvironment(process.cwd());
     this.anchor = "rec-" + randomBytes(4).toString("hex");
+    if (options.live !== undefined && typeof options.live !== "boolean") {
+      throw new InputError({
+        input: "options.live",
+        unit: "-",
+        validRange: "true or false",
+        received: options.live,
+      });
+    }
+    this.live = options.live ?? inTslabKernel();
+  }
+
+  /** One line for a notebook cell that ends with the record (e.g. `rec.answer(...)`). */
+  [INSPECT](): string {
+    const count = (n: number, what: string) => `${n} ${what}${n === 1 ? "" : "s"}`;
+    const tables = this.itemList.filter((i) => i.kind === "table").length;
+    return (
+      `calculation record "${this.title}": ${count(this.inputList.length, "input")}, ` +
+      `${count(this.modelList.length, "model")}, ${count(tables, "table")}, ` +
+      `${count(this.itemList.length - tables, "chart")}, ${count(this.warningMap.size, "warning")}` +
+      ` (rec.show() displays it)`
+    );
   }
 
   /** Safety topics of this record. */
@@ -319,18 +377,21 @@ export class CalculationRecord {
         atmosphericPressurePa = options.atmosphericPressurePa ?? getDefaultAtmosphericPressure();
       }
     }
-    const recorded: RecordedInput = Object.freeze({
-      id,
-      label,
-      value: Array.isArray(value) ? Object.freeze([...values]) : values[0],
-      unit,
-      valueSI: Array.isArray(value) ? Object.freeze(converted) : converted[0],
-      unitSI,
-      source,
-      note,
-      atmosphericPressurePa,
-      difference: options.difference ?? false,
-    });
+    const recorded: RecordedInput = withSummary(
+      {
+        id,
+        label,
+        value: Array.isArray(value) ? Object.freeze([...values]) : values[0],
+        unit,
+        valueSI: Array.isArray(value) ? Object.freeze(converted) : converted[0],
+        unitSI,
+        source,
+        note,
+        atmosphericPressurePa,
+        difference: options.difference ?? false,
+      },
+      `${id} ${label} = ${Array.isArray(value) ? `[${values.join(", ")}]` : values[0]} ${unit} (recorded)`,
+    );
     this.inputList.push(recorded);
     return recorded;
   }
@@ -342,6 +403,10 @@ export class CalculationRecord {
    */
   model(subject: RecordableModel, options: ModelEntryOptions = {}): ModelEntry {
     const entry = modelEntry(`M${this.modelList.length + 1}`, subject, options);
+    Object.defineProperty(entry, INSPECT, {
+      value: () => `${entry.id} ${entry.label}: ${entry.name} (recorded)`,
+      enumerable: false,
+    });
     this.modelList.push(entry);
     if (entry.defaultedPairs.length > 0) {
       this.addWarning(
@@ -413,8 +478,12 @@ export class CalculationRecord {
     const markdown = tableMarkdown(withText, tableColumns, tableOptions);
     rows.forEach((row) => this.collectWarnings(row, { from: id }));
     this.tableCount += 1;
-    const table: RecordedTable = Object.freeze({ id, caption, html, markdown, rows: rows.length });
+    const table: RecordedTable = withSummary(
+      { id, caption, html, markdown, rows: rows.length },
+      `${id} recorded (${caption !== undefined ? `${caption}, ` : ""}${rows.length} rows)`,
+    );
     this.itemList.push({ kind: "table", table });
+    if (this.live) displayHtml(this.scoped(html));
     return table;
   }
 
@@ -446,7 +515,7 @@ export class CalculationRecord {
     try {
       const html = await work;
       const title = chartTitle(spec);
-      slot.chart = Object.freeze({ id, title, caption, basis, html });
+      slot.chart = withSummary({ id, title, caption, basis, html }, `${id} recorded (chart)`);
     } catch (error) {
       this.itemList.splice(this.itemList.indexOf(slot), 1);
       throw error;
@@ -455,6 +524,18 @@ export class CalculationRecord {
     }
     for (const w of chartMeta(spec)?.warnings ?? []) {
       this.addWarning({ code: "accuracy", message: w }, id);
+    }
+    if (this.live) {
+      const session = displaySession();
+      const runtime = session.runtimeSent ? "" : vegaRuntimeScript() + "\n";
+      displayHtml(
+        runtime +
+          this.scoped(
+            slot.chart.html +
+              `<div class="calc-basis">Basis of ${id}: ${basisLinks(this.anchor, basis)}</div>`,
+          ),
+      );
+      session.runtimeSent = true;
     }
     return slot.chart;
   }
@@ -499,8 +580,16 @@ export class CalculationRecord {
 
   /** States the answer to the question (plain text; may be called more than once). */
   answer(text: string): this {
-    this.answerList.push(requireText(text, "text"));
+    const answer = requireText(text, "text");
+    this.answerList.push(answer);
+    if (this.live)
+      displayHtml(this.scoped(`<div class="calc-answer"><p>${escapeHtml(answer)}</p></div>`));
     return this;
+  }
+
+  /** Wraps a piece of the record for display in a cell, with the record's styles. */
+  private scoped(html: string): string {
+    return calculationRecordPiece(html);
   }
 
   /** A snapshot of the content, with the automatic caution when the record has safety topics. */
@@ -562,10 +651,7 @@ export class CalculationRecord {
     const session = displaySession();
     const hasCharts = this.itemList.some((i) => i.kind === "chart");
     const includeRuntime = hasCharts && !session.runtimeSent;
-    const html = (includeRuntime ? vegaRuntimeScript() + "\n" : "") + this.html();
-    // eslint-disable-next-line @typescript-eslint/no-require-imports
-    const tslab = require("tslab") as { display: { html(s: string): void } };
-    tslab.display.html(html);
+    displayHtml((includeRuntime ? vegaRuntimeScript() + "\n" : "") + this.html());
     if (includeRuntime) session.runtimeSent = true;
   }
 
@@ -616,6 +702,7 @@ export class CalculationRecord {
         }
         if (!inputIds.includes(id as string)) inputIds.push(id as string);
       });
+      inputIds.sort((a, b) => Number(a.slice(1)) - Number(b.slice(1)));
     }
     return { modelId, inputIds };
   }
@@ -654,7 +741,7 @@ export function basisLinks(anchor: string, basis: ResolvedBasis): string {
   const parts: string[] = [];
   if (basis.modelId !== undefined) parts.push(link(basis.modelId));
   if (basis.inputIds.length > 0) parts.push(basis.inputIds.map(link).join(", "));
-  return parts.length > 0 ? parts.join("; ") : "–";
+  return parts.length > 0 ? `<span class="calc-basis-cell">${parts.join("; ")}</span>` : "–";
 }
 
 /**

@@ -88,6 +88,12 @@ function isFluid(value: unknown): value is Fluid {
   );
 }
 
+/** The route of an ideal-gas method without its parenthesised detail (the source column has it). */
+export function shortMethod(method: string): string {
+  const cut = method.indexOf(" (");
+  return cut > 0 ? method.slice(0, cut) : method;
+}
+
 /** The reference state in words. */
 export function describeReferenceState(state: ReferenceState): string {
   switch (state.kind) {

@@ -1,5 +1,6 @@
 // The calculation record a notebook fills: inputs converted to SI and shown both ways, models with
 // their provenance, results traced to model and inputs, warnings collected, cautions, escaping.
+import { inspect } from "node:util";
 import { describe, expect, it } from "vitest";
 import {
   CalculationRecord,
@@ -126,7 +127,11 @@ describe("results are traced to their model and inputs", () => {
       rowBasis: (_row, i) => ({ inputs: [i === 1 ? b : a] }),
     });
     expect(t.id).toBe("T1");
-    const links = [...t.html.matchAll(/<td[^>]*>(<a href[^<]*<\/a>; <a href[^<]*<\/a>)<\/td>/g)];
+    const links = [
+      ...t.html.matchAll(
+        /<td[^>]*><span class="calc-basis-cell">(<a href[^<]*<\/a>; <a href[^<]*<\/a>)<\/span><\/td>/g,
+      ),
+    ];
     expect(links).toHaveLength(11); // every row, including row 10 (token I..-1 vs -10 distinct)
     expect(links[0][1]).toBe(
       `<a href="#${rec.anchor}-M1">M1</a>; <a href="#${rec.anchor}-I1">I1</a>`,
@@ -264,6 +269,29 @@ describe("the Markdown record", () => {
     expect(md).toContain("| A | M1; I1 |");
     expect(md).toContain("**CAUTION.**");
     expect(md).toMatch(/git commit [0-9a-f]{7,}|git commit unknown/);
+  });
+});
+
+describe("printed as a cell's last value", () => {
+  it("prints one line per part, not the HTML it carries; JSON is unchanged", () => {
+    const rec = fresh();
+    const P = rec.input("inlet pressure", 32, "barg");
+    const m = rec.model(
+      { id: "x", name: "X model", citation: "c", componentIds: [] },
+      { label: "Feed" },
+    );
+    const t = rec.results([{ name: "A" }], [{ key: "name", label: "Stream", text: true }], {
+      caption: "Inlets",
+    });
+    expect(inspect(P)).toBe("I1 inlet pressure = 32 barg (recorded)");
+    expect(inspect(m)).toBe("M1 Feed: X model (recorded)");
+    expect(inspect(t)).toBe("T1 recorded (Inlets, 1 rows)");
+    expect(inspect(rec)).toBe(
+      'calculation record "' +
+        question +
+        '": 1 input, 1 model, 1 table, 0 charts, 0 warnings (rec.show() displays it)',
+    );
+    expect(Object.keys(JSON.parse(JSON.stringify(P)))).toContain("valueSI");
   });
 });
 
