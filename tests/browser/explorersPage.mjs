@@ -62,6 +62,28 @@ export const PAGE_EXPLORERS = [
   },
 ];
 
+/** Explorers on the CO2 reference equation (Span-Wagner), as in notebook 05: benchmark only. */
+export const REFERENCE_EXPLORERS = [
+  {
+    id: "isotherms-reference",
+    kind: "isotherms",
+    options: { components: "carbon dioxide", model: "reference", temperatureK: 280, points: 400 },
+  },
+  {
+    id: "pressure-enthalpy-reference",
+    kind: "pressure-enthalpy",
+    options: {
+      components: "carbon dioxide",
+      model: "reference",
+      temperatureK: 308.15,
+      pressurePa: 3e6,
+      pressureRangePa: [6e5, 2e7],
+      temperatureRangeK: [223.15, 453.15],
+      points: 400,
+    },
+  },
+];
+
 /**
  * A stand-in for the classic notebook's RequireJS: a global AMD `define` that records anonymous
  * module definitions. The runtime and the bundle must ignore it and still set their globals.
@@ -71,14 +93,14 @@ const AMD_STUB = `<script>window.__amdDefines = 0; window.define = function () {
 /**
  * Writes the page.
  * @param {string} file output path
- * @param {{ requireJs?: boolean }} [options] requireJs: put an AMD `define` on the page first,
- *   as the classic notebook has
+ * @param {{ requireJs?: boolean, explorers?: typeof PAGE_EXPLORERS }} [options] requireJs: put an
+ *   AMD `define` on the page first, as the classic notebook has; explorers: default PAGE_EXPLORERS
  * @returns {Promise<string>} the absolute path
  */
 export async function writeExplorersPage(file, options = {}) {
   const lib = require(join(root, "kernel-lib", "dist", "index.js"));
   const parts = [];
-  for (const e of PAGE_EXPLORERS) {
+  for (const e of options.explorers ?? PAGE_EXPLORERS) {
     const html = await lib.explorerHtml(e.kind, e.options);
     parts.push(`<section id="page-${e.id}"><h2>${e.kind}</h2>${html}</section>`);
   }

@@ -10,7 +10,13 @@
 import { loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { launchChromium, openGuarded } from "../../tests/browser/explorersCheck.mjs";
-import { PAGE_EXPLORERS, writeExplorersPage } from "../../tests/browser/explorersPage.mjs";
+import {
+  PAGE_EXPLORERS,
+  REFERENCE_EXPLORERS,
+  writeExplorersPage,
+} from "../../tests/browser/explorersPage.mjs";
+
+const EXPLORERS = [...PAGE_EXPLORERS, ...REFERENCE_EXPLORERS];
 
 const CALLS = Number(process.env.BENCH_CALLS ?? 25);
 const WARMUP = 3;
@@ -38,7 +44,7 @@ function sweep([id, positions]) {
 const quantile = (sorted, q) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
 
 const page_file = join(tmpdir(), `isochor-bench-explorers-${process.pid}.html`);
-await writeExplorersPage(page_file);
+await writeExplorersPage(page_file, { explorers: EXPLORERS });
 const { context, close } = await launchChromium(process.env.ISOCHOR_CHROMIUM);
 const problems = [];
 try {
@@ -49,7 +55,7 @@ try {
   await cdp.send("Performance.enable");
   const threadTime = async () =>
     (await cdp.send("Performance.getMetrics")).metrics.find((m) => m.name === "ThreadTime").value;
-  for (const e of PAGE_EXPLORERS) {
+  for (const e of EXPLORERS) {
     // positions walk back and forth over the slider's middle (steps of 7 of 400)
     const positions = Array.from({ length: CALLS }, (_, i) => 150 + 7 * (i % 15));
     await page.evaluate(sweep, [e.id, [120, 130, 140].slice(0, WARMUP)]);
