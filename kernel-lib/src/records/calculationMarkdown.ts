@@ -41,6 +41,11 @@ function values(v: number | readonly number[]): string {
   return typeof v === "number" ? num(v) : v.map(num).join(", ");
 }
 
+/** A value and its unit; a dimensionless value ("-") alone. */
+function withUnit(value: string, unit: string): string {
+  return unit === "" || unit === "\\-" || unit === "-" ? value : `${value} ${unit}`;
+}
+
 function formatDate(date: Date): string {
   return date
     .toISOString()
@@ -93,8 +98,8 @@ export function calculationRecordMarkdown(c: CalculationRecordContent): string {
         i.difference ? "a difference (no offset)" : "",
       ].filter((s) => s !== "");
       out.push(
-        `| ${i.id} | ${m(i.label)} | ${values(i.value)} ${m(i.unit === "-" ? "" : i.unit)} | ` +
-          `${values(i.valueSI)} ${m(i.unitSI === "-" ? "" : i.unitSI)} | ${notes.join("; ")} |`,
+        `| ${i.id} | ${m(i.label)} | ${withUnit(values(i.value), m(i.unit))} | ` +
+          `${withUnit(values(i.valueSI), m(i.unitSI))} | ${notes.join("; ")} |`,
       );
     }
     out.push("");
@@ -137,7 +142,9 @@ export function calculationRecordMarkdown(c: CalculationRecordContent): string {
     if (item.kind === "table") out.push(item.table.markdown, "");
     else {
       const chart = item.chart;
-      const what = [chart.caption, chart.title].find((s) => s !== undefined);
+      const what = [chart.caption, chart.title]
+        .find((s) => s !== undefined)
+        ?.replace(/[.\s]+$/, "");
       out.push(
         `**${chart.id}** (chart, drawn in the HTML record)${what !== undefined ? `: ${m(what)}` : ""}. Basis: ${basisText(chart.basis)}.`,
         "",
