@@ -19,6 +19,8 @@ import {
   resetRecordRegistry,
 } from "../../../kernel-lib/src/records/recordRegistry.js";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
+import { defineComponent } from "../../../kernel-lib/src/components/defineComponent.js";
+import { parsePvtCsv } from "../../../kernel-lib/src/pvt/parsePvtCsv.js";
 import { InputError, UnknownNameError } from "../../../kernel-lib/src/errors.js";
 import type { TableColumn } from "../../../kernel-lib/src/tables/columns.js";
 
@@ -222,6 +224,33 @@ describe("escaping of every caller string", () => {
     expect(html).not.toContain("<script>");
     expect(html).not.toContain("<img src=x");
     expect(html).toContain("&lt;script&gt;window.__isochorInjected=1&lt;/script&gt;");
+  });
+
+  it("escapes a user component's name and a CSV file's provenance comments", async () => {
+    const rec = startRecord({ question, register: false });
+    // Constants are drawing values for a made-up gas (no physics asserted here).
+    const component = defineComponent({
+      id: evil,
+      molarMassKgPerMol: 0.03,
+      criticalTemperatureK: 300,
+      criticalPressurePa: 4e6,
+      acentricFactor: 0.1,
+      idealGasCp: {
+        form: "polynomial",
+        minTemperatureK: 200,
+        maxTemperatureK: 1000,
+        segments: [{ minTemperatureK: 200, maxTemperatureK: 1000, coefficients: [4] }],
+      },
+    });
+    const gas = defineFluid({ components: [component], model: "peng-robinson" });
+    rec.model(gas);
+    const data = parsePvtCsv(`# measured by ${evil}\nT [K],rho [mol/L],P [MPa]\n300,1,2.4\n`);
+    expect(data.comments.join(" ")).toContain(evil);
+    rec.input("a pressure from the file", 2.4, "MPa", { source: data.comments.join(" ") });
+    const html = rec.html();
+    expect(html).not.toContain("<script>");
+    expect(html).toContain("&lt;script&gt;window.__isochorInjected=1&lt;/script&gt;");
+    expect(await rec.markdown()).not.toMatch(/(^|[^\\])<script>/m);
   });
 
   it("escapes Markdown so no HTML or link can pass through a Markdown renderer", async () => {
