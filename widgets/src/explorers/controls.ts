@@ -93,6 +93,7 @@ export function drawControl(
     let current = c;
     const input = el("input", "width:18em");
     input.type = "range";
+    input.setAttribute("aria-label", c.label);
     input.min = "0";
     input.max = String(c.steps);
     input.step = "1";
@@ -124,6 +125,7 @@ export function drawControl(
   }
   if (c.type === "select") {
     const select = el("select");
+    select.setAttribute("aria-label", c.label);
     for (const o of c.options) {
       const option = el("option", undefined, o.label);
       option.value = o.value;
@@ -172,6 +174,7 @@ export function drawControl(
   // typed number
   const input = el("input", "width:8em");
   input.type = "number";
+  input.setAttribute("aria-label", c.label);
   input.step = "any";
   const unit = unitOf(c, units);
   const show = (v: number | undefined) =>
