@@ -132,6 +132,8 @@ export function idealGasMixture(
     let h = 0;
     let s = 0;
     let cp = 0;
+    // every pure refers its entropy to the same pressure, so R ln(P / P_ref) is taken once
+    const pressureTerm = R * Math.log(pressurePa / fast[0].pressurePa);
     for (let i = 0; i < list.length; i++) {
       const xi = x[i];
       if (xi === 0) continue;
@@ -140,9 +142,7 @@ export function idealGasMixture(
       const v = scratch;
       f.unchecked.evaluate(temperatureK, v);
       h += xi * (f.h0 + v.hFrom298 - f.hShift);
-      s +=
-        xi *
-        (f.s0 + v.sFrom298 - f.sShift - R * Math.log(pressurePa / f.pressurePa) - R * Math.log(xi));
+      s += xi * (f.s0 + v.sFrom298 - f.sShift - pressureTerm - R * Math.log(xi));
       cp += xi * v.cp;
     }
     const u = h - R * temperatureK;

@@ -61,6 +61,8 @@ interface IdealCacheEntry {
 }
 const idealCache = new WeakMap<FluidBinding, IdealCacheEntry>();
 const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
+// the residual request of every state evaluation, allocated once
+const COMPOSITION = Object.freeze({ composition: true });
 
 function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): IdealGasProperties {
   let entry = idealCache.get(binding);
@@ -105,7 +107,7 @@ function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): Ide
     entry.value = binding.idealGas.at(T, IDEAL_GAS_PRESSURE_PA, x);
   }
   entry.T = T;
-  entry.x.length = x.length;
+  if (entry.x.length !== x.length) entry.x.length = x.length;
   for (let i = 0; i < x.length; i++) entry.x[i] = x[i];
   return entry.value;
 }
@@ -233,7 +235,7 @@ export function stateAtTP(
   const stableRhos: number[] = [];
   const stableResiduals: ResidualDerivatives[] = [];
   for (let k = 0; k < rhos.length; k++) {
-    const r = model.residual(temperatureK, rhos[k], x, { composition: true });
+    const r = model.residual(temperatureK, rhos[k], x, COMPOSITION);
     if (dPdRho(temperatureK, r, model.gasConstant) > 0) {
       stableRhos.push(rhos[k]);
       stableResiduals.push(r);
