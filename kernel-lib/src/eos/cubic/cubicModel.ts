@@ -414,13 +414,15 @@ class CubicModelImpl implements CubicModel {
     };
   }
 
-  checkValidity(temperatureK: number, _rho: number, _x: readonly number[]): ResultWarning[] {
+  checkValidity(temperatureK: number, _rho: number, x: readonly number[]): ResultWarning[] {
     const warnings: ResultWarning[] = [];
     const kind = this.family.alpha;
     if (kind === "constant" || kind === "redlich-kwong") return warnings;
+    // psi_i at T is in the mixture cache already (the state layer asks after residual() at the
+    // same T and x); the cache holds sqrt(a_c,i) psi_i, whose sign is that of psi_i
+    this.update(temperatureK, x);
     for (let i = 0; i < this.n; i++) {
-      evaluatePsi(kind, this.slope[i], temperatureK, this.tc[i], this.psiScratch);
-      if (!(this.psiScratch.psi > 0)) {
+      if (!(this.psi[i] > 0)) {
         warnings.push({
           code: "model-limitation",
           message: `${this.components[i].id}: the Soave-type alpha function passes its minimum at T = ${temperatureK} K (Tr = ${(temperatureK / this.tc[i]).toFixed(2)}); a(T) rises again with T there, which is unphysical`,
