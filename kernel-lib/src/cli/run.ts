@@ -145,10 +145,13 @@ export async function runCommand(argv: string[], io: CliIo): Promise<number> {
     return 0;
   } catch (error) {
     if (error instanceof RunnerError) {
-      const consequence =
-        error.cellNumber === undefined
-          ? "No notebook was run."
-          : `No record written for ${error.notebook}.`;
+      // Problems found before any cell ran (missing file, not a notebook) stop everything; a failed
+      // cell or an unwritable calculation record loses that notebook's records only.
+      const beforeRun =
+        error.cellNumber === undefined && !error.detail.startsWith("its calculation record");
+      const consequence = beforeRun
+        ? "No notebook was run."
+        : `No record written for ${error.notebook}.`;
       io.stderr(`isochor run: ${error.message}\n${consequence}\n`);
       return 1;
     }

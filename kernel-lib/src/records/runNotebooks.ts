@@ -299,7 +299,16 @@ async function runOne(
     { target: planned.recordPath, content: html },
   ];
   for (let i = 0; i < startedRecords.length; i++) {
-    const { html: recordHtmlText, markdown } = await startedRecords[i].renderFiles();
+    let rendered: { html: string; markdown: string };
+    try {
+      rendered = await startedRecords[i].renderFiles();
+    } catch (error) {
+      throw new RunnerError({
+        notebook: name,
+        detail: `its calculation record "${startedRecords[i].title}" could not be written: ${error instanceof Error ? error.message : String(error)}`,
+      });
+    }
+    const { html: recordHtmlText, markdown } = rendered;
     const target = calculationRecordFiles(planned, i + 1);
     files.push(
       { target: target.html, content: recordHtmlText },
