@@ -9,38 +9,23 @@ import { modelFromPressure } from "../../src/departure/pressureModel.js";
 import { residualProperties } from "../../src/state/properties.js";
 import { getComponent } from "../../src/components/getComponent.js";
 import type { BenchCase } from "../harness.js";
-import type { IdealGasMixture, IdealGasProperties } from "../../src/idealgas/types.js";
-import { R } from "../../src/constants.js";
+import type { Component } from "../../src/components/types.js";
 
 /**
- * A constant-cp ideal gas (cp = 4R), for the diagnostic "-residual-only" cases: it isolates the
- * engine's own cost (roots, residual model, properties) from the ideal-gas correlations.
+ * The component with its cp correlation replaced by a constant cp = 4R (a one-term polynomial,
+ * valid 1-100000 K), for the diagnostic "-residual-only" cases: the state goes through the same
+ * ideal-gas machinery (mixture, reference state, cache), so the ratio of a case to its
+ * residual-only twin is the cost of evaluating the real correlations, and the residual-only time
+ * is the engine's own cost (roots, residual model, properties).
  */
-const constantCpIdealGas: IdealGasMixture = {
-  components: [],
-  referenceState: { kind: "zero-at", temperatureK: 298.15, pressurePa: 1e5 },
-  at(T: number, P: number, x: readonly number[]): IdealGasProperties {
-    const cp = 4 * R;
-    let mixing = 0;
-    for (const xi of x) if (xi > 0) mixing -= R * xi * Math.log(xi);
-    const h = cp * (T - 298.15);
-    const s = cp * Math.log(T / 298.15) - R * Math.log(P / 1e5) + mixing;
-    const u = h - R * T;
-    return {
-      temperatureK: T,
-      pressurePa: P,
-      h,
-      s,
-      u,
-      a: u - T * s,
-      g: h - T * s,
-      cp,
-      cv: cp - R,
-      referenceState: this.referenceState,
-      warnings: [],
-    };
-  },
-};
+function withConstantCp(id: string): Component {
+  const c = getComponent(id);
+  const range = { minTemperatureK: 1, maxTemperatureK: 1e5 };
+  return {
+    ...c,
+    idealGasCp: { form: "polynomial", ...range, segments: [{ ...range, coefficients: [4] }] },
+  };
+}
 
 const TEN = [
   "nitrogen",
@@ -83,12 +68,11 @@ export const engineCases: BenchCase[] = [
   {
     name: "pr-pure-TP-residual-only",
     description:
-      "diagnostic: pr-pure-TP with a constant-cp ideal gas (engine cost without the cp correlations)",
+      "diagnostic: pr-pure-TP with cp = 4R in place of the correlation (engine cost without the cp correlations)",
     setup() {
       const fluid = defineFluid({
-        components: ["methane"],
+        components: [withConstantCp("methane")],
         model: "peng-robinson",
-        idealGas: constantCpIdealGas,
       });
       let k = 0;
       return () => fluid.stateAtTP(TEMPERATURES[k++ & 15], 5e6);
@@ -96,13 +80,9 @@ export const engineCases: BenchCase[] = [
   },
   {
     name: "pr-mix10-TP-residual-only",
-    description: "diagnostic: pr-mix10-TP with a constant-cp ideal gas",
+    description: "diagnostic: pr-mix10-TP with cp = 4R for every component",
     setup() {
-      const fluid = defineFluid({
-        components: TEN,
-        model: "peng-robinson",
-        idealGas: constantCpIdealGas,
-      });
+      const fluid = defineFluid({ components: TEN.map(withConstantCp), model: "peng-robinson" });
       let k = 0;
       return () => fluid.stateAtTP(TEMPERATURES[k++ & 15], 5e6, X10);
     },
