@@ -11,6 +11,7 @@
  * on one page never collide. Styles are scoped under `.isochor-calc` so the fragment can sit in a
  * notebook cell without touching the page around it.
  */
+import { randomBytes } from "node:crypto";
 import { escapeHtml } from "../display/escapeHtml.js";
 import { vegaRuntimeScript } from "../display/vegaRuntime.js";
 import type { CalculationRecordContent, RecordedInput } from "./calculationRecord.js";
@@ -189,6 +190,23 @@ function modelBlock(anchor: string, m: ModelEntry): string {
   );
 }
 
+/**
+ * Gives every chart in `html` a fresh element id. A chart shown in a cell as it was added and again
+ * in the whole record (show()) would otherwise have one id twice on the page, and only the first
+ * copy would go live. Ids come from display/chartHtml ("isochor-chart-" + 12 hex digits).
+ */
+export function rekeyCharts(html: string): string {
+  const fresh = new Map<string, string>();
+  return html.replace(/isochor-chart-[0-9a-f]{12}(?![0-9a-f])/g, (id) => {
+    let next = fresh.get(id);
+    if (next === undefined) {
+      next = "isochor-chart-" + randomBytes(6).toString("hex");
+      fresh.set(id, next);
+    }
+    return next;
+  });
+}
+
 /** The record as an HTML fragment (no runtime script, scoped styles). */
 export function calculationRecordFragment(c: CalculationRecordContent): string {
   const env = c.environment;
@@ -240,11 +258,12 @@ export function calculationRecordFragment(c: CalculationRecordContent): string {
     ),
   );
   const items = c.items.map((item) => {
+    // Charts get fresh ids in every rendering (see rekeyCharts); tables have none.
     if (item.kind === "table")
       return `<div class="calc-item" id="${c.anchor}-${item.table.id}">${item.table.html}</div>`;
     const chart = item.chart;
     return (
-      `<div class="calc-item" id="${c.anchor}-${chart.id}">${chart.html}` +
+      `<div class="calc-item" id="${c.anchor}-${chart.id}">${rekeyCharts(chart.html)}` +
       `<div class="calc-basis">Basis of ${chart.id}: ${basisLinks(c.anchor, chart.basis)}</div></div>`
     );
   });

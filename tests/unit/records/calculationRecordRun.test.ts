@@ -66,8 +66,14 @@ describe.skipIf(!built)("a notebook with a calculation record (needs kernel-lib/
     expect(recordHtml.split("data-isochor-once=")).toHaveLength(2); // one runtime, in the head
     expect(recordMd).toContain("| I2 | inlet pressure | 40 barg | 4101325 Pa |");
     expect(recordMd).toContain("**C1** (chart, drawn in the HTML record)");
-    // rec.show() put the record into the notebook's own record as well.
+    // Tables, chart and answer showed as they were added (live), and rec.show() put the whole
+    // record into the notebook's own record as well; chart ids are not repeated.
     expect(notebookHtml).toContain('class="isochor-calc"');
+    expect(notebookHtml.match(/<figure class="isochor-chart" /g)).toHaveLength(2);
+    const ids = [...notebookHtml.matchAll(/<figure class="isochor-chart" id="([^"]+)"/g)].map(
+      (m) => m[1],
+    );
+    expect(new Set(ids).size).toBe(2);
   });
 
   it("escapes the notebook's script payload everywhere", () => {
@@ -85,11 +91,13 @@ describe.skipIf(!built)("a notebook with a calculation record (needs kernel-lib/
         chromiumPath: chromium,
         expectText: [PAYLOAD],
       });
+      // The notebook's record shows the chart twice (as added, and in the whole record at show()):
+      // both copies must go live, so they cannot share an element id.
       expect(results).toEqual([
         {
           name: "calculation-record.html",
           ok: true,
-          message: "1 chart live, no request outside file://, no page errors",
+          message: "2 charts live, no request outside file://, no page errors",
         },
         {
           name: "calculation-record.record.html",
