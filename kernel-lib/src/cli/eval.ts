@@ -5,6 +5,7 @@
  *                 "residual": {"h", "s", "u", "a", "g"}, "residualTV": {"s", "a", "g"}}
  *              | {"error": {"code", "message"}} ]}
  * all SI molar (J/mol, J/(mol K), m/s, K/Pa; residual = same T and P, residualTV = same T and density).
+ * Every state entry also carries "referenceState": the zero of h, s and u, in words.
  * States given by saturation or quality (pure fluids) add "quality" (vapour fraction, 0..1): at
  * quality 0 or 1 the entry is the saturated liquid or vapour with every field; strictly inside the
  * dome ("phase": "two-phase") rho, h, s, u and residual {h, s, u, a, g} are lever-rule averages of
@@ -34,6 +35,7 @@ import {
   type TwoPhaseState,
 } from "../phase/twoPhaseState.js";
 import { gasConstantOf } from "../phase/pureFluid.js";
+import { describeReferenceState } from "../idealgas/referenceState.js";
 import type { FluidBinding, FluidState } from "../state/types.js";
 import { parseEvalRequest, type EvalRequest, type EvalState } from "./evalRequest.js";
 import type { CliIo } from "./io.js";
@@ -66,6 +68,8 @@ export type EvalStateResponse =
       residual: { h: number; s: number; u: number; a: number; g: number };
       residualTV: { s: number; a: number; g: number };
       quality?: number;
+      /** The zero of h, s, u in words (every result says which reference state it uses). */
+      referenceState: string;
       warnings?: string[];
     }
   | {
@@ -85,6 +89,7 @@ export type EvalStateResponse =
       lnPhi: number[];
       residual: { h: number; s: number; u: number; a: number; g: number };
       residualTV: null;
+      referenceState: string;
       warnings?: string[];
     }
   | { error: { code: string; message: string } };
@@ -112,6 +117,7 @@ function toResponse(s: FluidState): EvalStateResponse {
       g: s.residual.g,
     },
     residualTV: { s: s.residualTV.s, a: s.residualTV.a, g: s.residualTV.g },
+    referenceState: describeReferenceState(s.referenceState),
   };
   if (s.warnings.length > 0) out.warnings = warningTexts(s.warnings);
   return out;
@@ -164,6 +170,7 @@ function toQualityResponse(t: TwoPhaseState, binding: FluidBinding): EvalStateRe
       g: lever(L.g, V.g),
     },
     residualTV: null,
+    referenceState: describeReferenceState(binding.idealGas.referenceState),
   };
   if (t.warnings.length > 0) out.warnings = warningTexts(t.warnings);
   return out;
