@@ -10,6 +10,7 @@ import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
 import { criticalLayers, domeLayers } from "./domeLayers.js";
 import {
+  addDomeWarnings,
   checkCritical,
   checkSaturation,
   type ChartCriticalPoint,
@@ -67,6 +68,8 @@ export interface IsothermChartData {
   saturation?: readonly ChartSaturationRow[];
   /** Critical point (with densityMolPerM3) to mark. Default: none. */
   critical?: ChartCriticalPoint;
+  /** Notes of a sampled dome (saturationFromModel), copied into the chart's warnings. */
+  domeWarnings?: readonly string[];
 }
 
 /** Options of {@link isothermChart}. */
@@ -115,6 +118,7 @@ export function isothermChart(
     });
   }
   const warnings = new WarningList();
+  addDomeWarnings(warnings, data.domeWarnings);
   const useVolume = xKind === "molarVolume";
   const xAxis: AxisPlan = useVolume
     ? planAxis("molarVolume", "Molar volume v", options.units, options.logX ?? true)

@@ -11,6 +11,7 @@ import { criticalLayers, domeLayers, qualityLayers } from "./domeLayers.js";
 import { energyBasis } from "./energyBasis.js";
 import { INK } from "./theme.js";
 import {
+  addDomeWarnings,
   checkCritical,
   checkSaturation,
   type ChartCriticalPoint,
@@ -43,6 +44,8 @@ export interface PressureEnthalpyData {
   saturation?: readonly ChartSaturationRow[];
   /** Critical point (with enthalpyJPerMol) to mark and to close the dome. */
   critical?: ChartCriticalPoint;
+  /** Notes of a sampled dome (saturationFromModel), copied into the chart's warnings. */
+  domeWarnings?: readonly string[];
   /** Isotherms (legend, colour and dash per isotherm). */
   isotherms?: readonly {
     temperatureK: number;
@@ -94,6 +97,7 @@ export function pressureEnthalpyChart(
   const qualities = checkQualities(options.qualities ?? [0.2, 0.4, 0.6, 0.8]);
   const basis = energyBasis(options.molarMassKgPerMol);
   const warnings = new WarningList();
+  addDomeWarnings(warnings, data.domeWarnings);
   const xAxis = planAxis(basis.energyKind, `${basis.adjective} enthalpy h`, options.units);
   const yAxis = planAxis("pressure", "Pressure P", options.units, options.logP ?? true);
   const temperatureUnit = planAxis("temperature", "T", options.units).unit;

@@ -11,6 +11,7 @@ import { fromDisplay, toDisplay, type QuantityKind } from "./displayUnits.js";
 import { criticalLayers } from "./domeLayers.js";
 import { gridIsolines } from "./isolines.js";
 import {
+  addDomeWarnings,
   checkCritical,
   checkSaturation,
   type ChartCriticalPoint,
@@ -45,6 +46,8 @@ export interface PropertySurfaceData {
   saturation?: readonly ChartSaturationRow[];
   /** Critical point to mark. Default: none. */
   critical?: ChartCriticalPoint;
+  /** Notes of a sampled dome (saturationFromModel), copied into the chart's warnings. */
+  domeWarnings?: readonly string[];
 }
 
 /** Options of {@link propertySurfaceChart}. */
@@ -97,6 +100,7 @@ export function propertySurfaceChart(
   const critical = checkCritical(data.critical);
   const logP = options.logP ?? true;
   const warnings = new WarningList();
+  addDomeWarnings(warnings, data.domeWarnings);
   const xAxis = planAxis("temperature", "Temperature T", options.units);
   const yAxis = planAxis("pressure", "Pressure P", options.units, logP);
   const vAxis = planAxis(data.quantity.kind, name, options.units);

@@ -80,3 +80,20 @@ export function checkCritical(
   }
   return point;
 }
+
+/** Copies the notes of a sampled dome (`domeWarnings`) into a chart's warning list. */
+export function addDomeWarnings(
+  target: { add(message: string): void },
+  domeWarnings: readonly string[] | undefined,
+): void {
+  if (domeWarnings === undefined) return;
+  if (!Array.isArray(domeWarnings)) {
+    throw new InputError({
+      input: "domeWarnings",
+      unit: "-",
+      validRange: "an array of strings",
+      received: domeWarnings,
+    });
+  }
+  for (const w of domeWarnings) target.add(String(w));
+}

@@ -10,6 +10,7 @@ import { criticalLayers, domeLayers, qualityLayers } from "./domeLayers.js";
 import { energyBasis } from "./energyBasis.js";
 import { checkQualities } from "./pressureEnthalpy.js";
 import {
+  addDomeWarnings,
   checkCritical,
   checkSaturation,
   type ChartCriticalPoint,
@@ -41,6 +42,8 @@ export interface TemperatureEntropyData {
   saturation?: readonly ChartSaturationRow[];
   /** Critical point (with entropyJPerMolK). */
   critical?: ChartCriticalPoint;
+  /** Notes of a sampled dome (saturationFromModel), copied into the chart's warnings. */
+  domeWarnings?: readonly string[];
   /** Isobars, one series each. */
   isobars?: readonly {
     pressurePa: number;
@@ -83,6 +86,7 @@ export function temperatureEntropyChart(
   const qualities = checkQualities(options.qualities ?? [0.2, 0.4, 0.6, 0.8]);
   const basis = energyBasis(options.molarMassKgPerMol);
   const warnings = new WarningList();
+  addDomeWarnings(warnings, data.domeWarnings);
   const xAxis = planAxis(basis.entropyKind, `${basis.adjective} entropy s`, options.units);
   const yAxis = planAxis("temperature", "Temperature T", options.units);
   const pressureUnit = planAxis("pressure", "P", options.units).unit;

@@ -2,7 +2,9 @@
  * Isotherms of a model for the P-v chart: pressure from the residual Helmholtz energy,
  * P = rho R T (1 + aD) (state/pressureFromResidual), on a density grid (sampling.ts) that resolves
  * dilute gas, loop and steep liquid; for a pure fluid below its critical temperature, the
- * equal-area construction from phase/equalAreaIsotherm.
+ * equal-area construction from phase/equalAreaIsotherm. The density limit is the model's maximum
+ * density (1/b of a cubic) or, for a reference equation without one, a liquid density from its
+ * lowest temperature (samplingDensityLimit.ts).
  */
 import type { ResidualModel } from "../../eos/types.js";
 import { equalAreaIsotherm } from "../../phase/equalAreaIsotherm.js";
@@ -12,6 +14,7 @@ import { requirePositive } from "../../validate.js";
 import type { IsothermChartCurve } from "../isotherms.js";
 import { isothermDensityGrid } from "../sampling.js";
 import { tryPoint } from "./sampleGuard.js";
+import { samplingDensityLimit } from "./samplingDensityLimit.js";
 
 /** Options of {@link isothermsFromModel}. */
 export interface IsothermSampleOptions {
@@ -19,8 +22,15 @@ export interface IsothermSampleOptions {
   x?: readonly number[];
   /** Points per isotherm. Default 240. */
   points?: number;
-  /** Highest density as a fraction of the model's maximum density. Default 0.96. */
+  /** Highest density as a fraction of the density limit. Default 0.96. */
   maxFraction?: number;
+  /**
+   * Density limit to sample to, mol/m3. Default: the model's maximum density when finite (1/b of
+   * a cubic); else (reference equations) 1.05 times the saturated-liquid density at the model's
+   * triple point or lowest valid temperature, which covers the compressed liquid up to the
+   * pressures a chart shows.
+   */
+  maxDensityMolPerM3?: number;
   /** Add the equal-area construction below Tc (pure fluids). Default true. */
   equalArea?: boolean;
 }
@@ -40,9 +50,21 @@ export function isothermsFromModel(
     pure && (options.equalArea ?? true)
       ? tryPoint(() => locateCriticalPoint(model))?.temperatureK
       : undefined;
+  if (options.maxDensityMolPerM3 !== undefined) {
+    requirePositive("maxDensityMolPerM3", options.maxDensityMolPerM3, "mol/m3");
+  }
+  // A limit taken from the liquid at the lowest temperature is the same for every isotherm.
+  let fromLiquid: number | undefined;
+  const densityLimit = (T: number): number => {
+    if (options.maxDensityMolPerM3 !== undefined) return options.maxDensityMolPerM3;
+    const own = model.maxDensity(T, x);
+    if (own > 0 && Number.isFinite(own)) return own;
+    fromLiquid ??= samplingDensityLimit(model, T, x).densityMolPerM3;
+    return fromLiquid;
+  };
   return temperaturesK.map((T, i) => {
     requirePositive(`temperaturesK[${i}]`, T, "K");
-    const grid = isothermDensityGrid(model.maxDensity(T, x), {
+    const grid = isothermDensityGrid(densityLimit(T), {
       points: options.points,
       maxFraction: options.maxFraction,
     });

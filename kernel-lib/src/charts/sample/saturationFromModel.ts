@@ -6,8 +6,12 @@
  *
  * Temperatures are spaced more densely towards the critical point (uniform in sqrt(1 - T/Tc)),
  * where the dome closes steeply: the top of the dome comes out round, not flat.
+ *
+ * The dome starts at 0.55 Tc by default, or at the model's own lowest temperature when that is
+ * higher (a reference equation's triple point or the low end of its validity range: CO2's
+ * 216.592 K is 0.71 Tc); the warnings say where it starts and why.
  */
-import { InputError } from "../../errors.js";
+import { InputError, OutOfRangeError } from "../../errors.js";
 import type { ResidualModel } from "../../eos/types.js";
 import { locateCriticalPoint } from "../../phase/criticalPoint.js";
 import { saturationAtTemperature } from "../../phase/saturation.js";
@@ -15,12 +19,17 @@ import { stateAtTRho } from "../../state/stateAt.js";
 import type { FluidBinding } from "../../state/types.js";
 import type { ChartCriticalPoint, ChartSaturationRow } from "../saturationInput.js";
 import { tryPoint } from "./sampleGuard.js";
+import { modelLowestTemperatureK } from "./samplingDensityLimit.js";
 
 /** Options of {@link saturationFromModel}. */
 export interface SaturationSampleOptions {
   /** Number of saturation temperatures. Default 40. */
   points?: number;
-  /** Lowest temperature as a fraction of the critical temperature. Default 0.55. */
+  /**
+   * Lowest temperature as a fraction of the critical temperature. Default: 0.55, or the model's
+   * own lowest temperature (triple point, low end of its validity range) when that is higher.
+   * An explicit value is used as given; points the model refuses are left out and reported.
+   */
   fromReducedTemperature?: number;
   /** Highest temperature as a fraction of Tc. Default 0.9995. */
   toReducedTemperature?: number;
@@ -32,6 +41,11 @@ export interface SampledDome {
   critical: ChartCriticalPoint;
   /** Temperatures (K) where no saturation state was found (left out). */
   skippedTemperaturesK: number[];
+  /**
+   * Notes for the chart (where the dome starts and why, points left out); the diagram builders
+   * copy them into their warnings when the dome is spread into their data.
+   */
+  domeWarnings: string[];
 }
 
 /**
@@ -46,7 +60,8 @@ export function saturationFromModel(
   const binding = "model" in modelOrFluid ? modelOrFluid : undefined;
   const model = binding ? binding.model : (modelOrFluid as ResidualModel);
   const n = options.points ?? 40;
-  const lo = options.fromReducedTemperature ?? 0.55;
+  const loOption = options.fromReducedTemperature;
+  const lo = loOption ?? 0.55;
   const hi = options.toReducedTemperature ?? 0.9995;
   if (!(Number.isInteger(n) && n >= 2 && n <= 2000)) {
     throw new InputError({
@@ -65,6 +80,26 @@ export function saturationFromModel(
     });
   }
   const cp = locateCriticalPoint(model);
+  const domeWarnings: string[] = [];
+  // Start: the default 0.55 Tc, raised to the model's own lowest temperature when higher.
+  let tStart = lo * cp.temperatureK;
+  const lowest = modelLowestTemperatureK(model);
+  if (loOption === undefined && lowest !== undefined && lowest > tStart) {
+    if (!(lowest < hi * cp.temperatureK)) {
+      throw new InputError({
+        input: "toReducedTemperature",
+        unit: "-",
+        validRange: `above the model's lowest temperature ${lowest} K / Tc ${cp.temperatureK} K`,
+        received: hi,
+      });
+    }
+    domeWarnings.push(
+      `The saturation dome starts at ${round(lowest)} K, the lowest temperature of ` +
+        `${model.info.name} (triple point or validity limit), not at the default 0.55 Tc = ` +
+        `${round(tStart)} K.`,
+    );
+    tStart = lowest;
+  }
   const x = [1];
   const withEnergies = (T: number, rho: number) => {
     if (!binding) return { densityMolPerM3: rho };
@@ -75,12 +110,21 @@ export function saturationFromModel(
   const skipped: number[] = [];
   // Uniform in w = sqrt(1 - Tr): dense near the critical point.
   const wLo = Math.sqrt(1 - hi);
-  const wHi = Math.sqrt(1 - lo);
+  const wHi = Math.sqrt(1 - tStart / cp.temperatureK);
   let start: { liquidDensityMolPerM3: number; vaporDensityMolPerM3: number } | undefined;
   for (let i = 0; i < n; i++) {
     const w = wHi - ((wHi - wLo) * i) / (n - 1);
-    const T = cp.temperatureK * (1 - w * w);
-    const sat = tryPoint(() => saturationAtTemperature(model, T, start ? { start } : {}));
+    // The first point exactly at the start (a triple point must not round to just below it).
+    const T = i === 0 ? tStart : cp.temperatureK * (1 - w * w);
+    const sat = tryPoint(() => {
+      try {
+        return saturationAtTemperature(model, T, start ? { start } : {});
+      } catch (error) {
+        // Only a start the user chose can reach outside the model's range: a gap, reported.
+        if (error instanceof OutOfRangeError && loOption !== undefined) return undefined;
+        throw error;
+      }
+    });
     if (!sat) {
       skipped.push(T);
       continue;
@@ -106,5 +150,17 @@ export function saturationFromModel(
     critical.enthalpyJPerMol = s.molar.h;
     critical.entropyJPerMolK = s.molar.s;
   }
-  return { saturation, critical, skippedTemperaturesK: skipped };
+  if (skipped.length > 0) {
+    domeWarnings.push(
+      `${skipped.length} saturation temperature(s) from ${round(Math.min(...skipped))} K to ` +
+        `${round(Math.max(...skipped))} K gave no saturation state (outside the model's range or ` +
+        "no convergence) and are left out of the dome.",
+    );
+  }
+  return { saturation, critical, skippedTemperaturesK: skipped, domeWarnings };
+}
+
+/** Temperature for a message, 0.01 K. */
+function round(temperatureK: number): number {
+  return Math.round(temperatureK * 100) / 100;
 }

@@ -1,0 +1,89 @@
+/**
+ * The samplers on a multiparameter reference equation (Span and Wagner 1996 for CO2): no finite
+ * maximum density (isotherms sample to a liquid density instead) and a lower temperature limit
+ * (the dome starts at the triple point, and the chart says so).
+ */
+import { describe, expect, it } from "vitest";
+import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluidBinding } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import {
+  isothermsFromModel,
+  saturationFromModel,
+} from "../../../kernel-lib/src/charts/sample/index.js";
+import { isothermChart } from "../../../kernel-lib/src/charts/isotherms.js";
+import { temperatureEntropyChart } from "../../../kernel-lib/src/charts/temperatureEntropy.js";
+import { chartMeta } from "../../../kernel-lib/src/charts/chartSpec.js";
+import { InputError } from "../../../kernel-lib/src/errors.js";
+import { schemaErrors } from "./specCheck.js";
+
+// CO2 triple point 216.592 K, 0.51795 MPa, saturated liquid 1178.46 kg/m3 (from memory of Span
+// and Wagner, J. Phys. Chem. Ref. Data 25 (1996) 1509, Table 3); M = 44.0098 g/mol (same paper).
+const T_TRIPLE = 216.592;
+const P_TRIPLE = 0.51795e6;
+const RHO_L_TRIPLE = 1178.46 / 0.0440098; // mol/m3
+const PC = 7.3773e6; // Pa, same paper
+
+describe("isothermsFromModel on the CO2 reference equation", () => {
+  const co2 = referenceFluid("carbon-dioxide");
+
+  it("samples without a finite maximum density, into the compressed liquid", () => {
+    expect(co2.maxDensity(250, [1])).toBe(Infinity); // the premise of this test
+    const curves = isothermsFromModel(co2, [250, 320], { points: 120 });
+    for (const c of curves) {
+      const rhos = c.points.map((p) => p.densityMolPerM3);
+      expect(rhos.every(Number.isFinite)).toBe(true);
+      // Reaches at least the triple-point liquid density: every liquid state of the chart.
+      expect(Math.max(...rhos)).toBeGreaterThanOrEqual(RHO_L_TRIPLE);
+      expect(Math.max(...rhos)).toBeLessThan(1.1 * RHO_L_TRIPLE);
+      // The densest point is a compressed liquid above the chart's default pressure cap (2 Pc),
+      // so the liquid branch runs off the top of the chart instead of stopping inside it.
+      const top = c.points.reduce((a, b) => (b.densityMolPerM3 > a.densityMolPerM3 ? b : a));
+      expect(top.pressurePa).toBeGreaterThan(2 * PC);
+    }
+    // 250 K: vapour pressure 1.7850 MPa (from memory of Span and Wagner 1996, Table 34).
+    expect(curves[0].equalArea!.pressurePa / 1.785e6).toBeCloseTo(1, 3);
+    expect(curves[1].equalArea).toBeUndefined(); // supercritical
+  });
+
+  it("an explicit density limit wins; a bad one is refused", () => {
+    const c = isothermsFromModel(co2, [300], { points: 30, maxDensityMolPerM3: 20000 });
+    expect(Math.max(...c[0].points.map((p) => p.densityMolPerM3))).toBeCloseTo(0.96 * 20000, 6);
+    for (const bad of [NaN, -1, 0, Infinity]) {
+      expect(() => isothermsFromModel(co2, [300], { maxDensityMolPerM3: bad })).toThrow(InputError);
+    }
+  });
+});
+
+describe("saturationFromModel on the CO2 reference equation", () => {
+  const co2 = referenceFluid("carbon-dioxide");
+
+  it("starts the dome at the triple point, not at 0.55 Tc (167 K), and says so", () => {
+    const dome = saturationFromModel(co2, { points: 15 });
+    expect(dome.saturation.length).toBe(15);
+    expect(dome.skippedTemperaturesK).toEqual([]);
+    expect(dome.saturation[0].temperatureK).toBe(T_TRIPLE);
+    expect(dome.saturation[0].pressurePa / P_TRIPLE).toBeCloseTo(1, 3);
+    expect(dome.saturation[0].liquid.densityMolPerM3! / RHO_L_TRIPLE).toBeCloseTo(1, 3);
+    expect(dome.domeWarnings).toHaveLength(1);
+    expect(dome.domeWarnings[0]).toMatch(/starts at 216\.59 K/);
+    const spec = isothermChart({ isotherms: isothermsFromModel(co2, [250]), ...dome });
+    expect(schemaErrors(spec)).toEqual([]);
+    expect(chartMeta(spec)!.warnings).toEqual(dome.domeWarnings);
+  });
+
+  it("with energies (T-s), the warning reaches the chart", () => {
+    const dome = saturationFromModel(referenceFluidBinding(co2), { points: 8 });
+    expect(dome.saturation[0].liquid.entropyJPerMolK).toBeDefined();
+    const spec = temperatureEntropyChart(dome);
+    expect(chartMeta(spec)!.warnings.some((w) => /216\.59 K/.test(w))).toBe(true);
+  });
+
+  it("an explicit start below the equation's range: refused points are left out and reported", () => {
+    // 0.55 Tc = 167 K is below the 190 K extrapolation limit of this library's CO2 data file.
+    const dome = saturationFromModel(co2, { points: 12, fromReducedTemperature: 0.55 });
+    expect(dome.skippedTemperaturesK.length).toBeGreaterThan(0);
+    expect(Math.max(...dome.skippedTemperaturesK)).toBeLessThan(190);
+    expect(dome.saturation.length + dome.skippedTemperaturesK.length).toBe(12);
+    expect(dome.domeWarnings.some((w) => /left out of the dome/.test(w))).toBe(true);
+  });
+});
