@@ -192,18 +192,19 @@ export function departuresFromPvt(
     });
   }
 
-  // (1) Surface: first with u(P) only, then with effective variances.
+  // (1) Surface: first with u(P) only, then with effective variances; fitted on the points kept
+  // by the screening in (2) (refitted after it, so a point set aside there does not inflate the
+  // surface, its reduced chi-square, or the uncertainties scaled by it).
+  let kept: number[] = pts.map((_, i) => i);
   const surfacePoints = (P: readonly number[]) =>
-    pts.map((p, i) => ({
-      temperatureK: p.temperatureK,
-      densityMolPerM3: p.densityMolPerM3,
-      pressurePa: P[i] as number,
-    }));
-  let surfaceFit = fitVirialSurface(
-    surfacePoints(P0),
-    stated ? pts.map((p) => p.uPressurePa as number) : undefined,
-    { gasConstant: R, ...options.surface },
-  );
+    kept.map((i) => {
+      const p = pts[i] as PvtDataset["points"][number];
+      return {
+        temperatureK: p.temperatureK,
+        densityMolPerM3: p.densityMolPerM3,
+        pressurePa: P[i] as number,
+      };
+    });
   const slopeT = (s: VirialSurface, t: number, r: number) => {
     const d = surfaceDerivatives(s, t, r);
     return r * R * (1 + d.aD + d.aDT);
@@ -213,27 +214,37 @@ export function departuresFromPvt(
     return R * t * (1 + 2 * d.aD + d.aDD);
   };
   let sigmaEff: number[] | undefined;
-  if (stated) {
-    sigmaEff = pts.map((p) => {
-      const dT =
-        slopeT(surfaceFit.surface, p.temperatureK, p.densityMolPerM3) * (p.uTemperatureK ?? 0);
-      const dR =
-        slopeRho(surfaceFit.surface, p.temperatureK, p.densityMolPerM3) * (p.uDensityMolPerM3 ?? 0);
-      return Math.sqrt((p.uPressurePa as number) ** 2 + dT * dT + dR * dR);
-    });
-    surfaceFit = fitVirialSurface(surfacePoints(P0), sigmaEff, {
-      gasConstant: R,
-      ...options.surface,
-      densityTerms: surfaceFit.surface.densityTerms,
-      temperatureTerms: surfaceFit.surface.temperatureTerms,
-    });
-  }
-  const surfaceOrder = {
-    densityTerms: surfaceFit.surface.densityTerms,
-    temperatureTerms: surfaceFit.surface.temperatureTerms,
+  const fitSurface = (): VirialSurfaceFit => {
+    let fit = fitVirialSurface(
+      surfacePoints(P0),
+      stated
+        ? kept.map((i) => (pts[i] as PvtDataset["points"][number]).uPressurePa as number)
+        : undefined,
+      { gasConstant: R, ...options.surface },
+    );
+    if (stated) {
+      const first = fit;
+      sigmaEff = pts.map((p) => {
+        const dT =
+          slopeT(first.surface, p.temperatureK, p.densityMolPerM3) * (p.uTemperatureK ?? 0);
+        const dR =
+          slopeRho(first.surface, p.temperatureK, p.densityMolPerM3) * (p.uDensityMolPerM3 ?? 0);
+        return Math.sqrt((p.uPressurePa as number) ** 2 + dT * dT + dR * dR);
+      });
+      fit = fitVirialSurface(
+        surfacePoints(P0),
+        kept.map((i) => sigmaEff?.[i] as number),
+        {
+          gasConstant: R,
+          ...options.surface,
+          densityTerms: first.surface.densityTerms,
+          temperatureTerms: first.surface.temperatureTerms,
+        },
+      );
+    }
+    return fit;
   };
-  for (const r of surfaceFit.diagnostics.recommendations)
-    diagnostics.push({ code: "surface-fit", severity: "warning", message: r });
+  let surfaceFit = fitSurface();
 
   // (2) Isochores.
   const minT = options.minIsochoreTemperatures ?? 3;
@@ -247,6 +258,7 @@ export function departuresFromPvt(
     options.route === "isochores" || ((options.route ?? "auto") === "auto" && groups.length >= 3);
   if (sigmaEff && Number.isFinite(threshold) && willUseIsochores) {
     const maxOut = Math.floor(0.05 * n);
+    const sig = sigmaEff;
     for (let round = 0; round < maxOut; round++) {
       let worst: { g: number; j: number; z: number } | undefined;
       groups.forEach((g, gi) => {
@@ -256,11 +268,11 @@ export function departuresFromPvt(
           g.densityMolPerM3,
           g.members.map((i) => T[i] as number),
           g.members.map((i) => P0[i] as number),
-          g.members.map((i) => sigmaEff?.[i] as number),
+          g.members.map((i) => sig[i] as number),
           options.isochore,
         );
         f.residualsPa.forEach((r, j) => {
-          const z = Math.abs(r) / (sigmaEff?.[g.members[j] as number] as number);
+          const z = Math.abs(r) / (sig[g.members[j] as number] as number);
           if (z > threshold && (!worst || z > worst.z)) worst = { g: gi, j, z };
         });
       });
@@ -275,10 +287,23 @@ export function departuresFromPvt(
         temperatureK: p.temperatureK,
         densityMolPerM3: p.densityMolPerM3,
         pressurePa: p.pressurePa,
-        reason: `outlier: residual ${w.z.toFixed(1)} u(P) on the isochore at ${grp.densityMolPerM3.toPrecision(6)} mol/m3 (threshold ${threshold})`,
+        reason: `outlier: residual ${w.z.toFixed(1)} u(P) on the isochore at ${grp.densityMolPerM3.toPrecision(6)} mol/m3 (threshold ${threshold}); left out of the isochore and the global surface fits`,
       });
     }
+    if (routeSetAside.length > 0) {
+      const out = new Set(routeSetAside.map((s) => s.line));
+      kept = pts
+        .map((_, i) => i)
+        .filter((i) => !out.has((pts[i] as PvtDataset["points"][number]).line));
+      surfaceFit = fitSurface();
+    }
   }
+  const surfaceOrder = {
+    densityTerms: surfaceFit.surface.densityTerms,
+    temperatureTerms: surfaceFit.surface.temperatureTerms,
+  };
+  for (const r of surfaceFit.diagnostics.recommendations)
+    diagnostics.push({ code: "surface-fit", severity: "warning", message: r });
   // Density correction to the group mean, frozen from the nominal surface.
   const shift = new Array<number>(n).fill(0);
   for (const g of groups) {
@@ -555,7 +580,11 @@ export function departuresFromPvt(
       const s =
         P === P0 && orderBump === 0
           ? surfaceFit
-          : fitVirialSurface(surfacePoints(P), surfSigma, frozen);
+          : fitVirialSurface(
+              surfacePoints(P),
+              surfSigma ? kept.map((i) => surfSigma[i] as number) : undefined,
+              frozen,
+            );
       const sf = s.surface;
       return {
         pressures: isothermTs.map((t, k) =>
