@@ -17,6 +17,7 @@ import {
   type AxisPlan,
   type BaseChartOptions,
 } from "./specParts.js";
+import { applyLogTicks } from "./logTicks.js";
 import { INK } from "./theme.js";
 
 /** One state of a process path, SI per mole. */
@@ -112,6 +113,8 @@ export function withProcessPath(spec: ChartSpec, states: readonly ProcessPathSta
   const copy = JSON.parse(JSON.stringify(spec)) as ChartSpec;
   const layers = pathLayers(states, diagram, xAxis, yAxis, basis.perBasis);
   copy.layer = [...(copy.layer as ChartSpec[]), ...(layers as ChartSpec[])];
+  // The path may reach beyond the diagram's data: recompute the log-axis ticks over all layers.
+  applyLogTicks(copy as Record<string, unknown>, { refresh: true });
   return copy;
 }
 

@@ -16,6 +16,7 @@ import {
   type QuantityKind,
   type UnitChoice,
 } from "./displayUnits.js";
+import { applyLogTicks } from "./logTicks.js";
 import {
   DEFAULT_HEIGHT,
   DEFAULT_WIDTH,
@@ -252,6 +253,7 @@ export function topLevel(
       : {}),
     warnings: warnings.list(),
   };
+  applyLogTicks(body);
   const spec: ChartSpec = {
     $schema: VEGA_LITE_SCHEMA,
     title: title as ChartSpec["title"],
