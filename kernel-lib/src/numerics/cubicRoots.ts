@@ -43,6 +43,7 @@ export interface CubicRootsResult {
 }
 
 const EPS = Number.EPSILON;
+const COEFFICIENT_NAMES = ["c3", "c2", "c1", "c0"] as const;
 
 /**
  * All real roots of c3 x^3 + c2 x^2 + c1 x + c0 = 0, ascending.
@@ -64,19 +65,79 @@ export function realCubicRoots(
   c0: number,
   options: CubicRootsOptions = {},
 ): CubicRootsResult {
-  const coefficients = [c3, c2, c1, c0];
-  const names = ["c3", "c2", "c1", "c0"];
-  for (let i = 0; i < 4; i++) {
-    if (!Number.isFinite(coefficients[i])) {
-      throw new InputError({
-        input: names[i],
-        unit: "-",
-        validRange: "a finite number",
-        received: coefficients[i],
-      });
-    }
+  const out = new Float64Array(3);
+  const count = solveInto(c3, c2, c1, c0, options.maxPolishSteps ?? 4, out);
+  const roots: number[] = [];
+  const residuals: number[] = [];
+  for (let i = 0; i < count; i++) {
+    roots.push(out[i]);
+    residuals.push(horner(c3, c2, c1, c0, out[i]));
   }
-  const maxPolishSteps = options.maxPolishSteps ?? 4;
+  return { roots, residuals, iterations: polishStepsOfLastSolve };
+}
+
+/**
+ * Allocation-free form of {@link realCubicRoots} for hot loops (density roots of a cubic equation
+ * of state at every state): the same algorithm, with the default polishing (at most 4 Newton steps
+ * per root). The real roots are written ascending into `out[0 .. count - 1]` and their number
+ * (0 to 3) is returned; the rest of `out` is left untouched. No residuals are formed.
+ *
+ * @example
+ * ```ts
+ * const out = new Float64Array(3);
+ * const n = realCubicRootsInto(1, -6, 11, -6, out); // n = 3, out = [1, 2, 3]
+ * ```
+ * @throws InputError if a coefficient is NaN or infinite, if all are zero, or if `out` holds fewer
+ *   than 3 numbers.
+ */
+export function realCubicRootsInto(
+  c3: number,
+  c2: number,
+  c1: number,
+  c0: number,
+  out: Float64Array,
+): number {
+  if (!(out.length >= 3)) {
+    throw new InputError({
+      input: "out",
+      unit: "-",
+      validRange: "a Float64Array of length >= 3",
+      received: out.length,
+    });
+  }
+  return solveInto(c3, c2, c1, c0, 4, out);
+}
+
+// Newton steps taken by the last solveInto call: read by realCubicRoots right after the call
+// (single-threaded, so no other solve can run in between); keeps the lean path free of a result object.
+let polishStepsOfLastSolve = 0;
+// closed-form (unpolished) roots of the current solve, reused across calls (at most 3)
+const rawScratch = new Float64Array(3);
+
+function checkCoefficient(index: number, value: number): void {
+  if (!Number.isFinite(value)) {
+    throw new InputError({
+      input: COEFFICIENT_NAMES[index],
+      unit: "-",
+      validRange: "a finite number",
+      received: value,
+    });
+  }
+}
+
+/** The shared algorithm: checks, closed form, polishing, ascending order into out; returns the count. */
+function solveInto(
+  c3: number,
+  c2: number,
+  c1: number,
+  c0: number,
+  maxPolishSteps: number,
+  out: Float64Array,
+): number {
+  checkCoefficient(0, c3);
+  checkCoefficient(1, c2);
+  checkCoefficient(2, c1);
+  checkCoefficient(3, c0);
   if (!(maxPolishSteps >= 0 && Number.isInteger(maxPolishSteps))) {
     throw new InputError({
       input: "options.maxPolishSteps",
@@ -86,15 +147,17 @@ export function realCubicRoots(
     });
   }
 
-  let raw: number[];
+  const raw = rawScratch;
+  let count: number;
   if (c3 !== 0) {
-    raw = closedFormCubic(c2 / c3, c1 / c3, c0 / c3);
+    count = closedFormCubic(c2 / c3, c1 / c3, c0 / c3, raw);
   } else if (c2 !== 0) {
-    raw = quadraticRoots(c2, c1, c0);
+    count = quadraticRoots(c2, c1, c0, raw, 0);
   } else if (c1 !== 0) {
-    raw = [-c0 / c1];
+    raw[0] = -c0 / c1;
+    count = 1;
   } else if (c0 !== 0) {
-    raw = [];
+    count = 0;
   } else {
     throw new InputError({
       input: "coefficients (c3, c2, c1, c0)",
@@ -105,13 +168,12 @@ export function realCubicRoots(
   }
 
   let iterations = 0;
-  const roots: number[] = [];
-  for (let i = 0; i < raw.length; i++) {
+  for (let i = 0; i < count; i++) {
     let x = raw[i];
     // A polishing step may not travel more than half-way to another root, so that Newton near
     // a (nearly) double root cannot jump to a different root.
     let nearest = Infinity;
-    for (let j = 0; j < raw.length; j++) {
+    for (let j = 0; j < count; j++) {
       if (j !== i && raw[j] !== x) nearest = Math.min(nearest, Math.abs(raw[j] - x));
     }
     let px = horner(c3, c2, c1, c0, x);
@@ -129,11 +191,16 @@ export function realCubicRoots(
       px = pNew;
       if (Math.abs(step) <= 2 * EPS * Math.abs(x)) break;
     }
-    roots.push(x);
+    // insertion sort into out (at most 3 roots): ascending without a comparator closure
+    let j = i;
+    while (j > 0 && out[j - 1] > x) {
+      out[j] = out[j - 1];
+      j--;
+    }
+    out[j] = x;
   }
-  roots.sort((a, b) => a - b);
-  const residuals = roots.map((x) => horner(c3, c2, c1, c0, x));
-  return { roots, residuals, iterations };
+  polishStepsOfLastSolve = iterations;
+  return count;
 }
 
 function horner(c3: number, c2: number, c1: number, c0: number, x: number): number {
@@ -145,12 +212,20 @@ function powerOfTwoAtLeast(v: number): number {
   return Math.pow(2, Math.ceil(Math.log2(v)));
 }
 
-/** Roots of the monic cubic x^3 + a x^2 + b x + c (Numerical Recipes 3rd ed. §5.6). */
-function closedFormCubic(a: number, b: number, c: number): number[] {
+/**
+ * Roots of the monic cubic x^3 + a x^2 + b x + c (Numerical Recipes 3rd ed. §5.6), written into
+ * out[0 ..]; returns their number (1 or 3, or 1 to 3 after deflation).
+ */
+function closedFormCubic(a: number, b: number, c: number, out: Float64Array): number {
   // Rescale x = s y with s a power of two so that |a'|, |b'|, |c'| <= 1: exact, and keeps
   // a^3, R^2, Q^3 far from overflow and underflow.
   const size = Math.max(Math.abs(a), Math.sqrt(Math.abs(b)), Math.cbrt(Math.abs(c)));
-  if (size === 0) return [0, 0, 0];
+  if (size === 0) {
+    out[0] = 0;
+    out[1] = 0;
+    out[2] = 0;
+    return 3;
+  }
   const s = powerOfTwoAtLeast(size);
   const A = a / s;
   const B = b / (s * s);
@@ -164,35 +239,36 @@ function closedFormCubic(a: number, b: number, c: number): number[] {
   // Rounding in R^2 - Q^3 is a few eps times the larger of the two terms: inside that band the
   // closed form cannot tell a double root from two close roots or a close complex pair.
   const band = 16 * EPS * Math.max(R2, Math.abs(Q3), 16 * EPS * EPS);
-  let threeReal: number[];
+  // y1: the largest-magnitude of the three real closed-form roots
+  let y1: number;
   if (Math.abs(R2 - Q3) <= band && Q >= 0) {
+    // roots -2 sgn sqrt(Q) - shift and (twice) sgn sqrt(Q) - shift
     const sq = Math.sqrt(Q);
     const sgn = R >= 0 ? 1 : -1;
-    threeReal = [-2 * sgn * sq - shift, sgn * sq - shift, sgn * sq - shift];
+    y1 = largestMagnitude(-2 * sgn * sq - shift, sgn * sq - shift, sgn * sq - shift);
   } else if (R2 < Q3) {
     // Three distinct real roots, eqs. 5.6.11-5.6.12.
     const sq = Math.sqrt(Q);
     const ratio = Math.max(-1, Math.min(1, R / (sq * sq * sq)));
     const theta = Math.acos(ratio);
-    threeReal = [
+    y1 = largestMagnitude(
       -2 * sq * Math.cos(theta / 3) - shift,
       -2 * sq * Math.cos((theta + 2 * Math.PI) / 3) - shift,
       -2 * sq * Math.cos((theta - 2 * Math.PI) / 3) - shift,
-    ];
+    );
   } else {
     // One real root, eqs. 5.6.15-5.6.18 (sign chosen so |R| + sqrt(...) does not cancel).
     const sgn = R >= 0 ? 1 : -1;
     const Acard = -sgn * Math.cbrt(Math.abs(R) + Math.sqrt(R2 - Q3));
     const Bcard = Acard === 0 ? 0 : Q / Acard;
-    return [(Acard + Bcard - shift) * s];
+    out[0] = (Acard + Bcard - shift) * s;
+    return 1;
   }
   // The closed form gives each root with an ABSOLUTE error of a few eps times the largest root:
   // small roots lose relative accuracy and close pairs may be blurred into a double root. Keep
   // the largest-magnitude root (polished), and get the other two from the deflated quadratic
   // y^2 - S y + P with P = -C / y1 (product of the other two roots) and S = (B - P) / y1 (from
   // B = y1 (y2 + y3) + y2 y3), which avoids the cancellation of the sum -A - y1.
-  let y1 = threeReal[0];
-  for (const y of threeReal) if (Math.abs(y) > Math.abs(y1)) y1 = y;
   for (let k = 0; k < 4; k++) {
     const p = ((y1 + A) * y1 + B) * y1 + C;
     const dp = (3 * y1 + 2 * A) * y1 + B;
@@ -206,14 +282,37 @@ function closedFormCubic(a: number, b: number, c: number): number[] {
   const S = (B - P) / y1;
   // P and S are accurate, so the quadratic's own verdict (complex pair, double or two distinct
   // roots) is trusted over the closed form's near-zero discriminant.
-  const pair = quadraticRoots(1, -S, P);
-  return [y1, ...pair].map((y) => y * s);
+  const pairCount = quadraticRoots(1, -S, P, out, 1);
+  out[0] = y1 * s;
+  for (let k = 1; k <= pairCount; k++) out[k] *= s;
+  return 1 + pairCount;
 }
 
-/** Real roots of a x^2 + b x + c with a != 0 (Numerical Recipes 3rd ed. eqs. 5.6.4-5.6.5). */
-function quadraticRoots(a: number, b: number, c: number): number[] {
+/** The first of three numbers with the largest magnitude (ties keep the earlier one). */
+function largestMagnitude(y0: number, y1: number, y2: number): number {
+  let best = y0;
+  if (Math.abs(y1) > Math.abs(best)) best = y1;
+  if (Math.abs(y2) > Math.abs(best)) best = y2;
+  return best;
+}
+
+/**
+ * Real roots of a x^2 + b x + c with a != 0 (Numerical Recipes 3rd ed. eqs. 5.6.4-5.6.5), written
+ * into out[offset ..]; returns their number (0 or 2, a double root listed twice).
+ */
+function quadraticRoots(
+  a: number,
+  b: number,
+  c: number,
+  out: Float64Array,
+  offset: number,
+): number {
   const size = Math.max(Math.abs(b), Math.sqrt(Math.abs(a * c)));
-  if (size === 0) return [0, 0];
+  if (size === 0) {
+    out[offset] = 0;
+    out[offset + 1] = 0;
+    return 2;
+  }
   // Scale b and the product a c to order one to avoid overflow in b^2 - 4ac.
   const bs = b / size;
   const acs = a / size;
@@ -222,10 +321,18 @@ function quadraticRoots(a: number, b: number, c: number): number[] {
   const band = 8 * EPS * Math.max(bs * bs, Math.abs(4 * acs * ccs));
   if (Math.abs(disc) <= band) {
     const r = -b / (2 * a);
-    return [r, r];
+    out[offset] = r;
+    out[offset + 1] = r;
+    return 2;
   }
-  if (disc < 0) return [];
+  if (disc < 0) return 0;
   const q = -0.5 * (bs + (bs >= 0 ? 1 : -1) * Math.sqrt(disc)) * size;
-  if (q === 0) return [0, 0];
-  return [q / a, c / q];
+  if (q === 0) {
+    out[offset] = 0;
+    out[offset + 1] = 0;
+    return 2;
+  }
+  out[offset] = q / a;
+  out[offset + 1] = c / q;
+  return 2;
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { realCubicRoots } from "../../../kernel-lib/src/numerics/cubicRoots.js";
+import { realCubicRoots, realCubicRootsInto } from "../../../kernel-lib/src/numerics/cubicRoots.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
 
 /** Relative difference, guarded for zero. */
@@ -209,5 +209,40 @@ describe("realCubicRoots", () => {
       ),
       { numRuns: 1000 },
     );
+  });
+});
+
+describe("realCubicRootsInto (allocation-free form)", () => {
+  it("solves (x - 1)(x - 2)(x - 3) = x^3 - 6x^2 + 11x - 6 (closed form: roots 1, 2, 3)", () => {
+    const out = new Float64Array(3);
+    expect(realCubicRootsInto(1, -6, 11, -6, out)).toBe(3);
+    // factored form above, so the roots are exact; polishing leaves them within a few ulps
+    for (let i = 0; i < 3; i++) expect(rel(out[i], i + 1)).toBeLessThan(4 * Number.EPSILON);
+  });
+
+  it("returns the very same roots as realCubicRoots for random cubics, quadratics and lines", () => {
+    const coefficient = fc.oneof(
+      fc.constant(0),
+      fc.double({ min: -1e6, max: 1e6, noNaN: true, noDefaultInfinity: true }),
+    );
+    const out = new Float64Array(3);
+    fc.assert(
+      fc.property(coefficient, coefficient, coefficient, coefficient, (c3, c2, c1, c0) => {
+        if (c3 === 0 && c2 === 0 && c1 === 0 && c0 === 0) return;
+        const count = realCubicRootsInto(c3, c2, c1, c0, out);
+        const { roots } = realCubicRoots(c3, c2, c1, c0);
+        // one shared algorithm, so identical numbers (not merely close ones)
+        expect(Array.from(out.subarray(0, count))).toEqual(roots);
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
+  it("rejects NaN or infinite coefficients, the zero polynomial and a short output array", () => {
+    const out = new Float64Array(3);
+    expect(() => realCubicRootsInto(1, NaN, 0, 0, out)).toThrow(InputError);
+    expect(() => realCubicRootsInto(1, 0, 0, -Infinity, out)).toThrow(InputError);
+    expect(() => realCubicRootsInto(0, 0, 0, 0, out)).toThrow(InputError);
+    expect(() => realCubicRootsInto(1, -6, 11, -6, new Float64Array(2))).toThrow(InputError);
   });
 });

@@ -18,7 +18,7 @@
  */
 import { R } from "../../constants.js";
 import { OutOfRangeError, type ResultWarning } from "../../errors.js";
-import { realCubicRoots } from "../../numerics/cubicRoots.js";
+import { realCubicRootsInto } from "../../numerics/cubicRoots.js";
 import { HyperDual } from "../../numerics/hyperDual.js";
 import type { ModelWithPressure } from "../pressureFunction.js";
 import type {
@@ -31,6 +31,9 @@ import { checkModelComponents, type ModelComponent } from "../modelComponent.js"
 import { resolveInteractions, type InteractionMatrix } from "../interaction/interactionTable.js";
 import { alphaSlope, evaluatePsi, type PsiValues } from "./alphaFunctions.js";
 import { CUBIC_FAMILIES, type CubicFamily, type CubicModelId } from "./cubicFamilies.js";
+
+// Z roots of the current densityRoots call, reused (read out before the next call: no allocation)
+const Z_ROOTS = new Float64Array(3);
 
 /** Options of {@link createCubicModel}. */
 export interface CubicModelOptions {
@@ -364,15 +367,17 @@ class CubicModelImpl implements CubicModel {
     const B = (this.mixB * pressurePa) / RT;
     const u = this.delta1 + this.delta2;
     const w = this.delta1 * this.delta2;
-    const { roots } = realCubicRoots(
+    const roots = Z_ROOTS;
+    const count = realCubicRootsInto(
       1,
       -(1 + B - u * B),
       A + w * B * B - u * B - u * B * B,
       -(A * B + w * B * B + w * B * B * B),
+      roots,
     );
     const out: number[] = [];
     // ascending Z means descending density; return densities ascending
-    for (let k = roots.length - 1; k >= 0; k--) {
+    for (let k = count - 1; k >= 0; k--) {
       const Z = roots[k];
       if (Z > B) {
         const rho = pressurePa / (Z * RT);
