@@ -252,7 +252,16 @@ export function departuresFromPvt(
     (g) => new Set(g.members.map((i) => (T[i] as number).toPrecision(10))).size >= minT,
   );
   const routeSetAside: SetAsidePoint[] = [];
-  // Outlier screening on the isochores (needs stated uncertainties to judge a residual).
+  // Outlier screening on the isochores (needs stated uncertainties to judge a residual). The
+  // statistic is the leave-one-out (deleted, externally studentized) prediction residual
+  // (Belsley, Kuh & Welsch, Regression Diagnostics, 1980, §2.1; Cook & Weisberg, Residuals and
+  // Influence in Regression, 1982, §2.2): each point against the isochore fitted to the OTHER
+  // points, order chosen again by AICc without it, z = (P_i - P_(i)) / sqrt(sigma_i^2 + u(P_(i))^2 +
+  // u_order^2), u_order the change of P_(i) when that order is raised by one.
+  // The ordinary residual of the fit through all points let a slip at the end of an isochore hide:
+  // AICc raised the order to follow it (the hat-matrix form e_i / (sigma_i sqrt(1 - h_ii)) at that
+  // inflated order did not help either: it spread the slip over the neighbours and named the wrong
+  // point on the demo campaign).
   const threshold = options.outlierThreshold ?? 4.5;
   const willUseIsochores =
     options.route === "isochores" || ((options.route ?? "auto") === "auto" && groups.length >= 3);
@@ -264,15 +273,35 @@ export function departuresFromPvt(
       groups.forEach((g, gi) => {
         const distinct = new Set(g.members.map((i) => (T[i] as number).toPrecision(10))).size;
         if (distinct < 4) return; // too few points to judge one of them
-        const f = fitIsochore(
-          g.densityMolPerM3,
-          g.members.map((i) => T[i] as number),
-          g.members.map((i) => P0[i] as number),
-          g.members.map((i) => sig[i] as number),
-          options.isochore,
-        );
-        f.residualsPa.forEach((r, j) => {
-          const z = Math.abs(r) / (sig[g.members[j] as number] as number);
+        g.members.forEach((i, j) => {
+          const others = g.members.filter((_, q) => q !== j);
+          if (new Set(others.map((q) => (T[q] as number).toPrecision(10))).size < 3) return;
+          const f = fitIsochore(
+            g.densityMolPerM3,
+            others.map((q) => T[q] as number),
+            others.map((q) => P0[q] as number),
+            others.map((q) => sig[q] as number),
+            options.isochore,
+          );
+          const e = f.evaluate(T[i] as number);
+          // Fit-order part of the prediction error (an end point is an extrapolation of the
+          // others, where a too-low order shows): the change when the order is raised by one.
+          const nOthers = new Set(others.map((q) => (T[q] as number).toPrecision(10))).size;
+          const uOrder =
+            f.order + 1 <= nOthers - 1 && options.isochore?.order === undefined
+              ? Math.abs(
+                  fitIsochore(
+                    g.densityMolPerM3,
+                    others.map((q) => T[q] as number),
+                    others.map((q) => P0[q] as number),
+                    others.map((q) => sig[q] as number),
+                    { ...options.isochore, order: f.order + 1 },
+                  ).evaluate(T[i] as number).pressurePa - e.pressurePa,
+                )
+              : 0;
+          const z =
+            Math.abs((P0[i] as number) - e.pressurePa) /
+            Math.sqrt((sig[i] as number) ** 2 + e.uPressurePa ** 2 + uOrder ** 2);
           if (z > threshold && (!worst || z > worst.z)) worst = { g: gi, j, z };
         });
       });
@@ -287,7 +316,7 @@ export function departuresFromPvt(
         temperatureK: p.temperatureK,
         densityMolPerM3: p.densityMolPerM3,
         pressurePa: p.pressurePa,
-        reason: `outlier: residual ${w.z.toFixed(1)} u(P) on the isochore at ${grp.densityMolPerM3.toPrecision(6)} mol/m3 (threshold ${threshold}); left out of the isochore and the global surface fits`,
+        reason: `outlier: leave-one-out residual ${w.z.toFixed(1)} u(P) on the isochore at ${grp.densityMolPerM3.toPrecision(6)} mol/m3 (threshold ${threshold}); left out of the isochore and the global surface fits`,
       });
     }
     if (routeSetAside.length > 0) {

@@ -27,7 +27,7 @@ export interface SetAsidePoint {
   readonly temperatureK: number;
   readonly densityMolPerM3: number;
   readonly pressurePa: number;
-  /** e.g. "repeat of line 12 with the same values", "outlier: residual 6.1 u(P) on isochore ...". */
+  /** e.g. "repeat of line 12 with the same values", "outlier: leave-one-out residual 6.1 u(P) on the isochore ...". */
   readonly reason: string;
 }
 

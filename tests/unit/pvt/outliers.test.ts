@@ -27,7 +27,7 @@ describe("points set aside by the route are listed with the reason", () => {
     const r = departuresFromPvt({ ...ds, points }, { monteCarloSamples: 0 });
     expect(r.setAside).toHaveLength(1);
     expect(r.setAside[0]?.line).toBe(bad.line);
-    expect(r.setAside[0]?.reason).toMatch(/^outlier: residual \d+\.\d u\(P\)/);
+    expect(r.setAside[0]?.reason).toMatch(/^outlier: leave-one-out residual \d+\.\d u\(P\)/);
     expect(r.diagnostics.some((d) => d.code === "set-aside" && d.severity === "warning")).toBe(
       true,
     );
@@ -91,6 +91,17 @@ describe("typing slips in the demo campaign", () => {
     // listed once: in setAside and in one set-aside diagnostic, not again as "surface fit only"
     const mentions = r.diagnostics.filter((d) => d.message.includes(`line ${line} `));
     expect(mentions).toHaveLength(1);
+  });
+
+  it("catches a slip at the end of an isochore that a high-order fit would follow", () => {
+    // 34.94634 bar typed 34.49634 at 36.871 degC, the coldest point of the 72.0597 kg/m3 isochore
+    const text = slip("36.871,72.0597,34.94634", "36.871,72.0597,34.49634");
+    const r = routeOn(text);
+    const line = lineOf(text, "36.871,72.0597,34.49634,0.010,0.0144,0.00549");
+    expect(r.setAside.map((s) => s.line)).toEqual([line]);
+    expect(r.setAside[0]?.reason).toMatch(/^outlier: leave-one-out residual \d+\.\d u\(P\)/);
+    const z = Number(/residual (\d+\.\d) u/.exec(r.setAside[0]?.reason ?? "")?.[1]);
+    expect(z).toBeGreaterThan(10); // about 80 u(P) raw error; the leave-one-out prediction is uncertain at the end
   });
 
   it("sets nothing aside in the clean demo campaign", () => {
