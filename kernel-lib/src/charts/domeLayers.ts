@@ -161,6 +161,7 @@ export function criticalLayers(
       x: toDisplay(xSI, xAxis.unit),
       y: toDisplay(ySI, yAxis.unit),
       label: "critical point",
+      labelRole: "fixed",
     },
   ];
   const encoding = { x: positionEncoding("x", xAxis), y: positionEncoding("y", yAxis) };

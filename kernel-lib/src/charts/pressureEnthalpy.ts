@@ -9,6 +9,7 @@ import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
 import { criticalLayers, domeLayers, qualityLayers } from "./domeLayers.js";
 import { energyBasis } from "./energyBasis.js";
+import { placeGuideLabels } from "./labelPlacement.js";
 import { INK } from "./theme.js";
 import {
   addDomeWarnings,
@@ -137,7 +138,7 @@ export function pressureEnthalpyChart(
       return {
         label:
           c.label ??
-          `s = ${shortNumber(toDisplay(basis.perBasis(c.entropyJPerMolK), entropyUnit))}`,
+          `s = ${shortNumber(toDisplay(basis.perBasis(c.entropyJPerMolK), entropyUnit))} ${entropyUnit.symbol}`,
         points: checkArray(`isentropes[${i}].points`, c.points).map(toXY),
       };
     }),
@@ -174,7 +175,7 @@ export function pressureEnthalpyChart(
     layers.push(seriesLineLayer(isothermRows, labels, "Isotherm", xAxis, yAxis));
   layers.push(...criticalLayers(critical, criticalH, critical?.pressurePa, xAxis, yAxis));
 
-  return topLevel(
+  const spec = topLevel(
     "pressure-enthalpy",
     "Pressure-enthalpy diagram",
     options,
@@ -188,6 +189,9 @@ export function pressureEnthalpyChart(
     { layer: layers },
     basis.mass ? { molarMassKgPerMol: basis.molarMassKgPerMol } : {},
   );
+  // Isentrope labels: clear of the critical-point label and of each other.
+  placeGuideLabels(spec);
+  return spec;
 }
 
 /** Checks quality values: each strictly between 0 and 1. */

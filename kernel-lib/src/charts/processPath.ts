@@ -17,6 +17,7 @@ import {
   type AxisPlan,
   type BaseChartOptions,
 } from "./specParts.js";
+import { placeGuideLabels } from "./labelPlacement.js";
 import { applyLogTicks } from "./logTicks.js";
 import { INK } from "./theme.js";
 
@@ -115,6 +116,8 @@ export function withProcessPath(spec: ChartSpec, states: readonly ProcessPathSta
   copy.layer = [...(copy.layer as ChartSpec[]), ...(layers as ChartSpec[])];
   // The path may reach beyond the diagram's data: recompute the log-axis ticks over all layers.
   applyLogTicks(copy as Record<string, unknown>, { refresh: true });
+  // Guide labels (isentropes) move away from the path's states and their labels.
+  placeGuideLabels(copy);
   return copy;
 }
 
@@ -188,6 +191,7 @@ function pathLayers(
       step: String(i + 1),
       label: s.label === undefined ? `state ${i + 1}` : String(s.label),
       tag: s.label === undefined ? String(i + 1) : `${i + 1} ${String(s.label)}`,
+      labelRole: "fixed",
     };
   });
   const enc = { x: positionEncoding("x", xAxis), y: positionEncoding("y", yAxis) };

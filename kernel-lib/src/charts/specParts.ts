@@ -16,6 +16,7 @@ import {
   type QuantityKind,
   type UnitChoice,
 } from "./displayUnits.js";
+import { LABEL_FRACTIONS } from "./labelPlacement.js";
 import { applyLogTicks } from "./logTicks.js";
 import {
   DEFAULT_HEIGHT,
@@ -310,10 +311,16 @@ export function guideLineLayers(
     list.push(r);
     bySeries.set(r.series, list);
   }
-  // Neighbouring lines get their labels at different heights (60, 72, 84 % of the line).
+  // Candidate label positions along each line; neighbouring lines start at different heights
+  // (60, 72, 84 % of the line). placeGuideLabels picks the first free one once the chart is built.
   const labels = [...bySeries.values()].map((list, k) => {
-    const r = list[Math.floor((0.6 + 0.12 * (k % 3)) * (list.length - 1))];
-    return { x: r.x, y: r.y, label: r.series };
+    const shift = k % 3;
+    const fractions = [...LABEL_FRACTIONS.slice(shift), ...LABEL_FRACTIONS.slice(0, shift)];
+    const along = fractions.map((f) => {
+      const r = list[Math.floor(f * (list.length - 1))];
+      return [r.x, r.y];
+    });
+    return { x: along[0][0], y: along[0][1], label: list[0].series, labelRole: "guide", along };
   });
   return [
     {

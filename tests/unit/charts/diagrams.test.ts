@@ -67,7 +67,7 @@ describe("pressureEnthalpyChart", () => {
     expect(new Set(values(qualityLine).map((r) => r.series))).toEqual(
       new Set(["q = 0.2", "q = 0.4", "q = 0.6", "q = 0.8"]),
     );
-    expect(layers.some((l) => values(l).some((r) => r.series === "s = 90"))).toBe(true);
+    expect(layers.some((l) => values(l).some((r) => r.series === "s = 90 J/(mol·K)"))).toBe(true);
     expect(layers.some((l) => (l.mark as any).shape === "diamond")).toBe(true);
   });
 
