@@ -63,8 +63,18 @@ export function pressureFromResidual(
  * decides which density root is stable at a given (T, P).
  */
 export function residualGibbsTP(residual: ResidualDerivatives): number {
-  const Z = 1 + residual.aD;
-  return residual.a + residual.aD - (Z > 0 ? Math.log(Z) : NaN);
+  return gibbsOverRTFromLnZ(residual.a, residual.aD, lnZOf(residual.aD));
+}
+
+/** ln Z with Z = 1 + aD; NaN where Z <= 0 (no state at the same T and P exists there). */
+function lnZOf(aD: number): number {
+  const Z = 1 + aD;
+  return Z > 0 ? Math.log(Z) : NaN;
+}
+
+// the formula of residualGibbsTP with ln Z passed in, so residualProperties takes one logarithm
+function gibbsOverRTFromLnZ(a: number, aD: number, lnZ: number): number {
+  return a + aD - lnZ;
 }
 
 /** (dP/drho)_T in Pa m3/mol from the derivatives: R T (1 + 2 aD + aDD). */
@@ -94,8 +104,7 @@ export function residualProperties(
   gasConstant: number = R_CODATA,
 ): ResidualSets {
   const RT = gasConstant * temperatureK;
-  const Z = 1 + d.aD;
-  const lnZ = Z > 0 ? Math.log(Z) : NaN;
+  const lnZ = lnZOf(d.aD);
   const a = RT * d.a;
   const u = -RT * d.aT;
   const s = -gasConstant * (d.a + d.aT);
@@ -105,7 +114,13 @@ export function residualProperties(
   if (d.dnA) for (let i = 0; i < d.dnA.length; i++) lnPhi.push(d.dnA[i] - lnZ);
   return {
     TV: { h, s, u, a, g },
-    TP: { h, s: s + gasConstant * lnZ, u, a: a - RT * lnZ, g: RT * residualGibbsTP(d) },
+    TP: {
+      h,
+      s: s + gasConstant * lnZ,
+      u,
+      a: a - RT * lnZ,
+      g: RT * gibbsOverRTFromLnZ(d.a, d.aD, lnZ),
+    },
     lnZ,
     lnPhi,
   };
@@ -165,7 +180,8 @@ export function assembleState(input: StateInputs): FluidState {
   const a = ig.a + RT * lnPressureShift + aTV;
   const g = ig.g + RT * lnPressureShift + gTV;
   const lnPhi = res.lnPhi;
-  for (const wg of ig.warnings) warnings.push(wg);
+  // indexed loop: for-of over the (usually empty, frozen) ideal-gas list showed in the profile
+  for (let i = 0; i < ig.warnings.length; i++) warnings.push(ig.warnings[i]);
   return {
     temperatureK: T,
     pressurePa: P,
