@@ -178,11 +178,12 @@ export function propertySurfaceChart(
           title: vAxis.title,
           scale: { scheme: HEATMAP_SCHEME },
         },
+        // Same field and scheme as the fill, so Vega-Lite merges both into the one colour-bar
+        // legend; `legend: null` here would remove that merged legend too.
         stroke: {
           field: "value",
           type: "quantitative",
           scale: { scheme: HEATMAP_SCHEME },
-          legend: null,
         },
         tooltip: [{ field: "value", type: "quantitative", title: vAxis.title, format: ".5~g" }],
       },

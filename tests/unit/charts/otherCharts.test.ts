@@ -193,6 +193,13 @@ describe("propertySurfaceChart", () => {
     expect(chartMeta(spec)!.warnings.join(" ")).toMatch(/1 grid cell/);
   });
 
+  it("the compiled chart has a colour-bar legend titled with the quantity and unit", async () => {
+    const { vega } = await compileSpec(propertySurfaceChart(data, { levels: 6 }));
+    const legends = (vega as { legends?: { title?: string; fill?: string }[] }).legends ?? [];
+    expect(legends.map((l) => l.title)).toEqual(["Molar density ρ / kmol/m³"]);
+    expect(legends[0].fill).toBeDefined();
+  });
+
   it("explicit isoline levels in SI land where the field has that value", () => {
     const spec = propertySurfaceChart(
       {
