@@ -29,6 +29,8 @@ export interface IsochoreFit {
   /** The isochore's density, mol/m3. */
   readonly densityMolPerM3: number;
   readonly order: number;
+  /** Number of distinct temperatures on the isochore (the highest admissible order is one less). */
+  readonly distinctTemperatures: number;
   readonly minTemperatureK: number;
   readonly maxTemperatureK: number;
   readonly diagnostics: FitDiagnostics;
@@ -39,6 +41,11 @@ export interface IsochoreFit {
   /** P (Pa) and dP/dT (Pa/K) at T, with standard uncertainties. */
   /** (d2P/dT2)_rho at T, Pa/K2, with its standard uncertainty (0 for a straight line). */
   curvature(temperatureK: number): { curvaturePaPerK2: number; uCurvaturePaPerK2: number };
+  /**
+   * The same data fitted again with other options (e.g. `{ order: this.order + 1 }`), for
+   * estimates of the fit-order (model) error.
+   */
+  refit(options: IsochoreFitOptions): IsochoreFit;
   evaluate(temperatureK: number): {
     pressurePa: number;
     slopePaPerK: number;
@@ -117,11 +124,15 @@ export function fitIsochore(
   return {
     densityMolPerM3,
     order,
+    distinctTemperatures: distinct,
     minTemperatureK: tMin,
     maxTemperatureK: tMax,
     diagnostics,
     residualsPa: fit.residuals,
     sigmaPa: usedSigma,
+    refit(other: IsochoreFitOptions) {
+      return fitIsochore(densityMolPerM3, temperaturesK, pressuresPa, sigmaPa, other);
+    },
     evaluate(temperatureK: number) {
       const x = (temperatureK - mid) / half;
       const gP = c.map((_, j) => x ** j);

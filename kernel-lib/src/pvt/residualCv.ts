@@ -11,6 +11,17 @@
  * curvature comes from a different isochore fit, so the node errors are independent and the
  * standard uncertainty is propagated linearly through the (linear) bridge + quadrature map.
  * Needs isochore orders >= 2 (a straight line has no curvature).
+ *
+ * Fit-order (model) error: a curvature is a second derivative of a polynomial whose order AICc chose
+ * for P, not for d2P/dT2; near the critical point, where (d2P/dT2)_rho grows fast towards low T, a
+ * too-low order misses it at the cold end of the range, far outside the propagated uncertainty
+ * (demo campaign, CO2 at 310 K: -18.6 u). As in departuresFromPvt (PvtState.method), every isochore
+ * is refitted with its order raised by one and by two (where admissible; lowered by one, not below 2,
+ * at the highest admissible order) and the larger change of cv_res is added in quadrature as a
+ * method error (one order up alone left -3.3 u at 310 K on the demo campaign). This is an estimate,
+ * not a bound: on synthetic Span-Wagner campaigns 6 K above Tc the cold-end isotherm can still be
+ * 3-4.5 u off. So a warning names every isotherm in the outer temperature interval of any node's
+ * isochore, where the curvature rests on the end of the polynomial.
  */
 import { InputError } from "../errors.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
@@ -23,7 +34,14 @@ export interface ResidualCvProfile {
   densityMolPerM3: number[];
   /** cv - cv_ig at each node, J/(mol K). */
   cvResidualJPerMolK: number[];
+  /** Combined standard uncertainty (propagated and method, in quadrature), J/(mol K). */
   uCvResidualJPerMolK: number[];
+  /** Propagated part (curvature uncertainties of the isochore fits), J/(mol K). */
+  uPropagatedJPerMolK: number[];
+  /** Fit-order (method) part: change of cv_res when the isochore orders change by one, J/(mol K). */
+  methodJPerMolK: number[];
+  /** Warnings (curvature at the end of an isochore's temperature range, no order estimate). */
+  diagnostics: PvtDiagnostic[];
 }
 
 /** cv_res along the isotherm T (a reported isotherm of the isochore route), at its nodes. */
@@ -42,12 +60,12 @@ export function residualCvFromPvt(result: PvtRouteResult, temperatureK: number):
   const T = iso.temperatureK;
   const rho = iso.states.map((s) => s.densityMolPerM3);
   const fits = rho.map((r) => result.isochoreFits.find((f) => f.densityMolPerM3 === r));
+  const integrandFrom = (c: readonly { curvaturePaPerK2: number }[]) =>
+    rho.map((r, k) => (-T * (c[k] as { curvaturePaPerK2: number }).curvaturePaPerK2) / (r * r));
   const curv = fits.map((f) =>
     f ? f.curvature(T) : { curvaturePaPerK2: Number.NaN, uCurvaturePaPerK2: 0 },
   );
-  const f = rho.map(
-    (r, k) => (-T * (curv[k] as { curvaturePaPerK2: number }).curvaturePaPerK2) / (r * r),
-  );
+  const f = integrandFrom(curv);
   const u = rho.map(
     (r, k) => (T * (curv[k] as { uCurvaturePaPerK2: number }).uCurvaturePaPerK2) / (r * r),
   );
@@ -66,11 +84,58 @@ export function residualCvFromPvt(result: PvtRouteResult, temperatureK: number):
       (v, j) => (variance[j] = (variance[j] as number) + (v - (nominal[j] as number)) ** 2),
     );
   }
+  const diagnostics: PvtDiagnostic[] = [];
+  // Fit-order part: every isochore refitted one and two orders up (where admissible; one down at the
+  // highest admissible order), the larger change of cv_res at each node kept.
+  let orderChanged = true;
+  const method = nominal.map(() => 0);
+  for (const step of [1, 2]) {
+    let any = false;
+    const altCurv = fits.map((fit, k) => {
+      if (!fit) return curv[k] as { curvaturePaPerK2: number };
+      const up = fit.order + step <= fit.distinctTemperatures - 1;
+      const other = up ? fit.order + step : fit.order - 1;
+      if (!up && (other < 2 || step > 1)) {
+        if (step === 1) orderChanged = false;
+        return curv[k] as { curvaturePaPerK2: number };
+      }
+      any = true;
+      return fit.refit({ order: other }).curvature(T);
+    });
+    if (!any) continue;
+    integrate(integrandFrom(altCurv)).forEach(
+      (v, j) => (method[j] = Math.max(method[j] as number, Math.abs(v - (nominal[j] as number)))),
+    );
+  }
+  if (!orderChanged) {
+    diagnostics.push({
+      code: "fit-order-estimate",
+      severity: "info",
+      message: `cv_res at ${T.toFixed(2)} K: some isochores have too few temperatures to change their order, so the fit-order error of cv_res is only partly estimated`,
+    });
+  }
+  const edge = fits.filter((fit) => {
+    if (!fit) return false;
+    const span = fit.maxTemperatureK - fit.minTemperatureK;
+    const inner = span / Math.max(fit.distinctTemperatures - 1, 1);
+    return T < fit.minTemperatureK + inner || T > fit.maxTemperatureK - inner;
+  });
+  if (edge.length > 0) {
+    diagnostics.push({
+      code: "curvature-at-range-end",
+      severity: "warning",
+      message: `cv_res at ${T.toFixed(2)} K: ${edge.length} of ${fits.length} isochores were measured from ${T.toFixed(2)} K on one side only (the outer temperature interval of their range), where (d2P/dT2)_rho is poorly determined, more so near the critical point; the method error includes a fit-order estimate but treat these values with caution, or measure beyond ${T.toFixed(2)} K`,
+    });
+  }
+  const uProp = variance.map(Math.sqrt);
   return {
     temperatureK: T,
     densityMolPerM3: rho,
     cvResidualJPerMolK: nominal,
-    uCvResidualJPerMolK: variance.map(Math.sqrt),
+    uCvResidualJPerMolK: uProp.map((v, j) => Math.hypot(v, method[j] as number)),
+    uPropagatedJPerMolK: uProp,
+    methodJPerMolK: method,
+    diagnostics,
   };
 }
 
