@@ -153,12 +153,14 @@ export function propertySurfaceChart(
           skipped++;
           continue;
         }
+        const shown = plotValue(v, vAxis.unit);
         cells.push({
           x: plotValue(xEdges[i], xAxis.unit),
           x2: plotValue(xEdges[i + 1], xAxis.unit),
           y: plotValue(yEdges[j], yAxis.unit),
           y2: plotValue(yEdges[j + 1], yAxis.unit),
-          value: plotValue(v, vAxis.unit),
+          value: shown,
+          shade: shown,
         });
       }
     }
@@ -178,12 +180,13 @@ export function propertySurfaceChart(
           title: vAxis.title,
           scale: { scheme: HEATMAP_SCHEME },
         },
-        // Same field and scheme as the fill, so Vega-Lite merges both into the one colour-bar
-        // legend; `legend: null` here would remove that merged legend too.
+        // The same value under its own field name: on the field "value" Vega-Lite would merge
+        // fill and stroke into one legend, and `legend: null` would then remove the colour bar.
         stroke: {
-          field: "value",
+          field: "shade",
           type: "quantitative",
           scale: { scheme: HEATMAP_SCHEME },
+          legend: null,
         },
         tooltip: [{ field: "value", type: "quantitative", title: vAxis.title, format: ".5~g" }],
       },

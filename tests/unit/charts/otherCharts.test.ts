@@ -195,9 +195,12 @@ describe("propertySurfaceChart", () => {
 
   it("the compiled chart has a colour-bar legend titled with the quantity and unit", async () => {
     const { vega } = await compileSpec(propertySurfaceChart(data, { levels: 6 }));
-    const legends = (vega as { legends?: { title?: string; fill?: string }[] }).legends ?? [];
+    const legends =
+      (vega as { legends?: { title?: string; fill?: string; stroke?: string }[] }).legends ?? [];
     expect(legends.map((l) => l.title)).toEqual(["Molar density ρ / kmol/m³"]);
+    // A colour bar of the fill alone (a legend merged with the stroke draws as symbols).
     expect(legends[0].fill).toBeDefined();
+    expect(legends[0].stroke).toBeUndefined();
   });
 
   it("explicit isoline levels in SI land where the field has that value", () => {

@@ -87,3 +87,40 @@ describe("saturationFromModel on the CO2 reference equation", () => {
     expect(dome.domeWarnings.some((w) => /left out of the dome/.test(w))).toBe(true);
   });
 });
+
+describe("isotherms of a reference equation inside the dome", () => {
+  const co2 = referenceFluid("carbon-dioxide");
+
+  it("run flat at the vapour pressure by default (no wild loop), the loop on request", () => {
+    const [flat] = isothermsFromModel(co2, [270], { points: 150 });
+    const tie = flat.equalArea!;
+    // 270 K: vapour pressure 3.2033 MPa (from memory of Span and Wagner 1996, Table 34).
+    expect(tie.pressurePa / 3.2033e6).toBeCloseTo(1, 3);
+    const inside = flat.points.filter(
+      (p) =>
+        p.densityMolPerM3 > tie.vaporDensityMolPerM3 &&
+        p.densityMolPerM3 < tie.liquidDensityMolPerM3,
+    );
+    expect(inside).toEqual([]);
+    const atTie = flat.points.filter((p) => p.pressurePa === tie.pressurePa);
+    expect(atTie.map((p) => p.densityMolPerM3)).toEqual([
+      tie.vaporDensityMolPerM3,
+      tie.liquidDensityMolPerM3,
+    ]);
+    // Stable branches only: pressure rises with density along the whole isotherm.
+    for (let i = 1; i < flat.points.length; i++) {
+      expect(flat.points[i].pressurePa).toBeGreaterThanOrEqual(flat.points[i - 1].pressurePa);
+    }
+    const [loop] = isothermsFromModel(co2, [270], { points: 150, insideDome: "loop" });
+    const loopInside = loop.points.filter(
+      (p) =>
+        p.densityMolPerM3 > tie.vaporDensityMolPerM3 &&
+        p.densityMolPerM3 < tie.liquidDensityMolPerM3,
+    );
+    expect(loopInside.length).toBeGreaterThan(10);
+    expect(Math.min(...loopInside.map((p) => p.pressurePa))).toBeLessThan(tie.pressurePa);
+    expect(() =>
+      isothermsFromModel(co2, [270], { insideDome: "wiggle" as unknown as "loop" }),
+    ).toThrow(InputError);
+  });
+});

@@ -6,6 +6,7 @@
  * density (1/b of a cubic) or, for a reference equation without one, a liquid density from its
  * lowest temperature (samplingDensityLimit.ts).
  */
+import { InputError } from "../../errors.js";
 import type { ResidualModel } from "../../eos/types.js";
 import { equalAreaIsotherm } from "../../phase/equalAreaIsotherm.js";
 import { locateCriticalPoint } from "../../phase/criticalPoint.js";
@@ -33,6 +34,15 @@ export interface IsothermSampleOptions {
   maxDensityMolPerM3?: number;
   /** Add the equal-area construction below Tc (pure fluids). Default true. */
   equalArea?: boolean;
+  /**
+   * What a subcritical isotherm of a pure fluid shows between the saturated vapour and liquid:
+   * "loop", the model's own van der Waals loop (smooth for a cubic, and what the equal-area lobes
+   * are drawn from), or "tie-line", the stable isotherm running flat at the vapour pressure.
+   * Default: "loop" for a model with a finite maximum density (cubics), "tie-line" otherwise:
+   * multiparameter reference equations are fitted to stable and metastable states, and inside
+   * the spinodals their pressure swings by tens of MPa, which would swamp the chart.
+   */
+  insideDome?: "loop" | "tie-line";
 }
 
 /**
@@ -46,8 +56,18 @@ export function isothermsFromModel(
 ): IsothermChartCurve[] {
   const x = options.x ?? [1];
   const pure = x.length === 1;
+  const insideDome = options.insideDome;
+  if (insideDome !== undefined && insideDome !== "loop" && insideDome !== "tie-line") {
+    throw new InputError({
+      input: "insideDome",
+      unit: "-",
+      validRange: '"loop" or "tie-line"',
+      received: insideDome,
+    });
+  }
+  const showEqualArea = options.equalArea ?? true;
   const Tc =
-    pure && (options.equalArea ?? true)
+    pure && (showEqualArea || insideDome !== "loop")
       ? tryPoint(() => locateCriticalPoint(model))?.temperatureK
       : undefined;
   if (options.maxDensityMolPerM3 !== undefined) {
@@ -76,11 +96,27 @@ export function isothermsFromModel(
     if (Tc !== undefined && T < Tc) {
       const ea = tryPoint(() => equalAreaIsotherm(model, T, { loopPoints: 2, branchPoints: 2 }));
       if (ea) {
-        curve.equalArea = {
+        const tie = {
           pressurePa: ea.tieLine.pressurePa,
           liquidDensityMolPerM3: 1 / ea.tieLine.liquidMolarVolumeM3PerMol,
           vaporDensityMolPerM3: 1 / ea.tieLine.vaporMolarVolumeM3PerMol,
         };
+        if (showEqualArea) curve.equalArea = tie;
+        const flat =
+          (insideDome ?? (Number.isFinite(model.maxDensity(T, x)) ? "loop" : "tie-line")) ===
+          "tie-line";
+        if (flat) {
+          const outside = points.filter(
+            (p) =>
+              p.densityMolPerM3 <= tie.vaporDensityMolPerM3 ||
+              p.densityMolPerM3 >= tie.liquidDensityMolPerM3,
+          );
+          outside.push(
+            { densityMolPerM3: tie.vaporDensityMolPerM3, pressurePa: tie.pressurePa },
+            { densityMolPerM3: tie.liquidDensityMolPerM3, pressurePa: tie.pressurePa },
+          );
+          curve.points = outside.sort((a, b) => a.densityMolPerM3 - b.densityMolPerM3);
+        }
       }
     }
     return curve;
