@@ -20,8 +20,8 @@
  * at the highest admissible order) and the larger change of cv_res is added in quadrature as a
  * method error (one order up alone left -3.3 u at 310 K on the demo campaign). This is an estimate,
  * not a bound: on synthetic Span-Wagner campaigns 6 K above Tc the cold-end isotherm can still be
- * 3-4.5 u off. So a warning names every isotherm in the outer temperature interval of any node's
- * isochore, where the curvature rests on the end of the polynomial.
+ * 3-4.5 u off. So a warning names every isotherm within one temperature step of either end of any
+ * node's isochore, where the curvature rests on the end of the polynomial.
  */
 import { InputError } from "../errors.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
@@ -114,17 +114,20 @@ export function residualCvFromPvt(result: PvtRouteResult, temperatureK: number):
       message: `cv_res at ${T.toFixed(2)} K: some isochores have too few temperatures to change their order, so the fit-order error of cv_res is only partly estimated`,
     });
   }
+  // Within one temperature step (range / (distinct temperatures - 1), +1 % for rounding) of either
+  // end of an isochore's measured range, its curvature comes from the end of the polynomial.
   const edge = fits.filter((fit) => {
     if (!fit) return false;
-    const span = fit.maxTemperatureK - fit.minTemperatureK;
-    const inner = span / Math.max(fit.distinctTemperatures - 1, 1);
-    return T < fit.minTemperatureK + inner || T > fit.maxTemperatureK - inner;
+    const step =
+      (1.01 * (fit.maxTemperatureK - fit.minTemperatureK)) /
+      Math.max(fit.distinctTemperatures - 1, 1);
+    return T <= fit.minTemperatureK + step || T >= fit.maxTemperatureK - step;
   });
   if (edge.length > 0) {
     diagnostics.push({
       code: "curvature-at-range-end",
       severity: "warning",
-      message: `cv_res at ${T.toFixed(2)} K: ${edge.length} of ${fits.length} isochores were measured from ${T.toFixed(2)} K on one side only (the outer temperature interval of their range), where (d2P/dT2)_rho is poorly determined, more so near the critical point; the method error includes a fit-order estimate but treat these values with caution, or measure beyond ${T.toFixed(2)} K`,
+      message: `cv_res at ${T.toFixed(2)} K: ${edge.length} of ${fits.length} isochores end within one temperature step of ${T.toFixed(2)} K, where (d2P/dT2)_rho comes from the end of a polynomial and is poorly determined, more so near the critical point; the uncertainty includes a fit-order estimate, but read these values with caution, or measure further beyond ${T.toFixed(2)} K`,
     });
   }
   const uProp = variance.map(Math.sqrt);
