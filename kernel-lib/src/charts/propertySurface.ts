@@ -144,6 +144,12 @@ export function propertySurfaceChart(
       jKeep.map((j) => ps[j]),
       logP,
     );
+    // The temperature axis spans exactly the cells (a "nice" linear domain would leave empty
+    // strips beside the heat map).
+    xAxis.domain = [
+      plotValue(xEdges[0], xAxis.unit),
+      plotValue(xEdges[xEdges.length - 1], xAxis.unit),
+    ];
     const cells: Record<string, number>[] = [];
     let skipped = 0;
     for (let i = 0; i < iKeep.length; i++) {

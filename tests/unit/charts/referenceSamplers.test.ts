@@ -7,9 +7,12 @@ import { describe, expect, it } from "vitest";
 import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
 import { referenceFluidBinding } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
 import {
+  isobarOnTemperatureEntropy,
+  isothermOnPressureEnthalpy,
   isothermsFromModel,
   saturationFromModel,
 } from "../../../kernel-lib/src/charts/sample/index.js";
+import { linearGrid, logGrid } from "../../../kernel-lib/src/charts/sampling.js";
 import { isothermChart } from "../../../kernel-lib/src/charts/isotherms.js";
 import { temperatureEntropyChart } from "../../../kernel-lib/src/charts/temperatureEntropy.js";
 import { chartMeta } from "../../../kernel-lib/src/charts/chartSpec.js";
@@ -122,5 +125,28 @@ describe("isotherms of a reference equation inside the dome", () => {
     expect(() =>
       isothermsFromModel(co2, [270], { insideDome: "wiggle" as unknown as "loop" }),
     ).toThrow(InputError);
+  });
+});
+
+describe("P-h and T-s lines of CO2 below its triple point", () => {
+  const binding = referenceFluidBinding(referenceFluid("carbon-dioxide"));
+  const flatSteps = (ts: number[]) => ts.filter((t, i) => i > 0 && t === ts[i - 1]).length;
+
+  it("an isobar below the triple-point pressure (0.518 MPa) gets no two-phase step", () => {
+    const low = isobarOnTemperatureEntropy(binding, 1e5, linearGrid(220, 400, 19));
+    expect(flatSteps(low.points.map((p) => p.temperatureK))).toBe(0);
+    const high = isobarOnTemperatureEntropy(binding, 1e6, linearGrid(220, 400, 19));
+    expect(flatSteps(high.points.map((p) => p.temperatureK))).toBe(1);
+    // 1 MPa boils at 233.03 K (from memory of Span and Wagner 1996, Table 34).
+    const tSat = high.points.find(
+      (p, i, all) => i > 0 && p.temperatureK === all[i - 1].temperatureK,
+    )!;
+    expect(tSat.temperatureK).toBeCloseTo(233.03, 1);
+  });
+
+  it("an isotherm below the triple-point temperature gets no two-phase step", () => {
+    const iso = isothermOnPressureEnthalpy(binding, 210, logGrid(1e5, 1e7, 12));
+    const ps = iso.points.map((p) => p.pressurePa);
+    expect(ps.filter((p, i) => i > 0 && p === ps[i - 1]).length).toBe(0);
   });
 });

@@ -2,7 +2,9 @@
  * Lines of a pure fluid for the P-h and T-s diagrams: isotherms and isobars from the stable state
  * at (T, P) (state/stateAtTP) with the saturated liquid and vapour inserted where the line
  * crosses the dome (so it runs flat across the two-phase region), and isentropes from the
- * (P, s) state across the dome (phase/stateAtPressureEntropy).
+ * (P, s) state across the dome (phase/stateAtPressureEntropy). Below a model's published
+ * triple point (pressure for an isobar, temperature for an isotherm) there is no vapour-liquid
+ * equilibrium (the fluid sublimes or melts there), so no flat two-phase part is inserted.
  */
 import { saturationAtPressure, saturationAtTemperature } from "../../phase/saturation.js";
 import { stateAtPressureEntropy } from "../../phase/twoPhaseState.js";
@@ -11,6 +13,7 @@ import type { FluidBinding } from "../../state/types.js";
 import { requireFinite, requirePositive } from "../../validate.js";
 import type { PressureEnthalpyPoint } from "../pressureEnthalpy.js";
 import type { TemperatureEntropyPoint } from "../temperatureEntropy.js";
+import type { SaturationHints } from "../../phase/pureFluid.js";
 import { tryPoint } from "./sampleGuard.js";
 
 const PURE = [1];
@@ -22,7 +25,11 @@ export function isothermOnPressureEnthalpy(
   pressuresPa: readonly number[],
 ): { temperatureK: number; points: PressureEnthalpyPoint[] } {
   requirePositive("temperatureK", temperatureK, "K");
-  const sat = tryPoint(() => saturationAtTemperature(fluid.model, temperatureK));
+  const triple = (fluid.model as SaturationHints).triple;
+  const sat =
+    triple && temperatureK < triple.temperatureK
+      ? undefined
+      : tryPoint(() => saturationAtTemperature(fluid.model, temperatureK));
   const ps = [...pressuresPa].sort((a, b) => a - b);
   const points: PressureEnthalpyPoint[] = [];
   let inserted = false;
@@ -50,7 +57,11 @@ export function isobarOnTemperatureEntropy(
   temperaturesK: readonly number[],
 ): { pressurePa: number; points: TemperatureEntropyPoint[] } {
   requirePositive("pressurePa", pressurePa, "Pa");
-  const sat = tryPoint(() => saturationAtPressure(fluid.model, pressurePa));
+  const triple = (fluid.model as SaturationHints).triple;
+  const sat =
+    triple && pressurePa < triple.pressurePa
+      ? undefined
+      : tryPoint(() => saturationAtPressure(fluid.model, pressurePa));
   const ts = [...temperaturesK].sort((a, b) => a - b);
   const points: TemperatureEntropyPoint[] = [];
   let inserted = false;
