@@ -27,6 +27,13 @@ import { DEFAULT_HEIGHT, DEFAULT_WIDTH, SERIES_COLORS } from "./theme.js";
 export type DepartureProperty = "h" | "s" | "u" | "a" | "g";
 
 const PROPERTIES: readonly DepartureProperty[] = ["h", "s", "u", "a", "g"];
+const SYMBOLS: Record<DepartureProperty, string> = {
+  h: "h − hⁱᵍ",
+  s: "s − sⁱᵍ",
+  u: "u − uⁱᵍ",
+  a: "a − aⁱᵍ",
+  g: "g − gⁱᵍ",
+};
 const NAMES: Record<DepartureProperty, string> = {
   h: "Residual enthalpy h − hⁱᵍ",
   s: "Residual entropy s − sⁱᵍ",
@@ -151,9 +158,12 @@ export function departureChart(
   const panels = (props as DepartureProperty[]).map((prop) => {
     const suffix =
       prop === "h" || prop === "u" ? "" : convention === "TP" ? " (same T, P)" : " (same T, ρ)";
+    // Several panels (narrower by default): the full name goes to the panel title and the axis
+    // keeps the symbol, so a long rotated title cannot outgrow the panel's height.
+    const several = props.length > 1;
     const yAxis = planAxis(
       prop === "s" ? "molarEntropy" : "molarEnergy",
-      NAMES[prop] + suffix,
+      several ? SYMBOLS[prop] : NAMES[prop] + suffix,
       options.units,
     );
     axes.push(yAxis);
@@ -215,7 +225,9 @@ export function departureChart(
       encoding: { y: positionEncoding("zero", yAxis) },
     });
     layers.push(seriesLineLayer(rows, labels, "Isotherm", xAxis, yAxis));
-    return { width, height, layer: layers };
+    return several
+      ? { title: { text: NAMES[prop] + suffix, fontSize: 12 }, width, height, layer: layers }
+      : { width, height, layer: layers };
   });
   const columns = options.columns ?? 2;
   if (!(Number.isInteger(columns) && columns >= 1)) {

@@ -78,6 +78,23 @@ describe("departureChart", () => {
     expect((spec.concat as unknown[]).length).toBe(4);
   });
 
+  it("several panels: full names as panel titles, axis titles short enough for the panel", () => {
+    const height = 240;
+    const spec = departureChart(curves, { property: ["h", "s"], height, width: 300 });
+    const panels = spec.concat as { title: { text: string }; layer: Record<string, unknown>[] }[];
+    expect(panels.map((p) => p.title.text)).toEqual([
+      "Residual enthalpy h − hⁱᵍ",
+      "Residual entropy s − sⁱᵍ (same T, P)",
+    ]);
+    for (const panel of panels) {
+      const title = String(enc(panel.layer.at(-1)!).y.title);
+      // Rotated 11.5 px axis title, about 0.62 em per character (common practice, no source):
+      // it must fit the panel height, else Vega pads the whole chart to make room.
+      expect(0.62 * 11.5 * title.length).toBeLessThan(height);
+    }
+    expect(enc(panels[1].layer.at(-1)!).y.title).toBe("s − sⁱᵍ / J/(mol·K)");
+  });
+
   it("refuses bad input", () => {
     expect(() => departureChart([])).toThrow(InputError);
     expect(() => departureChart(curves, { property: "cp" as any })).toThrow(/property/);
