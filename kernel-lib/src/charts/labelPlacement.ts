@@ -7,7 +7,8 @@
  * line keeps its tooltip). Text boxes are estimated from the font size (0.62 em per character,
  * 0.68 em bold: a bound for the sans-serif fonts of the theme, common practice, no source).
  *
- * Rows take part through a `labelRole` field: "guide" (movable), "fixed" (obstacle text or marker).
+ * Rows take part through a `labelRole` field: "guide" (movable), "fixed" (obstacle text or marker),
+ * "guide-halo" (the halo layer drawn under a guide layer: it follows that layer's placement).
  */
 import type { ChartSpec } from "./chartSpec.js";
 import { DEFAULT_HEIGHT, DEFAULT_WIDTH } from "./theme.js";
@@ -34,11 +35,16 @@ export function placeGuideLabels(spec: ChartSpec): void {
   if (!toPx) return;
   const obstacles: Box[] = [];
   const guides: { layer: Spec; rows: Row[] }[] = [];
+  const halos: Spec[] = [];
   for (const layer of layers as Spec[]) {
     const rows = dataRows(layer);
     const role = rows.find((r) => typeof r["labelRole"] === "string")?.["labelRole"];
     if (role === "guide") {
       guides.push({ layer, rows });
+      continue;
+    }
+    if (role === "guide-halo") {
+      halos.push(layer);
       continue;
     }
     if (role !== "fixed") continue;
@@ -69,6 +75,14 @@ export function placeGuideLabels(spec: ChartSpec): void {
     }
     (layer["data"] as { values: Row[] }).values = kept;
   }
+  // The k-th halo layer sits under the k-th guide layer: same rows, its own role.
+  halos.forEach((halo, k) => {
+    const placed = guides[k] ? dataRows(guides[k].layer) : [];
+    (halo["data"] as { values: Row[] }).values = placed.map((r) => ({
+      ...r,
+      labelRole: "guide-halo",
+    }));
+  });
 }
 
 function dataRows(layer: Spec): Row[] {

@@ -147,13 +147,13 @@ export function pressureEnthalpyChart(
     warnings,
     "s",
   );
-  layers.push(
-    ...guideLineLayers(isentropeRows, xAxis, yAxis, {
-      color: INK.isentrope,
-      strokeDash: [6, 2, 1, 2],
-      tooltipTitle: `Isentrope (${entropyUnit.symbol})`,
-    }),
-  );
+  // Isentrope lines now, their labels after the isotherms (so no isotherm is drawn over them).
+  const [isentropeLines, ...isentropeLabels] = guideLineLayers(isentropeRows, xAxis, yAxis, {
+    color: INK.isentrope,
+    strokeDash: [6, 2, 1, 2],
+    tooltipTitle: `Isentrope (${entropyUnit.symbol})`,
+  });
+  if (isentropeLines) layers.push(isentropeLines);
 
   const labels = isotherms.map((c, i) => {
     requirePositive(`isotherms[${i}].temperatureK`, c.temperatureK, "K");
@@ -173,6 +173,7 @@ export function pressureEnthalpyChart(
   );
   if (isothermRows.length > 0)
     layers.push(seriesLineLayer(isothermRows, labels, "Isotherm", xAxis, yAxis));
+  layers.push(...isentropeLabels);
   layers.push(...criticalLayers(critical, criticalH, critical?.pressurePa, xAxis, yAxis));
 
   const spec = topLevel(

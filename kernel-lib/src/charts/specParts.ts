@@ -19,6 +19,7 @@ import {
 import { LABEL_FRACTIONS } from "./labelPlacement.js";
 import { applyLogTicks } from "./logTicks.js";
 import {
+  INK,
   DEFAULT_HEIGHT,
   DEFAULT_WIDTH,
   SERIES_COLORS,
@@ -322,6 +323,12 @@ export function guideLineLayers(
     });
     return { x: along[0][0], y: along[0][1], label: list[0].series, labelRole: "guide", along };
   });
+  const labelMark = { type: "text", fontSize: 9, align: "left", dx: 3, dy: -4, clip: true };
+  const labelEncoding = {
+    x: positionEncoding("x", xAxis),
+    y: positionEncoding("y", yAxis),
+    text: { field: "label", type: "nominal" },
+  };
   return [
     {
       data: { values: rows },
@@ -340,22 +347,23 @@ export function guideLineLayers(
         tooltip: lineTooltip(xAxis, yAxis, style.tooltipTitle),
       },
     },
+    // A paper-coloured halo under each label keeps it legible where it crosses other lines
+    // (Vega strokes text over its fill, so the halo is a layer of its own, drawn first).
+    {
+      data: { values: labels.map((l) => ({ ...l, labelRole: "guide-halo" })) },
+      mark: {
+        ...labelMark,
+        color: INK.paper,
+        stroke: INK.paper,
+        strokeWidth: 3,
+        strokeOpacity: 0.9,
+      },
+      encoding: labelEncoding,
+    },
     {
       data: { values: labels },
-      mark: {
-        type: "text",
-        color: style.color,
-        fontSize: 9,
-        align: "left",
-        dx: 3,
-        dy: -4,
-        clip: true,
-      },
-      encoding: {
-        x: positionEncoding("x", xAxis),
-        y: positionEncoding("y", yAxis),
-        text: { field: "label", type: "nominal" },
-      },
+      mark: { ...labelMark, color: style.color },
+      encoding: labelEncoding,
     },
   ];
 }
