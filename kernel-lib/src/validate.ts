@@ -41,3 +41,11 @@ export function requireInRange(
   }
   return value;
 }
+
+/** Requires a whole number >= 1 (an iteration or subdivision limit, a count). Unit "-". */
+export function requireCount(input: string, value: number): number {
+  if (!(Number.isInteger(value) && value >= 1)) {
+    throw new InputError({ input, unit: "-", validRange: "an integer >= 1", received: value });
+  }
+  return value;
+}

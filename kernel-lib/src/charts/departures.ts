@@ -5,7 +5,7 @@
  * "Guide to the expression of uncertainty in measurement", section 6.2).
  */
 import { InputError } from "../errors.js";
-import { requirePositive } from "../validate.js";
+import { requireCount, requirePositive } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
 import {
@@ -230,14 +230,7 @@ export function departureChart(
       : { width, height, layer: layers };
   });
   const columns = options.columns ?? 2;
-  if (!(Number.isInteger(columns) && columns >= 1)) {
-    throw new InputError({
-      input: "columns",
-      unit: "-",
-      validRange: "an integer >= 1",
-      received: columns,
-    });
-  }
+  requireCount("columns", columns);
   const body: Record<string, unknown> =
     panels.length === 1
       ? { width, height, layer: panels[0].layer }

@@ -7,6 +7,7 @@
  * width m of the bracket [b, c] satisfies |m| <= tol = 2 eps |b| + tolerance / 2, or f(b) = 0.
  */
 import { InputError, SolverError } from "../errors.js";
+import { requireCount } from "../validate.js";
 
 /** Options of {@link findRootBrent}. */
 export interface BrentOptions {
@@ -70,14 +71,7 @@ export function findRootBrent(
     });
   }
   const maxIterations = options.maxIterations ?? 200;
-  if (!(maxIterations >= 1 && Number.isInteger(maxIterations))) {
-    throw new InputError({
-      input: "options.maxIterations",
-      unit: "-",
-      validRange: "an integer >= 1",
-      received: maxIterations,
-    });
-  }
+  requireCount("options.maxIterations", maxIterations);
 
   const evaluate = (x: number): number => {
     const y = f(x);

@@ -13,6 +13,7 @@
  * QUADPACK's qk15.f); tests check them independently (Legendre roots, polynomial exactness).
  */
 import { InputError, SolverError } from "../errors.js";
+import { requireCount } from "../validate.js";
 
 /** Options of {@link integrateAdaptive}. */
 export interface QuadratureOptions {
@@ -174,14 +175,7 @@ export function integrateAdaptive(
       received: 0,
     });
   }
-  if (!(maxSubdivisions >= 1 && Number.isInteger(maxSubdivisions))) {
-    throw new InputError({
-      input: "options.maxSubdivisions",
-      unit: "-",
-      validRange: "an integer >= 1",
-      received: maxSubdivisions,
-    });
-  }
+  requireCount("options.maxSubdivisions", maxSubdivisions);
   if (a === b) return { value: 0, errorEstimate: 0, evaluations: 0, subdivisions: 1 };
 
   const notFinite = (lo: number, hi: number): never => {

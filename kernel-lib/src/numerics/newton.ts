@@ -11,6 +11,7 @@
  * pivoting).
  */
 import { InputError, SolverError } from "../errors.js";
+import { requireCount } from "../validate.js";
 import { solveLinear } from "./linearSolve.js";
 
 /** Options of {@link solveNewtonSystem}. */
@@ -86,14 +87,7 @@ export function solveNewtonSystem(
     });
   }
   const maxIterations = options.maxIterations ?? 50;
-  if (!(maxIterations >= 1 && Number.isInteger(maxIterations))) {
-    throw new InputError({
-      input: "options.maxIterations",
-      unit: "-",
-      validRange: "an integer >= 1",
-      received: maxIterations,
-    });
-  }
+  requireCount("options.maxIterations", maxIterations);
   const typx = options.typicalX ?? 1;
   const typical = (j: number): number => Math.abs(typeof typx === "number" ? typx : (typx[j] ?? 1));
 

@@ -33,7 +33,7 @@ import {
 } from "../errors.js";
 import type { ResidualModel } from "../eos/types.js";
 import { findRootBrent } from "../numerics/brent.js";
-import { requirePositive } from "../validate.js";
+import { requireCount, requirePositive } from "../validate.js";
 import { locateCriticalPoint, type CriticalPointResult } from "./criticalPoint.js";
 import {
   emptyIsothermPoint,
@@ -358,14 +358,7 @@ function validateOptions(options: SaturationOptions): { tolerance: number; maxIt
     });
   }
   const maxIterations = options.maxIterations ?? 60;
-  if (!(Number.isInteger(maxIterations) && maxIterations >= 1)) {
-    throw new InputError({
-      input: "options.maxIterations",
-      unit: "-",
-      validRange: "an integer >= 1",
-      received: maxIterations,
-    });
-  }
+  requireCount("options.maxIterations", maxIterations);
   return { tolerance, maxIterations };
 }
 
