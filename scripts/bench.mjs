@@ -1,5 +1,6 @@
 // `npm run bench`: bundles kernel-lib/bench/run.ts with esbuild into out/bench/run.js and runs it
-// with node, passing any arguments on (e.g. `npm run bench -- pr-` to select cases).
+// with node, passing any arguments on (e.g. `npm run bench -- pr- --processes 5` to select cases
+// and change the number of fresh processes per case; see run.ts).
 import { spawnSync } from "node:child_process";
 import { createRequire } from "node:module";
 import { fileURLToPath } from "node:url";

@@ -1,9 +1,19 @@
 /**
- * Benchmark harness: each case's function is called in batches; a batch is sized to take about
- * 20 ms, the batch time divided by its calls is one sample, and the reported value is the median of
- * the samples (after warm-up batches, so the JIT has settled). Two clocks: the process CPU time
- * (user + system, process.cpuUsage) is `secondsPerCall`, because on a shared machine wall time
- * also counts the time other processes hold the cores; the wall-clock median is reported beside it.
+ * Benchmark harness for one case in one process. The case's function is called in batches; a batch
+ * is sized to take about `batchSeconds`, and the batch time divided by its calls is one sample.
+ *
+ * Warm-up runs batches until the batch times settle: after `minWarmupSeconds`, the median of the
+ * last `settleWindow` batches must agree with the median of the window before it within
+ * `settleTolerance` (relative); it stops at `maxWarmupSeconds` in any case and says whether it
+ * settled. Then `samples` batches are timed and their medians reported.
+ *
+ * Two clocks: the process CPU time (user + system, process.cpuUsage) is `cpu`, because on a shared
+ * machine wall time also counts the time other processes hold the cores; the wall-clock median is
+ * reported beside it.
+ *
+ * A fresh V8 process can settle into a faster or a slower optimisation state for the same code
+ * (different inlining and deoptimisation histories), and stays there; one process cannot tell the
+ * states apart, so run.ts runs every case in several fresh processes and reports the spread.
  */
 import { performance } from "node:perf_hooks";
 
@@ -17,16 +27,38 @@ export interface BenchCase {
   setup(): () => unknown;
 }
 
-/** Medians of one case, seconds per call. */
+/** Options of {@link measure}. */
+export interface MeasureOptions {
+  /** Timed batches after warm-up. Default 31. */
+  samples?: number;
+  /** Target duration of one batch, s. Default 0.02. */
+  batchSeconds?: number;
+  /** Warm-up always lasts at least this long, s. Default 0.3. */
+  minWarmupSeconds?: number;
+  /** Warm-up stops here even if batch times have not settled, s. Default 3. */
+  maxWarmupSeconds?: number;
+  /** Batches per window in the settling test. Default 5. */
+  settleWindow?: number;
+  /** Relative agreement of consecutive window medians that counts as settled. Default 0.02. */
+  settleTolerance?: number;
+}
+
+/** Timing of one case in one process, seconds per call. */
 export interface Timing {
-  /** Process CPU time per call. */
+  /** Median process CPU time per call. */
   cpu: number;
-  /** Wall-clock time per call. */
+  /** Median wall-clock time per call. */
   wall: number;
   /** Fastest sample of process CPU time per call (least disturbed by other processes). */
   cpuMin: number;
   /** Number of samples behind the medians. */
   samples: number;
+  /** Calls per batch. */
+  callsPerBatch: number;
+  /** Warm-up duration, s (wall clock). */
+  warmupSeconds: number;
+  /** Whether the warm-up ended because batch times settled (false: it hit the cap). */
+  settled: boolean;
 }
 
 function cpuSeconds(): number {
@@ -34,39 +66,74 @@ function cpuSeconds(): number {
   return (u.user + u.system) / 1e6;
 }
 
+/** Median of a list (mean of the middle two for an even count); sorts a copy. */
+export function median(values: readonly number[]): number {
+  const v = [...values].sort((a, b) => a - b);
+  const m = v.length >> 1;
+  return v.length % 2 === 1 ? v[m] : (v[m - 1] + v[m]) / 2;
+}
+
 let sink: unknown;
 
-/** Median seconds per call of `fn` (CPU and wall clock). */
-export function measure(
-  fn: () => unknown,
-  options: { samples?: number; batchSeconds?: number } = {},
-): Timing {
-  const samples = options.samples ?? 15;
+function runBatch(fn: () => unknown, calls: number): void {
+  for (let i = 0; i < calls; i++) sink = fn();
+}
+
+/** Median seconds per call of `fn` (CPU and wall clock), after a warm-up that waits for settling. */
+export function measure(fn: () => unknown, options: MeasureOptions = {}): Timing {
+  const samples = options.samples ?? 31;
   const batchSeconds = options.batchSeconds ?? 0.02;
+  const minWarmup = options.minWarmupSeconds ?? 0.3;
+  const maxWarmup = options.maxWarmupSeconds ?? 3;
+  const window = options.settleWindow ?? 5;
+  const tolerance = options.settleTolerance ?? 0.02;
+  const warmStart = performance.now();
   // size the batch
   let calls = 1;
   for (;;) {
     const t0 = performance.now();
-    for (let i = 0; i < calls; i++) sink = fn();
+    runBatch(fn, calls);
     const dt = (performance.now() - t0) / 1000;
     if (dt >= batchSeconds || calls > 1e8) break;
     calls = Math.max(calls * 2, Math.ceil((calls * batchSeconds) / Math.max(dt, 1e-6)));
   }
-  // warm-up: about 0.3 s, so optimised code is in place and background compilation is done
-  const warmBatches = Math.max(3, Math.ceil(0.3 / batchSeconds));
-  for (let w = 0; w < warmBatches; w++) for (let i = 0; i < calls; i++) sink = fn();
+  // warm-up until two consecutive windows of batch CPU times agree
+  const warm: number[] = [];
+  let settled = false;
+  for (;;) {
+    const c0 = cpuSeconds();
+    runBatch(fn, calls);
+    warm.push(cpuSeconds() - c0);
+    const elapsed = (performance.now() - warmStart) / 1000;
+    if (elapsed >= minWarmup && warm.length >= 2 * window) {
+      const last = median(warm.slice(-window));
+      const before = median(warm.slice(-2 * window, -window));
+      if (Math.abs(last - before) <= tolerance * Math.max(last, before)) {
+        settled = true;
+        break;
+      }
+    }
+    if (elapsed >= maxWarmup) break;
+  }
+  const warmupSeconds = (performance.now() - warmStart) / 1000;
   const wall: number[] = [];
   const cpu: number[] = [];
   for (let s = 0; s < samples; s++) {
     const c0 = cpuSeconds();
     const t0 = performance.now();
-    for (let i = 0; i < calls; i++) sink = fn();
+    runBatch(fn, calls);
     wall.push((performance.now() - t0) / 1000 / calls);
     cpu.push((cpuSeconds() - c0) / calls);
   }
-  const median = (v: number[]) => v.sort((a, b) => a - b)[Math.floor(v.length / 2)];
-  const cpuMin = Math.min(...cpu);
-  return { cpu: median(cpu), wall: median(wall), cpuMin, samples };
+  return {
+    cpu: median(cpu),
+    wall: median(wall),
+    cpuMin: Math.min(...cpu),
+    samples,
+    callsPerBatch: calls,
+    warmupSeconds,
+    settled,
+  };
 }
 
 /** Keeps results alive so the optimiser cannot drop the work. */

@@ -1,7 +1,8 @@
 /**
  * Reference-equation and saturation cases of issue 5: all properties of water (IAPWS-95) at given
  * T and density and at given T and P, water saturation at given T, and Peng-Robinson saturation at
- * given T. Each call varies the state so that no memo or cache answers it.
+ * given T. Each call varies the state so that no memo or cache answers it; the temperatures are
+ * never whole numbers (see engineCases.ts on V8 small integers and deoptimisation).
  */
 import { referenceFluid } from "../../src/eos/multiparameter/referenceFluids.js";
 import {
@@ -18,43 +19,51 @@ export const referenceCases: BenchCase[] = [
   {
     name: "reference-water-Trho",
     description:
-      "IAPWS-95 water, all properties at given T and density (liquid 300-499 K, 900 kg/m3)",
+      "IAPWS-95 water, all properties at given T and density (liquid 300.25-499.25 K, 900 kg/m3)",
     targetSeconds: 3e-6,
     setup() {
       const water = referenceFluid("water");
       let i = 0;
-      return () => referenceStateTRho(water, 300 + (i++ % 200), 900 / MW);
+      return function referenceWaterTRho() {
+        return referenceStateTRho(water, 300.25 + (i++ % 200), 900 / MW);
+      };
     },
   },
   {
     name: "reference-water-TP",
     description:
-      "IAPWS-95 water, all properties at given T and P (5 MPa, 300-599 K: liquid and vapour)",
+      "IAPWS-95 water, all properties at given T and P (5 MPa, 300.25-599.25 K: liquid and vapour)",
     targetSeconds: 15e-6,
     setup() {
       const water = referenceFluid("water");
       let i = 0;
-      return () => referenceStateTP(water, 300 + (i++ % 300), 5e6);
+      return function referenceWaterTP() {
+        return referenceStateTP(water, 300.25 + (i++ % 300), 5e6);
+      };
     },
   },
   {
     name: "saturation-water-T",
-    description: "IAPWS-95 water saturation at given T (300-639 K)",
+    description: "IAPWS-95 water saturation at given T (300.25-639.25 K)",
     targetSeconds: 50e-6,
     setup() {
       const water = referenceFluid("water");
       let i = 0;
-      return () => saturationAtTemperature(water, 300 + (i++ % 340));
+      return function saturationWaterT() {
+        return saturationAtTemperature(water, 300.25 + (i++ % 340));
+      };
     },
   },
   {
     name: "saturation-pr-T",
-    description: "Peng-Robinson propane saturation at given T (200-359 K)",
+    description: "Peng-Robinson propane saturation at given T (200.25-359.25 K)",
     targetSeconds: 20e-6,
     setup() {
       const propane = defineFluid({ components: ["propane"], model: "peng-robinson" });
       let i = 0;
-      return () => saturationAtTemperature(propane.model, 200 + (i++ % 160));
+      return function saturationPrT() {
+        return saturationAtTemperature(propane.model, 200.25 + (i++ % 160));
+      };
     },
   },
 ];
