@@ -17,7 +17,8 @@ import { vegaRuntimeScript } from "../display/vegaRuntime.js";
 import type { CalculationRecordContent, RecordedInput } from "./calculationRecord.js";
 import { basisLinks } from "./calculationRecord.js";
 import { shortMethod, type ModelEntry } from "./modelEntry.js";
-import { CONTENT_SECURITY_POLICY } from "./recordHtml.js";
+import { formatRecordDate } from "./recordDate.js";
+import { recordDocumentHead } from "./recordHtml.js";
 
 const CSS = `
 .isochor-calc { --c-ink:#1f2a33; --c-muted:#5b6770; --c-rule:#c9d1d7; --c-band:#f3f5f6;
@@ -93,13 +94,6 @@ footer.calc-foot { margin-top:2rem; border-top:1px solid #c9d1d7; padding-top:.5
 
 function e(text: string | undefined): string {
   return escapeHtml(text ?? "");
-}
-
-function formatDate(date: Date): string {
-  return date
-    .toISOString()
-    .replace("T", " ")
-    .replace(/\.\d+Z$/, " UTC");
 }
 
 /** A number in full, to 10 significant figures without trailing zeros (inputs, ranges, k_ij). */
@@ -212,7 +206,7 @@ export function calculationRecordFragment(c: CalculationRecordContent): string {
   const env = c.environment;
   const facts: string[] = [];
   const fact = (k: string, v: string) => facts.push(`<dt>${e(k)}</dt><dd>${v}</dd>`);
-  fact("Prepared", formatDate(c.createdAt));
+  fact("Prepared", formatRecordDate(c.createdAt));
   if (c.author !== undefined) fact("By", e(c.author));
   if (c.site !== undefined) fact("Site", e(c.site));
   fact("isochor", e(env.isochorVersion));
@@ -304,7 +298,7 @@ export function calculationRecordFragment(c: CalculationRecordContent): string {
         `<dt>Git commit</dt><dd><code>${e(env.gitCommit)}</code>${env.gitDirty ? " (working tree had uncommitted changes)" : ""}</dd>` +
         `<dt>Node</dt><dd>${e(env.nodeVersion)}</dd>` +
         `<dt>tslab</dt><dd>${e(env.tslabVersion)} (TypeScript ${e(env.typescriptVersion)})</dd>` +
-        `<dt>Prepared</dt><dd>${formatDate(c.createdAt)}</dd></dl>`,
+        `<dt>Prepared</dt><dd>${formatRecordDate(c.createdAt)}</dd></dl>`,
     ),
   );
   return (
@@ -324,19 +318,13 @@ export function calculationRecordPiece(html: string): string {
 /** The record as a standalone HTML document: charts live from the inline runtime, no network. */
 export function calculationRecordDocument(c: CalculationRecordContent): string {
   const hasCharts = c.items.some((i) => i.kind === "chart");
-  return `<!doctype html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}">
-<meta name="generator" content="isochor ${e(c.environment.isochorVersion)} (calculation record)">
-<title>${e(c.title)} - calculation record</title>
-<style>${PAGE_CSS}</style>
-${hasCharts ? vegaRuntimeScript() : ""}
-</head>
-<body>
-${calculationRecordFragment(c)}
+  return `${recordDocumentHead({
+    isochorVersion: c.environment.isochorVersion,
+    generatedBy: "calculation record",
+    title: c.title,
+    css: PAGE_CSS,
+    headScripts: hasCharts ? vegaRuntimeScript() : "",
+  })}${calculationRecordFragment(c)}
 <footer class="calc-foot">Calculation record ${e(c.anchor)} written by isochor ${e(c.environment.isochorVersion)}. Charts are drawn from data embedded in this page; nothing is loaded from the network. A Markdown copy of this record has the same content without the charts.</footer>
 </body>
 </html>

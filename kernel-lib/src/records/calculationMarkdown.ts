@@ -10,6 +10,7 @@
 import type { CalculationRecordContent } from "./calculationRecord.js";
 import { basisText } from "./calculationRecord.js";
 import { shortMethod } from "./modelEntry.js";
+import { formatRecordDate } from "./recordDate.js";
 
 /** Escapes text for Markdown inline content, on one line. */
 export function escapeMarkdown(text: string): string {
@@ -46,13 +47,6 @@ function withUnit(value: string, unit: string): string {
   return unit === "" || unit === "\\-" || unit === "-" ? value : `${value} ${unit}`;
 }
 
-function formatDate(date: Date): string {
-  return date
-    .toISOString()
-    .replace("T", " ")
-    .replace(/\.\d+Z$/, " UTC");
-}
-
 /** The record as Markdown text. */
 export function calculationRecordMarkdown(c: CalculationRecordContent): string {
   const m = escapeMarkdown;
@@ -60,7 +54,7 @@ export function calculationRecordMarkdown(c: CalculationRecordContent): string {
   const out: string[] = [];
   out.push(`# Calculation record: ${m(c.title)}`, "");
   const facts = [
-    `Prepared ${formatDate(c.createdAt)}`,
+    `Prepared ${formatRecordDate(c.createdAt)}`,
     c.author !== undefined ? `by ${m(c.author)}` : undefined,
     c.site !== undefined ? `site: ${m(c.site)}` : undefined,
     `isochor ${m(env.isochorVersion)}, commit ${m(env.gitCommit)}${env.gitDirty ? " with local changes" : ""}`,
@@ -168,7 +162,7 @@ export function calculationRecordMarkdown(c: CalculationRecordContent): string {
     `- isochor ${m(env.isochorVersion)}`,
     `- git commit ${m(env.gitCommit)}${env.gitDirty ? " (working tree had uncommitted changes)" : ""}`,
     `- Node ${m(env.nodeVersion)}; tslab ${m(env.tslabVersion)} (TypeScript ${m(env.typescriptVersion)})`,
-    `- prepared ${formatDate(c.createdAt)}`,
+    `- prepared ${formatRecordDate(c.createdAt)}`,
     "",
   );
   return out.join("\n");

@@ -17,6 +17,7 @@ import { escapeHtml } from "../display/escapeHtml.js";
 import { RUNTIME_MARKER_ATTRIBUTE } from "../display/vegaRuntime.js";
 import type { RunEnvironment } from "./environment.js";
 import { renderMarkdown } from "./markdown.js";
+import { formatRecordDate } from "./recordDate.js";
 import type { NotebookCell, NotebookOutput } from "./notebookFormat.js";
 import { joinText } from "./notebookFormat.js";
 
@@ -72,6 +73,34 @@ export const CONTENT_SECURITY_POLICY = [
   "base-uri 'none'",
 ].join("; ");
 
+/**
+ * A record document from its doctype to the opening `<body>` (with the newline after it): the
+ * CONTENT_SECURITY_POLICY, a generator tag "isochor <version> (<generatedBy>)", the title
+ * "<title> - calculation record", the page's CSS and the scripts its head needs. The version and
+ * the title are escaped here; `css` and `headScripts` go in as given.
+ */
+export function recordDocumentHead(page: {
+  isochorVersion: string;
+  generatedBy: string;
+  title: string;
+  css: string;
+  headScripts: string;
+}): string {
+  return `<!doctype html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}">
+<meta name="generator" content="isochor ${escapeHtml(page.isochorVersion)} (${page.generatedBy})">
+<title>${escapeHtml(page.title)} - calculation record</title>
+<style>${page.css}</style>
+${page.headScripts}
+</head>
+<body>
+`;
+}
+
 const IMAGE_TYPES = ["image/png", "image/jpeg", "image/gif"];
 
 /** Renders one rich output bundle, richest type first. */
@@ -118,13 +147,6 @@ function formatSeconds(ms: number): string {
   if (ms < 1000) return `${(ms / 1000).toFixed(2)} s`;
   if (ms < 60_000) return `${(ms / 1000).toFixed(1)} s`;
   return `${Math.floor(ms / 60_000)} min ${Math.round((ms % 60_000) / 1000)} s`;
-}
-
-function formatDate(date: Date): string {
-  return date
-    .toISOString()
-    .replace("T", " ")
-    .replace(/\.\d+Z$/, " UTC");
 }
 
 const CSS = `
@@ -224,24 +246,18 @@ export function recordHtml(input: RecordInput): string {
   const completion = env.gitDirty
     ? `All ${codeCells} code cells ran to completion, in order, in one fresh session. The working tree had uncommitted changes: commit ${escapeHtml(env.gitCommit.slice(0, 12))} alone does not reproduce this record.`
     : `All ${codeCells} code cells ran to completion, in order, in one fresh session.`;
-  return `<!doctype html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<meta http-equiv="Content-Security-Policy" content="${CONTENT_SECURITY_POLICY}">
-<meta name="generator" content="isochor ${escapeHtml(env.isochorVersion)} (isochor run)">
-<title>${escapeHtml(input.title)} - calculation record</title>
-<style>${CSS}</style>
-${[...lifted.values()].join("\n")}
-</head>
-<body>
-<header class="record-head">
+  return `${recordDocumentHead({
+    isochorVersion: env.isochorVersion,
+    generatedBy: "isochor run",
+    title: input.title,
+    css: CSS,
+    headScripts: [...lifted.values()].join("\n"),
+  })}<header class="record-head">
 <div class="kicker">Calculation record</div>
 <h1 class="record-title">${escapeHtml(input.title)}</h1>
 <dl class="facts">
 <dt>Notebook</dt><dd>${escapeHtml(input.notebookName)}</dd>
-<dt>Run</dt><dd>${formatDate(input.startedAt)} &middot; ${input.cells.length} cells (${codeCells} code) &middot; ${formatSeconds(input.elapsedMs)}</dd>
+<dt>Run</dt><dd>${formatRecordDate(input.startedAt)} &middot; ${input.cells.length} cells (${codeCells} code) &middot; ${formatSeconds(input.elapsedMs)}</dd>
 <dt>isochor</dt><dd>${escapeHtml(env.isochorVersion)} &middot; commit ${commit}</dd>
 <dt>Environment</dt><dd>Node ${escapeHtml(env.nodeVersion)} &middot; tslab ${escapeHtml(env.tslabVersion)} (TypeScript ${escapeHtml(env.typescriptVersion)})</dd>
 </dl>
