@@ -1,6 +1,8 @@
 /**
  * Benchmark harness for one case in one process. The case's function is called in batches; a batch
- * is sized to take about `batchSeconds`, and the batch time divided by its calls is one sample.
+ * is sized to take about `batchSeconds` from the call rate (the first call, which may carry one-off
+ * set-up, is left out: it once made batches of a single call whose CPU times were mostly clock
+ * granularity), sized again after warm-up, and the batch time divided by its calls is one sample.
  *
  * Warm-up runs batches until the batch times settle: after `minWarmupSeconds`, the median of the
  * last `settleWindow` batches must agree with the median of the window before it within
@@ -29,11 +31,11 @@ export interface BenchCase {
 
 /** Options of {@link measure}. */
 export interface MeasureOptions {
-  /** Timed batches after warm-up. Default 31. */
+  /** Timed batches after warm-up. Default 41. */
   samples?: number;
   /** Target duration of one batch, s. Default 0.02. */
   batchSeconds?: number;
-  /** Warm-up always lasts at least this long, s. Default 0.3. */
+  /** Warm-up always lasts at least this long, s. Default 0.5. */
   minWarmupSeconds?: number;
   /** Warm-up stops here even if batch times have not settled, s. Default 3. */
   maxWarmupSeconds?: number;
@@ -81,22 +83,26 @@ function runBatch(fn: () => unknown, calls: number): void {
 
 /** Median seconds per call of `fn` (CPU and wall clock), after a warm-up that waits for settling. */
 export function measure(fn: () => unknown, options: MeasureOptions = {}): Timing {
-  const samples = options.samples ?? 31;
+  const samples = options.samples ?? 41;
   const batchSeconds = options.batchSeconds ?? 0.02;
-  const minWarmup = options.minWarmupSeconds ?? 0.3;
+  const minWarmup = options.minWarmupSeconds ?? 0.5;
   const maxWarmup = options.maxWarmupSeconds ?? 3;
   const window = options.settleWindow ?? 5;
   const tolerance = options.settleTolerance ?? 0.02;
   const warmStart = performance.now();
-  // size the batch
+  // size the batch from the call rate over about 0.1 s, not counting the first call (which
+  // may carry one-off set-up costs and would otherwise leave batches of a single call)
+  sink = fn();
   let calls = 1;
-  for (;;) {
-    const t0 = performance.now();
+  let done = 0;
+  const r0 = performance.now();
+  while (performance.now() - r0 < 100) {
     runBatch(fn, calls);
-    const dt = (performance.now() - t0) / 1000;
-    if (dt >= batchSeconds || calls > 1e8) break;
-    calls = Math.max(calls * 2, Math.ceil((calls * batchSeconds) / Math.max(dt, 1e-6)));
+    done += calls;
+    calls *= 2;
   }
+  const rate = done / ((performance.now() - r0) / 1000);
+  calls = Math.max(1, Math.round(rate * batchSeconds));
   // warm-up until two consecutive windows of batch CPU times agree
   const warm: number[] = [];
   let settled = false;
@@ -116,6 +122,9 @@ export function measure(fn: () => unknown, options: MeasureOptions = {}): Timing
     if (elapsed >= maxWarmup) break;
   }
   const warmupSeconds = (performance.now() - warmStart) / 1000;
+  // re-size the batch from the settled batch time (the code is faster now than while sizing)
+  const settledBatch = median(warm.slice(-window));
+  if (settledBatch > 0) calls = Math.max(1, Math.round((calls * batchSeconds) / settledBatch));
   const wall: number[] = [];
   const cpu: number[] = [];
   for (let s = 0; s < samples; s++) {

@@ -1,7 +1,8 @@
 /**
  * `npm run bench [-- [filter] [--processes N] [--samples N]]`: runs every case (or those whose name
- * contains `filter`) in N fresh Node processes (default 3), round-robin over the cases so a change of
- * machine load spreads over all of them, and prints one JSON line per case:
+ * contains `filter`) in N fresh Node processes (default 3; `--samples`: timed 20 ms batches per
+ * process, default 41), round-robin over the cases so a change of machine load spreads over all of
+ * them, and prints one JSON line per case:
  *   {"case", "secondsPerCall", "wallSecondsPerCall", "minSecondsPerCall", "targetSecondsPerCall",
  *    "meetsTarget", "loadAverage1m", "processes", "spreadMinSecondsPerCall",
  *    "spreadMaxSecondsPerCall", "perProcessSecondsPerCall", "samplesPerProcess", "unsettledProcesses"}
@@ -56,7 +57,7 @@ interface Args {
 }
 
 function parseArgs(argv: readonly string[]): Args {
-  const args: Args = { processes: 3, samples: 31 };
+  const args: Args = { processes: 3, samples: 41 };
   const positiveInt = (flag: string, text: string | undefined): number => {
     const n = Number(text);
     if (!(Number.isInteger(n) && n >= 1)) {
