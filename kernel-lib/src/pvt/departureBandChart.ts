@@ -7,8 +7,13 @@
  * axes (mol/m3; J/mol or J/(mol K)).
  */
 import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
-import { InputError } from "../errors.js";
 import type { ModelComparisonPoint } from "./compareWithModel.js";
+import {
+  checkDepartureChartOptions,
+  densityEncoding,
+  isothermColorEncoding,
+  isothermLabel,
+} from "./departureChartParts.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
 
 export interface DepartureBandChartOptions {
@@ -32,34 +37,14 @@ const NAMES = {
   h: "enthalpy",
   g: "Gibbs energy",
 };
-const UNITS = { a: "J/mol", s: "J/(mol K)", u: "J/mol", h: "J/mol", g: "J/mol" };
-
 export function departureBandChart(
   result: PvtRouteResult,
   options: DepartureBandChartOptions = {},
 ): VegaLiteSpec {
-  const q = options.quantity ?? "h";
-  if (!(q in NAMES)) {
-    throw new InputError({
-      input: "options.quantity",
-      unit: "-",
-      validRange: "one of a, s, u, h, g",
-      received: q,
-    });
-  }
-  const k = options.coverageFactor ?? 2;
-  if (!(k > 0 && k < Infinity)) {
-    throw new InputError({
-      input: "options.coverageFactor",
-      unit: "-",
-      validRange: "a finite number > 0",
-      received: k,
-    });
-  }
-  const label = (t: number) => `${t.toFixed(1)} K`;
+  const { quantity: q, coverageFactor: k, unit } = checkDepartureChartOptions(options);
   const rows = result.isotherms.flatMap((iso) =>
     iso.states.map((s) => ({
-      isotherm: label(iso.temperatureK),
+      isotherm: isothermLabel(iso.temperatureK),
       rho: s.densityMolPerM3,
       value: s.residual[q],
       lower: s.residual[q] - k * s.uncertainty[q],
@@ -67,9 +52,8 @@ export function departureBandChart(
       u: s.uncertainty[q],
     })),
   );
-  const unit = UNITS[q];
-  const x = { field: "rho", type: "quantitative", title: "Molar density ρ / (mol/m3)" };
-  const color = { field: "isotherm", type: "nominal", title: "Isotherm", sort: null };
+  const x = densityEncoding();
+  const color = isothermColorEncoding();
   const layers: Record<string, unknown>[] = [
     {
       data: { values: rows },
@@ -101,7 +85,7 @@ export function departureBandChart(
     layers.push({
       data: {
         values: options.model.points.map((p) => ({
-          isotherm: label(p.temperatureK),
+          isotherm: isothermLabel(p.temperatureK),
           rho: p.densityMolPerM3,
           model: p.model[q],
         })),

@@ -7,6 +7,12 @@
 import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
 import { InputError } from "../errors.js";
 import type { ModelComparisonPoint } from "./compareWithModel.js";
+import {
+  checkDepartureChartOptions,
+  densityEncoding,
+  isothermColorEncoding,
+  isothermLabel,
+} from "./departureChartParts.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
 
 export interface DepartureResidualChartOptions {
@@ -20,31 +26,12 @@ export interface DepartureResidualChartOptions {
   height?: number;
 }
 
-const UNITS = { a: "J/mol", s: "J/(mol K)", u: "J/mol", h: "J/mol", g: "J/mol" };
-
 export function departureResidualChart(
   result: PvtRouteResult,
   comparison: readonly ModelComparisonPoint[],
   options: DepartureResidualChartOptions = {},
 ): VegaLiteSpec {
-  const q = options.quantity ?? "h";
-  if (!(q in UNITS)) {
-    throw new InputError({
-      input: "options.quantity",
-      unit: "-",
-      validRange: "one of a, s, u, h, g",
-      received: q,
-    });
-  }
-  const k = options.coverageFactor ?? 2;
-  if (!(k > 0 && k < Infinity)) {
-    throw new InputError({
-      input: "options.coverageFactor",
-      unit: "-",
-      validRange: "a finite number > 0",
-      received: k,
-    });
-  }
+  const { quantity: q, coverageFactor: k, unit } = checkDepartureChartOptions(options);
   if (comparison.length === 0) {
     throw new InputError({
       input: "comparison",
@@ -53,24 +40,22 @@ export function departureResidualChart(
       received: 0,
     });
   }
-  const label = (t: number) => `${t.toFixed(1)} K`;
   const band = result.isotherms.flatMap((iso) =>
     iso.states.map((s) => ({
-      isotherm: label(iso.temperatureK),
+      isotherm: isothermLabel(iso.temperatureK),
       rho: s.densityMolPerM3,
       lower: -k * s.uncertainty[q],
       upper: k * s.uncertainty[q],
     })),
   );
   const rows = comparison.map((p) => ({
-    isotherm: label(p.temperatureK),
+    isotherm: isothermLabel(p.temperatureK),
     rho: p.densityMolPerM3,
     difference: p.difference[q],
     z: p.z[q],
   }));
-  const unit = UNITS[q];
-  const x = { field: "rho", type: "quantitative", title: "Molar density ρ / (mol/m3)" };
-  const color = { field: "isotherm", type: "nominal", title: "Isotherm", sort: null };
+  const x = densityEncoding();
+  const color = isothermColorEncoding();
   const model = options.modelLabel ?? "model";
   return {
     $schema: "https://vega.github.io/schema/vega-lite/v6.json",

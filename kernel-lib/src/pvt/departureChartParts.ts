@@ -1,0 +1,56 @@
+/**
+ * Parts shared by the P-V-T departure charts (departureBandChart, departureResidualChart;
+ * internal): the residual property and coverage-factor options, the SI unit of each residual
+ * property, the isotherm label, and the density axis and isotherm colour encodings.
+ */
+import { InputError } from "../errors.js";
+
+/** A residual property of the P-V-T route. */
+export type ResidualQuantity = "a" | "s" | "u" | "h" | "g";
+
+/** SI molar unit of each residual property. */
+export const RESIDUAL_UNITS = { a: "J/mol", s: "J/(mol K)", u: "J/mol", h: "J/mol", g: "J/mol" };
+
+/**
+ * Checks a chart's `quantity` (default "h") and `coverageFactor` (default 2, finite and > 0) and
+ * returns them with the quantity's unit.
+ */
+export function checkDepartureChartOptions(options: {
+  quantity?: ResidualQuantity;
+  coverageFactor?: number;
+}): { quantity: ResidualQuantity; coverageFactor: number; unit: string } {
+  const q = options.quantity ?? "h";
+  if (!(q in RESIDUAL_UNITS)) {
+    throw new InputError({
+      input: "options.quantity",
+      unit: "-",
+      validRange: "one of a, s, u, h, g",
+      received: q,
+    });
+  }
+  const k = options.coverageFactor ?? 2;
+  if (!(k > 0 && k < Infinity)) {
+    throw new InputError({
+      input: "options.coverageFactor",
+      unit: "-",
+      validRange: "a finite number > 0",
+      received: k,
+    });
+  }
+  return { quantity: q, coverageFactor: k, unit: RESIDUAL_UNITS[q] };
+}
+
+/** The legend label of an isotherm, "310.0 K". */
+export function isothermLabel(temperatureK: number): string {
+  return `${temperatureK.toFixed(1)} K`;
+}
+
+/** A fresh x encoding: molar density, field "rho", mol/m3. */
+export function densityEncoding(): Record<string, unknown> {
+  return { field: "rho", type: "quantitative", title: "Molar density ρ / (mol/m3)" };
+}
+
+/** A fresh colour encoding: one colour per isotherm (field "isotherm"), in data order. */
+export function isothermColorEncoding(): Record<string, unknown> {
+  return { field: "isotherm", type: "nominal", title: "Isotherm", sort: null };
+}
