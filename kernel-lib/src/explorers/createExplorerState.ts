@@ -19,6 +19,7 @@ import { InputError } from "../errors.js";
 import { stateAtTP } from "../state/stateAt.js";
 import { requireInRange, requirePositive } from "../validate.js";
 import { DEPARTURE_PROPERTIES } from "./departureExplorer.js";
+import { choiceIn } from "./explorerCommon.js";
 import { checkExplorerModelId, ExplorerFluids, hasReferenceEquation } from "./explorerFluids.js";
 import {
   EXPLORER_KINDS,
@@ -240,15 +241,10 @@ function isothermState(options: IsothermExplorerOptions): IsothermExplorerState 
     options.temperatureRangeK ?? [0.6 * Tc, 1.4 * Tc],
     "K",
   );
-  const abscissa = options.abscissa ?? "molarVolume";
-  if (abscissa !== "molarVolume" && abscissa !== "density") {
-    throw new InputError({
-      input: "abscissa",
-      unit: "-",
-      validRange: '"molarVolume" or "density"',
-      received: abscissa,
-    });
-  }
+  const abscissa = choiceIn("abscissa", options.abscissa ?? "molarVolume", [
+    "molarVolume",
+    "density",
+  ]);
   return {
     ...base,
     kind: "isotherms",
@@ -289,15 +285,7 @@ function departureState(options: DepartureExplorerOptions): DepartureExplorerSta
       received: options.properties,
     });
   }
-  const abscissa = options.abscissa ?? "pressure";
-  if (abscissa !== "pressure" && abscissa !== "density") {
-    throw new InputError({
-      input: "abscissa",
-      unit: "-",
-      validRange: '"pressure" or "density"',
-      received: abscissa,
-    });
-  }
+  const abscissa = choiceIn("abscissa", options.abscissa ?? "pressure", ["pressure", "density"]);
   return {
     ...base,
     kind: "departures",

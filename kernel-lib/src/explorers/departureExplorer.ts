@@ -16,6 +16,7 @@ import { logGrid } from "../charts/sampling.js";
 import { InputError } from "../errors.js";
 import type { ControlValue, ExplorerControl, ExplorerDefinition } from "./explorerControls.js";
 import {
+  choiceIn,
   fluidSubtitle,
   formatQuantity,
   modelControl,
@@ -120,15 +121,7 @@ export const departureExplorer: ExplorerDefinition<DepartureExplorerState> = {
       return { ...state, properties: chosen };
     }
     if (key === "abscissa") {
-      if (value !== "pressure" && value !== "density") {
-        throw new InputError({
-          input: "abscissa",
-          unit: "-",
-          validRange: '"pressure" or "density"',
-          received: value,
-        });
-      }
-      return { ...state, abscissa: value };
+      return { ...state, abscissa: choiceIn("abscissa", value, ["pressure", "density"]) };
     }
     throw unknownControl(key, ["temperatureK", "x.<i>", "model", "properties", "abscissa"]);
   },

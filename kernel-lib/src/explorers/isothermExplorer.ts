@@ -13,6 +13,7 @@ import { isothermChart } from "../charts/isotherms.js";
 import { isothermsFromModel } from "../charts/sample/isothermsFromModel.js";
 import type { ControlValue, ExplorerDefinition } from "./explorerControls.js";
 import {
+  choiceIn,
   fluidSubtitle,
   formatQuantity,
   modelControl,
@@ -74,15 +75,7 @@ export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
     }
     if (key === "model") return { ...state, model: modelIn(state, value) };
     if (key === "abscissa") {
-      if (value !== "molarVolume" && value !== "density") {
-        throw new InputError({
-          input: "abscissa",
-          unit: "-",
-          validRange: '"molarVolume" or "density"',
-          received: value,
-        });
-      }
-      return { ...state, abscissa: value };
+      return { ...state, abscissa: choiceIn("abscissa", value, ["molarVolume", "density"]) };
     }
     throw unknownControl(key, ["temperatureK", "model", "abscissa"]);
   },
