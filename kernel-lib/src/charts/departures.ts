@@ -5,7 +5,7 @@
  * "Guide to the expression of uncertainty in measurement", section 6.2).
  */
 import { InputError } from "../errors.js";
-import { requireCount, requirePositive } from "../validate.js";
+import { requireCount } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
 import {
@@ -14,8 +14,8 @@ import {
   curveRows,
   planAxis,
   positionEncoding,
+  seriesLabels,
   seriesLineLayer,
-  shortNumber,
   topLevel,
   WarningList,
   type AxisPlan,
@@ -142,13 +142,7 @@ export function departureChart(
       ? planAxis("pressure", "Pressure P", options.units, options.logX ?? false)
       : planAxis("molarDensity", "Molar density ρ", options.units, options.logX ?? false);
   const temperatureUnit = planAxis("temperature", "T", options.units).unit;
-  const labels = list.map((c, i) => {
-    requirePositive(`curves[${i}].temperatureK`, c.temperatureK, "K");
-    return (
-      c.label ??
-      `${shortNumber(toDisplay(c.temperatureK, temperatureUnit))} ${temperatureUnit.symbol}`
-    );
-  });
+  const labels = seriesLabels("curves", list, "temperatureK", "K", temperatureUnit);
   const width = checkSize("width", options.width, DEFAULT_WIDTH);
   const height = checkSize("height", options.height, DEFAULT_HEIGHT);
   const xOf = (p: DeparturePoint) =>

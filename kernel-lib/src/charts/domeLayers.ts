@@ -4,6 +4,7 @@
  * rule between the saturated liquid and vapour of each saturation row.
  */
 import { toDisplay } from "./displayUnits.js";
+import type { EnergyBasis } from "./energyBasis.js";
 import type { ChartCriticalPoint, ChartSaturationRow } from "./saturationInput.js";
 import {
   curveRows,
@@ -192,4 +193,45 @@ export function criticalLayers(
       encoding: { ...encoding, text: { field: "label", type: "nominal" } },
     },
   ];
+}
+
+/**
+ * The fixed elements of an energy diagram (P-h, T-s): the abscissa is a saturated phase's (or the
+ * critical point's) enthalpy or entropy on the chosen basis, the ordinate a row's pressure or
+ * temperature. `dome` (two-phase region and quality lines) goes under the property lines,
+ * `critical` (the critical-point mark) on top of them.
+ */
+export function energyDomeLayers(
+  saturation: readonly ChartSaturationRow[],
+  critical: ChartCriticalPoint | undefined,
+  qualities: readonly number[],
+  abscissa: "enthalpyJPerMol" | "entropyJPerMolK",
+  ordinate: "pressurePa" | "temperatureK",
+  basis: EnergyBasis,
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+  warnings: WarningList,
+): { dome: Record<string, unknown>[]; critical: Record<string, unknown>[] } {
+  const xOf: PhaseCoordinate = (r, phase) => {
+    const v = r[phase][abscissa];
+    return v === undefined ? undefined : basis.perBasis(v);
+  };
+  const yOf = (r: ChartSaturationRow) => r[ordinate];
+  const criticalX =
+    critical?.[abscissa] !== undefined ? basis.perBasis(critical[abscissa]) : undefined;
+  return {
+    dome: [
+      ...domeLayers(
+        saturation,
+        critical && criticalX !== undefined ? { x: criticalX, y: critical[ordinate] } : undefined,
+        xOf,
+        yOf,
+        xAxis,
+        yAxis,
+        warnings,
+      ),
+      ...qualityLayers(saturation, qualities, xOf, yOf, xAxis, yAxis, warnings),
+    ],
+    critical: criticalLayers(critical, criticalX, critical?.[ordinate], xAxis, yAxis),
+  };
 }

@@ -4,10 +4,10 @@
  * vapour quality (drawn from the saturation rows by the lever rule).
  */
 import { InputError } from "../errors.js";
-import { requireFinite, requirePositive } from "../validate.js";
+import { requireFinite } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
-import { criticalLayers, domeLayers, qualityLayers } from "./domeLayers.js";
+import { energyDomeLayers } from "./domeLayers.js";
 import { energyBasis } from "./energyBasis.js";
 import { placeGuideLabels } from "./labelPlacement.js";
 import { INK } from "./theme.js";
@@ -20,11 +20,11 @@ import {
 } from "./saturationInput.js";
 import {
   checkArray,
+  constantValueSeriesLayers,
   curveRows,
   guideLineLayers,
   planAxis,
   rangeOption,
-  seriesLineLayer,
   shortNumber,
   topLevel,
   WarningList,
@@ -106,31 +106,23 @@ export function pressureEnthalpyChart(
   rangeOption("pressureRangePa", options.pressureRangePa, yAxis, "Pa");
   rangeOption("enthalpyRangeJPerMol", options.enthalpyRangeJPerMol, xAxis, "J/mol", basis.perBasis);
 
-  const hOf = (r: ChartSaturationRow, phase: "liquid" | "vapor") => {
-    const h = r[phase].enthalpyJPerMol;
-    return h === undefined ? undefined : basis.perBasis(h);
-  };
-  const pOf = (r: ChartSaturationRow) => r.pressurePa;
   const toXY = (p: PressureEnthalpyPoint) => ({
     x: basis.perBasis(p.enthalpyJPerMol),
     y: p.pressurePa,
   });
 
-  const layers: Record<string, unknown>[] = [];
-  const criticalH =
-    critical?.enthalpyJPerMol !== undefined ? basis.perBasis(critical.enthalpyJPerMol) : undefined;
-  layers.push(
-    ...domeLayers(
-      saturation,
-      critical && criticalH !== undefined ? { x: criticalH, y: critical.pressurePa } : undefined,
-      hOf,
-      pOf,
-      xAxis,
-      yAxis,
-      warnings,
-    ),
+  const fixed = energyDomeLayers(
+    saturation,
+    critical,
+    qualities,
+    "enthalpyJPerMol",
+    "pressurePa",
+    basis,
+    xAxis,
+    yAxis,
+    warnings,
   );
-  layers.push(...qualityLayers(saturation, qualities, hOf, pOf, xAxis, yAxis, warnings));
+  const layers: Record<string, unknown>[] = [...fixed.dome];
 
   const isentropeRows = curveRows(
     isentropes.map((c, i) => {
@@ -155,26 +147,24 @@ export function pressureEnthalpyChart(
   });
   if (isentropeLines) layers.push(isentropeLines);
 
-  const labels = isotherms.map((c, i) => {
-    requirePositive(`isotherms[${i}].temperatureK`, c.temperatureK, "K");
-    return (
-      c.label ??
-      `${shortNumber(toDisplay(c.temperatureK, temperatureUnit))} ${temperatureUnit.symbol}`
-    );
-  });
-  const isothermRows = curveRows(
-    isotherms.map((c, i) => ({
-      label: labels[i],
-      points: checkArray(`isotherms[${i}].points`, c.points).map(toXY),
-    })),
-    xAxis,
-    yAxis,
-    warnings,
+  layers.push(
+    ...constantValueSeriesLayers(
+      {
+        input: "isotherms",
+        curves: isotherms,
+        key: "temperatureK",
+        unitSI: "K",
+        displayUnit: temperatureUnit,
+        toXY,
+        legendTitle: "Isotherm",
+      },
+      xAxis,
+      yAxis,
+      warnings,
+    ),
   );
-  if (isothermRows.length > 0)
-    layers.push(seriesLineLayer(isothermRows, labels, "Isotherm", xAxis, yAxis));
   layers.push(...isentropeLabels);
-  layers.push(...criticalLayers(critical, criticalH, critical?.pressurePa, xAxis, yAxis));
+  layers.push(...fixed.critical);
 
   const spec = topLevel(
     "pressure-enthalpy",

@@ -7,6 +7,7 @@
  * a label like `datum.x + alert(1)` or `<script>` can never be evaluated, only shown.
  */
 import { InputError } from "../errors.js";
+import { requirePositive } from "../validate.js";
 import type { ChartMeta, ChartSpec } from "./chartSpec.js";
 import {
   quantityTitle,
@@ -292,6 +293,57 @@ export function seriesLineLayer(
       tooltip: lineTooltip(xAxis, yAxis, legendTitle),
     },
   };
+}
+
+/**
+ * Legend labels of curves that each sit at one constant value (isotherms, isobars): the curve's own
+ * label, else the value in its display unit ("350 K"). Each value must be finite and > 0; an error
+ * names it as `<input>[i].<key>` in `unitSI`.
+ */
+export function seriesLabels<K extends string>(
+  input: string,
+  curves: readonly ({ label?: string } & Record<K, number>)[],
+  key: K,
+  unitSI: string,
+  displayUnit: DisplayUnit,
+): string[] {
+  return curves.map((c, i) => {
+    requirePositive(`${input}[${i}].${key}`, c[key], unitSI);
+    return c.label ?? `${shortNumber(toDisplay(c[key], displayUnit))} ${displayUnit.symbol}`;
+  });
+}
+
+/**
+ * Curves at one constant value each (isotherms, isobars) as one labelled series layer
+ * ({@link seriesLabels}, {@link curveRows}, {@link seriesLineLayer}); no layer when nothing can be
+ * drawn. `toXY` maps a point (SI) to the diagram's coordinates (SI, on the diagram's basis).
+ */
+export function constantValueSeriesLayers<K extends string, P>(
+  family: {
+    input: string;
+    curves: readonly ({ label?: string; points: readonly P[] } & Record<K, number>)[];
+    key: K;
+    unitSI: string;
+    displayUnit: DisplayUnit;
+    toXY: (p: P) => ChartXY;
+    legendTitle: string;
+  },
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+  warnings: WarningList,
+): Record<string, unknown>[] {
+  const { input, curves, toXY } = family;
+  const labels = seriesLabels(input, curves, family.key, family.unitSI, family.displayUnit);
+  const rows = curveRows(
+    curves.map((c, i) => ({
+      label: labels[i],
+      points: checkArray(`${input}[${i}].points`, c.points).map(toXY),
+    })),
+    xAxis,
+    yAxis,
+    warnings,
+  );
+  return rows.length > 0 ? [seriesLineLayer(rows, labels, family.legendTitle, xAxis, yAxis)] : [];
 }
 
 /**

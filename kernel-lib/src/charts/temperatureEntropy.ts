@@ -3,10 +3,8 @@
  * lines of constant vapour quality from the saturation rows (lever rule).
  */
 import { InputError } from "../errors.js";
-import { requirePositive } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
-import { toDisplay } from "./displayUnits.js";
-import { criticalLayers, domeLayers, qualityLayers } from "./domeLayers.js";
+import { energyDomeLayers } from "./domeLayers.js";
 import { energyBasis } from "./energyBasis.js";
 import { checkQualities } from "./pressureEnthalpy.js";
 import {
@@ -18,11 +16,9 @@ import {
 } from "./saturationInput.js";
 import {
   checkArray,
-  curveRows,
+  constantValueSeriesLayers,
   planAxis,
   rangeOption,
-  seriesLineLayer,
-  shortNumber,
   topLevel,
   WarningList,
   type BaseChartOptions,
@@ -99,47 +95,38 @@ export function temperatureEntropyChart(
     basis.perBasis,
   );
 
-  const sOf = (r: ChartSaturationRow, phase: "liquid" | "vapor") => {
-    const s = r[phase].entropyJPerMolK;
-    return s === undefined ? undefined : basis.perBasis(s);
-  };
-  const tOf = (r: ChartSaturationRow) => r.temperatureK;
-  const criticalS =
-    critical?.entropyJPerMolK !== undefined ? basis.perBasis(critical.entropyJPerMolK) : undefined;
-
-  const layers: Record<string, unknown>[] = [];
+  const fixed = energyDomeLayers(
+    saturation,
+    critical,
+    qualities,
+    "entropyJPerMolK",
+    "temperatureK",
+    basis,
+    xAxis,
+    yAxis,
+    warnings,
+  );
+  const layers: Record<string, unknown>[] = [...fixed.dome];
   layers.push(
-    ...domeLayers(
-      saturation,
-      critical && criticalS !== undefined ? { x: criticalS, y: critical.temperatureK } : undefined,
-      sOf,
-      tOf,
+    ...constantValueSeriesLayers(
+      {
+        input: "isobars",
+        curves: isobars,
+        key: "pressurePa",
+        unitSI: "Pa",
+        displayUnit: pressureUnit,
+        toXY: (p: TemperatureEntropyPoint) => ({
+          x: basis.perBasis(p.entropyJPerMolK),
+          y: p.temperatureK,
+        }),
+        legendTitle: "Isobar",
+      },
       xAxis,
       yAxis,
       warnings,
     ),
   );
-  layers.push(...qualityLayers(saturation, qualities, sOf, tOf, xAxis, yAxis, warnings));
-  const labels = isobars.map((c, i) => {
-    requirePositive(`isobars[${i}].pressurePa`, c.pressurePa, "Pa");
-    return (
-      c.label ?? `${shortNumber(toDisplay(c.pressurePa, pressureUnit))} ${pressureUnit.symbol}`
-    );
-  });
-  const rows = curveRows(
-    isobars.map((c, i) => ({
-      label: labels[i],
-      points: checkArray(`isobars[${i}].points`, c.points).map((p) => ({
-        x: basis.perBasis(p.entropyJPerMolK),
-        y: p.temperatureK,
-      })),
-    })),
-    xAxis,
-    yAxis,
-    warnings,
-  );
-  if (rows.length > 0) layers.push(seriesLineLayer(rows, labels, "Isobar", xAxis, yAxis));
-  layers.push(...criticalLayers(critical, criticalS, critical?.temperatureK, xAxis, yAxis));
+  layers.push(...fixed.critical);
   return topLevel(
     "temperature-entropy",
     "Temperature-entropy diagram",
