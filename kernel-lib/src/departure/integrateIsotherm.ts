@@ -31,7 +31,7 @@
  */
 import { R as R_CODATA } from "../constants.js";
 import { integrateAdaptive } from "../numerics/gaussKronrod.js";
-import type { ResidualDerivatives } from "../eos/types.js";
+import type { ResidualDerivatives, ResidualDerivativesDraft } from "../eos/types.js";
 import type { PressureEvaluator, PressureSeries } from "./pressureEvaluator.js";
 
 /** Options of {@link integrateResidual}. */
@@ -401,16 +401,7 @@ export function integrateResidual(
     rho < line.series.densityMolPerM3 ? endpointWithSeries(evaluator, line, T, rho, x, Rg) : direct;
   let evaluations = line.evaluations() + 2;
   const aD = end.aD;
-  const derivatives: {
-    a: number;
-    aD: number;
-    aDD: number;
-    aT: number;
-    aTT: number;
-    aDT: number;
-    aDDD: number;
-    dnA?: number[];
-  } = {
+  const derivatives: ResidualDerivativesDraft & { aDDD: number } = {
     a: ia.value,
     aD,
     aDD: end.aDD,

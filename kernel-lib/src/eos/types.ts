@@ -28,6 +28,14 @@ export interface ResidualDerivatives {
   readonly dnA?: readonly number[];
 }
 
+/**
+ * {@link ResidualDerivatives} while a model or integrator fills it in: writable fields and a plain
+ * `dnA` array (set after the rest when composition derivatives are asked for).
+ */
+export type ResidualDerivativesDraft = {
+  -readonly [K in keyof Omit<ResidualDerivatives, "dnA">]: ResidualDerivatives[K];
+} & { dnA?: number[] };
+
 /** What to compute: composition derivatives cost extra, so they are requested explicitly. */
 export interface ResidualRequest {
   readonly composition?: boolean;

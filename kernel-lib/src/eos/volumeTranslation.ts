@@ -23,7 +23,12 @@
  */
 import { R } from "../constants.js";
 import { InputError, type ResultWarning } from "../errors.js";
-import type { ResidualDerivatives, ResidualModel, ResidualRequest } from "./types.js";
+import type {
+  ResidualDerivatives,
+  ResidualDerivativesDraft,
+  ResidualModel,
+  ResidualRequest,
+} from "./types.js";
 import type { ModelComponent } from "./modelComponent.js";
 import { hasPressureFunction } from "./pressureFunction.js";
 import type { HyperDual } from "../numerics/hyperDual.js";
@@ -94,16 +99,7 @@ export function withVolumeTranslation(
       const e = base.residual(T, rhoE, x, request);
       const s = 1 - r;
       const lnR = Math.log(r);
-      const out: {
-        a: number;
-        aD: number;
-        aDD: number;
-        aT: number;
-        aTT: number;
-        aDT: number;
-        aDDD?: number;
-        dnA?: number[];
-      } = {
+      const out: ResidualDerivativesDraft = {
         a: e.a + lnR,
         aD: r * e.aD - s,
         aDD: r * r * e.aDD - 2 * r * s * e.aD + s * s,

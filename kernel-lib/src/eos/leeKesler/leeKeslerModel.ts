@@ -25,7 +25,12 @@
 import table from "../data/leeKesler.json";
 import { R } from "../../constants.js";
 import type { ResultWarning } from "../../errors.js";
-import type { ModelInfo, ResidualDerivatives, ResidualRequest } from "../types.js";
+import type {
+  ModelInfo,
+  ResidualDerivatives,
+  ResidualDerivativesDraft,
+  ResidualRequest,
+} from "../types.js";
 import { checkModelComponents, type ModelComponent } from "../modelComponent.js";
 import { resolveInteractions, type InteractionMatrix } from "../interaction/interactionTable.js";
 import { HyperDual } from "../../numerics/hyperDual.js";
@@ -183,16 +188,7 @@ export function createLeeKeslerModel(
       leeKeslerFluid(LEE_KESLER_REFERENCE, tr, r, fR);
       const wr = c.acentricFactor / omegaR;
       const mix = (p: number, q: number): number => p + wr * (q - p);
-      const out: {
-        a: number;
-        aD: number;
-        aDD: number;
-        aT: number;
-        aTT: number;
-        aDT: number;
-        aDDD: number;
-        dnA?: number[];
-      } = {
+      const out: ResidualDerivativesDraft & { aDDD: number } = {
         a: mix(f0.a, fR.a),
         aD: mix(f0.aD, fR.aD),
         aDD: mix(f0.aDD, fR.aDD),
