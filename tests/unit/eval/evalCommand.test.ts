@@ -1,24 +1,8 @@
 /** `isochor eval`: request and response names (issue 4 item 6), per-state errors, malformed requests. */
 import { describe, expect, it } from "vitest";
 import { evalCommand, runEvalRequest } from "../../../kernel-lib/src/cli/eval.js";
+import { fakeIo } from "./fakeIo.js";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
-import type { CliIo } from "../../../kernel-lib/src/cli/io.js";
-
-function fakeIo(stdin: string): CliIo & { out: string; err: string } {
-  const io = {
-    out: "",
-    err: "",
-    stdout(t: string) {
-      io.out += t;
-    },
-    stderr(t: string) {
-      io.err += t;
-    },
-    readStdin: () => Promise.resolve(stdin),
-    cwd: process.cwd(),
-  };
-  return io;
-}
 
 const request = {
   model: "peng-robinson",

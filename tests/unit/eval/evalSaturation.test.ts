@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { evalCommand, runEvalRequest } from "../../../kernel-lib/src/cli/eval.js";
-import type { CliIo } from "../../../kernel-lib/src/cli/io.js";
+import { fakeIo } from "./fakeIo.js";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
 import {
@@ -36,22 +36,6 @@ type Entry = Record<string, unknown> & {
   residualTV: unknown;
   error?: { code: string; message: string };
 };
-
-function fakeIo(stdin: string): CliIo & { out: string; err: string } {
-  const io = {
-    out: "",
-    err: "",
-    stdout(t: string) {
-      io.out += t;
-    },
-    stderr(t: string) {
-      io.err += t;
-    },
-    readStdin: () => Promise.resolve(stdin),
-    cwd: process.cwd(),
-  };
-  return io;
-}
 
 const run = (body: unknown): Entry[] => runEvalRequest(body).states as unknown as Entry[];
 const rel = (a: number, b: number): number => Math.abs(a / b - 1);
