@@ -49,3 +49,23 @@ export function requireCount(input: string, value: number): number {
   }
   return value;
 }
+
+/**
+ * Requires one of a few fixed strings (an axis choice, a mode). The error lists them quoted:
+ * '"pressure" or "density"'. Unit "-".
+ */
+export function requireChoice<T extends string>(
+  input: string,
+  value: unknown,
+  choices: readonly T[],
+): T {
+  if (!(typeof value === "string" && (choices as readonly string[]).includes(value))) {
+    throw new InputError({
+      input,
+      unit: "-",
+      validRange: choices.map((c) => `"${c}"`).join(" or "),
+      received: value,
+    });
+  }
+  return value as T;
+}

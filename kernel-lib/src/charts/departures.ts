@@ -5,7 +5,7 @@
  * "Guide to the expression of uncertainty in measurement", section 6.2).
  */
 import { InputError } from "../errors.js";
-import { requireCount } from "../validate.js";
+import { requireChoice, requireCount } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
 import {
@@ -117,15 +117,7 @@ export function departureChart(
       received: options.property,
     });
   }
-  const xKind = options.x ?? "pressure";
-  if (xKind !== "pressure" && xKind !== "density") {
-    throw new InputError({
-      input: "x",
-      unit: "-",
-      validRange: '"pressure" or "density"',
-      received: xKind,
-    });
-  }
+  const xKind = requireChoice("x", options.x ?? "pressure", ["pressure", "density"]);
   const k = options.coverageFactor ?? 2;
   if (!(k > 0 && k < 10)) {
     throw new InputError({

@@ -5,7 +5,7 @@
  * areas are equal at coexistence (J. C. Maxwell, Nature 11 (1875) 357-359).
  */
 import { InputError } from "../errors.js";
-import { requirePositive } from "../validate.js";
+import { requireChoice, requirePositive } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
 import { criticalLayers, domeLayers } from "./domeLayers.js";
@@ -108,15 +108,7 @@ export function isothermChart(
   }
   const saturation = checkSaturation(data.saturation);
   const critical = checkCritical(data.critical);
-  const xKind = options.x ?? "molarVolume";
-  if (xKind !== "molarVolume" && xKind !== "density") {
-    throw new InputError({
-      input: "x",
-      unit: "-",
-      validRange: '"molarVolume" or "density"',
-      received: xKind,
-    });
-  }
+  const xKind = requireChoice("x", options.x ?? "molarVolume", ["molarVolume", "density"]);
   const warnings = new WarningList();
   addDomeWarnings(warnings, data.domeWarnings);
   const useVolume = xKind === "molarVolume";

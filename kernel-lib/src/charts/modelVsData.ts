@@ -5,6 +5,7 @@
  * point is the one given with the point, or linear interpolation along the model curve.
  */
 import { InputError } from "../errors.js";
+import { requireChoice } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay, type QuantityKind } from "./displayUnits.js";
 import {
@@ -76,15 +77,7 @@ export function modelVsDataChart(
       received: `${models.length} curves, ${sets.length} data sets`,
     });
   }
-  const mode = options.residual ?? "relative";
-  if (mode !== "relative" && mode !== "absolute") {
-    throw new InputError({
-      input: "residual",
-      unit: "-",
-      validRange: '"relative" or "absolute"',
-      received: mode,
-    });
-  }
+  const mode = requireChoice("residual", options.residual ?? "relative", ["relative", "absolute"]);
   const warnings = new WarningList();
   const xAxis = planAxis(
     input.x.kind,

@@ -4,7 +4,7 @@
  * scales are read from its metadata) or on its own axes.
  */
 import { InputError } from "../errors.js";
-import { requireFinite, requirePositive } from "../validate.js";
+import { requireChoice, requireFinite, requirePositive } from "../validate.js";
 import { chartMeta, type ChartSpec } from "./chartSpec.js";
 import { resolveUnit, toDisplay, type UnitChoice } from "./displayUnits.js";
 import { energyBasis } from "./energyBasis.js";
@@ -122,15 +122,7 @@ export function withProcessPath(spec: ChartSpec, states: readonly ProcessPathSta
 }
 
 function checkDiagram(d: string): PathDiagram {
-  if (d !== "pressure-enthalpy" && d !== "temperature-entropy") {
-    throw new InputError({
-      input: "diagram",
-      unit: "-",
-      validRange: '"pressure-enthalpy" or "temperature-entropy"',
-      received: d,
-    });
-  }
-  return d;
+  return requireChoice("diagram", d, ["pressure-enthalpy", "temperature-entropy"]);
 }
 
 function pathAxes(

@@ -17,9 +17,8 @@ import type { Component } from "../components/types.js";
 import type { CubicModelId } from "../eos/cubic/cubicFamilies.js";
 import { InputError } from "../errors.js";
 import { stateAtTP } from "../state/stateAt.js";
-import { requireInRange, requirePositive } from "../validate.js";
+import { requireChoice, requireInRange, requirePositive } from "../validate.js";
 import { DEPARTURE_PROPERTIES } from "./departureExplorer.js";
-import { choiceIn } from "./explorerCommon.js";
 import { checkExplorerModelId, ExplorerFluids, hasReferenceEquation } from "./explorerFluids.js";
 import {
   EXPLORER_KINDS,
@@ -241,7 +240,7 @@ function isothermState(options: IsothermExplorerOptions): IsothermExplorerState 
     options.temperatureRangeK ?? [0.6 * Tc, 1.4 * Tc],
     "K",
   );
-  const abscissa = choiceIn("abscissa", options.abscissa ?? "molarVolume", [
+  const abscissa = requireChoice("abscissa", options.abscissa ?? "molarVolume", [
     "molarVolume",
     "density",
   ]);
@@ -285,7 +284,10 @@ function departureState(options: DepartureExplorerOptions): DepartureExplorerSta
       received: options.properties,
     });
   }
-  const abscissa = choiceIn("abscissa", options.abscissa ?? "pressure", ["pressure", "density"]);
+  const abscissa = requireChoice("abscissa", options.abscissa ?? "pressure", [
+    "pressure",
+    "density",
+  ]);
   return {
     ...base,
     kind: "departures",

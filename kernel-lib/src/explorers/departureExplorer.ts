@@ -14,9 +14,9 @@ import { departureChart, type DepartureProperty } from "../charts/departures.js"
 import { departuresFromFluid } from "../charts/sample/departuresFromFluid.js";
 import { logGrid } from "../charts/sampling.js";
 import { InputError } from "../errors.js";
+import { requireChoice } from "../validate.js";
 import type { ControlValue, ExplorerControl, ExplorerDefinition } from "./explorerControls.js";
 import {
-  choiceIn,
   fluidSubtitle,
   formatQuantity,
   modelControl,
@@ -121,7 +121,7 @@ export const departureExplorer: ExplorerDefinition<DepartureExplorerState> = {
       return { ...state, properties: chosen };
     }
     if (key === "abscissa") {
-      return { ...state, abscissa: choiceIn("abscissa", value, ["pressure", "density"]) };
+      return { ...state, abscissa: requireChoice("abscissa", value, ["pressure", "density"]) };
     }
     throw unknownControl(key, ["temperatureK", "x.<i>", "model", "properties", "abscissa"]);
   },

@@ -66,26 +66,6 @@ export function numberIn(
   return value;
 }
 
-/**
- * A value that must be one of a few fixed strings (an abscissa choice, ...). The error lists them
- * quoted: '"pressure" or "density"'.
- */
-export function choiceIn<T extends string>(
-  input: string,
-  value: unknown,
-  choices: readonly T[],
-): T {
-  if (!(typeof value === "string" && (choices as readonly string[]).includes(value))) {
-    throw new InputError({
-      input,
-      unit: "-",
-      validRange: choices.map((c) => `"${c}"`).join(" or "),
-      received: value,
-    });
-  }
-  return value as T;
-}
-
 /** Applies the model selector: the id must be one the explorer offers. */
 export function modelIn(state: ExplorerStateBase, value: ControlValue): ExplorerStateBase["model"] {
   if (typeof value !== "string" || !(state.models as readonly string[]).includes(value)) {

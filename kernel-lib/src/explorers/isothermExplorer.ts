@@ -13,7 +13,6 @@ import { isothermChart } from "../charts/isotherms.js";
 import { isothermsFromModel } from "../charts/sample/isothermsFromModel.js";
 import type { ControlValue, ExplorerDefinition } from "./explorerControls.js";
 import {
-  choiceIn,
   fluidSubtitle,
   formatQuantity,
   modelControl,
@@ -25,6 +24,7 @@ import {
 import type { IsothermExplorerState } from "./explorerState.js";
 import type { ExplorerFluids } from "./explorerFluids.js";
 import { InputError } from "../errors.js";
+import { requireChoice } from "../validate.js";
 import type { ResidualModel } from "../eos/types.js";
 import type { SampledDome } from "../charts/sample/saturationFromModel.js";
 
@@ -75,7 +75,7 @@ export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
     }
     if (key === "model") return { ...state, model: modelIn(state, value) };
     if (key === "abscissa") {
-      return { ...state, abscissa: choiceIn("abscissa", value, ["molarVolume", "density"]) };
+      return { ...state, abscissa: requireChoice("abscissa", value, ["molarVolume", "density"]) };
     }
     throw unknownControl(key, ["temperatureK", "model", "abscissa"]);
   },

@@ -6,12 +6,11 @@
  * density (1/b of a cubic) or, for a reference equation without one, a liquid density from its
  * lowest temperature (samplingDensityLimit.ts).
  */
-import { InputError } from "../../errors.js";
 import type { ResidualModel } from "../../eos/types.js";
 import { equalAreaIsotherm } from "../../phase/equalAreaIsotherm.js";
 import { locateCriticalPoint } from "../../phase/criticalPoint.js";
 import { pressureFromResidual } from "../../state/properties.js";
-import { requirePositive } from "../../validate.js";
+import { requireChoice, requirePositive } from "../../validate.js";
 import type { IsothermChartCurve } from "../isotherms.js";
 import { isothermDensityGrid } from "../sampling.js";
 import { tryPoint } from "./sampleGuard.js";
@@ -57,14 +56,7 @@ export function isothermsFromModel(
   const x = options.x ?? [1];
   const pure = x.length === 1;
   const insideDome = options.insideDome;
-  if (insideDome !== undefined && insideDome !== "loop" && insideDome !== "tie-line") {
-    throw new InputError({
-      input: "insideDome",
-      unit: "-",
-      validRange: '"loop" or "tie-line"',
-      received: insideDome,
-    });
-  }
+  if (insideDome !== undefined) requireChoice("insideDome", insideDome, ["loop", "tie-line"]);
   const showEqualArea = options.equalArea ?? true;
   const Tc =
     pure && (showEqualArea || insideDome !== "loop")
