@@ -4,11 +4,11 @@
  * chart (principle of corresponding states: van der Waals 1873; charts after Nelson and Obert,
  * Chem. Eng. 61 (1954) 203). Works for any model: the caller samples Z(Tr, Pr).
  */
-import { InputError } from "../errors.js";
 import { requirePositive } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import {
   checkArray,
+  checkNonEmptyArray,
   curveRows,
   planAxis,
   positionEncoding,
@@ -47,15 +47,7 @@ export function compressibilityChart(
   isotherms: readonly ReducedIsotherm[],
   options: CompressibilityChartOptions = {},
 ): ChartSpec {
-  const list = checkArray("isotherms", isotherms);
-  if (list.length === 0) {
-    throw new InputError({
-      input: "isotherms",
-      unit: "-",
-      validRange: "at least one isotherm",
-      received: isotherms,
-    });
-  }
+  const list = checkNonEmptyArray("isotherms", isotherms, "at least one isotherm");
   const warnings = new WarningList();
   const xAxis = planAxis(
     "dimensionless",

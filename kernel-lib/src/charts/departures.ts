@@ -9,7 +9,7 @@ import { requireChoice, requireCount } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
 import {
-  checkArray,
+  checkNonEmptyArray,
   checkSize,
   curveRows,
   planAxis,
@@ -99,15 +99,7 @@ export function departureChart(
   curves: readonly DepartureCurve[],
   options: DepartureChartOptions = {},
 ): ChartSpec {
-  const list = checkArray("curves", curves);
-  if (list.length === 0) {
-    throw new InputError({
-      input: "curves",
-      unit: "-",
-      validRange: "at least one isotherm",
-      received: curves,
-    });
-  }
+  const list = checkNonEmptyArray("curves", curves, "at least one isotherm");
   const props = Array.isArray(options.property) ? [...options.property] : [options.property ?? "h"];
   if (props.length === 0 || props.some((p) => !PROPERTIES.includes(p as DepartureProperty))) {
     throw new InputError({

@@ -18,6 +18,7 @@ import {
 } from "./saturationInput.js";
 import {
   checkArray,
+  checkNonEmptyArray,
   curveRows,
   lineTooltip,
   planAxis,
@@ -97,15 +98,7 @@ export function isothermChart(
   data: IsothermChartData,
   options: IsothermChartOptions = {},
 ): ChartSpec {
-  const isotherms = checkArray("isotherms", data.isotherms);
-  if (isotherms.length === 0) {
-    throw new InputError({
-      input: "isotherms",
-      unit: "-",
-      validRange: "at least one isotherm",
-      received: data.isotherms,
-    });
-  }
+  const isotherms = checkNonEmptyArray("isotherms", data.isotherms, "at least one isotherm");
   const saturation = checkSaturation(data.saturation);
   const critical = checkCritical(data.critical);
   const xKind = requireChoice("x", options.x ?? "molarVolume", ["molarVolume", "density"]);

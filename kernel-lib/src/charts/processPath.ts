@@ -9,7 +9,7 @@ import { chartMeta, type ChartSpec } from "./chartSpec.js";
 import { resolveUnit, toDisplay, type UnitChoice } from "./displayUnits.js";
 import { energyBasis } from "./energyBasis.js";
 import {
-  checkArray,
+  checkNonEmptyArray,
   planAxis,
   positionEncoding,
   topLevel,
@@ -153,15 +153,7 @@ function pathLayers(
   yAxis: AxisPlan,
   perBasis: (v: number) => number,
 ): Record<string, unknown>[] {
-  const list = checkArray("states", states);
-  if (list.length === 0) {
-    throw new InputError({
-      input: "states",
-      unit: "-",
-      validRange: "at least one state",
-      received: states,
-    });
-  }
+  const list = checkNonEmptyArray("states", states, "at least one state");
   const rows = list.map((s, i) => {
     let x: number;
     let y: number;

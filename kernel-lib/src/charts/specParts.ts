@@ -225,6 +225,22 @@ export function checkArray<T>(input: string, value: readonly T[] | undefined): r
   return value;
 }
 
+/**
+ * Checks that a list input is an array with at least one element; `validRange` says what it must
+ * hold ("at least one isotherm"). The error carries the value as given.
+ */
+export function checkNonEmptyArray<T>(
+  input: string,
+  value: readonly T[] | undefined,
+  validRange: string,
+): readonly T[] {
+  const list = checkArray(input, value);
+  if (list.length === 0) {
+    throw new InputError({ input, unit: "-", validRange, received: value });
+  }
+  return list;
+}
+
 /** Formats a number for a label, 4 significant figures, no trailing zeros. */
 export function shortNumber(value: number): string {
   if (!Number.isFinite(value)) return String(value);
