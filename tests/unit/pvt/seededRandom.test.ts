@@ -62,6 +62,7 @@ describe("runsTest (Wald & Wolfowitz 1940)", () => {
     const blocks = Array.from({ length: 20 }, (_, i) => (i < 10 ? 1 : -1));
     const r2 = runsTest(blocks);
     expect(r2.runs).toBe(2);
+    // Wald-Wolfowitz runs test (Wald & Wolfowitz 1940, Ann. Math. Stat. 11:147), mean 2 n1 n2 / n + 1,
     // variance 2 n1 n2 (2 n1 n2 - n) / (n^2 (n - 1)) = 200*180/(400*19) = 4.7368
     expect(r2.z).toBeCloseTo((2 - 11) / Math.sqrt(36000 / 7600), 12);
   });

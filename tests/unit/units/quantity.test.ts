@@ -103,6 +103,8 @@ describe("parseQuantity", () => {
 
 describe("formatQuantity", () => {
   it("writes SI values in the requested unit", () => {
+    // 1 atm = 101325 Pa exactly; 1 psi = 6894.757 Pa (from memory of NIST SP 811, 2008, App. B.8),
+    // so 1 atm = 14.6959 psia; 77 degF = 298.15 K by the exact Fahrenheit definition.
     expect(formatQuantity(2_601_325, "barg")).toBe("25 barg");
     expect(formatQuantity(298.15, "degF", { significantDigits: 4 })).toBe("77 degF");
     expect(formatQuantity(273.15, "degC")).toBe("0 degC");
