@@ -98,10 +98,13 @@ export interface ResidualModel {
    * state layer uses it only to label phases ("vapor", "liquid", "supercritical").
    */
   pseudoCritical?(x: readonly number[]): PseudoCriticalPoint;
-  /** Optional: warnings for a state outside the model's validity range (empty when inside). */
+  /**
+   * Optional: warnings for a state outside the model's validity range (empty when inside; the
+   * empty list may be shared, so treat the result as read-only).
+   */
   checkValidity?(
     temperatureK: number,
     densityMolPerM3: number,
     x: readonly number[],
-  ): ResultWarning[];
+  ): readonly ResultWarning[];
 }

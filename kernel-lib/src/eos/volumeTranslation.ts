@@ -131,7 +131,7 @@ export function withVolumeTranslation(
           return { ...p, densityMolPerM3: 1 / (1 / p.densityMolPerM3 - c) };
         }
       : undefined,
-    checkValidity: (T: number, rho: number, x: readonly number[]): ResultWarning[] => {
+    checkValidity: (T: number, rho: number, x: readonly number[]): readonly ResultWarning[] => {
       const c = mixShift(x);
       return base.checkValidity ? base.checkValidity(T, rho / (1 + c * rho), x) : [];
     },

@@ -34,6 +34,10 @@ import {
 } from "../state/inversions.js";
 import type { DepartureMethod, FluidBinding, FluidState } from "../state/types.js";
 
+// the composition of a pure fluid when none is given, shared and never written to (states copy
+// x). Not frozen: a frozen array has other elements kinds and slowed every state call by half.
+const PURE: readonly number[] = [1];
+
 /** Per-component overrides of the table's constants (SI). */
 export interface ConstantOverrides {
   /** K */
@@ -274,7 +278,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
   };
   const xOf = (x: readonly number[] | undefined): readonly number[] => {
     if (x !== undefined) return x;
-    if (components.length === 1) return [1];
+    if (components.length === 1) return PURE;
     throw new InputError({
       input: "x",
       unit: "mol/mol",

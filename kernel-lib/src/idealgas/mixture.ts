@@ -93,6 +93,9 @@ export function idealGasMixture(
   const fast = prepareFastPath(list, referenceState, components);
   // one scratch record per mixture for the pure values of the fast path (no allocation per call)
   const scratch: CpAndIntegrals = { cp: 0, hFrom298: 0, sFrom298: 0 };
+  // R ln(P / P_ref) of the last fast-path call, and its pressure
+  let lastPressurePa = NaN;
+  let lastPressureTerm = NaN;
 
   function at(temperatureK: number, pressurePa: number, x: readonly number[]): IdealGasProperties {
     requirePositive("temperatureK", temperatureK, "K");
@@ -132,8 +135,13 @@ export function idealGasMixture(
     let h = 0;
     let s = 0;
     let cp = 0;
-    // every pure refers its entropy to the same pressure, so R ln(P / P_ref) is taken once
-    const pressureTerm = R * Math.log(pressurePa / fast[0].pressurePa);
+    // every pure refers its entropy to the same pressure, so R ln(P / P_ref) is taken once (and
+    // kept for the next call: the state layer always asks at the same pressure)
+    if (pressurePa !== lastPressurePa) {
+      lastPressureTerm = R * Math.log(pressurePa / fast[0].pressurePa);
+      lastPressurePa = pressurePa;
+    }
+    const pressureTerm = lastPressureTerm;
     for (let i = 0; i < list.length; i++) {
       const xi = x[i];
       if (xi === 0) continue;
@@ -142,7 +150,9 @@ export function idealGasMixture(
       const v = scratch;
       f.unchecked.evaluate(temperatureK, v);
       h += xi * (f.h0 + v.hFrom298 - f.hShift);
-      s += xi * (f.s0 + v.sFrom298 - f.sShift - pressureTerm - R * Math.log(xi));
+      // ideal mixing, R ln x_i (0 for a pure component, without the logarithm)
+      const mixing = xi === 1 ? 0 : R * Math.log(xi);
+      s += xi * (f.s0 + v.sFrom298 - f.sShift - pressureTerm - mixing);
       cp += xi * v.cp;
     }
     const u = h - R * temperatureK;

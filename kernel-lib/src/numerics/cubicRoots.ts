@@ -218,15 +218,23 @@ function powerOfTwoAtLeast(v: number): number {
  */
 function closedFormCubic(a: number, b: number, c: number, out: Float64Array): number {
   // Rescale x = s y with s a power of two so that |a'|, |b'|, |c'| <= 1: exact, and keeps
-  // a^3, R^2, Q^3 far from overflow and underflow.
-  const size = Math.max(Math.abs(a), Math.sqrt(Math.abs(b)), Math.cbrt(Math.abs(c)));
-  if (size === 0) {
-    out[0] = 0;
-    out[1] = 0;
-    out[2] = 0;
-    return 3;
+  // a^3, R^2, Q^3 far from overflow and underflow. s is the smallest power of two >= size =
+  // max(|a|, |b|^(1/2), |c|^(1/3)); when size lies in (1/2, 1], as for the Z-cubic of an equation
+  // of state, s = 1 is decided from the coefficients themselves, without the root and logarithm.
+  const aa = Math.abs(a);
+  const ab = Math.abs(b);
+  const ac = Math.abs(c);
+  let s = 1;
+  if (!(aa <= 1 && ab <= 1 && ac <= 1 && (aa > 0.5 || ab > 0.25 || ac > 0.125))) {
+    const size = Math.max(aa, Math.sqrt(ab), Math.cbrt(ac));
+    if (size === 0) {
+      out[0] = 0;
+      out[1] = 0;
+      out[2] = 0;
+      return 3;
+    }
+    s = powerOfTwoAtLeast(size);
   }
-  const s = powerOfTwoAtLeast(size);
   const A = a / s;
   const B = b / (s * s);
   const C = c / (s * s * s);

@@ -19,5 +19,8 @@ export function checkDensity(densityMolPerM3: number, input = "densityMolPerM3")
 
 /** Mole fractions: one per component, each in [0, 1], summing to 1 within 1e-9. */
 export function checkComposition(x: readonly number[], componentCount: number, input = "x"): void {
-  checkMoleFractions(x, componentCount, { input });
+  checkMoleFractions(x, componentCount, input === "x" ? DEFAULT_INPUT : { input });
 }
+
+// the options of the usual call, allocated once (this check runs on every state)
+const DEFAULT_INPUT = Object.freeze({ input: "x" });

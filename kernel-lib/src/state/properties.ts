@@ -97,34 +97,52 @@ export interface ResidualSets {
   readonly lnPhi: number[];
 }
 
+// the departure values of the current residualParts call, overwritten by the next call (no
+// allocation in the state loop; read out at once, single-threaded)
+const parts = { lnZ: 0, h: 0, u: 0, sTV: 0, aTV: 0, gTV: 0, sTP: 0, aTP: 0, gTP: 0 };
+
+/** The departure formulas of the header, written once: fills `parts`. */
+function residualParts(temperatureK: number, d: ResidualDerivatives, gasConstant: number): void {
+  const RT = gasConstant * temperatureK;
+  const lnZ = lnZOf(d.aD);
+  parts.lnZ = lnZ;
+  parts.h = RT * (d.aD - d.aT);
+  parts.u = -RT * d.aT;
+  parts.sTV = -gasConstant * (d.a + d.aT);
+  parts.aTV = RT * d.a;
+  parts.gTV = RT * (d.a + d.aD);
+  parts.sTP = parts.sTV + gasConstant * lnZ;
+  parts.aTP = parts.aTV - RT * lnZ;
+  parts.gTP = RT * gibbsOverRTFromLnZ(d.a, d.aD, lnZ);
+}
+
+/** ln phi_i = dnA_i - ln Z (empty when the derivatives carry no dnA). */
+function lnPhiOf(d: ResidualDerivatives, lnZ: number): number[] {
+  const dnA = d.dnA;
+  if (!dnA) return [];
+  const out = new Array<number>(dnA.length);
+  for (let i = 0; i < dnA.length; i++) out[i] = dnA[i] - lnZ;
+  return out;
+}
+
 /** The departure functions of a state from its residual derivatives (formulas in the header). */
 export function residualProperties(
   temperatureK: number,
   d: ResidualDerivatives,
   gasConstant: number = R_CODATA,
 ): ResidualSets {
-  const RT = gasConstant * temperatureK;
-  const lnZ = lnZOf(d.aD);
-  const a = RT * d.a;
-  const u = -RT * d.aT;
-  const s = -gasConstant * (d.a + d.aT);
-  const h = RT * (d.aD - d.aT);
-  const g = RT * (d.a + d.aD);
-  const lnPhi: number[] = [];
-  if (d.dnA) for (let i = 0; i < d.dnA.length; i++) lnPhi.push(d.dnA[i] - lnZ);
+  residualParts(temperatureK, d, gasConstant);
+  const p = parts;
   return {
-    TV: { h, s, u, a, g },
-    TP: {
-      h,
-      s: s + gasConstant * lnZ,
-      u,
-      a: a - RT * lnZ,
-      g: RT * gibbsOverRTFromLnZ(d.a, d.aD, lnZ),
-    },
-    lnZ,
-    lnPhi,
+    TV: { h: p.h, s: p.sTV, u: p.u, a: p.aTV, g: p.gTV },
+    TP: { h: p.h, s: p.sTP, u: p.u, a: p.aTP, g: p.gTP },
+    lnZ: p.lnZ,
+    lnPhi: lnPhiOf(d, p.lnZ),
   };
 }
+
+// the warnings of a state that has none, shared (FluidState.warnings is read-only)
+const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 
 /** Builds the full state record (see the header for every formula). */
 export function assembleState(input: StateInputs): FluidState {
@@ -136,15 +154,16 @@ export function assembleState(input: StateInputs): FluidState {
   const RT = Rg * T;
   const Z = 1 + d.aD;
   const P = rho * RT * Z;
-  const res = residualProperties(T, d, Rg);
-  const hRes = res.TV.h;
-  const uRes = res.TV.u;
-  const aTV = res.TV.a;
-  const sTV = res.TV.s;
-  const gTV = res.TV.g;
-  const sTP = res.TP.s;
-  const aTP = res.TP.a;
-  const gTP = res.TP.g;
+  residualParts(T, d, Rg);
+  const hRes = parts.h;
+  const uRes = parts.u;
+  const sTV = parts.sTV;
+  const aTV = parts.aTV;
+  const gTV = parts.gTV;
+  const sTP = parts.sTP;
+  const aTP = parts.aTP;
+  const gTP = parts.gTP;
+  const lnPhi = lnPhiOf(d, parts.lnZ);
   // derivatives and heat capacities
   const dPdr = dPdRho(T, d, Rg);
   const dPdT = rho * Rg * (1 + d.aD + d.aDT);
@@ -152,26 +171,13 @@ export function assembleState(input: StateInputs): FluidState {
   const cv = ig.cv + cvRes;
   const cp = cv + (T * dPdT * dPdT) / (rho * rho * dPdr);
   const M = input.molarMassKgPerMol;
-  const warnings: ResultWarning[] = input.warnings ? input.warnings.slice() : [];
   const stable = dPdr > 0;
   const w2 = ((cp / cv) * dPdr) / M;
   const speed = stable && w2 > 0 ? Math.sqrt(w2) : NaN;
-  if (!stable) {
-    warnings.push({
-      code: "model-limitation",
-      message: `mechanically unstable state: (dP/drho)_T = ${dPdr.toPrecision(4)} Pa m3/mol <= 0 at T = ${T} K, rho = ${rho} mol/m3 (inside the spinodal); cp, speed of sound and compressibilities are not physical here (speed of sound reported as NaN)`,
-    });
-  }
   const kappaT = 1 / (rho * dPdr);
   const beta = kappaT * dPdT;
   const jt = (T * beta - 1) / (rho * cp);
   const kappaS = ((cp / cv) * rho * dPdr) / P;
-  if (!(Z > 0)) {
-    warnings.push({
-      code: "model-limitation",
-      message: `P = ${P.toPrecision(4)} Pa <= 0 at T = ${T} K, rho = ${rho} mol/m3: departures at the same T and P and fugacity coefficients do not exist there (NaN); absolute h, s, u, a, g are still defined`,
-    });
-  }
   // absolute: ideal gas at the same T and density plus the TV residuals
   const lnPressureShift = Math.log((rho * RT) / ig.pressurePa);
   const h = ig.h + hRes;
@@ -179,9 +185,25 @@ export function assembleState(input: StateInputs): FluidState {
   const u = ig.u + uRes;
   const a = ig.a + RT * lnPressureShift + aTV;
   const g = ig.g + RT * lnPressureShift + gTV;
-  const lnPhi = res.lnPhi;
-  // indexed loop: for-of over the (usually empty, frozen) ideal-gas list showed in the profile
-  for (let i = 0; i < ig.warnings.length; i++) warnings.push(ig.warnings[i]);
+  const given = input.warnings;
+  let warnings: readonly ResultWarning[] = NO_WARNINGS;
+  if (!stable || !(Z > 0) || (given !== undefined && given.length > 0) || ig.warnings.length > 0) {
+    const list: ResultWarning[] = given ? given.slice() : [];
+    if (!stable) {
+      list.push({
+        code: "model-limitation",
+        message: `mechanically unstable state: (dP/drho)_T = ${dPdr.toPrecision(4)} Pa m3/mol <= 0 at T = ${T} K, rho = ${rho} mol/m3 (inside the spinodal); cp, speed of sound and compressibilities are not physical here (speed of sound reported as NaN)`,
+      });
+    }
+    if (!(Z > 0)) {
+      list.push({
+        code: "model-limitation",
+        message: `P = ${P.toPrecision(4)} Pa <= 0 at T = ${T} K, rho = ${rho} mol/m3: departures at the same T and P and fugacity coefficients do not exist there (NaN); absolute h, s, u, a, g are still defined`,
+      });
+    }
+    for (let i = 0; i < ig.warnings.length; i++) list.push(ig.warnings[i]);
+    warnings = dedupe(list);
+  }
   return {
     temperatureK: T,
     pressurePa: P,
@@ -193,7 +215,7 @@ export function assembleState(input: StateInputs): FluidState {
     molar: { h, s, u, a, g, cp, cv },
     mass: { h: h / M, s: s / M, u: u / M, a: a / M, g: g / M, cp: cp / M, cv: cv / M },
     residual: { h: hRes, s: sTP, u: uRes, a: aTP, g: gTP, cp: cp - ig.cp, cv: cvRes },
-    residualTV: res.TV,
+    residualTV: { h: hRes, s: sTV, u: uRes, a: aTV, g: gTV },
     lnPhi,
     speedOfSoundMPerS: speed,
     jouleThomsonKPerPa: jt,
@@ -206,7 +228,7 @@ export function assembleState(input: StateInputs): FluidState {
     model: input.model,
     referenceState: ig.referenceState,
     departureMethod: input.departureMethod,
-    warnings: dedupe(warnings),
+    warnings,
   };
 }
 

@@ -9,7 +9,7 @@ import { R as R_CODATA } from "../constants.js";
 import { OutOfRangeError, PhaseUnavailableError, type ResultWarning } from "../errors.js";
 import type { ResidualDerivatives } from "../eos/types.js";
 import type { IdealGasProperties, ReferenceState } from "../idealgas/types.js";
-import { leanIdealGasOf, type IdealGasValues } from "../idealgas/leanMixture.js";
+import { leanIdealGasOf, type IdealGasValues, type LeanIdealGas } from "../idealgas/leanMixture.js";
 import { assembleState, dPdRho, residualGibbsTP } from "./properties.js";
 import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
 import { findDensityRoots, type DensityRootOptions } from "./findDensityRoots.js";
@@ -51,7 +51,9 @@ interface IdealCacheEntry {
   T: number;
   x: number[];
   value: IdealGasProperties;
-  /** The record the mixture's lean path writes into (idealgas/leanMixture.ts). */
+  /** The mixture's lean path (idealgas/leanMixture.ts), looked up once per binding. */
+  readonly leanPath: LeanIdealGas | undefined;
+  /** The record the lean path writes into. */
   readonly lean: IdealGasValues & {
     temperatureK: number;
     pressurePa: number;
@@ -61,6 +63,7 @@ interface IdealCacheEntry {
 }
 const idealCache = new WeakMap<FluidBinding, IdealCacheEntry>();
 const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
+const NO_EXTRA: readonly ExtraWarning[] = Object.freeze([]);
 // the residual request of every state evaluation, allocated once
 const COMPOSITION = Object.freeze({ composition: true });
 
@@ -82,6 +85,7 @@ function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): Ide
       T: NaN,
       x: [],
       value: undefined as unknown as IdealGasProperties,
+      leanPath: leanIdealGasOf(mixture),
       lean: {
         temperatureK: NaN,
         pressurePa: IDEAL_GAS_PRESSURE_PA,
@@ -99,7 +103,7 @@ function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): Ide
     idealCache.set(binding, entry);
   }
   // the inputs were checked by the public entry point, as the lean path requires
-  const lean = leanIdealGasOf(binding.idealGas);
+  const lean = entry.leanPath;
   if (lean !== undefined && lean(T, IDEAL_GAS_PRESSURE_PA, x, entry.lean)) {
     entry.lean.temperatureK = T;
     entry.value = entry.lean;
@@ -112,6 +116,12 @@ function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): Ide
   return entry.value;
 }
 
+/** A warning added by the state layer to the model's own. */
+type ExtraWarning = {
+  code: "outside-validity" | "extrapolated" | "model-limitation" | "accuracy";
+  message: string;
+};
+
 function finish(
   binding: FluidBinding,
   T: number,
@@ -119,10 +129,7 @@ function finish(
   x: readonly number[],
   residual: ResidualDerivatives,
   phase: PhaseLabel,
-  extraWarnings: readonly {
-    code: "outside-validity" | "extrapolated" | "model-limitation" | "accuracy";
-    message: string;
-  }[],
+  extraWarnings: readonly ExtraWarning[],
 ): FluidState {
   const model = binding.model;
   const ideal = idealGasAt(binding, T, x);
@@ -173,7 +180,7 @@ export function stateAtTRho(
   const Z = 1 + residual.aD;
   const P = densityMolPerM3 * Rg * temperatureK * Z;
   const phase = phaseLabel(model, temperatureK, P, densityMolPerM3, x, "only", Z);
-  return finish(binding, temperatureK, densityMolPerM3, x, residual, phase, []);
+  return finish(binding, temperatureK, densityMolPerM3, x, residual, phase, NO_EXTRA);
 }
 
 /**
@@ -231,18 +238,33 @@ export function stateAtTP(
     ? model.densityRoots(temperatureK, pressurePa, x)
     : findDensityRoots(model, temperatureK, pressurePa, x, options.rootSearch);
   // evaluate every mechanically stable root once (with composition derivatives: the chosen one
-  // needs them, and there are at most a few roots)
-  const stableRhos: number[] = [];
-  const stableResiduals: ResidualDerivatives[] = [];
+  // needs them, and there are at most a few roots), choosing as we go: "vapor" the first stable
+  // root (lowest density), "liquid" the last, "stable" the lowest g_r/RT (the first on a tie)
+  const compareGibbs = request === "stable" && rhos.length > 1;
+  let count = 0;
+  let index = 0;
+  let rho = NaN;
+  let residual: ResidualDerivatives | undefined;
+  let best = Infinity;
   for (let k = 0; k < rhos.length; k++) {
     const r = model.residual(temperatureK, rhos[k], x, COMPOSITION);
-    if (dPdRho(temperatureK, r, model.gasConstant) > 0) {
-      stableRhos.push(rhos[k]);
-      stableResiduals.push(r);
+    if (!(dPdRho(temperatureK, r, model.gasConstant) > 0)) continue;
+    let take = count === 0 || request === "liquid";
+    if (compareGibbs) {
+      const g = residualGibbsTP(r);
+      if (count === 0 || g < best) {
+        best = g;
+        take = true;
+      }
     }
+    if (take) {
+      index = count;
+      rho = rhos[k];
+      residual = r;
+    }
+    count++;
   }
-  const count = stableRhos.length;
-  if (count === 0) {
+  if (residual === undefined) {
     throw new PhaseUnavailableError(
       `${model.info.name} has no mechanically stable density root at T = ${temperatureK} K, P = ${pressurePa} Pa` +
         (rhos.length > 0
@@ -250,37 +272,23 @@ export function stateAtTP(
           : " (no root at all: the pressure is beyond what the equation can reach at this temperature)"),
     );
   }
-  let index = 0;
-  if (count > 1) {
-    if (request === "liquid") index = count - 1;
-    else if (request === "stable") {
-      let best = residualGibbsTP(stableResiduals[0]);
-      for (let k = 1; k < count; k++) {
-        const g = residualGibbsTP(stableResiduals[k]);
-        if (g < best) {
-          best = g;
-          index = k;
-        }
-      }
-    }
-  }
   const position: "lowest" | "highest" | "only" =
     count === 1 ? "only" : index === 0 ? "lowest" : index === count - 1 ? "highest" : "only";
-  const chosen = { densityMolPerM3: stableRhos[index] };
-  const residual = stableResiduals[index];
   const Z = 1 + residual.aD;
-  const label = phaseLabel(model, temperatureK, pressurePa, chosen.densityMolPerM3, x, position, Z);
-  const warnings: { code: "model-limitation"; message: string }[] = [];
+  const label = phaseLabel(model, temperatureK, pressurePa, rho, x, position, Z);
   if (count === 1 && request !== "stable" && label !== "supercritical" && label !== request) {
     throw new PhaseUnavailableError(
-      `no ${request} root at T = ${temperatureK} K, P = ${pressurePa} Pa: ${model.info.name} has a single stable density root there (${chosen.densityMolPerM3.toPrecision(6)} mol/m3, Z = ${Z.toPrecision(5)}), and it is ${label}-like (rule: state/phaseLabel.ts)`,
+      `no ${request} root at T = ${temperatureK} K, P = ${pressurePa} Pa: ${model.info.name} has a single stable density root there (${rho.toPrecision(6)} mol/m3, Z = ${Z.toPrecision(5)}), and it is ${label}-like (rule: state/phaseLabel.ts)`,
     );
   }
-  if (count === 1 && request !== "stable" && label === "supercritical") {
-    warnings.push({
-      code: "model-limitation",
-      message: `requested phase "${request}" at a supercritical state (T and P above the (pseudo-)critical point): the single root is returned, and vapor and liquid are not distinct there`,
-    });
-  }
-  return finish(binding, temperatureK, chosen.densityMolPerM3, x, residual, label, warnings);
+  const warnings =
+    count === 1 && request !== "stable" && label === "supercritical"
+      ? [
+          {
+            code: "model-limitation" as const,
+            message: `requested phase "${request}" at a supercritical state (T and P above the (pseudo-)critical point): the single root is returned, and vapor and liquid are not distinct there`,
+          },
+        ]
+      : NO_EXTRA;
+  return finish(binding, temperatureK, rho, x, residual, label, warnings);
 }

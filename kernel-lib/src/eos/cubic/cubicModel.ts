@@ -32,6 +32,9 @@ import { resolveInteractions, type InteractionMatrix } from "../interaction/inte
 import { alphaSlope, evaluatePsi, type PsiValues } from "./alphaFunctions.js";
 import { CUBIC_FAMILIES, type CubicFamily, type CubicModelId } from "./cubicFamilies.js";
 
+// the answer of checkValidity inside the range, shared (read-only)
+const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
+
 // Z roots of the current densityRoots call, reused (read out before the next call: no allocation)
 const Z_ROOTS = new Float64Array(3);
 
@@ -419,22 +422,27 @@ class CubicModelImpl implements CubicModel {
     };
   }
 
-  checkValidity(temperatureK: number, _rho: number, x: readonly number[]): ResultWarning[] {
-    const warnings: ResultWarning[] = [];
+  checkValidity(
+    temperatureK: number,
+    _rho: number,
+    x: readonly number[],
+  ): readonly ResultWarning[] {
     const kind = this.family.alpha;
-    if (kind === "constant" || kind === "redlich-kwong") return warnings;
+    if (kind === "constant" || kind === "redlich-kwong") return NO_WARNINGS;
     // psi_i at T is in the mixture cache already (the state layer asks after residual() at the
     // same T and x); the cache holds sqrt(a_c,i) psi_i, whose sign is that of psi_i
     this.update(temperatureK, x);
+    let warnings: ResultWarning[] | undefined;
     for (let i = 0; i < this.n; i++) {
       if (!(this.psi[i] > 0)) {
+        warnings ??= [];
         warnings.push({
           code: "model-limitation",
           message: `${this.components[i].id}: the Soave-type alpha function passes its minimum at T = ${temperatureK} K (Tr = ${(temperatureK / this.tc[i]).toFixed(2)}); a(T) rises again with T there, which is unphysical`,
         });
       }
     }
-    return warnings;
+    return warnings ?? NO_WARNINGS;
   }
 }
 
