@@ -236,13 +236,15 @@ function compilePolynomial(correlation: PolynomialCp): {
     // sum_(k>=1) a_k T^k / k about the centre, without its constant term (it cancels)
     const p = a.map((ak, k) => (k === 0 ? 0 : ak / k));
     const overT = shiftPolynomial(p, centre).slice(1);
+    // Float64Array copies: the component's coefficient arrays are frozen, and a frozen array keeps
+    // its numbers boxed, which showed in the profile of every state evaluation
     return {
       maxTemperatureK: segment.maxTemperatureK,
-      coefficients: a,
+      coefficients: Float64Array.from(a),
       centre,
       a0: a.length > 0 ? a[0] : 0,
-      cpIntegral,
-      overT,
+      cpIntegral: Float64Array.from(cpIntegral),
+      overT: Float64Array.from(overT),
       hOffset: correlationCpIntegral(correlation, STANDARD_TEMPERATURE_K, centre),
       sOffset: correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, centre),
     };

@@ -171,6 +171,8 @@ export function assembleState(input: StateInputs): FluidState {
   const cv = ig.cv + cvRes;
   const cp = cv + (T * dPdT * dPdT) / (rho * rho * dPdr);
   const M = input.molarMassKgPerMol;
+  // one division for the seven specific values (a multiply differs from dividing by at most 1 ulp)
+  const perMass = 1 / M;
   const stable = dPdr > 0;
   const w2 = ((cp / cv) * dPdr) / M;
   const speed = stable && w2 > 0 ? Math.sqrt(w2) : NaN;
@@ -213,7 +215,15 @@ export function assembleState(input: StateInputs): FluidState {
     Z,
     phase: input.phase,
     molar: { h, s, u, a, g, cp, cv },
-    mass: { h: h / M, s: s / M, u: u / M, a: a / M, g: g / M, cp: cp / M, cv: cv / M },
+    mass: {
+      h: h * perMass,
+      s: s * perMass,
+      u: u * perMass,
+      a: a * perMass,
+      g: g * perMass,
+      cp: cp * perMass,
+      cv: cv * perMass,
+    },
     residual: { h: hRes, s: sTP, u: uRes, a: aTP, g: gTP, cp: cp - ig.cp, cv: cvRes },
     residualTV: { h: hRes, s: sTV, u: uRes, a: aTV, g: gTV },
     lnPhi,

@@ -24,6 +24,9 @@ export interface StateAtTPOptions {
   rootSearch?: DensityRootOptions;
 }
 
+// the options when none are given, shared (read only; saves an object per state)
+const DEFAULT_OPTIONS: StateAtTPOptions = Object.freeze({});
+
 /** One density root at (T, P) with what decides between roots. */
 export interface DensityRoot {
   /** mol/m3 */
@@ -227,7 +230,7 @@ export function stateAtTP(
   temperatureK: number,
   pressurePa: number,
   x: readonly number[],
-  options: StateAtTPOptions = {},
+  options: StateAtTPOptions = DEFAULT_OPTIONS,
 ): FluidState {
   const model = binding.model;
   checkTemperature(temperatureK);
