@@ -41,6 +41,11 @@ const RATIOS: readonly { case: string; baseline: string; meaning: string }[] = [
     meaning: "cost of the state with the ideal-gas correlations over the engine alone",
   },
   {
+    case: "stability-mix10-TP",
+    baseline: "pr-mix10-TP",
+    meaning: "cost of the tangent-plane stability test in single-phase states of the same gas",
+  },
+  {
     case: "pr-mix10-TP",
     baseline: "pr-mix10-TP-residual-only",
     meaning: "cost of the state with the ideal-gas correlations over the engine alone",

@@ -143,6 +143,10 @@ export class RequestError extends IsochorError {
  * a model used outside its intended domain. Results carry `warnings: Warning[]`.
  */
 export interface ResultWarning {
-  code: "outside-validity" | "extrapolated" | "model-limitation" | "accuracy";
+  /**
+   * "phase-split": a mixture is not stable as one phase at these conditions (tangent-plane test),
+   * so the single-phase state is metastable or unstable.
+   */
+  code: "outside-validity" | "extrapolated" | "model-limitation" | "accuracy" | "phase-split";
   message: string;
 }

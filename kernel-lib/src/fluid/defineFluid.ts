@@ -33,6 +33,7 @@ import {
   type InversionResult,
 } from "../state/inversions.js";
 import type { DepartureMethod, FluidBinding, FluidState } from "../state/types.js";
+import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../phase/stability.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
 // x). Not frozen: a frozen array has other elements kinds and slowed every state call by half.
@@ -95,6 +96,16 @@ export interface Fluid extends FluidBinding {
   stateAtTRho(temperatureK: number, densityMolPerM3: number, x?: readonly number[]): FluidState;
   /** Every density root at (T, P). */
   densityRoots(temperatureK: number, pressurePa: number, x?: readonly number[]): DensityRoot[];
+  /**
+   * Is the mixture stable as one phase at T (K), P (Pa)? The tangent-plane test
+   * (phase/stability.ts), started from Wilson K-factors with this fluid's critical constants.
+   */
+  stabilityAtTP(
+    temperatureK: number,
+    pressurePa: number,
+    x?: readonly number[],
+    options?: StabilityOptions,
+  ): StabilityResult;
   /** T at (P, h) in one phase (valves). */
   temperatureAtPH(
     pressurePa: number,
@@ -295,6 +306,8 @@ export function defineFluid(spec: FluidSpec): Fluid {
     stateAtTP: (T, P, x, options) => stateAtTP(binding, T, P, xOf(x), options),
     stateAtTRho: (T, rho, x) => stateAtTRho(binding, T, rho, xOf(x)),
     densityRoots: (T, P, x) => densityRootsAtTP(binding, T, P, xOf(x)),
+    stabilityAtTP: (T, P, x, options) =>
+      stabilityAtTP(model, T, P, xOf(x), { constants: components, ...options }),
     temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),
     temperatureAtPS: (P, s, x, options) => temperatureAtPS(binding, P, s, xOf(x), options),
   };

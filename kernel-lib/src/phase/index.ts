@@ -1,5 +1,5 @@
 // Public exports of phase/: pure-fluid phase equilibrium (saturation, critical point, phase of a
-// state). Mixture flash calculations will live here too.
+// state) and the stability test of mixtures. Mixture flash calculations will live here too.
 export { saturationAtTemperature, saturationAtPressure } from "./saturation.js";
 export type {
   SaturationOptions,
@@ -32,3 +32,12 @@ export type {
   PureFluidStateResult,
   DomeInversionOptions,
 } from "./twoPhaseState.js";
+export { stabilityAtTP } from "./stability.js";
+export type {
+  StabilityOptions,
+  StabilityResult,
+  StabilityTrial,
+  TrialOutcome,
+  TrialStart,
+  WilsonConstants,
+} from "./stability.js";

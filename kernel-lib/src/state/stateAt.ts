@@ -7,13 +7,14 @@
  */
 import { R as R_CODATA } from "../constants.js";
 import { OutOfRangeError, PhaseUnavailableError, type ResultWarning } from "../errors.js";
-import type { ResidualDerivatives } from "../eos/types.js";
+import type { ResidualDerivatives, ResidualModel } from "../eos/types.js";
 import type { IdealGasProperties, ReferenceState } from "../idealgas/types.js";
 import { leanIdealGasOf, type IdealGasValues, type LeanIdealGas } from "../idealgas/leanMixture.js";
 import { assembleState, dPdRho, residualGibbsTP } from "./properties.js";
 import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
 import { findDensityRoots, type DensityRootOptions } from "./findDensityRoots.js";
 import { phaseLabel } from "./phaseLabel.js";
+import { stabilityAtTP } from "../phase/stability.js";
 import type { FluidBinding, FluidState, PhaseLabel, PhaseRequest } from "./types.js";
 
 /** Options of {@link stateAtTP}. */
@@ -22,6 +23,13 @@ export interface StateAtTPOptions {
   phase?: PhaseRequest;
   /** Options of the numerical root search (models without closed-form roots). */
   rootSearch?: DensityRootOptions;
+  /**
+   * Mixtures: run the tangent-plane stability test (phase/stability.ts) and add a "phase-split"
+   * warning when the mixture is not stable as one phase here. Default false: the test costs
+   * tens of single-phase states, and surfaces, inversions and flash loops call this function
+   * many times. Turn it on (or call `stabilityAtTP`) wherever a mixture might be two-phase.
+   */
+  checkStability?: boolean;
 }
 
 // the options when none are given, shared (read only; saves an object per state)
@@ -120,10 +128,28 @@ function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): Ide
 }
 
 /** A warning added by the state layer to the model's own. */
-type ExtraWarning = {
-  code: "outside-validity" | "extrapolated" | "model-limitation" | "accuracy";
-  message: string;
-};
+type ExtraWarning = ResultWarning;
+
+/** The "phase-split" warning of a mixture that is not stable as one phase, or undefined. */
+function splitWarning(
+  model: ResidualModel,
+  T: number,
+  P: number,
+  x: readonly number[],
+): ResultWarning | undefined {
+  const test = stabilityAtTP(model, T, P, x);
+  const notes = test.warnings.map((w) => w.message);
+  if (test.stable) {
+    return notes.length > 0 ? { code: "accuracy", message: notes.join("; ") } : undefined;
+  }
+  const trial = (test.incipientComposition ?? [])
+    .map((v, i) => `${model.info.componentIds[i]} ${v.toPrecision(3)}`)
+    .join(", ");
+  return {
+    code: "phase-split",
+    message: `the mixture is not stable as one phase at T = ${T} K, P = ${P} Pa: the tangent-plane test found a trial phase with tm = ${test.minimumTangentPlaneDistance.toPrecision(3)} < 0 (${trial}); the fluid splits into phases there, this single-phase state is metastable or unstable, and its properties are not those of the real two-phase fluid (isochor has no mixture flash yet)`,
+  };
+}
 
 function finish(
   binding: FluidBinding,
@@ -284,7 +310,7 @@ export function stateAtTP(
       `no ${request} root at T = ${temperatureK} K, P = ${pressurePa} Pa: ${model.info.name} has a single stable density root there (${rho.toPrecision(6)} mol/m3, Z = ${Z.toPrecision(5)}), and it is ${label}-like (rule: state/phaseLabel.ts)`,
     );
   }
-  const warnings =
+  let warnings: readonly ExtraWarning[] =
     count === 1 && request !== "stable" && label === "supercritical"
       ? [
           {
@@ -293,5 +319,9 @@ export function stateAtTP(
           },
         ]
       : NO_EXTRA;
+  if (options.checkStability === true && x.length > 1) {
+    const split = splitWarning(model, temperatureK, pressurePa, x);
+    if (split !== undefined) warnings = warnings.concat(split);
+  }
   return finish(binding, temperatureK, rho, x, residual, label, warnings);
 }
