@@ -150,7 +150,9 @@ function solveInto(
   const raw = rawScratch;
   let count: number;
   if (c3 !== 0) {
-    count = closedFormCubic(c2 / c3, c1 / c3, c0 / c3, raw);
+    // monic already (the Z-cubic of an equation of state): no divisions on the critical path
+    count =
+      c3 === 1 ? closedFormCubic(c2, c1, c0, raw) : closedFormCubic(c2 / c3, c1 / c3, c0 / c3, raw);
   } else if (c2 !== 0) {
     count = quadraticRoots(c2, c1, c0, raw, 0);
   } else if (c1 !== 0) {
@@ -177,7 +179,14 @@ function solveInto(
       if (j !== i && raw[j] !== x) nearest = Math.min(nearest, Math.abs(raw[j] - x));
     }
     let px = horner(c3, c2, c1, c0, x);
-    for (let k = 0; k < maxPolishSteps && px !== 0; k++) {
+    // A single real root whose first Newton step would be below 2 eps |x| (the stopping rule
+    // below, tested with a product instead of the quotient px / dp) stands as the closed form gave
+    // it, without the division. (Several roots are always polished: near a saturation state the
+    // liquid root's last ulps show in the fugacities.)
+    const dp0 = (3 * c3 * x + 2 * c2) * x + c1;
+    const steps =
+      count === 1 && Math.abs(px) <= 2 * EPS * Math.abs(x) * Math.abs(dp0) ? 0 : maxPolishSteps;
+    for (let k = 0; k < steps && px !== 0; k++) {
       const dp = (3 * c3 * x + 2 * c2) * x + c1;
       if (dp === 0 || !Number.isFinite(dp)) break;
       const step = px / dp;
@@ -235,9 +244,9 @@ function closedFormCubic(a: number, b: number, c: number, out: Float64Array): nu
     }
     s = powerOfTwoAtLeast(size);
   }
-  const A = a / s;
-  const B = b / (s * s);
-  const C = c / (s * s * s);
+  const A = s === 1 ? a : a / s;
+  const B = s === 1 ? b : b / (s * s);
+  const C = s === 1 ? c : c / (s * s * s);
 
   const Q = (A * A - 3 * B) / 9; // eq. 5.6.10
   const R = (2 * A * A * A - 9 * A * B + 27 * C) / 54;
