@@ -44,7 +44,8 @@ const USAGE = `usage: isochor eval [request.json | -]
 
 Reads a JSON request from the file (or standard input when absent or "-") and writes the states as
 JSON on standard output. Fields: model, components, x, kij, constants, departure, reference,
-idealGas, phase, states (see the engine documentation). A state is {"T", "P"}, {"T", "rho"},
+idealGas, phase, checkStability (mixtures: tangent-plane test at each T, P state, a split reported
+in its warnings), states (see the engine documentation). A state is {"T", "P"}, {"T", "rho"},
 {"T" or "P", "saturated": "liquid"|"vapor"} or {"T" or "P", "quality"}; model "reference" takes one
 component with a reference equation (water, carbon-dioxide, methane, nitrogen).
 `;
@@ -238,7 +239,10 @@ function evaluate(ev: Evaluator, request: EvalRequest, st: EvalState): EvalState
       case "TP":
         return toResponse(
           ev.kind === "engine"
-            ? ev.fluid.stateAtTP(st.T, st.P, request.x, { phase: request.phase })
+            ? ev.fluid.stateAtTP(st.T, st.P, request.x, {
+                phase: request.phase,
+                checkStability: request.checkStability,
+              })
             : referenceStateTP(ev.fluid, st.T, st.P, { phase: request.phase }),
         );
       case "TRho":

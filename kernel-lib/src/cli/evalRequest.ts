@@ -10,6 +10,9 @@
  *     per-component overrides; null or {} keeps the table), "departure": "closed-form" | "numeric",
  *     "reference": "formation" | {"kind": "zero-at", "T": K, "P": Pa}, "idealGas": "correlation" |
  *     "molecular", "phase": "stable" | "liquid" | "vapor",
+ *     "checkStability": true | false (optional, default false; added after issue 4: mixtures at
+ *       given T and P are run through the tangent-plane test and a split is reported in the
+ *       state's "warnings"),
  *     "states": [{"T": K, "P": Pa} | {"T": K, "rho": mol/m3}
  *                | {"T": K, "saturated": "liquid" | "vapor"} | {"P": Pa, "saturated": ...}
  *                | {"T": K, "quality": 0..1} | {"P": Pa, "quality": 0..1}] }
@@ -63,6 +66,8 @@ export interface EvalRequest {
   readonly reference: ReferenceState;
   readonly idealGas: "correlation" | "molecular";
   readonly phase: PhaseRequest;
+  /** Run the mixture stability test at (T, P) states. Default false. */
+  readonly checkStability: boolean;
   readonly states: readonly EvalState[];
 }
 
@@ -110,6 +115,7 @@ const KNOWN_KEYS = new Set([
   "reference",
   "idealGas",
   "phase",
+  "checkStability",
   "states",
 ]);
 
@@ -237,6 +243,13 @@ export function parseEvalRequest(raw: Json): EvalRequest {
     "correlation",
   );
   const phase = oneOf(raw.phase, "$.phase", ["stable", "liquid", "vapor"] as const, "stable");
+  const checkStability = raw.checkStability ?? false;
+  if (typeof checkStability !== "boolean") {
+    throw new RequestError(
+      "$.checkStability",
+      `expected true or false, got ${describe(raw.checkStability)}`,
+    );
+  }
   let reference: ReferenceState = { kind: "formation" };
   if (raw.reference !== undefined && raw.reference !== "formation") {
     const r = raw.reference;
@@ -269,6 +282,7 @@ export function parseEvalRequest(raw: Json): EvalRequest {
     reference,
     idealGas,
     phase,
+    checkStability,
     states,
   };
 }

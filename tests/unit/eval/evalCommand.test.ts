@@ -105,6 +105,7 @@ describe("isochor eval", () => {
     ],
     ["an unknown constant", { ...request, constants: [{ Tk: 3 }, null] }, "$.constants[0].Tk"],
     ["a bad phase", { ...request, phase: "solid" }, "$.phase"],
+    ["a string checkStability", { ...request, checkStability: "yes" }, "$.checkStability"],
     ["empty states", { ...request, states: [] }, "$.states"],
   ];
   for (const [label, body, path] of malformed) {
@@ -122,6 +123,25 @@ describe("isochor eval", () => {
     const io = fakeIo("{ not json");
     expect(await evalCommand([], io)).toBe(2);
     expect(JSON.parse(io.out).error.path).toBe("$");
+  });
+  it("checkStability reports a split in the state's warnings, and only when asked", () => {
+    // 70 % methane, 30 % n-butane at 280 K, 20 bar must drop liquid: the n-butane partial
+    // pressure, 6 bar, is far above its vapour pressure there (tests/unit/phase/stability.test.ts)
+    const body = {
+      model: "peng-robinson",
+      components: ["methane", "n-butane"],
+      x: [0.7, 0.3],
+      states: [
+        { T: 280, P: 20e5 },
+        { T: 400, P: 5e5 },
+      ],
+    };
+    const checked = runEvalRequest({ ...body, checkStability: true });
+    const [cold, hot] = checked.states as { warnings?: string[] }[];
+    expect(cold.warnings?.some((w) => /not stable as one phase/.test(w))).toBe(true);
+    expect(hot.warnings ?? []).toEqual([]);
+    const unchecked = runEvalRequest(body).states[0] as { warnings?: string[] };
+    expect(unchecked.warnings ?? []).toEqual([]);
   });
   it("constants override the table (Tc changes Z)", () => {
     const base = runEvalRequest({
