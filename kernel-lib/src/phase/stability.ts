@@ -253,7 +253,7 @@ export function stabilityAtTP(
   if (stable && unfinished.length > 0) {
     warnings.push({
       code: "accuracy",
-      message: `stability test at T = ${T} K, P = ${P} Pa: the ${unfinished.map((t) => t.start).join(" and ")} trial did not converge in ${maxIterations} iterations without finding a split (slow near a critical point); the verdict "stable" rests on the other trials`,
+      message: `stability test at T = ${T} K, P = ${P} Pa: the ${unfinished.map((t) => t.start).join(" and ")} trial did not converge in ${maxIterations} iteration${maxIterations === 1 ? "" : "s"} without finding a split (slow near a critical point); the verdict "stable" rests on the other trials`,
     });
   }
   return {

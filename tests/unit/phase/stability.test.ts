@@ -113,6 +113,18 @@ describe("a gas that must drop liquid, and the same gas hot", () => {
     expect(stabilityAtTP(bare, 400, 5e5, feed).stable).toBe(true);
   });
 
+  it("a trial stopped by the iteration cap is reported, with a warning on a 'stable' verdict", () => {
+    const t = gas.stabilityAtTP(400, 5e5, feed, { maxIterations: 1 });
+    expect(t.stable).toBe(true);
+    expect(t.trials.every((trial) => trial.outcome === "not-converged")).toBe(true);
+    expect(t.warnings.map((w) => w.code)).toEqual(["accuracy"]);
+    expect(t.warnings[0].message).toMatch(/did not converge in 1 iteration without/);
+    // a split found on the way is proof enough, converged or not
+    const cold = gas.stabilityAtTP(280, 20e5, feed, { maxIterations: 3 });
+    expect(cold.stable).toBe(false);
+    expect(cold.warnings).toEqual([]);
+  });
+
   it("a pure fluid, or a mixture with one component present, is stable with nothing to test", () => {
     const pure = defineFluid({ components: ["methane"], model: "peng-robinson" });
     const t = pure.stabilityAtTP(150, 10e5);
