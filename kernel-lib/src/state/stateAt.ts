@@ -32,6 +32,10 @@ export interface StateAtTPOptions {
   checkStability?: boolean;
 }
 
+// two stable roots closer than this in g_r/RT count as a tie: (T, P) on the phase boundary. Newton
+// on the saturation conditions leaves about 1e-12 (phase/saturation.ts), rounding of g/RT a few 1e-15
+const TIE_GIBBS_OVER_RT = 1e-9;
+
 // the options when none are given, shared (read only; saves an object per state)
 const DEFAULT_OPTIONS: StateAtTPOptions = Object.freeze({});
 
@@ -275,6 +279,7 @@ export function stateAtTP(
   let rho = NaN;
   let residual: ResidualDerivatives | undefined;
   let best = Infinity;
+  let second = Infinity;
   for (let k = 0; k < rhos.length; k++) {
     const r = model.residual(temperatureK, rhos[k], x, COMPOSITION);
     if (!(dPdRho(temperatureK, r, model.gasConstant) > 0)) continue;
@@ -282,8 +287,11 @@ export function stateAtTP(
     if (compareGibbs) {
       const g = residualGibbsTP(r);
       if (count === 0 || g < best) {
+        second = best;
         best = g;
         take = true;
+      } else if (g < second) {
+        second = g;
       }
     }
     if (take) {
@@ -319,6 +327,14 @@ export function stateAtTP(
           },
         ]
       : NO_EXTRA;
+  // two stable roots of equal Gibbs energy: (T, P) is on the phase boundary (for a pure fluid the
+  // saturation line) within rounding, where either root, or any mix of the two, is the state
+  if (compareGibbs && count > 1 && Math.abs(second - best) <= TIE_GIBBS_OVER_RT) {
+    warnings = warnings.concat({
+      code: "accuracy",
+      message: `T = ${temperatureK} K, P = ${pressurePa} Pa is on the phase boundary of ${model.info.name} within rounding (two stable density roots whose Gibbs energies differ by ${Math.abs(second - best).toExponential(1)} RT): the phases coexist there in any proportion, and the returned ${label} root (${rho.toPrecision(6)} mol/m3) is only one of them; ask for phase "liquid" or "vapor", or give a quality`,
+    });
+  }
   if (options.checkStability === true && x.length > 1) {
     const split = splitWarning(model, temperatureK, pressurePa, x);
     if (split !== undefined) warnings = warnings.concat(split);

@@ -14,6 +14,7 @@ import {
 import { R } from "../../../kernel-lib/src/constants.js";
 import { createModel } from "../../../kernel-lib/src/eos/createModel.js";
 import { comps } from "../eos/helpers.js";
+import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 
 describe("roots and phases (pure propane, Peng-Robinson)", () => {
   const propane = defineFluid({ components: ["propane"], model: "peng-robinson" });
@@ -36,6 +37,19 @@ describe("roots and phases (pure propane, Peng-Robinson)", () => {
     const s = propane.stateAtTP(300, 30e5);
     expect(s.phase).toBe("liquid");
     expect(s.Z).toBeLessThan(0.2);
+  });
+  it("on the saturation line the two roots tie: the state says so and names the way out", () => {
+    // at the model's own saturation pressure the liquid and vapour roots have equal Gibbs energy
+    // (the equal-fugacity condition of saturationAtTemperature, tested in tests/unit/phase)
+    const psat = saturationAtTemperature(propane.model, 300).pressurePa;
+    const on = propane.stateAtTP(300, psat);
+    const tie = on.warnings.find((w) => /on the phase boundary/.test(w.message));
+    expect(tie?.code).toBe("accuracy");
+    expect(tie?.message).toMatch(/ask for phase "liquid" or "vapor", or give a quality/);
+    for (const P of [0.999 * psat, 1.001 * psat]) {
+      expect(propane.stateAtTP(300, P).warnings).toEqual([]);
+    }
+    expect(propane.stateAtTP(300, psat, [1], { phase: "liquid" }).warnings).toEqual([]);
   });
   it("a requested phase that does not exist is refused with the reason", () => {
     // at 300 K and 80 bar PR has a single (liquid) root
