@@ -14,17 +14,6 @@ const require = createRequire(import.meta.url);
 /** A title with markup in it: it must show as text and never run. */
 export const HOSTILE_TITLE = '<script>window.__isochorInjected = 1</script><b>bold?</b> & "quotes"';
 
-const CSP = [
-  "default-src 'none'",
-  "script-src 'unsafe-inline' 'unsafe-eval'",
-  "style-src 'unsafe-inline'",
-  "img-src data:",
-  "font-src data:",
-  "connect-src 'none'",
-  "form-action 'none'",
-  "base-uri 'none'",
-].join("; ");
-
 /** The explorers on the page: id of the wrapper element -> kind and options. */
 export const PAGE_EXPLORERS = [
   {
@@ -99,6 +88,10 @@ const AMD_STUB = `<script>window.__amdDefines = 0; window.define = function () {
  */
 export async function writeExplorersPage(file, options = {}) {
   const lib = require(join(root, "kernel-lib", "dist", "index.js"));
+  // the records' own policy (kernel-lib/src/records/recordHtml.ts), not a copy of it
+  const csp = require(
+    join(root, "kernel-lib", "dist", "records", "recordHtml.js"),
+  ).CONTENT_SECURITY_POLICY;
   const parts = [];
   for (const e of options.explorers ?? PAGE_EXPLORERS) {
     const html = await lib.explorerHtml(e.kind, e.options);
@@ -106,7 +99,7 @@ export async function writeExplorersPage(file, options = {}) {
   }
   const page = `<!doctype html>
 <html lang="en"><head><meta charset="utf-8">
-<meta http-equiv="Content-Security-Policy" content="${CSP}">
+<meta http-equiv="Content-Security-Policy" content="${csp}">
 <title>isochor explorers test page</title>
 ${options.requireJs ? AMD_STUB : ""}
 ${lib.vegaRuntimeScript()}
