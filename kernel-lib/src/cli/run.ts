@@ -19,6 +19,7 @@ and writes into the output folder:
   <name>.html           the record of the run (every cell and output)
   <name>.record.html    the calculation record started in the notebook with startRecord()
   <name>.record.md      the same record as Markdown (a second record: <name>.record-2.*)
+  <name>.record-C1.svg  each chart of the record, shown by the Markdown
 
 options:
   --out <dir>                output folder (default: out/records under the current directory)

@@ -107,6 +107,17 @@ export async function chartHtml(
   spec: VegaLiteSpec,
   options: ChartHtmlOptions = {},
 ): Promise<string> {
+  return (await chartFigure(spec, options)).html;
+}
+
+/**
+ * {@link chartHtml} with the static SVG it embeds, for writers that also keep the image as a file
+ * (the Markdown form of a calculation record).
+ */
+export async function chartFigure(
+  spec: VegaLiteSpec,
+  options: ChartHtmlOptions = {},
+): Promise<{ html: string; svg: string }> {
   const includeRuntime = options.includeRuntime ?? false;
   const runtimeWaitMs = options.runtimeWaitMs ?? 15000;
   if (!(runtimeWaitMs >= 0) || !Number.isFinite(runtimeWaitMs)) {
@@ -136,7 +147,7 @@ export async function chartHtml(
     options.caption !== undefined
       ? `<figcaption class="isochor-chart-caption" style="font-size:0.9em;opacity:0.8">${escapeHtml(options.caption)}</figcaption>`
       : "";
-  return (
+  const html =
     (includeRuntime ? vegaRuntimeScript() + "\n" : "") +
     `<figure class="isochor-chart" id="${id}" ${CHART_STATE_ATTRIBUTE}="static" style="margin:0.5em 0">` +
     `<div class="isochor-chart-static">${image}</div>` +
@@ -144,6 +155,6 @@ export async function chartHtml(
     `<script type="application/json" class="isochor-chart-spec">${jsonForScript(spec)}</script>` +
     `<script>${bootScript(id, runtimeWaitMs)}</script>` +
     caption +
-    `</figure>`
-  );
+    `</figure>`;
+  return { html, svg };
 }

@@ -47,8 +47,17 @@ function withUnit(value: string, unit: string): string {
   return unit === "" || unit === "\\-" || unit === "-" ? value : `${value} ${unit}`;
 }
 
+/** Options of {@link calculationRecordMarkdown}. */
+export interface CalculationMarkdownOptions {
+  /** The image file (relative to the Markdown) of a chart, by chart id; undefined: not drawn. */
+  readonly chartImage?: (chartId: string) => string | undefined;
+}
+
 /** The record as Markdown text. */
-export function calculationRecordMarkdown(c: CalculationRecordContent): string {
+export function calculationRecordMarkdown(
+  c: CalculationRecordContent,
+  options: CalculationMarkdownOptions = {},
+): string {
   const m = escapeMarkdown;
   const env = c.environment;
   const out: string[] = [];
@@ -139,10 +148,19 @@ export function calculationRecordMarkdown(c: CalculationRecordContent): string {
       const what = [chart.caption, chart.title]
         .find((s) => s !== undefined)
         ?.replace(/[.\s]+$/, "");
+      const image = options.chartImage?.(chart.id);
+      const where = image !== undefined ? "chart" : "chart, drawn in the HTML record";
       out.push(
-        `**${chart.id}** (chart, drawn in the HTML record)${what !== undefined ? `: ${m(what)}` : ""}. Basis: ${basisText(chart.basis)}.`,
+        `**${chart.id}** (${where})${what !== undefined ? `: ${m(what)}` : ""}. Basis: ${basisText(chart.basis)}.`,
         "",
       );
+      if (image !== undefined) {
+        // the file name is made by the runner from the notebook's name; the alt text is escaped
+        out.push(
+          `![${m(chart.id + (what !== undefined ? `: ${what}` : ""))}](${encodeURI(image)})`,
+          "",
+        );
+      }
     }
   }
   heading("Warnings raised");

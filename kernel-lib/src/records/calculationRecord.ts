@@ -3,7 +3,8 @@
  * SI, with their sources), the models (citations, reference state, validity, k_ij provenance), the
  * results tables and charts (each tied to the model and inputs it used), the warnings the engine
  * raised, the cautions, and the environment. It shows itself in a cell (`show()`), and
- * `isochor run` writes it as `<notebook>.record.html` and `<notebook>.record.md`.
+ * `isochor run` writes it as `<notebook>.record.html` and `<notebook>.record.md` (with each chart
+ * as `<notebook>.record-C1.svg` ... beside it, drawn by the Markdown).
  *
  *   startRecord({ question }) -> input() / model() -> results() / chart() -> answer() -> show()
  *                                 ids I1.., M1..       ids T1.., C1.. (basis: M and I ids)
@@ -21,7 +22,7 @@ import type { TableColumn, TableOptions } from "../tables/columns.js";
 import { tableHtml } from "../tables/tableHtml.js";
 import { tableMarkdown } from "../tables/tableText.js";
 import { chartMeta } from "../charts/chartSpec.js";
-import { chartHtml } from "../display/chartHtml.js";
+import { chartFigure } from "../display/chartHtml.js";
 import { displaySession } from "../display/displaySession.js";
 import { vegaRuntimeScript } from "../display/vegaRuntime.js";
 import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
@@ -40,7 +41,11 @@ import {
 } from "./calculationHtml.js";
 import { escapeHtml } from "../display/escapeHtml.js";
 import { calculationRecordMarkdown } from "./calculationMarkdown.js";
-import { registerRecord } from "./recordRegistry.js";
+import {
+  registerRecord,
+  type RenderFilesOptions,
+  type RenderedRecordFiles,
+} from "./recordRegistry.js";
 
 /** Options of {@link startRecord}. */
 export interface StartRecordOptions {
@@ -256,6 +261,8 @@ export class CalculationRecord {
   private readonly pending = new Set<Promise<unknown>>();
   private tableCount = 0;
   private chartCount = 0;
+  /** The static SVG of each chart, by chart id (for the Markdown form's image files). */
+  private readonly chartSvgs = new Map<string, string>();
 
   /** @internal Use {@link startRecord}. */
   constructor(options: StartRecordOptions) {
@@ -510,10 +517,11 @@ export class CalculationRecord {
       chart: { id, caption, basis, html: "" },
     };
     this.itemList.push(slot); // keeps its place even if another chart finishes first
-    const work = chartHtml(spec, { caption: caption !== undefined ? `${id}. ${caption}` : id });
+    const work = chartFigure(spec, { caption: caption !== undefined ? `${id}. ${caption}` : id });
     this.pending.add(work);
     try {
-      const html = await work;
+      const { html, svg } = await work;
+      this.chartSvgs.set(id, svg);
       const title = chartTitle(spec);
       slot.chart = withSummary({ id, title, caption, basis, html }, `${id} recorded (chart)`);
     } catch (error) {
@@ -639,7 +647,10 @@ export class CalculationRecord {
     return calculationRecordDocument(this.content());
   }
 
-  /** The record as Markdown (charts are listed; they are drawn in the HTML record). */
+  /**
+   * The record as Markdown (charts are listed; they are drawn in the HTML record, and in the
+   * Markdown files `isochor run` writes, which come with the charts as SVG files).
+   */
   async markdown(): Promise<string> {
     await this.settled();
     return calculationRecordMarkdown(this.content());
@@ -707,13 +718,25 @@ export class CalculationRecord {
     return { modelId, inputIds };
   }
 
-  /** @internal What the runner asks for. */
-  async renderFiles(): Promise<{ html: string; markdown: string }> {
+  /**
+   * @internal What the runner asks for. With `imageBase`, every chart is also an SVG file named
+   * `<imageBase>-<chart id>.svg`, which the Markdown shows (it is written beside the Markdown).
+   */
+  async renderFiles(options: RenderFilesOptions = {}): Promise<RenderedRecordFiles> {
     await this.settled();
     const content = this.content();
+    const base = options.imageBase;
+    const images =
+      base === undefined
+        ? []
+        : [...this.chartSvgs].map(([id, svg]) => ({ file: `${base}-${id}.svg`, content: svg }));
+    const fileOf = new Map<string, string>();
+    if (base !== undefined)
+      for (const id of this.chartSvgs.keys()) fileOf.set(id, `${base}-${id}.svg`);
     return {
       html: calculationRecordDocument(content),
-      markdown: calculationRecordMarkdown(content),
+      markdown: calculationRecordMarkdown(content, { chartImage: (id) => fileOf.get(id) }),
+      images,
     };
   }
 }
@@ -757,7 +780,7 @@ export function basisLinks(anchor: string, basis: ResolvedBasis): string {
 export function startRecord(options: StartRecordOptions): CalculationRecord {
   const record = new CalculationRecord(options);
   if (options.register ?? true) {
-    registerRecord({ title: record.title, renderFiles: () => record.renderFiles() });
+    registerRecord({ title: record.title, renderFiles: (o) => record.renderFiles(o) });
   }
   return record;
 }

@@ -4,7 +4,8 @@
  *   readNotebook -> TslabSession (tslab converter + executor, outputs captured) -> executed .ipynb
  *                                                                               -> recordHtml
  *   startRecord (in a cell) -> input/model/results/chart/answer -> show() in the cell
- *                           -> registry -> runner writes <name>.record.html and <name>.record.md
+ *                           -> registry -> runner writes <name>.record.html, <name>.record.md
+ *                                          and the Markdown's chart images <name>.record-C1.svg ...
  */
 export { runNotebooks } from "./runNotebooks.js";
 export type { RunNotebooksOptions, RunProgress, NotebookRecord } from "./runNotebooks.js";

@@ -5,12 +5,29 @@
  * before each notebook.
  */
 
+/** Options of {@link RegisteredRecord.renderFiles}. */
+export interface RenderFilesOptions {
+  /**
+   * File name stem for the chart images the Markdown shows (`<imageBase>-C1.svg`, ...), relative
+   * to the Markdown file. Without it the Markdown lists the charts and draws none.
+   */
+  readonly imageBase?: string;
+}
+
+/** The files of one record: HTML document, Markdown text, and the Markdown's chart images. */
+export interface RenderedRecordFiles {
+  readonly html: string;
+  readonly markdown: string;
+  /** SVG files to write beside the Markdown (absent from an older library copy: none). */
+  readonly images?: readonly { readonly file: string; readonly content: string }[];
+}
+
 /** What the runner needs from a record (a stable, minimal shape across library copies). */
 export interface RegisteredRecord {
   /** Short title, for messages. */
   readonly title: string;
   /** The standalone HTML document and the Markdown text, once every pending chart is drawn. */
-  renderFiles(): Promise<{ html: string; markdown: string }>;
+  renderFiles(options?: RenderFilesOptions): Promise<RenderedRecordFiles>;
 }
 
 interface RecordRegistry {

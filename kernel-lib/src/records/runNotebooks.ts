@@ -22,7 +22,11 @@ import type { CodeCell, Notebook, NotebookOutput } from "./notebookFormat.js";
 import { joinText, readNotebook } from "./notebookFormat.js";
 import { recordHtml } from "./recordHtml.js";
 import { RunnerError } from "./runnerError.js";
-import { registeredRecords, resetRecordRegistry } from "./recordRegistry.js";
+import {
+  registeredRecords,
+  resetRecordRegistry,
+  type RenderedRecordFiles,
+} from "./recordRegistry.js";
 import { TslabSession } from "./tslabSession.js";
 
 /** Progress events, for a terminal display. */
@@ -97,7 +101,7 @@ function calculationRecordFiles(planned: PlannedNotebook, n: number): { html: st
 /** Calculation-record files of this notebook in the output folder (from any run). */
 function existingCalculationRecords(planned: PlannedNotebook): string[] {
   const escaped = planned.stem.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
-  const pattern = new RegExp(`^${escaped}\\.record(-\\d+)?\\.(html|md)$`);
+  const pattern = new RegExp(`^${escaped}\\.record(-\\d+)?(\\.html|\\.md|-C\\d+\\.svg)$`);
   try {
     return fs
       .readdirSync(planned.outDir)
@@ -299,9 +303,12 @@ async function runOne(
     { target: planned.recordPath, content: html },
   ];
   for (let i = 0; i < startedRecords.length; i++) {
-    let rendered: { html: string; markdown: string };
+    const target = calculationRecordFiles(planned, i + 1);
+    let rendered: RenderedRecordFiles;
     try {
-      rendered = await startedRecords[i].renderFiles();
+      rendered = await startedRecords[i].renderFiles({
+        imageBase: path.basename(target.md, ".md"),
+      });
     } catch (error) {
       throw new RunnerError({
         notebook: name,
@@ -309,10 +316,13 @@ async function runOne(
       });
     }
     const { html: recordHtmlText, markdown } = rendered;
-    const target = calculationRecordFiles(planned, i + 1);
     files.push(
       { target: target.html, content: recordHtmlText },
       { target: target.md, content: markdown },
+      ...(rendered.images ?? []).map((image) => ({
+        target: path.join(planned.outDir, image.file),
+        content: image.content,
+      })),
     );
     calculationRecords.push({
       title: startedRecords[i].title,

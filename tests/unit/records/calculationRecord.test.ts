@@ -324,6 +324,40 @@ describe("printed as a cell's last value", () => {
   });
 });
 
+describe("chart images of the Markdown form", () => {
+  it("with an image base, each chart is an SVG file the Markdown shows; without, it is listed", async () => {
+    const rec = startRecord({ question, register: false });
+    await rec.chart(
+      {
+        title: "Z against pressure",
+        data: {
+          values: [
+            { p: 1, z: 0.99 },
+            { p: 2, z: 0.98 },
+          ],
+        },
+        mark: "line",
+        encoding: {
+          x: { field: "p", type: "quantitative" },
+          y: { field: "z", type: "quantitative" },
+        },
+      },
+      { caption: "Letdown [inlet]" },
+    );
+    const withImages = await rec.renderFiles({ imageBase: "00-start-here.record" });
+    expect(withImages.images).toHaveLength(1);
+    expect(withImages.images?.[0].file).toBe("00-start-here.record-C1.svg");
+    expect(withImages.images?.[0].content).toMatch(/^<svg /);
+    expect(withImages.markdown).toContain(
+      "![C1: Letdown \\[inlet\\]](00-start-here.record-C1.svg)",
+    );
+    const listed = await rec.renderFiles();
+    expect(listed.images).toEqual([]);
+    expect(listed.markdown).toContain("**C1** (chart, drawn in the HTML record)");
+    expect(listed.markdown).not.toContain("![");
+  });
+});
+
 describe("registration for isochor run", () => {
   it("registers by default, not with register: false", async () => {
     resetRecordRegistry();

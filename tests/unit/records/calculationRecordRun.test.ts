@@ -1,5 +1,6 @@
 // End to end: a notebook that fills a calculation record (startRecord) is run by the records
-// runner; the runner writes <name>.record.html and <name>.record.md beside the notebook's record,
+// runner; the runner writes <name>.record.html, <name>.record.md and the Markdown's chart images
+// (<name>.record-C1.svg, ...) beside the notebook's record,
 // removes stale calculation records of that notebook, and both HTML files pass the browser check
 // with the script payload of the notebook shown as text. The notebook resolves "isochor" through
 // node_modules to kernel-lib/dist, so this needs a build; without one it is skipped.
@@ -26,8 +27,10 @@ describe.skipIf(!built)("a notebook with a calculation record (needs kernel-lib/
 
   beforeAll(async () => {
     outDir = fs.mkdtempSync(path.join(os.tmpdir(), "isochor-calc-run-"));
-    // A stale second record from an earlier run: the notebook now starts one, so it must go.
+    // A stale second record and a stale chart image from an earlier run: the notebook now starts
+    // one record with one chart, so they must go.
     fs.writeFileSync(path.join(outDir, "calculation-record.record-2.html"), "stale");
+    fs.writeFileSync(path.join(outDir, "calculation-record.record-C7.svg"), "stale");
     records = await runNotebooks([path.join(__dirname, "fixtures", "calculation-record.ipynb")], {
       outDir,
     });
@@ -41,6 +44,7 @@ describe.skipIf(!built)("a notebook with a calculation record (needs kernel-lib/
     expect(fs.readdirSync(outDir).sort()).toEqual([
       "calculation-record.html",
       "calculation-record.ipynb",
+      "calculation-record.record-C1.svg",
       "calculation-record.record.html",
       "calculation-record.record.md",
     ]);
@@ -65,7 +69,14 @@ describe.skipIf(!built)("a notebook with a calculation record (needs kernel-lib/
     expect(recordHtml.match(/<figure class="isochor-chart" /g)).toHaveLength(1);
     expect(recordHtml.split("data-isochor-once=")).toHaveLength(2); // one runtime, in the head
     expect(recordMd).toContain("| I2 | inlet pressure | 40 barg | 4101325 Pa |");
-    expect(recordMd).toContain("**C1** (chart, drawn in the HTML record)");
+    // the Markdown draws its chart from an SVG file beside it, alt text escaped
+    expect(recordMd).toContain("**C1** (chart): Z of the stream \\<script\\>. Basis: M1.");
+    expect(recordMd).toContain(
+      "![C1: Z of the stream \\<script\\>](calculation-record.record-C1.svg)",
+    );
+    const svg = fs.readFileSync(path.join(outDir, "calculation-record.record-C1.svg"), "utf8");
+    expect(svg).toMatch(/^<svg /);
+    expect(svg).not.toContain("<script");
     // Tables, chart and answer showed as they were added (live), and rec.show() put the whole
     // record into the notebook's own record as well; chart ids are not repeated.
     expect(notebookHtml).toContain('class="isochor-calc"');
