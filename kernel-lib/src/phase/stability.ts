@@ -106,6 +106,8 @@ export interface StabilityResult {
 const METHOD =
   "tangent-plane test (Michelsen, Fluid Phase Equilib. 9 (1982) 1-19), successive substitution from Wilson K-factors";
 const COMPOSITION = Object.freeze({ composition: true });
+// a converged trial whose mole fractions all lie this close to the feed's is the trivial solution
+const TRIVIAL_DISTANCE = 1e-6;
 
 /** ln phi_i at (T, P, w) in the root of lowest Gibbs energy, written into out; returns rho. */
 function lnPhiAtTP(
@@ -231,7 +233,7 @@ export function stabilityAtTP(
         bestComposition = w.slice();
       }
       if (change <= tolerance) {
-        outcome = distanceToFeed < 1e-6 ? "trivial" : "stationary";
+        outcome = distanceToFeed < TRIVIAL_DISTANCE ? "trivial" : "stationary";
         break;
       }
     }
@@ -253,7 +255,7 @@ export function stabilityAtTP(
   if (stable && unfinished.length > 0) {
     warnings.push({
       code: "accuracy",
-      message: `stability test at T = ${T} K, P = ${P} Pa: the ${unfinished.map((t) => t.start).join(" and ")} trial did not converge in ${maxIterations} iteration${maxIterations === 1 ? "" : "s"} without finding a split (slow near a critical point); the verdict "stable" rests on the other trials`,
+      message: `stability test at T = ${T} K, P = ${P} Pa: the ${unfinished.map((t) => t.start).join(" and ")} trial${unfinished.length > 1 ? "s" : ""} did not converge in ${maxIterations} iteration${maxIterations === 1 ? "" : "s"} without finding a split (slow near a critical point); ${unfinished.length === trials.length ? 'no trial finished, so the verdict "stable" is not proven: raise options.maxIterations' : 'the verdict "stable" rests on the other trials'}`,
     });
   }
   return {
