@@ -173,42 +173,19 @@ export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
       request?: ResidualRequest,
     ): ResidualDerivatives {
       const r = evaluateMemo(temperatureK, densityMolPerM3);
-      // One object literal per case (no spreads: this runs in the engine's tight loops).
-      const third = !Number.isNaN(r.fDDD);
-      if (request?.composition) {
-        // A pure fluid: d(n alpha_r)/dn = alpha_r + rho d(alpha_r)/d(rho).
-        return third
-          ? {
-              a: r.f,
-              aD: r.fD,
-              aDD: r.fDD,
-              aDDD: r.fDDD,
-              aT: -r.fT,
-              aTT: r.fTT + 2 * r.fT,
-              aDT: -r.fDT,
-              dnA: [r.f + r.fD],
-            }
-          : {
-              a: r.f,
-              aD: r.fD,
-              aDD: r.fDD,
-              aT: -r.fT,
-              aTT: r.fTT + 2 * r.fT,
-              aDT: -r.fDT,
-              dnA: [r.f + r.fD],
-            };
-      }
-      return third
-        ? {
-            a: r.f,
-            aD: r.fD,
-            aDD: r.fDD,
-            aDDD: r.fDDD,
-            aT: -r.fT,
-            aTT: r.fTT + 2 * r.fT,
-            aDT: -r.fDT,
-          }
-        : { a: r.f, aD: r.fD, aDD: r.fDD, aT: -r.fT, aTT: r.fTT + 2 * r.fT, aDT: -r.fDT };
+      // One object literal, one shape whatever was asked (no spreads: this runs in the engine's
+      // tight loops); aDDD and dnA are undefined when not available or not requested.
+      return {
+        a: r.f,
+        aD: r.fD,
+        aDD: r.fDD,
+        aDDD: Number.isNaN(r.fDDD) ? undefined : r.fDDD,
+        aT: -r.fT,
+        aTT: r.fTT + 2 * r.fT,
+        aDT: -r.fDT,
+        // a pure fluid: d(n alpha_r)/dn = alpha_r + rho d(alpha_r)/d(rho)
+        dnA: request?.composition ? [r.f + r.fD] : undefined,
+      };
     },
     maxDensity(): number {
       return Infinity;
