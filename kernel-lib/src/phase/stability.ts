@@ -22,10 +22,10 @@
  * successive substitution is slow and a split can be missed.
  */
 import { InputError, PhaseUnavailableError, type ResultWarning } from "../errors.js";
-import type { ModelInfo, ResidualModel } from "../eos/types.js";
+import type { ModelInfo, ResidualDerivatives, ResidualModel } from "../eos/types.js";
 import type { ModelComponent } from "../eos/modelComponent.js";
 import { R as R_CODATA } from "../constants.js";
-import { dPdRho, residualGibbsTP } from "../state/properties.js";
+import { dPdRho, lnFugacityCoefficients, residualGibbsTP } from "../state/properties.js";
 import { checkComposition, checkPressure, checkTemperature } from "../state/checkInputs.js";
 import { findDensityRoots } from "../state/findDensityRoots.js";
 import { requireCount, requirePositive } from "../validate.js";
@@ -120,25 +120,24 @@ function lnPhiAtTP(
   const rhos = model.densityRoots ? model.densityRoots(T, P, w) : findDensityRoots(model, T, P, w);
   let best = Infinity;
   let chosen = NaN;
-  let dnA: readonly number[] | undefined;
-  let lnZ = NaN;
+  let residual: ResidualDerivatives | undefined;
   for (const rho of rhos) {
     const r = model.residual(T, rho, w, COMPOSITION);
     if (!(dPdRho(T, r, model.gasConstant ?? R_CODATA) > 0)) continue;
     const g = residualGibbsTP(r);
-    if (g < best || Number.isNaN(chosen)) {
+    if (g < best || residual === undefined) {
       best = g;
       chosen = rho;
-      dnA = r.dnA;
-      lnZ = Math.log(1 + r.aD);
+      residual = r;
     }
   }
-  if (dnA === undefined || !Number.isFinite(lnZ)) {
+  const lnPhi = residual?.dnA ? lnFugacityCoefficients(residual) : [];
+  if (lnPhi.length !== out.length || !lnPhi.every(Number.isFinite)) {
     throw new PhaseUnavailableError(
       `${model.info.name} has no mechanically stable density root at T = ${T} K, P = ${P} Pa for the composition [${w.map((v) => v.toPrecision(4)).join(", ")}] (stability test)`,
     );
   }
-  for (let i = 0; i < out.length; i++) out[i] = dnA[i] - lnZ;
+  for (let i = 0; i < out.length; i++) out[i] = lnPhi[i];
   return chosen;
 }
 

@@ -125,6 +125,14 @@ function lnPhiOf(d: ResidualDerivatives, lnZ: number): number[] {
   return out;
 }
 
+/**
+ * ln phi_i of a state from its residual derivatives (which must carry dnA): dnA_i - ln Z, NaN where
+ * Z <= 0 (the formula of the header, for callers that need the fugacities alone).
+ */
+export function lnFugacityCoefficients(d: ResidualDerivatives): number[] {
+  return lnPhiOf(d, lnZOf(d.aD));
+}
+
 /** The departure functions of a state from its residual derivatives (formulas in the header). */
 export function residualProperties(
   temperatureK: number,
