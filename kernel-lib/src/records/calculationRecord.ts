@@ -726,13 +726,11 @@ export class CalculationRecord {
     await this.settled();
     const content = this.content();
     const base = options.imageBase;
-    const images =
-      base === undefined
-        ? []
-        : [...this.chartSvgs].map(([id, svg]) => ({ file: `${base}-${id}.svg`, content: svg }));
+    // chart id -> image file name (none without an image base)
     const fileOf = new Map<string, string>();
     if (base !== undefined)
       for (const id of this.chartSvgs.keys()) fileOf.set(id, `${base}-${id}.svg`);
+    const images = [...fileOf].map(([id, file]) => ({ file, content: this.chartSvgs.get(id)! }));
     return {
       html: calculationRecordDocument(content),
       markdown: calculationRecordMarkdown(content, { chartImage: (id) => fileOf.get(id) }),
