@@ -98,8 +98,13 @@ describe("roots and phases (pure propane, Peng-Robinson)", () => {
     expect(s.referenceState.kind).toBe("formation");
     expect(s.mass.h).toBeCloseTo(s.molar.h / s.molarMassKgPerMol, 6);
     expect(s.densityKgPerM3).toBeCloseTo(s.densityMolPerM3 * s.molarMassKgPerMol, 10);
-    expect(Array.isArray(s.warnings)).toBe(true);
     expect(s.departureMethod).toBe("closed-form");
+    // inside every range: no warning; 1600 K is past the propane cp correlation's 1500 K (its
+    // extrapolation margin reaches 1650 K), so that state carries an "extrapolated" warning
+    expect(s.warnings).toEqual([]);
+    const hot = propane.stateAtTP(1600, 10e5);
+    expect(hot.warnings.map((w) => w.code)).toContain("extrapolated");
+    expect(hot.warnings.some((w) => /propane/.test(w.message))).toBe(true);
   });
 });
 
