@@ -142,9 +142,12 @@ describe("Lee-Kesler compressibility factors", () => {
 
 describe("Lee-Kesler: Helmholtz interpolation at (Tr, rho_r) against the paper's Z interpolation at (Tr, Pr)", () => {
   // The paper: Z = Z0(Tr, Pr) + (omega/omega_R)(Z_R(Tr, Pr) - Z0(Tr, Pr)). This model interpolates
-  // alpha_r at the same reduced density instead (leeKeslerModel.ts header). Measured here on a grid
-  // of gas and supercritical states for omega = 0.2; the bound 0.005 in Z is the observed size of the
-  // deviation (about the reading accuracy of the paper's tables) and is asserted so it cannot grow.
+  // alpha_r at the same reduced density instead (leeKeslerModel.ts header). The bound is set from
+  // outside the code: the change of interpolation must stay well inside the method's own error
+  // against measured Z of non-polar gases, a few per cent (common practice, no source; from memory
+  // of Poling, Prausnitz & O'Connell 2001, ch. 4, which puts corresponding-states Z within 1-3 %
+  // away from the critical point), so 1 % of Z at every grid state. (The deviation measured when
+  // this was written is below 0.5 %; the bound is not that number.)
   const fake = (omega: number) => ({
     id: "fake",
     criticalTemperatureK: 100,
@@ -153,7 +156,7 @@ describe("Lee-Kesler: Helmholtz interpolation at (Tr, rho_r) against the paper's
     molarMassKgPerMol: 0.1,
     criticalVolumeM3PerMol: NaN,
   });
-  it("|Z_model - Z_paper| < 0.005 for 1.1 <= Tr <= 3, 0.1 <= Pr <= 5 at omega = 0.2", () => {
+  it("|Z_model / Z_paper - 1| < 1 % for 1.1 <= Tr <= 3, 0.1 <= Pr <= 5 at omega = 0.2", () => {
     const simple = createLeeKeslerModel([fake(0)]);
     const reference = createLeeKeslerModel([fake(LEE_KESLER_REFERENCE_OMEGA)]);
     const mid = createLeeKeslerModel([fake(0.2)]);
@@ -163,10 +166,30 @@ describe("Lee-Kesler: Helmholtz interpolation at (Tr, rho_r) against the paper's
         const z0 = zAt(simple, 100 * tr, 1e6 * pr);
         const zr = zAt(reference, 100 * tr, 1e6 * pr);
         const paper = z0 + (0.2 / LEE_KESLER_REFERENCE_OMEGA) * (zr - z0);
-        worst = Math.max(worst, Math.abs(zAt(mid, 100 * tr, 1e6 * pr) - paper));
+        worst = Math.max(worst, Math.abs(zAt(mid, 100 * tr, 1e6 * pr) / paper - 1));
       }
     }
-    expect(worst).toBeLessThan(0.005);
+    expect(worst).toBeLessThan(0.01);
+  });
+  it("alpha_r and its density derivative are linear in omega at the same (Tr, rho_r) (Lee & Kesler 1975, eq. 1, applied to alpha_r as the header states)", () => {
+    // With Tc and Pc held, rho_r = rho R Tc / Pc does not depend on omega, so the same rho is the
+    // same reduced density for the three fluids; the weight must be omega / omega_R exactly.
+    const simple = createLeeKeslerModel([fake(0)]);
+    const reference = createLeeKeslerModel([fake(LEE_KESLER_REFERENCE_OMEGA)]);
+    const mid = createLeeKeslerModel([fake(0.2)]);
+    const w = 0.2 / LEE_KESLER_REFERENCE_OMEGA;
+    for (const [T, rho] of [
+      [110, 100],
+      [130, 600],
+      [200, 1500],
+      [70, 3000],
+    ]) {
+      const r0 = simple.residual(T, rho, [1]);
+      const rR = reference.residual(T, rho, [1]);
+      const rm = mid.residual(T, rho, [1]);
+      expect(Math.abs(rm.a - (r0.a + w * (rR.a - r0.a)))).toBeLessThan(1e-12);
+      expect(Math.abs(rm.aD - (r0.aD + w * (rR.aD - r0.aD)))).toBeLessThan(1e-12);
+    }
   });
 });
 
