@@ -23,6 +23,3 @@ export type {
   PropertySet,
   DepartureMethod,
 } from "./types.js";
-// The fluid object (fluid/) binds model, ideal gas and reference state over these functions.
-export { defineFluid } from "../fluid/defineFluid.js";
-export type { Fluid, FluidSpec, ConstantOverrides } from "../fluid/defineFluid.js";
