@@ -2,3 +2,4 @@
 // state functions (state/) and the phase tests (phase/).
 export { defineFluid } from "./defineFluid.js";
 export type { Fluid, FluidSpec, ConstantOverrides, FluidStateAtTPOptions } from "./defineFluid.js";
+export { referenceFluid, buildReferenceFluid } from "./referenceFluids.js";

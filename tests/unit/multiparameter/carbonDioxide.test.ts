@@ -5,8 +5,8 @@
  * 5-6 significant digits; each tolerance is half a unit in the last digit recalled, unless stated.
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceStateTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceStateTRho } from "../../../kernel-lib/src/state/referenceStates.js";
 import { locateCriticalPoint } from "../../../kernel-lib/src/phase/criticalPoint.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 

@@ -9,7 +9,7 @@
  * low-density terms of the equations, which the saturation and fixed-point tests barely touch.
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 
 const cases: [string, number, number, number][] = [
   // [id, T K, B cm3/mol, tolerance cm3/mol]

@@ -12,8 +12,8 @@
  * for the exact zero phi0_dt).
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceStateTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceStateTRho } from "../../../kernel-lib/src/state/referenceStates.js";
 import { emptyReducedHelmholtz } from "../../../kernel-lib/src/eos/multiparameter/residualPart.js";
 
 const water = referenceFluid("water");
