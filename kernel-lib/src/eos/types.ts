@@ -148,6 +148,16 @@ export interface ResidualModel {
    */
   pseudoCritical?(x: readonly number[]): PseudoCriticalPoint;
   /**
+   * Optional: closed-form second composition derivatives of F = n alpha_r at constant T and V for
+   * one mole (state/fugacity.ts says what each is); when absent they are taken by central
+   * differences of dnA. Used by Newton steps of flashes, saturation points and envelopes.
+   */
+  compositionHessian?(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+  ): { readonly nFij: number[][]; readonly FiT: number[]; readonly rhoDdnA: number[] };
+  /**
    * Optional: warnings for a state outside the model's validity range (empty when inside; the
    * empty list may be shared, so treat the result as read-only).
    */
