@@ -44,6 +44,17 @@ const BLOCKS: readonly Block[] = [
     pattern: /Math\.log\([\w.]+\) \+ [\w.]*\.a \+ [\w.]*\.aD\b/,
   },
   {
+    name: "(dP/dT) at constant density: rho R (1 + aD + aDT)",
+    owner: "eos/residualRelations.ts",
+    pattern: /1 \+ [\w.]*\baD \+ [\w.]*\baDT\b/,
+    exceptions: [{ file: "pvt/departuresFromPvt.ts", reason: PVT_SPLIT }],
+  },
+  {
+    name: "ln phi_i = dnA_i - ln Z",
+    owner: "state/properties.ts",
+    pattern: /dnA\[\w+\] - lnZ\b/,
+  },
+  {
     name: "Wilson's 5.373 (1 + omega)(1 - Tc/T)",
     owner: "phase/wilson.ts",
     pattern: /5\.373/,
@@ -62,6 +73,10 @@ const BLOCKS: readonly Block[] = [
       {
         file: "state/stateAt.ts",
         reason: "densityRootsAtTP reports g_r/RT of every root (a listing, not a choice)",
+      },
+      {
+        file: "state/fugacity.ts",
+        reason: "phaseFugacityAtTP reports g_r/RT of the root rootChoice.ts chose",
       },
     ],
   },
