@@ -199,6 +199,19 @@ describe("an out-of-range refusal says what is wrong and what to do", () => {
     // 150 K is 25 % below 200 K: the margin that would reach it
     expect(e.message).toContain("extrapolationMargin: 0.25");
   });
+  it("warns that an Aly-Lee correlation extrapolated below its range reads high (n-butane)", () => {
+    const e = refusal(() => idealGasFromCorrelation("n-butane").cp(150));
+    expect(e.message).toMatch(/Aly-Lee form levels off.*reads high/);
+    // the figures the message quotes: the old Aly-Lee propane correlation against the molecular route
+    const aly = (t: number) => {
+      const x = 1626.5 / t;
+      const y = 723.6 / t;
+      return 51.92 + 192.45 * (x / Math.sinh(x)) ** 2 + 116.8 * (y / Math.cosh(y)) ** 2;
+    };
+    const mol = idealGasFromMolecule("propane");
+    expect(aly(150) / mol.cp(150) - 1).toBeCloseTo(0.08, 2);
+    expect(aly(100) / mol.cp(100) - 1).toBeCloseTo(0.26, 2);
+  });
   it("points to the molecular route when the species has molecular constants", () => {
     const e = refusal(() => idealGasFromCorrelation("methane").cp(60));
     expect(e.message).toContain('idealGasFromMolecule("methane")');
