@@ -14,8 +14,11 @@
  *
  * Limits: equilibrium hydrogen only. "Normal" hydrogen (ortho:para frozen at 3:1, as in a gas
  * cooled quickly without a catalyst) has a different cv below about 250 K and is not modelled.
- * The levels are those of a rigid rotor with the ground-state constant B0 (no centrifugal
- * distortion), so at high T the vibration-rotation coupling is missing.
+ * The levels are E_J = B0 x - D0 x^2 + H0 x^3, x = J(J+1) (ground state with centrifugal distortion
+ * when D0, H0 are given; Huber & Herzberg 1979 give them for the diatomics): for H2 the distortion
+ * raises cp at 298.15 K by 0.3 % (the rigid levels put J = 4 18 cm^-1 too high). The levels of the
+ * excited vibrational states are those of the ground state (no vibration-rotation coupling), which
+ * matters only at high T.
  */
 import { wavenumberToKelvin } from "./spectroscopicUnits.js";
 import { levelSumContribution } from "./levelSum.js";
@@ -23,8 +26,10 @@ import type { NuclearSpinWeights, ThermoContribution } from "./types.js";
 
 /** Options for the explicit rotational level sum. */
 export interface LinearRotorLevelsOptions {
-  /** Stop the sum when theta_r J(J+1)/T exceeds this. Default 60 (terms below e^-60 dropped). */
+  /** Stop the sum when E_J/(kB T) exceeds this. Default 60 (terms below e^-60 dropped). */
   readonly cutoff?: number;
+  /** [D, H], cm^-1: E_J = B x - D x^2 + H x^3, x = J(J+1). Default: rigid rotor. */
+  readonly centrifugalDistortionInvCm?: readonly number[];
 }
 
 /**
@@ -42,10 +47,14 @@ export function linearRotorLevelsContribution(
 ): ThermoContribution {
   const cutoff = options.cutoff ?? 60;
   const thetaR = wavenumberToKelvin(rotationalConstantInvCm);
+  const [d, h] = options.centrifugalDistortionInvCm ?? [0, 0];
+  const thetaD = wavenumberToKelvin(d);
+  const thetaH = wavenumberToKelvin(h);
   const theta: number[] = [];
   const g: number[] = [];
   for (let j = 0; ; j++) {
-    const th = thetaR * j * (j + 1);
+    const x = j * (j + 1);
+    const th = x * (thetaR - x * (thetaD - x * thetaH));
     theta.push(th);
     g.push((j % 2 === 0 ? weights.even : weights.odd) * (2 * j + 1));
     if (th / temperatureK > cutoff && j > 2) break;
