@@ -26,7 +26,7 @@ export type { CheckMoleFractionsOptions } from "./composition.js";
 export { AmbiguousNameError } from "./ambiguousNameError.js";
 export { parseFormula } from "./formula.js";
 export type { ElementCounts } from "./formula.js";
-export { editDistance } from "./editDistance.js";
+export { editDistance } from "../numerics/editDistance.js";
 export { rackettCompressibility, rackettSaturatedLiquidVolume } from "./rackettLiquidVolume.js";
 export type {
   RackettCompressibility,
