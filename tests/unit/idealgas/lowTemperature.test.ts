@@ -111,6 +111,21 @@ describe("cold service: the light components reach 90-100 K", () => {
     }
   });
 
+  it("ethane and propane: no cp step at any segment joint (the fits go through the joint values)", () => {
+    // a step would show as an error in finite-difference cv and in (P, h) inversions across it
+    for (const id of ["ethane", "propane"]) {
+      const cp = getComponent(id).idealGasCp;
+      if (cp.form !== "polynomial") throw new Error(`${id}: expected polynomial segments`);
+      for (let k = 0; k + 1 < cp.segments.length; k++) {
+        const t = cp.segments[k].maxTemperatureK;
+        const at = (c: readonly number[]) => c.reduce((sum, a, i) => sum + a * t ** i, 0);
+        const left = at(cp.segments[k].coefficients);
+        const right = at(cp.segments[k + 1].coefficients);
+        expect(Math.abs(left / right - 1), `${id} ${t} K`).toBeLessThan(1e-7);
+      }
+    }
+  });
+
   it("propane: molecular route and Perry's Aly-Lee correlation agree within 0.9 % from 200 to 298.15 K", () => {
     // the correlation (DIPPR 107, regressed to tables) is independent of the molecular constants
     const mol = idealGasFromMolecule("propane");

@@ -25,7 +25,7 @@ SOURCES = {
  "perry-aly-lee-propane": "Perry's Chemical Engineers' Handbook, 8th ed. (2008), Table 2-156 (DIPPR 107 / Aly-Lee form, from the DIPPR 801 database): propane C1 = 0.5192e5, C2 = 1.9245e5, C3 = 1.6265e3, C4 = 1.168e5, C5 = 723.6 (J/(kmol K) and K), 200-1500 K (coefficients from memory of the handbook; cp(298.15 K) = 73.47 J/(mol K) against 73.6 in the NIST WebBook, and within 1 % of the GRI-Mech 3.0 polynomial from 300 to 1500 K, which it replaces because that one starts at 300 K)",
  "rrho-low": "Rigid-rotor harmonic-oscillator cp fit (this project) below the first segment joint, the correlation cited next above it; below the joint, a cp/R polynomial fitted by least squares to the rigid-rotor harmonic-oscillator heat capacity from the molecular constants of idealgas/molecular/data/molecules.json (classical rotation, harmonic fundamentals), which for these rigid molecules is exact at these temperatures to well within 0.1 % (at 100 and 200 K it reproduces NIST-JANAF, e.g. CH4 33.258 and 33.473 J/(mol K), from memory of Chase 1998); fit error < 0.02 %; cp jump at the joint < 0.2 %",
  "molecular-low": "Statistical-mechanics cp fit (this project) below the first segment joint, the correlation cited next above it: a cp/R polynomial fitted by least squares to the ideal-gas heat capacity from the molecular constants of idealgas/molecular/data/molecules.json (classical rotation, harmonic fundamentals, methyl torsions as hindered rotors with exact levels; the same model as idealGasFromMolecule), which is reliable at these temperatures because anharmonicity is negligible there and only the low-frequency modes count; fit error < 0.02 %. Ethane: 35.74, 42.34, 52.50 J/(mol K) at 100, 200, 298.15 K against 35.7, 42.3 and 52.49 from memory of the TRC tables / Chao, Wilhoit & Hall, J. Phys. Chem. Ref. Data 2 (1973) 427 (ideal-gas ethane); joined to GRI-Mech 3.0 at 298.15 K (jump < 0.01 %), which reads 0.5 % low at 200 K. Propane: joined to Perry's Aly-Lee correlation at 200 K, the molecular cp scaled smoothly between 150 and 200 K by up to 0.43 %, their difference at 200 K, so that cp joins without a step (the two routes differ by at most 0.85 % from 200 to 298.15 K, and the molecular value at 298.15 K, 73.59, is within 0.01 % of the NIST WebBook's 73.6, from memory)",
- "aly-lee-poly": "rewritten (this project) as cp/R polynomials on 200-300, 300-600 and 600-1500 K, least squares, fit error < 0.02 %, so that the low-temperature segment can precede it",
+ "aly-lee-poly": "rewritten (this project) as cp/R polynomials on 200-300, 300-600 and 600-1500 K, least squares through the correlation's values at the segment ends (no cp step at the joints), fit error < 0.02 %, so that the low-temperature segment can precede it",
  "nist-fluid": "NIST Chemistry WebBook fluid data (Lemmon, McLinden & Friend), critical point and boiling point (from memory)",
  "iapws95": "Wagner, W., Pruss, A. (2002), The IAPWS Formulation 1995 for the thermodynamic properties of ordinary water substance, J. Phys. Chem. Ref. Data 31, 387-535: critical point (Tc, Pc, rho_c = 322 kg/m3)",
 }
@@ -130,6 +130,21 @@ def rrho_cpr(mol_id, T):
         cp += (x*x*w).sum(1)/q - ((x*w).sum(1)/q)**2
     return cp
 
+def fit_through_ends(T, y, d):
+    """Least-squares polynomial of degree d in T (relative residuals) through (T[0], y[0]) and
+    (T[-1], y[-1]) exactly, so that neighbouring segments fitted this way join without a cp step.
+    Fitted in u = (T - mid)/half for conditioning, returned as ascending raw-power coefficients in
+    T rounded to 10 significant digits."""
+    m, h = (T[0] + T[-1])/2, (T[-1] - T[0])/2
+    u = (T - m)/h
+    A = np.vander(u, d + 1, increasing=True)/y[:, None]
+    C = np.vander(np.array([-1.0, 1.0]), d + 1, increasing=True)
+    K = np.block([[2*A.T @ A, C.T], [C, np.zeros((2, 2))]])
+    rhs = np.concatenate([2*A.T @ np.ones_like(y), [y[0], y[-1]]])
+    q = np.linalg.solve(K, rhs)[:d + 1]
+    raw = np.polynomial.Polynomial(q)(np.polynomial.Polynomial([-m/h, 1/h])).coef
+    return [float("%.9e" % v) for v in raw]
+
 def alylee_cpr(c):
     A, B, Cc, D, E = c["aJPerMolK"], c["bJPerMolK"], c["cK"], c["dJPerMolK"], c["eK"]
     return lambda T: (A + B*((Cc/T)/np.sinh(Cc/T))**2 + D*((E/T)/np.cosh(E/T))**2)/R
@@ -143,19 +158,21 @@ def alylee_as_poly(c, joints=(300, 600), deg=5):
     segs = []
     for a, b in zip(edges[:-1], edges[1:]):
         T = np.linspace(a, b, 121)
-        co = [float("%.9e" % v) for v in np.polyfit(T, f(T), deg)]
-        err = np.max(np.abs(np.polyval(co, T)/f(T)-1))
+        co = fit_through_ends(T, f(T), deg)
+        err = np.max(np.abs(np.polyval(co[::-1], T)/f(T)-1))
         assert err < 2e-4, err
-        segs.append({"minTemperatureK": a, "maxTemperatureK": b, "coefficients": co[::-1]})
+        segs.append({"minTemperatureK": a, "maxTemperatureK": b, "coefficients": co})
     return {"form": "polynomial", "minTemperatureK": edges[0], "maxTemperatureK": edges[-1], "segments": segs}
 
-def with_rrho_low(cp, mol_id, lo, joint, deg=5, max_jump=2e-3, splits=(), blend=None):
+def with_rrho_low(cp, mol_id, lo, joint, deg=5, max_jump=2e-3, splits=(), blend=None, continuous=False):
     """Prepends low-temperature segments lo..joint (split at `splits`) fitted to the cp from the
     molecular constants (see SOURCES["rrho-low"], SOURCES["molecular-low"]); the correlation above
     starts at the joint. blend = (t0, f): between t0 and the joint the molecular cp/R is scaled by
     1 + w(T) (f(joint)/mol(joint) - 1), w = 3u^2 - 2u^3, u = (T - t0)/(joint - t0), f the correlation's
     cp/R (evaluated only at the joint, inside its range), so that cp joins without a step where the
-    two differ by more than the fit error; the change never exceeds that difference."""
+    two differ by more than the fit error; the change never exceeds that difference.
+    continuous=True: the low pieces go exactly through the target at their ends and the last one
+    through the correlation's value at the joint (no cp step anywhere; fit_through_ends)."""
     target = lambda T: rrho_cpr(mol_id, T)
     if blend is not None:
         t0, f = blend
@@ -167,17 +184,25 @@ def with_rrho_low(cp, mol_id, lo, joint, deg=5, max_jump=2e-3, splits=(), blend=
     # short interval cancel badly when integrated (cp/T) in double precision
     edges = [lo, *splits, joint]
     low = []
+    segs = [dict(sg) for sg in cp["segments"] if sg["maxTemperatureK"] > joint]
+    above_at_joint = np.polyval(segs[0]["coefficients"][::-1], joint)
     for a, b in zip(edges[:-1], edges[1:]):
         T = np.linspace(a, b, 81)
-        for d in range(0, deg + 1):
-            c = np.polyfit(T, target(T), d)
-            c = [float("%.9e" % v) for v in c]
+        y = target(T)
+        if continuous and b == joint:
+            y = y.copy()
+            y[-1] = above_at_joint
+        for d in range(1 if continuous else 0, deg + 1):
+            if continuous:
+                c = fit_through_ends(T, y, d)[::-1]
+            else:
+                c = np.polyfit(T, y, d)
+                c = [float("%.9e" % v) for v in c]
             err = np.max(np.abs(np.polyval(c, T)/target(T)-1))
             if err < 2e-4:
                 break
         assert err < 2e-4, (mol_id, a, b, err)
         low.append({"minTemperatureK": a, "maxTemperatureK": b, "coefficients": c[::-1]})
-    segs = [dict(sg) for sg in cp["segments"] if sg["maxTemperatureK"] > joint]
     segs[0]["minTemperatureK"] = joint
     above = np.polyval(segs[0]["coefficients"][::-1], joint)
     assert abs(above/np.polyval(c, joint)-1) < max_jump, (mol_id, above, np.polyval(c, joint))
@@ -252,10 +277,10 @@ add("chlorine","Chlorine","Cl2","7782-50-5",["Cl2"],70.906,239.12,416.9,79.91,12
 add("methane","Methane","CH4","74-82-8",["C1","CH4"],16.043,111.66,190.56,45.99,98.6,0.286,0.011,-74.873,-50.768,186.251,
     with_rrho_low(poly(200,1500,[5.46363337,-0.0184728187,7.41265412e-05,-1.06820644e-07,8.15639829e-11,-3.25587649e-14,5.33044089e-18]),"methane",90,300),form="janaf",ent="janaf",cps="rrho-low+janaf-fit-methane")
 add("ethane","Ethane","C2H6","74-84-0",["C2"],30.070,184.55,305.32,48.72,145.5,0.279,0.099,-83.82,-31.86,229.2,
-    with_rrho_low(gri(200,3500,low=[4.29142492,-5.50154270e-3,5.99438288e-5,-7.08466285e-8,2.68685771e-11],high=[1.07188150,2.16852677e-2,-1.00256067e-5,2.21412001e-9,-1.90002890e-13]),"ethane",90,298.15,splits=(180,)),cps="molecular-low+gri30")
+    with_rrho_low(gri(200,3500,low=[4.29142492,-5.50154270e-3,5.99438288e-5,-7.08466285e-8,2.68685771e-11],high=[1.07188150,2.16852677e-2,-1.00256067e-5,2.21412001e-9,-1.90002890e-13]),"ethane",90,298.15,splits=(180,),continuous=True),cps="molecular-low+gri30")
 add("propane","Propane","C3H8","74-98-6",["C3"],44.097,231.02,369.83,42.48,200.0,0.276,0.152,-104.68,-24.29,270.3,
     with_rrho_low(alylee_as_poly(alylee(200,1500,0.5192,1.9245,1.6265,1.168,723.6)),"propane",90,200,splits=(150,),
-                  blend=(150, alylee_cpr(alylee(200,1500,0.5192,1.9245,1.6265,1.168,723.6)))),cps="molecular-low+perry-aly-lee-propane+aly-lee-poly")
+                  blend=(150, alylee_cpr(alylee(200,1500,0.5192,1.9245,1.6265,1.168,723.6))),continuous=True),cps="molecular-low+perry-aly-lee-propane+aly-lee-poly")
 add("n-butane","n-Butane","C4H10","106-97-8",["butane","nC4","n-C4"],58.123,272.66,425.12,37.96,255.0,0.274,0.200,-125.79,-16.57,310.0,
     alylee(200,1500,0.7134,2.43,1.63,1.5033,730.42))
 add("isobutane","Isobutane","C4H10","75-28-5",["2-methylpropane","iC4","i-C4","i-butane"],58.123,261.34,407.85,36.40,262.7,0.278,0.186,-134.99,-21.44,295.4,
