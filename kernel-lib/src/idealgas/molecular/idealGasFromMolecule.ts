@@ -79,6 +79,13 @@ export interface MolecularIdealGasOptions extends TemperatureRangeOptions {
    */
   readonly linearRotor?: LinearRotorTreatment;
   /**
+   * Ortho/para (even/odd J) treatment of a molecule with `nuclearSpinWeights` (H2): "equilibrium"
+   * (default; the NIST-JANAF table's case, reached with a conversion catalyst) or "normal" (frozen
+   * at the room-temperature ratio, 3:1 for H2: what a plant without a catalyst carries). They
+   * differ below about 250 K: H2 cp at 100 K is 28.15 J/(mol K) in equilibrium, 22.56 normal.
+   */
+  readonly orthoPara?: "equilibrium" | "normal";
+  /**
    * Upper limit of the valid range, K. Default 1500 (MOLECULAR_DEFAULT_MAX_TEMPERATURE_K); at most
    * 3000. Above 1500 K the harmonic model's cp is low by 1-4 % for several molecules (see header).
    * Example: `idealGasFromMolecule("nitrogen", { maxTemperatureK: 3000 }).cp(2500)`.
@@ -154,6 +161,15 @@ export function idealGasFromMolecule(
       received: torsion,
     });
   }
+  const orthoPara = options.orthoPara ?? "equilibrium";
+  if (orthoPara !== "equilibrium" && orthoPara !== "normal") {
+    throw new OutOfRangeError({
+      input: "options.orthoPara",
+      unit: "-",
+      validRange: '"equilibrium" or "normal"',
+      received: orthoPara,
+    });
+  }
   const linearChoice = options.linearRotor ?? "auto";
   if (!["auto", "classical", "level-sum"].includes(linearChoice)) {
     throw new OutOfRangeError({
@@ -204,7 +220,11 @@ export function idealGasFromMolecule(
       ? ""
       : levelSumLinear
         ? `rotational level sum${c.centrifugalDistortionInvCm ? " with centrifugal distortion" : ""}${
-            c.nuclearSpinWeights ? " (ortho/para equilibrium)" : ""
+            c.nuclearSpinWeights
+              ? orthoPara === "normal"
+                ? " (normal: ortho/para frozen at the high-temperature ratio)"
+                : " (ortho/para equilibrium)"
+              : ""
           }`
         : c.quarticDistortion
           ? "classical rotor with first-order centrifugal distortion"
@@ -230,7 +250,10 @@ export function idealGasFromMolecule(
     return temperatureK;
   };
 
-  const levelOptions = { centrifugalDistortionInvCm: c.centrifugalDistortionInvCm };
+  const levelOptions = {
+    centrifugalDistortionInvCm: c.centrifugalDistortionInvCm,
+    spinModifications: orthoPara,
+  };
   const distortion =
     c.geometry === "nonlinear" && c.quarticDistortion
       ? distortionCoefficient(c.rotationalConstantsInvCm, c.quarticDistortion)

@@ -168,6 +168,40 @@ describe("water: the rotor with first-order centrifugal distortion", () => {
   });
 });
 
+describe("normal hydrogen (ortho/para frozen at 3:1), the plant's case without a catalyst", () => {
+  const normal = idealGasFromMolecule("hydrogen", { orthoPara: "normal" });
+  const equilibrium = idealGasFromMolecule("hydrogen");
+  const R = 8.314462618;
+  it("agrees with equilibrium hydrogen at and above room temperature (cp 0.05 %, s 0.01 %)", () => {
+    for (const t of [298.15, 500, 1000]) {
+      expect(rel(normal.cp(t), equilibrium.cp(t)), `${t} K`).toBeLessThan(5e-4);
+      expect(rel(normal.entropyStandard(t), equilibrium.entropyStandard(t)), `${t} K`).toBeLessThan(
+        1e-4,
+      );
+    }
+  });
+  it("is far below equilibrium cp at 100 K and tends to 5/2 R when rotation freezes out", () => {
+    // equilibrium: para J = 0 <-> ortho J = 1 conversion adds heat capacity; normal: it cannot.
+    // Both limits are exact: at 20 K para sits in J = 0 and ortho in J = 1 (next levels 510 K and
+    // 845 K above them), so only translation remains: cp = 5/2 R.
+    expect(normal.cp(100) / equilibrium.cp(100)).toBeLessThan(0.85);
+    expect(rel(normal.cp(20), 2.5 * R)).toBeLessThan(1e-6);
+  });
+  it("is self-consistent: cp = dh/dT and cp/T = ds/dT (central differences)", () => {
+    for (const t of [60, 120, 250]) {
+      const d = 1e-3 * t;
+      const dh = (normal.enthalpyFrom298(t + d) - normal.enthalpyFrom298(t - d)) / (2 * d);
+      const ds = (normal.entropyStandard(t + d) - normal.entropyStandard(t - d)) / (2 * d);
+      expect(rel(dh, normal.cp(t)), `${t} K`).toBeLessThan(1e-6);
+      expect(rel(ds * t, normal.cp(t)), `${t} K`).toBeLessThan(1e-6);
+    }
+    expect(normal.method).toContain("normal");
+    expect(() => idealGasFromMolecule("hydrogen", { orthoPara: "x" as never })).toThrow(
+      /orthoPara/,
+    );
+  });
+});
+
 describe("equilibrium hydrogen below room temperature (rotational level sum)", () => {
   // From memory of NIST-JANAF (Chase 1998), H2 table: the dip of cp below 7/2 R near 150-200 K
   // is the ortho/para rotational heat capacity, which the classical rotor cannot give.
