@@ -24,8 +24,13 @@ and writes into the output folder:
 
 options:
   --out <dir>                output folder (default: out/records under the current directory)
-  --cell-timeout <seconds>   interrupt and fail a cell that runs longer (default 600)
+  --cell-timeout <seconds>   interrupt and fail a cell that runs longer, in s (default 600)
   -h, --help                 show this help
+
+Units are those of the notebooks (isochor computes in SI: K, Pa, mol, J, m3); times are in s.
+
+example:
+  npx isochor run --out out/records notebooks/00-start-here.ipynb
 `;
 
 interface ParsedArgs {
