@@ -3,7 +3,7 @@
  * column heads, numbers right-aligned in tabular figures, every string escaped. Inline styles only
  * (no <style> element that could leak into the page), in the charts' palette.
  */
-import { escapeHtml } from "../display/escapeHtml.js";
+import { escapeHtml } from "./escapeHtml.js";
 import { InputError } from "../errors.js";
 import { resolveColumns, type TableColumn, type TableOptions } from "./columns.js";
 import { FONT_FAMILY, INK } from "../charts/theme.js";
