@@ -7,7 +7,12 @@
  * the Wilson estimate and at points around it. Every result is verified (verifyPoint.ts) and
  * carries both phases as full states; otherwise a typed error says what was tried.
  */
-import { InputError, PhaseUnavailableError, SolverError, type ResultWarning } from "../../errors.js";
+import {
+  InputError,
+  PhaseUnavailableError,
+  SolverError,
+  type ResultWarning,
+} from "../../errors.js";
 import type { ModelInfo } from "../../eos/types.js";
 import { requireCount, requireInRange, requirePositive } from "../../validate.js";
 import { checkComposition, checkPressure, checkTemperature } from "../../state/checkInputs.js";
@@ -143,7 +148,8 @@ function firstVerified(
         maxIterations,
       });
       const v = verifyPoint(sys, solution, tolerance, trivialLnK);
-      if (v.failure === undefined) return { attempt: { solution, point: v.point, start: s.start }, tried };
+      if (v.failure === undefined)
+        return { attempt: { solution, point: v.point, start: s.start }, tried };
       tried.push(`${s.note}: ${v.failure}`);
     } catch (e) {
       if (!(e instanceof SolverError || e instanceof PhaseUnavailableError)) throw e;
@@ -323,37 +329,48 @@ export function saturationPointAtTemperature(
       "a saturation point of a mixture needs at least two components present in z; for a pure fluid use saturationAtTemperature",
     );
   }
-  const found = firstVerified(sys, starts(), m, Math.log(T), o.tolerance, o.maxIterations, o.trivialLnK);
+  const found = firstVerified(
+    sys,
+    starts(),
+    m,
+    Math.log(T),
+    o.tolerance,
+    o.maxIterations,
+    o.trivialLnK,
+  );
   return pointOrError(binding, sys, found, `at T = ${T} K`);
 }
 
+/** What {@link attemptAtPressure} found: a verified point, or the starts it tried. */
+export interface PressureAttempt {
+  readonly solution?: SaturationSolution;
+  readonly point?: VerifiedPoint;
+  readonly start?: MixtureSaturationPoint["start"];
+  readonly tried: readonly string[];
+}
+
 /**
- * The saturation point of a mixture z at pressure P (Pa): its temperature and phases.
- * At a pressure with two points of the same vapour fraction (the retrograde region), the one
- * Newton reaches from the start is returned; give `options.start.temperatureK` for the other.
- * @throws as {@link saturationPointAtTemperature}.
+ * The saturation point of `sys` at P (Pa) from the given start, Wilson's start and the
+ * tangent-plane test's starts in turn (no input checks: callers check).
  */
-export function saturationPointAtPressure(
+export function attemptAtPressure(
   binding: FluidBinding,
+  sys: SaturationSystem,
   pressurePa: number,
-  z: readonly number[],
-  options: SaturationPointOptions = {},
-): MixtureSaturationPoint {
-  checkPressure(pressurePa);
-  const o = checkOptions(options);
-  const sys = saturationSystemOf(binding, z, o.beta);
-  const n = sys.z.length;
-  checkStartK(options.start?.kFactors, n);
-  const constants = modelConstants(binding, options.constants);
+  constants: readonly WilsonConstants[] | undefined,
+  o: { tolerance: number; maxIterations: number; trivialLnK: number },
+  given?: SaturationPointOptions["start"],
+): PressureAttempt {
   const P = pressurePa;
+  const n = sys.z.length;
   const m = sys.present.length;
   const starts = function* (): Generator<{
     X: number[];
     start: MixtureSaturationPoint["start"];
     note: string;
   }> {
-    const Tgiven = options.start?.temperatureK;
-    const kGiven = options.start?.kFactors;
+    const Tgiven = given?.temperatureK;
+    const kGiven = given?.kFactors;
     let Tw: number | undefined;
     if (constants !== undefined) Tw = wilsonTemperature(constants, sys.z, sys.present, sys.beta, P);
     if (Tgiven !== undefined || kGiven !== undefined) {
@@ -376,11 +393,6 @@ export function saturationPointAtPressure(
     const guesses = [1, 0.95, 1.05, 0.9, 1.1, 0.8, 1.2].map((f) => ({ T: T0 * f, P }));
     yield* stabilityStarts(binding, sys, constants, guesses);
   };
-  if (m < 2) {
-    throw new PhaseUnavailableError(
-      "a saturation point of a mixture needs at least two components present in z; for a pure fluid use saturationAtPressure",
-    );
-  }
   const found = firstVerified(
     sys,
     starts(),
@@ -390,7 +402,39 @@ export function saturationPointAtPressure(
     o.maxIterations,
     o.trivialLnK,
   );
-  return pointOrError(binding, sys, found, `at P = ${P} Pa`);
+  return found.attempt === undefined
+    ? { tried: found.tried }
+    : { ...found.attempt, tried: found.tried };
+}
+
+/**
+ * The saturation point of a mixture z at pressure P (Pa): its temperature and phases.
+ * At a pressure with two points of the same vapour fraction (the retrograde region), the one
+ * Newton reaches from the start is returned; give `options.start.temperatureK` for the other.
+ * @throws as {@link saturationPointAtTemperature}.
+ */
+export function saturationPointAtPressure(
+  binding: FluidBinding,
+  pressurePa: number,
+  z: readonly number[],
+  options: SaturationPointOptions = {},
+): MixtureSaturationPoint {
+  checkPressure(pressurePa);
+  const o = checkOptions(options);
+  const sys = saturationSystemOf(binding, z, o.beta);
+  checkStartK(options.start?.kFactors, sys.z.length);
+  if (sys.present.length < 2) {
+    throw new PhaseUnavailableError(
+      "a saturation point of a mixture needs at least two components present in z; for a pure fluid use saturationAtPressure",
+    );
+  }
+  const constants = modelConstants(binding, options.constants);
+  const a = attemptAtPressure(binding, sys, pressurePa, constants, o, options.start);
+  const found =
+    a.solution && a.point && a.start
+      ? { attempt: { solution: a.solution, point: a.point, start: a.start }, tried: [...a.tried] }
+      : { tried: [...a.tried] };
+  return pointOrError(binding, sys, found, `at P = ${pressurePa} Pa`);
 }
 
 /** Refuses a point of the wrong kind (a bubble-point request that found a dew point, ...). */

@@ -88,7 +88,9 @@ export function evaluateSaturation(
   const T = Math.exp(X[m]);
   const P = Math.exp(X[m + 1]);
   if (!(T > 0 && T < Infinity && P > 0 && P < Infinity)) {
-    throw new PhaseUnavailableError(`saturation iterate left the range of T and P (T = ${T} K, P = ${P} Pa)`);
+    throw new PhaseUnavailableError(
+      `saturation iterate left the range of T and P (T = ${T} K, P = ${P} Pa)`,
+    );
   }
   const c = compositions(sys, X);
   const xn = c.x.map((v) => v / c.sx);
@@ -205,7 +207,8 @@ export function solveSaturation(
       );
     }
     let scale = 1;
-    for (let k = 0; k < m; k++) scale = Math.min(scale, maxLnK / Math.max(Math.abs(step[k]), 1e-300));
+    for (let k = 0; k < m; k++)
+      scale = Math.min(scale, maxLnK / Math.max(Math.abs(step[k]), 1e-300));
     scale = Math.min(scale, maxLog / Math.max(Math.abs(step[m]), 1e-300));
     scale = Math.min(scale, maxLog / Math.max(Math.abs(step[m + 1]), 1e-300));
     // halve the step while an iterate has no stable root
