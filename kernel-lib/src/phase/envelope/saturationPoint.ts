@@ -24,6 +24,7 @@ import {
   type SaturationSolution,
   type SaturationSystem,
 } from "./saturationSystem.js";
+import { singleComponentPoint } from "./singleComponentPoint.js";
 import { verifyPoint, type VerifiedPoint } from "./verifyPoint.js";
 import { wilsonLnK, wilsonPressure, wilsonTemperature } from "./wilson.js";
 
@@ -325,9 +326,14 @@ export function saturationPointAtTemperature(
     yield* stabilityStarts(binding, sys, constants, guesses);
   };
   if (m < 2) {
-    throw new PhaseUnavailableError(
-      "a saturation point of a mixture needs at least two components present in z; for a pure fluid use saturationAtTemperature",
+    const one = singleComponentPoint(
+      sys,
+      { temperatureK: T },
+      constants,
+      o.tolerance,
+      o.maxIterations,
     );
+    return assemblePoint(binding, sys, one.point, one.iterations, "wilson", []);
   }
   const found = firstVerified(
     sys,
@@ -423,12 +429,11 @@ export function saturationPointAtPressure(
   const o = checkOptions(options);
   const sys = saturationSystemOf(binding, z, o.beta);
   checkStartK(options.start?.kFactors, sys.z.length);
-  if (sys.present.length < 2) {
-    throw new PhaseUnavailableError(
-      "a saturation point of a mixture needs at least two components present in z; for a pure fluid use saturationAtPressure",
-    );
-  }
   const constants = modelConstants(binding, options.constants);
+  if (sys.present.length < 2) {
+    const one = singleComponentPoint(sys, { pressurePa }, constants, o.tolerance, o.maxIterations);
+    return assemblePoint(binding, sys, one.point, one.iterations, "wilson", []);
+  }
   const a = attemptAtPressure(binding, sys, pressurePa, constants, o, options.start);
   const found =
     a.solution && a.point && a.start
