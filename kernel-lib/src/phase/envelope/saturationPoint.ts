@@ -280,7 +280,9 @@ function pointOrError(
  * saturationPointAtTemperature(fluid, 300, [0.5, 0.5], { vaporFraction: 1 }); // dew point
  * ```
  * @throws InputError for bad T, z or options; PhaseUnavailableError when no verified point is
- *   found (with every start tried and how it ended).
+ *   found (with every start tried and how it ended); OutOfRangeError when a phase cannot be
+ *   returned as a full state (e.g. below the range of an ideal-gas cp correlation; the
+ *   equilibrium itself does not need it, phaseEnvelope gives T, P and compositions only).
  */
 export function saturationPointAtTemperature(
   binding: FluidBinding,

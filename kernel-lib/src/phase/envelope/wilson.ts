@@ -33,7 +33,8 @@ function rachfordRice(
   let g = 0;
   for (const i of present) {
     const K = Math.exp(lnK[i]);
-    g += (z[i] * (K - 1)) / (1 + beta * (K - 1));
+    // 1 - beta + beta K, not 1 + beta (K - 1): at beta = 1 and a tiny K the latter rounds to 0
+    g += (z[i] * (K - 1)) / (1 - beta + beta * K);
   }
   return g;
 }
