@@ -46,9 +46,9 @@ export interface PhaseEnvelopeOptions {
   stabilityStride?: number;
   /** Check each critical crossing against the Heidemann-Khalil criteria. Default true. */
   checkCritical?: boolean;
-  /** Largest change of ln T between points. Default 0.04. */
+  /** Largest change of ln T between points. Default 0.03. */
   maxLnTStep?: number;
-  /** Largest change of ln P between points. Default 0.25. */
+  /** Largest change of ln P between points. Default 0.15. */
   maxLnPStep?: number;
   /** Largest change of any ln K between points. Default 1. */
   maxLnKStep?: number;
@@ -148,8 +148,8 @@ function settingsOf(
     ),
     maxPoints: requireCount("options.maxPoints", options.maxPoints ?? 400),
     initialStep: 0.05,
-    maxLnTStep: requirePositive("options.maxLnTStep", options.maxLnTStep ?? 0.04, "-"),
-    maxLnPStep: requirePositive("options.maxLnPStep", options.maxLnPStep ?? 0.25, "-"),
+    maxLnTStep: requirePositive("options.maxLnTStep", options.maxLnTStep ?? 0.03, "-"),
+    maxLnPStep: requirePositive("options.maxLnPStep", options.maxLnPStep ?? 0.15, "-"),
     maxLnKStep: requirePositive("options.maxLnKStep", options.maxLnKStep ?? 1, "-"),
     minStep: 1e-6,
     criticalJump: 0.04,
