@@ -148,13 +148,40 @@ describe("published binary data (Peng-Robinson with the table's k_ij)", () => {
   });
 });
 
+describe("water: a metastable point is flagged", () => {
+  it("the bubble point of a wet hydrocarbon liquid carries a phase-split warning", () => {
+    // propane with 10 % water (PR, table k_ij) at 300 K: water and liquid propane are nearly
+    // immiscible (mutual solubilities below 0.1 mol %, e.g. Kobayashi & Katz, Ind. Eng. Chem. 45
+    // (1953) 440, from memory), so one liquid of this composition splits and a vapour-liquid
+    // point on its bubble line is metastable: it is returned (verified) with the warning
+    const wet = defineFluid({ components: ["propane", "water"], model: "peng-robinson" });
+    const b = saturationPointAtTemperature(wet, 300, [0.9, 0.1]);
+    expect(b.kind).toBe("bubble");
+    expect(lnFugacityGap(wet, b)).toBeLessThan(1e-9);
+    expect(b.warnings.some((w) => w.code === "phase-split" && /third phase/.test(w.message))).toBe(
+      true,
+    );
+    // a dry hydrocarbon pair has no such warning
+    expect(bubblePointAtTemperature(pentaneHexane, 320, [0.4, 0.6]).warnings).toEqual([]);
+  });
+});
+
 describe("no point, wrong kind, bad input", () => {
   const gas = defineFluid({ components: ["methane", "n-butane"], model: "peng-robinson" });
   it("above the cricondentherm there is no dew point: PhaseUnavailableError", () => {
     // n-butane's critical temperature is 425 K (table); a gas with 10 % of it has its
     // cricondentherm far below 450 K
     expect(() => dewPointAtTemperature(gas, 450, [0.9, 0.1])).toThrow(PhaseUnavailableError);
+    expect(() => dewPointAtTemperature(gas, 450, [0.9, 0.1])).toThrow(/above the cricondentherm/);
     expect(() => bubblePointAtTemperature(gas, 450, [0.9, 0.1])).toThrow(PhaseUnavailableError);
+  });
+  it("above the cricondenbar there is no point at that pressure, and the error says so", () => {
+    const env = gas.envelope([0.9, 0.1]);
+    const P = env.cricondenbar!.P * 1.05;
+    expect(() => dewPointAtPressure(gas, P, [0.9, 0.1])).toThrow(/above the cricondenbar/);
+    // just below it both the upper and the lower point exist; Newton reaches one of them
+    const below = dewPointAtPressure(gas, env.cricondenbar!.P * 0.97, [0.9, 0.1]);
+    expect(below.kind).toBe("dew");
   });
   it("refuses bad T, P, z and options with InputError", () => {
     expect(() => bubblePointAtTemperature(gas, NaN, [0.5, 0.5])).toThrow(InputError);

@@ -21,7 +21,7 @@ import { requireCount, requireNonNegative, requirePositive } from "../../validat
 import { InputError } from "../../errors.js";
 import type { WilsonConstants } from "../stability.js";
 import { mixtureCriticalPoint, type MixtureCriticalPoint } from "./mixtureCriticalPoint.js";
-import { attemptAtPressure, modelConstants, saturationSystemOf } from "./saturationPoint.js";
+import { attemptAtPressure, modelConstants, saturationSystemOf } from "./saturationStarts.js";
 import type { SaturationSystem } from "./saturationSystem.js";
 import { traceLine, type LineTrace, type TraceSettings } from "./traceLine.js";
 

@@ -15,18 +15,27 @@ import {
 } from "../../errors.js";
 import type { ModelInfo } from "../../eos/types.js";
 import { requireCount, requireInRange, requirePositive } from "../../validate.js";
-import { checkComposition, checkPressure, checkTemperature } from "../../state/checkInputs.js";
+import { checkPressure, checkTemperature } from "../../state/checkInputs.js";
 import { stateAtTRho } from "../../state/stateAt.js";
 import type { FluidBinding, FluidState } from "../../state/types.js";
 import { stabilityAtTP, type WilsonConstants } from "../stability.js";
-import {
-  solveSaturation,
-  type SaturationSolution,
-  type SaturationSystem,
-} from "./saturationSystem.js";
+import type { SaturationSystem } from "./saturationSystem.js";
 import { singleComponentPoint } from "./singleComponentPoint.js";
-import { verifyPoint, type VerifiedPoint } from "./verifyPoint.js";
-import { wilsonLnK, wilsonPressure, wilsonTemperature } from "./wilson.js";
+import type { VerifiedPoint } from "./verifyPoint.js";
+import { wilsonLnK, wilsonPressure } from "./wilson.js";
+import { phaseEnvelope, type PhaseEnvelope } from "./phaseEnvelope.js";
+import {
+  attemptAtPressure,
+  firstVerified,
+  modelConstants,
+  saturationSystemOf,
+  stabilityStarts,
+  startVector,
+  type Attempt,
+  type SaturationStart,
+  type StartCandidate,
+  type StartKind,
+} from "./saturationStarts.js";
 
 /** Options of {@link saturationPointAtTemperature} and {@link saturationPointAtPressure}. */
 export interface SaturationPointOptions {
@@ -47,7 +56,7 @@ export interface SaturationPointOptions {
   /** Critical constants for Wilson's K-factors; default the model's own components. */
   constants?: readonly WilsonConstants[];
   /** Your own start: the unknown (P at given T, T at given P; SI) and/or K-factors y/x. */
-  start?: { pressurePa?: number; temperatureK?: number; kFactors?: readonly number[] };
+  start?: SaturationStart;
 }
 
 /** Kind of a saturation point, from the phases found (not from the request). */
@@ -76,7 +85,7 @@ export interface MixtureSaturationPoint {
   readonly fugacityResidual: number;
   readonly iterations: number;
   /** Where the converged Newton run started. */
-  readonly start: "wilson" | "stability test" | "given";
+  readonly start: StartKind;
   readonly method: string;
   readonly model: ModelInfo;
   readonly warnings: readonly ResultWarning[];
@@ -85,115 +94,7 @@ export interface MixtureSaturationPoint {
 const METHOD =
   "Newton on ln K, ln T, ln P (Michelsen, Fluid Phase Equilib. 4 (1980) 1-10) from Wilson K-factors or the tangent-plane test's incipient phase";
 
-/** The model's own component constants (built-in models carry them). */
-export function modelConstants(
-  binding: FluidBinding,
-  given?: readonly WilsonConstants[],
-): readonly WilsonConstants[] | undefined {
-  if (given !== undefined) return given;
-  const c = (binding.model as { components?: readonly WilsonConstants[] }).components;
-  return Array.isArray(c) ? c : undefined;
-}
-
-/** Checks the feed and builds the system (normalised z, present components). */
-export function saturationSystemOf(
-  binding: FluidBinding,
-  z: readonly number[],
-  beta: number,
-  input = "z",
-): SaturationSystem {
-  const n = binding.model.info.componentIds.length;
-  checkComposition(z, n, input);
-  const present: number[] = [];
-  let sum = 0;
-  for (let i = 0; i < n; i++) {
-    if (z[i] > 0) {
-      present.push(i);
-      sum += z[i];
-    }
-  }
-  return { model: binding.model, z: z.map((v) => v / sum), present, beta };
-}
-
-/** X = (ln K of present components, ln T, ln P) from full-length ln K. */
-export function startVector(
-  sys: SaturationSystem,
-  lnK: readonly number[],
-  T: number,
-  P: number,
-): number[] {
-  return [...sys.present.map((i) => lnK[i]), Math.log(T), Math.log(P)];
-}
-
-interface Attempt {
-  solution: SaturationSolution;
-  point: VerifiedPoint;
-  start: MixtureSaturationPoint["start"];
-}
-
-/** Runs Newton from each start in turn; returns the first verified point, else what happened. */
-function firstVerified(
-  sys: SaturationSystem,
-  starts: Iterable<{ X: number[]; start: MixtureSaturationPoint["start"]; note: string }>,
-  specIndex: number,
-  specValue: number,
-  tolerance: number,
-  maxIterations: number,
-  trivialLnK: number,
-): { attempt?: Attempt; tried: string[] } {
-  const tried: string[] = [];
-  for (const s of starts) {
-    try {
-      const solution = solveSaturation(sys, s.X, specIndex, specValue, {
-        tolerance: tolerance * 0.1,
-        maxIterations,
-      });
-      const v = verifyPoint(sys, solution, tolerance, trivialLnK);
-      if (v.failure === undefined)
-        return { attempt: { solution, point: v.point, start: s.start }, tried };
-      tried.push(`${s.note}: ${v.failure}`);
-    } catch (e) {
-      if (!(e instanceof SolverError || e instanceof PhaseUnavailableError)) throw e;
-      tried.push(`${s.note}: ${e.message}`);
-    }
-  }
-  return { tried };
-}
-
-/** Starting vectors from the tangent-plane test's incipient phase at (T, P) guesses. */
-function* stabilityStarts(
-  binding: FluidBinding,
-  sys: SaturationSystem,
-  constants: readonly WilsonConstants[] | undefined,
-  guesses: readonly { T: number; P: number }[],
-): Generator<{ X: number[]; start: "stability test"; note: string }> {
-  for (const g of guesses) {
-    let w: readonly number[] | undefined;
-    try {
-      const test = stabilityAtTP(binding.model, g.T, g.P, sys.z, { constants });
-      w = test.incipientComposition;
-    } catch (e) {
-      if (!(e instanceof PhaseUnavailableError)) throw e;
-    }
-    if (w === undefined) continue;
-    // the incipient phase w is the y phase of a low vapour fraction, the x phase of a high one
-    const lnK = sys.z.map((zi, i) =>
-      zi > 0 && w[i] > 0 ? (sys.beta <= 0.5 ? Math.log(w[i] / zi) : Math.log(zi / w[i])) : 0,
-    );
-    yield {
-      X: startVector(sys, lnK, g.T, g.P),
-      start: "stability test",
-      note: `start from the tangent-plane test at T = ${g.T.toPrecision(5)} K, P = ${g.P.toPrecision(5)} Pa`,
-    };
-  }
-}
-
-function checkOptions(options: SaturationPointOptions): {
-  beta: number;
-  tolerance: number;
-  maxIterations: number;
-  trivialLnK: number;
-} {
+function checkOptions(options: SaturationPointOptions): CheckedOptions {
   return {
     beta: requireInRange("options.vaporFraction", options.vaporFraction ?? 0, "mol/mol", 0, 1),
     tolerance: requirePositive("options.tolerance", options.tolerance ?? 1e-10, "-"),
@@ -220,7 +121,7 @@ export function assemblePoint(
   sys: SaturationSystem,
   point: VerifiedPoint,
   iterations: number,
-  start: MixtureSaturationPoint["start"],
+  start: StartKind,
   warnings: readonly ResultWarning[],
 ): MixtureSaturationPoint {
   const T = point.temperatureK;
@@ -255,19 +156,162 @@ export function assemblePoint(
   };
 }
 
+/** Options after their checks. */
+interface CheckedOptions {
+  beta: number;
+  tolerance: number;
+  maxIterations: number;
+  trivialLnK: number;
+}
+
+/**
+ * The envelope of z (without its own checks) and the starts it offers at T or P: the envelope's
+ * neighbouring points of the requested kind that bracket the given value, interpolated in ln P
+ * (or ln T) and in the incipient composition. Only for bubble and dew points.
+ */
+function envelopeStarts(
+  binding: FluidBinding,
+  sys: SaturationSystem,
+  given: { T: number } | { P: number },
+  constants: readonly WilsonConstants[] | undefined,
+): { envelope?: PhaseEnvelope; starts: StartCandidate[]; otherKindHere: boolean } {
+  if (sys.beta !== 0 && sys.beta !== 1) return { starts: [], otherKindHere: false };
+  let envelope: PhaseEnvelope;
+  try {
+    envelope = phaseEnvelope(binding, sys.z, {
+      stabilityStride: 0,
+      checkCritical: false,
+      constants,
+    });
+  } catch (e) {
+    if (e instanceof SolverError || e instanceof PhaseUnavailableError) {
+      return { starts: [], otherKindHere: false };
+    }
+    throw e;
+  }
+  const starts: StartCandidate[] = [];
+  let otherKindHere = false;
+  const wanted = sys.beta === 0 ? "bubble" : "dew";
+  const pts = envelope.points;
+  const atT = "T" in given;
+  const v = atT ? given.T : given.P;
+  for (let k = 1; k < pts.length; k++) {
+    const a = pts[k - 1];
+    const b = pts[k];
+    if (a.segment !== b.segment || a.kind !== b.kind) continue;
+    const va = atT ? a.T : a.P;
+    const vb = atT ? b.T : b.P;
+    if (!((va - v) * (vb - v) <= 0 && va !== vb)) continue;
+    if (a.kind !== wanted) {
+      otherKindHere = true;
+      continue;
+    }
+    const f = Math.log(v / va) / Math.log(vb / va);
+    const T = atT ? v : Math.exp(Math.log(a.T) + f * Math.log(b.T / a.T));
+    const P = atT ? Math.exp(Math.log(a.P) + f * Math.log(b.P / a.P)) : v;
+    const w = a.incipient.map((wa, i) => wa + f * (b.incipient[i] - wa));
+    // the incipient phase is y of a bubble-point system (beta 0), x of a dew-point one (beta 1)
+    const lnK = sys.z.map((zi, i) =>
+      zi > 0 && w[i] > 0 ? (sys.beta === 0 ? Math.log(w[i] / zi) : Math.log(zi / w[i])) : 0,
+    );
+    starts.push({
+      X: startVector(sys, lnK, T, P),
+      start: "envelope",
+      note: `start from the phase envelope (${a.kind} line near T = ${T.toPrecision(5)} K, P = ${P.toPrecision(5)} Pa)`,
+    });
+  }
+  return { envelope, starts, otherKindHere };
+}
+
+/** The verified point, or a PhaseUnavailableError that says why there is none. */
 function pointOrError(
   binding: FluidBinding,
   sys: SaturationSystem,
   found: { attempt?: Attempt; tried: string[] },
-  where: string,
+  given: { T: number } | { P: number },
+  constants: readonly WilsonConstants[] | undefined,
+  o: CheckedOptions,
 ): MixtureSaturationPoint {
-  if (found.attempt === undefined) {
+  const atT = "T" in given;
+  const where = atT ? `at T = ${given.T} K` : `at P = ${given.P} Pa`;
+  let attempt = found.attempt;
+  let envelope: PhaseEnvelope | undefined;
+  let otherKindHere = false;
+  if (attempt === undefined) {
+    // last resort: the envelope itself, which also tells whether a point can exist here
+    const e = envelopeStarts(binding, sys, given, constants);
+    envelope = e.envelope;
+    otherKindHere = e.otherKindHere;
+    const more = firstVerified(
+      sys,
+      e.starts,
+      sys.present.length + (atT ? 0 : 1),
+      Math.log(atT ? given.T : given.P),
+      o.tolerance,
+      o.maxIterations,
+      o.trivialLnK,
+    );
+    attempt = more.attempt;
+    found.tried.push(...more.tried);
+  }
+  if (attempt === undefined) {
+    let why = "";
+    if (envelope?.complete) {
+      const kind = sys.beta === 0 ? "bubble" : "dew";
+      const top = atT ? envelope.cricondentherm : envelope.cricondenbar;
+      if (top && atT && given.T > top.T) {
+        why = `: ${given.T} K is above the cricondentherm of this mixture (${top.T.toPrecision(6)} K at ${top.P.toPrecision(6)} Pa), so no saturation point exists at this temperature`;
+      } else if (top && !atT && given.P > top.P) {
+        why = `: ${given.P} Pa is above the cricondenbar of this mixture (${top.P.toPrecision(6)} Pa at ${top.T.toPrecision(6)} K), so no saturation point exists at this pressure`;
+      } else if (otherKindHere) {
+        const other = kind === "bubble" ? "dew" : "bubble";
+        why = `: the mixture's envelope has only ${other} points ${where} (e.g. between the critical point and the cricondentherm a gas has dew points, no bubble point)`;
+      }
+    }
     throw new PhaseUnavailableError(
-      `no saturation point with vapour fraction ${sys.beta} found ${where}: either none exists there (above the cricondentherm at given T, above the cricondenbar at given P, or the feed never splits) or every start failed. Tried: ${found.tried.join("; ") || "no start (Wilson's K-factors do not bracket a saturation point and the tangent-plane test found the feed stable)"}`,
+      `no saturation point with vapour fraction ${sys.beta} found ${where}${why}. Tried: ${found.tried.join("; ") || "no start (Wilson's K-factors do not bracket a saturation point and the tangent-plane test found the feed stable)"}`,
     );
   }
-  const a = found.attempt;
-  return assemblePoint(binding, sys, a.point, a.solution.iterations, a.start, []);
+  return assemblePoint(
+    binding,
+    sys,
+    attempt.point,
+    attempt.solution.iterations,
+    attempt.start,
+    thirdPhaseWarnings(sys, attempt.point, constants),
+  );
+}
+
+/**
+ * A warning when the two phases are not the stable ones: a third phase (e.g. water, a second
+ * liquid) has a negative tangent-plane distance at the point (both phases share one tangent
+ * plane, so testing one tests both).
+ */
+function thirdPhaseWarnings(
+  sys: SaturationSystem,
+  p: VerifiedPoint,
+  constants: readonly WilsonConstants[] | undefined,
+): ResultWarning[] {
+  let test;
+  try {
+    test = stabilityAtTP(sys.model, p.temperatureK, p.pressurePa, p.x, { constants });
+  } catch (e) {
+    if (e instanceof PhaseUnavailableError) return [];
+    throw e;
+  }
+  if (test.stable) return [];
+  const ids = sys.model.info.componentIds;
+  const w = (test.incipientComposition ?? [])
+    .map((v, i) => ({ v, id: ids[i] }))
+    .filter((e) => e.v > 1e-3)
+    .map((e) => `${e.id} ${e.v.toFixed(3)}`)
+    .join(", ");
+  return [
+    {
+      code: "phase-split",
+      message: `saturation point at T = ${p.temperatureK.toPrecision(6)} K, P = ${p.pressurePa.toPrecision(6)} Pa: a third phase (${w}) has a negative tangent-plane distance (${test.minimumTangentPlaneDistance.toExponential(2)}), so this two-phase point is metastable (a liquid-liquid split, e.g. water)`,
+    },
+  ];
 }
 
 /**
@@ -279,10 +323,14 @@ function pointOrError(
  * p.pressurePa; p.incipient; // the first bubble's composition
  * saturationPointAtTemperature(fluid, 300, [0.5, 0.5], { vaporFraction: 1 }); // dew point
  * ```
+ * At a temperature with two points of the same kind (the retrograde region of a gas: an upper
+ * and a lower dew point), the one Newton reaches from the start is returned; give
+ * `options.start.pressurePa` for the other.
  * @throws InputError for bad T, z or options; PhaseUnavailableError when no verified point is
- *   found (with every start tried and how it ended); OutOfRangeError when a phase cannot be
- *   returned as a full state (e.g. below the range of an ideal-gas cp correlation; the
- *   equilibrium itself does not need it, phaseEnvelope gives T, P and compositions only).
+ *   found (with every start tried and how it ended, and, for bubble and dew points, whether T
+ *   lies above the cricondentherm); OutOfRangeError when a phase cannot be returned as a full
+ *   state (e.g. below the range of an ideal-gas cp correlation; the equilibrium itself does not
+ *   need it, phaseEnvelope gives T, P and compositions only).
  */
 export function saturationPointAtTemperature(
   binding: FluidBinding,
@@ -298,11 +346,17 @@ export function saturationPointAtTemperature(
   const constants = modelConstants(binding, options.constants);
   const T = temperatureK;
   const m = sys.present.length;
-  const starts = function* (): Generator<{
-    X: number[];
-    start: MixtureSaturationPoint["start"];
-    note: string;
-  }> {
+  if (m < 2) {
+    const one = singleComponentPoint(
+      sys,
+      { temperatureK: T },
+      constants,
+      o.tolerance,
+      o.maxIterations,
+    );
+    return assemblePoint(binding, sys, one.point, one.iterations, "wilson", []);
+  }
+  const starts = function* (): Generator<StartCandidate> {
     const Pgiven = options.start?.pressurePa;
     const kGiven = options.start?.kFactors;
     let Pw: number | undefined;
@@ -327,16 +381,6 @@ export function saturationPointAtTemperature(
     const guesses = [1, 0.8, 1.25, 0.6, 1.6, 0.4, 2.5].map((f) => ({ T, P: P0 * f }));
     yield* stabilityStarts(binding, sys, constants, guesses);
   };
-  if (m < 2) {
-    const one = singleComponentPoint(
-      sys,
-      { temperatureK: T },
-      constants,
-      o.tolerance,
-      o.maxIterations,
-    );
-    return assemblePoint(binding, sys, one.point, one.iterations, "wilson", []);
-  }
   const found = firstVerified(
     sys,
     starts(),
@@ -346,80 +390,14 @@ export function saturationPointAtTemperature(
     o.maxIterations,
     o.trivialLnK,
   );
-  return pointOrError(binding, sys, found, `at T = ${T} K`);
-}
-
-/** What {@link attemptAtPressure} found: a verified point, or the starts it tried. */
-export interface PressureAttempt {
-  readonly solution?: SaturationSolution;
-  readonly point?: VerifiedPoint;
-  readonly start?: MixtureSaturationPoint["start"];
-  readonly tried: readonly string[];
-}
-
-/**
- * The saturation point of `sys` at P (Pa) from the given start, Wilson's start and the
- * tangent-plane test's starts in turn (no input checks: callers check).
- */
-export function attemptAtPressure(
-  binding: FluidBinding,
-  sys: SaturationSystem,
-  pressurePa: number,
-  constants: readonly WilsonConstants[] | undefined,
-  o: { tolerance: number; maxIterations: number; trivialLnK: number },
-  given?: SaturationPointOptions["start"],
-): PressureAttempt {
-  const P = pressurePa;
-  const n = sys.z.length;
-  const m = sys.present.length;
-  const starts = function* (): Generator<{
-    X: number[];
-    start: MixtureSaturationPoint["start"];
-    note: string;
-  }> {
-    const Tgiven = given?.temperatureK;
-    const kGiven = given?.kFactors;
-    let Tw: number | undefined;
-    if (constants !== undefined) Tw = wilsonTemperature(constants, sys.z, sys.present, sys.beta, P);
-    if (Tgiven !== undefined || kGiven !== undefined) {
-      const T0 = requirePositive("options.start.temperatureK", Tgiven ?? Tw ?? 300, "K");
-      const lnK = kGiven
-        ? kGiven.map(Math.log)
-        : constants
-          ? wilsonLnK(constants, T0, P)
-          : new Array<number>(n).fill(0);
-      yield { X: startVector(sys, lnK, T0, P), start: "given", note: "the given start" };
-    }
-    if (constants !== undefined && Tw !== undefined) {
-      yield {
-        X: startVector(sys, wilsonLnK(constants, Tw, P), Tw, P),
-        start: "wilson",
-        note: `Wilson start (T = ${Tw.toPrecision(5)} K)`,
-      };
-    }
-    const T0 = Tw ?? 300;
-    const guesses = [1, 0.95, 1.05, 0.9, 1.1, 0.8, 1.2].map((f) => ({ T: T0 * f, P }));
-    yield* stabilityStarts(binding, sys, constants, guesses);
-  };
-  const found = firstVerified(
-    sys,
-    starts(),
-    m + 1,
-    Math.log(P),
-    o.tolerance,
-    o.maxIterations,
-    o.trivialLnK,
-  );
-  return found.attempt === undefined
-    ? { tried: found.tried }
-    : { ...found.attempt, tried: found.tried };
+  return pointOrError(binding, sys, found, { T }, constants, o);
 }
 
 /**
  * The saturation point of a mixture z at pressure P (Pa): its temperature and phases.
  * At a pressure with two points of the same vapour fraction (the retrograde region), the one
  * Newton reaches from the start is returned; give `options.start.temperatureK` for the other.
- * @throws as {@link saturationPointAtTemperature}.
+ * @throws as {@link saturationPointAtTemperature} (above the cricondenbar for P).
  */
 export function saturationPointAtPressure(
   binding: FluidBinding,
@@ -441,7 +419,7 @@ export function saturationPointAtPressure(
     a.solution && a.point && a.start
       ? { attempt: { solution: a.solution, point: a.point, start: a.start }, tried: [...a.tried] }
       : { tried: [...a.tried] };
-  return pointOrError(binding, sys, found, `at P = ${pressurePa} Pa`);
+  return pointOrError(binding, sys, found, { P: pressurePa }, constants, o);
 }
 
 /** Refuses a point of the wrong kind (a bubble-point request that found a dew point, ...). */
