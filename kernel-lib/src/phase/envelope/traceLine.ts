@@ -8,7 +8,8 @@
  * is the one that changes fastest along it, the next point is predicted along the tangent and
  * corrected by Newton. The step grows when Newton needs few iterations and shrinks when it needs
  * many or fails, and is capped in every variable.
- * At the critical point all ln K change sign: when the specified variable is a ln K approaching
+ * At the critical point the ln K vector reverses (all ln K change sign, save those near zero
+ * anyway): when the specified variable is a ln K approaching
  * zero, the step jumps symmetrically across it (Michelsen 1980, section 4), and the crossing is
  * located by cubic Hermite interpolation of ln T and ln P in that ln K, using the tangents at the
  * two points. The cricondenbar (d ln P = 0 along the line) and the cricondentherm (d ln T = 0)
@@ -375,10 +376,15 @@ function criticalCrossing(
   b: TracedPoint,
   m: number,
 ): { T: number; P: number } | undefined {
+  // the K-factor vector reverses: its largest component changes sign and the vectors point in
+  // opposite directions (a component whose K is near 1 anyway, e.g. CO2 in a rich gas, may keep
+  // its sign across the critical point)
   let p = 0;
   for (let j = 1; j < m; j++) if (Math.abs(a.X[j]) > Math.abs(a.X[p])) p = j;
   if (!(a.X[p] * b.X[p] < 0)) return undefined;
-  for (let j = 0; j < m; j++) if (a.X[j] * b.X[j] > 0) return undefined;
+  let dot = 0;
+  for (let j = 0; j < m; j++) dot += a.X[j] * b.X[j];
+  if (!(dot < 0)) return undefined;
   const u0 = a.X[p];
   const u1 = b.X[p];
   const lnT = hermite(
