@@ -13,19 +13,13 @@ import type {
 import { requirePositive } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
-import {
-  checkArray,
-  planAxis,
-  plotValue,
-  positionEncoding,
-  seriesLineLayer,
-  shortNumber,
-  topLevel,
-  WarningList,
-  type AxisPlan,
-  type BaseChartOptions,
-  type LineRow,
-} from "./specParts.js";
+import { planAxis, plotValue, positionEncoding, type AxisPlan } from "./axisPlan.js";
+import { checkArray, type BaseChartOptions } from "./chartOptions.js";
+import type { LineRow } from "./curveRows.js";
+import { seriesLineLayer } from "./seriesLayers.js";
+import { shortNumber } from "./shortNumber.js";
+import { topLevel } from "./topLevel.js";
+import { WarningList } from "./warningList.js";
 import { INK } from "./theme.js";
 
 /** What the chart draws: the fields of a phase envelope result (SI). */

@@ -14,6 +14,7 @@ import type { WilsonConstants } from "../stability.js";
 import type { SaturationSystem } from "./saturationSystem.js";
 import type { VerifiedPoint } from "./verifyPoint.js";
 import { wilsonLnK } from "./wilson.js";
+import { wilsonLnReducedVaporPressure } from "../wilson.js";
 
 /** Solves the pure-component condition with T or P given; verified, or a PhaseUnavailableError. */
 export function singleComponentPoint(
@@ -30,8 +31,13 @@ export function singleComponentPoint(
   let T = atT ? given.temperatureK : c ? c.criticalTemperatureK * 0.7 : 300;
   let P = atT ? (c ? Math.exp(wilsonLnK([c], T, 1)[0]) : 1e5) : given.pressurePa;
   if (!atT && c) {
-    // Wilson's vapour pressure solved for T: ln(Pc/P) = -5.373 (1 + w)(1 - Tc/T)
-    const a = 5.373 * (1 + c.acentricFactor);
+    // Wilson's vapour pressure solved for T: ln(P/Pc) = a (1 - Tc/T), a = ln(Psat/Pc) at T = Tc/2
+    const a =
+      wilsonLnReducedVaporPressure(
+        c.criticalTemperatureK / 2,
+        c.criticalTemperatureK,
+        c.acentricFactor,
+      ) / -1;
     T = c.criticalTemperatureK / (1 + Math.log(c.criticalPressurePa / P) / a);
     if (!(T > 0)) T = 0.7 * c.criticalTemperatureK;
   }

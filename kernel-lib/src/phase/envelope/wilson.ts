@@ -1,7 +1,5 @@
 /**
- * Starting values of saturation points from Wilson's K-factors,
- *   K_i = (Pc_i / P) exp(5.373 (1 + omega_i) (1 - Tc_i / T))
- * (G. M. Wilson, "A modified Redlich-Kwong equation of state, application to general physical
+ * Starting values of saturation points from Wilson's K-factors (phase/wilson.ts; G. M. Wilson, "A modified Redlich-Kwong equation of state, application to general physical
  * data calculations", AIChE National Meeting, Cleveland (1969), paper 15C; as used in
  * M. L. Michelsen & J. M. Mollerup, Thermodynamic Models, 2nd ed. (2007), ch. 9-12), with the
  * Rachford-Rice condition sum_i z_i (K_i - 1) / (1 + beta (K_i - 1)) = 0 (H. H. Rachford and
@@ -10,8 +8,9 @@
  */
 import { findRootBrent } from "../../numerics/brent.js";
 import type { WilsonConstants } from "../stability.js";
+import { wilsonLnReducedVaporPressure } from "../wilson.js";
 
-/** ln K_i of Wilson at T (K), P (Pa), one per component. */
+/** ln K_i of Wilson at T (K), P (Pa), one per component (phase/wilson.ts). */
 export function wilsonLnK(
   constants: readonly WilsonConstants[],
   temperatureK: number,
@@ -20,7 +19,7 @@ export function wilsonLnK(
   return constants.map(
     (c) =>
       Math.log(c.criticalPressurePa / pressurePa) +
-      5.373 * (1 + c.acentricFactor) * (1 - c.criticalTemperatureK / temperatureK),
+      wilsonLnReducedVaporPressure(temperatureK, c.criticalTemperatureK, c.acentricFactor),
   );
 }
 
