@@ -147,14 +147,18 @@ export function mixtureCriticalPoint(
     const lam = (T: number): number => smallestEigen(model, T, rho, z, present).lambda;
     let hi = ceiling;
     if (!(lam(hi) > 0)) return undefined;
-    let lo = Math.min(hi * 0.97, lastT * 1.02);
+    // step down from just above the last spinodal temperature (neighbouring densities have
+    // close ones) in 3 % steps, growing, until lambda turns negative
+    let lo = Math.min(hi * 0.97, lastT * 1.01);
+    let factor = 0.97;
     let k = 0;
     while (lam(lo) > 0) {
       hi = lo;
-      lo *= 0.9;
+      lo *= factor;
+      factor = Math.max(0.7, factor - 0.03);
       if (++k > 60 || lo < 1) return undefined;
     }
-    const t = findRootBrent(lam, lo, hi, { tolerance: 1e-10 * hi }).value;
+    const t = findRootBrent(lam, lo, hi, { tolerance: 1e-9 * hi }).value;
     lastT = t;
     return t;
   };

@@ -88,8 +88,13 @@ export interface QualityLine {
 /** The phase envelope of a mixture. */
 export interface PhaseEnvelope {
   readonly points: readonly EnvelopePoint[];
-  /** Critical point(s) where the line crossed K = 1 (checked against Heidemann-Khalil). */
+  /**
+   * Critical point(s) where the line crossed K = 1: the Heidemann-Khalil point when the crossing
+   * agrees with it (0.2 % in T, 0.5 % in P), else the interpolated crossing with a warning.
+   */
   readonly critical: readonly EnvelopeLandmark[];
+  /** The crossings as interpolated along the line (cubic Hermite in the specified ln K). */
+  readonly criticalCrossings: readonly EnvelopeLandmark[];
   /** Highest pressure of the envelope (dP/dT = 0), located exactly; absent if not reached. */
   readonly cricondenbar?: EnvelopeLandmark;
   /** Highest temperature of the envelope (dT/dP = 0), located exactly; absent if not reached. */
@@ -228,6 +233,7 @@ export function phaseEnvelope(
       ...base,
       points: [],
       critical: [],
+      criticalCrossings: [],
       complete: false,
       stoppedBecause:
         "fewer than two components present: a pure fluid has a vapour-pressure curve, not an envelope (use saturationAtTemperature)",
@@ -392,6 +398,7 @@ export function phaseEnvelope(
     ...base,
     points,
     critical,
+    criticalCrossings: crossings.map((c) => ({ T: c.T, P: c.P })),
     cricondenbar,
     cricondentherm,
     qualityLines,
