@@ -10,6 +10,7 @@ import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import {
   phaseEnvelope,
   saturationPointAtPressure,
+  saturationPointAtTemperature,
   type PhaseEnvelope,
 } from "../../../kernel-lib/src/phase/envelope/index.js";
 import { stabilityAtTP } from "../../../kernel-lib/src/phase/stability.js";
@@ -110,6 +111,36 @@ describe("envelope of the ten-component rich gas (PR)", () => {
     // the retrograde region: the cricondentherm lies above the critical temperature here
     expect(ct.T).toBeGreaterThan(env.critical[0].T);
     expect(cb.P).toBeGreaterThan(env.critical[0].P);
+  });
+
+  it("the extremes are stationary: neighbouring points on either side lie below them", () => {
+    const ct = env.cricondentherm!;
+    for (const f of [0.98, 1.02]) {
+      const p = saturationPointAtPressure(gas, ct.P * f, X10, {
+        vaporFraction: 1,
+        start: { temperatureK: ct.T },
+      });
+      expect(p.temperatureK).toBeLessThan(ct.T);
+      // quadratic near the maximum: 2 % in P moves T by far less than 1 K
+      expect(ct.T - p.temperatureK).toBeLessThan(1);
+    }
+    const cb = env.cricondenbar!;
+    // the cricondenbar of this gas lies above its critical temperature, on the dew line
+    expect(cb.T).toBeGreaterThan(env.critical[0].T);
+    // started from the envelope point nearest to it (K = y/x = z / incipient liquid): Wilson's
+    // K-factors at 125 bar are too crude to pick the upper dew point
+    let near = env.points[0];
+    for (const q of env.points) if (Math.abs(q.P - cb.P) < Math.abs(near.P - cb.P)) near = q;
+    const kFactors = X10.map((zi, i) => zi / near.incipient[i]);
+    for (const dT of [-1, 1]) {
+      const p = saturationPointAtTemperature(gas, cb.T + dT, X10, {
+        vaporFraction: 1,
+        start: { pressurePa: cb.P, kFactors },
+      });
+      expect(p.kind).toBe("dew");
+      expect(p.pressurePa).toBeLessThan(cb.P);
+      expect(cb.P - p.pressurePa).toBeLessThan(0.01 * cb.P);
+    }
   });
 
   it("the stability test says unstable a few K inside and stable a few K outside", () => {
