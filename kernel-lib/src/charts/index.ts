@@ -75,4 +75,10 @@ export { modelVsDataChart } from "./modelVsData.js";
 export type { ChartMeasuredPoint, ModelVsDataInput, ModelVsDataOptions } from "./modelVsData.js";
 export { processPathChart, withProcessPath } from "./processPath.js";
 export type { PathDiagram, ProcessPathOptions, ProcessPathState } from "./processPath.js";
+export { phaseEnvelopeChart } from "./phaseEnvelope.js";
+export type {
+  PhaseEnvelopeChartData,
+  PhaseEnvelopeChartOptions,
+  EnvelopePathState,
+} from "./phaseEnvelope.js";
 export * from "./sample/index.js";

@@ -35,6 +35,29 @@ import {
 import type { DepartureMethod, FluidBinding, FluidState } from "../state/types.js";
 import type { ResultWarning } from "../errors.js";
 import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../phase/stability.js";
+import {
+  saturationPointAtPressure,
+  saturationPointAtTemperature,
+  type MixtureSaturationPoint,
+  type SaturationPointOptions,
+} from "../phase/envelope/saturationPoint.js";
+import {
+  bubblePointAtPressure,
+  bubblePointAtTemperature,
+  dewPointAtPressure,
+  dewPointAtTemperature,
+  type BubbleDewOptions,
+} from "../phase/envelope/bubbleDew.js";
+import {
+  phaseEnvelope,
+  type PhaseEnvelope,
+  type PhaseEnvelopeOptions,
+} from "../phase/envelope/phaseEnvelope.js";
+import {
+  mixtureCriticalPoint,
+  type MixtureCriticalOptions,
+  type MixtureCriticalPoint,
+} from "../phase/envelope/mixtureCriticalPoint.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
 // x). Not frozen: a frozen array has other elements kinds and slowed every state call by half.
@@ -118,6 +141,53 @@ export interface Fluid extends FluidBinding {
     x?: readonly number[],
     options?: StabilityOptions,
   ): StabilityResult;
+  /**
+   * The phase envelope of the mixture z (phase/envelope/phaseEnvelope.ts): bubble and dew lines,
+   * critical point, cricondenbar, cricondentherm, optional lines of constant vapour fraction;
+   * `complete` false with `stoppedBecause` when it does not close.
+   */
+  envelope(z: readonly number[], options?: PhaseEnvelopeOptions): PhaseEnvelope;
+  /** Bubble point of z at T (K): pressure and both phases. */
+  bubblePointAtTemperature(
+    temperatureK: number,
+    z: readonly number[],
+    options?: BubbleDewOptions,
+  ): MixtureSaturationPoint;
+  /** Bubble point of z at P (Pa): temperature and both phases. */
+  bubblePointAtPressure(
+    pressurePa: number,
+    z: readonly number[],
+    options?: BubbleDewOptions,
+  ): MixtureSaturationPoint;
+  /** Dew point of z at T (K). */
+  dewPointAtTemperature(
+    temperatureK: number,
+    z: readonly number[],
+    options?: BubbleDewOptions,
+  ): MixtureSaturationPoint;
+  /** Dew point of z at P (Pa). */
+  dewPointAtPressure(
+    pressurePa: number,
+    z: readonly number[],
+    options?: BubbleDewOptions,
+  ): MixtureSaturationPoint;
+  /** Saturation point of any vapour fraction (`options.vaporFraction`) at T (K). */
+  saturationPointAtTemperature(
+    temperatureK: number,
+    z: readonly number[],
+    options?: SaturationPointOptions,
+  ): MixtureSaturationPoint;
+  /** Saturation point of any vapour fraction (`options.vaporFraction`) at P (Pa). */
+  saturationPointAtPressure(
+    pressurePa: number,
+    z: readonly number[],
+    options?: SaturationPointOptions,
+  ): MixtureSaturationPoint;
+  /** Critical point of the mixture z (Heidemann-Khalil criteria). */
+  mixtureCriticalPoint(
+    z: readonly number[],
+    options?: MixtureCriticalOptions,
+  ): MixtureCriticalPoint;
   /** T at (P, h) in one phase (valves). */
   temperatureAtPH(
     pressurePa: number,
@@ -356,6 +426,20 @@ export function defineFluid(spec: FluidSpec): Fluid {
     densityRoots: (T, P, x) => densityRootsAtTP(binding, T, P, xOf(x)),
     stabilityAtTP: (T, P, x, options) =>
       stabilityAtTP(model, T, P, xOf(x), { constants: components, ...options }),
+    envelope: (z, options) => phaseEnvelope(binding, z, { constants: components, ...options }),
+    bubblePointAtTemperature: (T, z, options) =>
+      bubblePointAtTemperature(binding, T, z, { constants: components, ...options }),
+    bubblePointAtPressure: (P, z, options) =>
+      bubblePointAtPressure(binding, P, z, { constants: components, ...options }),
+    dewPointAtTemperature: (T, z, options) =>
+      dewPointAtTemperature(binding, T, z, { constants: components, ...options }),
+    dewPointAtPressure: (P, z, options) =>
+      dewPointAtPressure(binding, P, z, { constants: components, ...options }),
+    saturationPointAtTemperature: (T, z, options) =>
+      saturationPointAtTemperature(binding, T, z, { constants: components, ...options }),
+    saturationPointAtPressure: (P, z, options) =>
+      saturationPointAtPressure(binding, P, z, { constants: components, ...options }),
+    mixtureCriticalPoint: (z, options) => mixtureCriticalPoint(model, z, options),
     temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),
     temperatureAtPS: (P, s, x, options) => temperatureAtPS(binding, P, s, xOf(x), options),
   };

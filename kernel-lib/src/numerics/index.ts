@@ -4,6 +4,8 @@ export type { CubicRootsOptions, CubicRootsResult } from "./cubicRoots.js";
 export { findRootBrent } from "./brent.js";
 export type { BrentOptions, RootResult } from "./brent.js";
 export { solveLinear } from "./linearSolve.js";
+export { symmetricEigen } from "./symmetricEigen.js";
+export type { SymmetricEigenResult } from "./symmetricEigen.js";
 export { solveNewtonSystem } from "./newton.js";
 export type { NewtonOptions, NewtonResult } from "./newton.js";
 export { integrateAdaptive } from "./gaussKronrod.js";

@@ -41,3 +41,4 @@ export type {
   TrialStart,
   WilsonConstants,
 } from "./stability.js";
+export * from "./envelope/index.js";
