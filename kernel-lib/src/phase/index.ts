@@ -41,3 +41,5 @@ export type {
   TrialStart,
   WilsonConstants,
 } from "./stability.js";
+// mixture flashes (phase/flash/)
+export * from "./flash/index.js";

@@ -150,16 +150,20 @@ class CubicModelImpl implements CubicModel {
       }
     }
     if (same) return;
-    const kind = this.family.alpha;
-    const out = this.psiScratch;
-    for (let i = 0; i < n; i++) {
-      evaluatePsi(kind, this.slope[i], T, this.tc[i], out);
-      const s = this.sqrtAc[i];
-      this.psi[i] = s * out.psi;
-      this.dPsi[i] = s * out.dPsi;
-      this.d2Psi[i] = s * out.d2Psi;
-      this.cacheX[i] = x[i];
+    // the temperature part (alpha functions) only when T changed: a flash or a stability test
+    // calls at one T with many compositions
+    if (T !== this.cacheT) {
+      const kind = this.family.alpha;
+      const out = this.psiScratch;
+      for (let i = 0; i < n; i++) {
+        evaluatePsi(kind, this.slope[i], T, this.tc[i], out);
+        const s = this.sqrtAc[i];
+        this.psi[i] = s * out.psi;
+        this.dPsi[i] = s * out.dPsi;
+        this.d2Psi[i] = s * out.d2Psi;
+      }
     }
+    for (let i = 0; i < n; i++) this.cacheX[i] = x[i];
     let a = 0;
     let aT = 0;
     let aTT = 0;
