@@ -3,8 +3,8 @@
  * "The isothermal flash problem. Part I. Stability" and "Part II. Phase-split calculation", Fluid
  * Phase Equilib. 9 (1982) 1-19 and 21-40; M. L. Michelsen and J. M. Mollerup, Thermodynamic
  * Models: Fundamentals and Computational Aspects, 2nd ed. 2007, ch. 9-11):
- *  1. the tangent-plane test of the feed (phase/stability.ts); stable: one phase, returned with
- *     the test's verdict;
+ *  1. the tangent-plane test of the feed (phase/stability.ts), from Wilson's K-factors plus nearly
+ *     pure trials (FlashOptions.extraTrials); stable: one phase, returned with the verdict;
  *  2. otherwise each trial that found tm < 0, lowest tm first, seeds a two-phase split with
  *     K_i = phi_i(z) / phi_i(w) (at the trial's stationary point W_i / z_i): successive
  *     substitution with dominant-eigenvalue acceleration, then Newton on the Gibbs energy
@@ -41,6 +41,13 @@ export interface FlashOptions {
   maxPhases?: 2 | 3;
   /** Options of the stability tests (Wilson constants, thresholds). */
   stability?: StabilityOptions;
+  /**
+   * Nearly pure trial phases added to the Wilson starts of every stability test (aqueous phases
+   * and liquid-liquid splits that Wilson's K-factors miss). "auto" (default): every present
+   * component when at most four are present; otherwise water, if present, and the present
+   * component of highest critical temperature. "none": Wilson starts only. Or component indices.
+   */
+  extraTrials?: "auto" | "none" | readonly number[];
 }
 
 const METHOD_1 = "tangent-plane stability test (one phase stable)";
@@ -59,6 +66,34 @@ export function prepareFeed(z: readonly number[]): { z: number[]; present: numbe
     if (v > 0) present.push(i);
   });
   return { z: out, present };
+}
+
+/** The extra nearly pure trials of the stability tests (see FlashOptions.extraTrials). */
+function extraTrialsOf(
+  binding: FluidBinding,
+  present: readonly number[],
+  options: FlashOptions,
+): readonly number[] {
+  const rule = options.extraTrials ?? "auto";
+  if (rule === "none") return [];
+  if (rule !== "auto") return rule;
+  if (present.length <= 4) return present;
+  const ids = binding.model.info.componentIds;
+  const constants =
+    options.stability?.constants ??
+    (binding.model as { components?: readonly { criticalTemperatureK: number }[] }).components;
+  const out: number[] = [];
+  const water = present.find((i) => ids[i] === "water");
+  if (water !== undefined) out.push(water);
+  if (constants !== undefined) {
+    let heaviest = present[0];
+    for (const i of present) {
+      if (constants[i].criticalTemperatureK > constants[heaviest].criticalTemperatureK)
+        heaviest = i;
+    }
+    if (heaviest !== water) out.push(heaviest);
+  }
+  return out;
 }
 
 /**
@@ -121,7 +156,11 @@ export function flashTP(
     );
   };
   if (present.length < 2) return single(undefined, []);
-  const stability = stabilityAtTP(model, T, P, zz, options.stability);
+  const stabilityOptions: StabilityOptions = {
+    ...options.stability,
+    extraTrials: extraTrialsOf(binding, present, options),
+  };
+  const stability = stabilityAtTP(model, T, P, zz, stabilityOptions);
   if (stability.stable) return single(stability, stability.warnings);
 
   const splitOptions = { tolerance, newtonAfter, maxIterations };
@@ -163,7 +202,7 @@ export function flashTP(
     for (let round = 0; round < 3; round++) {
       let largest = phases[0];
       for (const p of phases) if (p.amount > largest.amount) largest = p;
-      const test = stabilityAtTP(model, T, P, largest.x, options.stability);
+      const test = stabilityAtTP(model, T, P, largest.x, stabilityOptions);
       finalStability = test;
       if (test.stable || phases.length >= 3) break;
       const w = test.incipientComposition!;

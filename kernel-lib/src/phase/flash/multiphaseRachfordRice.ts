@@ -17,7 +17,7 @@ import { solveLinear } from "../../numerics/linearSolve.js";
 
 /** Options of {@link solveMultiphaseSplit}. */
 export interface MultiphaseSplitOptions {
-  /** Convergence: max |dQ/dbeta_k| over free phases (and >= minus this at the bounds). Default 1e-13. */
+  /** Convergence: max |dQ/dbeta_k| over free phases (and >= minus this at the bounds). Default 1e-12. */
   tolerance?: number;
   /** Newton iterations. Default 100. */
   maxIterations?: number;
@@ -50,7 +50,7 @@ export function solveMultiphaseSplit(
 ): MultiphaseSplit {
   const np = K.length;
   const n = z.length;
-  const tol = options.tolerance ?? 1e-13;
+  const tol = options.tolerance ?? 1e-12;
   const maxIterations = options.maxIterations ?? 100;
   const beta = options.start
     ? options.start.map((b) => Math.max(b, 0))
@@ -70,6 +70,21 @@ export function solveMultiphaseSplit(
     return q;
   };
   let q = evalQ(beta);
+  const gradientMax = (b: readonly number[]): number => {
+    let worst = 0;
+    for (let k = 0; k < np; k++) {
+      let s = 1;
+      for (let i = 0; i < n; i++) {
+        if (z[i] === 0) continue;
+        let e = 0;
+        for (let l = 0; l < np; l++) e += b[l] * K[l][i];
+        s -= (z[i] * K[k][i]) / e;
+      }
+      if (b[k] <= 0 && s >= 0) continue;
+      worst = Math.max(worst, Math.abs(s));
+    }
+    return worst;
+  };
   let iterations = 0;
   let gmax = Infinity;
   const g = new Array<number>(np).fill(0);
@@ -135,7 +150,10 @@ export function solveMultiphaseSplit(
       if (t === tMax)
         for (let k = 0; k < np; k++) if (step[k] < 0 && -beta[k] / step[k] === tMax) trial[k] = 0;
       const qt = evalQ(trial);
-      if (qt <= q + 1e-4 * t * slope || (qt <= q && t < 1e-8)) {
+      // near the minimum the decrease of Q (~ |g|^2) is below its rounding: there a step is
+      // accepted when it reduces the largest free gradient instead
+      const better = gmax < 1e-6 ? gradientMax(trial) < gmax : qt <= q + 1e-4 * t * slope;
+      if (better) {
         q = qt;
         accepted = true;
         break;
@@ -145,7 +163,7 @@ export function solveMultiphaseSplit(
     if (!accepted) break; // no decrease possible at this precision: converged to rounding
     for (let k = 0; k < np; k++) beta[k] = trial[k];
   }
-  if (gmax > Math.max(tol, 1e-9)) {
+  if (gmax > Math.max(tol, 1e-10)) {
     throw new SolverError(
       METHOD,
       `after ${iterations} Newton iterations the largest gradient is ${gmax.toExponential(2)} (tolerance ${tol}); amounts [${beta.join(", ")}]`,
