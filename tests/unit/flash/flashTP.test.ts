@@ -288,7 +288,6 @@ describe("failure modes engineers report", () => {
       if (lo > best.P) best = { T, P: lo };
     }
     expect(best.P).toBeGreaterThan(50e5);
-    console.log("cricondenbar estimate", best);
     const eq = flashTP(c1c4, best.T, best.P * 0.999, [z1, 1 - z1]);
     expect(expectVerified(c1c4, eq)).toBe(2);
   });
