@@ -33,7 +33,11 @@ export interface FlashOptions {
   tolerance?: number;
   /** The returned split must have max |ln f_i(a) - ln f_i(b)| below this. Default 1e-10. */
   verifyTolerance?: number;
-  /** Successive-substitution steps before Newton's method takes over. Default 12. */
+  /**
+   * Successive-substitution steps before Newton's method may take over; it does when the error
+   * falls by less than half in a step (slow substitution, near a critical point), or after three
+   * times this many steps. Default 6.
+   */
   newtonAfter?: number;
   /** Cap on the iterations of one split (substitution plus Newton). Default 300. */
   maxIterations?: number;
@@ -44,8 +48,9 @@ export interface FlashOptions {
   /**
    * Nearly pure trial phases added to the Wilson starts of every stability test (aqueous phases
    * and liquid-liquid splits that Wilson's K-factors miss). "auto" (default): every present
-   * component when at most four are present; otherwise water, if present, and the present
-   * component of highest critical temperature. "none": Wilson starts only. Or component indices.
+   * component when at most four are present; otherwise water, if present (each trial costs about
+   * as much as a Wilson trial, and many-component hydrocarbon mixtures split as vapour-liquid,
+   * which the Wilson trials find). "none": Wilson starts only. Or component indices.
    */
   extraTrials?: "auto" | "none" | readonly number[];
 }
@@ -125,7 +130,7 @@ export function flashTP(
     options.verifyTolerance ?? 1e-10,
     "-",
   );
-  const newtonAfter = requireCount("options.newtonAfter", options.newtonAfter ?? 12);
+  const newtonAfter = requireCount("options.newtonAfter", options.newtonAfter ?? 6);
   const maxIterations = requireCount("options.maxIterations", options.maxIterations ?? 300);
   const maxPhases = options.maxPhases ?? 3;
   const T = temperatureK;
@@ -189,11 +194,11 @@ export function flashTP(
     phases = fromTrial(t.composition);
     if (phases !== undefined) break;
   }
-  const where = describeState(binding, T, P, zz);
+  const where = (): string => describeState(binding, T, P, zz);
   if (phases === undefined) {
     throw new SolverError(
       "isothermal flash",
-      `the feed is unstable at ${where} (tm = ${stability.minimumTangentPlaneDistance.toExponential(3)}) but no split converged: ${tried.join("; ")}`,
+      `the feed is unstable at ${where()} (tm = ${stability.minimumTangentPlaneDistance.toExponential(3)}) but no split converged: ${tried.join("; ")}`,
     );
   }
   let method = METHOD_2;
@@ -226,7 +231,7 @@ export function flashTP(
         if (!two.converged) {
           throw new SolverError(
             "isothermal flash",
-            `at ${where}: the three-phase attempt lost a phase and the two-phase split from the survivors did not converge (${two.reason})`,
+            `at ${where()}: the three-phase attempt lost a phase and the two-phase split from the survivors did not converge (${two.reason})`,
           );
         }
         phases = two.phases;
@@ -234,13 +239,13 @@ export function flashTP(
       }
       throw new SolverError(
         "isothermal flash",
-        `at ${where}: the phase of largest amount of the two-phase split is unstable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}), and the three-phase split ${out.reason ?? "failed"}`,
+        `at ${where()}: the phase of largest amount of the two-phase split is unstable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}), and the three-phase split ${out.reason ?? "failed"}`,
       );
     }
     if (finalStability !== undefined && !finalStability.stable && phases.length < 3) {
       throw new SolverError(
         "isothermal flash",
-        `at ${where}: the converged two-phase split is not stable (tm = ${finalStability.minimumTangentPlaneDistance.toExponential(3)}) and no three-phase split was found`,
+        `at ${where()}: the converged two-phase split is not stable (tm = ${finalStability.minimumTangentPlaneDistance.toExponential(3)}) and no three-phase split was found`,
       );
     }
   }

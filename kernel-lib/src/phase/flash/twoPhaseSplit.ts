@@ -36,7 +36,7 @@ export interface WorkingPhase {
 export interface SplitOptions {
   /** Convergence: max |ln f_i(y) - ln f_i(x)|. */
   tolerance: number;
-  /** Successive-substitution steps before Newton takes over. */
+  /** Successive-substitution steps before Newton may take over (when substitution is slow). */
   newtonAfter: number;
   /** Cap on all iterations (substitution plus Newton). */
   maxIterations: number;
@@ -160,38 +160,32 @@ export function convergeTwoPhase(
     throw e;
   }
   let prevDelta: number[] | undefined;
+  let prevError = Infinity;
+  let newtonAllowedAt = options.newtonAfter;
   const n = z.length;
   while (iterations < options.maxIterations) {
     iterations++;
     if (s.error <= options.tolerance && s.beta > 0 && s.oneMinusBeta > 0) return done(s, true);
     if (isTrivial(s, present)) return fail(s, "trivial solution (the two phases became the same)");
-    if (iterations > options.newtonAfter && s.beta > 0 && s.oneMinusBeta > 0) {
+    // Newton when substitution is slow: the error fell by less than half in the last step (near a
+    // critical point the dominant eigenvalue of the substitution approaches one), or after three
+    // times the allowed number of steps anyway
+    const slow = s.error > 0.5 * prevError || iterations > 3 * options.newtonAfter;
+    prevError = s.error;
+    if (iterations > newtonAllowedAt && slow && s.beta > 0 && s.oneMinusBeta > 0) {
       const nt = newton(model, T, P, z, present, s, options, options.maxIterations - iterations);
       iterations += nt.iterations;
       if (nt.converged) return { ...nt.outcome, iterations, newtonIterations: nt.iterations };
-      // Newton could not descend: continue with substitution from where it ended
+      // Newton could not descend: five more substitution steps from where it ended first
       s = nt.state;
+      newtonAllowedAt = iterations + 5;
     }
     const delta = new Array<number>(n).fill(0);
     for (const i of present) delta[i] = s.next[i] - s.lnK[i];
-    let candidate: SsState;
-    try {
-      candidate = evaluate(model, T, P, z, present, s.next.slice());
-    } catch (e) {
-      if (e instanceof SolverError)
-        return fail(
-          s,
-          "the K-values collapsed to one side of 1 (no Rachford-Rice root): the split vanished",
-        );
-      throw e;
-    }
-    // dominant-eigenvalue extrapolation every fifth step (Michelsen 1982)
-    if (
-      iterations % 5 === 0 &&
-      prevDelta !== undefined &&
-      candidate.beta > 0 &&
-      candidate.oneMinusBeta > 0
-    ) {
+    // dominant-eigenvalue extrapolation every fifth step (Michelsen 1982), kept when it lowers
+    // the Gibbs energy below the current split's (substitution itself decreases G)
+    let candidate: SsState | undefined;
+    if (iterations % 5 === 0 && prevDelta !== undefined && s.beta > 0 && s.oneMinusBeta > 0) {
       let num = 0;
       let den = 0;
       for (const i of present) {
@@ -204,16 +198,25 @@ export function convergeTwoPhase(
         for (const i of present) jump[i] = s.next[i] + (delta[i] * lambda) / (1 - lambda);
         try {
           const accelerated = evaluate(model, T, P, z, present, jump);
-          if (
-            accelerated.beta > 0 &&
-            accelerated.oneMinusBeta > 0 &&
-            accelerated.gibbs < candidate.gibbs
-          ) {
+          if (accelerated.beta > 0 && accelerated.oneMinusBeta > 0 && accelerated.gibbs < s.gibbs) {
             candidate = accelerated;
           }
         } catch (e) {
           if (!(e instanceof SolverError)) throw e;
         }
+      }
+    }
+    if (candidate === undefined) {
+      try {
+        candidate = evaluate(model, T, P, z, present, s.next.slice());
+      } catch (e) {
+        if (e instanceof SolverError) {
+          return fail(
+            s,
+            "the K-values collapsed to one side of 1 (no Rachford-Rice root): the split vanished",
+          );
+        }
+        throw e;
       }
     }
     prevDelta = delta;

@@ -94,9 +94,9 @@ export function assembleEquilibrium(
   tol: VerifyTolerances = DEFAULT_VERIFY,
 ): Equilibrium {
   const model = binding.model;
-  const where = describeState(binding, T, P, z);
+  const where = (): string => describeState(binding, T, P, z);
   const fail = (what: string): never => {
-    throw new SolverError(`phase split verification (${info.method})`, `at ${where}: ${what}`);
+    throw new SolverError(`phase split verification (${info.method})`, `at ${where()}: ${what}`);
   };
   for (const p of working) {
     if (!(p.amount > 0 && p.amount <= 1 + 1e-12))
@@ -181,7 +181,7 @@ export function assembleEquilibrium(
       if (lightestLiquidLike) {
         warnings.push({
           code: "accuracy",
-          message: `at ${where} the lightest of three phases (${states[order[0]].densityMolPerM3.toPrecision(5)} mol/m3) is liquid-like by the phase identification parameter; it is labelled "vapor" as the lightest phase`,
+          message: `at ${where()} the lightest of three phases (${states[order[0]].densityMolPerM3.toPrecision(5)} mol/m3) is liquid-like by the phase identification parameter; it is labelled "vapor" as the lightest phase`,
         });
       }
     }
