@@ -118,6 +118,10 @@ describe("robustness: 2,000 random flashes", () => {
         else counts.three++;
       } catch (e) {
         if (!(e instanceof IsochorError)) throw e;
+        if (e.code !== "out-of-range")
+          console.log(
+            `typed error (not a correlation range): ${key} T=${T} P=${P} z=${z}: ${e.message}`,
+          );
         const name = `${e.name} (${e.code})`;
         counts.typed.set(name, (counts.typed.get(name) ?? 0) + 1);
       }

@@ -23,7 +23,7 @@ import type { FluidBinding } from "../../state/types.js";
 import { requireCount, requirePositive } from "../../validate.js";
 import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../stability.js";
 import { convergeMultiphase } from "./threePhaseSplit.js";
-import { convergeTwoPhase, type WorkingPhase } from "./twoPhaseSplit.js";
+import { convergeTwoPhase, phaseLnPhi, type WorkingPhase } from "./twoPhaseSplit.js";
 import type { Equilibrium } from "./types.js";
 import { assembleEquilibrium, DEFAULT_VERIFY, describeState } from "./verifyEquilibrium.js";
 
@@ -170,12 +170,12 @@ export function flashTP(
 
   const splitOptions = { tolerance, newtonAfter, maxIterations };
   const tried: string[] = [];
-  const lnPhiZ = phaseFugacityAtTP(model, T, P, zz, "stable").lnPhi;
+  const lnPhiZ = phaseLnPhi(model, T, P, zz).lnPhi;
   let iterations = 0;
 
   /** Two phases from a trial composition w (the y phase). */
   const fromTrial = (w: readonly number[]): WorkingPhase[] | undefined => {
-    const lnPhiW = phaseFugacityAtTP(model, T, P, w, "stable").lnPhi;
+    const lnPhiW = phaseLnPhi(model, T, P, w).lnPhi;
     const lnK = new Array<number>(zz.length).fill(0);
     for (const i of present) lnK[i] = lnPhiZ[i] - lnPhiW[i];
     const out = convergeTwoPhase(model, T, P, zz, present, lnK, splitOptions);

@@ -2,15 +2,14 @@
  * A split into up to three phases at given T and P by successive substitution: the amounts and
  * compositions at fixed K-values from Michelsen's Q function (multiphaseRachfordRice.ts), then
  * K_ki = phi_ri / phi_ki relative to a reference phase r from each phase's ln phi in its own root
- * of lowest Gibbs energy (state/fugacity.ts), as in M. L. Michelsen and J. M. Mollerup,
+ * of lowest Gibbs energy (twoPhaseSplit.ts phaseLnPhi), as in M. L. Michelsen and J. M. Mollerup,
  * Thermodynamic Models: Fundamentals and Computational Aspects, 2nd ed. (2007), ch. 11. The
  * reference is the phase of largest amount. A phase whose amount stays at zero for three steps has
  * vanished: the caller goes on with the others.
  */
 import type { ResidualModel } from "../../eos/types.js";
-import { phaseFugacityAtTP } from "../../state/fugacity.js";
 import { solveMultiphaseSplit } from "./multiphaseRachfordRice.js";
-import type { WorkingPhase } from "./twoPhaseSplit.js";
+import { normalizeComposition, phaseLnPhi, type WorkingPhase } from "./twoPhaseSplit.js";
 
 /** Outcome of {@link convergeMultiphase}. */
 export interface MultiphaseOutcome {
@@ -41,8 +40,8 @@ export function convergeMultiphase(
   const np = start.length;
   const n = z.length;
   const phases: WorkingPhase[] = start.map((p) => {
-    const f = phaseFugacityAtTP(model, T, P, p.x, "stable");
-    return { x: p.x.slice(), lnPhi: f.lnPhi, densityMolPerM3: f.densityMolPerM3, amount: p.amount };
+    const f = phaseLnPhi(model, T, P, p.x);
+    return { x: p.x.slice(), lnPhi: f.lnPhi, densityMolPerM3: f.rho, amount: p.amount };
   });
   const zeroCount = new Array<number>(np).fill(0);
   let error = Infinity;
@@ -59,10 +58,10 @@ export function convergeMultiphase(
     const split = solveMultiphaseSplit(z, K, { start: phases.map((p) => Math.max(p.amount, 0)) });
     for (let k = 0; k < np; k++) {
       phases[k].amount = split.beta[k];
-      phases[k].x = split.x[k];
-      const f = phaseFugacityAtTP(model, T, P, split.x[k], "stable");
+      phases[k].x = normalizeComposition(split.x[k]);
+      const f = phaseLnPhi(model, T, P, split.x[k]);
       phases[k].lnPhi = f.lnPhi;
-      phases[k].densityMolPerM3 = f.densityMolPerM3;
+      phases[k].densityMolPerM3 = f.rho;
       zeroCount[k] = split.beta[k] > 0 ? 0 : zeroCount[k] + 1;
     }
     error = 0;

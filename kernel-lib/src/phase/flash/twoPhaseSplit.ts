@@ -18,6 +18,7 @@
  * The split returned has converged (max |ln f_i(y) - ln f_i(x)| <= tolerance) or `converged` is
  * false; the caller verifies and decides.
  */
+import { R as R_CODATA } from "../../constants.js";
 import type { ResidualModel } from "../../eos/types.js";
 import { SolverError } from "../../errors.js";
 import { solveLinear } from "../../numerics/linearSolve.js";
@@ -65,14 +66,50 @@ export function phaseGibbs(
   return g;
 }
 
+/**
+ * ln phi_i of the phase at T, P, x in its root of lowest Gibbs energy (state/fugacity.ts), taken
+ * consistently at the root's own density: ln f_i = ln(x_i rho R T) + dnA_i, so
+ * ln phi_i = dnA_i + ln(rho R T / P) = (dnA_i - ln Z) + ln(P(rho) / P). The two differ by
+ * ln(P(rho)/P), the rounding of the density root, which for an incompressible liquid at low
+ * pressure reaches 1e-10 (a root good to 1e-14 times a stiffness rho (dP/drho) / P of 1e4); the
+ * form at the root's own density is the one the returned states carry, so the split converged
+ * with it passes the verification made on those states.
+ */
+export function phaseLnPhi(
+  model: ResidualModel,
+  T: number,
+  P: number,
+  x: readonly number[],
+): { lnPhi: number[]; rho: number } {
+  const f = phaseFugacityAtTP(model, T, P, x, "stable");
+  const Rg = model.gasConstant ?? R_CODATA;
+  const shift = Math.log((f.Z * f.densityMolPerM3 * Rg * T) / P);
+  const lnPhi = f.lnPhi;
+  for (let i = 0; i < lnPhi.length; i++) lnPhi[i] += shift;
+  return { lnPhi, rho: f.densityMolPerM3 };
+}
+
+/**
+ * Divides a composition by its sum, in place, and returns it. Every composition is normalised
+ * before its fugacities are taken: the flash formulas leave sums of 1 +- a few eps, and at a stiff
+ * liquid density a sum off by 1e-14 moves P(rho) by 1e-10 relative; normalising first keeps the
+ * phase's density root, ln phi and the returned state consistent (and a / (a + b) <= 1 exactly, so
+ * no mole fraction exceeds one).
+ */
+export function normalizeComposition(x: number[]): number[] {
+  let sum = 0;
+  for (const v of x) sum += v;
+  for (let i = 0; i < x.length; i++) x[i] /= sum;
+  return x;
+}
+
 function fug(
   model: ResidualModel,
   T: number,
   P: number,
   x: number[],
 ): { lnPhi: number[]; rho: number } {
-  const f = phaseFugacityAtTP(model, T, P, x, "stable");
-  return { lnPhi: f.lnPhi, rho: f.densityMolPerM3 };
+  return phaseLnPhi(model, T, P, x);
 }
 
 interface SsState {
@@ -102,6 +139,8 @@ function evaluate(
   const K = new Array<number>(n).fill(1);
   for (const i of present) K[i] = Math.exp(lnK[i]);
   const rr = solveRachfordRice(z, K);
+  normalizeComposition(rr.x);
+  normalizeComposition(rr.y);
   const fx = fug(model, T, P, rr.x);
   const fy = fug(model, T, P, rr.y);
   const next = new Array<number>(n).fill(0);
@@ -392,6 +431,8 @@ function newton(
       y[i] = vv[i] / V;
       x[i] = (z[i] - vv[i]) / L;
     }
+    normalizeComposition(x);
+    normalizeComposition(y);
     const fx = fug(model, T, P, x);
     const fy = fug(model, T, P, y);
     const gibbs = L * phaseGibbs(x, fx.lnPhi, present) + V * phaseGibbs(y, fy.lnPhi, present);

@@ -16,13 +16,12 @@
  * A failed check is a SolverError naming the state and the check.
  */
 import { SolverError, type ResultWarning } from "../../errors.js";
-import { phaseFugacityAtTP } from "../../state/fugacity.js";
 import { phaseIdentificationParameter } from "../../state/phaseLabel.js";
 import { stateAtTRho } from "../../state/stateAt.js";
 import type { FluidBinding, FluidState } from "../../state/types.js";
 import type { StabilityResult } from "../stability.js";
 import type { Equilibrium, EquilibriumPhase, PhaseKind } from "./types.js";
-import type { WorkingPhase } from "./twoPhaseSplit.js";
+import { phaseLnPhi, type WorkingPhase } from "./twoPhaseSplit.js";
 
 /** Tolerances of the checks. */
 export interface VerifyTolerances {
@@ -143,14 +142,18 @@ export function assembleEquilibrium(
       `material balance not closed: max |sum_k amount_k x_ik - z_i| = ${balance.toExponential(3)} > ${tol.materialBalance}`,
     );
   }
-  // Gibbs energy against the feed as one phase (its root of lowest Gibbs energy)
-  const feed = phaseFugacityAtTP(model, T, P, z, "stable");
+  // Gibbs energy against the feed as one phase (its root of lowest Gibbs energy), both from
+  // ln f - ln P at each phase's own density (see twoPhaseSplit.ts phaseLnPhi: the same convention
+  // as the states', so the rounding of a stiff liquid's density root does not enter)
+  const feed = phaseLnPhi(model, T, P, z);
   let gFeed = 0;
   for (const i of present) gFeed += z[i] * (Math.log(z[i]) + feed.lnPhi[i]);
   let gSplit = 0;
   for (let k = 0; k < states.length; k++) {
+    const st = states[k];
+    const lnPRatio = Math.log(st.pressurePa / P);
     let g = 0;
-    for (const i of present) g += states[k].x[i] * (Math.log(states[k].x[i]) + states[k].lnPhi[i]);
+    for (const i of present) g += st.x[i] * (Math.log(st.x[i]) + st.lnPhi[i] + lnPRatio);
     gSplit += working[k].amount * g;
   }
   const dG = gSplit - gFeed;
