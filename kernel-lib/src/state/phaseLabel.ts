@@ -23,16 +23,15 @@
  * (common practice, no source) and "vapor" otherwise.
  */
 import type { ResidualDerivatives, ResidualModel } from "../eos/types.js";
+import { dPdTAtDensity, stiffnessFromResidual } from "../eos/residualRelations.js";
 import type { PhaseLabel } from "./types.js";
 
 // relative steps of the central differences of (dP/drho)_T (error ~ h^2 + eps / h)
 const STEP_T = 1e-5;
 const STEP_RHO = 1e-5;
 
-/** (dP/drho)_T / (R T) from reduced derivatives: 1 + 2 aD + aDD. */
-function dPdRhoOverRT(r: ResidualDerivatives): number {
-  return 1 + 2 * r.aD + r.aDD;
-}
+/** (dP/drho)_T / (R T) from reduced derivatives (eos/residualRelations.ts). */
+const dPdRhoOverRT = stiffnessFromResidual;
 
 /**
  * The phase identification parameter of Venkatarathnam and Oellrich (2011) at T (K), rho
@@ -65,7 +64,7 @@ export function phaseIdentificationParameter(
   const pRhoUp = (T + hT) * dPdRhoOverRT(model.residual(T + hT, rho, x));
   const pRhoDn = (T - hT) * dPdRhoOverRT(model.residual(T - hT, rho, x));
   const pRhoT = (pRhoUp - pRhoDn) / (2 * hT);
-  const pT = 1 + r.aD + r.aDT;
+  const pT = dPdTAtDensity(rho, r, 1) / rho; // (dP/dT)_rho / (rho R)
   return 2 - (pRhoT / pT - rhoPRhoRho / pRho);
 }
 

@@ -36,7 +36,7 @@ export function restrictToComponent(model: ResidualModel, k: number): ResidualMo
       return request?.composition && r.dnA ? { ...r, dnA: [r.dnA[k]] } : r;
     },
     maxDensity: (T) => model.maxDensity(T, e),
-    ...(model.densityRoots
+    ...(typeof model.densityRoots === "function"
       ? { densityRoots: (T: number, P: number) => model.densityRoots!(T, P, e) }
       : {}),
     ...(model.pressure ? { pressure: (T: number, rho: number) => model.pressure!(T, rho, e) } : {}),
