@@ -3,5 +3,11 @@ import type { BenchCase } from "../harness.js";
 import { engineCases } from "./engineCases.js";
 import { referenceCases } from "./referenceCases.js";
 import { envelopeCases } from "./envelopeCases.js";
+import { flashCases } from "./flashCases.js";
 
-export const allCases: BenchCase[] = [...engineCases, ...referenceCases, ...envelopeCases];
+export const allCases: BenchCase[] = [
+  ...engineCases,
+  ...referenceCases,
+  ...envelopeCases,
+  ...flashCases,
+];

@@ -58,6 +58,15 @@ import {
   type MixtureCriticalOptions,
   type MixtureCriticalPoint,
 } from "../phase/envelope/mixtureCriticalPoint.js";
+import { flashTP, type FlashOptions } from "../phase/flash/flashTP.js";
+import {
+  flashPH,
+  flashPS,
+  flashTS,
+  flashUV,
+  type StateFlashOptions,
+} from "../phase/flash/stateFunctionFlash.js";
+import type { Equilibrium, StateFunctionEquilibrium } from "../phase/flash/types.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
 // x). Not frozen: a frozen array has other elements kinds and slowed every state call by half.
@@ -188,6 +197,44 @@ export interface Fluid extends FluidBinding {
     z: readonly number[],
     options?: MixtureCriticalOptions,
   ): MixtureCriticalPoint;
+  /**
+   * Phase equilibrium at T (K), P (Pa): one to three verified phases (phase/flash/flashTP.ts),
+   * the stability test of this fluid's Wilson constants first.
+   */
+  flashTP(
+    temperatureK: number,
+    pressurePa: number,
+    x?: readonly number[],
+    options?: FlashOptions,
+  ): Equilibrium;
+  /** Phase equilibrium at P (Pa) and molar enthalpy h (J/mol): a valve outlet. */
+  flashPH(
+    pressurePa: number,
+    enthalpyJPerMol: number,
+    x?: readonly number[],
+    options?: StateFlashOptions,
+  ): StateFunctionEquilibrium;
+  /** Phase equilibrium at P (Pa) and molar entropy s (J/(mol K)). */
+  flashPS(
+    pressurePa: number,
+    entropyJPerMolK: number,
+    x?: readonly number[],
+    options?: StateFlashOptions,
+  ): StateFunctionEquilibrium;
+  /** Phase equilibrium at T (K) and molar entropy s (J/(mol K)). */
+  flashTS(
+    temperatureK: number,
+    entropyJPerMolK: number,
+    x?: readonly number[],
+    options?: StateFlashOptions,
+  ): StateFunctionEquilibrium;
+  /** Phase equilibrium at molar internal energy u (J/mol) and molar density rho (mol/m3): a vessel. */
+  flashUV(
+    internalEnergyJPerMol: number,
+    densityMolPerM3: number,
+    x?: readonly number[],
+    options?: StateFlashOptions,
+  ): StateFunctionEquilibrium;
   /** T at (P, h) in one phase (valves). */
   temperatureAtPH(
     pressurePa: number,
@@ -273,7 +320,7 @@ function splitWarning(
     .join(", ");
   return {
     code: "phase-split",
-    message: `the mixture is not stable as one phase at T = ${T} K, P = ${P} Pa: the tangent-plane test found a trial phase with tm = ${test.minimumTangentPlaneDistance.toPrecision(3)} < 0 (${trial}); the fluid splits into phases there, this single-phase state is metastable or unstable, and its properties are not those of the real two-phase fluid (isochor has no mixture flash yet)`,
+    message: `the mixture is not stable as one phase at T = ${T} K, P = ${P} Pa: the tangent-plane test found a trial phase with tm = ${test.minimumTangentPlaneDistance.toPrecision(3)} < 0 (${trial}); the fluid splits into phases there, this single-phase state is metastable or unstable, and its properties are not those of the real two-phase fluid (flashTP gives the phases and their amounts)`,
   };
 }
 
@@ -415,6 +462,12 @@ export function defineFluid(spec: FluidSpec): Fluid {
       received: x,
     });
   };
+  // the flashes' stability tests start from this fluid's critical constants (Wilson K-factors)
+  const withConstants = <O extends FlashOptions>(options: O | undefined): O =>
+    ({
+      ...options,
+      stability: { constants: components, ...options?.stability },
+    }) as O;
   return {
     ...binding,
     components,
@@ -440,6 +493,11 @@ export function defineFluid(spec: FluidSpec): Fluid {
     saturationPointAtPressure: (P, z, options) =>
       saturationPointAtPressure(binding, P, z, { constants: components, ...options }),
     mixtureCriticalPoint: (z, options) => mixtureCriticalPoint(model, z, options),
+    flashTP: (T, P, x, options) => flashTP(binding, T, P, xOf(x), withConstants(options)),
+    flashPH: (P, h, x, options) => flashPH(binding, P, h, xOf(x), withConstants(options)),
+    flashPS: (P, s, x, options) => flashPS(binding, P, s, xOf(x), withConstants(options)),
+    flashTS: (T, s, x, options) => flashTS(binding, T, s, xOf(x), withConstants(options)),
+    flashUV: (u, rho, x, options) => flashUV(binding, u, rho, xOf(x), withConstants(options)),
     temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),
     temperatureAtPS: (P, s, x, options) => temperatureAtPS(binding, P, s, xOf(x), options),
   };

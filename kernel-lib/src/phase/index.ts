@@ -42,3 +42,5 @@ export type {
   WilsonConstants,
 } from "./stability.js";
 export * from "./envelope/index.js";
+// mixture flashes (phase/flash/)
+export * from "./flash/index.js";

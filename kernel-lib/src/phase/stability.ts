@@ -50,6 +50,13 @@ export interface StabilityOptions {
    * own `components` when it has them (the built-in models do); otherwise nearly pure trials.
    */
   constants?: readonly WilsonConstants[];
+  /**
+   * Indices of components that also get a nearly pure trial phase (the component at 1 - 1e-3),
+   * besides the Wilson starts: liquid-liquid splits and nearly pure aqueous phases that the Wilson
+   * trials can miss (Michelsen & Mollerup 2007, ch. 9, recommend such extra trials). Absent
+   * components are skipped. Default none.
+   */
+  extraTrials?: readonly number[];
 }
 
 /** Where a trial phase started. */
@@ -190,6 +197,22 @@ export function stabilityAtTP(
   }
 
   const starts = trialStarts(model, T, P, x, present, constants);
+  if (constants !== undefined && options.extraTrials !== undefined) {
+    for (const k of options.extraTrials) {
+      if (!(Number.isInteger(k) && k >= 0 && k < n)) {
+        throw new InputError({
+          input: "options.extraTrials",
+          unit: "-",
+          validRange: `component indices 0 to ${n - 1}`,
+          received: options.extraTrials,
+        });
+      }
+      if (!(x[k] > 0)) continue;
+      const W = new Array<number>(n).fill(0);
+      for (const i of present) W[i] = i === k ? 1 - 1e-3 : 1e-3 / (present.length - 1);
+      starts.push({ start: `nearly pure ${model.info.componentIds[k]}` as TrialStart, W });
+    }
+  }
   const trials: StabilityTrial[] = [];
   const lnW = new Array<number>(n).fill(-Infinity);
   const W = new Array<number>(n).fill(0);

@@ -13,7 +13,7 @@ export { stateAtTP, stateAtTRho, densityRootsAtTP } from "./stateAt.js";
 export type { StateAtTPOptions, DensityRoot } from "./stateAt.js";
 export { findDensityRoots } from "./findDensityRoots.js";
 export type { DensityRootOptions } from "./findDensityRoots.js";
-export { phaseLabel } from "./phaseLabel.js";
+export { phaseLabel, phaseIdentificationParameter } from "./phaseLabel.js";
 export { temperatureAtPH, temperatureAtPS } from "./inversions.js";
 export { referenceStateTRho, referenceStateTP, referenceFluidBinding } from "./referenceStates.js";
 export type { ReferenceStateOptions } from "./referenceStates.js";

@@ -150,16 +150,20 @@ class CubicModelImpl implements CubicModel {
       }
     }
     if (same) return;
-    const kind = this.family.alpha;
-    const out = this.psiScratch;
-    for (let i = 0; i < n; i++) {
-      evaluatePsi(kind, this.slope[i], T, this.tc[i], out);
-      const s = this.sqrtAc[i];
-      this.psi[i] = s * out.psi;
-      this.dPsi[i] = s * out.dPsi;
-      this.d2Psi[i] = s * out.d2Psi;
-      this.cacheX[i] = x[i];
+    // the temperature part (alpha functions) only when T changed: a flash or a stability test
+    // calls at one T with many compositions
+    if (T !== this.cacheT) {
+      const kind = this.family.alpha;
+      const out = this.psiScratch;
+      for (let i = 0; i < n; i++) {
+        evaluatePsi(kind, this.slope[i], T, this.tc[i], out);
+        const s = this.sqrtAc[i];
+        this.psi[i] = s * out.psi;
+        this.dPsi[i] = s * out.dPsi;
+        this.d2Psi[i] = s * out.d2Psi;
+      }
     }
+    for (let i = 0; i < n; i++) this.cacheX[i] = x[i];
     let a = 0;
     let aT = 0;
     let aTT = 0;
@@ -355,6 +359,81 @@ class CubicModelImpl implements CubicModel {
       dnA,
     };
     return result;
+  }
+
+  /**
+   * Closed-form second derivatives of F = n alpha_r for one mole (state/fugacity.ts says what each
+   * is), from M. L. Michelsen and J. M. Mollerup, Thermodynamic Models: Fundamentals and
+   * Computational Aspects, 2nd ed. (2007), ch. 3: F = -n g(V, B) - (D(T)/T) f(V, B) with
+   * g = ln(1 - B/V), f = ln((V + delta1 B)/(V + delta2 B)) / (R B (delta1 - delta2)),
+   * B = sum n_i b_i, D = sum sum n_i n_j a_ij, and
+   *   F_ij = F_nB (B_i + B_j) + F_BB B_i B_j + F_BD (B_i D_j + B_j D_i) + F_D D_ij,
+   *   F_iT = F_BT B_i + F_DT D_i + F_D D_iT,   rho dF_i/drho = -V (F_nV + F_BV B_i + F_DV D_i).
+   */
+  compositionHessian(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+  ): { nFij: number[][]; FiT: number[]; rhoDdnA: number[] } {
+    const T = temperatureK;
+    this.update(T, x);
+    const n = this.n;
+    const V = 1 / densityMolPerM3;
+    const B = this.mixB;
+    const D = this.mixA;
+    const DT = this.mixAT;
+    const d1 = this.delta1;
+    const d2 = this.delta2;
+    const E1 = V + d1 * B;
+    const E2 = V + d2 * B;
+    const f = d1 === d2 ? 1 / (R * E1) : Math.log(E1 / E2) / (R * B * (d1 - d2));
+    const fV = -1 / (R * E1 * E2);
+    const fB = -(f + V * fV) / B;
+    const fVB = ((d1 + d2) * V + 2 * d1 * d2 * B) / (R * E1 * E1 * E2 * E2);
+    const fBB = -(2 * fB + V * fVB) / B;
+    const VmB = V - B;
+    const gV = B / (V * VmB);
+    const gB = -1 / VmB;
+    const gBB = -1 / (VmB * VmB);
+    const gBV = 1 / (VmB * VmB);
+    const FnB = -gB;
+    const FnV = -gV;
+    const FBB = -gBB - (D / T) * fBB;
+    const FBV = -gBV - (D / T) * fVB;
+    const FBD = -fB / T;
+    const FD = -f / T;
+    const FDV = -fV / T;
+    const FBT = -fB * (DT / T - D / (T * T));
+    const FDT = f / (T * T);
+    const Di = new Array<number>(n);
+    const DiT = new Array<number>(n);
+    for (let i = 0; i < n; i++) {
+      let sT = 0;
+      for (let j = 0; j < n; j++) {
+        sT +=
+          x[j] *
+          this.oneMinusK[i * n + j] *
+          (this.dPsi[i] * this.psi[j] + this.psi[i] * this.dPsi[j]);
+      }
+      Di[i] = 2 * this.sumA[i];
+      DiT[i] = 2 * sT;
+    }
+    const nFij: number[][] = [];
+    const FiT = new Array<number>(n);
+    const rhoDdnA = new Array<number>(n);
+    for (let i = 0; i < n; i++) {
+      const bi = this.bi[i];
+      const row = new Array<number>(n);
+      for (let j = 0; j < n; j++) {
+        const bj = this.bi[j];
+        const Dij = 2 * this.psi[i] * this.psi[j] * this.oneMinusK[i * n + j];
+        row[j] = FnB * (bi + bj) + FBB * bi * bj + FBD * (bi * Di[j] + bj * Di[i]) + FD * Dij;
+      }
+      nFij.push(row);
+      FiT[i] = FBT * bi + FDT * Di[i] + FD * DiT[i];
+      rhoDdnA[i] = -V * (FnV + FBV * bi + FDV * Di[i]);
+    }
+    return { nFij, FiT, rhoDdnA };
   }
 
   maxDensity(temperatureK: number, x: readonly number[]): number {

@@ -1,0 +1,263 @@
+/**
+ * Isothermal flash of a mixture at given T and P (Michelsen's two-stage approach: M. L. Michelsen,
+ * "The isothermal flash problem. Part I. Stability" and "Part II. Phase-split calculation", Fluid
+ * Phase Equilib. 9 (1982) 1-19 and 21-40; M. L. Michelsen and J. M. Mollerup, Thermodynamic
+ * Models: Fundamentals and Computational Aspects, 2nd ed. 2007, ch. 9-11):
+ *  1. the tangent-plane test of the feed (phase/stability.ts), from Wilson's K-factors plus nearly
+ *     pure trials (FlashOptions.extraTrials); stable: one phase, returned with the verdict;
+ *  2. otherwise each trial that found tm < 0, lowest tm first, seeds a two-phase split with
+ *     K_i = phi_i(z) / phi_i(w) (at the trial's stationary point W_i / z_i): successive
+ *     substitution with dominant-eigenvalue acceleration, then Newton on the Gibbs energy
+ *     (twoPhaseSplit.ts);
+ *  3. the phase of largest amount of the converged split is tested for stability; a split found
+ *     there adds a third phase (threePhaseSplit.ts), seeded with the trial composition; a phase
+ *     that vanishes sends the flash back to two phases from the survivors;
+ *  4. every result is verified (verifyEquilibrium.ts): equal fugacity, Gibbs energy below the
+ *     feed, material balance, no trivial solution, labels by density. Anything else is a
+ *     SolverError naming the state and what was tried.
+ */
+import { SolverError, type ResultWarning } from "../../errors.js";
+import { checkComposition, checkPressure, checkTemperature } from "../../state/checkInputs.js";
+import { phaseFugacityAtTP } from "../../state/fugacity.js";
+import type { FluidBinding } from "../../state/types.js";
+import { requireCount, requirePositive } from "../../validate.js";
+import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../stability.js";
+import { convergeMultiphase } from "./threePhaseSplit.js";
+import { convergeTwoPhase, phaseLnPhi, type WorkingPhase } from "./twoPhaseSplit.js";
+import type { Equilibrium } from "./types.js";
+import { assembleEquilibrium, DEFAULT_VERIFY, describeState } from "./verifyEquilibrium.js";
+
+/** Options of {@link flashTP}. */
+export interface FlashOptions {
+  /** Convergence of the iteration: max |ln f_i(a) - ln f_i(b)|. Default 1e-11. */
+  tolerance?: number;
+  /** The returned split must have max |ln f_i(a) - ln f_i(b)| below this. Default 1e-10. */
+  verifyTolerance?: number;
+  /**
+   * Successive-substitution steps before Newton's method may take over; it does when the error
+   * falls by less than half in a step (slow substitution, near a critical point), or after three
+   * times this many steps. Default 6.
+   */
+  newtonAfter?: number;
+  /** Cap on the iterations of one split (substitution plus Newton). Default 300. */
+  maxIterations?: number;
+  /** At most this many phases: 2 or 3. Default 3. */
+  maxPhases?: 2 | 3;
+  /** Options of the stability tests (Wilson constants, thresholds). */
+  stability?: StabilityOptions;
+  /**
+   * Nearly pure trial phases added to the Wilson starts of every stability test (aqueous phases
+   * and liquid-liquid splits that Wilson's K-factors miss). "auto" (default): every present
+   * component when at most four are present; otherwise water, if present (each trial costs about
+   * as much as a Wilson trial, and many-component hydrocarbon mixtures split as vapour-liquid,
+   * which the Wilson trials find). "none": Wilson starts only. Or component indices.
+   */
+  extraTrials?: "auto" | "none" | readonly number[];
+}
+
+const METHOD_1 = "tangent-plane stability test (one phase stable)";
+const METHOD_2 =
+  "tangent-plane test, successive substitution with dominant-eigenvalue acceleration and Newton on the Gibbs energy, stability test of the split";
+const METHOD_3 =
+  "tangent-plane tests, two- then three-phase successive substitution (Michelsen Q function)";
+
+/** Normalised copy of z and the indices of present components. */
+export function prepareFeed(z: readonly number[]): { z: number[]; present: number[] } {
+  let s = 0;
+  for (const v of z) s += v;
+  const out = z.map((v) => v / s);
+  const present: number[] = [];
+  out.forEach((v, i) => {
+    if (v > 0) present.push(i);
+  });
+  return { z: out, present };
+}
+
+/** The extra nearly pure trials of the stability tests (see FlashOptions.extraTrials). */
+function extraTrialsOf(
+  binding: FluidBinding,
+  present: readonly number[],
+  options: FlashOptions,
+): readonly number[] {
+  const rule = options.extraTrials ?? "auto";
+  if (rule === "none") return [];
+  if (rule !== "auto") return rule;
+  if (present.length <= 4) return present;
+  const ids = binding.model.info.componentIds;
+  const constants =
+    options.stability?.constants ??
+    (binding.model as { components?: readonly { criticalTemperatureK: number }[] }).components;
+  const out: number[] = [];
+  const water = present.find((i) => ids[i] === "water");
+  if (water !== undefined) out.push(water);
+  if (constants !== undefined) {
+    let heaviest = present[0];
+    for (const i of present) {
+      if (constants[i].criticalTemperatureK > constants[heaviest].criticalTemperatureK)
+        heaviest = i;
+    }
+    if (heaviest !== water) out.push(heaviest);
+  }
+  return out;
+}
+
+/**
+ * The phase equilibrium of feed z (mole fractions) at T (K) and P (Pa): one, two or three phases,
+ * verified (see the header).
+ *
+ * @example
+ * ```ts
+ * const gas = defineFluid({ components: ["methane", "n-butane"], model: "peng-robinson" });
+ * const eq = flashTP(gas, 280, 40e5, [0.7, 0.3]);
+ * eq.phases.map((p) => [p.kind, p.amount, p.state.x]);
+ * ```
+ * @throws InputError for bad T, P, z or options; SolverError when no verified split is found.
+ */
+export function flashTP(
+  binding: FluidBinding,
+  temperatureK: number,
+  pressurePa: number,
+  z: readonly number[],
+  options: FlashOptions = {},
+): Equilibrium {
+  const model = binding.model;
+  checkTemperature(temperatureK);
+  checkPressure(pressurePa);
+  checkComposition(z, model.info.componentIds.length, "z");
+  const tolerance = requirePositive("options.tolerance", options.tolerance ?? 1e-11, "-");
+  const verifyTolerance = requirePositive(
+    "options.verifyTolerance",
+    options.verifyTolerance ?? 1e-10,
+    "-",
+  );
+  const newtonAfter = requireCount("options.newtonAfter", options.newtonAfter ?? 6);
+  const maxIterations = requireCount("options.maxIterations", options.maxIterations ?? 300);
+  const maxPhases = options.maxPhases ?? 3;
+  const T = temperatureK;
+  const P = pressurePa;
+  const feed = prepareFeed(z);
+  const zz = feed.z;
+  const present = feed.present;
+  const tol = { ...DEFAULT_VERIFY, fugacity: verifyTolerance };
+  const single = (
+    stability: StabilityResult | undefined,
+    warnings: readonly ResultWarning[],
+  ): Equilibrium => {
+    const f = phaseFugacityAtTP(model, T, P, zz, "stable");
+    return assembleEquilibrium(
+      binding,
+      T,
+      P,
+      zz,
+      present,
+      [{ x: zz, lnPhi: f.lnPhi, densityMolPerM3: f.densityMolPerM3, amount: 1 }],
+      {
+        iterations: 0,
+        method: present.length < 2 ? "one component present (no split possible)" : METHOD_1,
+        stability,
+        warnings,
+      },
+      tol,
+    );
+  };
+  if (present.length < 2) return single(undefined, []);
+  const stabilityOptions: StabilityOptions = {
+    ...options.stability,
+    extraTrials: extraTrialsOf(binding, present, options),
+  };
+  const stability = stabilityAtTP(model, T, P, zz, stabilityOptions);
+  if (stability.stable) return single(stability, stability.warnings);
+
+  const splitOptions = { tolerance, newtonAfter, maxIterations };
+  const tried: string[] = [];
+  const lnPhiZ = phaseLnPhi(model, T, P, zz).lnPhi;
+  let iterations = 0;
+
+  /** Two phases from a trial composition w (the y phase). */
+  const fromTrial = (w: readonly number[]): WorkingPhase[] | undefined => {
+    const lnPhiW = phaseLnPhi(model, T, P, w).lnPhi;
+    const lnK = new Array<number>(zz.length).fill(0);
+    for (const i of present) lnK[i] = lnPhiZ[i] - lnPhiW[i];
+    const out = convergeTwoPhase(model, T, P, zz, present, lnK, splitOptions);
+    iterations += out.iterations;
+    if (out.converged) return out.phases;
+    tried.push(
+      `two-phase split from a trial (${out.reason ?? "not converged"} after ${out.iterations} iterations, ${out.newtonIterations} Newton)`,
+    );
+    return undefined;
+  };
+  const trials = stability.trials
+    .filter((t) => t.tangentPlaneDistance < 0 && t.composition.length === zz.length)
+    .sort((a, b) => a.tangentPlaneDistance - b.tangentPlaneDistance);
+  let phases: WorkingPhase[] | undefined;
+  for (const t of trials) {
+    phases = fromTrial(t.composition);
+    if (phases !== undefined) break;
+  }
+  const where = (): string => describeState(binding, T, P, zz);
+  if (phases === undefined) {
+    throw new SolverError(
+      "isothermal flash",
+      `the feed is unstable at ${where()} (tm = ${stability.minimumTangentPlaneDistance.toExponential(3)}) but no split converged: ${tried.join("; ")}`,
+    );
+  }
+  let method = METHOD_2;
+  let finalStability: StabilityResult | undefined;
+  if (maxPhases >= 3) {
+    for (let round = 0; round < 3; round++) {
+      let largest = phases[0];
+      for (const p of phases) if (p.amount > largest.amount) largest = p;
+      const test = stabilityAtTP(model, T, P, largest.x, stabilityOptions);
+      finalStability = test;
+      if (test.stable || phases.length >= 3) break;
+      const w = test.incipientComposition!;
+      const start: WorkingPhase[] = phases.map((p) => ({ ...p, amount: p.amount * 0.95 }));
+      start.push({ x: w.slice(), lnPhi: [], densityMolPerM3: NaN, amount: 0.05 });
+      const out = convergeMultiphase(model, T, P, zz, present, start, tolerance, maxIterations * 3);
+      iterations += out.iterations;
+      method = METHOD_3;
+      if (out.converged) {
+        phases = out.phases;
+        finalStability = test;
+        break;
+      }
+      if (out.vanished && out.phases.length === 2) {
+        // back to two phases from the survivors
+        const [a, b] = out.phases;
+        const lnK = new Array<number>(zz.length).fill(0);
+        for (const i of present) lnK[i] = a.lnPhi[i] - b.lnPhi[i];
+        const two = convergeTwoPhase(model, T, P, zz, present, lnK, splitOptions);
+        iterations += two.iterations;
+        if (!two.converged) {
+          throw new SolverError(
+            "isothermal flash",
+            `at ${where()}: the three-phase attempt lost a phase and the two-phase split from the survivors did not converge (${two.reason})`,
+          );
+        }
+        phases = two.phases;
+        continue;
+      }
+      throw new SolverError(
+        "isothermal flash",
+        `at ${where()}: the phase of largest amount of the two-phase split is unstable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}), and the three-phase split ${out.reason ?? "failed"}`,
+      );
+    }
+    if (finalStability !== undefined && !finalStability.stable && phases.length < 3) {
+      throw new SolverError(
+        "isothermal flash",
+        `at ${where()}: the converged two-phase split is not stable (tm = ${finalStability.minimumTangentPlaneDistance.toExponential(3)}) and no three-phase split was found`,
+      );
+    }
+  }
+  const warnings: ResultWarning[] = [];
+  return assembleEquilibrium(
+    binding,
+    T,
+    P,
+    zz,
+    present,
+    phases,
+    { iterations, method, stability: finalStability ?? stability, warnings },
+    tol,
+  );
+}
