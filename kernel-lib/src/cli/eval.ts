@@ -39,6 +39,19 @@ import { gasConstantOf } from "../phase/pureFluid.js";
 import { describeReferenceState } from "../idealgas/referenceState.js";
 import type { FluidBinding, FluidState } from "../state/types.js";
 import { parseEvalRequest, type EvalRequest, type EvalState } from "./evalRequest.js";
+import { flashPH, flashPS, flashTP, flashTS, flashUV } from "../phase/flash/index.js";
+import type { Equilibrium } from "../phase/flash/types.js";
+import {
+  saturationPointAtPressure,
+  saturationPointAtTemperature,
+} from "../phase/envelope/index.js";
+import {
+  envelopeResponse,
+  equilibriumFields,
+  saturationPointFields,
+  type EvalEnvelope,
+  type EvalEquilibriumFields,
+} from "./evalEquilibrium.js";
 import { parseCliArgs } from "./cliArgs.js";
 import type { CliIo } from "./io.js";
 
@@ -47,13 +60,17 @@ const USAGE = `usage: isochor eval [request.json | -]
 Reads a JSON request from the file (or standard input when absent or "-") and writes the states as
 JSON on standard output. Fields: model, components, x, kij, constants, departure, reference,
 idealGas, phase, checkStability (mixtures: tangent-plane test at each T, P state, a split reported
-in its warnings), states. A state is {"T", "P"}, {"T", "rho"},
-{"T" or "P", "saturated": "liquid"|"vapor"} or {"T" or "P", "quality"}; model "reference" takes one
-component with a reference equation (water, carbon-dioxide, methane, nitrogen). The request's
+in its warnings), envelope (true: also the mixture's phase envelope), states. A state is
+{"T", "P"}, {"T", "rho"}, {"P", "h"}, {"P", "s"}, {"T", "s"}, {"u", "rho"},
+{"T" or "P", "saturated": "liquid"|"vapor"} or {"T" or "P", "quality"}. "phase": "equilibrium"
+flashes every state; (P, h), (P, s), (T, s) and (u, rho) states are always flashes, and list their
+"phases" (kind, amount, x, rho, Z, h, s, u, lnPhi). Model "reference" takes one component with a
+reference equation (water, carbon-dioxide, methane, nitrogen). The request's
 format, with units and defaults, is the JSON Schema dist/cli/schema/eval-request.schema.json of the
 isochor package.
 
-units: SI, molar. In: T in K, P in Pa, rho in mol/m3, x and quality as fractions (0..1).
+units: SI, molar. In: T in K, P in Pa, rho in mol/m3, h and u in J/mol, s in J/(mol K), x and
+  quality (vapour mole fraction) as fractions (0..1).
   Out: h, u, residual h/u/a/g in J/mol; s, cp, cv in J/(mol K); w in m/s; jt in K/Pa; Z, lnPhi -.
 
 example (methane at 300 K and 50 bar = 5e6 Pa, Peng-Robinson):
@@ -104,7 +121,21 @@ export type EvalStateResponse =
       referenceState: string;
       warnings?: string[];
     }
+  | EvalEquilibriumResponse
   | { error: { code: string; message: string } };
+
+/** An equilibrium of two or three phases (evalEquilibrium.ts says what each field means). */
+export interface EvalEquilibriumResponse extends EvalEquilibriumFields {
+  cp: null;
+  cv: null;
+  w: null;
+  jt: null;
+  lnPhi: null;
+  residual: null;
+  residualTV: null;
+  referenceState: string;
+  warnings?: string[];
+}
 
 function toResponse(s: FluidState): EvalStateResponse {
   const out: EvalStateResponse = {
@@ -248,6 +279,8 @@ function evaluate(ev: Evaluator, request: EvalRequest, st: EvalState): EvalState
     const binding: FluidBinding = ev.kind === "engine" ? ev.fluid : ev.binding;
     switch (st.kind) {
       case "TP":
+        if (request.phase === "equilibrium")
+          return equilibriumResponse(flashOf(ev, request, st), binding);
         return toResponse(
           ev.kind === "engine"
             ? ev.fluid.stateAtTP(st.T, st.P, request.x, {
@@ -263,9 +296,16 @@ function evaluate(ev: Evaluator, request: EvalRequest, st: EvalState): EvalState
             : referenceStateTRho(ev.fluid, st.T, st.rho),
         );
       case "TQ":
+        if (request.components.length > 1) return mixtureQualityResponse(ev, request, st, binding);
         return toQualityResponse(stateAtTemperatureQuality(binding, st.T, st.quality), binding);
       case "PQ":
+        if (request.components.length > 1) return mixtureQualityResponse(ev, request, st, binding);
         return toQualityResponse(stateAtPressureQuality(binding, st.P, st.quality), binding);
+      case "PH":
+      case "PS":
+      case "TS":
+      case "URho":
+        return equilibriumResponse(flashOf(ev, request, st), binding);
     }
   } catch (e) {
     if (e instanceof IsochorError) return { error: { code: e.code, message: e.message } };
@@ -273,11 +313,141 @@ function evaluate(ev: Evaluator, request: EvalRequest, st: EvalState): EvalState
   }
 }
 
+/** The flash of an equilibrium state (a fluid's own methods pass its Wilson constants). */
+function flashOf(
+  ev: Evaluator,
+  request: EvalRequest,
+  st: Extract<EvalState, { kind: "TP" | "PH" | "PS" | "TS" | "URho" }>,
+): Equilibrium {
+  const x = request.x;
+  if (ev.kind === "engine") {
+    const f = ev.fluid;
+    switch (st.kind) {
+      case "TP":
+        return f.flashTP(st.T, st.P, x);
+      case "PH":
+        return f.flashPH(st.P, st.h, x);
+      case "PS":
+        return f.flashPS(st.P, st.s, x);
+      case "TS":
+        return f.flashTS(st.T, st.s, x);
+      case "URho":
+        return f.flashUV(st.u, st.rho, x);
+    }
+  }
+  const b = ev.binding;
+  switch (st.kind) {
+    case "TP":
+      return flashTP(b, st.T, st.P, x);
+    case "PH":
+      return flashPH(b, st.P, st.h, x);
+    case "PS":
+      return flashPS(b, st.P, st.s, x);
+    case "TS":
+      return flashTS(b, st.T, st.s, x);
+    case "URho":
+      return flashUV(b, st.u, st.rho, x);
+  }
+}
+
+/** The entry of an equilibrium: one phase keeps every single-phase field (see evalEquilibrium.ts). */
+function equilibriumResponse(eq: Equilibrium, binding: FluidBinding): EvalStateResponse {
+  const fields = equilibriumFields(eq, gasConstantOf(binding.model));
+  const warnings = warningTexts(eq.warnings);
+  if (eq.phases.length === 1) {
+    const single = toResponse(eq.phases[0].state);
+    if ("error" in single) return single;
+    const all = [...new Set([...(single.warnings ?? []), ...warnings])];
+    const out: EvalEquilibriumFields & { warnings?: string[] } = { ...single, ...fields };
+    if (all.length > 0) out.warnings = all;
+    return out as EvalStateResponse;
+  }
+  return multiphaseResponse(fields, warnings, binding);
+}
+
+function multiphaseResponse(
+  fields: EvalEquilibriumFields,
+  warnings: string[],
+  binding: FluidBinding,
+): EvalStateResponse {
+  const out: EvalEquilibriumResponse = {
+    ...fields,
+    cp: null,
+    cv: null,
+    w: null,
+    jt: null,
+    lnPhi: null,
+    residual: null,
+    residualTV: null,
+    referenceState: describeReferenceState(binding.idealGas.referenceState),
+  };
+  if (warnings.length > 0) out.warnings = warnings;
+  return out;
+}
+
+/** A mixture at given T or P and quality (bubble point at 0, dew point at 1). */
+function mixtureQualityResponse(
+  ev: Evaluator,
+  request: EvalRequest,
+  st: Extract<EvalState, { kind: "TQ" | "PQ" }>,
+  binding: FluidBinding,
+): EvalStateResponse {
+  const options = { vaporFraction: st.quality };
+  const point =
+    ev.kind === "engine"
+      ? st.kind === "TQ"
+        ? ev.fluid.saturationPointAtTemperature(st.T, request.x, options)
+        : ev.fluid.saturationPointAtPressure(st.P, request.x, options)
+      : st.kind === "TQ"
+        ? saturationPointAtTemperature(binding, st.T, request.x, options)
+        : saturationPointAtPressure(binding, st.P, request.x, options);
+  const fields = saturationPointFields(point, gasConstantOf(binding.model));
+  const warnings = warningTexts(point.warnings);
+  const present = fields.phases.filter((p) => p.amount > 0);
+  if (present.length === 1) {
+    const state = present[0].kind === "vapor" ? point.vapor : point.liquid;
+    const single = toResponse(state);
+    if ("error" in single) return single;
+    const all = [...new Set([...(single.warnings ?? []), ...warnings])];
+    const out: EvalEquilibriumFields & { warnings?: string[] } = { ...single, ...fields };
+    if (all.length > 0) out.warnings = all;
+    return out as EvalStateResponse;
+  }
+  return multiphaseResponse(fields, warnings, binding);
+}
+
+/** The response: one entry per state, and the envelope when asked for. */
+export interface EvalResponse {
+  states: EvalStateResponse[];
+  envelope?: EvalEnvelope | { error: { code: string; message: string } };
+}
+
 /** Runs a parsed JSON request and returns the response object (exported for tests and notebooks). */
-export function runEvalRequest(raw: unknown): { states: EvalStateResponse[] } {
+export function runEvalRequest(raw: unknown): EvalResponse {
   const request = parseEvalRequest(raw);
   const ev = evaluatorOf(request);
-  return { states: request.states.map((st) => evaluate(ev, request, st)) };
+  const response: EvalResponse = {
+    states: request.states.map((st) => evaluate(ev, request, st)),
+  };
+  if (request.envelope) {
+    try {
+      if (ev.kind !== "engine" || request.components.length < 2) {
+        throw new IsochorError(
+          "bad-input",
+          "a phase envelope is a mixture's (two or more components); for a pure fluid ask for saturated states along T or P",
+        );
+      }
+      response.envelope = envelopeResponse(ev.fluid.envelope(request.x));
+    } catch (e) {
+      response.envelope = {
+        error: {
+          code: e instanceof IsochorError ? e.code : "internal",
+          message: e instanceof Error ? e.message : String(e),
+        },
+      };
+    }
+  }
+  return response;
 }
 
 /** JSON has no NaN: non-finite numbers are written as null. */

@@ -10,7 +10,7 @@
  *
  *   raw JSON --schema (ajv)--> structure, types, enums, state forms, model "reference" exclusions
  *            --checkCounts----> x / kij / constants sized to the components, x sums to 1,
- *                               reference-equation fluids, saturation only for one component
+ *                               reference-equation fluids
  *            --toRequest------> EvalRequest (defaults filled in)
  *
  * Structural problems refuse the whole request with a RequestError naming the JSON path;
@@ -44,7 +44,15 @@ export type EvalState =
       readonly P: number;
       readonly quality: number;
       readonly saturated?: "liquid" | "vapor";
-    };
+    }
+  /** Phase-equilibrium states from a state-function pair (always flashed; J/mol, J/(mol K)). */
+  | { readonly kind: "PH"; readonly P: number; readonly h: number }
+  | { readonly kind: "PS"; readonly P: number; readonly s: number }
+  | { readonly kind: "TS"; readonly T: number; readonly s: number }
+  | { readonly kind: "URho"; readonly u: number; readonly rho: number };
+
+/** "equilibrium": every state is a flash with its phases (added after issue 4). */
+export type EvalPhase = PhaseRequest | "equilibrium";
 
 /** The model ids eval accepts: the engine's built-in models plus "reference". */
 export type EvalModelId = ModelId | "reference";
@@ -59,9 +67,12 @@ export interface EvalRequest {
   readonly departure: DepartureMethod;
   readonly reference: ReferenceState;
   readonly idealGas: "correlation" | "molecular";
-  readonly phase: PhaseRequest;
+  readonly phase: EvalPhase;
   /** Run the mixture stability test at (T, P) states. Default false. */
   readonly checkStability: boolean;
+  /** Also return the phase envelope of x. Default false. */
+  readonly envelope: boolean;
+  /** May be empty when `envelope` is true. */
   readonly states: readonly EvalState[];
 }
 
@@ -206,15 +217,19 @@ interface RequestJson {
   departure?: DepartureMethod;
   reference?: "formation" | { kind: "zero-at"; T: number; P: number };
   idealGas?: "correlation" | "molecular";
-  phase?: PhaseRequest;
+  phase?: EvalPhase;
   checkStability?: boolean;
-  states: StateJson[];
+  envelope?: boolean;
+  states?: StateJson[];
 }
 
 interface StateJson {
   T?: number;
   P?: number;
   rho?: number;
+  h?: number;
+  s?: number;
+  u?: number;
   saturated?: "liquid" | "vapor";
   quality?: number;
 }
@@ -258,14 +273,6 @@ function checkCounts(r: RequestJson): void {
       `expected an array of ${n} entries (null or {} keeps the table), got ${r.constants.length}`,
     );
   }
-  r.states.forEach((s, i) => {
-    if ((s.saturated !== undefined || s.quality !== undefined) && n !== 1) {
-      throw new RequestError(
-        `$.states[${i}]`,
-        `saturated and quality states are pure-fluid states; the request has ${n} components`,
-      );
-    }
-  });
 }
 
 const CONSTANT_NAMES: Record<string, keyof ConstantOverrides> = {
@@ -298,7 +305,8 @@ function toRequest(r: RequestJson): EvalRequest {
     idealGas: r.idealGas ?? "correlation",
     phase: r.phase ?? "stable",
     checkStability: r.checkStability ?? false,
-    states: r.states.map(toState),
+    envelope: r.envelope ?? false,
+    states: (r.states ?? []).map(toState),
   };
 }
 
@@ -310,6 +318,11 @@ function toState(s: StateJson): EvalState {
     return s.T !== undefined
       ? { kind: "TQ", T: s.T, quality, saturated }
       : { kind: "PQ", P: s.P!, quality, saturated };
+  }
+  if (s.h !== undefined) return { kind: "PH", P: s.P!, h: s.h };
+  if (s.u !== undefined) return { kind: "URho", u: s.u, rho: s.rho! };
+  if (s.s !== undefined) {
+    return s.P !== undefined ? { kind: "PS", P: s.P, s: s.s } : { kind: "TS", T: s.T!, s: s.s };
   }
   return s.P !== undefined
     ? { kind: "TP", T: s.T!, P: s.P }

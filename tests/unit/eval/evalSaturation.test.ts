@@ -252,19 +252,8 @@ describe("malformed new forms: RequestError with the JSON path", () => {
       "$.states[0].P",
     ],
     ["an unknown state field", { ...ok, states: [{ T: 450, x: 0.5 }] }, "$.states[0].x"],
-    [
-      "saturation of a mixture",
-      {
-        model: "peng-robinson",
-        components: ["methane", "ethane"],
-        x: [0.5, 0.5],
-        states: [
-          { T: 450, P: 1e6 },
-          { T: 200, saturated: "liquid" },
-        ],
-      },
-      "$.states[1]",
-    ],
+    // a mixture's saturated and quality states are no longer refused: they are mixture bubble,
+    // dew and quality points (tests/unit/eval/evalEquilibrium.test.ts)
   ];
   for (const [label, body, path] of malformed) {
     it(`refuses ${label} with the path ${path}`, async () => {
