@@ -21,7 +21,7 @@ import { departuresFromIntegrals } from "./departureSet.js";
 import type { DepartureSet } from "./departureSet.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
 import type { IsochoreFit } from "./isochoreFit.js";
-import { cumulativeIrregular } from "./irregularQuadrature.js";
+import { cumulativeIrregular } from "../numerics/cumulativeIrregular.js";
 
 export interface SaturationData {
   /** Saturation pressure at T, Pa, and its standard uncertainty. */

@@ -23,7 +23,7 @@ import { integrateAdaptive } from "../numerics/index.js";
 import { departuresFromIntegrals } from "./departureSet.js";
 import type { DepartureSet } from "./departureSet.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
-import { cumulativeIrregular } from "./irregularQuadrature.js";
+import { cumulativeIrregular } from "../numerics/cumulativeIrregular.js";
 
 /** Residual isochoric heat capacity along the isochore, J/(mol K). */
 export type ResidualCvInput =

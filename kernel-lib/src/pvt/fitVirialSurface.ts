@@ -6,13 +6,14 @@
  */
 import { R } from "../constants.js";
 import { InputError } from "../errors.js";
+import { extent } from "../numerics/extent.js";
 import { fitDiagnostics } from "./fitDiagnostics.js";
 import type { FitDiagnostics } from "./fitDiagnostics.js";
-import { aicc } from "./selectByAicc.js";
+import { aicc } from "../numerics/aicc.js";
 import { surfaceBasis } from "./virialSurface.js";
 import type { VirialSurface } from "./virialSurface.js";
-import { weightedLeastSquares } from "./weightedLeastSquares.js";
-import type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
+import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
+import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
 export interface SurfacePoint {
   temperatureK: number;
@@ -61,7 +62,8 @@ export function fitVirialSurface(
     });
   }
   const temperatureScale = points.reduce((s, p) => s + p.temperatureK, 0) / n;
-  const densityScale = Math.max(...points.map((p) => p.densityMolPerM3));
+  const densityScale = extent(points.map((p) => p.densityMolPerM3)).max;
+  const temperatures = extent(points.map((p) => p.temperatureK));
   const y = points.map((p) => p.pressurePa / (p.densityMolPerM3 * gas * p.temperatureK) - 1);
   const scaleKnown = sigmaPa !== undefined;
   const sigma = points.map(
@@ -131,8 +133,8 @@ export function fitVirialSurface(
     coefficients: fit.coefficients,
     covariance,
     range: {
-      minTemperatureK: Math.min(...points.map((p) => p.temperatureK)),
-      maxTemperatureK: Math.max(...points.map((p) => p.temperatureK)),
+      minTemperatureK: temperatures.min,
+      maxTemperatureK: temperatures.max,
       maxDensityMolPerM3: densityScale,
     },
   };

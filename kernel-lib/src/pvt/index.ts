@@ -10,8 +10,8 @@ export { columnUnitToSI } from "./columnUnits.js";
 export type { ColumnQuantity, AffineToSI } from "./columnUnits.js";
 // Generic helpers (weightedLeastSquares, seededRandom, runsTest, cumulativeIrregular,
 // familyThreshold) are imported by path, not re-exported, so they cannot collide with numerics/.
-export type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
-export type { RunsTestResult } from "./runsTest.js";
+export type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
+export type { RunsTestResult } from "../numerics/runsTest.js";
 export type { FitDiagnostics } from "./fitDiagnostics.js";
 export { fitIsochore } from "./isochoreFit.js";
 export type { IsochoreFit, IsochoreFitOptions } from "./isochoreFit.js";
@@ -33,7 +33,8 @@ export type {
   IsothermDepartures as PvtIsothermIntegrals,
   IntegrateIsothermOptions as PvtIntegrateIsothermOptions,
 } from "./integrateIsotherm.js";
-export { departuresFromPvt, virialFromSurface } from "./departuresFromPvt.js";
+export { departuresFromPvt } from "./departuresFromPvt.js";
+export { virialFromSurface } from "./virialSurface.js";
 export type {
   PvtRouteOptions,
   PvtRouteResult,

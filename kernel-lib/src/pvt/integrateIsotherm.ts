@@ -14,9 +14,9 @@
  */
 import { departuresFromIntegrals } from "./departureSet.js";
 import type { DepartureSet } from "./departureSet.js";
-import { cumulativeIrregular } from "./irregularQuadrature.js";
+import { cumulativeIrregular } from "../numerics/cumulativeIrregular.js";
 import { lowDensityBridge } from "./lowDensityBridge.js";
-import type { BridgeOptions, BridgeResult } from "./lowDensityBridge.js";
+import type { BridgeOptions, BridgeResult, FrozenBridge } from "./lowDensityBridge.js";
 
 export interface IsothermNodes {
   temperatureK: number;
@@ -50,9 +50,36 @@ export interface IntegrateIsothermOptions {
   bridge?: BridgeOptions;
   /** Fixed bridge degrees (used by the uncertainty propagation to freeze the nominal choice). */
   bridgeDegrees?: { a: number; s: number };
+  /**
+   * Bridges frozen as linear maps (lowDensityBridge.ts, freezeBridge): used instead of fitting,
+   * when the route is re-evaluated for other pressures. Their uncertainty fields are the nominal ones.
+   */
+  frozenBridges?: { a: FrozenBridge; s: FrozenBridge };
   gasConstant: number;
 }
 
+/**
+ * The two integrands at the nodes, (P - rho R T)/rho^2 and (rho R - (dP/dT)_rho)/rho^2, and their
+ * standard deviations (from those of P and the slope; undefined when the nodes carry none).
+ */
+export function isothermIntegrands(
+  nodes: IsothermNodes,
+  gasConstant: number,
+): { fA: number[]; fS: number[]; sA?: number[]; sS?: number[] } {
+  const T = nodes.temperatureK;
+  const R = gasConstant;
+  const rho = nodes.densityMolPerM3;
+  const uP = nodes.uPressurePa;
+  const uS = nodes.uSlopePaPerK;
+  return {
+    fA: rho.map((r, k) => (nodes.pressurePa[k] - r * R * T) / (r * r)),
+    fS: rho.map((r, k) => (r * R - nodes.slopePaPerK[k]) / (r * r)),
+    sA: uP ? rho.map((r, k) => uP[k] / (r * r)) : undefined,
+    sS: uS ? rho.map((r, k) => uS[k] / (r * r)) : undefined,
+  };
+}
+
+/** Departures along one isotherm from its nodes (see the header). */
 export function integrateIsotherm(
   nodes: IsothermNodes,
   options: IntegrateIsothermOptions,
@@ -60,22 +87,20 @@ export function integrateIsotherm(
   const T = nodes.temperatureK;
   const R = options.gasConstant;
   const rho = nodes.densityMolPerM3;
-  const fA = rho.map((r, k) => ((nodes.pressurePa[k] as number) - r * R * T) / (r * r));
-  const fS = rho.map((r, k) => (r * R - (nodes.slopePaPerK[k] as number)) / (r * r));
-  const sA = nodes.uPressurePa
-    ? rho.map((r, k) => ((nodes.uPressurePa as readonly number[])[k] as number) / (r * r))
-    : undefined;
-  const sS = nodes.uSlopePaPerK
-    ? rho.map((r, k) => ((nodes.uSlopePaPerK as readonly number[])[k] as number) / (r * r))
-    : undefined;
-  const bridgeA = lowDensityBridge(rho, fA, sA, {
-    ...options.bridge,
-    degree: options.bridgeDegrees?.a ?? options.bridge?.degree,
-  });
-  const bridgeS = lowDensityBridge(rho, fS, sS, {
-    ...options.bridge,
-    degree: options.bridgeDegrees?.s ?? options.bridge?.degree,
-  });
+  const { fA, fS, sA, sS } = isothermIntegrands(nodes, R);
+  const frozen = options.frozenBridges;
+  const bridgeA = frozen
+    ? frozen.a.apply(fA)
+    : lowDensityBridge(rho, fA, sA, {
+        ...options.bridge,
+        degree: options.bridgeDegrees?.a ?? options.bridge?.degree,
+      });
+  const bridgeS = frozen
+    ? frozen.s.apply(fS)
+    : lowDensityBridge(rho, fS, sS, {
+        ...options.bridge,
+        degree: options.bridgeDegrees?.s ?? options.bridge?.degree,
+      });
   const qA = cumulativeIrregular(rho, fA);
   const qS = cumulativeIrregular(rho, fS);
   const departures = rho.map((r, k) => {

@@ -5,11 +5,12 @@
  * standard uncertainties from the coefficient covariance (JCGM 100:2008 eq. 13).
  */
 import { InputError } from "../errors.js";
+import { extent } from "../numerics/extent.js";
 import { fitDiagnostics } from "./fitDiagnostics.js";
 import type { FitDiagnostics } from "./fitDiagnostics.js";
-import { aicc } from "./selectByAicc.js";
-import { weightedLeastSquares } from "./weightedLeastSquares.js";
-import type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
+import { aicc } from "../numerics/aicc.js";
+import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
+import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
 export interface IsochoreFitOptions {
   /** Fixed polynomial order (1 = linear in T). Default: chosen by AICc up to `maxOrder`. */
@@ -52,6 +53,21 @@ export interface IsochoreFit {
     uPressurePa: number;
     uSlopePaPerK: number;
   };
+  /**
+   * Covariance of the smoothed P and (dP/dT)_rho at T from the (scaled) coefficient covariance:
+   * variances Pa2 and Pa2/K2, and their covariance Pa2/K.
+   */
+  covarianceAt(temperatureK: number): { pressure: number; slope: number; cross: number };
+  /**
+   * The same fit (same order and weights) with every pressure moved by `deltaPressuresPa` (in
+   * the order the points were given): the fit is linear in the pressures, so this is the fitted
+   * polynomial plus the fit of the deltas, C X^T W delta (C the unscaled covariance), without a
+   * new factorisation. Returns P and (dP/dT)_rho of the moved fit at T.
+   */
+  shifted(deltaPressuresPa: ArrayLike<number>): (temperatureK: number) => {
+    pressurePa: number;
+    slopePaPerK: number;
+  };
 }
 
 export function fitIsochore(
@@ -71,8 +87,7 @@ export function fitIsochore(
       received: distinct,
     });
   }
-  const tMin = Math.min(...temperaturesK);
-  const tMax = Math.max(...temperaturesK);
+  const { min: tMin, max: tMax } = extent(temperaturesK);
   const mid = 0.5 * (tMin + tMax);
   const half = 0.5 * (tMax - tMin);
   const xs = temperaturesK.map((t) => (t - mid) / half);
@@ -151,6 +166,53 @@ export function fitIsochore(
         S += (c[j] as number) * (gS[j] as number);
       }
       return { pressurePa: P, slopePaPerK: S, uPressurePa: quad(gP), uSlopePaPerK: quad(gS) };
+    },
+    covarianceAt(temperatureK: number) {
+      const x = (temperatureK - mid) / half;
+      const gP = c.map((_, j) => x ** j);
+      const gS = c.map((_, j) => (j === 0 ? 0 : (j * x ** (j - 1)) / half));
+      let pressure = 0;
+      let slope = 0;
+      let cross = 0;
+      for (let i = 0; i < c.length; i++) {
+        for (let j = 0; j < c.length; j++) {
+          const v = cov[i][j];
+          pressure += gP[i] * v * gP[j];
+          slope += gS[i] * v * gS[j];
+          cross += gP[i] * v * gS[j];
+        }
+      }
+      return { pressure: Math.max(pressure, 0), slope: Math.max(slope, 0), cross };
+    },
+    shifted(deltaPressuresPa: ArrayLike<number>) {
+      const k = c.length;
+      const rhs = new Float64Array(k);
+      for (let i = 0; i < n; i++) {
+        const w = deltaPressuresPa[i] / (sigma[i] * sigma[i]);
+        let xj = 1;
+        for (let j = 0; j < k; j++) {
+          rhs[j] += xj * w;
+          xj *= xs[i];
+        }
+      }
+      const moved = c.slice();
+      for (let a = 0; a < k; a++) {
+        let d = 0;
+        for (let b = 0; b < k; b++) d += fit.covariance[a][b] * rhs[b];
+        moved[a] += d;
+      }
+      return (temperatureK: number) => {
+        const x = (temperatureK - mid) / half;
+        let P = 0;
+        let S = 0;
+        let xj = 1;
+        for (let j = 0; j < k; j++) {
+          P += moved[j] * xj;
+          if (j + 1 < k) S += (j + 1) * moved[j + 1] * xj;
+          xj *= x;
+        }
+        return { pressurePa: P, slopePaPerK: S / half };
+      };
     },
     curvature(temperatureK: number) {
       const x = (temperatureK - mid) / half;

@@ -12,8 +12,8 @@
  * when the degree is raised by one (or lowered, when the nodes do not allow more).
  */
 import { SolverError } from "../errors.js";
-import { aicc } from "./selectByAicc.js";
-import { weightedLeastSquares } from "./weightedLeastSquares.js";
+import { aicc } from "../numerics/aicc.js";
+import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
 
 export interface BridgeOptions {
   /** Number of lowest-density nodes used. Default 5 (or all, if fewer). */
@@ -123,5 +123,68 @@ export function lowDensityBridge(
     toDensity,
     degree: best.degree,
     nodesUsed: m,
+  };
+}
+
+/**
+ * A bridge with its degree and weights fixed: a linear map from the integrand values at the
+ * bridge's nodes to its coefficients and integral (weighted least squares with fixed weights is
+ * linear in the data), used when the route is re-evaluated for other pressures (uncertainty
+ * propagation) without fitting again.
+ */
+export interface FrozenBridge {
+  /** The nominal fit; its uncertainty and truncation fields are kept by `apply`. */
+  readonly nominal: BridgeResult;
+  /** Weight of node j in coefficient c: coefficientWeights[c][j]. */
+  readonly coefficientWeights: readonly Float64Array[];
+  /** Weight of node j in the integral from 0 to the first node. */
+  readonly integralWeights: Float64Array;
+  /** The bridge of other integrand values (coefficients and integral; the rest from `nominal`). */
+  apply(integrand: readonly number[]): BridgeResult;
+}
+
+/**
+ * Freezes a fitted bridge: its weights from unit integrands through {@link lowDensityBridge} at the
+ * nominal degree with the same sigma.
+ * @param density node densities, ascending, mol/m3 (as given to the nominal fit)
+ * @param sigma the nominal fit's standard deviations of the integrand (undefined: unit weights)
+ * @param nominal the nominal fit
+ * @param options the nominal fit's options (`nodes`)
+ */
+export function freezeBridge(
+  density: readonly number[],
+  sigma: readonly number[] | undefined,
+  nominal: BridgeResult,
+  options: BridgeOptions = {},
+): FrozenBridge {
+  const m = nominal.nodesUsed;
+  const k = nominal.coefficients.length;
+  const coefficientWeights = Array.from({ length: k }, () => new Float64Array(m));
+  const integralWeights = new Float64Array(m);
+  for (let j = 0; j < m; j++) {
+    const unit = new Array<number>(m).fill(0);
+    unit[j] = 1;
+    const b = lowDensityBridge(density, unit, sigma, {
+      ...options,
+      degree: nominal.degree,
+      estimateTruncation: false,
+    });
+    for (let c = 0; c < k; c++) coefficientWeights[c][j] = b.coefficients[c];
+    integralWeights[j] = b.integral;
+  }
+  return {
+    nominal,
+    coefficientWeights,
+    integralWeights,
+    apply(integrand: readonly number[]): BridgeResult {
+      const coefficients = coefficientWeights.map((w) => {
+        let v = 0;
+        for (let j = 0; j < m; j++) v += w[j] * integrand[j];
+        return v;
+      });
+      let integral = 0;
+      for (let j = 0; j < m; j++) integral += integralWeights[j] * integrand[j];
+      return { ...nominal, coefficients, integral };
+    },
   };
 }

@@ -10,7 +10,7 @@
  * uncertainties (the "effective variance" of Orear, Am. J. Phys. 50 (1982) 912), so they are
  * treated as independent per point.
  */
-import { seededRandom } from "./seededRandom.js";
+import { seededRandom } from "../numerics/seededRandom.js";
 
 export interface PropagationResult {
   /** Standard uncertainty of each output. */

@@ -26,7 +26,7 @@
 import { InputError } from "../errors.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
 import type { PvtDiagnostic } from "./pvtDiagnostic.js";
-import { cumulativeIrregular } from "./irregularQuadrature.js";
+import { cumulativeIrregular } from "../numerics/cumulativeIrregular.js";
 import { lowDensityBridge } from "./lowDensityBridge.js";
 
 export interface ResidualCvProfile {

@@ -111,3 +111,12 @@ export function surfaceVariance(s: VirialSurface, gradient: readonly number[]): 
   }
   return Math.max(v, 0);
 }
+
+/** k-th virial coefficient of the surface at T: sum_j b_kj tau^j / rhoScale^k (m3/mol for k = 1). */
+export function virialFromSurface(s: VirialSurface, temperatureK: number, k: number): number {
+  const tau = s.temperatureScale / temperatureK;
+  let v = 0;
+  for (let j = 0; j < s.temperatureTerms; j++)
+    v += s.coefficients[(k - 1) * s.temperatureTerms + j] * tau ** j;
+  return v / s.densityScale ** k;
+}

@@ -86,6 +86,15 @@ export function dPdRho(
   return gasConstant * temperatureK * (1 + 2 * residual.aD + residual.aDD);
 }
 
+/** (dP/dT)_rho in Pa/K from the derivatives: rho R (1 + aD + aDT). */
+export function dPdT(
+  densityMolPerM3: number,
+  residual: ResidualDerivatives,
+  gasConstant = R_CODATA,
+): number {
+  return densityMolPerM3 * gasConstant * (1 + residual.aD + residual.aDT);
+}
+
 /** Residual h, s, u, a, g in both conventions, J/mol and J/(mol K), with ln Z and ln phi. */
 export interface ResidualSets {
   /** Relative to the ideal gas at the same T and density. */

@@ -5,11 +5,10 @@
  * weighted metric; its condition number comes from the singular values of R, computed by one-sided
  * Jacobi rotations (Hestenes 1958; Golub & Van Loan §8.6.3; Demmel & Veselic, SIAM J. Matrix Anal.
  * Appl. 13 (1992) 1204, for its relative accuracy).
- *
- * Generic linear algebra kept inside pvt/ because numerics/ belongs to another area; it is a
- * candidate to move there.
  */
 import { InputError, SolverError } from "../errors.js";
+import { extent } from "./extent.js";
+import { singularValues } from "./singularValues.js";
 
 export interface WeightedLeastSquaresOptions {
   /**
@@ -131,8 +130,7 @@ export function weightedLeastSquares(
   for (let i = 0; i < n; i++)
     R.push(Array.from({ length: n }, (_, j) => (j < i ? 0 : ((a[i] as number[])[j] as number))));
   const sv = singularValues(R);
-  const smax = Math.max(...sv);
-  const smin = Math.min(...sv);
+  const { min: smin, max: smax } = extent(sv);
   if (!(smin > rankTolerance * smax)) {
     throw new SolverError(
       "weighted least squares (Householder QR)",
@@ -190,52 +188,4 @@ export function weightedLeastSquares(
     degreesOfFreedom: m - n,
     conditionNumber: smax / smin,
   };
-}
-
-/** Singular values of a small square matrix by one-sided Jacobi (Hestenes 1958). */
-export function singularValues(
-  matrix: readonly (readonly number[])[],
-  tolerance = 1e-15,
-  maxSweeps = 60,
-): number[] {
-  const n = matrix.length;
-  const u = matrix.map((r) => r.slice());
-  for (let sweep = 0; sweep < maxSweeps; sweep++) {
-    let rotated = false;
-    for (let p = 0; p < n - 1; p++) {
-      for (let q = p + 1; q < n; q++) {
-        let alpha = 0;
-        let beta = 0;
-        let gamma = 0;
-        for (let i = 0; i < n; i++) {
-          const up = (u[i] as number[])[p] as number;
-          const uq = (u[i] as number[])[q] as number;
-          alpha += up * up;
-          beta += uq * uq;
-          gamma += up * uq;
-        }
-        if (Math.abs(gamma) <= tolerance * Math.sqrt(alpha * beta) || gamma === 0) continue;
-        rotated = true;
-        const zeta = (beta - alpha) / (2 * gamma);
-        const t = Math.sign(zeta || 1) / (Math.abs(zeta) + Math.sqrt(1 + zeta * zeta));
-        const c = 1 / Math.sqrt(1 + t * t);
-        const s = c * t;
-        for (let i = 0; i < n; i++) {
-          const row = u[i] as number[];
-          const up = row[p] as number;
-          const uq = row[q] as number;
-          row[p] = c * up - s * uq;
-          row[q] = s * up + c * uq;
-        }
-      }
-    }
-    if (!rotated) break;
-  }
-  const out: number[] = [];
-  for (let j = 0; j < n; j++) {
-    let norm = 0;
-    for (let i = 0; i < n; i++) norm = Math.hypot(norm, (u[i] as number[])[j] as number);
-    out.push(norm);
-  }
-  return out;
 }
