@@ -19,7 +19,7 @@ export function extent(values: ArrayLike<number>): { min: number; max: number } 
   let min = Infinity;
   let max = -Infinity;
   for (let i = 0; i < n; i++) {
-    const v = values[i] as number;
+    const v = values[i];
     if (Number.isNaN(v)) {
       throw new InputError({
         input: `values[${i}]`,

@@ -25,8 +25,8 @@ export function singularValues(
         let beta = 0;
         let gamma = 0;
         for (let i = 0; i < n; i++) {
-          const up = (u[i] as number[])[p] as number;
-          const uq = (u[i] as number[])[q] as number;
+          const up = u[i][p];
+          const uq = u[i][q];
           alpha += up * up;
           beta += uq * uq;
           gamma += up * uq;
@@ -39,8 +39,8 @@ export function singularValues(
         const s = c * t;
         for (let i = 0; i < n; i++) {
           const row = u[i] as number[];
-          const up = row[p] as number;
-          const uq = row[q] as number;
+          const up = row[p];
+          const uq = row[q];
           row[p] = c * up - s * uq;
           row[q] = s * up + c * uq;
         }
@@ -51,7 +51,7 @@ export function singularValues(
   const out: number[] = [];
   for (let j = 0; j < n; j++) {
     let norm = 0;
-    for (let i = 0; i < n; i++) norm = Math.hypot(norm, (u[i] as number[])[j] as number);
+    for (let i = 0; i < n; i++) norm = Math.hypot(norm, u[i][j]);
     out.push(norm);
   }
   return out;

@@ -67,11 +67,12 @@ export function weightedLeastSquares(
       received: `${y.length}, ${sigma.length}`,
     });
   }
-  // Weighted design (row i divided by sigma_i), then columns scaled to unit 2-norm.
-  const a: number[][] = [];
-  const b: number[] = [];
+  // Weighted design (row i divided by sigma_i), stored by columns, then columns scaled to unit
+  // 2-norm.
+  const a = new Float64Array(m * n); // a[j * m + i]
+  const b = new Float64Array(m);
   for (let i = 0; i < m; i++) {
-    const s = sigma[i] as number;
+    const s = sigma[i];
     if (!(s > 0 && s < Infinity)) {
       throw new InputError({
         input: `sigma[${i}]`,
@@ -80,7 +81,7 @@ export function weightedLeastSquares(
         received: s,
       });
     }
-    const row = design[i] as readonly number[];
+    const row = design[i];
     if (row.length !== n)
       throw new InputError({
         input: `design[${i}]`,
@@ -88,47 +89,45 @@ export function weightedLeastSquares(
         validRange: `${n} columns`,
         received: row.length,
       });
-    a.push(row.map((v) => v / s));
-    b.push((y[i] as number) / s);
+    for (let j = 0; j < n; j++) a[j * m + i] = row[j] / s;
+    b[i] = y[i] / s;
   }
   const colScale: number[] = [];
   for (let j = 0; j < n; j++) {
-    let norm = 0;
-    for (let i = 0; i < m; i++) norm = Math.hypot(norm, (a[i] as number[])[j] as number);
+    const norm = norm2(a, j * m, (j + 1) * m);
     if (!(norm > 0 && norm < Infinity)) {
       throw new SolverError("weighted least squares", `design column ${j} is zero or not finite`);
     }
     colScale.push(norm);
-    for (let i = 0; i < m; i++) (a[i] as number[])[j] = ((a[i] as number[])[j] as number) / norm;
+    for (let i = 0; i < m; i++) a[j * m + i] /= norm;
   }
   // Householder QR, applied to b as we go (Golub & Van Loan Alg. 5.2.1).
+  const v = new Float64Array(m);
   for (let k = 0; k < n; k++) {
-    let alpha = 0;
-    for (let i = k; i < m; i++) alpha = Math.hypot(alpha, (a[i] as number[])[k] as number);
+    const col = k * m;
+    let alpha = norm2(a, col + k, col + m);
     if (alpha === 0) continue;
-    const akk = (a[k] as number[])[k] as number;
-    if (akk > 0) alpha = -alpha;
-    const v: number[] = new Array(m - k);
-    for (let i = k; i < m; i++) v[i - k] = (a[i] as number[])[k] as number;
-    v[0] = (v[0] as number) - alpha;
+    if (a[col + k] > 0) alpha = -alpha;
+    for (let i = k; i < m; i++) v[i] = a[col + i];
+    v[k] -= alpha;
     let vnorm2 = 0;
-    for (const vi of v) vnorm2 += vi * vi;
+    for (let i = k; i < m; i++) vnorm2 += v[i] * v[i];
     if (vnorm2 === 0) continue;
     for (let j = k; j < n; j++) {
+      const cj = j * m;
       let dot = 0;
-      for (let i = k; i < m; i++) dot += (v[i - k] as number) * ((a[i] as number[])[j] as number);
+      for (let i = k; i < m; i++) dot += v[i] * a[cj + i];
       const f = (2 * dot) / vnorm2;
-      for (let i = k; i < m; i++)
-        (a[i] as number[])[j] = ((a[i] as number[])[j] as number) - f * (v[i - k] as number);
+      for (let i = k; i < m; i++) a[cj + i] -= f * v[i];
     }
     let dot = 0;
-    for (let i = k; i < m; i++) dot += (v[i - k] as number) * (b[i] as number);
+    for (let i = k; i < m; i++) dot += v[i] * b[i];
     const f = (2 * dot) / vnorm2;
-    for (let i = k; i < m; i++) b[i] = (b[i] as number) - f * (v[i - k] as number);
+    for (let i = k; i < m; i++) b[i] -= f * v[i];
   }
   const R: number[][] = [];
   for (let i = 0; i < n; i++)
-    R.push(Array.from({ length: n }, (_, j) => (j < i ? 0 : ((a[i] as number[])[j] as number))));
+    R.push(Array.from({ length: n }, (_, j) => (j < i ? 0 : a[j * m + i])));
   const sv = singularValues(R);
   const { min: smin, max: smax } = extent(sv);
   if (!(smin > rankTolerance * smax)) {
@@ -141,29 +140,27 @@ export function weightedLeastSquares(
   // Back substitution R z = Q^T b, then c_j = z_j / colScale_j.
   const z = new Array<number>(n).fill(0);
   for (let i = n - 1; i >= 0; i--) {
-    let s = b[i] as number;
-    for (let j = i + 1; j < n; j++) s -= ((R[i] as number[])[j] as number) * (z[j] as number);
-    z[i] = s / ((R[i] as number[])[i] as number);
+    let s = b[i];
+    for (let j = i + 1; j < n; j++) s -= R[i][j] * z[j];
+    z[i] = s / R[i][i];
   }
-  const coefficients = z.map((zi, j) => zi / (colScale[j] as number));
+  const coefficients = z.map((zi, j) => zi / colScale[j]);
   // Rinv (upper triangular), covariance = D^-1 Rinv Rinv^T D^-1.
   const Rinv: number[][] = Array.from({ length: n }, () => new Array<number>(n).fill(0));
   for (let j = 0; j < n; j++) {
-    (Rinv[j] as number[])[j] = 1 / ((R[j] as number[])[j] as number);
+    Rinv[j][j] = 1 / R[j][j];
     for (let i = j - 1; i >= 0; i--) {
       let s = 0;
-      for (let k = i + 1; k <= j; k++)
-        s += ((R[i] as number[])[k] as number) * ((Rinv[k] as number[])[j] as number);
-      (Rinv[i] as number[])[j] = -s / ((R[i] as number[])[i] as number);
+      for (let k = i + 1; k <= j; k++) s += R[i][k] * Rinv[k][j];
+      Rinv[i][j] = -s / R[i][i];
     }
   }
   const covariance: number[][] = Array.from({ length: n }, () => new Array<number>(n).fill(0));
   for (let i = 0; i < n; i++) {
     for (let j = 0; j < n; j++) {
       let s = 0;
-      for (let k = Math.max(i, j); k < n; k++)
-        s += ((Rinv[i] as number[])[k] as number) * ((Rinv[j] as number[])[k] as number);
-      (covariance[i] as number[])[j] = s / ((colScale[i] as number) * (colScale[j] as number));
+      for (let k = Math.max(i, j); k < n; k++) s += Rinv[i][k] * Rinv[j][k];
+      covariance[i][j] = s / (colScale[i] * colScale[j]);
     }
   }
   const residuals: number[] = [];
@@ -172,10 +169,10 @@ export function weightedLeastSquares(
   for (let i = 0; i < m; i++) {
     const row = design[i] as readonly number[];
     let fit = 0;
-    for (let j = 0; j < n; j++) fit += (row[j] as number) * (coefficients[j] as number);
-    const r = (y[i] as number) - fit;
+    for (let j = 0; j < n; j++) fit += row[j] * coefficients[j];
+    const r = y[i] - fit;
     residuals.push(r);
-    const nr = r / (sigma[i] as number);
+    const nr = r / sigma[i];
     normalizedResiduals.push(nr);
     chiSquare += nr * nr;
   }
@@ -188,4 +185,24 @@ export function weightedLeastSquares(
     degreesOfFreedom: m - n,
     conditionNumber: smax / smin,
   };
+}
+
+/**
+ * 2-norm of x[from..to) without overflow or underflow: scaled by the largest magnitude (the
+ * idea of the reference BLAS dnrm2; Blue, ACM Trans. Math. Softw. 4 (1978) 15).
+ */
+function norm2(x: Float64Array, from: number, to: number): number {
+  let scale = 0;
+  for (let i = from; i < to; i++) {
+    const v = Math.abs(x[i]);
+    if (v > scale) scale = v;
+    else if (!(v <= scale)) return Number.NaN;
+  }
+  if (scale === 0 || scale === Infinity) return scale;
+  let sum = 0;
+  for (let i = from; i < to; i++) {
+    const v = x[i] / scale;
+    sum += v * v;
+  }
+  return scale * Math.sqrt(sum);
 }

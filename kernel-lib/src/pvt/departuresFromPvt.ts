@@ -266,7 +266,7 @@ export function departuresFromPvt(
   // (5) Method error from the fit orders (see PvtState.method), then the propagated part.
   const nominalFlat = flattenValues(nominal);
   if (!stated || !isochoreRoute) {
-    let bumped: number[] | undefined;
+    let bumped: Float64Array | undefined;
     try {
       bumped = flattenValues(orderBumped());
     } catch {
@@ -381,8 +381,8 @@ function offIsochorePoints(
 function addOrderChange(
   method: DepartureSet[][],
   nominal: RouteValues,
-  nominalFlat: readonly number[],
-  bumped: readonly number[],
+  nominalFlat: ArrayLike<number>,
+  bumped: ArrayLike<number>,
 ): void {
   let at = 0;
   nominal.departures.forEach((iso, k) => {

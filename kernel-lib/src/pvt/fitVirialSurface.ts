@@ -67,9 +67,7 @@ export function fitVirialSurface(
   const y = points.map((p) => p.pressurePa / (p.densityMolPerM3 * gas * p.temperatureK) - 1);
   const scaleKnown = sigmaPa !== undefined;
   const sigma = points.map(
-    (p, i) =>
-      (sigmaPa ? (sigmaPa[i] as number) : p.pressurePa) /
-      (p.densityMolPerM3 * gas * p.temperatureK),
+    (p, i) => (sigmaPa ? sigmaPa[i] : p.pressurePa) / (p.densityMolPerM3 * gas * p.temperatureK),
   );
   // Unit weights in P when unknown: sigma_y = P/(rho R T) ~ Z, i.e. relative pressure weights.
   const candidates: [number, number][] = [];
@@ -122,7 +120,7 @@ export function fitVirialSurface(
   const diagnostics = fitDiagnostics(
     `surface fit (${d} density x ${t} temperature terms)`,
     fit,
-    order.map((i) => fit.normalizedResiduals[i] as number),
+    order.map((i) => fit.normalizedResiduals[i]),
     scaleKnown ? "stated" : "from-scatter",
   );
   const surface: VirialSurface = {
@@ -143,7 +141,7 @@ export function fitVirialSurface(
     fit,
     diagnostics,
     pressureResidualsPa: points.map(
-      (p, i) => (fit.residuals[i] as number) * p.densityMolPerM3 * gas * p.temperatureK,
+      (p, i) => fit.residuals[i] * p.densityMolPerM3 * gas * p.temperatureK,
     ),
   };
 }

@@ -125,11 +125,11 @@ export function fitIsochore(
   const cov = fit.covariance.map((r) => r.map((v) => v * factor));
   const sortIdx = temperaturesK
     .map((_, i) => i)
-    .sort((a, b) => (temperaturesK[a] as number) - (temperaturesK[b] as number));
+    .sort((a, b) => temperaturesK[a] - temperaturesK[b]);
   const diagnostics = fitDiagnostics(
     `isochore ${densityMolPerM3.toPrecision(6)} mol/m3 (order ${order})`,
     fit,
-    sortIdx.map((i) => fit.normalizedResiduals[i] as number),
+    sortIdx.map((i) => fit.normalizedResiduals[i]),
     scaleKnown ? "stated" : "from-scatter",
   );
   const c = fit.coefficients;
@@ -155,15 +155,14 @@ export function fitIsochore(
       const quad = (g: number[]) => {
         let v = 0;
         for (let i = 0; i < g.length; i++)
-          for (let j = 0; j < g.length; j++)
-            v += (g[i] as number) * ((cov[i] as number[])[j] as number) * (g[j] as number);
+          for (let j = 0; j < g.length; j++) v += g[i] * cov[i][j] * g[j];
         return Math.sqrt(Math.max(v, 0));
       };
       let P = 0;
       let S = 0;
       for (let j = 0; j < c.length; j++) {
-        P += (c[j] as number) * (gP[j] as number);
-        S += (c[j] as number) * (gS[j] as number);
+        P += c[j] * gP[j];
+        S += c[j] * gS[j];
       }
       return { pressurePa: P, slopePaPerK: S, uPressurePa: quad(gP), uSlopePaPerK: quad(gS) };
     },
@@ -220,9 +219,8 @@ export function fitIsochore(
       let v = 0;
       let C = 0;
       for (let i = 0; i < g.length; i++) {
-        C += (c[i] as number) * (g[i] as number);
-        for (let j = 0; j < g.length; j++)
-          v += (g[i] as number) * ((cov[i] as number[])[j] as number) * (g[j] as number);
+        C += c[i] * g[i];
+        for (let j = 0; j < g.length; j++) v += g[i] * cov[i][j] * g[j];
       }
       return { curvaturePaPerK2: C, uCurvaturePaPerK2: Math.sqrt(Math.max(v, 0)) };
     },

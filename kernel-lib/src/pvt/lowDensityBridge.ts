@@ -58,9 +58,9 @@ export function lowDensityBridge(
   const x = density.slice(0, m);
   const y = integrand.slice(0, m);
   const scaleKnown = sigma !== undefined && sigma.slice(0, m).every((s) => s > 0);
-  const s = scaleKnown ? (sigma as readonly number[]).slice(0, m) : x.map(() => 1);
-  const toDensity = x[0] as number;
-  const scale = x[m - 1] as number;
+  const s = scaleKnown ? sigma.slice(0, m) : x.map(() => 1);
+  const toDensity = x[0];
+  const scale = x[m - 1];
   const degrees = options.degree !== undefined ? [options.degree] : [0, 1, 2, 3];
   let best: { score: number; degree: number; coef: number[]; cov: number[][] } | undefined;
   const integralOf = (degree: number): { integral: number; c0: number } | undefined => {
@@ -72,7 +72,7 @@ export function lowDensityBridge(
         (acc, cj, j) => acc + (cj / scale ** j) * (toDensity ** (j + 1) / (j + 1)),
         0,
       ),
-      c0: c[0] as number,
+      c0: c[0],
     };
   };
   for (const degree of degrees) {
@@ -105,9 +105,8 @@ export function lowDensityBridge(
   let integral = 0;
   let v = 0;
   for (let i = 0; i < g.length; i++) {
-    integral += (g[i] as number) * (best.coef[i] as number);
-    for (let j = 0; j < g.length; j++)
-      v += (g[i] as number) * ((best.cov[i] as number[])[j] as number) * (g[j] as number);
+    integral += g[i] * best.coef[i];
+    for (let j = 0; j < g.length; j++) v += g[i] * best.cov[i][j] * g[j];
   }
   const other =
     options.estimateTruncation === false
@@ -115,9 +114,9 @@ export function lowDensityBridge(
       : (integralOf(best.degree + 1) ?? integralOf(best.degree - 1));
   return {
     truncation: other === undefined ? 0 : Math.abs(other.integral - integral),
-    truncationAtZero: other === undefined ? 0 : Math.abs(other.c0 - (best.coef[0] as number)),
+    truncationAtZero: other === undefined ? 0 : Math.abs(other.c0 - best.coef[0]),
     coefficients: best.coef,
-    coefficientUncertainties: best.cov.map((row, i) => Math.sqrt(Math.max(row[i] as number, 0))),
+    coefficientUncertainties: best.cov.map((row, i) => Math.sqrt(Math.max(row[i], 0))),
     integral,
     uIntegral: Math.sqrt(Math.max(v, 0)),
     toDensity,

@@ -27,12 +27,25 @@ export interface RouteValues {
   C: (number | undefined)[];
 }
 
-/** The values in one list: per isotherm the six departures of every node, then B and C (0 if none). */
-export function flattenValues(v: RouteValues): number[] {
-  const out: number[] = [];
+/** The values in one list: per isotherm the six departures of every node (DEPARTURE_KEYS order), then B and C (0 if none). */
+export function flattenValues(v: RouteValues): Float64Array {
+  let length = 0;
+  for (const iso of v.departures) length += iso.length * DEPARTURE_KEYS.length + 2;
+  const out = new Float64Array(length);
+  let at = 0;
   v.departures.forEach((iso, k) => {
-    for (const d of iso) for (const key of DEPARTURE_KEYS) out.push(d[key]);
-    out.push(v.B[k], v.C[k] ?? 0);
+    for (const d of iso) {
+      out[at] = d.a;
+      out[at + 1] = d.s;
+      out[at + 2] = d.u;
+      out[at + 3] = d.h;
+      out[at + 4] = d.g;
+      out[at + 5] = d.lnPhi;
+      at += 6;
+    }
+    out[at] = v.B[k];
+    out[at + 1] = v.C[k] ?? 0;
+    at += 2;
   });
   return out;
 }

@@ -18,8 +18,9 @@ import type { IsochoreFit } from "./isochoreFit.js";
 import { linearisedIsotherm } from "./linearisedIsotherm.js";
 import { report } from "./routeContext.js";
 import type { RouteContext } from "./routeContext.js";
-import { evaluateFrozen, flattenValues, surfaceRouteValues } from "./routeIntegrateStage.js";
-import type { IsochoreRouteNominal, NodeValue } from "./routeIntegrateStage.js";
+import { freezeIsotherm } from "./integrateIsotherm.js";
+import { flattenValues, surfaceRouteValues } from "./routeIntegrateStage.js";
+import type { IsochoreRouteNominal } from "./routeIntegrateStage.js";
 import type { IsothermPlan } from "./routeIsothermStage.js";
 import type { VirialSurfaceFit } from "./fitVirialSurface.js";
 import { surfaceBasis } from "./virialSurface.js";
@@ -51,14 +52,29 @@ export function propagateIsochoreRoute(
   const P0 = context.pressurePa;
   const samples = settings.monteCarloSamples;
   let done = 0;
+  const maps = nominal.frozen.map((f) =>
+    freezeIsotherm(f.temperatureK, f.densityMolPerM3, f.bridges, context.gasConstant),
+  );
+  const length = maps.reduce((sum, m) => sum + m.length, 0);
   const mc =
     samples > 0
       ? monteCarloPropagation(
           (P) => {
             const moved = groups.map((g, k) => fits[k].shifted(g.members.map((i) => P[i] - P0[i])));
-            const nodeValue: NodeValue = (k, t) => moved[k](t);
+            const out = new Float64Array(length);
+            let offset = 0;
+            nominal.frozen.forEach((f, k) => {
+              const ev = f.nodes.map((j) => moved[j](f.temperatureK));
+              maps[k].evaluate(
+                ev.map((e) => e.pressurePa),
+                ev.map((e) => e.slopePaPerK),
+                out,
+                offset,
+              );
+              offset += maps[k].length;
+            });
             report(context, "Monte Carlo", ++done, samples, "samples");
-            return flattenValues(evaluateFrozen(context, nominal.frozen, nodeValue));
+            return out;
           },
           P0,
           settings.sigmaPa,

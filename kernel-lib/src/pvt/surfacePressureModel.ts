@@ -37,7 +37,7 @@ export function surfacePressureModel(
       let poly = tau.mul(0);
       let tj = tau.mul(0).add(1);
       for (let j = 0; j < temperatureTerms; j++) {
-        poly = poly.add(tj.mul(coefficients[(i - 1) * temperatureTerms + j] as number));
+        poly = poly.add(tj.mul(coefficients[(i - 1) * temperatureTerms + j]));
         tj = tj.mul(tau);
       }
       sum = sum.add(di.mul(poly));

@@ -86,7 +86,7 @@ export function surfaceBasis(
 
 function dot(a: readonly number[], b: readonly number[]): number {
   let s = 0;
-  for (let k = 0; k < a.length; k++) s += (a[k] as number) * (b[k] as number);
+  for (let k = 0; k < a.length; k++) s += a[k] * b[k];
   return s;
 }
 
@@ -106,8 +106,7 @@ export function surfaceVariance(s: VirialSurface, gradient: readonly number[]): 
   let v = 0;
   for (let i = 0; i < gradient.length; i++) {
     const row = s.covariance[i] as readonly number[];
-    for (let j = 0; j < gradient.length; j++)
-      v += (gradient[i] as number) * (row[j] as number) * (gradient[j] as number);
+    for (let j = 0; j < gradient.length; j++) v += gradient[i] * row[j] * gradient[j];
   }
   return Math.max(v, 0);
 }
