@@ -4,6 +4,7 @@
  * by AICc (selectByAicc.ts) unless fixed. Gives P and the isochoric slope (dP/dT)_rho with their
  * standard uncertainties from the coefficient covariance (JCGM 100:2008 eq. 13).
  */
+import { powerRow } from "../numerics/powerRow.js";
 import { InputError } from "../errors.js";
 import { extent } from "../numerics/extent.js";
 import { fitDiagnostics } from "./fitDiagnostics.js";
@@ -102,7 +103,7 @@ export function fitIsochore(
   let best: { score: number; order: number; fit: WeightedLeastSquaresResult } | undefined;
   for (const order of orders) {
     if (order + 1 > distinct) continue;
-    const design = xs.map((x) => Array.from({ length: order + 1 }, (_, j) => x ** j));
+    const design = xs.map((x) => powerRow(x, order + 1));
     const fit = weightedLeastSquares(design, pressuresPa, sigma);
     const raw = aicc(fit.chiSquare, n, order + 1, scaleKnown);
     // Infinity when n - k - 1 <= 0: keep the lowest such order only as a last resort.

@@ -18,6 +18,7 @@
  * the chosen order is raised by one (an end point is an extrapolation of the others, where a
  * too-low order shows). Identical to refitting up to rounding.
  */
+import { powerRow } from "../numerics/powerRow.js";
 import { aicc } from "../numerics/aicc.js";
 import { extent } from "../numerics/extent.js";
 import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
@@ -66,7 +67,7 @@ export function isochoreLeaveOneOut(
   const highest = Math.min(options.order ?? options.maxOrder ?? 6, distinct - 1) + 1;
   const fits: (OrderFit | undefined)[] = [];
   for (let order = 1; order <= highest && order + 1 <= distinct; order++) {
-    const design = xs.map((x) => Array.from({ length: order + 1 }, (_, j) => x ** j));
+    const design = xs.map((x) => powerRow(x, order + 1));
     let fit;
     try {
       fit = weightedLeastSquares(design, pressuresPa, sigmaPa);

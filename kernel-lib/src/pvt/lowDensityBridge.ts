@@ -11,6 +11,7 @@
  * the fit covariance is reported apart from its truncation estimate, the change of the integral
  * when the degree is raised by one (or lowered, when the nodes do not allow more).
  */
+import { powerRow } from "../numerics/powerRow.js";
 import { SolverError } from "../errors.js";
 import { aicc } from "../numerics/aicc.js";
 import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
@@ -65,7 +66,7 @@ export function lowDensityBridge(
   let best: { score: number; degree: number; coef: number[]; cov: number[][] } | undefined;
   const integralOf = (degree: number): { integral: number; c0: number } | undefined => {
     if (!(degree >= 0 && degree + 1 <= m)) return undefined;
-    const design = x.map((r) => Array.from({ length: degree + 1 }, (_, j) => (r / scale) ** j));
+    const design = x.map((r) => powerRow(r / scale, degree + 1));
     const c = weightedLeastSquares(design, y, s).coefficients;
     return {
       integral: c.reduce(
@@ -77,7 +78,7 @@ export function lowDensityBridge(
   };
   for (const degree of degrees) {
     if (degree + 1 > m) continue;
-    const design = x.map((r) => Array.from({ length: degree + 1 }, (_, j) => (r / scale) ** j));
+    const design = x.map((r) => powerRow(r / scale, degree + 1));
     const fit = weightedLeastSquares(design, y, s);
     const dof = fit.degreesOfFreedom;
     const red = dof > 0 ? fit.chiSquare / dof : Number.NaN;
