@@ -2,5 +2,6 @@
 import type { BenchCase } from "../harness.js";
 import { engineCases } from "./engineCases.js";
 import { referenceCases } from "./referenceCases.js";
+import { pvtCases } from "./pvtCases.js";
 
-export const allCases: BenchCase[] = [...engineCases, ...referenceCases];
+export const allCases: BenchCase[] = [...engineCases, ...referenceCases, ...pvtCases];

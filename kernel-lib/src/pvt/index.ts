@@ -8,8 +8,8 @@ export { pvtFromArrays } from "./pvtFromArrays.js";
 export type { PvtArrays, PvtFromArraysOptions } from "./pvtFromArrays.js";
 export { columnUnitToSI } from "./columnUnits.js";
 export type { ColumnQuantity, AffineToSI } from "./columnUnits.js";
-// Generic helpers (weightedLeastSquares, seededRandom, runsTest, cumulativeIrregular,
-// familyThreshold) are imported by path, not re-exported, so they cannot collide with numerics/.
+// The generic helpers live in numerics/ (weightedLeastSquares, seededRandom, runsTest,
+// cumulativeIrregular, aicc), imported by path; familyThreshold stays here.
 export type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 export type { RunsTestResult } from "../numerics/runsTest.js";
 export type { FitDiagnostics } from "./fitDiagnostics.js";
@@ -40,6 +40,8 @@ export type {
   PvtRouteResult,
   PvtIsotherm,
   PvtState,
+  PvtRouteProgress,
+  PvtRouteStage,
 } from "./departuresFromPvt.js";
 export type { DepartureSet as PvtDepartureSet } from "./departureSet.js";
 export type { PvtDiagnostic } from "./pvtDiagnostic.js";
