@@ -23,6 +23,7 @@ import type { PvtRouteResult } from "./departuresFromPvt.js";
 import type { IsochoreFit } from "./isochoreFit.js";
 import { cumulativeIrregular } from "../numerics/cumulativeIrregular.js";
 
+/** Measured saturation data at one temperature (Psat, its slope, the saturated densities), with uncertainties. */
 export interface SaturationData {
   /** Saturation pressure at T, Pa, and its standard uncertainty. */
   pressurePa: number;
@@ -37,6 +38,7 @@ export interface SaturationData {
   uLiquidDensityMolPerM3?: number;
 }
 
+/** A saturated state reached across the dome, with its departures and their uncertainties. */
 export interface DomeState {
   densityMolPerM3: number;
   pressurePa: number;
@@ -44,6 +46,7 @@ export interface DomeState {
   uncertainty: DepartureSet;
 }
 
+/** Result of {@link departuresAcrossDome}: the saturated vapour and liquid states. */
 export interface AcrossDomeResult {
   temperatureK: number;
   saturatedVapor: DomeState;
@@ -69,6 +72,7 @@ function extrapolate(
   return { value: quad, spread: Math.abs(quad - line) };
 }
 
+/** Departures of the saturated liquid from the vapour side through measured saturation data (see the header). */
 export function departuresAcrossDome(
   result: PvtRouteResult,
   request: { temperatureK: number; saturation: SaturationData },

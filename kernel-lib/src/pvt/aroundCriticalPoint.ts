@@ -37,6 +37,7 @@ export type ResidualCvInput =
       uCvResidualJPerMolK?: readonly number[];
     };
 
+/** What departuresAroundCriticalPoint needs: the route result, the target state and a residual cv. */
 export interface AroundCriticalPointRequest {
   /** Target temperature, K (below Tc, where the isotherm route stopped). */
   temperatureK: number;
@@ -47,6 +48,7 @@ export interface AroundCriticalPointRequest {
   cvResidual: ResidualCvInput;
 }
 
+/** Result of {@link departuresAroundCriticalPoint}: the departures at the target and their uncertainties. */
 export interface AroundCriticalPointResult {
   temperatureK: number;
   densityMolPerM3: number;
@@ -59,6 +61,7 @@ export interface AroundCriticalPointResult {
   path: string;
 }
 
+/** Departures below the critical temperature reached down an isochore with a residual cv (see the header). */
 export function departuresAroundCriticalPoint(
   result: PvtRouteResult,
   request: AroundCriticalPointRequest,

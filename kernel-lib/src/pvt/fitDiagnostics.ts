@@ -9,6 +9,7 @@ import { runsTest } from "../numerics/runsTest.js";
 import type { RunsTestResult } from "../numerics/runsTest.js";
 import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
+/** Quality of one weighted fit: chi-square, runs test, worst residuals, recommendations. */
 export interface FitDiagnostics {
   /** What was fitted, e.g. "isochore 5012.3 mol/m3" or "surface". */
   readonly subject: string;

@@ -15,12 +15,14 @@ import type { VirialSurface } from "./virialSurface.js";
 import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
 import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
+/** One point of a surface fit: T (K), density (mol/m3), pressure (Pa). */
 export interface SurfacePoint {
   temperatureK: number;
   densityMolPerM3: number;
   pressurePa: number;
 }
 
+/** Options of {@link fitVirialSurface}. */
 export interface FitVirialSurfaceOptions {
   /** Fixed number of density terms (powers rho^1..rho^n). Default: chosen by AICc. */
   densityTerms?: number;
@@ -34,6 +36,7 @@ export interface FitVirialSurfaceOptions {
   gasConstant?: number;
 }
 
+/** Result of {@link fitVirialSurface}: the surface, the underlying fit and its diagnostics. */
 export interface VirialSurfaceFit {
   surface: VirialSurface;
   fit: WeightedLeastSquaresResult;

@@ -12,6 +12,7 @@ export interface IsochoreGroup {
   members: number[];
 }
 
+/** Groups point indices by density (see the header); groups come in ascending density. */
 export function groupIsochores(
   densities: readonly number[],
   relativeTolerance: number,

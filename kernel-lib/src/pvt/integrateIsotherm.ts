@@ -21,6 +21,7 @@ import {
 import { lowDensityBridge } from "./lowDensityBridge.js";
 import type { BridgeOptions, BridgeResult, FrozenBridge } from "./lowDensityBridge.js";
 
+/** The smoothed values at the nodes of one isotherm. */
 export interface IsothermNodes {
   temperatureK: number;
   /** Ascending, mol/m3. */
@@ -34,6 +35,7 @@ export interface IsothermNodes {
   uSlopePaPerK?: readonly number[];
 }
 
+/** Result of {@link integrateIsotherm}: departures at every node, the bridges, B and C. */
 export interface IsothermDepartures {
   temperatureK: number;
   departures: DepartureSet[];
@@ -49,6 +51,7 @@ export interface IsothermDepartures {
   uC?: number;
 }
 
+/** Options of {@link integrateIsotherm}. */
 export interface IntegrateIsothermOptions {
   bridge?: BridgeOptions;
   /** Fixed bridge degrees (used by the uncertainty propagation to freeze the nominal choice). */

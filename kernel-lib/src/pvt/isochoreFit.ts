@@ -13,6 +13,7 @@ import { aicc } from "../numerics/aicc.js";
 import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
 import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
+/** Options of {@link fitIsochore}. */
 export interface IsochoreFitOptions {
   /** Fixed polynomial order (1 = linear in T). Default: chosen by AICc up to `maxOrder`. */
   order?: number;
@@ -27,6 +28,7 @@ export interface IsochoreFitOptions {
   minOrder?: number;
 }
 
+/** A smoothing fit P(T) along one isochore (see the header). */
 export interface IsochoreFit {
   /** The isochore's density, mol/m3. */
   readonly densityMolPerM3: number;
@@ -71,6 +73,7 @@ export interface IsochoreFit {
   };
 }
 
+/** Fits P(T) on one isochore; `sigmaPa` undefined means unit weights with the scale from the scatter. */
 export function fitIsochore(
   densityMolPerM3: number,
   temperaturesK: readonly number[],

@@ -16,6 +16,7 @@ import { SolverError } from "../errors.js";
 import { aicc } from "../numerics/aicc.js";
 import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
 
+/** Options of {@link lowDensityBridge}. */
 export interface BridgeOptions {
   /** Number of lowest-density nodes used. Default 5 (or all, if fewer). */
   nodes?: number;
@@ -25,6 +26,7 @@ export interface BridgeOptions {
   estimateTruncation?: boolean;
 }
 
+/** Result of {@link lowDensityBridge}. */
 export interface BridgeResult {
   /** Polynomial coefficients c0 + c1 rho + c2 rho^2 of the integrand (units of the integrand per rho^k). */
   coefficients: number[];

@@ -21,6 +21,7 @@ import { separatorCounts, tokenizeCsv } from "./tokenizeCsv.js";
 import type { CsvSeparator } from "./tokenizeCsv.js";
 import type { PvtDataset, PvtPoint } from "./types.js";
 
+/** Options of {@link parsePvtCsv}. */
 export interface ParsePvtCsvOptions {
   /** Name shown in error messages, e.g. the file path. Default "<string>". */
   source?: string;

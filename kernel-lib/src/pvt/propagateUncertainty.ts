@@ -12,12 +12,14 @@
  */
 import { seededRandom } from "../numerics/seededRandom.js";
 
+/** Standard uncertainties of a propagation, one per output. */
 export interface PropagationResult {
   /** Standard uncertainty of each output. */
   standardUncertainty: number[];
   samples: number;
 }
 
+/** Monte Carlo propagation (JCGM 101): `samples` seeded replicates of the pressures through `evaluate`. */
 export function monteCarloPropagation(
   evaluate: (pressuresPa: readonly number[]) => ArrayLike<number>,
   pressuresPa: readonly number[],
@@ -49,6 +51,7 @@ export function monteCarloPropagation(
   };
 }
 
+/** Linearised propagation (JCGM 100 eq. 10) by one-sigma steps of every pressure (cost: one evaluation per pressure). */
 export function linearisedPropagation(
   evaluate: (pressuresPa: readonly number[]) => ArrayLike<number>,
   pressuresPa: readonly number[],

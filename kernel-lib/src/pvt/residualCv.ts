@@ -29,6 +29,7 @@ import type { PvtDiagnostic } from "./pvtDiagnostic.js";
 import { cumulativeIrregular } from "../numerics/cumulativeIrregular.js";
 import { lowDensityBridge } from "./lowDensityBridge.js";
 
+/** Residual isochoric heat capacity along an isochore from the P-V-T data, with uncertainties. */
 export interface ResidualCvProfile {
   temperatureK: number;
   densityMolPerM3: number[];

@@ -11,6 +11,7 @@ import type { PressureModel } from "../departure/index.js";
 import type { HyperDual } from "../numerics/index.js";
 import type { VirialSurface } from "./virialSurface.js";
 
+/** Options of {@link surfacePressureModel}. */
 export interface SurfacePressureModelOptions {
   /** Model name. Default "P-V-T surface fit". */
   name?: string;
@@ -22,6 +23,7 @@ export interface SurfacePressureModelOptions {
   dataSource?: string;
 }
 
+/** The fitted surface as a pressure function P(T, rho) for the departure integrator. */
 export function surfacePressureModel(
   surface: VirialSurface,
   options: SurfacePressureModelOptions = {},

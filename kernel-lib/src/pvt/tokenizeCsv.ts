@@ -7,6 +7,7 @@
  */
 import { PvtFormatError } from "./pvtFormatError.js";
 
+/** One data row of a CSV text with its line number. */
 export interface CsvRow {
   /** 1-based line number in the text. */
   line: number;
@@ -17,6 +18,7 @@ export interface CsvRow {
 /** Field separator of a CSV file; "auto" takes the one that occurs most in the header line. */
 export type CsvSeparator = "," | ";" | "\t" | "auto";
 
+/** A tokenized CSV text: data rows, comments and the separator used. */
 export interface CsvText {
   rows: CsvRow[];
   /** The separator used (detected or given). */

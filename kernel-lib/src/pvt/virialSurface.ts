@@ -19,6 +19,7 @@
  */
 import type { ResidualDerivatives } from "../eos/types.js";
 
+/** A fitted virial-type surface (see the header): shape, scales, coefficients, covariance, range. */
 export interface VirialSurface {
   readonly densityTerms: number;
   readonly temperatureTerms: number;
