@@ -5,7 +5,7 @@
  */
 import { InputError } from "../errors.js";
 
-/** Minimum and maximum of a non-empty list; NaN anywhere is refused (it has no order). */
+/** Minimum and maximum of a non-empty list (-0 below +0, as Math.min); NaN is refused (it has no order). */
 export function extent(values: ArrayLike<number>): { min: number; max: number } {
   const n = values.length;
   if (!(n > 0)) {
@@ -28,8 +28,30 @@ export function extent(values: ArrayLike<number>): { min: number; max: number } 
         received: v,
       });
     }
-    if (v < min) min = v;
-    if (v > max) max = v;
+    if (v < min || (v === 0 && min === 0 && Object.is(v, -0))) min = v;
+    if (v > max || (v === 0 && Object.is(max, -0))) max = v;
   }
   return { min, max };
+}
+
+/** Math.max over a list of any length (no spread): -Infinity for an empty list, NaN if any is NaN. */
+export function maxOf(values: ArrayLike<number>): number {
+  let max = -Infinity;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (Number.isNaN(v)) return Number.NaN;
+    if (v > max || (v === 0 && Object.is(max, -0))) max = v;
+  }
+  return max;
+}
+
+/** Math.min over a list of any length (no spread): Infinity for an empty list, NaN if any is NaN. */
+export function minOf(values: ArrayLike<number>): number {
+  let min = Infinity;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (Number.isNaN(v)) return Number.NaN;
+    if (v < min || (v === 0 && min === 0 && Object.is(v, -0))) min = v;
+  }
+  return min;
 }
