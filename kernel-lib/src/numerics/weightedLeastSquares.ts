@@ -48,9 +48,36 @@ export function weightedLeastSquares(
   sigma: readonly number[],
   options: WeightedLeastSquaresOptions = {},
 ): WeightedLeastSquaresResult {
-  const rankTolerance = options.rankTolerance ?? 1e-13;
   const m = design.length;
   const n = design[0]?.length ?? 0;
+  const columns = Array.from({ length: n }, () => new Float64Array(m));
+  for (let i = 0; i < m; i++) {
+    const row = design[i];
+    if (row.length !== n)
+      throw new InputError({
+        input: `design[${i}]`,
+        unit: "-",
+        validRange: `${n} columns`,
+        received: row.length,
+      });
+    for (let j = 0; j < n; j++) columns[j][i] = row[j];
+  }
+  return weightedLeastSquaresColumns(columns, y, sigma, options);
+}
+
+/**
+ * {@link weightedLeastSquares} with the design given by columns (n columns of m values each), for
+ * fits that choose among subsets of one large set of basis columns without copying rows.
+ */
+export function weightedLeastSquaresColumns(
+  columns: readonly ArrayLike<number>[],
+  y: ArrayLike<number>,
+  sigma: ArrayLike<number>,
+  options: WeightedLeastSquaresOptions = {},
+): WeightedLeastSquaresResult {
+  const rankTolerance = options.rankTolerance ?? 1e-13;
+  const n = columns.length;
+  const m = columns[0]?.length ?? 0;
   if (!(n >= 1 && m >= n)) {
     throw new InputError({
       input: "design",
@@ -59,12 +86,12 @@ export function weightedLeastSquares(
       received: `${m} observations, ${n} coefficients`,
     });
   }
-  if (y.length !== m || sigma.length !== m) {
+  if (y.length !== m || sigma.length !== m || columns.some((c) => c.length !== m)) {
     throw new InputError({
-      input: "y, sigma",
+      input: "y, sigma, design columns",
       unit: "-",
       validRange: `length ${m}`,
-      received: `${y.length}, ${sigma.length}`,
+      received: `${y.length}, ${sigma.length}, ${columns.map((c) => c.length).join(" ")}`,
     });
   }
   // Weighted design (row i divided by sigma_i), stored by columns, then columns scaled to unit
@@ -81,15 +108,7 @@ export function weightedLeastSquares(
         received: s,
       });
     }
-    const row = design[i];
-    if (row.length !== n)
-      throw new InputError({
-        input: `design[${i}]`,
-        unit: "-",
-        validRange: `${n} columns`,
-        received: row.length,
-      });
-    for (let j = 0; j < n; j++) a[j * m + i] = row[j] / s;
+    for (let j = 0; j < n; j++) a[j * m + i] = columns[j][i] / s;
     b[i] = y[i] / s;
   }
   const colScale: number[] = [];
@@ -167,9 +186,8 @@ export function weightedLeastSquares(
   const normalizedResiduals: number[] = [];
   let chiSquare = 0;
   for (let i = 0; i < m; i++) {
-    const row = design[i] as readonly number[];
     let fit = 0;
-    for (let j = 0; j < n; j++) fit += row[j] * coefficients[j];
+    for (let j = 0; j < n; j++) fit += columns[j][i] * coefficients[j];
     const r = y[i] - fit;
     residuals.push(r);
     const nr = r / sigma[i];

@@ -12,7 +12,7 @@ import type { FitDiagnostics } from "./fitDiagnostics.js";
 import { aicc } from "../numerics/aicc.js";
 import { surfaceBasis } from "./virialSurface.js";
 import type { VirialSurface } from "./virialSurface.js";
-import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
+import { weightedLeastSquaresColumns } from "../numerics/weightedLeastSquares.js";
 import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
 /** One point of a surface fit: T (K), density (mol/m3), pressure (Pa). */
@@ -80,15 +80,27 @@ export function fitVirialSurface(
     for (let t = options.temperatureTerms ?? 1; t <= tMax; t++) candidates.push([d, t]);
   }
   const distinctT = new Set(points.map((p) => p.temperatureK.toPrecision(8))).size;
+  // The "aD" basis of the largest shape, by columns (delta^i tau^j, i = 1..dMax outer, j inner, as
+  // surfaceBasis builds them): every candidate shape is a subset of its columns.
+  const basis = Array.from({ length: dMax * tMax }, () => new Float64Array(n));
+  points.forEach((p, r) => {
+    const row = surfaceBasis(
+      { densityTerms: dMax, temperatureTerms: tMax, densityScale, temperatureScale },
+      "aD",
+      p.temperatureK,
+      p.densityMolPerM3,
+    );
+    for (let k = 0; k < row.length; k++) basis[k][r] = row[k];
+  });
   let best: { score: number; d: number; t: number; fit: WeightedLeastSquaresResult } | undefined;
   let lastError: unknown;
   for (const [d, t] of candidates) {
     if (t > distinctT || d * t > n - 2) continue;
-    const shape = { densityTerms: d, temperatureTerms: t, densityScale, temperatureScale };
-    const design = points.map((p) => surfaceBasis(shape, "aD", p.temperatureK, p.densityMolPerM3));
+    const design: Float64Array[] = [];
+    for (let i = 1; i <= d; i++) for (let j = 0; j < t; j++) design.push(basis[(i - 1) * tMax + j]);
     let fit: WeightedLeastSquaresResult;
     try {
-      fit = weightedLeastSquares(design, y, sigma);
+      fit = weightedLeastSquaresColumns(design, y, sigma);
     } catch (e) {
       lastError = e;
       continue;
