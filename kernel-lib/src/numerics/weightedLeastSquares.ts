@@ -94,56 +94,7 @@ export function weightedLeastSquaresColumns(
       received: `${y.length}, ${sigma.length}, ${columns.map((c) => c.length).join(" ")}`,
     });
   }
-  // Weighted design (row i divided by sigma_i), stored by columns, then columns scaled to unit
-  // 2-norm.
-  const a = new Float64Array(m * n); // a[j * m + i]
-  const b = new Float64Array(m);
-  for (let i = 0; i < m; i++) {
-    const s = sigma[i];
-    if (!(s > 0 && s < Infinity)) {
-      throw new InputError({
-        input: `sigma[${i}]`,
-        unit: "-",
-        validRange: "a finite number > 0",
-        received: s,
-      });
-    }
-    for (let j = 0; j < n; j++) a[j * m + i] = columns[j][i] / s;
-    b[i] = y[i] / s;
-  }
-  const colScale: number[] = [];
-  for (let j = 0; j < n; j++) {
-    const norm = norm2(a, j * m, (j + 1) * m);
-    if (!(norm > 0 && norm < Infinity)) {
-      throw new SolverError("weighted least squares", `design column ${j} is zero or not finite`);
-    }
-    colScale.push(norm);
-    for (let i = 0; i < m; i++) a[j * m + i] /= norm;
-  }
-  // Householder QR, applied to b as we go (Golub & Van Loan Alg. 5.2.1).
-  const v = new Float64Array(m);
-  for (let k = 0; k < n; k++) {
-    const col = k * m;
-    let alpha = norm2(a, col + k, col + m);
-    if (alpha === 0) continue;
-    if (a[col + k] > 0) alpha = -alpha;
-    for (let i = k; i < m; i++) v[i] = a[col + i];
-    v[k] -= alpha;
-    let vnorm2 = 0;
-    for (let i = k; i < m; i++) vnorm2 += v[i] * v[i];
-    if (vnorm2 === 0) continue;
-    for (let j = k; j < n; j++) {
-      const cj = j * m;
-      let dot = 0;
-      for (let i = k; i < m; i++) dot += v[i] * a[cj + i];
-      const f = (2 * dot) / vnorm2;
-      for (let i = k; i < m; i++) a[cj + i] -= f * v[i];
-    }
-    let dot = 0;
-    for (let i = k; i < m; i++) dot += v[i] * b[i];
-    const f = (2 * dot) / vnorm2;
-    for (let i = k; i < m; i++) b[i] -= f * v[i];
-  }
+  const { a, b, colScale } = weightAndFactor(columns, y, sigma, m, n);
   const R: number[][] = [];
   for (let i = 0; i < n; i++)
     R.push(Array.from({ length: n }, (_, j) => (j < i ? 0 : a[j * m + i])));
@@ -203,6 +154,113 @@ export function weightedLeastSquaresColumns(
     degreesOfFreedom: m - n,
     conditionNumber: smax / smin,
   };
+}
+
+/**
+ * The weighted design (row i divided by sigma_i) by columns, scaled to unit column norms, reduced
+ * in place by Householder QR (Golub & Van Loan Alg. 5.2.1) with the same reflections applied to
+ * the weighted observations: on return the upper triangle of `a` holds R (of the scaled design),
+ * b[0..n) holds Q^T b and b[n..m) the residual's components.
+ */
+function weightAndFactor(
+  columns: readonly ArrayLike<number>[],
+  y: ArrayLike<number>,
+  sigma: ArrayLike<number>,
+  m: number,
+  n: number,
+): { a: Float64Array; b: Float64Array; colScale: number[] } {
+  // Weighted design (row i divided by sigma_i), stored by columns, then columns scaled to unit
+  // 2-norm.
+  const a = new Float64Array(m * n); // a[j * m + i]
+  const b = new Float64Array(m);
+  for (let i = 0; i < m; i++) {
+    const s = sigma[i];
+    if (!(s > 0 && s < Infinity)) {
+      throw new InputError({
+        input: `sigma[${i}]`,
+        unit: "-",
+        validRange: "a finite number > 0",
+        received: s,
+      });
+    }
+    for (let j = 0; j < n; j++) a[j * m + i] = columns[j][i] / s;
+    b[i] = y[i] / s;
+  }
+  const colScale: number[] = [];
+  for (let j = 0; j < n; j++) {
+    const norm = norm2(a, j * m, (j + 1) * m);
+    if (!(norm > 0 && norm < Infinity)) {
+      throw new SolverError("weighted least squares", `design column ${j} is zero or not finite`);
+    }
+    colScale.push(norm);
+    for (let i = 0; i < m; i++) a[j * m + i] /= norm;
+  }
+  const v = new Float64Array(m);
+  for (let k = 0; k < n; k++) {
+    const col = k * m;
+    let alpha = norm2(a, col + k, col + m);
+    if (alpha === 0) continue;
+    if (a[col + k] > 0) alpha = -alpha;
+    for (let i = k; i < m; i++) v[i] = a[col + i];
+    v[k] -= alpha;
+    let vnorm2 = 0;
+    for (let i = k; i < m; i++) vnorm2 += v[i] * v[i];
+    if (vnorm2 === 0) continue;
+    for (let j = k; j < n; j++) {
+      const cj = j * m;
+      let dot = 0;
+      for (let i = k; i < m; i++) dot += v[i] * a[cj + i];
+      const f = (2 * dot) / vnorm2;
+      for (let i = k; i < m; i++) a[cj + i] -= f * v[i];
+    }
+    let dot = 0;
+    for (let i = k; i < m; i++) dot += v[i] * b[i];
+    const f = (2 * dot) / vnorm2;
+    for (let i = k; i < m; i++) b[i] -= f * v[i];
+  }
+  return { a, b, colScale };
+}
+
+/**
+ * A weighted least-squares problem reduced by one QR factorisation, for comparing fits on subsets
+ * of its columns: with X_w = Q R (m x n, Q orthonormal), the residual of a fit on any subset S of
+ * the columns is ||Q^T b - R[:, S] c||^2 + ||b - Q Q^T b||^2, an n-row problem
+ * (Golub & Van Loan, 4th ed., §5.3 and §6.1 for the subset/downdating view).
+ */
+export interface ReducedLeastSquares {
+  /** Columns of R (n values each, the upper triangle of the weighted, unscaled design's R). */
+  columns: Float64Array[];
+  /** Q^T b, n values (unit weights in the reduced problem). */
+  qtb: Float64Array;
+  /** ||b - Q Q^T b||^2: the part of chi-square no subset can fit. */
+  residualSquare: number;
+}
+
+/** Reduces the problem of {@link weightedLeastSquaresColumns} to n rows (see ReducedLeastSquares). */
+export function reduceLeastSquares(
+  columns: readonly ArrayLike<number>[],
+  y: ArrayLike<number>,
+  sigma: ArrayLike<number>,
+): ReducedLeastSquares {
+  const n = columns.length;
+  const m = columns[0]?.length ?? 0;
+  if (!(n >= 1 && m >= n) || y.length !== m || sigma.length !== m) {
+    throw new InputError({
+      input: "design, y, sigma",
+      unit: "-",
+      validRange: "as many y and sigma as rows, at least as many rows as columns",
+      received: `${m} rows, ${n} columns, ${y.length} y, ${sigma.length} sigma`,
+    });
+  }
+  const { a, b, colScale } = weightAndFactor(columns, y, sigma, m, n);
+  const R = Array.from({ length: n }, (_, j) => {
+    const col = new Float64Array(n);
+    for (let i = 0; i <= j; i++) col[i] = a[j * m + i] * colScale[j];
+    return col;
+  });
+  let residualSquare = 0;
+  for (let i = n; i < m; i++) residualSquare += b[i] * b[i];
+  return { columns: R, qtb: b.slice(0, n), residualSquare };
 }
 
 /**

@@ -12,7 +12,11 @@ import type { FitDiagnostics } from "./fitDiagnostics.js";
 import { aicc } from "../numerics/aicc.js";
 import { surfaceBasis } from "./virialSurface.js";
 import type { VirialSurface } from "./virialSurface.js";
-import { weightedLeastSquaresColumns } from "../numerics/weightedLeastSquares.js";
+import {
+  reduceLeastSquares,
+  weightedLeastSquaresColumns,
+} from "../numerics/weightedLeastSquares.js";
+import type { ReducedLeastSquares } from "../numerics/weightedLeastSquares.js";
 import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
 /** One point of a surface fit: T (K), density (mol/m3), pressure (Pa). */
@@ -92,24 +96,35 @@ export function fitVirialSurface(
     );
     for (let k = 0; k < row.length; k++) basis[k][r] = row[k];
   });
-  let best: { score: number; d: number; t: number; fit: WeightedLeastSquaresResult } | undefined;
+  // With many points and several candidates, the candidates are compared on the problem reduced
+  // by one QR of the largest basis (reduceLeastSquares: the same chi-square, n rows instead of
+  // one factorisation of all points per candidate); the chosen one is then fitted to all points.
+  const choosing = candidates.length > 1;
+  const reduced =
+    choosing && n >= REDUCE_FROM_POINTS ? reduceIfPossible(basis, y, sigma) : undefined;
+  const unitSigma = reduced ? new Float64Array(reduced.qtb.length).fill(1) : undefined;
+  const columnsOf = (from: readonly Float64Array[], d: number, t: number): Float64Array[] => {
+    const design: Float64Array[] = [];
+    for (let i = 1; i <= d; i++) for (let j = 0; j < t; j++) design.push(from[(i - 1) * tMax + j]);
+    return design;
+  };
+  let best: { score: number; d: number; t: number } | undefined;
   let lastError: unknown;
   for (const [d, t] of candidates) {
     if (t > distinctT || d * t > n - 2) continue;
-    const design: Float64Array[] = [];
-    for (let i = 1; i <= d; i++) for (let j = 0; j < t; j++) design.push(basis[(i - 1) * tMax + j]);
-    let fit: WeightedLeastSquaresResult;
+    let chiSquare: number;
     try {
-      fit = weightedLeastSquaresColumns(design, y, sigma);
+      chiSquare =
+        reduced && unitSigma
+          ? weightedLeastSquaresColumns(columnsOf(reduced.columns, d, t), reduced.qtb, unitSigma)
+              .chiSquare + reduced.residualSquare
+          : weightedLeastSquaresColumns(columnsOf(basis, d, t), y, sigma).chiSquare;
     } catch (e) {
       lastError = e;
       continue;
     }
-    const score =
-      options.densityTerms !== undefined && options.temperatureTerms !== undefined
-        ? 0
-        : aicc(fit.chiSquare, n, d * t, scaleKnown);
-    if (!best || score < best.score) best = { score, d, t, fit };
+    const score = choosing ? aicc(chiSquare, n, d * t, scaleKnown) : 0;
+    if (!best || score < best.score) best = { score, d, t };
   }
   if (!best) {
     throw new InputError({
@@ -121,7 +136,8 @@ export function fitVirialSurface(
         (lastError instanceof Error ? ` (${lastError.message})` : ""),
     });
   }
-  const { d, t, fit } = best;
+  const fit = weightedLeastSquaresColumns(columnsOf(basis, best.d, best.t), y, sigma);
+  const { d, t } = best;
   const dof = fit.degreesOfFreedom;
   const red = dof > 0 ? fit.chiSquare / dof : 1;
   const factor = scaleKnown ? Math.max(1, red) : dof > 0 ? red : 1;
@@ -159,4 +175,20 @@ export function fitVirialSurface(
       (p, i) => fit.residuals[i] * p.densityMolPerM3 * gas * p.temperatureK,
     ),
   };
+}
+
+/** From this many points on, AICc compares the candidates on the QR-reduced problem. */
+const REDUCE_FROM_POINTS = 2000;
+
+/** The reduced problem, or undefined when the largest basis cannot be factorised (then every candidate is fitted to all points). */
+function reduceIfPossible(
+  basis: readonly Float64Array[],
+  y: readonly number[],
+  sigma: readonly number[],
+): ReducedLeastSquares | undefined {
+  try {
+    return reduceLeastSquares(basis, y, sigma);
+  } catch {
+    return undefined;
+  }
 }
