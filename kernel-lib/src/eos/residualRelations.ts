@@ -41,8 +41,8 @@ export function dPdRho(
   return gasConstant * temperatureK * stiffnessFromResidual(residual);
 }
 
-/** (dP/dT)_rho in Pa/K from the derivatives: rho R (1 + aD + aDT). */
-export function dPdT(
+/** (dP/dT) at constant density and composition, Pa/K: rho R (1 + aD + aDT). */
+export function dPdTAtDensity(
   densityMolPerM3: number,
   residual: ResidualDerivatives,
   gasConstant: number = R_CODATA,

@@ -6,7 +6,7 @@
  * many nodes are checked) the data contradict the smooth Helmholtz surface (a local step, a bad
  * isochore, or a surface order too low there).
  */
-import { dPdT } from "../state/properties.js";
+import { dPdTAtDensity } from "../eos/residualRelations.js";
 import { familyThreshold } from "./familyThreshold.js";
 import type { IsochoreFit } from "./isochoreFit.js";
 import type { PvtDiagnostic } from "./pvtDiagnostic.js";
@@ -30,7 +30,7 @@ export function slopeConsistency(
       const f = fits[j];
       const e = f.evaluate(t);
       const r = f.densityMolPerM3;
-      const sS = dPdT(r, surfaceDerivatives(surface, t, r), gasConstant);
+      const sS = dPdTAtDensity(r, surfaceDerivatives(surface, t, r), gasConstant);
       const gD = surfaceBasis(surface, "aD", t, r);
       const gDT = surfaceBasis(surface, "aDT", t, r);
       const g = gD.map((v, q) => r * gasConstant * (v + gDT[q]));

@@ -5,7 +5,8 @@
  * 912) whose slopes come from the first fit, at the same order. It gives the density corrections,
  * the effective variances the other stages use, and a second opinion on every isochoric slope.
  */
-import { dPdRho, dPdT } from "../state/properties.js";
+import { dPdTAtDensity } from "../eos/residualRelations.js";
+import { dPdRho } from "../state/properties.js";
 import { fitVirialSurface } from "./fitVirialSurface.js";
 import type { SurfacePoint, VirialSurfaceFit } from "./fitVirialSurface.js";
 import type { RouteContext } from "./routeContext.js";
@@ -44,7 +45,7 @@ export function fitRouteSurface(context: RouteContext, kept: readonly number[]):
   if (!stated) return { fit: first };
   const sigmaEff = points.map((p, i) => {
     const d = surfaceDerivatives(first.surface, p.temperatureK, p.densityMolPerM3);
-    const dT = dPdT(p.densityMolPerM3, d, R) * (p.uTemperatureK ?? 0);
+    const dT = dPdTAtDensity(p.densityMolPerM3, d, R) * (p.uTemperatureK ?? 0);
     const dR = dPdRho(p.temperatureK, d, R) * (p.uDensityMolPerM3 ?? 0);
     return Math.sqrt(uP(i) ** 2 + dT * dT + dR * dR);
   });

@@ -29,7 +29,7 @@ import type { DepartureMethod, EnergySet, FluidState, PhaseLabel } from "./types
 import type { ModelInfo } from "../eos/types.js";
 import {
   dPdRho,
-  dPdT,
+  dPdTAtDensity,
   gibbsOverRTFromLnZ,
   lnZOf,
   pressureFromResidual,
@@ -38,7 +38,7 @@ import {
 
 // the pressure, (dP/drho)_T and g_r/RT relations live at the model layer (eos/residualRelations.ts),
 // where models need them too; the state layer offers them with the other property formulas
-export { dPdRho, dPdT, pressureFromResidual, residualGibbsTP };
+export { dPdRho, pressureFromResidual, residualGibbsTP };
 
 /** Everything {@link assembleState} needs; the caller has already found the density. */
 export interface StateInputs {
@@ -148,7 +148,7 @@ export function assembleState(input: StateInputs): FluidState {
   const lnPhi = lnPhiOf(d, parts.lnZ);
   // derivatives and heat capacities
   const dPdr = dPdRho(T, d, Rg);
-  const dPdT = rho * Rg * (1 + d.aD + d.aDT);
+  const dPdT = dPdTAtDensity(rho, d, Rg);
   const cvRes = -Rg * (2 * d.aT + d.aTT);
   const cv = ig.cv + cvRes;
   const cp = cv + (T * dPdT * dPdT) / (rho * rho * dPdr);
