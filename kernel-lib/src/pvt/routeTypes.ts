@@ -55,7 +55,7 @@ export interface PvtRouteOptions {
   gasConstant?: number;
   /**
    * Called as the analysis advances (browser-safe: a plain callback). The Node side shows it with
-   * the progress module (`pvtProgress()` of progress/, used by `isochor pvt`). Default: none.
+   * the progress module (`stagedProgress()` of progress/, as `isochor pvt` does). Default: none.
    * @example departuresFromPvt(data, { onProgress: (p) => console.log(p.stage, p.done, p.total) })
    */
   onProgress?: (progress: PvtRouteProgress) => void;
