@@ -26,6 +26,8 @@ export interface BenchCase {
   readonly description: string;
   /** Target in seconds per call, when the issue sets one. */
   readonly targetSeconds?: number;
+  /** Measurement options of this case (they win over the command line's), e.g. few samples for slow calls. */
+  readonly measure?: MeasureOptions;
   setup(): () => unknown;
 }
 

@@ -86,7 +86,7 @@ function parseArgs(argv: readonly string[]): Args {
 function runWorker(name: string, samples: number): void {
   const c = allCases.find((k) => k.name === name);
   if (!c) throw new Error(`no bench case named ${name}`);
-  const timing = measure(c.setup(), { samples });
+  const timing = measure(c.setup(), { samples, ...c.measure });
   process.stdout.write(JSON.stringify(timing) + "\n");
   void consumed();
 }

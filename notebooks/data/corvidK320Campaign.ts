@@ -13,7 +13,7 @@
  */
 import { getComponent } from "../../kernel-lib/src/components/index.js";
 import { referenceFluid } from "../../kernel-lib/src/fluid/referenceFluids.js";
-import { seededRandom } from "../../kernel-lib/src/pvt/seededRandom.js";
+import { seededRandom } from "../../kernel-lib/src/numerics/seededRandom.js";
 
 /** Seed of the noise (stated in the file). */
 export const CAMPAIGN_SEED = 320;

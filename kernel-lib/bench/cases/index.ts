@@ -4,10 +4,12 @@ import { engineCases } from "./engineCases.js";
 import { referenceCases } from "./referenceCases.js";
 import { envelopeCases } from "./envelopeCases.js";
 import { flashCases } from "./flashCases.js";
+import { pvtCases } from "./pvtCases.js";
 
 export const allCases: BenchCase[] = [
   ...engineCases,
   ...referenceCases,
   ...envelopeCases,
   ...flashCases,
+  ...pvtCases,
 ];

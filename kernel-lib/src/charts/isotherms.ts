@@ -4,6 +4,7 @@
  * line at the vapour pressure and the two lobes between the model's loop and the tie line, whose
  * areas are equal at coexistence (J. C. Maxwell, Nature 11 (1875) 357-359).
  */
+import { maxOf } from "../numerics/extent.js";
 import { InputError } from "../errors.js";
 import { requireChoice, requirePositive } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
@@ -135,7 +136,7 @@ export function isothermChart(
     const cap = critical
       ? 2 * critical.pressurePa
       : saturation.length > 0
-        ? 3 * Math.max(...saturation.map((r) => r.pressurePa))
+        ? 3 * maxOf(saturation.map((r) => r.pressurePa))
         : undefined;
     if (cap !== undefined) {
       const capDisplay = toDisplay(cap, yAxis.unit);

@@ -8,6 +8,8 @@ export interface CliIo {
   readStdin(): Promise<string>;
   /** Current working directory. */
   cwd: string;
+  /** Whether stderr is a terminal (live progress lines are drawn only there). Default false. */
+  stderrIsTTY?: boolean;
 }
 
 export function nodeIo(): CliIo {
@@ -16,5 +18,6 @@ export function nodeIo(): CliIo {
     stderr: (t) => void process.stderr.write(t),
     readStdin: () => Promise.resolve(fs.readFileSync(0, "utf8")),
     cwd: process.cwd(),
+    stderrIsTTY: process.stderr.isTTY === true,
   };
 }

@@ -20,6 +20,8 @@ import { IsochorError } from "../errors.js";
 import { departuresFromPvt } from "../pvt/departuresFromPvt.js";
 import type { PvtRouteOptions, PvtRouteResult } from "../pvt/departuresFromPvt.js";
 import { readPvtCsvFile } from "../pvt/readPvtCsvFile.js";
+import { stagedProgress } from "../progress/stagedProgress.js";
+import { streamSink } from "../progress/progressSinks.js";
 import { parseCliArgs } from "./cliArgs.js";
 import type { CliIo } from "./io.js";
 
@@ -201,7 +203,19 @@ export async function pvtCommand(argv: string[], io: CliIo): Promise<number> {
   const file = path.resolve(io.cwd, args.file);
   try {
     const dataset = readPvtCsvFile(file, { molarMassKgPerMol: args.molarMassKgPerMol });
-    const result = departuresFromPvt(dataset, args.route);
+    // Progress on stderr: a live line on a terminal, one summary line per stage otherwise.
+    const progress = stagedProgress({
+      label: "isochor pvt",
+      sink: streamSink({ write: (t: string) => io.stderr(t), isTTY: io.stderrIsTTY === true }),
+    });
+    let result: PvtRouteResult;
+    try {
+      result = departuresFromPvt(dataset, { ...args.route, onProgress: progress.onProgress });
+    } catch (e) {
+      progress.fail(e);
+      throw e;
+    }
+    progress.finish();
     io.stdout(JSON.stringify(pvtResponse(result), null, 2) + "\n");
     io.stderr(summary(args.file, dataset.points.length, result));
     return 0;

@@ -9,6 +9,7 @@
  *
  * Browser-safe.
  */
+import { maxOf } from "../numerics/extent.js";
 import { isothermChart } from "../charts/isotherms.js";
 import { isothermsFromModel } from "../charts/sample/isothermsFromModel.js";
 import type { ControlValue, ExplorerDefinition } from "./explorerControls.js";
@@ -34,7 +35,7 @@ import type { SampledDome } from "../charts/sample/saturationFromModel.js";
  */
 function sampledModel(model: ResidualModel, dome: SampledDome | null): ResidualModel {
   if (Number.isFinite(model.maxDensity(300, [1]))) return model;
-  const densest = dome ? Math.max(...dome.saturation.map((r) => r.liquid.densityMolPerM3 ?? 0)) : 0;
+  const densest = dome ? maxOf(dome.saturation.map((r) => r.liquid.densityMolPerM3 ?? 0)) : 0;
   if (!(densest > 0)) {
     throw new InputError({
       input: "model",

@@ -11,6 +11,7 @@
  *
  * Browser-safe.
  */
+import { minOf } from "../numerics/extent.js";
 import { fromDisplay, resolveUnit } from "../charts/displayUnits.js";
 import { pressureEnthalpyChart } from "../charts/pressureEnthalpy.js";
 import { withProcessPath } from "../charts/processPath.js";
@@ -69,7 +70,7 @@ export function enthalpyRange(
     const hot = stateAtTP(binding, state.temperatureRangeK[1], state.pressureRangePa[0], [1]).molar
       .h;
     const cold = dome
-      ? Math.min(...dome.saturation.map((r) => r.liquid.enthalpyJPerMol ?? Infinity))
+      ? minOf(dome.saturation.map((r) => r.liquid.enthalpyJPerMol ?? Infinity))
       : stateAtTP(binding, state.temperatureRangeK[0], state.pressureRangePa[1], [1]).molar.h;
     const pad = 0.04 * (hot - cold);
     return [cold - pad, hot + pad];

@@ -9,3 +9,5 @@ export type { ProgressOptions, ProgressTracker } from "./progress.js";
 export type { ProgressSnapshot, ProgressSink } from "./progressTypes.js";
 export { progressLine, progressHtml, formatDuration } from "./formatProgress.js";
 export { streamSink, silentSink, tslabSink } from "./progressSinks.js";
+export { stagedProgress } from "./stagedProgress.js";
+export type { StagedProgress, StagedProgressOptions, StageReport } from "./stagedProgress.js";

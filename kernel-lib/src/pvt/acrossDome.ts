@@ -21,8 +21,9 @@ import { departuresFromIntegrals } from "./departureSet.js";
 import type { DepartureSet } from "./departureSet.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
 import type { IsochoreFit } from "./isochoreFit.js";
-import { cumulativeIrregular } from "./irregularQuadrature.js";
+import { cumulativeIrregular } from "../numerics/cumulativeIrregular.js";
 
+/** Measured saturation data at one temperature (Psat, its slope, the saturated densities), with uncertainties. */
 export interface SaturationData {
   /** Saturation pressure at T, Pa, and its standard uncertainty. */
   pressurePa: number;
@@ -37,6 +38,7 @@ export interface SaturationData {
   uLiquidDensityMolPerM3?: number;
 }
 
+/** A saturated state reached across the dome, with its departures and their uncertainties. */
 export interface DomeState {
   densityMolPerM3: number;
   pressurePa: number;
@@ -44,6 +46,7 @@ export interface DomeState {
   uncertainty: DepartureSet;
 }
 
+/** Result of {@link departuresAcrossDome}: the saturated vapour and liquid states. */
 export interface AcrossDomeResult {
   temperatureK: number;
   saturatedVapor: DomeState;
@@ -69,6 +72,7 @@ function extrapolate(
   return { value: quad, spread: Math.abs(quad - line) };
 }
 
+/** Departures of the saturated liquid from the vapour side through measured saturation data (see the header). */
 export function departuresAcrossDome(
   result: PvtRouteResult,
   request: { temperatureK: number; saturation: SaturationData },
@@ -166,35 +170,33 @@ export function departuresAcrossDome(
   const compute = (x: readonly number[]) => {
     const [Ps, dPs, rV, rL] = x as [number, number, number, number];
     const vRho = vNodes.map((n) => n.rho);
-    const vP = vNodes.map((_, k) => x[4 + 2 * k] as number);
-    const vS = vNodes.map((_, k) => x[5 + 2 * k] as number);
+    const vP = vNodes.map((_, k) => x[4 + 2 * k]);
+    const vS = vNodes.map((_, k) => x[5 + 2 * k]);
     const lRho = lNodes.map((n) => n.rho);
-    const lP = lNodes.map((_, k) => x[4 + 2 * nV + 2 * k] as number);
-    const lS = lNodes.map((_, k) => x[5 + 2 * nV + 2 * k] as number);
+    const lP = lNodes.map((_, k) => x[4 + 2 * nV + 2 * k]);
+    const lS = lNodes.map((_, k) => x[5 + 2 * nV + 2 * k]);
     const fA = (rho: number, P: number) => (P - rho * R * T) / (rho * rho);
     const fS = (rho: number, S: number) => (rho * R - S) / (rho * rho);
     // Vapour: last node -> rho_V.
-    const fSv = vRho.map((r, k) => fS(r, vS[k] as number));
+    const fSv = vRho.map((r, k) => fS(r, vS[k]));
     const exV = extrapolate(vRho, fSv, rV);
     const qAv = cumulativeIrregular(
       [...vRho, rV],
-      [...vRho.map((r, k) => fA(r, vP[k] as number)), fA(rV, Ps)],
+      [...vRho.map((r, k) => fA(r, vP[k])), fA(rV, Ps)],
     );
     const qSv = cumulativeIrregular([...vRho, rV], [...fSv, exV.value]);
-    const aV =
-      (last.residual.a as number) + (qAv.values[nV] as number) - (qAv.values[nV - 1] as number);
-    const sV =
-      (last.residual.s as number) + (qSv.values[nV] as number) - (qSv.values[nV - 1] as number);
+    const aV = last.residual.a + qAv.values[nV] - qAv.values[nV - 1];
+    const sV = last.residual.s + qSv.values[nV] - qSv.values[nV - 1];
     // Across the dome.
     const dv = 1 / rV - 1 / rL;
     const aL = aV + Ps * dv - R * T * Math.log(rL / rV);
     const sL = sV - dPs * dv + R * Math.log(rL / rV);
     // Liquid: rho_L -> nodes.
-    const fSl = lRho.map((r, k) => fS(r, lS[k] as number));
+    const fSl = lRho.map((r, k) => fS(r, lS[k]));
     const exL = extrapolate(lRho.slice(0, 3).reverse(), fSl.slice(0, 3).reverse(), rL);
     const qAl = cumulativeIrregular(
       [rL, ...lRho],
-      [fA(rL, Ps), ...lRho.map((r, k) => fA(r, lP[k] as number))],
+      [fA(rL, Ps), ...lRho.map((r, k) => fA(r, lP[k]))],
     );
     const qSl = cumulativeIrregular([rL, ...lRho], [exL.value, ...fSl]);
     const states = [
@@ -202,9 +204,9 @@ export function departuresAcrossDome(
       { rho: rL, P: Ps, a: aL, s: sL },
       ...lRho.map((r, k) => ({
         rho: r,
-        P: lP[k] as number,
-        a: aL + (qAl.values[k + 1] as number),
-        s: sL + (qSl.values[k + 1] as number),
+        P: lP[k],
+        a: aL + qAl.values[k + 1],
+        s: sL + qSl.values[k + 1],
       })),
     ];
     return {
@@ -221,12 +223,12 @@ export function departuresAcrossDome(
   const base = sets(x0);
   const variance = base.map(() => ({ a: 0, s: 0, u: 0, h: 0, g: 0, lnPhi: 0 }) as DepartureSet);
   for (let i = 0; i < x0.length; i++) {
-    if (!((u0[i] as number) > 0)) continue;
+    if (!(u0[i] > 0)) continue;
     const x = x0.slice();
-    x[i] = (x[i] as number) + (u0[i] as number);
+    x[i] = x[i] + u0[i];
     sets(x).forEach((d, k) => {
-      const v = variance[k] as DepartureSet;
-      const b = base[k] as DepartureSet;
+      const v = variance[k];
+      const b = base[k];
       for (const key of ["a", "s", "u", "h", "g", "lnPhi"] as const)
         v[key] += (d[key] - b[key]) ** 2;
     });
@@ -238,7 +240,7 @@ export function departuresAcrossDome(
   const widthV = sat.vaporDensityMolPerM3 - last.densityMolPerM3;
   const exSv = (nominal.extrapolationS.vapor * widthV) / 2;
   const states: DomeState[] = nominal.states.map((st, k) => {
-    const v = variance[k] as DepartureSet;
+    const v = variance[k];
     const isLiquidNode = k >= 2;
     const widthL = isLiquidNode ? st.rho - sat.liquidDensityMolPerM3 : 0;
     const exSl =
@@ -247,14 +249,14 @@ export function departuresAcrossDome(
             Math.min(widthL, lNodes[0] ? lNodes[0].rho - sat.liquidDensityMolPerM3 : 0)) /
           2
         : 0;
-    const qa = isLiquidNode ? (nominal.quad.a[k - 1] as number) : 0;
-    const qs = isLiquidNode ? (nominal.quad.s[k - 1] as number) : 0;
+    const qa = isLiquidNode ? nominal.quad.a[k - 1] : 0;
+    const qs = isLiquidNode ? nominal.quad.s[k - 1] : 0;
     const sysU = Math.hypot(startA, T * startS, T * exSv, T * exSl, qa + T * qs);
     const sysG = Math.hypot(startA, qa);
     return {
       densityMolPerM3: st.rho,
       pressurePa: st.P,
-      residual: base[k] as DepartureSet,
+      residual: base[k],
       uncertainty: {
         a: Math.hypot(Math.sqrt(v.a), startA, qa),
         s: Math.hypot(Math.sqrt(v.s), startS, exSv, exSl, qs),
@@ -267,8 +269,8 @@ export function departuresAcrossDome(
   });
   return {
     temperatureK: T,
-    saturatedVapor: states[0] as DomeState,
-    saturatedLiquid: states[1] as DomeState,
+    saturatedVapor: states[0],
+    saturatedLiquid: states[1],
     liquid: states.slice(2),
   };
 }

@@ -23,7 +23,7 @@ import { integrateAdaptive } from "../numerics/index.js";
 import { departuresFromIntegrals } from "./departureSet.js";
 import type { DepartureSet } from "./departureSet.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
-import { cumulativeIrregular } from "./irregularQuadrature.js";
+import { cumulativeIrregular } from "../numerics/cumulativeIrregular.js";
 
 /** Residual isochoric heat capacity along the isochore, J/(mol K). */
 export type ResidualCvInput =
@@ -37,6 +37,7 @@ export type ResidualCvInput =
       uCvResidualJPerMolK?: readonly number[];
     };
 
+/** What departuresAroundCriticalPoint needs: the route result, the target state and a residual cv. */
 export interface AroundCriticalPointRequest {
   /** Target temperature, K (below Tc, where the isotherm route stopped). */
   temperatureK: number;
@@ -47,6 +48,7 @@ export interface AroundCriticalPointRequest {
   cvResidual: ResidualCvInput;
 }
 
+/** Result of {@link departuresAroundCriticalPoint}: the departures at the target and their uncertainties. */
 export interface AroundCriticalPointResult {
   temperatureK: number;
   densityMolPerM3: number;
@@ -59,6 +61,7 @@ export interface AroundCriticalPointResult {
   path: string;
 }
 
+/** Departures below the critical temperature reached down an isochore with a residual cv (see the header). */
 export function departuresAroundCriticalPoint(
   result: PvtRouteResult,
   request: AroundCriticalPointRequest,
@@ -117,8 +120,8 @@ export function departuresAroundCriticalPoint(
     quadErr = a.errorEstimate;
   } else {
     const ts = cv.temperatureK;
-    const lo = ts[0] as number;
-    const hi = ts[ts.length - 1] as number;
+    const lo = ts[0];
+    const hi = ts[ts.length - 1];
     if (!(ts.length >= 3 && lo <= Math.min(T, Tv) + 1e-9 && hi >= Math.max(T, Tv) - 1e-9)) {
       throw new InputError({
         input: "cvResidual.temperatureK",
@@ -132,26 +135,26 @@ export function departuresAroundCriticalPoint(
       const interp = (x: number) => {
         // cumulative value at x by the trapezoid on the bracketing interval (x is usually a node)
         let k = 0;
-        while (k < ts.length - 2 && (ts[k + 1] as number) < x) k++;
-        const x0 = ts[k] as number;
-        const x1 = ts[k + 1] as number;
-        const f0 = values[k] as number;
-        const f1 = values[k + 1] as number;
+        while (k < ts.length - 2 && ts[k + 1] < x) k++;
+        const x0 = ts[k];
+        const x1 = ts[k + 1];
+        const f0 = values[k];
+        const f1 = values[k + 1];
         const fx = f0 + ((f1 - f0) * (x - x0)) / (x1 - x0);
-        return (c.values[k] as number) + 0.5 * (x - x0) * (f0 + fx);
+        return c.values[k] + 0.5 * (x - x0) * (f0 + fx);
       };
-      return { integral: interp(Tv) - interp(T), error: c.errorEstimates[ts.length - 1] as number };
+      return { integral: interp(Tv) - interp(T), error: c.errorEstimates[ts.length - 1] };
     };
     const f = cv.cvResidualJPerMolK;
     const r1 = at(f);
-    const r2 = at(f.map((v, k) => v / (ts[k] as number)));
+    const r2 = at(f.map((v, k) => v / ts[k]));
     intCv = r1.integral;
     intCvOverT = r2.integral;
     quadErr = r1.error;
     if (cv.uCvResidualJPerMolK) {
       const u = cv.uCvResidualJPerMolK;
       uIntCv = Math.abs(at(u).integral);
-      uIntCvOverT = Math.abs(at(u.map((v, k) => v / (ts[k] as number))).integral);
+      uIntCvOverT = Math.abs(at(u.map((v, k) => v / ts[k])).integral);
     }
   }
   const u = start.residual.u - intCv;

@@ -13,6 +13,7 @@ import type { Dimension } from "../units/index.js";
 /** The physical quantity a column holds. */
 export type ColumnQuantity = "temperature" | "pressure" | "density" | "volume";
 
+/** An affine conversion to SI: value_SI = scale * value + offset. */
 export interface AffineToSI {
   /** Multiply by this ... */
   scale: number;

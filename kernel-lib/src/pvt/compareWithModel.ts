@@ -5,10 +5,12 @@
  */
 import { R as CODATA_R } from "../constants.js";
 import type { ResidualModel } from "../eos/types.js";
-import { DEPARTURE_KEYS, departuresFromReduced } from "./departureSet.js";
-import type { DepartureSet } from "./departureSet.js";
+import { pressureFromResidual } from "../state/properties.js";
+import { departuresFromReduced } from "./departureSet.js";
+import type { DepartureKey, DepartureSet } from "./departureSet.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
 
+/** One reported state: data and model departures, their difference and its z-score. */
 export interface ModelComparisonPoint {
   temperatureK: number;
   densityMolPerM3: number;
@@ -22,6 +24,12 @@ export interface ModelComparisonPoint {
   pressureDifferencePa: number;
 }
 
+/**
+ * Compares the data route's departures with a model's at the same (T, rho).
+ * @param result the route's result (departuresFromPvt)
+ * @param model any ResidualModel of the library
+ * @param x mole fractions for the model. Default [1] (a pure fluid)
+ */
 export function compareWithModel(
   result: PvtRouteResult,
   model: ResidualModel,
@@ -34,15 +42,10 @@ export function compareWithModel(
     for (const s of iso.states) {
       const d = model.residual(t, s.densityMolPerM3, x);
       const m = departuresFromReduced(t, d, R);
-      const diff = Object.fromEntries(
-        DEPARTURE_KEYS.map((k) => [k, s.residual[k] - m[k]]),
-      ) as unknown as DepartureSet;
-      const z = Object.fromEntries(
-        DEPARTURE_KEYS.map((k) => [
-          k,
-          s.uncertainty[k] > 0 ? diff[k] / s.uncertainty[k] : Number.NaN,
-        ]),
-      ) as unknown as DepartureSet;
+      const diff = mapDepartures((k) => s.residual[k] - m[k]);
+      const z = mapDepartures((k) =>
+        s.uncertainty[k] > 0 ? diff[k] / s.uncertainty[k] : Number.NaN,
+      );
       out.push({
         temperatureK: t,
         densityMolPerM3: s.densityMolPerM3,
@@ -50,9 +53,14 @@ export function compareWithModel(
         model: m,
         difference: diff,
         z,
-        pressureDifferencePa: s.densityMolPerM3 * R * t * (1 + d.aD) - s.pressurePa,
+        pressureDifferencePa: pressureFromResidual(t, s.densityMolPerM3, d.aD, R) - s.pressurePa,
       });
     }
   }
   return out;
+}
+
+/** A departure set whose every entry comes from `f`. */
+function mapDepartures(f: (key: DepartureKey) => number): DepartureSet {
+  return { a: f("a"), s: f("s"), u: f("u"), h: f("h"), g: f("g"), lnPhi: f("lnPhi") };
 }

@@ -16,6 +16,7 @@ import {
 } from "./departureChartParts.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
 
+/** Options of {@link departureBandChart}. */
 export interface DepartureBandChartOptions {
   /** Which residual property. Default "h". */
   quantity?: "a" | "s" | "u" | "h" | "g";
@@ -37,6 +38,7 @@ const NAMES = {
   h: "enthalpy",
   g: "Gibbs energy",
 };
+/** A Vega-Lite chart of one departure against density with its uncertainty band, per isotherm. */
 export function departureBandChart(
   result: PvtRouteResult,
   options: DepartureBandChartOptions = {},

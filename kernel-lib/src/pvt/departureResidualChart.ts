@@ -15,6 +15,7 @@ import {
 } from "./departureChartParts.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
 
+/** Options of {@link departureResidualChart}. */
 export interface DepartureResidualChartOptions {
   /** Which residual property. Default "h". */
   quantity?: "a" | "s" | "u" | "h" | "g";
@@ -26,6 +27,7 @@ export interface DepartureResidualChartOptions {
   height?: number;
 }
 
+/** A Vega-Lite chart of the data-minus-model differences in units of their uncertainty. */
 export function departureResidualChart(
   result: PvtRouteResult,
   comparison: readonly ModelComparisonPoint[],

@@ -67,4 +67,8 @@ export function departuresFromReduced(
   };
 }
 
+/** The entries of a DepartureSet, in the order of the route's flattened values. */
 export const DEPARTURE_KEYS = ["a", "s", "u", "h", "g", "lnPhi"] as const;
+
+/** One entry name of a DepartureSet. */
+export type DepartureKey = (typeof DEPARTURE_KEYS)[number];

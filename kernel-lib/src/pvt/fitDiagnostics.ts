@@ -5,10 +5,11 @@
  * than 2 degrees of freedom per coefficient (too sparse for the order); a condition number above
  * 1e8 (coefficients ill-determined; lower the order or widen the range).
  */
-import { runsTest } from "./runsTest.js";
-import type { RunsTestResult } from "./runsTest.js";
-import type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
+import { runsTest } from "../numerics/runsTest.js";
+import type { RunsTestResult } from "../numerics/runsTest.js";
+import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
+/** Quality of one weighted fit: chi-square, runs test, worst residuals, recommendations. */
 export interface FitDiagnostics {
   /** What was fitted, e.g. "isochore 5012.3 mol/m3" or "surface". */
   readonly subject: string;

@@ -6,20 +6,27 @@
  */
 import { R } from "../constants.js";
 import { InputError } from "../errors.js";
+import { extent } from "../numerics/extent.js";
 import { fitDiagnostics } from "./fitDiagnostics.js";
 import type { FitDiagnostics } from "./fitDiagnostics.js";
-import { aicc } from "./selectByAicc.js";
+import { aicc } from "../numerics/aicc.js";
 import { surfaceBasis } from "./virialSurface.js";
 import type { VirialSurface } from "./virialSurface.js";
-import { weightedLeastSquares } from "./weightedLeastSquares.js";
-import type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
+import {
+  reduceLeastSquares,
+  weightedLeastSquaresColumns,
+} from "../numerics/weightedLeastSquares.js";
+import type { ReducedLeastSquares } from "../numerics/weightedLeastSquares.js";
+import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
+/** One point of a surface fit: T (K), density (mol/m3), pressure (Pa). */
 export interface SurfacePoint {
   temperatureK: number;
   densityMolPerM3: number;
   pressurePa: number;
 }
 
+/** Options of {@link fitVirialSurface}. */
 export interface FitVirialSurfaceOptions {
   /** Fixed number of density terms (powers rho^1..rho^n). Default: chosen by AICc. */
   densityTerms?: number;
@@ -33,6 +40,7 @@ export interface FitVirialSurfaceOptions {
   gasConstant?: number;
 }
 
+/** Result of {@link fitVirialSurface}: the surface, the underlying fit and its diagnostics. */
 export interface VirialSurfaceFit {
   surface: VirialSurface;
   fit: WeightedLeastSquaresResult;
@@ -61,13 +69,12 @@ export function fitVirialSurface(
     });
   }
   const temperatureScale = points.reduce((s, p) => s + p.temperatureK, 0) / n;
-  const densityScale = Math.max(...points.map((p) => p.densityMolPerM3));
+  const densityScale = extent(points.map((p) => p.densityMolPerM3)).max;
+  const temperatures = extent(points.map((p) => p.temperatureK));
   const y = points.map((p) => p.pressurePa / (p.densityMolPerM3 * gas * p.temperatureK) - 1);
   const scaleKnown = sigmaPa !== undefined;
   const sigma = points.map(
-    (p, i) =>
-      (sigmaPa ? (sigmaPa[i] as number) : p.pressurePa) /
-      (p.densityMolPerM3 * gas * p.temperatureK),
+    (p, i) => (sigmaPa ? sigmaPa[i] : p.pressurePa) / (p.densityMolPerM3 * gas * p.temperatureK),
   );
   // Unit weights in P when unknown: sigma_y = P/(rho R T) ~ Z, i.e. relative pressure weights.
   const candidates: [number, number][] = [];
@@ -77,24 +84,47 @@ export function fitVirialSurface(
     for (let t = options.temperatureTerms ?? 1; t <= tMax; t++) candidates.push([d, t]);
   }
   const distinctT = new Set(points.map((p) => p.temperatureK.toPrecision(8))).size;
-  let best: { score: number; d: number; t: number; fit: WeightedLeastSquaresResult } | undefined;
+  // The "aD" basis of the largest shape, by columns (delta^i tau^j, i = 1..dMax outer, j inner, as
+  // surfaceBasis builds them): every candidate shape is a subset of its columns.
+  const basis = Array.from({ length: dMax * tMax }, () => new Float64Array(n));
+  points.forEach((p, r) => {
+    const row = surfaceBasis(
+      { densityTerms: dMax, temperatureTerms: tMax, densityScale, temperatureScale },
+      "aD",
+      p.temperatureK,
+      p.densityMolPerM3,
+    );
+    for (let k = 0; k < row.length; k++) basis[k][r] = row[k];
+  });
+  // With many points and several candidates, the candidates are compared on the problem reduced
+  // by one QR of the largest basis (reduceLeastSquares: the same chi-square, n rows instead of
+  // one factorisation of all points per candidate); the chosen one is then fitted to all points.
+  const choosing = candidates.length > 1;
+  const reduced =
+    choosing && n >= REDUCE_FROM_POINTS ? reduceIfPossible(basis, y, sigma) : undefined;
+  const unitSigma = reduced ? new Float64Array(reduced.qtb.length).fill(1) : undefined;
+  const columnsOf = (from: readonly Float64Array[], d: number, t: number): Float64Array[] => {
+    const design: Float64Array[] = [];
+    for (let i = 1; i <= d; i++) for (let j = 0; j < t; j++) design.push(from[(i - 1) * tMax + j]);
+    return design;
+  };
+  let best: { score: number; d: number; t: number } | undefined;
   let lastError: unknown;
   for (const [d, t] of candidates) {
     if (t > distinctT || d * t > n - 2) continue;
-    const shape = { densityTerms: d, temperatureTerms: t, densityScale, temperatureScale };
-    const design = points.map((p) => surfaceBasis(shape, "aD", p.temperatureK, p.densityMolPerM3));
-    let fit: WeightedLeastSquaresResult;
+    let chiSquare: number;
     try {
-      fit = weightedLeastSquares(design, y, sigma);
+      chiSquare =
+        reduced && unitSigma
+          ? weightedLeastSquaresColumns(columnsOf(reduced.columns, d, t), reduced.qtb, unitSigma)
+              .chiSquare + reduced.residualSquare
+          : weightedLeastSquaresColumns(columnsOf(basis, d, t), y, sigma).chiSquare;
     } catch (e) {
       lastError = e;
       continue;
     }
-    const score =
-      options.densityTerms !== undefined && options.temperatureTerms !== undefined
-        ? 0
-        : aicc(fit.chiSquare, n, d * t, scaleKnown);
-    if (!best || score < best.score) best = { score, d, t, fit };
+    const score = choosing ? aicc(chiSquare, n, d * t, scaleKnown) : 0;
+    if (!best || score < best.score) best = { score, d, t };
   }
   if (!best) {
     throw new InputError({
@@ -106,7 +136,8 @@ export function fitVirialSurface(
         (lastError instanceof Error ? ` (${lastError.message})` : ""),
     });
   }
-  const { d, t, fit } = best;
+  const fit = weightedLeastSquaresColumns(columnsOf(basis, best.d, best.t), y, sigma);
+  const { d, t } = best;
   const dof = fit.degreesOfFreedom;
   const red = dof > 0 ? fit.chiSquare / dof : 1;
   const factor = scaleKnown ? Math.max(1, red) : dof > 0 ? red : 1;
@@ -120,7 +151,7 @@ export function fitVirialSurface(
   const diagnostics = fitDiagnostics(
     `surface fit (${d} density x ${t} temperature terms)`,
     fit,
-    order.map((i) => fit.normalizedResiduals[i] as number),
+    order.map((i) => fit.normalizedResiduals[i]),
     scaleKnown ? "stated" : "from-scatter",
   );
   const surface: VirialSurface = {
@@ -131,8 +162,8 @@ export function fitVirialSurface(
     coefficients: fit.coefficients,
     covariance,
     range: {
-      minTemperatureK: Math.min(...points.map((p) => p.temperatureK)),
-      maxTemperatureK: Math.max(...points.map((p) => p.temperatureK)),
+      minTemperatureK: temperatures.min,
+      maxTemperatureK: temperatures.max,
       maxDensityMolPerM3: densityScale,
     },
   };
@@ -141,7 +172,23 @@ export function fitVirialSurface(
     fit,
     diagnostics,
     pressureResidualsPa: points.map(
-      (p, i) => (fit.residuals[i] as number) * p.densityMolPerM3 * gas * p.temperatureK,
+      (p, i) => fit.residuals[i] * p.densityMolPerM3 * gas * p.temperatureK,
     ),
   };
+}
+
+/** From this many points on, AICc compares the candidates on the QR-reduced problem. */
+const REDUCE_FROM_POINTS = 2000;
+
+/** The reduced problem, or undefined when the largest basis cannot be factorised (then every candidate is fitted to all points). */
+function reduceIfPossible(
+  basis: readonly Float64Array[],
+  y: readonly number[],
+  sigma: readonly number[],
+): ReducedLeastSquares | undefined {
+  try {
+    return reduceLeastSquares(basis, y, sigma);
+  } catch {
+    return undefined;
+  }
 }

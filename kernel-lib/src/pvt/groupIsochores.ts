@@ -12,24 +12,23 @@ export interface IsochoreGroup {
   members: number[];
 }
 
+/** Groups point indices by density (see the header); groups come in ascending density. */
 export function groupIsochores(
   densities: readonly number[],
   relativeTolerance: number,
 ): IsochoreGroup[] {
-  const order = densities
-    .map((_, i) => i)
-    .sort((a, b) => (densities[a] as number) - (densities[b] as number));
+  const order = densities.map((_, i) => i).sort((a, b) => densities[a] - densities[b]);
   const groups: IsochoreGroup[] = [];
   let current: number[] = [];
   let first = 0;
   const flush = () => {
     if (current.length > 0) {
-      const mean = current.reduce((s, i) => s + (densities[i] as number), 0) / current.length;
+      const mean = current.reduce((s, i) => s + densities[i], 0) / current.length;
       groups.push({ densityMolPerM3: mean, members: current });
     }
   };
   for (const i of order) {
-    const d = densities[i] as number;
+    const d = densities[i];
     if (current.length > 0 && d <= first * (1 + relativeTolerance)) current.push(i);
     else {
       flush();
@@ -46,22 +45,20 @@ export function clusterTemperatures(
   temperaturesK: readonly number[],
   toleranceK: number,
 ): { temperatureK: number; members: number[] }[] {
-  const order = temperaturesK
-    .map((_, i) => i)
-    .sort((a, b) => (temperaturesK[a] as number) - (temperaturesK[b] as number));
+  const order = temperaturesK.map((_, i) => i).sort((a, b) => temperaturesK[a] - temperaturesK[b]);
   const out: { temperatureK: number; members: number[] }[] = [];
   let cur: number[] = [];
   const flush = () => {
     if (cur.length > 0)
       out.push({
-        temperatureK: cur.reduce((s, i) => s + (temperaturesK[i] as number), 0) / cur.length,
+        temperatureK: cur.reduce((s, i) => s + temperaturesK[i], 0) / cur.length,
         members: cur,
       });
   };
   for (const i of order) {
-    const t = temperaturesK[i] as number;
+    const t = temperaturesK[i];
     const last = cur[cur.length - 1];
-    if (last !== undefined && t - (temperaturesK[last] as number) <= toleranceK) cur.push(i);
+    if (last !== undefined && t - temperaturesK[last] <= toleranceK) cur.push(i);
     else {
       flush();
       cur = [i];

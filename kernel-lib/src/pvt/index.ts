@@ -8,10 +8,10 @@ export { pvtFromArrays } from "./pvtFromArrays.js";
 export type { PvtArrays, PvtFromArraysOptions } from "./pvtFromArrays.js";
 export { columnUnitToSI } from "./columnUnits.js";
 export type { ColumnQuantity, AffineToSI } from "./columnUnits.js";
-// Generic helpers (weightedLeastSquares, seededRandom, runsTest, cumulativeIrregular,
-// familyThreshold) are imported by path, not re-exported, so they cannot collide with numerics/.
-export type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
-export type { RunsTestResult } from "./runsTest.js";
+// The generic helpers live in numerics/ (weightedLeastSquares, seededRandom, runsTest,
+// cumulativeIrregular, aicc), imported by path; familyThreshold stays here.
+export type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
+export type { RunsTestResult } from "../numerics/runsTest.js";
 export type { FitDiagnostics } from "./fitDiagnostics.js";
 export { fitIsochore } from "./isochoreFit.js";
 export type { IsochoreFit, IsochoreFitOptions } from "./isochoreFit.js";
@@ -33,12 +33,15 @@ export type {
   IsothermDepartures as PvtIsothermIntegrals,
   IntegrateIsothermOptions as PvtIntegrateIsothermOptions,
 } from "./integrateIsotherm.js";
-export { departuresFromPvt, virialFromSurface } from "./departuresFromPvt.js";
+export { departuresFromPvt } from "./departuresFromPvt.js";
+export { virialFromSurface } from "./virialSurface.js";
 export type {
   PvtRouteOptions,
   PvtRouteResult,
   PvtIsotherm,
   PvtState,
+  PvtRouteProgress,
+  PvtRouteStage,
 } from "./departuresFromPvt.js";
 export type { DepartureSet as PvtDepartureSet } from "./departureSet.js";
 export type { PvtDiagnostic } from "./pvtDiagnostic.js";

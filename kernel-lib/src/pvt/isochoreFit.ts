@@ -4,13 +4,16 @@
  * by AICc (selectByAicc.ts) unless fixed. Gives P and the isochoric slope (dP/dT)_rho with their
  * standard uncertainties from the coefficient covariance (JCGM 100:2008 eq. 13).
  */
+import { powerRow } from "../numerics/powerRow.js";
 import { InputError } from "../errors.js";
+import { extent } from "../numerics/extent.js";
 import { fitDiagnostics } from "./fitDiagnostics.js";
 import type { FitDiagnostics } from "./fitDiagnostics.js";
-import { aicc } from "./selectByAicc.js";
-import { weightedLeastSquares } from "./weightedLeastSquares.js";
-import type { WeightedLeastSquaresResult } from "./weightedLeastSquares.js";
+import { aicc } from "../numerics/aicc.js";
+import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
+import type { WeightedLeastSquaresResult } from "../numerics/weightedLeastSquares.js";
 
+/** Options of {@link fitIsochore}. */
 export interface IsochoreFitOptions {
   /** Fixed polynomial order (1 = linear in T). Default: chosen by AICc up to `maxOrder`. */
   order?: number;
@@ -25,6 +28,7 @@ export interface IsochoreFitOptions {
   minOrder?: number;
 }
 
+/** A smoothing fit P(T) along one isochore (see the header). */
 export interface IsochoreFit {
   /** The isochore's density, mol/m3. */
   readonly densityMolPerM3: number;
@@ -52,8 +56,24 @@ export interface IsochoreFit {
     uPressurePa: number;
     uSlopePaPerK: number;
   };
+  /**
+   * Covariance of the smoothed P and (dP/dT)_rho at T from the (scaled) coefficient covariance:
+   * variances Pa2 and Pa2/K2, and their covariance Pa2/K.
+   */
+  covarianceAt(temperatureK: number): { pressure: number; slope: number; cross: number };
+  /**
+   * The same fit (same order and weights) with every pressure moved by `deltaPressuresPa` (in
+   * the order the points were given): the fit is linear in the pressures, so this is the fitted
+   * polynomial plus the fit of the deltas, C X^T W delta (C the unscaled covariance), without a
+   * new factorisation. Returns P and (dP/dT)_rho of the moved fit at T.
+   */
+  shifted(deltaPressuresPa: ArrayLike<number>): (temperatureK: number) => {
+    pressurePa: number;
+    slopePaPerK: number;
+  };
 }
 
+/** Fits P(T) on one isochore; `sigmaPa` undefined means unit weights with the scale from the scatter. */
 export function fitIsochore(
   densityMolPerM3: number,
   temperaturesK: readonly number[],
@@ -71,8 +91,7 @@ export function fitIsochore(
       received: distinct,
     });
   }
-  const tMin = Math.min(...temperaturesK);
-  const tMax = Math.max(...temperaturesK);
+  const { min: tMin, max: tMax } = extent(temperaturesK);
   const mid = 0.5 * (tMin + tMax);
   const half = 0.5 * (tMax - tMin);
   const xs = temperaturesK.map((t) => (t - mid) / half);
@@ -87,7 +106,7 @@ export function fitIsochore(
   let best: { score: number; order: number; fit: WeightedLeastSquaresResult } | undefined;
   for (const order of orders) {
     if (order + 1 > distinct) continue;
-    const design = xs.map((x) => Array.from({ length: order + 1 }, (_, j) => x ** j));
+    const design = xs.map((x) => powerRow(x, order + 1));
     const fit = weightedLeastSquares(design, pressuresPa, sigma);
     const raw = aicc(fit.chiSquare, n, order + 1, scaleKnown);
     // Infinity when n - k - 1 <= 0: keep the lowest such order only as a last resort.
@@ -110,11 +129,11 @@ export function fitIsochore(
   const cov = fit.covariance.map((r) => r.map((v) => v * factor));
   const sortIdx = temperaturesK
     .map((_, i) => i)
-    .sort((a, b) => (temperaturesK[a] as number) - (temperaturesK[b] as number));
+    .sort((a, b) => temperaturesK[a] - temperaturesK[b]);
   const diagnostics = fitDiagnostics(
     `isochore ${densityMolPerM3.toPrecision(6)} mol/m3 (order ${order})`,
     fit,
-    sortIdx.map((i) => fit.normalizedResiduals[i] as number),
+    sortIdx.map((i) => fit.normalizedResiduals[i]),
     scaleKnown ? "stated" : "from-scatter",
   );
   const c = fit.coefficients;
@@ -140,17 +159,63 @@ export function fitIsochore(
       const quad = (g: number[]) => {
         let v = 0;
         for (let i = 0; i < g.length; i++)
-          for (let j = 0; j < g.length; j++)
-            v += (g[i] as number) * ((cov[i] as number[])[j] as number) * (g[j] as number);
+          for (let j = 0; j < g.length; j++) v += g[i] * cov[i][j] * g[j];
         return Math.sqrt(Math.max(v, 0));
       };
       let P = 0;
       let S = 0;
       for (let j = 0; j < c.length; j++) {
-        P += (c[j] as number) * (gP[j] as number);
-        S += (c[j] as number) * (gS[j] as number);
+        P += c[j] * gP[j];
+        S += c[j] * gS[j];
       }
       return { pressurePa: P, slopePaPerK: S, uPressurePa: quad(gP), uSlopePaPerK: quad(gS) };
+    },
+    covarianceAt(temperatureK: number) {
+      const x = (temperatureK - mid) / half;
+      const gP = c.map((_, j) => x ** j);
+      const gS = c.map((_, j) => (j === 0 ? 0 : (j * x ** (j - 1)) / half));
+      let pressure = 0;
+      let slope = 0;
+      let cross = 0;
+      for (let i = 0; i < c.length; i++) {
+        for (let j = 0; j < c.length; j++) {
+          const v = cov[i][j];
+          pressure += gP[i] * v * gP[j];
+          slope += gS[i] * v * gS[j];
+          cross += gP[i] * v * gS[j];
+        }
+      }
+      return { pressure: Math.max(pressure, 0), slope: Math.max(slope, 0), cross };
+    },
+    shifted(deltaPressuresPa: ArrayLike<number>) {
+      const k = c.length;
+      const rhs = new Float64Array(k);
+      for (let i = 0; i < n; i++) {
+        const w = deltaPressuresPa[i] / (sigma[i] * sigma[i]);
+        let xj = 1;
+        for (let j = 0; j < k; j++) {
+          rhs[j] += xj * w;
+          xj *= xs[i];
+        }
+      }
+      const moved = c.slice();
+      for (let a = 0; a < k; a++) {
+        let d = 0;
+        for (let b = 0; b < k; b++) d += fit.covariance[a][b] * rhs[b];
+        moved[a] += d;
+      }
+      return (temperatureK: number) => {
+        const x = (temperatureK - mid) / half;
+        let P = 0;
+        let S = 0;
+        let xj = 1;
+        for (let j = 0; j < k; j++) {
+          P += moved[j] * xj;
+          if (j + 1 < k) S += (j + 1) * moved[j + 1] * xj;
+          xj *= x;
+        }
+        return { pressurePa: P, slopePaPerK: S / half };
+      };
     },
     curvature(temperatureK: number) {
       const x = (temperatureK - mid) / half;
@@ -158,9 +223,8 @@ export function fitIsochore(
       let v = 0;
       let C = 0;
       for (let i = 0; i < g.length; i++) {
-        C += (c[i] as number) * (g[i] as number);
-        for (let j = 0; j < g.length; j++)
-          v += (g[i] as number) * ((cov[i] as number[])[j] as number) * (g[j] as number);
+        C += c[i] * g[i];
+        for (let j = 0; j < g.length; j++) v += g[i] * cov[i][j] * g[j];
       }
       return { curvaturePaPerK2: C, uCurvaturePaPerK2: Math.sqrt(Math.max(v, 0)) };
     },

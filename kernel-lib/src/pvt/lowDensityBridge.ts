@@ -11,10 +11,12 @@
  * the fit covariance is reported apart from its truncation estimate, the change of the integral
  * when the degree is raised by one (or lowered, when the nodes do not allow more).
  */
+import { powerRow } from "../numerics/powerRow.js";
 import { SolverError } from "../errors.js";
-import { aicc } from "./selectByAicc.js";
-import { weightedLeastSquares } from "./weightedLeastSquares.js";
+import { aicc } from "../numerics/aicc.js";
+import { weightedLeastSquares } from "../numerics/weightedLeastSquares.js";
 
+/** Options of {@link lowDensityBridge}. */
 export interface BridgeOptions {
   /** Number of lowest-density nodes used. Default 5 (or all, if fewer). */
   nodes?: number;
@@ -24,6 +26,7 @@ export interface BridgeOptions {
   estimateTruncation?: boolean;
 }
 
+/** Result of {@link lowDensityBridge}. */
 export interface BridgeResult {
   /** Polynomial coefficients c0 + c1 rho + c2 rho^2 of the integrand (units of the integrand per rho^k). */
   coefficients: number[];
@@ -58,26 +61,26 @@ export function lowDensityBridge(
   const x = density.slice(0, m);
   const y = integrand.slice(0, m);
   const scaleKnown = sigma !== undefined && sigma.slice(0, m).every((s) => s > 0);
-  const s = scaleKnown ? (sigma as readonly number[]).slice(0, m) : x.map(() => 1);
-  const toDensity = x[0] as number;
-  const scale = x[m - 1] as number;
+  const s = scaleKnown ? sigma.slice(0, m) : x.map(() => 1);
+  const toDensity = x[0];
+  const scale = x[m - 1];
   const degrees = options.degree !== undefined ? [options.degree] : [0, 1, 2, 3];
   let best: { score: number; degree: number; coef: number[]; cov: number[][] } | undefined;
   const integralOf = (degree: number): { integral: number; c0: number } | undefined => {
     if (!(degree >= 0 && degree + 1 <= m)) return undefined;
-    const design = x.map((r) => Array.from({ length: degree + 1 }, (_, j) => (r / scale) ** j));
+    const design = x.map((r) => powerRow(r / scale, degree + 1));
     const c = weightedLeastSquares(design, y, s).coefficients;
     return {
       integral: c.reduce(
         (acc, cj, j) => acc + (cj / scale ** j) * (toDensity ** (j + 1) / (j + 1)),
         0,
       ),
-      c0: c[0] as number,
+      c0: c[0],
     };
   };
   for (const degree of degrees) {
     if (degree + 1 > m) continue;
-    const design = x.map((r) => Array.from({ length: degree + 1 }, (_, j) => (r / scale) ** j));
+    const design = x.map((r) => powerRow(r / scale, degree + 1));
     const fit = weightedLeastSquares(design, y, s);
     const dof = fit.degreesOfFreedom;
     const red = dof > 0 ? fit.chiSquare / dof : Number.NaN;
@@ -105,9 +108,8 @@ export function lowDensityBridge(
   let integral = 0;
   let v = 0;
   for (let i = 0; i < g.length; i++) {
-    integral += (g[i] as number) * (best.coef[i] as number);
-    for (let j = 0; j < g.length; j++)
-      v += (g[i] as number) * ((best.cov[i] as number[])[j] as number) * (g[j] as number);
+    integral += g[i] * best.coef[i];
+    for (let j = 0; j < g.length; j++) v += g[i] * best.cov[i][j] * g[j];
   }
   const other =
     options.estimateTruncation === false
@@ -115,13 +117,76 @@ export function lowDensityBridge(
       : (integralOf(best.degree + 1) ?? integralOf(best.degree - 1));
   return {
     truncation: other === undefined ? 0 : Math.abs(other.integral - integral),
-    truncationAtZero: other === undefined ? 0 : Math.abs(other.c0 - (best.coef[0] as number)),
+    truncationAtZero: other === undefined ? 0 : Math.abs(other.c0 - best.coef[0]),
     coefficients: best.coef,
-    coefficientUncertainties: best.cov.map((row, i) => Math.sqrt(Math.max(row[i] as number, 0))),
+    coefficientUncertainties: best.cov.map((row, i) => Math.sqrt(Math.max(row[i], 0))),
     integral,
     uIntegral: Math.sqrt(Math.max(v, 0)),
     toDensity,
     degree: best.degree,
     nodesUsed: m,
+  };
+}
+
+/**
+ * A bridge with its degree and weights fixed: a linear map from the integrand values at the
+ * bridge's nodes to its coefficients and integral (weighted least squares with fixed weights is
+ * linear in the data), used when the route is re-evaluated for other pressures (uncertainty
+ * propagation) without fitting again.
+ */
+export interface FrozenBridge {
+  /** The nominal fit; its uncertainty and truncation fields are kept by `apply`. */
+  readonly nominal: BridgeResult;
+  /** Weight of node j in coefficient c: coefficientWeights[c][j]. */
+  readonly coefficientWeights: readonly Float64Array[];
+  /** Weight of node j in the integral from 0 to the first node. */
+  readonly integralWeights: Float64Array;
+  /** The bridge of other integrand values (coefficients and integral; the rest from `nominal`). */
+  apply(integrand: readonly number[]): BridgeResult;
+}
+
+/**
+ * Freezes a fitted bridge: its weights from unit integrands through {@link lowDensityBridge} at the
+ * nominal degree with the same sigma.
+ * @param density node densities, ascending, mol/m3 (as given to the nominal fit)
+ * @param sigma the nominal fit's standard deviations of the integrand (undefined: unit weights)
+ * @param nominal the nominal fit
+ * @param options the nominal fit's options (`nodes`)
+ */
+export function freezeBridge(
+  density: readonly number[],
+  sigma: readonly number[] | undefined,
+  nominal: BridgeResult,
+  options: BridgeOptions = {},
+): FrozenBridge {
+  const m = nominal.nodesUsed;
+  const k = nominal.coefficients.length;
+  const coefficientWeights = Array.from({ length: k }, () => new Float64Array(m));
+  const integralWeights = new Float64Array(m);
+  for (let j = 0; j < m; j++) {
+    const unit = new Array<number>(m).fill(0);
+    unit[j] = 1;
+    const b = lowDensityBridge(density, unit, sigma, {
+      ...options,
+      degree: nominal.degree,
+      estimateTruncation: false,
+    });
+    for (let c = 0; c < k; c++) coefficientWeights[c][j] = b.coefficients[c];
+    integralWeights[j] = b.integral;
+  }
+  return {
+    nominal,
+    coefficientWeights,
+    integralWeights,
+    apply(integrand: readonly number[]): BridgeResult {
+      const coefficients = coefficientWeights.map((w) => {
+        let v = 0;
+        for (let j = 0; j < m; j++) v += w[j] * integrand[j];
+        return v;
+      });
+      let integral = 0;
+      for (let j = 0; j < m; j++) integral += integralWeights[j] * integrand[j];
+      return { ...nominal, coefficients, integral };
+    },
   };
 }

@@ -4,23 +4,34 @@
  * standard uncertainties `u(T) [K]`, `u(rho) [...]` or `u(v) [...]`, `u(P) [...]` in any unit
  * the units module knows for that dimension (columnUnits.ts). Lines starting with `#` are comments (provenance).
  *
+ * Fields are separated by commas, semicolons or tabs (options.separator, detected from the header
+ * by default); a UTF-8 byte-order mark is accepted.
+ *
  * Refused, with file, line and column and what was expected: a missing or unknown column, a
  * header without a unit, a unit that does not parse, a row with the wrong number of cells, a
  * non-numeric or empty cell, a zero or negative value (after conversion to SI), and repeats of
  * the same (T, density) whose pressures conflict. Nothing is silently dropped.
  */
+import { InputError } from "../errors.js";
 import { PvtFormatError } from "./pvtFormatError.js";
 import { columnUnitToSI, isAffineToSI } from "./columnUnits.js";
 import type { AffineToSI, ColumnQuantity } from "./columnUnits.js";
 import { settleRepeats } from "./settleRepeats.js";
-import { tokenizeCsv } from "./tokenizeCsv.js";
+import { separatorCounts, tokenizeCsv } from "./tokenizeCsv.js";
+import type { CsvSeparator } from "./tokenizeCsv.js";
 import type { PvtDataset, PvtPoint } from "./types.js";
 
+/** Options of {@link parsePvtCsv}. */
 export interface ParsePvtCsvOptions {
   /** Name shown in error messages, e.g. the file path. Default "<string>". */
   source?: string;
   /** Molar mass, kg/mol: needed only when a column is a mass density or specific volume. */
   molarMassKgPerMol?: number;
+  /**
+   * Field separator: ",", ";" or "\t" (tab). Default "auto": the one that occurs most in the
+   * header line (a comma when none does).
+   */
+  separator?: CsvSeparator;
 }
 
 type Role = "T" | "rho" | "v" | "P" | "uT" | "urho" | "uv" | "uP";
@@ -113,7 +124,16 @@ function parseHeader(
 /** Parses CSV text into an SI data set; see the file header for what is refused. */
 export function parsePvtCsv(text: string, options: ParsePvtCsvOptions = {}): PvtDataset {
   const source = options.source ?? "<string>";
-  const { rows, comments } = tokenizeCsv(text, source);
+  const separator = options.separator ?? "auto";
+  if (![",", ";", "\t", "auto"].includes(separator)) {
+    throw new InputError({
+      input: "options.separator",
+      unit: "-",
+      validRange: '",", ";", "\\t" (tab) or "auto"',
+      received: separator,
+    });
+  }
+  const { rows, comments, separator: used } = tokenizeCsv(text, source, separator);
   const headerRow = rows[0];
   if (!headerRow) {
     throw new PvtFormatError({
@@ -127,6 +147,19 @@ export function parsePvtCsv(text: string, options: ParsePvtCsvOptions = {}): Pvt
   const columns: Column[] = [];
   const byRole = new Map<Role, Column>();
   headerRow.cells.forEach((h, i) => {
+    const counts = separatorCounts(h);
+    const other = ([",", ";", "\t"] as const).find((sep) => sep !== used && counts[sep] > 0);
+    if (other !== undefined && !/\[[^\]]*$/.test(h.slice(0, h.indexOf(other)))) {
+      const name = (sep: string) => (sep === "\t" ? "tab" : JSON.stringify(sep));
+      throw new PvtFormatError({
+        source,
+        line: headerRow.line,
+        column: i + 1,
+        header: h,
+        expected: `columns separated by ${name(used)} (the separator ${separator === "auto" ? "detected in the header" : "given in options.separator"})`,
+        found: `a header cell that contains ${name(other)}: the file looks ${name(other)}-separated; pass separator: ${JSON.stringify(other)} (or "auto")`,
+      });
+    }
     const c = parseHeader(h, i, headerRow.line, source, options.molarMassKgPerMol);
     const earlier = byRole.get(c.role);
     if (earlier) {

@@ -10,16 +10,18 @@
  * uncertainties (the "effective variance" of Orear, Am. J. Phys. 50 (1982) 912), so they are
  * treated as independent per point.
  */
-import { seededRandom } from "./seededRandom.js";
+import { seededRandom } from "../numerics/seededRandom.js";
 
+/** Standard uncertainties of a propagation, one per output. */
 export interface PropagationResult {
   /** Standard uncertainty of each output. */
   standardUncertainty: number[];
   samples: number;
 }
 
+/** Monte Carlo propagation (JCGM 101): `samples` seeded replicates of the pressures through `evaluate`. */
 export function monteCarloPropagation(
-  evaluate: (pressuresPa: readonly number[]) => number[],
+  evaluate: (pressuresPa: readonly number[]) => ArrayLike<number>,
   pressuresPa: readonly number[],
   sigmaPa: readonly number[],
   samples: number,
@@ -29,18 +31,18 @@ export function monteCarloPropagation(
   let mean: number[] | undefined;
   let m2: number[] | undefined;
   for (let s = 1; s <= samples; s++) {
-    const p = pressuresPa.map((v, i) => v + (sigmaPa[i] as number) * rng.normal());
+    const p = pressuresPa.map((v, i) => v + sigmaPa[i] * rng.normal());
     const out = evaluate(p);
     if (!mean || !m2) {
-      mean = out.slice();
-      m2 = out.map(() => 0);
+      mean = Array.from(out);
+      m2 = new Array<number>(out.length).fill(0);
       continue;
     }
     // Welford's running variance (Welford, Technometrics 4 (1962) 419).
     for (let k = 0; k < out.length; k++) {
-      const d = (out[k] as number) - (mean[k] as number);
-      mean[k] = (mean[k] as number) + d / s;
-      m2[k] = (m2[k] as number) + d * ((out[k] as number) - (mean[k] as number));
+      const d = out[k] - mean[k];
+      mean[k] = mean[k] + d / s;
+      m2[k] = m2[k] + d * (out[k] - mean[k]);
     }
   }
   return {
@@ -49,21 +51,22 @@ export function monteCarloPropagation(
   };
 }
 
+/** Linearised propagation (JCGM 100 eq. 10) by one-sigma steps of every pressure (cost: one evaluation per pressure). */
 export function linearisedPropagation(
-  evaluate: (pressuresPa: readonly number[]) => number[],
+  evaluate: (pressuresPa: readonly number[]) => ArrayLike<number>,
   pressuresPa: readonly number[],
   sigmaPa: readonly number[],
-  nominal: readonly number[],
+  nominal: ArrayLike<number>,
 ): PropagationResult {
-  const acc = nominal.map(() => 0);
+  const acc = new Array<number>(nominal.length).fill(0);
   const p = pressuresPa.slice();
   for (let i = 0; i < p.length; i++) {
-    const keep = p[i] as number;
-    p[i] = keep + (sigmaPa[i] as number);
+    const keep = p[i];
+    p[i] = keep + sigmaPa[i];
     const out = evaluate(p);
     for (let k = 0; k < acc.length; k++) {
-      const d = (out[k] as number) - (nominal[k] as number);
-      acc[k] = (acc[k] as number) + d * d;
+      const d = out[k] - nominal[k];
+      acc[k] = acc[k] + d * d;
     }
     p[i] = keep;
   }

@@ -5,6 +5,7 @@
  */
 import { IsochorError } from "../errors.js";
 
+/** Where and what: the file, line, column and header of a refused cell, and what was expected. */
 export interface PvtFormatProblem {
   /** File name or "<arrays>" / "<string>" for data given in a cell. */
   source: string;
@@ -22,6 +23,7 @@ export interface PvtFormatProblem {
   hint?: string;
 }
 
+/** A refused data file, with the place and what was expected. */
 export class PvtFormatError extends IsochorError implements PvtFormatProblem {
   readonly source: string;
   readonly line: number;

@@ -15,6 +15,7 @@ import { PvtFormatError } from "./pvtFormatError.js";
 import { settleRepeats } from "./settleRepeats.js";
 import type { PvtDataset, PvtPoint } from "./types.js";
 
+/** P-V-T data given as arrays in SI (K, mol/m3, Pa), with optional standard uncertainties. */
 export interface PvtArrays {
   /** Temperatures, K. */
   temperatureK: readonly number[];
@@ -32,11 +33,13 @@ export interface PvtArrays {
   uPressurePa?: number | readonly number[];
 }
 
+/** Options of {@link pvtFromArrays}. */
 export interface PvtFromArraysOptions {
   /** Name shown in messages. Default "<arrays>". */
   source?: string;
 }
 
+/** Builds a checked data set from arrays (same checks and repeat handling as the CSV import). */
 export function pvtFromArrays(arrays: PvtArrays, options: PvtFromArraysOptions = {}): PvtDataset {
   const source = options.source ?? "<arrays>";
   const n = arrays.temperatureK?.length ?? 0;

@@ -26,9 +26,10 @@
 import { InputError } from "../errors.js";
 import type { PvtRouteResult } from "./departuresFromPvt.js";
 import type { PvtDiagnostic } from "./pvtDiagnostic.js";
-import { cumulativeIrregular } from "./irregularQuadrature.js";
+import { cumulativeIrregular } from "../numerics/cumulativeIrregular.js";
 import { lowDensityBridge } from "./lowDensityBridge.js";
 
+/** Residual isochoric heat capacity along an isochore from the P-V-T data, with uncertainties. */
 export interface ResidualCvProfile {
   temperatureK: number;
   densityMolPerM3: number[];
@@ -79,10 +80,8 @@ export function residualCvFromPvt(result: PvtRouteResult, temperatureK: number):
   const variance = nominal.map(() => 0);
   for (let k = 0; k < rho.length; k++) {
     const bumped = f.slice();
-    bumped[k] = (bumped[k] as number) + (u[k] as number);
-    integrate(bumped).forEach(
-      (v, j) => (variance[j] = (variance[j] as number) + (v - (nominal[j] as number)) ** 2),
-    );
+    bumped[k] = bumped[k] + u[k];
+    integrate(bumped).forEach((v, j) => (variance[j] = variance[j] + (v - nominal[j]) ** 2));
   }
   const diagnostics: PvtDiagnostic[] = [];
   // Fit-order part: every isochore refitted one and two orders up (where admissible; one down at the
@@ -104,7 +103,7 @@ export function residualCvFromPvt(result: PvtRouteResult, temperatureK: number):
     });
     if (!any) continue;
     integrate(integrandFrom(altCurv)).forEach(
-      (v, j) => (method[j] = Math.max(method[j] as number, Math.abs(v - (nominal[j] as number)))),
+      (v, j) => (method[j] = Math.max(method[j], Math.abs(v - nominal[j]))),
     );
   }
   if (!orderChanged) {
@@ -135,7 +134,7 @@ export function residualCvFromPvt(result: PvtRouteResult, temperatureK: number):
     temperatureK: T,
     densityMolPerM3: rho,
     cvResidualJPerMolK: nominal,
-    uCvResidualJPerMolK: uProp.map((v, j) => Math.hypot(v, method[j] as number)),
+    uCvResidualJPerMolK: uProp.map((v, j) => Math.hypot(v, method[j])),
     uPropagatedJPerMolK: uProp,
     methodJPerMolK: method,
     diagnostics,
@@ -175,8 +174,8 @@ export function checkCalorimetry(
         received: m.densityMolPerM3,
       });
     }
-    const fromPvt = profile.cvResidualJPerMolK[k] as number;
-    const uFromPvt = profile.uCvResidualJPerMolK[k] as number;
+    const fromPvt = profile.cvResidualJPerMolK[k];
+    const uFromPvt = profile.uCvResidualJPerMolK[k];
     const z = (m.cvResidualJPerMolK - fromPvt) / Math.hypot(m.uCvResidualJPerMolK, uFromPvt);
     return { measurement: m, fromPvt, uFromPvt, z };
   });

@@ -14,6 +14,7 @@ function sameState(a: PvtPoint, b: PvtPoint): boolean {
   return close(a.temperatureK, b.temperatureK) && close(a.densityMolPerM3, b.densityMolPerM3);
 }
 
+/** Keeps, sets aside or refuses repeats of the same (T, density) (see the header). */
 export function settleRepeats(
   points: readonly PvtPoint[],
   source: string,

@@ -11,6 +11,7 @@ import type { PressureModel } from "../departure/index.js";
 import type { HyperDual } from "../numerics/index.js";
 import type { VirialSurface } from "./virialSurface.js";
 
+/** Options of {@link surfacePressureModel}. */
 export interface SurfacePressureModelOptions {
   /** Model name. Default "P-V-T surface fit". */
   name?: string;
@@ -22,6 +23,7 @@ export interface SurfacePressureModelOptions {
   dataSource?: string;
 }
 
+/** The fitted surface as a pressure function P(T, rho) for the departure integrator. */
 export function surfacePressureModel(
   surface: VirialSurface,
   options: SurfacePressureModelOptions = {},
@@ -37,7 +39,7 @@ export function surfacePressureModel(
       let poly = tau.mul(0);
       let tj = tau.mul(0).add(1);
       for (let j = 0; j < temperatureTerms; j++) {
-        poly = poly.add(tj.mul(coefficients[(i - 1) * temperatureTerms + j] as number));
+        poly = poly.add(tj.mul(coefficients[(i - 1) * temperatureTerms + j]));
         tj = tj.mul(tau);
       }
       sum = sum.add(di.mul(poly));

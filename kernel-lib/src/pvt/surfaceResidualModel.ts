@@ -10,6 +10,7 @@ import type { ResultWarning } from "../errors.js";
 import { surfaceDerivatives } from "./virialSurface.js";
 import type { VirialSurface } from "./virialSurface.js";
 
+/** Options of {@link surfaceResidualModel}. */
 export interface SurfaceModelOptions {
   /** Model id. Default "pvt-surface". */
   id?: string;
@@ -23,6 +24,7 @@ export interface SurfaceModelOptions {
   gasConstant?: number;
 }
 
+/** The fitted surface as a ResidualModel (closed-form alpha_r and derivatives). */
 export function surfaceResidualModel(
   surface: VirialSurface,
   options: SurfaceModelOptions = {},

@@ -19,6 +19,7 @@
  */
 import type { ResidualDerivatives } from "../eos/types.js";
 
+/** A fitted virial-type surface (see the header): shape, scales, coefficients, covariance, range. */
 export interface VirialSurface {
   readonly densityTerms: number;
   readonly temperatureTerms: number;
@@ -84,21 +85,41 @@ export function surfaceBasis(
   return row;
 }
 
-function dot(a: readonly number[], b: readonly number[]): number {
-  let s = 0;
-  for (let k = 0; k < a.length; k++) s += (a[k] as number) * (b[k] as number);
-  return s;
-}
-
 /** Reduced residual Helmholtz derivatives of the surface (eos/types.ts convention). */
 export function surfaceDerivatives(
   s: VirialSurface,
   temperatureK: number,
   densityMolPerM3: number,
 ): ResidualDerivatives {
-  const q = (name: SurfaceQuantity) =>
-    dot(surfaceBasis(s, name, temperatureK, densityMolPerM3), s.coefficients);
-  return { a: q("a"), aD: q("aD"), aDD: q("aDD"), aT: q("aT"), aTT: q("aTT"), aDT: q("aDT") };
+  // The six rows of surfaceBasis dotted with the coefficients in one pass (same terms, same order
+  // of summation), without allocating the rows.
+  const delta = densityMolPerM3 / s.densityScale;
+  const tau = s.temperatureScale / temperatureK;
+  const c = s.coefficients;
+  let a = 0;
+  let aD = 0;
+  let aDD = 0;
+  let aT = 0;
+  let aTT = 0;
+  let aDT = 0;
+  let k = 0;
+  let di = 1;
+  for (let i = 1; i <= s.densityTerms; i++) {
+    di *= delta;
+    let tj = 1;
+    for (let j = 0; j < s.temperatureTerms; j++) {
+      const base = di * tj;
+      const ck = c[k++];
+      a += (base / i) * ck;
+      aD += base * ck;
+      aDD += base * (i - 1) * ck;
+      aT += ((-j * base) / i) * ck;
+      aTT += ((j * (j + 1) * base) / i) * ck;
+      aDT += -j * base * ck;
+      tj *= tau;
+    }
+  }
+  return { a, aD, aDD, aT, aTT, aDT };
 }
 
 /** Variance of a linear combination g . b of the coefficients. */
@@ -106,8 +127,16 @@ export function surfaceVariance(s: VirialSurface, gradient: readonly number[]): 
   let v = 0;
   for (let i = 0; i < gradient.length; i++) {
     const row = s.covariance[i] as readonly number[];
-    for (let j = 0; j < gradient.length; j++)
-      v += (gradient[i] as number) * (row[j] as number) * (gradient[j] as number);
+    for (let j = 0; j < gradient.length; j++) v += gradient[i] * row[j] * gradient[j];
   }
   return Math.max(v, 0);
+}
+
+/** k-th virial coefficient of the surface at T: sum_j b_kj tau^j / rhoScale^k (m3/mol for k = 1). */
+export function virialFromSurface(s: VirialSurface, temperatureK: number, k: number): number {
+  const tau = s.temperatureScale / temperatureK;
+  let v = 0;
+  for (let j = 0; j < s.temperatureTerms; j++)
+    v += s.coefficients[(k - 1) * s.temperatureTerms + j] * tau ** j;
+  return v / s.densityScale ** k;
 }

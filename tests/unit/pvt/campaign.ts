@@ -1,6 +1,6 @@
 /** Synthetic isochoric campaigns for the route's checks (noise-free or with seeded noise). */
 import { pvtFromArrays } from "../../../kernel-lib/src/pvt/index.js";
-import { seededRandom } from "../../../kernel-lib/src/pvt/seededRandom.js";
+import { seededRandom } from "../../../kernel-lib/src/numerics/seededRandom.js";
 import type { PvtDataset } from "../../../kernel-lib/src/pvt/index.js";
 
 export interface CampaignSpec {

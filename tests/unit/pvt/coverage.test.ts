@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { departuresFromPvt, pvtFromArrays } from "../../../kernel-lib/src/pvt/index.js";
-import { seededRandom } from "../../../kernel-lib/src/pvt/seededRandom.js";
+import { seededRandom } from "../../../kernel-lib/src/numerics/seededRandom.js";
 import { campaign, geometric, range } from "./campaign.js";
 import { departuresPR, pressurePR, secondVirialPR } from "./pengRobinsonTruth.js";
 

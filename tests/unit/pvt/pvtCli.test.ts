@@ -51,6 +51,20 @@ describe("isochor pvt", () => {
     expect(json.virial.B).toHaveLength(5);
     expect(json.diagnostics[0].code).toBe("conventions");
     expect(err.join("")).toMatch(/route "isochores", 5 isotherm/);
+    // progress: one summary line per stage on a non-terminal stderr, before the summary
+    const text = err.join("");
+    for (const stage of ["surface fit", "isochore fits", "Monte Carlo", "linearised"])
+      expect(text).toContain(`isochor pvt: ${stage}`);
+    expect(text).toMatch(/Monte Carlo[^\n]*20/);
+  });
+
+  it("reads a semicolon-separated file like the comma-separated one", async () => {
+    const a = capture(tmp);
+    const b = capture(tmp);
+    await main(["pvt", write("comma.csv", smallCsv()), "--samples", "0"], a.io);
+    const semi = smallCsv().replace(/,/g, ";");
+    expect(await main(["pvt", write("semi.csv", semi), "--samples", "0"], b.io)).toBe(0);
+    expect(JSON.parse(b.out.join(""))).toEqual(JSON.parse(a.out.join("")));
   });
 
   it.each([

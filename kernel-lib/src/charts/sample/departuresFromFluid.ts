@@ -3,6 +3,7 @@
  * state/stateAtTP, its residual h, s, u, a, g relative to the ideal gas at the same T and P
  * (`residual`) or at the same T and density (`residualTV`).
  */
+import { maxOf, minOf } from "../../numerics/extent.js";
 import { requirePositive } from "../../validate.js";
 import { saturationAtTemperature } from "../../phase/saturation.js";
 import { stateAtTP, stateAtTRho } from "../../state/stateAt.js";
@@ -58,8 +59,8 @@ export function departuresFromFluid(
     // saturated states there so the jump is drawn vertical, at the right pressure.
     if (x.length === 1) {
       const sat = tryPoint(() => saturationAtTemperature(fluid.model, T));
-      const lo = Math.min(...pressuresPa);
-      const hi = Math.max(...pressuresPa);
+      const lo = minOf(pressuresPa);
+      const hi = maxOf(pressuresPa);
       if (sat && sat.pressurePa > lo && sat.pressurePa < hi) {
         const vapor = pick(stateAtTRho(fluid, T, sat.vaporDensityMolPerM3, x));
         const liquid = pick(stateAtTRho(fluid, T, sat.liquidDensityMolPerM3, x));

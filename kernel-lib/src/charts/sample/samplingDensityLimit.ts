@@ -8,6 +8,7 @@
  * denser than that. So the limit used is `headroom` times the saturated-liquid density at the
  * model's lowest temperature: the triple point, else the low end of its published validity range.
  */
+import { maxOf } from "../../numerics/extent.js";
 import { InputError } from "../../errors.js";
 import type { ResidualModel } from "../../eos/types.js";
 import { saturationAtTemperature } from "../../phase/saturation.js";
@@ -36,7 +37,7 @@ export function modelLowestTemperatureK(model: ResidualModel): number | undefine
   const candidates = [hints.triple?.temperatureK, hints.data?.validity?.temperatureK?.min].filter(
     (t): t is number => typeof t === "number" && t > 0 && Number.isFinite(t),
   );
-  return candidates.length > 0 ? Math.max(...candidates) : undefined;
+  return candidates.length > 0 ? maxOf(candidates) : undefined;
 }
 
 /** How a sampling density limit was obtained (for messages). */

@@ -11,6 +11,7 @@
  * higher (a reference equation's triple point or the low end of its validity range: CO2's
  * 216.592 K is 0.71 Tc); the warnings say where it starts and why.
  */
+import { maxOf, minOf } from "../../numerics/extent.js";
 import { InputError, OutOfRangeError } from "../../errors.js";
 import type { ResidualModel } from "../../eos/types.js";
 import { locateCriticalPoint } from "../../phase/criticalPoint.js";
@@ -152,8 +153,8 @@ export function saturationFromModel(
   }
   if (skipped.length > 0) {
     domeWarnings.push(
-      `${skipped.length} saturation temperature(s) from ${round(Math.min(...skipped))} K to ` +
-        `${round(Math.max(...skipped))} K gave no saturation state (outside the model's range or ` +
+      `${skipped.length} saturation temperature(s) from ${round(minOf(skipped))} K to ` +
+        `${round(maxOf(skipped))} K gave no saturation state (outside the model's range or ` +
         "no convergence) and are left out of the dome.",
     );
   }

@@ -29,7 +29,7 @@
 import { InputError } from "../../errors.js";
 import { levelSumContribution } from "./levelSum.js";
 import { rotationalConstantFromMoment, wavenumberToKelvin } from "./spectroscopicUnits.js";
-import { tridiagonalEigenvalues } from "./tridiagonalEigenvalues.js";
+import { tridiagonalEigenvalues } from "../../numerics/tridiagonalEigenvalues.js";
 import type { InternalRotor, ThermoContribution } from "./types.js";
 
 /** Options of the hindered-rotor level computation. */

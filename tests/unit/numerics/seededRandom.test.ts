@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { seededRandom } from "../../../kernel-lib/src/pvt/seededRandom.js";
-import { runsTest } from "../../../kernel-lib/src/pvt/runsTest.js";
+import { seededRandom } from "../../../kernel-lib/src/numerics/seededRandom.js";
+import { runsTest } from "../../../kernel-lib/src/numerics/runsTest.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
 
 describe("seededRandom (xoshiro128**, Marsaglia polar)", () => {

@@ -5,11 +5,8 @@
  * matrices", Numer. Math. 11 (1968) 293-306 (procedure tql1); as presented in Press, Teukolsky,
  * Vetterling & Flannery, Numerical Recipes, 3rd ed. (2007), sec. 11.4 (routine tqli), eigenvalues
  * only. An off-diagonal element is treated as zero when |e_m| <= eps (|d_m| + |d_m+1|).
- *
- * Kept inside idealgas/molecular because only the hindered-rotor Hamiltonian uses it; it could
- * move to numerics/ if another area needs it.
  */
-import { InputError, SolverError } from "../../errors.js";
+import { InputError, SolverError } from "../errors.js";
 
 /** Options of the tridiagonal eigenvalue solver. */
 export interface TridiagonalEigenOptions {

@@ -7,8 +7,7 @@
  * spread the seed over the state, so any good mixer would do). Standard normal deviates by the Marsaglia polar method (Marsaglia & Bray, SIAM Rev. 6
  * (1964) 260). The same seed gives the same sequence on every platform, so a reported seed
  * reproduces a reported uncertainty exactly.
- *
- * Generic; a candidate to move to numerics/.
+
  */
 import { InputError } from "../errors.js";
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { cumulativeIrregular } from "../../../kernel-lib/src/pvt/irregularQuadrature.js";
+import { cumulativeIrregular } from "../../../kernel-lib/src/numerics/cumulativeIrregular.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
 
 describe("cumulativeIrregular", () => {

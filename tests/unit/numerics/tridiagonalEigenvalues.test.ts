@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { tridiagonalEigenvalues } from "../../../../kernel-lib/src/idealgas/molecular/tridiagonalEigenvalues.js";
-import { InputError } from "../../../../kernel-lib/src/errors.js";
+import { tridiagonalEigenvalues } from "../../../kernel-lib/src/numerics/tridiagonalEigenvalues.js";
+import { InputError } from "../../../kernel-lib/src/errors.js";
 
 describe("tridiagonalEigenvalues (implicit QL)", () => {
   it("Toeplitz tridiagonal: lambda_k = a + 2 b cos(k pi / (n + 1)) (closed form)", () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { weightedLeastSquares } from "../../../kernel-lib/src/pvt/weightedLeastSquares.js";
-import { singularValues } from "../../../kernel-lib/src/pvt/weightedLeastSquares.js";
+import { weightedLeastSquares } from "../../../kernel-lib/src/numerics/weightedLeastSquares.js";
+import { singularValues } from "../../../kernel-lib/src/numerics/singularValues.js";
 import { InputError, SolverError } from "../../../kernel-lib/src/errors.js";
 
 describe("weightedLeastSquares (Householder QR)", () => {

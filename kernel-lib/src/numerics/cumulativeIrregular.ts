@@ -60,7 +60,7 @@ export function cumulativeIrregular(
     });
   }
   for (let i = 1; i < n; i++) {
-    if (!((x[i] as number) > (x[i - 1] as number))) {
+    if (!(x[i] > x[i - 1])) {
       throw new InputError({
         input: `x[${i}]`,
         unit: "-",
@@ -72,50 +72,51 @@ export function cumulativeIrregular(
   const values = [0];
   const errors = [0];
   for (let k = 0; k < n - 1; k++) {
-    const a = x[k] as number;
-    const b = x[k + 1] as number;
-    const trap = 0.5 * (b - a) * ((f[k] as number) + (f[k + 1] as number));
-    const parts: number[] = [];
-    if (k >= 1)
-      parts.push(
-        parabolaIntegral(
-          x[k - 1] as number,
-          a,
-          b,
-          f[k - 1] as number,
-          f[k] as number,
-          f[k + 1] as number,
-          a,
-          b,
-        ),
-      );
-    if (k + 2 < n)
-      parts.push(
-        parabolaIntegral(
-          a,
-          b,
-          x[k + 2] as number,
-          f[k] as number,
-          f[k + 1] as number,
-          f[k + 2] as number,
-          a,
-          b,
-        ),
-      );
-    let piece: number;
-    let err: number;
-    if (parts.length === 2) {
-      piece = 0.5 * ((parts[0] as number) + (parts[1] as number));
-      err = 0.5 * Math.abs((parts[0] as number) - (parts[1] as number));
-    } else if (parts.length === 1) {
-      piece = parts[0] as number;
-      err = Math.abs(piece - trap);
-    } else {
-      piece = trap;
-      err = Math.abs(trap);
-    }
-    values.push((values[k] as number) + piece);
-    errors.push((errors[k] as number) + err);
+    const { piece, error } = intervalPiece(x, f, k);
+    values.push(values[k] + piece);
+    errors.push(errors[k] + error);
   }
   return { values, errorEstimates: errors };
+}
+
+/** The integral over [x_k, x_k+1] and its error estimate (see the header). */
+function intervalPiece(
+  x: ArrayLike<number>,
+  f: ArrayLike<number>,
+  k: number,
+): { piece: number; error: number } {
+  const n = x.length;
+  const a = x[k];
+  const b = x[k + 1];
+  const trap = 0.5 * (b - a) * (f[k] + f[k + 1]);
+  const left =
+    k >= 1 ? parabolaIntegral(x[k - 1], a, b, f[k - 1], f[k], f[k + 1], a, b) : undefined;
+  const right =
+    k + 2 < n ? parabolaIntegral(a, b, x[k + 2], f[k], f[k + 1], f[k + 2], a, b) : undefined;
+  if (left !== undefined && right !== undefined)
+    return { piece: 0.5 * (left + right), error: 0.5 * Math.abs(left - right) };
+  const one = left ?? right;
+  if (one !== undefined) return { piece: one, error: Math.abs(one - trap) };
+  return { piece: trap, error: Math.abs(trap) };
+}
+
+/**
+ * The rule of {@link cumulativeIrregular} as weights: the integral over interval k is
+ * sum_{q=0..3} w[4k + q] f[k - 1 + q] (weights of nodes outside the range are 0), since the rule
+ * is linear in f. For integrating many integrands on the same nodes.
+ */
+export function cumulativeIrregularWeights(x: readonly number[]): Float64Array {
+  const n = x.length;
+  const w = new Float64Array(4 * Math.max(n - 1, 0));
+  const unit = new Float64Array(n);
+  for (let k = 0; k < n - 1; k++) {
+    for (let q = 0; q < 4; q++) {
+      const j = k - 1 + q;
+      if (j < 0 || j >= n) continue;
+      unit[j] = 1;
+      w[4 * k + q] = intervalPiece(x, unit, k).piece;
+      unit[j] = 0;
+    }
+  }
+  return w;
 }
