@@ -221,9 +221,11 @@ function fluidOf(request: EvalRequest, model: Exclude<EvalRequest["model"], "ref
     if (e instanceof InputError) {
       const field = e.input.startsWith("kij")
         ? `$.${e.input}`
-        : e.input.startsWith("components[")
-          ? `$.constants`
-          : "$";
+        : /^components\[\d+\]$/.test(e.input)
+          ? `$.${e.input}`
+          : e.input.startsWith("components[")
+            ? `$.constants`
+            : "$";
       throw new RequestError(field, e.message);
     }
     if (e instanceof IsochorError) throw new RequestError("$", e.message);

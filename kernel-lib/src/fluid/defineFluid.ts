@@ -131,8 +131,20 @@ function resolveComponents(spec: FluidSpec): Component[] {
       received: spec.components,
     });
   }
-  return spec.components.map((c, i) => {
-    const base = typeof c === "string" ? getComponent(c) : c;
+  const resolved = spec.components.map((c, i): Component => {
+    const entry: unknown = c;
+    if (!(typeof entry === "string" || (isRecord(entry) && typeof entry.id === "string"))) {
+      throw new InputError({
+        input: `components[${i}]`,
+        unit: "-",
+        validRange: "a component id or name (string) or a Component record",
+        received: c,
+      });
+    }
+    return typeof c === "string" ? getComponent(c) : c;
+  });
+  refuseDuplicates(spec.components, resolved);
+  return resolved.map((base, i) => {
     const o = spec.constants?.[i];
     if (!o) return base;
     return {
@@ -144,6 +156,40 @@ function resolveComponents(spec: FluidSpec): Component[] {
       criticalVolumeM3PerMol: o.criticalVolumeM3PerMol ?? base.criticalVolumeM3PerMol,
     };
   });
+}
+
+function isRecord(v: unknown): v is Record<string, unknown> {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+
+/**
+ * Refuses one component listed twice: two entries that resolve to the same id (whether written as
+ * id, name, formula, CAS number or synonym), or two records with the same CAS number. A formula
+ * alone is not a duplicate: isomers share one (n-butane and isobutane, C4H10).
+ */
+function refuseDuplicates(
+  given: readonly (string | Component)[],
+  resolved: readonly Component[],
+): void {
+  const label = (i: number): string =>
+    `components[${i}] ${JSON.stringify(typeof given[i] === "string" ? given[i] : resolved[i].id)}`;
+  for (let j = 1; j < resolved.length; j++) {
+    for (let i = 0; i < j; i++) {
+      const a = resolved[i];
+      const b = resolved[j];
+      const sameCas =
+        a.casNumber !== "" && a.casNumber !== undefined && a.casNumber === b.casNumber;
+      if (a.id === b.id || sameCas) {
+        throw new InputError({
+          input: `components[${j}]`,
+          unit: "-",
+          validRange: `a component not already listed (${label(i)} and ${label(j)} are the same component: ${a.id}${sameCas ? `, CAS ${a.casNumber}` : ""})`,
+          received: given[j],
+          hint: "list each component once and add up its mole fractions",
+        });
+      }
+    }
+  }
 }
 
 /**
@@ -203,6 +249,15 @@ function bindMethods(model: ResidualModel): ResidualModel {
  * ```
  */
 export function defineFluid(spec: FluidSpec): Fluid {
+  if (!isRecord(spec)) {
+    throw new InputError({
+      input: "spec",
+      unit: "-",
+      validRange:
+        'an object, the argument of defineFluid, e.g. { components: ["methane"], model: "peng-robinson" }',
+      received: spec,
+    });
+  }
   const components = resolveComponents(spec);
   const ids = components.map((c) => c.id);
   const modelSpec = spec.model ?? "peng-robinson";

@@ -91,7 +91,9 @@ describe("saturation at a temperature below the triple point", () => {
     }).states[0] as { error: { code: string; message: string } };
     // the reason leads; how the search failed follows only as detail
     expect(res.error.code).toBe("phase-unavailable");
-    expect(res.error.message).toMatch(/^no vapour-liquid saturation state at T = 200 K: below the triple point \(273\.16 K.*solid region/);
+    expect(res.error.message).toMatch(
+      /^no vapour-liquid saturation state at T = 200 K: below the triple point \(273\.16 K.*solid region/,
+    );
   });
 
   it("a temperature below the triple point is met with a warning naming it", () => {
