@@ -14,6 +14,7 @@ import { assembleState, dPdRho, residualGibbsTP } from "./properties.js";
 import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
 import { findDensityRoots, type DensityRootOptions } from "./findDensityRoots.js";
 import { phaseLabel } from "./phaseLabel.js";
+import { MAX_PRESSURE_PA } from "./physicalLimits.js";
 import { stabilityAtTP } from "../phase/stability.js";
 import type { FluidBinding, FluidState, PhaseLabel, PhaseRequest } from "./types.js";
 
@@ -212,6 +213,14 @@ export function stateAtTRho(
   const Rg = model.gasConstant ?? R_CODATA;
   const Z = 1 + residual.aD;
   const P = densityMolPerM3 * Rg * temperatureK * Z;
+  if (!(P <= MAX_PRESSURE_PA)) {
+    throw new OutOfRangeError({
+      input: "densityMolPerM3",
+      unit: "mol/m3",
+      validRange: `a density whose pressure is at most ${MAX_PRESSURE_PA} Pa (the limit of physical sense, state/physicalLimits.ts; ${model.info.name} gives P = ${P} Pa at ${temperatureK} K)`,
+      received: densityMolPerM3,
+    });
+  }
   const phase = phaseLabel(model, temperatureK, P, densityMolPerM3, x, "only", Z);
   return finish(binding, temperatureK, densityMolPerM3, x, residual, phase, NO_EXTRA);
 }

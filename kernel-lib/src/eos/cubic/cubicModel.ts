@@ -428,11 +428,11 @@ class CubicModelImpl implements CubicModel {
     x: readonly number[],
   ): readonly ResultWarning[] {
     const kind = this.family.alpha;
-    if (kind === "constant" || kind === "redlich-kwong") return NO_WARNINGS;
     // psi_i at T is in the mixture cache already (the state layer asks after residual() at the
     // same T and x); the cache holds sqrt(a_c,i) psi_i, whose sign is that of psi_i
     this.update(temperatureK, x);
-    let warnings: ResultWarning[] | undefined;
+    let warnings = this.rangeWarnings(temperatureK, _rho, x);
+    if (kind === "constant" || kind === "redlich-kwong") return warnings ?? NO_WARNINGS;
     for (let i = 0; i < this.n; i++) {
       if (!(this.psi[i] > 0)) {
         warnings ??= [];
@@ -444,7 +444,52 @@ class CubicModelImpl implements CubicModel {
     }
     return warnings ?? NO_WARNINGS;
   }
+
+  /**
+   * The stated range of the cubics (state/physicalLimits.ts gives the basis): T from 0.3 Tc of
+   * the heaviest component present to 1500 K, P up to 100 MPa. Uses the mixture cache at (T, x).
+   */
+  private rangeWarnings(
+    temperatureK: number,
+    rho: number,
+    x: readonly number[],
+  ): ResultWarning[] | undefined {
+    let warnings: ResultWarning[] | undefined;
+    let tcMax = 0;
+    let heaviest = 0;
+    for (let i = 0; i < this.n; i++) {
+      if (x[i] > 0 && this.tc[i] > tcMax) {
+        tcMax = this.tc[i];
+        heaviest = i;
+      }
+    }
+    if (temperatureK < 0.3 * tcMax || temperatureK > CUBIC_MAX_TEMPERATURE_K) {
+      warnings = [
+        {
+          code: "outside-validity",
+          message: `T = ${temperatureK} K is outside the stated range of ${this.family.name} (from 0.3 Tc of ${this.components[heaviest].id} = ${(0.3 * tcMax).toPrecision(4)} K to ${CUBIC_MAX_TEMPERATURE_K} K): its alpha function was fitted to vapour pressures at reduced temperatures 0.4 to 1`,
+        },
+      ];
+    }
+    const b = this.mixB;
+    const pressurePa =
+      (rho * R * temperatureK) / (1 - b * rho) -
+      (this.mixA * rho * rho) / ((1 + this.delta1 * b * rho) * (1 + this.delta2 * b * rho));
+    if (pressurePa > CUBIC_MAX_PRESSURE_PA) {
+      warnings ??= [];
+      warnings.push({
+        code: "outside-validity",
+        message: `P = ${pressurePa.toPrecision(6)} Pa is above the stated range of ${this.family.name} (up to 100 MPa): cubic equations are fitted to vapour pressures and are not meant for such pressures`,
+      });
+    }
+    return warnings;
+  }
 }
+
+/** Highest temperature of the cubics' stated range, K (state/physicalLimits.ts). */
+const CUBIC_MAX_TEMPERATURE_K = 1500;
+/** Highest pressure of the cubics' stated range, Pa (state/physicalLimits.ts). */
+const CUBIC_MAX_PRESSURE_PA = 1e8;
 
 /**
  * Builds a cubic equation of state for these components.
