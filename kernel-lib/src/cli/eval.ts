@@ -300,7 +300,8 @@ export async function evalCommand(argv: string[], io: CliIo): Promise<number> {
   }
   let raw: unknown;
   try {
-    raw = JSON.parse(text);
+    // a UTF-8 byte-order mark (some editors write one) is not part of the JSON text
+    raw = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
   } catch (e) {
     const err = new RequestError(
       "$",
