@@ -162,6 +162,56 @@ function isRecord(v: unknown): v is Record<string, unknown> {
   return typeof v === "object" && v !== null && !Array.isArray(v);
 }
 
+/** Refuses spec fields of the wrong kind (a notebook may pass anything) before they are used. */
+function checkSpecFields(spec: FluidSpec): void {
+  const fail = (input: string, validRange: string, received: unknown): never => {
+    throw new InputError({ input, unit: "-", validRange, received });
+  };
+  const m: unknown = spec.model;
+  if (!(
+    m === undefined ||
+    typeof m === "string" ||
+    (isRecord(m) && typeof m.residual === "function" && isRecord(m.info))
+  )) {
+    fail("model", "a model id (string) or a ResidualModel object", m);
+  }
+  const ig: unknown = spec.idealGas;
+  if (!(
+    ig === undefined ||
+    ig === "correlation" ||
+    ig === "molecular" ||
+    (isRecord(ig) && typeof ig.at === "function")
+  )) {
+    fail("idealGas", '"correlation" or "molecular" or an IdealGasMixture', ig);
+  }
+  const dep: unknown = spec.departure;
+  if (!(dep === undefined || dep === "closed-form" || dep === "numeric")) {
+    fail("departure", '"closed-form" or "numeric"', dep);
+  }
+  const constants: unknown = spec.constants;
+  if (constants !== undefined) {
+    if (!Array.isArray(constants))
+      fail("constants", "an array with one entry per component", constants);
+    (constants as unknown[]).forEach((c, i) => {
+      if (!(c === undefined || c === null || isRecord(c))) {
+        fail(`constants[${i}]`, "an object of constant overrides, or undefined", c);
+      }
+    });
+  }
+  const ref: unknown = spec.referenceState;
+  if (!(
+    ref === undefined ||
+    (isRecord(ref) &&
+      (ref.kind === "formation" || ref.kind === "zero-at" || ref.kind === "fluid-convention"))
+  )) {
+    fail(
+      "referenceState",
+      '{ kind: "formation" }, { kind: "zero-at", temperatureK, pressurePa } or { kind: "fluid-convention", description }',
+      ref,
+    );
+  }
+}
+
 /**
  * Refuses one component listed twice: two entries that resolve to the same id (whether written as
  * id, name, formula, CAS number or synonym), or two records with the same CAS number. A formula
@@ -258,6 +308,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
       received: spec,
     });
   }
+  checkSpecFields(spec);
   const components = resolveComponents(spec);
   const ids = components.map((c) => c.id);
   const modelSpec = spec.model ?? "peng-robinson";

@@ -6,7 +6,12 @@
  * phase. Properties come from state/properties.ts.
  */
 import { R as R_CODATA } from "../constants.js";
-import { OutOfRangeError, PhaseUnavailableError, type ResultWarning } from "../errors.js";
+import {
+  InputError,
+  OutOfRangeError,
+  PhaseUnavailableError,
+  type ResultWarning,
+} from "../errors.js";
 import type { ResidualDerivatives, ResidualModel } from "../eos/types.js";
 import type { IdealGasProperties, ReferenceState } from "../idealgas/types.js";
 import { leanIdealGasOf, type IdealGasValues, type LeanIdealGas } from "../idealgas/leanMixture.js";
@@ -275,7 +280,16 @@ export function stateAtTP(
   checkTemperature(temperatureK);
   checkPressure(pressurePa);
   checkComposition(x, model.info.componentIds.length);
+  if (options === null) options = DEFAULT_OPTIONS;
   const request = options.phase ?? "stable";
+  if (!(request === "stable" || request === "liquid" || request === "vapor")) {
+    throw new InputError({
+      input: "options.phase",
+      unit: "-",
+      validRange: '"stable" or "liquid" or "vapor"',
+      received: request,
+    });
+  }
   const rhos = model.densityRoots
     ? model.densityRoots(temperatureK, pressurePa, x)
     : findDensityRoots(model, temperatureK, pressurePa, x, options.rootSearch);
