@@ -33,6 +33,7 @@ import {
   type InversionResult,
 } from "../state/inversions.js";
 import type { DepartureMethod, FluidBinding, FluidState } from "../state/types.js";
+import { checkComposition, checkPressure, checkTemperature } from "../state/checkInputs.js";
 import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../phase/stability.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
@@ -411,7 +412,13 @@ export function defineFluid(spec: FluidSpec): Fluid {
     defaultedPairs: interactions?.defaultedPairs ?? [],
     stateAtTP: (T, P, x, options) => stateAtTP(binding, T, P, xOf(x), options),
     stateAtTRho: (T, rho, x) => stateAtTRho(binding, T, rho, xOf(x)),
-    densityRoots: (T, P, x) => densityRootsAtTP(binding, T, P, xOf(x)),
+    densityRoots: (T, P, x) => {
+      // densityRootsAtTP leaves the checks to its callers: this is a public entry
+      checkTemperature(T);
+      checkPressure(P);
+      checkComposition(xOf(x), components.length);
+      return densityRootsAtTP(binding, T, P, xOf(x));
+    },
     stabilityAtTP: (T, P, x, options) =>
       stabilityAtTP(model, T, P, xOf(x), { constants: components, ...options }),
     temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),

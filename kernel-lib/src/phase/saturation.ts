@@ -348,6 +348,14 @@ function closedFormRootsRoute(
 }
 
 function validateOptions(options: SaturationOptions): { tolerance: number; maxIterations: number } {
+  if (!(typeof options === "object" && options !== null)) {
+    throw new InputError({
+      input: "options",
+      unit: "-",
+      validRange: "an options object (or nothing)",
+      received: options,
+    });
+  }
   const tolerance = options.tolerance ?? 1e-12;
   if (!(tolerance > 0 && tolerance < 1)) {
     throw new InputError({
@@ -379,6 +387,7 @@ export function saturationAtTemperature(
   temperatureK: number,
   options: SaturationOptions = {},
 ): SaturationResult {
+  options = options ?? {};
   try {
     return solveAtTemperature(model, temperatureK, options);
   } catch (e) {
@@ -527,6 +536,7 @@ export function saturationAtPressure(
   pressurePa: number,
   options: SaturationAtPressureOptions = {},
 ): SaturationResult {
+  options = options ?? {};
   requirePure(model, "saturation");
   requirePositive("pressurePa", pressurePa, "Pa");
   validateOptions(options);

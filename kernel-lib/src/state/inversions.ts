@@ -69,6 +69,7 @@ function invert(
   checkPressure(pressurePa);
   requireFinite(name, target, unit);
   checkComposition(x, binding.model.info.componentIds.length);
+  options = options ?? {};
   const phase = options.phase ?? "stable";
   const tMin = options.minTemperatureK ?? 20;
   const tMax = options.maxTemperatureK ?? 3000;

@@ -9,6 +9,9 @@
  * - T above 1e4 K: molecules are dissociated and partly ionised (hydrogen is almost fully
  *   dissociated near 5000 K at 1 bar, from memory of the NIST-JANAF tables' equilibrium constants);
  *   the ideal-gas routes stop at 6000 K or below anyway.
+ * - P below 1e-20 Pa and a density below 1e-20 mol/m3 (about 6000 molecules per cubic metre):
+ *   no fluid in the continuum sense, and it keeps P/(RT) and ln(rho) far from underflow
+ *   (5e-324 Pa gave s = Infinity).
  * - P above 1e10 Pa (10 GPa): beyond the highest published range of the reference equations here
  *   (nitrogen, 2.2 GPa; Span et al. 2000), where molecular fluids freeze at ordinary temperatures;
  *   three orders of magnitude above process equipment. A (T, rho) state whose pressure exceeds it is
@@ -33,6 +36,10 @@ import { OutOfRangeError } from "../errors.js";
 export const MIN_TEMPERATURE_K = 1;
 /** Highest temperature any model here is evaluated at, K. */
 export const MAX_TEMPERATURE_K = 1e4;
+/** Lowest pressure any model here is evaluated at, Pa. */
+export const MIN_PRESSURE_PA = 1e-20;
+/** Lowest molar density any model here is evaluated at, mol/m3. */
+export const MIN_DENSITY_MOL_PER_M3 = 1e-20;
 /** Highest pressure any model here is evaluated at, Pa. */
 export const MAX_PRESSURE_PA = 1e10;
 
@@ -48,14 +55,26 @@ export function refuseUnphysicalTemperature(temperatureK: number, input = "tempe
   }
 }
 
-/** Refuses P above 1e10 Pa (call after the finite-positive check). */
+/** Refuses P outside [1e-20 Pa, 1e10 Pa] (call after the finite-positive check). */
 export function refuseUnphysicalPressure(pressurePa: number, input = "pressurePa"): void {
-  if (!(pressurePa <= MAX_PRESSURE_PA)) {
+  if (!(pressurePa >= MIN_PRESSURE_PA && pressurePa <= MAX_PRESSURE_PA)) {
     throw new OutOfRangeError({
       input,
       unit: "Pa",
-      validRange: `at most ${MAX_PRESSURE_PA} Pa (10 GPa, the limit of physical sense for the fluid models here; see state/physicalLimits.ts)`,
+      validRange: `between ${MIN_PRESSURE_PA} Pa and ${MAX_PRESSURE_PA} Pa (10 GPa; the limits of physical sense for the fluid models here, see state/physicalLimits.ts)`,
       received: pressurePa,
+    });
+  }
+}
+
+/** Refuses a molar density below 1e-20 mol/m3 (call after the finite-positive check). */
+export function refuseUnphysicalDensity(densityMolPerM3: number, input = "densityMolPerM3"): void {
+  if (!(densityMolPerM3 >= MIN_DENSITY_MOL_PER_M3)) {
+    throw new OutOfRangeError({
+      input,
+      unit: "mol/m3",
+      validRange: `at least ${MIN_DENSITY_MOL_PER_M3} mol/m3 (below it there is no fluid in the continuum sense; see state/physicalLimits.ts)`,
+      received: densityMolPerM3,
     });
   }
 }
