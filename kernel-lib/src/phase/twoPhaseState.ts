@@ -18,6 +18,7 @@ import type { ModelInfo } from "../eos/types.js";
 import type { ReferenceState } from "../idealgas/types.js";
 import { stateAtTRho } from "../state/stateAt.js";
 import { temperatureAtPH, temperatureAtPS } from "../state/inversions.js";
+import { MAX_TEMPERATURE_K, MIN_TEMPERATURE_K } from "../state/physicalLimits.js";
 import type { FluidBinding, FluidState } from "../state/types.js";
 import { requireFinite, requirePositive } from "../validate.js";
 import { locateCriticalPoint } from "./criticalPoint.js";
@@ -188,9 +189,12 @@ export function stateAtTemperatureDensity(
 export interface DomeInversionOptions extends SaturationOptions {
   /** Initial guess for a supercritical-pressure inversion, K. Default the critical temperature. */
   initialGuessK?: number;
-  /** Lowest temperature searched on the liquid side, K. Default 20. */
+  /**
+   * Lowest temperature searched on the liquid side, K. Default 1 (the search is cut to where the
+   * fluid can be evaluated: see state/inversions.ts).
+   */
   minTemperatureK?: number;
-  /** Highest temperature searched on the vapour side, K. Default 3000. */
+  /** Highest temperature searched on the vapour side, K. Default 1e4 (likewise cut). */
   maxTemperatureK?: number;
 }
 
@@ -210,8 +214,8 @@ function acrossDome(
   );
   const invert = property === "h" ? temperatureAtPH : temperatureAtPS;
   const critical = locateCriticalPoint(binding.model, { guess: options.criticalGuess });
-  const tMin = options.minTemperatureK ?? 20;
-  const tMax = options.maxTemperatureK ?? 3000;
+  const tMin = options.minTemperatureK ?? MIN_TEMPERATURE_K;
+  const tMax = options.maxTemperatureK ?? MAX_TEMPERATURE_K;
   if (!(pressurePa < critical.pressurePa)) {
     const r = invert(binding, pressurePa, target, [1], {
       phase: "stable",

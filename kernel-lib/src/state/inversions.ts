@@ -31,11 +31,12 @@ export interface InversionOptions {
    */
   initialGuessK?: number;
   /**
-   * Lowest temperature tried, K. Default 20 (the search never goes below the ideal-gas
-   * heat-capacity ranges of the components present, whatever is given).
+   * Lowest temperature tried, K. Default: the lowest temperature the fluid can be evaluated at
+   * (the ideal-gas heat-capacity ranges of the components present with their extrapolation
+   * margin, and the physical limits); the search never goes below that, whatever is given.
    */
   minTemperatureK?: number;
-  /** Highest temperature tried, K. Default 3000 (likewise cut to the ideal-gas ranges). */
+  /** Highest temperature tried, K. Default: the highest the fluid can be evaluated at (likewise). */
   maxTemperatureK?: number;
   /** Absolute tolerance on T, K. Default 1e-9. */
   toleranceK?: number;
@@ -71,8 +72,8 @@ function invert(
   checkComposition(x, binding.model.info.componentIds.length);
   options = options ?? {};
   const phase = options.phase ?? "stable";
-  const tMin = options.minTemperatureK ?? 20;
-  const tMax = options.maxTemperatureK ?? 3000;
+  const tMin = options.minTemperatureK ?? MIN_TEMPERATURE_K;
+  const tMax = options.maxTemperatureK ?? MAX_TEMPERATURE_K;
   const guess = options.initialGuessK ?? Math.min(Math.max(300, tMin), tMax);
   if (!(tMin > 0 && tMax > tMin && guess >= tMin && guess <= tMax)) {
     throw new InputError({
