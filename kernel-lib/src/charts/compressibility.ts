@@ -6,19 +6,13 @@
  */
 import { requirePositive } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
-import {
-  checkArray,
-  checkNonEmptyArray,
-  curveRows,
-  planAxis,
-  positionEncoding,
-  rangeOption,
-  seriesLineLayer,
-  shortNumber,
-  topLevel,
-  WarningList,
-  type BaseChartOptions,
-} from "./specParts.js";
+import { planAxis, positionEncoding, rangeOption } from "./axisPlan.js";
+import { checkArray, checkNonEmptyArray, type BaseChartOptions } from "./chartOptions.js";
+import { curveRows } from "./curveRows.js";
+import { seriesLineLayer } from "./seriesLayers.js";
+import { shortNumber } from "./shortNumber.js";
+import { topLevel } from "./topLevel.js";
+import { WarningList } from "./warningList.js";
 
 /** One reduced isotherm: Z at reduced pressures. */
 export interface ReducedIsotherm {

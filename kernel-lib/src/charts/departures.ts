@@ -8,19 +8,12 @@ import { InputError } from "../errors.js";
 import { requireChoice, requireCount } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
-import {
-  checkNonEmptyArray,
-  checkSize,
-  curveRows,
-  planAxis,
-  positionEncoding,
-  seriesLabels,
-  seriesLineLayer,
-  topLevel,
-  WarningList,
-  type AxisPlan,
-  type BaseChartOptions,
-} from "./specParts.js";
+import { planAxis, positionEncoding, type AxisPlan } from "./axisPlan.js";
+import { checkNonEmptyArray, checkSize, type BaseChartOptions } from "./chartOptions.js";
+import { curveRows } from "./curveRows.js";
+import { seriesLabels, seriesLineLayer } from "./seriesLayers.js";
+import { topLevel } from "./topLevel.js";
+import { WarningList } from "./warningList.js";
 import { DEFAULT_HEIGHT, DEFAULT_WIDTH, SERIES_COLORS } from "./theme.js";
 
 /** Residual properties: enthalpy, entropy, internal energy, Helmholtz and Gibbs energy. */

@@ -6,14 +6,10 @@
 import { toDisplay } from "./displayUnits.js";
 import type { EnergyBasis } from "./energyBasis.js";
 import type { ChartCriticalPoint, ChartSaturationRow } from "./saturationInput.js";
-import {
-  curveRows,
-  plotValue,
-  positionEncoding,
-  shortNumber,
-  type AxisPlan,
-  type WarningList,
-} from "./specParts.js";
+import { plotValue, positionEncoding, type AxisPlan } from "./axisPlan.js";
+import { curveRows } from "./curveRows.js";
+import { shortNumber } from "./shortNumber.js";
+import type { WarningList } from "./warningList.js";
 import { INK } from "./theme.js";
 
 /** How to read a diagram coordinate of a saturated phase (SI); undefined when missing. */

@@ -31,7 +31,8 @@ export {
 } from "./theme.js";
 export { linearGrid, logGrid, isothermDensityGrid, thinCurve } from "./sampling.js";
 export type { DensityGridOptions } from "./sampling.js";
-export type { BaseChartOptions, ChartXY } from "./specParts.js";
+export type { BaseChartOptions } from "./chartOptions.js";
+export type { ChartXY } from "./curveRows.js";
 export type {
   ChartSaturationRow,
   ChartSaturatedPhase,

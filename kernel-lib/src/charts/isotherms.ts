@@ -16,20 +16,13 @@ import {
   type ChartCriticalPoint,
   type ChartSaturationRow,
 } from "./saturationInput.js";
-import {
-  checkArray,
-  checkNonEmptyArray,
-  curveRows,
-  lineTooltip,
-  planAxis,
-  positionEncoding,
-  seriesEncodings,
-  shortNumber,
-  topLevel,
-  WarningList,
-  type AxisPlan,
-  type BaseChartOptions,
-} from "./specParts.js";
+import { planAxis, positionEncoding, type AxisPlan } from "./axisPlan.js";
+import { checkArray, checkNonEmptyArray, type BaseChartOptions } from "./chartOptions.js";
+import { curveRows } from "./curveRows.js";
+import { lineTooltip, seriesEncodings } from "./seriesLayers.js";
+import { shortNumber } from "./shortNumber.js";
+import { topLevel } from "./topLevel.js";
+import { WarningList } from "./warningList.js";
 import { INK } from "./theme.js";
 
 /** A point of an isotherm, SI. */

@@ -8,20 +8,12 @@ import { InputError } from "../errors.js";
 import { requireChoice } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay, type QuantityKind } from "./displayUnits.js";
-import {
-  checkArray,
-  checkSize,
-  checkText,
-  curveRows,
-  planAxis,
-  positionEncoding,
-  seriesLineLayer,
-  topLevel,
-  WarningList,
-  type AxisPlan,
-  type BaseChartOptions,
-  type ChartXY,
-} from "./specParts.js";
+import { planAxis, positionEncoding, type AxisPlan } from "./axisPlan.js";
+import { checkArray, checkSize, checkText, type BaseChartOptions } from "./chartOptions.js";
+import { curveRows, type ChartXY } from "./curveRows.js";
+import { seriesLineLayer } from "./seriesLayers.js";
+import { topLevel } from "./topLevel.js";
+import { WarningList } from "./warningList.js";
 import { DEFAULT_HEIGHT, DEFAULT_WIDTH, INK } from "./theme.js";
 
 /** One measured point, SI. */

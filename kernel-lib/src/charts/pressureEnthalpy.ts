@@ -18,18 +18,14 @@ import {
   type ChartCriticalPoint,
   type ChartSaturationRow,
 } from "./saturationInput.js";
-import {
-  checkArray,
-  constantValueSeriesLayers,
-  curveRows,
-  guideLineLayers,
-  planAxis,
-  rangeOption,
-  shortNumber,
-  topLevel,
-  WarningList,
-  type BaseChartOptions,
-} from "./specParts.js";
+import { planAxis, rangeOption } from "./axisPlan.js";
+import { checkArray, type BaseChartOptions } from "./chartOptions.js";
+import { curveRows } from "./curveRows.js";
+import { guideLineLayers } from "./guideLines.js";
+import { constantValueSeriesLayers } from "./seriesLayers.js";
+import { shortNumber } from "./shortNumber.js";
+import { topLevel } from "./topLevel.js";
+import { WarningList } from "./warningList.js";
 
 /** A point on a P-h diagram, SI per mole. */
 export interface PressureEnthalpyPoint {

@@ -8,15 +8,10 @@ import { requireChoice, requireFinite, requirePositive } from "../validate.js";
 import { chartMeta, type ChartSpec } from "./chartSpec.js";
 import { resolveUnit, toDisplay, type UnitChoice } from "./displayUnits.js";
 import { energyBasis } from "./energyBasis.js";
-import {
-  checkNonEmptyArray,
-  planAxis,
-  positionEncoding,
-  topLevel,
-  WarningList,
-  type AxisPlan,
-  type BaseChartOptions,
-} from "./specParts.js";
+import { planAxis, positionEncoding, type AxisPlan } from "./axisPlan.js";
+import { checkNonEmptyArray, type BaseChartOptions } from "./chartOptions.js";
+import { topLevel } from "./topLevel.js";
+import { WarningList } from "./warningList.js";
 import { placeGuideLabels } from "./labelPlacement.js";
 import { applyLogTicks } from "./logTicks.js";
 import { INK } from "./theme.js";

@@ -17,19 +17,12 @@ import {
   type ChartCriticalPoint,
   type ChartSaturationRow,
 } from "./saturationInput.js";
-import {
-  checkArray,
-  checkText,
-  curveRows,
-  planAxis,
-  plotValue,
-  positionEncoding,
-  shortNumber,
-  topLevel,
-  WarningList,
-  type AxisPlan,
-  type BaseChartOptions,
-} from "./specParts.js";
+import { planAxis, plotValue, positionEncoding, type AxisPlan } from "./axisPlan.js";
+import { checkArray, checkText, type BaseChartOptions } from "./chartOptions.js";
+import { curveRows } from "./curveRows.js";
+import { shortNumber } from "./shortNumber.js";
+import { topLevel } from "./topLevel.js";
+import { WarningList } from "./warningList.js";
 import { HEATMAP_SCHEME, INK } from "./theme.js";
 
 /** Data of {@link propertySurfaceChart}: values[i][j] at temperaturesK[i], pressuresPa[j], SI. */

@@ -14,15 +14,11 @@ import {
   type ChartCriticalPoint,
   type ChartSaturationRow,
 } from "./saturationInput.js";
-import {
-  checkArray,
-  constantValueSeriesLayers,
-  planAxis,
-  rangeOption,
-  topLevel,
-  WarningList,
-  type BaseChartOptions,
-} from "./specParts.js";
+import { planAxis, rangeOption } from "./axisPlan.js";
+import { checkArray, type BaseChartOptions } from "./chartOptions.js";
+import { constantValueSeriesLayers } from "./seriesLayers.js";
+import { topLevel } from "./topLevel.js";
+import { WarningList } from "./warningList.js";
 
 /** A point on a T-s diagram, SI per mole. */
 export interface TemperatureEntropyPoint {

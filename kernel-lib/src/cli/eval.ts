@@ -1,6 +1,7 @@
 /**
  * `isochor eval [request.json | -]`: batch property evaluation, JSON in (file or stdin), JSON out.
- * The request is described in evalRequest.ts. Response:
+ * The request format is the JSON Schema schema/eval-request.schema.json (checked by
+ * evalRequest.ts). Response:
  *   {"states": [ {"T", "P", "rho", "Z", "phase", "h", "s", "u", "cp", "cv", "w", "jt", "lnPhi": [...],
  *                 "residual": {"h", "s", "u", "a", "g"}, "residualTV": {"s", "a", "g"}}
  *              | {"error": {"code", "message"}} ]}
@@ -38,6 +39,7 @@ import { gasConstantOf } from "../phase/pureFluid.js";
 import { describeReferenceState } from "../idealgas/referenceState.js";
 import type { FluidBinding, FluidState } from "../state/types.js";
 import { parseEvalRequest, type EvalRequest, type EvalState } from "./evalRequest.js";
+import { parseCliArgs } from "./cliArgs.js";
 import type { CliIo } from "./io.js";
 
 const USAGE = `usage: isochor eval [request.json | -]
@@ -47,7 +49,9 @@ JSON on standard output. Fields: model, components, x, kij, constants, departure
 idealGas, phase, checkStability (mixtures: tangent-plane test at each T, P state, a split reported
 in its warnings), states (see the engine documentation). A state is {"T", "P"}, {"T", "rho"},
 {"T" or "P", "saturated": "liquid"|"vapor"} or {"T" or "P", "quality"}; model "reference" takes one
-component with a reference equation (water, carbon-dioxide, methane, nitrogen).
+component with a reference equation (water, carbon-dioxide, methane, nitrogen). The request's
+format, with units and defaults, is the JSON Schema dist/cli/schema/eval-request.schema.json of the
+isochor package.
 `;
 
 /** The response entry of one state. */
@@ -278,23 +282,26 @@ function replacer(_key: string, value: unknown): unknown {
 
 /** The `eval` sub-command. */
 export async function evalCommand(argv: string[], io: CliIo): Promise<number> {
-  if (argv.includes("-h") || argv.includes("--help")) {
+  const args = parseCliArgs(argv, {});
+  if (args === "help") {
     io.stdout(USAGE);
     return 0;
   }
-  if (argv.length > 1) {
-    io.stderr(`isochor eval: expected at most one request file\n${USAGE}`);
+  if ("error" in args || args.positionals.length > 1) {
+    const problem = "error" in args ? args.error : "expected at most one request file";
+    io.stderr(`isochor eval: ${problem}\n${USAGE}`);
     return 2;
   }
+  const file = args.positionals[0];
   let text: string;
   try {
     text =
-      argv.length === 0 || argv[0] === "-"
+      file === undefined || file === "-"
         ? await io.readStdin()
-        : fs.readFileSync(path.resolve(io.cwd, argv[0]), "utf8");
+        : fs.readFileSync(path.resolve(io.cwd, file), "utf8");
   } catch (e) {
     io.stderr(
-      `isochor eval: cannot read ${argv[0] ?? "standard input"}: ${e instanceof Error ? e.message : String(e)}\n`,
+      `isochor eval: cannot read ${file ?? "standard input"}: ${e instanceof Error ? e.message : String(e)}\n`,
     );
     return 2;
   }

@@ -1,35 +1,29 @@
 /**
- * The `isochor eval` request: parsing and checking, with the JSON path of every problem.
+ * The `isochor eval` request: checked against its JSON Schema, then the checks a schema cannot
+ * state, with the JSON path of every problem ("$.states[2].T").
  *
- * Request (names fixed by issue 4; other tools depend on them; issue 5 adds "reference" and the
- * saturation and quality state forms):
- *   { "model": "ideal-gas" | "virial" | "van-der-waals" | "redlich-kwong" | "soave-redlich-kwong" |
- *              "peng-robinson" | "peng-robinson-1978" | "lee-kesler" | "reference",
- *     "components": [ids], "x": [mole fractions] (optional for one component),
- *     "kij": [[...]] (optional), "constants": [{"Tc": K, "Pc": Pa, "omega": -, "M": kg/mol}] (optional,
- *     per-component overrides; null or {} keeps the table), "departure": "closed-form" | "numeric",
- *     "reference": "formation" | {"kind": "zero-at", "T": K, "P": Pa}, "idealGas": "correlation" |
- *     "molecular", "phase": "stable" | "liquid" | "vapor",
- *     "checkStability": true | false (optional, default false; added after issue 4: mixtures at
- *       given T and P are run through the tangent-plane test and a split is reported in the
- *       state's "warnings"),
- *     "states": [{"T": K, "P": Pa} | {"T": K, "rho": mol/m3}
- *                | {"T": K, "saturated": "liquid" | "vapor"} | {"P": Pa, "saturated": ...}
- *                | {"T": K, "quality": 0..1} | {"P": Pa, "quality": 0..1}] }
- * "reference" takes exactly one component with a reference equation (referenceFluidIds(): water,
- * carbon-dioxide, methane, nitrogen) in its publication's reference state, so "kij", "constants",
- * "idealGas", "reference" and "departure": "numeric" are refused with it. Saturated and quality
- * states need one component (pure-fluid saturation); "phase" does not apply to them.
- * Structural problems (wrong types, missing fields, unknown names) refuse the whole request with a
- * RequestError naming the JSON path; physically bad values inside a state (T <= 0, ...) become an
- * error entry for that state only.
+ * The format is schema/eval-request.schema.json (JSON Schema 2020-12, shipped in the package as
+ * dist/cli/schema/eval-request.schema.json): fields, types, units, defaults and state forms are
+ * documented there, and the same file checks every request. The names set by issue 4 are fixed
+ * (other tools depend on them); later fields are optional with a default that keeps an old
+ * request's meaning (issue 5: "reference", saturated and quality states; "checkStability").
+ *
+ *   raw JSON --schema (ajv)--> structure, types, enums, state forms, model "reference" exclusions
+ *            --checkCounts----> x / kij / constants sized to the components, x sums to 1,
+ *                               reference-equation fluids, saturation only for one component
+ *            --toRequest------> EvalRequest (defaults filled in)
+ *
+ * Structural problems refuse the whole request with a RequestError naming the JSON path;
+ * physically bad values inside a state (T <= 0, ...) become an error entry for that state only.
  */
+import Ajv2020, { type ErrorObject, type ValidateFunction } from "ajv/dist/2020.js";
 import { RequestError } from "../errors.js";
-import { isModelId, MODEL_IDS, type ModelId } from "../eos/createModel.js";
+import type { ModelId } from "../eos/createModel.js";
 import { referenceFluidIds } from "../eos/multiparameter/referenceFluids.js";
 import type { ReferenceState } from "../idealgas/types.js";
 import type { ConstantOverrides } from "../fluid/defineFluid.js";
 import type { DepartureMethod, PhaseRequest } from "../state/types.js";
+import schema from "./schema/eval-request.schema.json";
 
 /**
  * One requested state. "TQ" and "PQ" are pure-fluid states on or inside the saturation dome at
@@ -73,12 +67,16 @@ export interface EvalRequest {
 
 type Json = unknown;
 
+/** The request's JSON Schema (also the published documentation of the format). */
+export const EVAL_REQUEST_SCHEMA: object = schema;
+
 function isObject(v: Json): v is Record<string, Json> {
   return typeof v === "object" && v !== null && !Array.isArray(v);
 }
 
 function describe(v: Json): string {
   if (v === null) return "null";
+  if (v === undefined) return "nothing";
   if (Array.isArray(v)) return "an array";
   return typeof v === "string"
     ? JSON.stringify(v)
@@ -87,37 +85,102 @@ function describe(v: Json): string {
       : String(v);
 }
 
-function number(v: Json, path: string): number {
-  if (typeof v !== "number" || !Number.isFinite(v)) {
-    throw new RequestError(path, `expected a number, got ${describe(v)}`);
+const TYPE_WORDS: Record<string, string> = {
+  number: "a number",
+  string: "a string",
+  boolean: "true or false",
+  object: "an object",
+  array: "an array",
+  null: "null",
+};
+
+let compiled: ValidateFunction | undefined;
+
+/** The compiled schema (compiled once, on first use). */
+function validator(): ValidateFunction {
+  if (compiled === undefined) {
+    // "x-message" and "x-checks" are annotations of this schema: the message of a rule, and the
+    // checks made in code; strict mode would otherwise refuse them as unknown keywords.
+    const ajv = new Ajv2020({ allErrors: true, verbose: true, strictTypes: true });
+    ajv.addKeyword({ keyword: "x-message", schemaType: "string" });
+    ajv.addKeyword({ keyword: "x-checks", schemaType: "array" });
+    compiled = ajv.compile(schema);
   }
-  return v;
+  return compiled;
 }
 
-function oneOf<T extends string>(v: Json, path: string, choices: readonly T[], fallback: T): T {
-  if (v === undefined) return fallback;
-  if (typeof v !== "string" || !(choices as readonly string[]).includes(v)) {
-    throw new RequestError(
-      path,
-      `expected one of ${choices.map((c) => JSON.stringify(c)).join(", ")}, got ${describe(v)}`,
-    );
-  }
-  return v as T;
+/** "/states/2/T" -> "$.states[2].T". */
+function jsonPath(pointer: string): string {
+  return (
+    "$" +
+    pointer
+      .split("/")
+      .slice(1)
+      .map((p) => p.replace(/~1/g, "/").replace(/~0/g, "~"))
+      .map((p) => (/^\d+$/.test(p) ? `[${p}]` : `.${p}`))
+      .join("")
+  );
 }
 
-const KNOWN_KEYS = new Set([
-  "model",
-  "components",
-  "x",
-  "kij",
-  "constants",
-  "departure",
-  "reference",
-  "idealGas",
-  "phase",
-  "checkStability",
-  "states",
-]);
+/**
+ * The problem to report among all of ajv's errors: an unknown field first (it is often a
+ * misspelt one, and explains the other errors), else the first error in the schema's order that
+ * is neither the failure of one branch of anyOf/oneOf (the combinator's own error says what was
+ * wanted) nor an "if" summary.
+ */
+function firstProblem(errors: readonly ErrorObject[]): ErrorObject {
+  const reported = errors.filter(
+    (e) => e.keyword !== "if" && !/\/(anyOf|oneOf)\/\d+\//.test(e.schemaPath),
+  );
+  return reported.find((e) => e.keyword === "additionalProperties") ?? reported[0] ?? errors[0];
+}
+
+/** A RequestError from an ajv error: the JSON path and a message in the request's words. */
+function requestError(e: ErrorObject): RequestError {
+  const path = jsonPath(e.instancePath);
+  const rule = (e.parentSchema as { "x-message"?: string } | undefined)?.["x-message"];
+  const got = `got ${describe(e.data)}`;
+  switch (e.keyword) {
+    case "additionalProperties": {
+      const known = Object.keys(
+        (e.parentSchema as { properties?: object } | undefined)?.properties ?? {},
+      );
+      const field = (e.params as { additionalProperty: string }).additionalProperty;
+      return new RequestError(
+        `${path}.${field}`,
+        `unknown field; the fields are ${known.join(", ")}`,
+      );
+    }
+    case "required": {
+      const field = (e.params as { missingProperty: string }).missingProperty;
+      return new RequestError(`${path}.${field}`, "is required");
+    }
+    case "type": {
+      const types = ([] as string[]).concat((e.params as { type: string | string[] }).type);
+      return new RequestError(
+        path,
+        `expected ${types.map((t) => TYPE_WORDS[t] ?? t).join(" or ")}, ${got}`,
+      );
+    }
+    case "enum":
+    case "const": {
+      const allowed = e.keyword === "enum" ? (e.schema as unknown[]) : [e.schema];
+      const expected = `expected ${allowed.length > 1 ? "one of " : ""}${allowed.map((c) => JSON.stringify(c)).join(", ")}`;
+      return new RequestError(path, rule !== undefined ? `${rule}, ${got}` : `${expected}, ${got}`);
+    }
+    case "exclusiveMinimum":
+      return new RequestError(path, `must be > ${String(e.schema)}, ${got}`);
+    case "minimum":
+    case "maximum":
+      return new RequestError(path, `must be between 0 and 1, ${got}`);
+    case "minItems":
+      return new RequestError(path, "expected a non-empty array, got an empty one");
+    case "pattern":
+      return new RequestError(path, `expected a non-blank string, ${got}`);
+    default:
+      return new RequestError(path, rule ?? `${e.message ?? "is not valid"}, ${got}`);
+  }
+}
 
 /**
  * Checks a parsed JSON request and returns it typed.
@@ -127,252 +190,128 @@ const KNOWN_KEYS = new Set([
 export function parseEvalRequest(raw: Json): EvalRequest {
   if (!isObject(raw))
     throw new RequestError("$", `expected a request object, got ${describe(raw)}`);
-  for (const key of Object.keys(raw)) {
-    if (!KNOWN_KEYS.has(key)) {
+  const validate = validator();
+  if (!validate(raw)) throw requestError(firstProblem(validate.errors ?? []));
+  checkCounts(raw as unknown as RequestJson);
+  return toRequest(raw as unknown as RequestJson);
+}
+
+/** A request that passed the schema (types as the schema says). */
+interface RequestJson {
+  model: EvalModelId;
+  components: string[];
+  x?: number[];
+  kij?: number[][];
+  constants?: (Record<string, number> | null)[];
+  departure?: DepartureMethod;
+  reference?: "formation" | { kind: "zero-at"; T: number; P: number };
+  idealGas?: "correlation" | "molecular";
+  phase?: PhaseRequest;
+  checkStability?: boolean;
+  states: StateJson[];
+}
+
+interface StateJson {
+  T?: number;
+  P?: number;
+  rho?: number;
+  saturated?: "liquid" | "vapor";
+  quality?: number;
+}
+
+/** The checks a JSON Schema cannot state: sizes tied to the number of components, sums, names. */
+function checkCounts(r: RequestJson): void {
+  const n = r.components.length;
+  if (r.model === "reference") {
+    const ids = referenceFluidIds();
+    if (!ids.includes(r.components[0])) {
       throw new RequestError(
-        `$.${key}`,
-        `unknown field; the request fields are ${[...KNOWN_KEYS].join(", ")}`,
+        "$.components[0]",
+        `no reference equation for ${JSON.stringify(r.components[0])}; available: ${ids.join(", ")}`,
       );
     }
   }
-  const model = raw.model;
-  if (typeof model !== "string")
-    throw new RequestError("$.model", `expected a model name, got ${describe(model)}`);
-  if (!isModelId(model) && model !== "reference") {
-    throw new RequestError(
-      "$.model",
-      `unknown model ${JSON.stringify(model)}; models: ${[...MODEL_IDS, "reference"].join(", ")}`,
-    );
-  }
-  const comps = raw.components;
-  if (!Array.isArray(comps) || comps.length === 0) {
-    throw new RequestError(
-      "$.components",
-      `expected a non-empty array of component ids, got ${describe(comps)}`,
-    );
-  }
-  comps.forEach((c, i) => {
-    if (typeof c !== "string" || c.trim() === "") {
-      throw new RequestError(`$.components[${i}]`, `expected a component id, got ${describe(c)}`);
-    }
-  });
-  const n = comps.length;
-  if (model === "reference") checkReferenceRequest(raw, comps as string[]);
-  let x: number[];
-  if (raw.x === undefined) {
+  if (r.x === undefined) {
     if (n !== 1) throw new RequestError("$.x", `mole fractions are required for ${n} components`);
-    x = [1];
   } else {
-    if (!Array.isArray(raw.x) || raw.x.length !== n) {
-      throw new RequestError(
-        "$.x",
-        `expected an array of ${n} mole fractions, got ${describe(raw.x)}`,
-      );
+    if (r.x.length !== n) {
+      throw new RequestError("$.x", `expected an array of ${n} mole fractions, got ${r.x.length}`);
     }
-    x = raw.x.map((v, i) => number(v, `$.x[${i}]`));
-    x.forEach((v, i) => {
-      if (!(v >= 0 && v <= 1))
-        throw new RequestError(`$.x[${i}]`, `a mole fraction must be between 0 and 1, got ${v}`);
-    });
-    const sum = x.reduce((p, q) => p + q, 0);
+    const sum = r.x.reduce((p, q) => p + q, 0);
     if (!(Math.abs(sum - 1) <= 1e-9)) {
       throw new RequestError("$.x", `mole fractions must sum to 1 within 1e-9, they sum to ${sum}`);
     }
   }
-  let kij: number[][] | undefined;
-  if (raw.kij !== undefined) {
-    if (!Array.isArray(raw.kij) || raw.kij.length !== n) {
-      throw new RequestError("$.kij", `expected an ${n} x ${n} matrix, got ${describe(raw.kij)}`);
+  if (r.kij !== undefined) {
+    if (r.kij.length !== n) {
+      throw new RequestError("$.kij", `expected an ${n} x ${n} matrix, got ${r.kij.length} rows`);
     }
-    kij = raw.kij.map((row, i) => {
-      if (!Array.isArray(row) || row.length !== n) {
-        throw new RequestError(
-          `$.kij[${i}]`,
-          `expected a row of ${n} numbers, got ${describe(row)}`,
-        );
+    r.kij.forEach((row, i) => {
+      if (row.length !== n) {
+        throw new RequestError(`$.kij[${i}]`, `expected a row of ${n} numbers, got ${row.length}`);
       }
-      return row.map((v, j) => number(v, `$.kij[${i}][${j}]`));
     });
   }
-  let constants: (ConstantOverrides | undefined)[] | undefined;
-  if (raw.constants !== undefined) {
-    if (!Array.isArray(raw.constants) || raw.constants.length !== n) {
-      throw new RequestError(
-        "$.constants",
-        `expected an array of ${n} entries (null or {} keeps the table), got ${describe(raw.constants)}`,
-      );
-    }
-    constants = raw.constants.map((c, i) => {
-      const path = `$.constants[${i}]`;
-      if (c === null) return undefined;
-      if (!isObject(c))
-        throw new RequestError(path, `expected an object or null, got ${describe(c)}`);
-      const names: Record<string, keyof ConstantOverrides> = {
-        Tc: "criticalTemperatureK",
-        Pc: "criticalPressurePa",
-        omega: "acentricFactor",
-        M: "molarMassKgPerMol",
-        Vc: "criticalVolumeM3PerMol",
-      };
-      const out: ConstantOverrides = {};
-      for (const [key, value] of Object.entries(c)) {
-        const field = names[key];
-        if (!field)
-          throw new RequestError(
-            `${path}.${key}`,
-            `unknown constant; use Tc (K), Pc (Pa), omega, M (kg/mol), Vc (m3/mol)`,
-          );
-        const v = number(value, `${path}.${key}`);
-        if (key !== "omega" && !(v > 0))
-          throw new RequestError(`${path}.${key}`, `must be > 0, got ${v}`);
-        out[field] = v;
-      }
-      return out;
-    });
-  }
-  const departure = oneOf(
-    raw.departure,
-    "$.departure",
-    ["closed-form", "numeric"] as const,
-    "closed-form",
-  );
-  const idealGas = oneOf(
-    raw.idealGas,
-    "$.idealGas",
-    ["correlation", "molecular"] as const,
-    "correlation",
-  );
-  const phase = oneOf(raw.phase, "$.phase", ["stable", "liquid", "vapor"] as const, "stable");
-  const checkStability = raw.checkStability ?? false;
-  if (typeof checkStability !== "boolean") {
+  if (r.constants !== undefined && r.constants.length !== n) {
     throw new RequestError(
-      "$.checkStability",
-      `expected true or false, got ${describe(raw.checkStability)}`,
+      "$.constants",
+      `expected an array of ${n} entries (null or {} keeps the table), got ${r.constants.length}`,
     );
   }
-  let reference: ReferenceState = { kind: "formation" };
-  if (raw.reference !== undefined && raw.reference !== "formation") {
-    const r = raw.reference;
-    if (!isObject(r) || r.kind !== "zero-at") {
+  r.states.forEach((s, i) => {
+    if ((s.saturated !== undefined || s.quality !== undefined) && n !== 1) {
       throw new RequestError(
-        "$.reference",
-        `expected "formation" or {"kind": "zero-at", "T": K, "P": Pa}, got ${describe(r)}`,
+        `$.states[${i}]`,
+        `saturated and quality states are pure-fluid states; the request has ${n} components`,
       );
     }
-    const T = number(r.T, "$.reference.T");
-    const P = number(r.P, "$.reference.P");
-    if (!(T > 0)) throw new RequestError("$.reference.T", `must be > 0 K, got ${T}`);
-    if (!(P > 0)) throw new RequestError("$.reference.P", `must be > 0 Pa, got ${P}`);
-    reference = { kind: "zero-at", temperatureK: T, pressurePa: P };
-  }
-  if (!Array.isArray(raw.states) || raw.states.length === 0) {
-    throw new RequestError(
-      "$.states",
-      `expected a non-empty array of states, got ${describe(raw.states)}`,
-    );
-  }
-  const states: EvalState[] = raw.states.map((s, i) => parseState(s, `$.states[${i}]`, n));
+  });
+}
+
+const CONSTANT_NAMES: Record<string, keyof ConstantOverrides> = {
+  Tc: "criticalTemperatureK",
+  Pc: "criticalPressurePa",
+  omega: "acentricFactor",
+  M: "molarMassKgPerMol",
+  Vc: "criticalVolumeM3PerMol",
+};
+
+/** The typed request, defaults filled in (the schema has checked every field). */
+function toRequest(r: RequestJson): EvalRequest {
+  const reference: ReferenceState =
+    r.reference === undefined || r.reference === "formation"
+      ? { kind: "formation" }
+      : { kind: "zero-at", temperatureK: r.reference.T, pressurePa: r.reference.P };
   return {
-    model,
-    components: comps as string[],
-    x,
-    kij,
-    constants,
-    departure,
+    model: r.model,
+    components: r.components,
+    x: r.x ?? [1],
+    kij: r.kij,
+    constants: r.constants?.map((c) => {
+      if (c === null) return undefined;
+      const out: ConstantOverrides = {};
+      for (const [key, value] of Object.entries(c)) out[CONSTANT_NAMES[key]] = value;
+      return out;
+    }),
+    departure: r.departure ?? "closed-form",
     reference,
-    idealGas,
-    phase,
-    checkStability,
-    states,
+    idealGas: r.idealGas ?? "correlation",
+    phase: r.phase ?? "stable",
+    checkStability: r.checkStability ?? false,
+    states: r.states.map(toState),
   };
 }
 
-const STATE_FORMS =
-  '{"T": K, "P": Pa}, {"T": K, "rho": mol/m3}, {"T": K or "P": Pa, "saturated": "liquid"|"vapor"} ' +
-  'or {"T": K or "P": Pa, "quality": 0..1}';
-const STATE_KEYS = new Set(["T", "P", "rho", "saturated", "quality"]);
-
-/** One state of the request; the form is decided by which fields are present. */
-function parseState(s: Json, path: string, componentCount: number): EvalState {
-  if (!isObject(s)) throw new RequestError(path, `expected ${STATE_FORMS}, got ${describe(s)}`);
-  for (const key of Object.keys(s)) {
-    if (!STATE_KEYS.has(key)) {
-      throw new RequestError(`${path}.${key}`, `unknown state field; the forms are ${STATE_FORMS}`);
-    }
+/** One state; its form (checked by the schema) is decided by which fields are present. */
+function toState(s: StateJson): EvalState {
+  if (s.saturated !== undefined || s.quality !== undefined) {
+    const saturated = s.saturated;
+    const quality = saturated !== undefined ? (saturated === "liquid" ? 0 : 1) : s.quality!;
+    return s.T !== undefined
+      ? { kind: "TQ", T: s.T, quality, saturated }
+      : { kind: "PQ", P: s.P!, quality, saturated };
   }
-  const has = (key: string): boolean => s[key] !== undefined;
-  if (has("saturated") || has("quality")) {
-    if (has("saturated") && has("quality"))
-      throw new RequestError(path, "give saturated or quality, not both");
-    if (has("rho"))
-      throw new RequestError(
-        `${path}.rho`,
-        "a saturated or quality state is fixed by T or P alone",
-      );
-    if (has("T") === has("P"))
-      throw new RequestError(
-        path,
-        "a saturated or quality state needs exactly one of T (K) or P (Pa)",
-      );
-    if (componentCount !== 1) {
-      throw new RequestError(
-        path,
-        `saturated and quality states are pure-fluid states; the request has ${componentCount} components`,
-      );
-    }
-    let quality: number;
-    let saturated: "liquid" | "vapor" | undefined;
-    if (has("saturated")) {
-      saturated = oneOf(s.saturated, `${path}.saturated`, ["liquid", "vapor"] as const, "liquid");
-      quality = saturated === "liquid" ? 0 : 1;
-    } else {
-      // the range 0..1 is checked by the library (a bad value gives this state an error entry)
-      quality = number(s.quality, `${path}.quality`);
-    }
-    return has("T")
-      ? { kind: "TQ", T: number(s.T, `${path}.T`), quality, saturated }
-      : { kind: "PQ", P: number(s.P, `${path}.P`), quality, saturated };
-  }
-  const T = number(s.T, `${path}.T`);
-  if (has("P") && has("rho")) throw new RequestError(path, "give P or rho, not both");
-  if (has("P")) return { kind: "TP", T, P: number(s.P, `${path}.P`) };
-  if (has("rho")) return { kind: "TRho", T, rho: number(s.rho, `${path}.rho`) };
-  throw new RequestError(path, "missing P (Pa), rho (mol/m3), saturated or quality");
-}
-
-/**
- * Model "reference": one component with a reference equation, in the publication's reference
- * state and ideal part, so the fields that would change either are refused.
- */
-function checkReferenceRequest(raw: Record<string, Json>, components: string[]): void {
-  const ids = referenceFluidIds();
-  if (components.length !== 1) {
-    throw new RequestError(
-      "$.components",
-      `model "reference" takes one component (one of ${ids.join(", ")}), got ${components.length}`,
-    );
-  }
-  if (!ids.includes(components[0])) {
-    throw new RequestError(
-      "$.components[0]",
-      `no reference equation for ${JSON.stringify(components[0])}; available: ${ids.join(", ")}`,
-    );
-  }
-  const fixed: [string, string][] = [
-    ["kij", "a pure fluid has no binary interaction parameters"],
-    ["constants", "the reference equation carries its own constants"],
-    ["idealGas", "the reference equation carries its own ideal-gas part"],
-    ["reference", "results are in the reference state of the equation's publication"],
-  ];
-  for (const [key, why] of fixed) {
-    if (raw[key] !== undefined) {
-      throw new RequestError(`$.${key}`, `not accepted with model "reference": ${why}`);
-    }
-  }
-  if (raw.departure !== undefined && raw.departure !== "closed-form") {
-    throw new RequestError(
-      "$.departure",
-      `model "reference" is evaluated from its own residual Helmholtz energy ("closed-form"), got ${describe(raw.departure)}`,
-    );
-  }
+  return s.P !== undefined
+    ? { kind: "TP", T: s.T!, P: s.P }
+    : { kind: "TRho", T: s.T!, rho: s.rho! };
 }

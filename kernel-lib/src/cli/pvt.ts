@@ -20,6 +20,7 @@ import { IsochorError } from "../errors.js";
 import { departuresFromPvt } from "../pvt/departuresFromPvt.js";
 import type { PvtRouteOptions, PvtRouteResult } from "../pvt/departuresFromPvt.js";
 import { readPvtCsvFile } from "../pvt/readPvtCsvFile.js";
+import { parseCliArgs } from "./cliArgs.js";
 import type { CliIo } from "./io.js";
 
 const USAGE = `usage: isochor pvt <file.csv> [options]
@@ -44,72 +45,67 @@ interface Args {
   route: PvtRouteOptions;
 }
 
+const OPTIONS = {
+  component: { needs: "an id" },
+  M: { needs: "a molar mass in kg/mol" },
+  route: { needs: "auto, isochores or surface" },
+  isotherms: { needs: "temperatures in K, comma-separated" },
+  seed: { needs: "an integer" },
+  samples: { needs: "an integer" },
+} as const;
+
+/** A number written as a plain decimal (no hex, no blanks, no "Infinity"); else NaN. */
+function decimal(v: string | undefined): number {
+  return v !== undefined && /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(v)
+    ? Number(v)
+    : Number.NaN;
+}
+
 function parseArgs(argv: string[]): Args | { error: string } | "help" {
-  let file: string | undefined;
-  let molarMassKgPerMol: number | undefined;
-  let component: string | undefined;
+  const args = parseCliArgs(argv, OPTIONS);
+  if (args === "help" || "error" in args) return args;
+  const v = args.values;
   const route: PvtRouteOptions = {};
-  for (let i = 0; i < argv.length; i++) {
-    const arg = argv[i] as string;
-    if (arg === "-h" || arg === "--help") return "help";
-    const eq = arg.indexOf("=");
-    const name = arg.startsWith("--") && eq > 0 ? arg.slice(0, eq) : arg;
-    const value = (): string | undefined =>
-      arg.startsWith("--") && eq > 0 ? arg.slice(eq + 1) : argv[++i];
-    const num = (v: string | undefined) =>
-      v !== undefined && /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(v) ? Number(v) : Number.NaN;
-    switch (name) {
-      case "--component":
-        component = value();
-        if (!component) return { error: "--component needs an id" };
-        break;
-      case "--M": {
-        const m = num(value());
-        if (!(m > 0 && m <= 5))
-          return { error: "--M needs a molar mass in kg/mol, > 0 and <= 5 (e.g. 0.04401 for CO2)" };
-        molarMassKgPerMol = m;
-        break;
-      }
-      case "--route": {
-        const r = value();
-        if (r !== "auto" && r !== "isochores" && r !== "surface")
-          return { error: "--route must be auto, isochores or surface" };
-        route.route = r;
-        break;
-      }
-      case "--isotherms": {
-        const list = (value() ?? "").split(",").map((s) => num(s.trim()));
-        if (list.length === 0 || !list.every((t) => t > 0 && t < Infinity))
-          return { error: "--isotherms needs temperatures in K, > 0, comma-separated" };
-        route.isothermsK = list;
-        break;
-      }
-      case "--seed": {
-        const s = num(value());
-        if (!(Number.isInteger(s) && s >= 0 && s < 2 ** 32))
-          return { error: "--seed needs an integer in [0, 2^32)" };
-        route.seed = s;
-        break;
-      }
-      case "--samples": {
-        const s = num(value());
-        if (!(Number.isInteger(s) && s >= 0 && s <= 100000))
-          return { error: "--samples needs an integer from 0 to 100000" };
-        route.monteCarloSamples = s;
-        break;
-      }
-      default:
-        if (arg.startsWith("-")) return { error: `unknown option ${JSON.stringify(arg)}` };
-        if (file !== undefined) return { error: "give one CSV file" };
-        file = arg;
-    }
+  let molarMassKgPerMol: number | undefined;
+  if (v.M !== undefined) {
+    const m = decimal(v.M);
+    if (!(m > 0 && m <= 5))
+      return { error: "--M needs a molar mass in kg/mol, > 0 and <= 5 (e.g. 0.04401 for CO2)" };
+    molarMassKgPerMol = m;
   }
+  if (v.route !== undefined) {
+    const r = v.route;
+    if (r !== "auto" && r !== "isochores" && r !== "surface")
+      return { error: "--route must be auto, isochores or surface" };
+    route.route = r;
+  }
+  if (v.isotherms !== undefined) {
+    const list = v.isotherms.split(",").map((s) => decimal(s.trim()));
+    if (list.length === 0 || !list.every((t) => t > 0 && t < Infinity))
+      return { error: "--isotherms needs temperatures in K, > 0, comma-separated" };
+    route.isothermsK = list;
+  }
+  if (v.seed !== undefined) {
+    const s = decimal(v.seed);
+    if (!(Number.isInteger(s) && s >= 0 && s < 2 ** 32))
+      return { error: "--seed needs an integer in [0, 2^32)" };
+    route.seed = s;
+  }
+  if (v.samples !== undefined) {
+    const s = decimal(v.samples);
+    if (!(Number.isInteger(s) && s >= 0 && s <= 100000))
+      return { error: "--samples needs an integer from 0 to 100000" };
+    route.monteCarloSamples = s;
+  }
+  if (args.positionals.length > 1) return { error: "give one CSV file" };
+  const file = args.positionals[0];
   if (file === undefined) return { error: "give a CSV file" };
-  if (component !== undefined) {
+  if (v.component !== undefined) {
+    if (v.component === "") return { error: "--component needs an id" };
     if (molarMassKgPerMol !== undefined)
       return { error: "give either --component or --M, not both" };
     try {
-      const c = getComponent(component);
+      const c = getComponent(v.component);
       molarMassKgPerMol = c.molarMassKgPerMol;
       route.criticalTemperatureK = c.criticalTemperatureK;
     } catch (e) {

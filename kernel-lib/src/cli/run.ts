@@ -9,6 +9,7 @@ import * as path from "node:path";
 import { IsochorError } from "../errors.js";
 import { RunnerError } from "../records/runnerError.js";
 import type { RunProgress } from "../records/runNotebooks.js";
+import { parseCliArgs } from "./cliArgs.js";
 import type { CliIo } from "./io.js";
 
 const USAGE = `usage: isochor run [--out <dir>] <notebook.ipynb...>
@@ -33,42 +34,32 @@ interface ParsedArgs {
   notebooks: string[];
 }
 
+const OPTIONS = {
+  out: { needs: "a folder" },
+  "cell-timeout": { needs: "a number of seconds > 0" },
+} as const;
+
 function parseArgs(argv: string[], cwd: string): ParsedArgs | { error: string } | "help" {
-  let outDir = path.join(cwd, "out", "records");
+  const args = parseCliArgs(argv, OPTIONS);
+  if (args === "help" || "error" in args) return args;
+  const { out, "cell-timeout": timeout } = args.values;
+  if (out === "") return { error: "--out needs a folder" };
   let cellTimeoutMs: number | undefined;
-  const notebooks: string[] = [];
-  for (let i = 0; i < argv.length; i++) {
-    const arg = argv[i];
-    if (arg === "-h" || arg === "--help") return "help";
-    if (arg === "--out" || arg.startsWith("--out=")) {
-      const value = arg === "--out" ? argv[++i] : arg.slice("--out=".length);
-      if (value === undefined || value === "") return { error: "--out needs a folder" };
-      outDir = path.resolve(cwd, value);
-    } else if (arg === "--cell-timeout" || arg.startsWith("--cell-timeout=")) {
-      const value = arg === "--cell-timeout" ? argv[++i] : arg.slice("--cell-timeout=".length);
-      const seconds = Number(value);
-      if (
-        value === undefined ||
-        value.trim() === "" ||
-        !(seconds > 0) ||
-        !Number.isFinite(seconds)
-      ) {
-        return {
-          error: `--cell-timeout needs a number of seconds > 0; received ${JSON.stringify(value ?? null)}`,
-        };
-      }
-      cellTimeoutMs = seconds * 1000;
-    } else if (arg === "--") {
-      notebooks.push(...argv.slice(i + 1));
-      break;
-    } else if (arg.startsWith("-")) {
-      return { error: `unknown option ${JSON.stringify(arg)}` };
-    } else {
-      notebooks.push(arg);
+  if (timeout !== undefined) {
+    const seconds = Number(timeout);
+    if (timeout.trim() === "" || !(seconds > 0) || !Number.isFinite(seconds)) {
+      return {
+        error: `--cell-timeout needs a number of seconds > 0; received ${JSON.stringify(timeout)}`,
+      };
     }
+    cellTimeoutMs = seconds * 1000;
   }
-  if (notebooks.length === 0) return { error: "no notebook given" };
-  return { outDir, notebooks, cellTimeoutMs };
+  if (args.positionals.length === 0) return { error: "no notebook given" };
+  return {
+    outDir: out !== undefined ? path.resolve(cwd, out) : path.join(cwd, "out", "records"),
+    notebooks: [...args.positionals],
+    cellTimeoutMs,
+  };
 }
 
 function seconds(ms: number): string {

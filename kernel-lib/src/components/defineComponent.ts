@@ -5,7 +5,7 @@
  */
 import { R } from "../constants.js";
 import { InputError, type ResultWarning } from "../errors.js";
-import { correlationCp } from "../idealgas/cpCorrelation.js";
+import { correlationCp } from "./cpValue.js";
 import type { Component, ComponentOrigin, ComponentSources, CpCorrelation } from "./types.js";
 
 /** Constants for `defineComponent`. SI units; optional values may be omitted. */

@@ -6,7 +6,7 @@
  */
 import { UnknownNameError } from "../errors.js";
 import { AmbiguousNameError } from "./ambiguousNameError.js";
-import { editDistance } from "./editDistance.js";
+import { editDistance } from "../numerics/editDistance.js";
 import { tableComponents } from "./table.js";
 import type { Component } from "./types.js";
 

@@ -26,4 +26,4 @@ export type { CheckMoleFractionsOptions } from "./composition.js";
 export { AmbiguousNameError } from "./ambiguousNameError.js";
 export { parseFormula } from "./formula.js";
 export type { ElementCounts } from "./formula.js";
-export { editDistance } from "./editDistance.js";
+export { editDistance } from "../numerics/editDistance.js";

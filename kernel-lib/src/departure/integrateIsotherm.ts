@@ -31,7 +31,11 @@
  */
 import { R as R_CODATA } from "../constants.js";
 import { integrateAdaptive } from "../numerics/gaussKronrod.js";
-import type { ResidualDerivatives, ResidualDerivativesDraft } from "../eos/types.js";
+import type {
+  IntegratedResidual,
+  IntegrationErrors,
+  ResidualDerivativesDraft,
+} from "../eos/types.js";
 import type { PressureEvaluator, PressureSeries } from "./pressureEvaluator.js";
 
 /** Options of {@link integrateResidual}. */
@@ -51,26 +55,9 @@ export interface IntegrationOptions {
 }
 
 /** Absolute error estimates of the integrated quantities (dimensionless). */
-export interface IntegrationErrors {
-  /** alpha_r */
-  readonly a: number;
-  /** T d(alpha_r)/dT, including the derivative error of a finite-difference evaluator. */
-  readonly aT: number;
-  /** T^2 d2(alpha_r)/dT2, same. */
-  readonly aTT: number;
-  /** d(n alpha_r)/dn_i, one per component (quadrature plus mole-fraction differencing). */
-  readonly dnA?: readonly number[];
-}
-
-/** Result of {@link integrateResidual}. */
-export interface IntegratedResidual {
-  readonly derivatives: ResidualDerivatives;
-  readonly errorEstimate: IntegrationErrors;
-  /** Pressure-function evaluations used (hyper-dual evaluations count once). */
-  readonly evaluations: number;
-  /** How the temperature derivatives were obtained. */
-  readonly derivativeMethod: string;
-}
+// IntegrationErrors and IntegratedResidual (the result of integrateResidual) are declared with the
+// model interface (eos/types.ts), where a pressure-function model's `integrate` returns them
+export type { IntegrationErrors, IntegratedResidual };
 
 const COMPOSITION_STEP = 1e-5;
 

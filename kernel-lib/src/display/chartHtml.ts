@@ -21,6 +21,7 @@
  */
 import { randomBytes } from "node:crypto";
 import { InputError } from "../errors.js";
+import { chartTitle } from "./chartTitle.js";
 import { escapeHtml, jsonForScript } from "./escapeHtml.js";
 import { renderSvg } from "./renderSvg.js";
 import { vegaRuntimeScript } from "./vegaRuntime.js";
@@ -82,17 +83,6 @@ function bootScript(id: string, runtimeWaitMs: number): string {
   if (document.readyState === "loading") document.addEventListener("DOMContentLoaded", start);
   else start();
 })();`;
-}
-
-/** The chart's title text, for the static image's alt text. */
-function chartTitle(spec: VegaLiteSpec): string | undefined {
-  const title = spec.title;
-  if (typeof title === "string") return title;
-  if (Array.isArray(title)) return title.join(" ");
-  if (title && typeof title === "object") {
-    return Array.isArray(title.text) ? title.text.join(" ") : String(title.text);
-  }
-  return undefined;
 }
 
 /**

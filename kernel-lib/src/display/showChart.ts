@@ -4,6 +4,7 @@
  */
 import { chartHtml } from "./chartHtml.js";
 import { displaySession } from "./displaySession.js";
+import { displayHtml } from "./tslabDisplay.js";
 import type { VegaLiteSpec } from "./vegaLiteSpec.js";
 
 /** Options of {@link showChart}. */
@@ -16,11 +17,6 @@ export interface ShowChartOptions {
   includeRuntime?: boolean;
   /** Caption under the chart, as plain text (escaped). Default: none. */
   caption?: string;
-}
-
-/** The part of tslab's public module used here (tslab is loaded lazily: it pulls in TypeScript). */
-interface TslabDisplay {
-  display: { html(s: string): void };
 }
 
 /**
@@ -39,18 +35,10 @@ export async function showChart(spec: VegaLiteSpec, options: ShowChartOptions = 
   if (includeRuntime) session.runtimeSent = true;
   try {
     const html = await chartHtml(spec, { includeRuntime, caption: options.caption });
-    // eslint-disable-next-line @typescript-eslint/no-require-imports
-    const tslab = require("tslab") as TslabDisplay;
-    try {
-      tslab.display.html(html);
-    } catch (error) {
-      throw new Error(
-        "showChart displays in a tslab notebook cell (or under `isochor run`); outside one, use " +
-          "chartHtml() for HTML or savePng() for an image. tslab said: " +
-          (error instanceof Error ? error.message : String(error)),
-        { cause: error },
-      );
-    }
+    displayHtml(html, {
+      name: "showChart",
+      otherwise: "use chartHtml() for HTML or savePng() for an image",
+    });
   } catch (error) {
     session.runtimeSent = wasSent;
     throw error;

@@ -2,7 +2,7 @@
  * Models by name: the one place that maps the `isochor eval` model ids to constructors.
  */
 import { InputError, UnknownNameError } from "../errors.js";
-import { editDistance } from "../components/editDistance.js";
+import { editDistance } from "../numerics/editDistance.js";
 import type { ModelComponent } from "./modelComponent.js";
 import type { ModelWithPressure } from "./pressureFunction.js";
 import type { ResidualModel } from "./types.js";

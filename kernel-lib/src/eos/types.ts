@@ -11,6 +11,9 @@
  * Then Z = 1 + aD, and for example u_res/RT = -aT, s_res/R = -a - aT (same T and density).
  */
 import type { ResultWarning } from "../errors.js";
+import type { HyperDual } from "../numerics/hyperDual.js";
+import type { ModelComponent } from "./modelComponent.js";
+import type { InteractionMatrix } from "./interaction/interactionTable.js";
 
 export interface ResidualDerivatives {
   readonly a: number;
@@ -62,6 +65,52 @@ export interface PseudoCriticalPoint {
   readonly rule: string;
 }
 
+/** P(T, rho, x) in Pa with T in K and rho in mol/m3, written with HyperDual arithmetic. */
+export type HyperDualPressure = (
+  temperatureK: HyperDual,
+  densityMolPerM3: HyperDual,
+  x: readonly number[],
+) => HyperDual;
+
+/** Estimated absolute errors of integrated residual derivatives (departure/integrateIsotherm.ts). */
+export interface IntegrationErrors {
+  /** alpha_r */
+  readonly a: number;
+  /** T d(alpha_r)/dT, including the derivative error of a finite-difference evaluator. */
+  readonly aT: number;
+  /** T^2 d2(alpha_r)/dT2, same. */
+  readonly aTT: number;
+  /** d(n alpha_r)/dn_i, one per component (quadrature plus mole-fraction differencing). */
+  readonly dnA?: readonly number[];
+}
+
+/** Residual derivatives obtained by integrating a pressure function, with their error estimates. */
+export interface IntegratedResidual {
+  readonly derivatives: ResidualDerivatives;
+  readonly errorEstimate: IntegrationErrors;
+  /** Pressure-function evaluations used (hyper-dual evaluations count once). */
+  readonly evaluations: number;
+  /** How the temperature derivatives were obtained. */
+  readonly derivativeMethod: string;
+}
+
+/** Saturation starting values, e.g. from a reference equation's published ancillary equations. */
+export interface SaturationEstimate {
+  readonly pressurePa: number;
+  /** mol/m3 */
+  readonly liquidDensityMolPerM3: number;
+  /** mol/m3 */
+  readonly vaporDensityMolPerM3: number;
+}
+
+/** Where a state lies relative to a model's published range. */
+export type ValidityStatus = "inside" | "extrapolated" | "outside";
+
+/**
+ * The model interface. Beside the required members, a model may declare optional capabilities
+ * (closed-form roots, a pressure function, published points, its components' constants, ...);
+ * callers test for the member (`if (model.saturationEstimate)`) and never cast to find one.
+ */
 export interface ResidualModel {
   readonly info: ModelInfo;
   /**
@@ -99,6 +148,16 @@ export interface ResidualModel {
    */
   pseudoCritical?(x: readonly number[]): PseudoCriticalPoint;
   /**
+   * Optional: closed-form second composition derivatives of F = n alpha_r at constant T and V for
+   * one mole (state/fugacity.ts says what each is); when absent they are taken by central
+   * differences of dnA. Used by Newton steps of flashes, saturation points and envelopes.
+   */
+  compositionHessian?(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+  ): { readonly nFij: number[][]; readonly FiT: number[]; readonly rhoDdnA: number[] };
+  /**
    * Optional: warnings for a state outside the model's validity range (empty when inside; the
    * empty list may be shared, so treat the result as read-only).
    */
@@ -107,4 +166,43 @@ export interface ResidualModel {
     densityMolPerM3: number,
     x: readonly number[],
   ): readonly ResultWarning[];
+  /**
+   * Optional: the model's pressure as a hyper-dual function, written independently of its
+   * closed-form alpha_r (built-in models; the numeric departure route integrates it).
+   */
+  readonly pressureFunction?: HyperDualPressure;
+  /**
+   * Optional (models built from a pressure function, departure/pressureModel.ts): the residual
+   * derivatives by integration, with error estimates and the evaluation count.
+   */
+  integrate?(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+    request?: ResidualRequest,
+  ): IntegratedResidual;
+  /**
+   * Optional: the critical constants of the components, model order (built-in models with
+   * corresponding-states parameters); the stability test starts from Wilson K-factors with them.
+   */
+  readonly components?: readonly ModelComponent[];
+  /** Optional: the binary interaction parameters with their provenance (models with mixing rules). */
+  readonly interactions?: InteractionMatrix;
+  /** Optional (pure fluids, e.g. reference equations): saturation estimate at T, K. */
+  saturationEstimate?(temperatureK: number): SaturationEstimate;
+  /** Optional (pure fluids): the published critical point, K, mol/m3, Pa. */
+  readonly critical?: {
+    readonly temperatureK: number;
+    readonly densityMolPerM3: number;
+    readonly pressurePa: number;
+  };
+  /** Optional (pure fluids): the published triple point, K and Pa. */
+  readonly triple?: { readonly temperatureK: number; readonly pressurePa: number };
+  /**
+   * Optional (models with a published range, e.g. reference equations): where (T, P) lies
+   * relative to the range and its extrapolation range.
+   */
+  validityStatus?(temperatureK: number, pressurePa: number): ValidityStatus;
+  /** Optional: the published range in words, for messages (with `validityStatus`). */
+  readonly validityDescription?: string;
 }

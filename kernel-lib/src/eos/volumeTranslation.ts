@@ -79,7 +79,13 @@ export function withVolumeTranslation(
     for (let i = 0; i < n; i++) c += x[i] * shifts[i];
     return c;
   };
-  const model: ResidualModel = {
+  const basePressure = hasPressureFunction(base) ? base.pressureFunction : undefined;
+  const model: { -readonly [K in keyof ResidualModel]: ResidualModel[K] } = {
+    // P(T, rho) = P_e(T, rho / (1 + c rho))
+    ...(basePressure && {
+      pressureFunction: (T: HyperDual, rho: HyperDual, x: readonly number[]): HyperDual =>
+        basePressure(T, rho.div(rho.mul(mixShift(x)).add(1)), x),
+    }),
     info: {
       ...base.info,
       id: `${base.info.id}+peneloux`,
@@ -136,15 +142,6 @@ export function withVolumeTranslation(
       return base.checkValidity ? base.checkValidity(T, rho / (1 + c * rho), x) : [];
     },
   };
-  if (hasPressureFunction(base)) {
-    const p = base.pressureFunction;
-    // P(T, rho) = P_e(T, rho / (1 + c rho))
-    (model as ResidualModel & { pressureFunction?: unknown }).pressureFunction = (
-      T: HyperDual,
-      rho: HyperDual,
-      x: readonly number[],
-    ): HyperDual => p(T, rho.div(rho.mul(mixShift(x)).add(1)), x);
-  }
   if (base.densityRoots) {
     const roots = base.densityRoots.bind(base);
     model.densityRoots = (T: number, P: number, x: readonly number[]): number[] => {

@@ -5,6 +5,7 @@
  * offline, in exported HTML and in the records.
  */
 import { displaySession } from "../display/displaySession.js";
+import { displayHtml } from "../display/tslabDisplay.js";
 import { vegaRuntimeScript } from "../display/vegaRuntime.js";
 import type { ExplorerOptionsByKind } from "./createExplorerState.js";
 import { explorerHtml, type ExplorerHtmlOptions } from "./explorerHtml.js";
@@ -18,11 +19,6 @@ export interface ShowExplorerOptions extends ExplorerHtmlOptions {
    * (after reloading the page without restarting the kernel). Default: only the first time.
    */
   includeScripts?: boolean;
-}
-
-/** The part of tslab's public module used here (loaded lazily: it pulls in TypeScript). */
-interface TslabDisplay {
-  display: { html(s: string): void };
 }
 
 /**
@@ -53,18 +49,10 @@ export async function showExplorer<K extends ExplorerKind>(
       (sendRuntime ? vegaRuntimeScript() + "\n" : "") +
       (sendBundle ? bundle.script + "\n" : "") +
       fragment;
-    // eslint-disable-next-line @typescript-eslint/no-require-imports
-    const tslab = require("tslab") as TslabDisplay;
-    try {
-      tslab.display.html(html);
-    } catch (error) {
-      throw new Error(
-        "showExplorer displays in a tslab notebook cell (or under `isochor run`); outside one, " +
-          "use explorerHtml() with vegaRuntimeScript() and widgetsBundleScript(). tslab said: " +
-          (error instanceof Error ? error.message : String(error)),
-        { cause: error },
-      );
-    }
+    displayHtml(html, {
+      name: "showExplorer",
+      otherwise: "use explorerHtml() with vegaRuntimeScript() and widgetsBundleScript()",
+    });
   } catch (error) {
     session.runtimeSent = runtimeWasSent;
     if (!bundleWasSent) session.scriptsSent.delete(bundle.key);

@@ -21,18 +21,12 @@
  */
 import { R } from "../constants.js";
 import type { AlyLeeCp, CpCorrelation, PolynomialCp } from "../components/types.js";
+import { correlationCp } from "../components/cpValue.js";
 import { STANDARD_TEMPERATURE_K } from "./types.js";
 
-/** Ideal-gas isobaric heat capacity cp°(T), J/(mol K). No range check (callers check ranges). */
-export function correlationCp(correlation: CpCorrelation, temperatureK: number): number {
-  if (correlation.form === "polynomial") {
-    const a = segmentFor(correlation, temperatureK).coefficients;
-    let sum = 0;
-    for (let k = a.length - 1; k >= 0; k--) sum = sum * temperatureK + a[k];
-    return R * sum;
-  }
-  return alyLeeCp(correlation, temperatureK);
-}
+// cp°(T) itself is evaluated with the component data (components/cpValue.ts), where
+// defineComponent checks it; the integrals below are the ideal-gas layer's
+export { correlationCp };
 
 /** int_{T1}^{T2} cp° dT, J/mol (closed form). */
 export function correlationCpIntegral(
@@ -90,14 +84,6 @@ function polynomialCpOverTPiece(a: readonly number[], lo: number, hi: number): n
   return R * (a[0] * Math.log1p((hi - lo) / lo) + (hi - lo) * sum);
 }
 
-function segmentFor(correlation: PolynomialCp, temperatureK: number) {
-  const segments = correlation.segments;
-  for (let i = 0; i < segments.length - 1; i++) {
-    if (temperatureK < segments[i].maxTemperatureK) return segments[i];
-  }
-  return segments[segments.length - 1];
-}
-
 function integratePiecewise(
   correlation: PolynomialCp,
   t1K: number,
@@ -118,11 +104,6 @@ function integratePiecewise(
   return total;
 }
 
-/** x / sinh x, with its limit 1 at x = 0 (and 0 when sinh overflows). */
-function xOverSinh(x: number): number {
-  return x === 0 ? 1 : x / Math.sinh(x);
-}
-
 /** x coth x = x / tanh x, with its limit 1 at x = 0. */
 function xCoth(x: number): number {
   return x === 0 ? 1 : x / Math.tanh(x);
@@ -138,14 +119,6 @@ function logAbsSinh(x: number): number {
 function logCosh(x: number): number {
   const ax = Math.abs(x);
   return ax + Math.log((1 + Math.exp(-2 * ax)) / 2);
-}
-
-function alyLeeCp(c: AlyLeeCp, t: number): number {
-  const x = c.cK / t;
-  const y = c.eK / t;
-  const bTerm = xOverSinh(x) ** 2;
-  const dTerm = (y / Math.cosh(y)) ** 2;
-  return c.aJPerMolK + c.bJPerMolK * bTerm + c.dJPerMolK * dTerm;
 }
 
 /** Antiderivative of the Aly-Lee cp in T, J/mol. */
@@ -251,7 +224,7 @@ function compilePolynomial(correlation: PolynomialCp): {
   });
   return {
     evaluate(t, out) {
-      // the same segment choice as segmentFor, so cp is bit-for-bit correlationCp
+      // the same segment choice as segmentFor (components/cpValue.ts), so cp is bit-for-bit correlationCp
       let i = 0;
       while (i < last && !(t < compiled[i].maxTemperatureK)) i++;
       const g = compiled[i];

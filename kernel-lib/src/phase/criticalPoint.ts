@@ -12,7 +12,8 @@
 import { InputError, SolverError } from "../errors.js";
 import type { ResidualModel } from "../eos/types.js";
 import { findRootBrent } from "../numerics/brent.js";
-import { criticalGuessOf, gasConstantOf, PURE, requirePure } from "./pureFluid.js";
+import { pressureFromResidual, stiffnessFromResidual } from "../eos/residualRelations.js";
+import { criticalGuessOf, gasConstantOf, PURE, requirePure, stiffnessAt } from "./pureFluid.js";
 
 /** Options of {@link locateCriticalPoint}. */
 export interface CriticalPointOptions {
@@ -41,17 +42,12 @@ function curvature(model: ResidualModel, T: number, rho: number): number {
   const d = model.residual(T, rho, PURE);
   if (d.aDDD !== undefined) return 2 * d.aD + 4 * d.aDD + d.aDDD;
   const h = 1e-5 * rho;
-  const up = model.residual(T, rho + h, PURE);
-  const dn = model.residual(T, rho - h, PURE);
-  const sUp = 1 + 2 * up.aD + up.aDD;
-  const sDn = 1 + 2 * dn.aD + dn.aDD;
+  const sUp = stiffnessAt(model, T, rho + h);
+  const sDn = stiffnessAt(model, T, rho - h);
   return (rho * (sUp - sDn)) / (2 * h);
 }
 
-function stiffness(model: ResidualModel, T: number, rho: number): number {
-  const d = model.residual(T, rho, PURE);
-  return 1 + 2 * d.aD + d.aDD;
-}
+const stiffness = stiffnessAt;
 
 /**
  * Critical point of a pure-fluid model from its own equations (cached per model object: the first
@@ -121,9 +117,9 @@ export function locateCriticalPoint(
   const result: CriticalPointResult = {
     temperatureK: T,
     densityMolPerM3: rho,
-    pressurePa: rho * Rg * T * (1 + d.aD),
+    pressurePa: pressureFromResidual(T, rho, d.aD, Rg),
     iterations: root.iterations,
-    residual: { stiffness: 1 + 2 * d.aD + d.aDD, curvature: curvature(model, T, rho) },
+    residual: { stiffness: stiffnessFromResidual(d), curvature: curvature(model, T, rho) },
     method:
       "nested Brent: inflection density from d2P/drho2 = 0, temperature from (dP/drho)_T = 0 there",
   };

@@ -11,7 +11,7 @@ import { InputError } from "../errors.js";
 import type { ResidualModel } from "../eos/types.js";
 import { integrateAdaptive } from "../numerics/gaussKronrod.js";
 import { requirePositive } from "../validate.js";
-import { gasConstantOf, PURE } from "./pureFluid.js";
+import { gasConstantOf, PURE, pressureAt, stiffnessAt } from "./pureFluid.js";
 import {
   saturationAtTemperature,
   type SaturationOptions,
@@ -127,14 +127,8 @@ export function equalAreaIsotherm(
   const vV = 1 / sat.vaporDensityMolPerM3;
   const pSat = sat.pressurePa;
   const vMin = Math.max(vL / liquidSpan, 1.000001 / model.maxDensity(T, PURE));
-  const pressure = (v: number): number => {
-    const rho = 1 / v;
-    return rho * Rg * T * (1 + model.residual(T, rho, PURE).aD);
-  };
-  const stiffness = (v: number): number => {
-    const d = model.residual(T, 1 / v, PURE);
-    return 1 + 2 * d.aD + d.aDD;
-  };
+  const pressure = (v: number): number => pressureAt(model, T, 1 / v, Rg);
+  const stiffness = (v: number): number => stiffnessAt(model, T, 1 / v);
   const points: IsothermLoopPoint[] = [];
   const push = (v: number, region: IsothermRegion): void => {
     points.push({ molarVolumeM3PerMol: v, pressurePa: pressure(v), region });

@@ -1,7 +1,8 @@
 /**
  * What phase equilibrium of a pure fluid needs from a ResidualModel, and nothing more: pressure,
  * (dP/drho)_T and the density-dependent part of the Gibbs energy along an isotherm. With
- * alpha_r = a and reduced derivatives aD, aDD (eos/types.ts), at temperature T:
+ * alpha_r = a and reduced derivatives aD, aDD (eos/types.ts), at temperature T (the formulas
+ * themselves live in eos/residualRelations.ts):
  *   P = rho R T (1 + aD),    (dP/drho)_T = R T (1 + 2 aD + aDD)
  *   g / RT = ln(rho) + a + aD + f(T)    (f(T): ideal-gas part, equal in both phases: dropped)
  *   d(g/RT)/d(rho) = (1 + 2 aD + aDD) / rho  (so (dg/dP)_T = 1/rho, Gibbs-Duhem).
@@ -11,6 +12,11 @@
 import { R as R_CODATA } from "../constants.js";
 import { InputError } from "../errors.js";
 import type { PseudoCriticalPoint, ResidualModel } from "../eos/types.js";
+import {
+  gibbsAtDensityRT,
+  pressureFromResidual,
+  stiffnessFromResidual,
+} from "../eos/residualRelations.js";
 
 /** The single-component composition vector. */
 export const PURE: readonly number[] = [1];
@@ -53,11 +59,40 @@ export function isothermPoint(
   out: IsothermPoint,
 ): IsothermPoint {
   const d = model.residual(temperatureK, densityMolPerM3, PURE);
-  out.pressurePa = densityMolPerM3 * gasConstant * temperatureK * (1 + d.aD);
-  out.stiffness = 1 + 2 * d.aD + d.aDD;
-  out.gibbsRT = Math.log(densityMolPerM3) + d.a + d.aD;
+  out.pressurePa = pressureFromResidual(temperatureK, densityMolPerM3, d.aD, gasConstant);
+  out.stiffness = stiffnessFromResidual(d);
+  out.gibbsRT = gibbsAtDensityRT(densityMolPerM3, d);
   out.hResRT = d.aD - d.aT;
   return out;
+}
+
+/** Pressure (Pa) of a pure fluid at T (K) and rho (mol/m3). */
+export function pressureAt(
+  model: ResidualModel,
+  temperatureK: number,
+  densityMolPerM3: number,
+  gasConstant: number,
+): number {
+  const aD = model.residual(temperatureK, densityMolPerM3, PURE).aD;
+  return pressureFromResidual(temperatureK, densityMolPerM3, aD, gasConstant);
+}
+
+/** (dP/drho)_T / RT of a pure fluid at T (K) and rho (mol/m3): 1 + 2 aD + aDD. */
+export function stiffnessAt(
+  model: ResidualModel,
+  temperatureK: number,
+  densityMolPerM3: number,
+): number {
+  return stiffnessFromResidual(model.residual(temperatureK, densityMolPerM3, PURE));
+}
+
+/** g/RT less its ideal-gas function of T, of a pure fluid at T (K) and rho (mol/m3). */
+export function gibbsAt(
+  model: ResidualModel,
+  temperatureK: number,
+  densityMolPerM3: number,
+): number {
+  return gibbsAtDensityRT(densityMolPerM3, model.residual(temperatureK, densityMolPerM3, PURE));
 }
 
 /** A fresh {@link IsothermPoint}. */
@@ -65,31 +100,23 @@ export function emptyIsothermPoint(): IsothermPoint {
   return { pressurePa: NaN, stiffness: NaN, gibbsRT: NaN, hResRT: NaN };
 }
 
-/** Hints a model may carry (structural: reference fluids have them, cubic models may not). */
-export interface SaturationHints {
-  /** Saturation estimate at T (e.g. published ancillary equations). */
-  saturationEstimate?(temperatureK: number): {
-    pressurePa: number;
-    liquidDensityMolPerM3: number;
-    vaporDensityMolPerM3: number;
-  };
-  /** Published critical point. */
-  readonly critical?: { temperatureK: number; densityMolPerM3: number; pressurePa: number };
-  /** Published triple point. */
-  readonly triple?: { temperatureK: number; pressurePa: number };
-}
+/**
+ * Hints a model may carry (reference fluids have them, cubic models may not): optional members of
+ * the model interface (eos/types.ts), named together here.
+ */
+export type SaturationHints = Pick<ResidualModel, "saturationEstimate" | "critical" | "triple">;
 
 /** Is there an ancillary saturation estimate on this model? */
 export function hasSaturationEstimate(
   model: ResidualModel,
 ): model is ResidualModel & Required<Pick<SaturationHints, "saturationEstimate">> {
-  return typeof (model as SaturationHints).saturationEstimate === "function";
+  return typeof model.saturationEstimate === "function";
 }
 
 /** A critical-point guess: pseudoCritical() of the model, or a published `critical` field. */
 export function criticalGuessOf(model: ResidualModel): PseudoCriticalPoint | undefined {
   if (model.pseudoCritical) return model.pseudoCritical(PURE);
-  const c = (model as SaturationHints).critical;
+  const c = model.critical;
   if (c) return { ...c, rule: "published critical point" };
   return undefined;
 }

@@ -34,16 +34,20 @@ import {
 import type { ResidualModel } from "../eos/types.js";
 import { findRootBrent } from "../numerics/brent.js";
 import { requireCount, requirePositive } from "../validate.js";
+import { wilsonLnReducedVaporPressure } from "./wilson.js";
 import { locateCriticalPoint, type CriticalPointResult } from "./criticalPoint.js";
+import { gibbsAtDensityRT } from "../eos/residualRelations.js";
 import {
   emptyIsothermPoint,
   gasConstantOf,
+  gibbsAt,
+  pressureAt,
+  stiffnessAt,
   hasSaturationEstimate,
   isothermPoint,
   PURE,
   requirePure,
   type IsothermPoint,
-  type SaturationHints,
 } from "./pureFluid.js";
 
 /** Options of {@link saturationAtTemperature} and {@link saturationAtPressure}. */
@@ -182,10 +186,7 @@ function spinodals(
 ): { vapor: number; liquid: number; top: number } {
   const rhoC = critical.densityMolPerM3;
   const top = Math.min(0.999 * model.maxDensity(T, PURE), 8 * rhoC);
-  const s = (rho: number): number => {
-    const d = model.residual(T, rho, PURE);
-    return 1 + 2 * d.aD + d.aDD;
-  };
+  const s = (rho: number): number => stiffnessAt(model, T, rho);
   const n = 400;
   const lo = 1e-6 * rhoC;
   const ratio = Math.pow(top / lo, 1 / n);
@@ -272,7 +273,7 @@ function spinodalRoute(
   critical: CriticalPointResult,
 ): { rhoL: number; rhoV: number } {
   const sp = spinodals(model, T, critical);
-  const P = (rho: number): number => rho * Rg * T * (1 + model.residual(T, rho, PURE).aD);
+  const P = (rho: number): number => pressureAt(model, T, rho, Rg);
   const pV = P(sp.vapor);
   const pL = P(sp.liquid);
   const pHi = pV;
@@ -282,11 +283,7 @@ function spinodalRoute(
   const vaporAt = (p: number): number =>
     findRootBrent((rho) => P(rho) - p, 1e-9 * Math.min(sp.vapor, p / (Rg * T)), sp.vapor).value;
   const dg = (p: number): number => {
-    const rl = liquidAt(p);
-    const rv = vaporAt(p);
-    const dl = model.residual(T, rl, PURE);
-    const dv = model.residual(T, rv, PURE);
-    return Math.log(rl) + dl.a + dl.aD - (Math.log(rv) + dv.a + dv.aD);
+    return gibbsAt(model, T, liquidAt(p)) - gibbsAt(model, T, vaporAt(p));
   };
   const root = findRootBrent(dg, pLo, pHi);
   return { rhoL: liquidAt(root.value), rhoV: vaporAt(root.value) };
@@ -298,8 +295,7 @@ function spinodalRoute(
  * d(Delta g / RT)/dP = (v_L - v_V) / RT (Gibbs-Duhem), the two outer roots of the cubic giving
  * the phase densities; safeguarded by bisection in ln P on a bracket that is narrowed whenever
  * the equation has fewer than three roots (one root below rho_c: P too low; above: too high).
- * The start is Wilson's estimate with omega = 0, ln(P/Pc) = 5.373 (1 - Tc/T) (G. M. Wilson,
- * 1968; as in Michelsen & Mollerup, Thermodynamic Models, 2nd ed. (2007), ch. 10).
+ * The start is Wilson's estimate with omega = 0 (phase/wilson.ts).
  * Returns undefined when the model never shows three roots (then the spinodal route is used).
  */
 function closedFormRootsRoute(
@@ -314,7 +310,7 @@ function closedFormRootsRoute(
   const rhoC = critical.densityMolPerM3;
   let lnLo = -Infinity; // ln P known too low (vapour only)
   let lnHi = Math.log(critical.pressurePa); // ln P known too high
-  let lnP = lnHi + 5.373 * (1 - critical.temperatureK / T);
+  let lnP = lnHi + wilsonLnReducedVaporPressure(T, critical.temperatureK, 0);
   for (let k = 0; k < 200; k++) {
     const P = Math.exp(lnP);
     const r = roots.call(model, T, P, PURE);
@@ -324,7 +320,7 @@ function closedFormRootsRoute(
       const rhoL = r[r.length - 1];
       const dl = model.residual(T, rhoL, PURE);
       const dv = model.residual(T, rhoV, PURE);
-      const f = Math.log(rhoL) + dl.a + dl.aD - (Math.log(rhoV) + dv.a + dv.aD);
+      const f = gibbsAtDensityRT(rhoL, dl) - gibbsAtDensityRT(rhoV, dv);
       if (f > 0) lnLo = lnP;
       else lnHi = lnP;
       const slope = (1 / rhoL - 1 / rhoV) / RT; // d f / dP
@@ -418,19 +414,15 @@ function solveAtTemperature(
       `no saturation state at T = ${T} K: at or above the critical temperature ${critical.temperatureK} K of ${model.info.name} (located from its own equations); above it the fluid is one phase at every pressure`,
     );
   }
-  const ranged = model as ResidualModel & {
-    validityStatus?: (temperatureK: number, pressurePa: number) => string;
-    validityDescription?: string;
-  };
   if (
     !options.allowOutsideRange &&
-    typeof ranged.validityStatus === "function" &&
-    ranged.validityStatus(T, 0) === "outside"
+    typeof model.validityStatus === "function" &&
+    model.validityStatus(T, 0) === "outside"
   ) {
     throw new OutOfRangeError({
       input: "temperatureK",
       unit: "K",
-      validRange: ranged.validityDescription ?? "the model's validity range",
+      validRange: model.validityDescription ?? "the model's validity range",
       received: T,
       hint: "pass { allowOutsideRange: true } to solve the equation there anyway",
     });
@@ -489,7 +481,7 @@ function solveAtTemperature(
   // L and V hold the converged phases (the Newton loop evaluates before it tests convergence).
   const hVap = Rg * T * (V.hResRT - L.hResRT);
   const warnings: ResultWarning[] = [];
-  const triple = (model as SaturationHints).triple;
+  const triple = model.triple;
   if (triple && T < triple.temperatureK) {
     warnings.push({
       code: "extrapolated",
@@ -548,7 +540,7 @@ export function saturationAtPressure(
     );
   }
   const Tc = critical.temperatureK;
-  const hints = model as SaturationHints;
+  const hints = model;
   const lnP = Math.log(pressurePa);
   // Bracket in T: [T_lo, Tc) with ln psat(T) increasing in T. Below a triple point the metastable
   // line is followed down to the lowest temperature the equation solves at (lowestTemperature).

@@ -9,8 +9,7 @@
  * The feed is stable as one phase if and only if tm >= 0 for every W; one W with tm < 0 proves
  * that the fluid splits. tm is minimised by successive substitution,
  *   ln W_i <- d_i - ln phi_i(w),
- * from Wilson's K-factors, K_i = (Pc_i / P) exp(5.373 (1 + omega_i) (1 - Tc_i / T)) (G. M. Wilson,
- * 1968; as in Michelsen & Mollerup ch. 9): a vapour-like trial W = z K and a liquid-like trial
+ * from Wilson's K-factors (phase/wilson.ts; Michelsen & Mollerup ch. 9): a vapour-like trial W = z K and a liquid-like trial
  * W = z / K. Without critical constants (a user's own model) each present component, nearly pure,
  * is a trial instead. ln phi_i(w) is taken in the trial's own root of lowest Gibbs energy. At a
  * stationary point tm = 1 - sum W_i. Components absent from the feed are absent from every trial
@@ -22,12 +21,13 @@
  * successive substitution is slow and a split can be missed.
  */
 import { InputError, PhaseUnavailableError, type ResultWarning } from "../errors.js";
-import type { ModelInfo, ResidualDerivatives, ResidualModel } from "../eos/types.js";
+import type { ModelInfo, ResidualModel } from "../eos/types.js";
 import type { ModelComponent } from "../eos/modelComponent.js";
-import { R as R_CODATA } from "../constants.js";
-import { dPdRho, lnFugacityCoefficients, residualGibbsTP } from "../state/properties.js";
+import { lnFugacityCoefficients } from "../state/properties.js";
 import { checkComposition, checkPressure, checkTemperature } from "../state/checkInputs.js";
-import { findDensityRoots } from "../state/findDensityRoots.js";
+import { densityRootsOf } from "../state/findDensityRoots.js";
+import { chooseDensityRoot, emptyRootChoice } from "../state/rootChoice.js";
+import { wilsonK } from "./wilson.js";
 import { requireCount, requirePositive } from "../validate.js";
 
 /** The critical constants a Wilson start needs, one record per component in model order. */
@@ -105,7 +105,8 @@ export interface StabilityResult {
 
 const METHOD =
   "tangent-plane test (Michelsen, Fluid Phase Equilib. 9 (1982) 1-19), successive substitution from Wilson K-factors";
-const COMPOSITION = Object.freeze({ composition: true });
+// the root choice of the current lnPhiAtTP call, read out at once
+const choice = emptyRootChoice();
 // a converged trial whose mole fractions all lie this close to the feed's is the trivial solution
 const TRIVIAL_DISTANCE = 1e-6;
 
@@ -117,20 +118,9 @@ function lnPhiAtTP(
   w: readonly number[],
   out: number[],
 ): number {
-  const rhos = model.densityRoots ? model.densityRoots(T, P, w) : findDensityRoots(model, T, P, w);
-  let best = Infinity;
-  let chosen = NaN;
-  let residual: ResidualDerivatives | undefined;
-  for (const rho of rhos) {
-    const r = model.residual(T, rho, w, COMPOSITION);
-    if (!(dPdRho(T, r, model.gasConstant ?? R_CODATA) > 0)) continue;
-    const g = residualGibbsTP(r);
-    if (g < best || residual === undefined) {
-      best = g;
-      chosen = rho;
-      residual = r;
-    }
-  }
+  const rhos = densityRootsOf(model, T, P, w);
+  const residual = chooseDensityRoot(model, T, rhos, w, "stable", choice);
+  const chosen = choice.densityMolPerM3;
   const lnPhi = residual?.dnA ? lnFugacityCoefficients(residual) : [];
   if (lnPhi.length !== out.length || !lnPhi.every(Number.isFinite)) {
     throw new PhaseUnavailableError(
@@ -269,8 +259,7 @@ export function stabilityAtTP(
 
 /** The model's own component constants, when it carries them (the built-in models do). */
 function modelConstants(model: ResidualModel): readonly WilsonConstants[] | undefined {
-  const components = (model as { components?: readonly WilsonConstants[] }).components;
-  return Array.isArray(components) ? components : undefined;
+  return Array.isArray(model.components) ? model.components : undefined;
 }
 
 function checkConstants(constants: readonly WilsonConstants[], n: number): void {
@@ -311,9 +300,7 @@ function trialStarts(
     const liquid = new Array<number>(n).fill(0);
     for (const i of present) {
       const c = constants[i];
-      const K =
-        (c.criticalPressurePa / P) *
-        Math.exp(5.373 * (1 + c.acentricFactor) * (1 - c.criticalTemperatureK / T));
+      const K = wilsonK(T, P, c.criticalTemperatureK, c.criticalPressurePa, c.acentricFactor);
       vapor[i] = x[i] * K;
       liquid[i] = x[i] / K;
     }

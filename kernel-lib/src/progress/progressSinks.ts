@@ -3,14 +3,9 @@
  * tslab's `newDisplay()`. Elsewhere: a terminal line rewritten with a carriage return when stderr
  * is a terminal, else only the final summary line on stderr; or nothing at all.
  */
-import { sep } from "node:path";
+import { inTslabKernel, newTslabDisplay } from "../display/tslabDisplay.js";
 import { progressHtml, progressLine } from "./formatProgress.js";
 import type { ProgressSink, ProgressSnapshot } from "./progressTypes.js";
-
-/** The part of tslab's public module used here. */
-interface TslabModule {
-  newDisplay(): { html(s: string): void };
-}
 
 /** A sink that shows nothing. */
 export function silentSink(): ProgressSink {
@@ -49,14 +44,9 @@ export function tslabSink(display: { html(s: string): void }): ProgressSink {
  * (a kernel is running), so a plain Node script does not pay for loading TypeScript.
  */
 export function autoSink(): ProgressSink {
-  const inKernel = Object.keys(require.cache).some((k) =>
-    k.includes(`${sep}tslab${sep}dist${sep}`),
-  );
-  if (inKernel) {
+  if (inTslabKernel()) {
     try {
-      // eslint-disable-next-line @typescript-eslint/no-require-imports
-      const tslab = require("tslab") as TslabModule;
-      const display = tslab.newDisplay();
+      const display = newTslabDisplay();
       const sink = tslabSink(display);
       return {
         show(s) {

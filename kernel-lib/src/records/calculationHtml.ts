@@ -14,10 +14,11 @@
 import { randomBytes } from "node:crypto";
 import { escapeHtml } from "../display/escapeHtml.js";
 import { vegaRuntimeScript } from "../display/vegaRuntime.js";
-import type { CalculationRecordContent, RecordedInput } from "./calculationRecord.js";
-import { basisLinks } from "./calculationRecord.js";
 import { shortMethod, type ModelEntry } from "./modelEntry.js";
+import { basisLinks } from "./recordBasis.js";
+import type { CalculationRecordContent, RecordedInput } from "./recordContent.js";
 import { formatRecordDate } from "./recordDate.js";
+import { fullNumber as num, fullValues as values } from "./recordNumbers.js";
 import { recordDocumentHead } from "./recordHtml.js";
 
 const CSS = `
@@ -94,16 +95,6 @@ footer.calc-foot { margin-top:2rem; border-top:1px solid #c9d1d7; padding-top:.5
 
 function e(text: string | undefined): string {
   return escapeHtml(text ?? "");
-}
-
-/** A number in full, to 10 significant figures without trailing zeros (inputs, ranges, k_ij). */
-function num(value: number): string {
-  return String(Number(value.toPrecision(10)));
-}
-
-/** A recorded value in full: as given, or in SI to 10 significant figures (no trailing zeros). */
-function values(v: number | readonly number[]): string {
-  return typeof v === "number" ? num(v) : v.map(num).join(", ");
 }
 
 function section(n: number, title: string, body: string): string {

@@ -7,40 +7,15 @@
  * inline markup, including `<` and `&`, so no HTML can pass through a Markdown renderer, and of a
  * block marker at its start) and kept on one line.
  */
-import type { CalculationRecordContent } from "./calculationRecord.js";
-import { basisText } from "./calculationRecord.js";
+import { escapeMarkdown, escapeMarkdownBlock } from "../tables/escapeMarkdown.js";
 import { shortMethod } from "./modelEntry.js";
+import { basisText } from "./recordBasis.js";
+import type { CalculationRecordContent } from "./recordContent.js";
 import { formatRecordDate } from "./recordDate.js";
+import { fullNumber as num, fullValues as values } from "./recordNumbers.js";
 
-/** Escapes text for Markdown inline content, on one line. */
-export function escapeMarkdown(text: string): string {
-  return (
-    String(text)
-      // eslint-disable-next-line no-control-regex
-      .replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, " ")
-      .replace(/[\\`*_{}[\]<>!|&~]/g, (c) => `\\${c}`)
-  );
-}
-
-/**
- * Escapes text that starts a line (a paragraph, a quote): as {@link escapeMarkdown}, and a block
- * marker at its start (heading, list, numbered list, rule) stays text.
- */
-export function escapeMarkdownBlock(text: string): string {
-  return escapeMarkdown(text)
-    .replace(/^(\s*)([#+=-])/, "$1\\$2")
-    .replace(/^(\s*\d+)([.)])/, "$1\\$2");
-}
-
-/** A number in full, to 10 significant figures without trailing zeros. */
-function num(value: number): string {
-  return String(Number(value.toPrecision(10)));
-}
-
-/** A recorded value in full: as given, or in SI to 10 significant figures (no trailing zeros). */
-function values(v: number | readonly number[]): string {
-  return typeof v === "number" ? num(v) : v.map(num).join(", ");
-}
+// The escaping is tables/escapeMarkdown.ts (one for tables and records); kept importable here.
+export { escapeMarkdown, escapeMarkdownBlock };
 
 /** A value and its unit; a dimensionless value ("-") alone. */
 function withUnit(value: string, unit: string): string {

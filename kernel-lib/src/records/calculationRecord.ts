@@ -12,20 +12,16 @@
  * Every string given here is plain text: the renderers escape it for HTML and Markdown.
  */
 import { randomBytes } from "node:crypto";
-import { InputError } from "../errors.js";
-import type { ResultWarning } from "../errors.js";
-import { SI_UNITS } from "../units/dimension.js";
-import { getDefaultAtmosphericPressure } from "../units/atmosphericPressure.js";
-import { lookupUnit } from "../units/lookupUnit.js";
-import { toSI } from "../units/convert.js";
-import type { TableColumn, TableOptions } from "../tables/columns.js";
-import { tableHtml } from "../tables/tableHtml.js";
-import { tableMarkdown } from "../tables/tableText.js";
+import { InputError, type ResultWarning } from "../errors.js";
+import type { TableColumn } from "../tables/columns.js";
 import { chartMeta } from "../charts/chartSpec.js";
 import { chartFigure } from "../display/chartHtml.js";
+import { chartTitle } from "../display/chartTitle.js";
 import { displaySession } from "../display/displaySession.js";
+import { displayHtml, inTslabKernel } from "../display/tslabDisplay.js";
 import { vegaRuntimeScript } from "../display/vegaRuntime.js";
 import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
+import { escapeHtml } from "../display/escapeHtml.js";
 import { runEnvironment, type RunEnvironment } from "./environment.js";
 import {
   modelEntry,
@@ -39,13 +35,41 @@ import {
   calculationRecordFragment,
   calculationRecordPiece,
 } from "./calculationHtml.js";
-import { escapeHtml } from "../display/escapeHtml.js";
 import { calculationRecordMarkdown } from "./calculationMarkdown.js";
+import { basisLinks, resolveBasis } from "./recordBasis.js";
+import type {
+  CalculationRecordContent,
+  RecordBasis,
+  RecordedChart,
+  RecordedInput,
+  RecordedTable,
+  RecordItem,
+  ResolvedBasis,
+} from "./recordContent.js";
+import { recordedInput, type RecordInputOptions } from "./recordInput.js";
+import { recordTableText, type RecordResultsOptions } from "./recordTable.js";
+import { INSPECT, optionalText, requireText, withSummary } from "./recordText.js";
+import { RecordWarnings } from "./recordWarnings.js";
 import {
   registerRecord,
   type RenderFilesOptions,
   type RenderedRecordFiles,
 } from "./recordRegistry.js";
+
+// The record's content types live in recordContent.ts (the renderers read them without importing
+// the record); they are re-exported here, where the public index has always found them.
+export type {
+  CalculationRecordContent,
+  RecordBasis,
+  RecordedChart,
+  RecordedInput,
+  RecordedTable,
+  RecordedWarning,
+  ResolvedBasis,
+} from "./recordContent.js";
+export type { RecordInputOptions } from "./recordInput.js";
+export type { RecordResultsOptions } from "./recordTable.js";
+export { basisLinks, basisText } from "./recordBasis.js";
 
 /** Options of {@link startRecord}. */
 export interface StartRecordOptions {
@@ -72,165 +96,10 @@ export interface StartRecordOptions {
   live?: boolean;
 }
 
-/** True when tslab's kernel side is loaded in this process (a notebook kernel or `isochor run`). */
-function inTslabKernel(): boolean {
-  return Object.keys(require.cache).some((k) => /[\\/]tslab[\\/]dist[\\/]jupyter\.js$/.test(k));
-}
-
-/** Displays HTML in the current tslab cell. */
-function displayHtml(html: string): void {
-  // eslint-disable-next-line @typescript-eslint/no-require-imports
-  const tslab = require("tslab") as { display: { html(s: string): void } };
-  tslab.display.html(html);
-}
-
-/** An input as recorded: value as given, value in SI, where it came from. */
-export interface RecordedInput {
-  /** Record-local id, "I1", "I2", ... */
-  readonly id: string;
-  readonly label: string;
-  /** The value as given, in `unit`. */
-  readonly value: number | readonly number[];
-  /** The unit as given ("-" for a dimensionless value). */
-  readonly unit: string;
-  /** The value in SI (`unitSI`), what the calculation uses. */
-  readonly valueSI: number | readonly number[];
-  /** SI unit on the library's molar basis, e.g. "Pa" ("-" for dimensionless). */
-  readonly unitSI: string;
-  readonly source?: string;
-  readonly note?: string;
-  /** Atmospheric pressure used for a gauge unit, Pa. */
-  readonly atmosphericPressurePa?: number;
-  /** The value is a difference (no offset, no atmosphere). */
-  readonly difference: boolean;
-}
-
-/** Options of {@link CalculationRecord.input}. */
-export interface RecordInputOptions {
-  /** Where the value came from (plain text), e.g. "DCS tag PT-2101, invented". Default: not given. */
-  source?: string;
-  /** A note (plain text). Default: none. */
-  note?: string;
-  /** Molar mass for mass-based units, kg/mol. Default: none (mass units are then refused). */
-  molarMassKgPerMol?: number;
-  /** Atmospheric pressure for gauge units, Pa. Default: the notebook-wide default. */
-  atmosphericPressurePa?: number;
-  /** The value is a difference (1 degC = 1 K). Default false. */
-  difference?: boolean;
-}
-
-/** What a result or chart was computed from: a model entry and inputs, by object or id. */
-export interface RecordBasis {
-  model?: ModelEntry | string;
-  inputs?: ReadonlyArray<RecordedInput | string>;
-}
-
-/** A resolved basis: ids only. */
-export interface ResolvedBasis {
-  modelId?: string;
-  inputIds: string[];
-}
-
-/** Options of {@link CalculationRecord.results}. */
-export interface RecordResultsOptions extends TableOptions, RecordBasis {
-  /** Basis of one row, when rows differ (overrides `model` / `inputs` for that row). */
-  rowBasis?: (row: Record<string, unknown>, index: number) => RecordBasis;
-}
-
-/** A results table as recorded. */
-export interface RecordedTable {
-  readonly id: string;
-  readonly caption?: string;
-  /** The table's HTML with a Basis column of links (escaped text; links made by the record). */
-  readonly html: string;
-  readonly markdown: string;
-  readonly rows: number;
-}
-
 /** Options of {@link CalculationRecord.chart}. */
 export interface RecordChartOptions extends RecordBasis {
   /** Caption under the chart (plain text). Default: none. */
   caption?: string;
-}
-
-/** A chart as recorded. */
-export interface RecordedChart {
-  readonly id: string;
-  readonly title?: string;
-  readonly caption?: string;
-  readonly basis: ResolvedBasis;
-  /** The chart fragment (static SVG plus live view); the runtime is not included. */
-  readonly html: string;
-}
-
-/** A warning collected into the record, de-duplicated. */
-export interface RecordedWarning {
-  readonly code: string;
-  readonly message: string;
-  /** Where it was raised (table or chart ids, labels), de-duplicated. */
-  readonly from: string[];
-  /** How many times it was collected. */
-  readonly count: number;
-}
-
-/** The record's content, for renderers (read-only snapshot). */
-export interface CalculationRecordContent {
-  readonly anchor: string;
-  readonly title: string;
-  readonly question: string;
-  readonly author?: string;
-  readonly site?: string;
-  readonly createdAt: Date;
-  readonly environment: RunEnvironment;
-  readonly topics: readonly SafetyTopic[];
-  readonly inputs: readonly RecordedInput[];
-  readonly models: readonly ModelEntry[];
-  /** Tables and charts in the order they were added. */
-  readonly items: ReadonlyArray<
-    { kind: "table"; table: RecordedTable } | { kind: "chart"; chart: RecordedChart }
-  >;
-  readonly warnings: readonly RecordedWarning[];
-  readonly cautions: readonly string[];
-  readonly answers: readonly string[];
-}
-
-function requireText(value: unknown, input: string): string {
-  if (typeof value !== "string" || value.trim() === "") {
-    throw new InputError({ input, unit: "-", validRange: "a non-empty string", received: value });
-  }
-  return value;
-}
-
-function optionalText(value: unknown, input: string): string | undefined {
-  if (value === undefined) return undefined;
-  if (typeof value !== "string") {
-    throw new InputError({ input, unit: "-", validRange: "a string", received: value });
-  }
-  return value;
-}
-
-function isWarning(value: unknown): value is ResultWarning {
-  const v = value as Partial<ResultWarning> | null;
-  return (
-    v !== null &&
-    typeof v === "object" &&
-    typeof v.message === "string" &&
-    typeof v.code === "string"
-  );
-}
-
-const DIMENSIONLESS = new Set(["-", "", "1"]);
-
-/** Node's hook for how util.inspect (and so a notebook cell's last value) prints an object. */
-const INSPECT = Symbol.for("nodejs.util.inspect.custom");
-
-/**
- * Gives a record part a one-line printed form (a notebook prints a cell's last value, and the
- * parts carry whole HTML tables), then freezes it. The hook is not enumerable: JSON is unchanged.
- */
-function withSummary<T extends object>(value: T, summary: string): Readonly<T> {
-  Object.defineProperty(value, INSPECT, { value: () => summary, enumerable: false });
-  return Object.freeze(value);
 }
 
 /**
@@ -249,13 +118,8 @@ export class CalculationRecord {
   private readonly topicList: SafetyTopic[];
   private readonly inputList: RecordedInput[] = [];
   private readonly modelList: ModelEntry[] = [];
-  private readonly itemList: Array<
-    { kind: "table"; table: RecordedTable } | { kind: "chart"; chart: RecordedChart }
-  > = [];
-  private readonly warningMap = new Map<
-    string,
-    { code: string; message: string; from: Set<string>; count: number }
-  >();
+  private readonly itemList: RecordItem[] = [];
+  private readonly warningList = new RecordWarnings();
   private readonly cautionList: string[] = [];
   private readonly answerList: string[] = [];
   private readonly pending = new Set<Promise<unknown>>();
@@ -300,7 +164,7 @@ export class CalculationRecord {
     return (
       `calculation record "${this.title}": ${count(this.inputList.length, "input")}, ` +
       `${count(this.modelList.length, "model")}, ${count(tables, "table")}, ` +
-      `${count(this.itemList.length - tables, "chart")}, ${count(this.warningMap.size, "warning")}` +
+      `${count(this.itemList.length - tables, "chart")}, ${count(this.warningList.size, "warning")}` +
       ` (rec.show() displays it)`
     );
   }
@@ -332,73 +196,7 @@ export class CalculationRecord {
     unit: string,
     options: RecordInputOptions = {},
   ): RecordedInput {
-    requireText(label, "label");
-    if (typeof unit !== "string") {
-      throw new InputError({
-        input: "unit",
-        unit: "-",
-        validRange: 'a unit string or "-"',
-        received: unit,
-      });
-    }
-    const values = Array.isArray(value) ? (value as readonly number[]) : [value as number];
-    if (values.length === 0) {
-      throw new InputError({
-        input: label,
-        unit,
-        validRange: "a number or a non-empty list",
-        received: value,
-      });
-    }
-    const source = optionalText(options.source, "options.source");
-    const note = optionalText(options.note, "options.note");
-    const id = `I${this.inputList.length + 1}`;
-    let unitSI: string;
-    let converted: number[];
-    let atmosphericPressurePa: number | undefined;
-    if (DIMENSIONLESS.has(unit.trim())) {
-      converted = values.map((v, i) => {
-        if (typeof v !== "number" || !Number.isFinite(v)) {
-          throw new InputError({
-            input: Array.isArray(value) ? `${label}[${i}]` : label,
-            unit: "-",
-            validRange: "a finite number",
-            received: v,
-          });
-        }
-        return v;
-      });
-      unitSI = "-";
-    } else {
-      const def = lookupUnit(unit);
-      unitSI = SI_UNITS[def.dimension];
-      converted = values.map((v, i) =>
-        toSI(v, unit, {
-          molarMassKgPerMol: options.molarMassKgPerMol,
-          atmosphericPressurePa: options.atmosphericPressurePa,
-          difference: options.difference,
-          input: Array.isArray(value) ? `${label}[${i}]` : label,
-        }),
-      );
-      if (def.gauge && !options.difference) {
-        atmosphericPressurePa = options.atmosphericPressurePa ?? getDefaultAtmosphericPressure();
-      }
-    }
-    const recorded: RecordedInput = withSummary(
-      {
-        id,
-        label,
-        value: Array.isArray(value) ? Object.freeze([...values]) : values[0],
-        unit,
-        valueSI: Array.isArray(value) ? Object.freeze(converted) : converted[0],
-        unitSI,
-        source,
-        note,
-        atmosphericPressurePa,
-        difference: options.difference ?? false,
-      },
-      `${id} ${label} = ${Array.isArray(value) ? `[${values.join(", ")}]` : values[0]} ${unit} (recorded)`,
-    );
+    const recorded = recordedInput(`I${this.inputList.length + 1}`, label, value, unit, options);
     this.inputList.push(recorded);
     return recorded;
   }
@@ -463,26 +261,13 @@ export class CalculationRecord {
         ? this.resolveBasis({ ...options, ...options.rowBasis(row, i) }, `rowBasis(row ${i})`)
         : tableBasis,
     );
-    // The Basis cell goes through tables/ as a random token (escaped like any text), then the token
-    // is replaced by links built here; user text cannot forge a token it cannot guess.
-    const nonce = randomBytes(6).toString("hex");
-    const token = (i: number) => `isochor-basis-${nonce}-${i}-end`;
-    const basisKey = `__isochorBasis_${nonce}`;
-    const withToken = rows.map((row, i) => ({ ...row, [basisKey]: token(i) }));
-    const withText = rows.map((row, i) => ({ ...row, [basisKey]: basisText(bases[i]) }));
-    const tableColumns: TableColumn[] = [...columns, { key: basisKey, label: "Basis", text: true }];
-    const tableOptions: TableOptions = {
-      caption: caption !== undefined ? `${id}. ${caption}` : id,
-      note: options.note,
-      units: options.units,
-      molarMassKgPerMol: options.molarMassKgPerMol,
-      missing: options.missing,
-    };
-    let html = tableHtml(withToken, tableColumns, tableOptions);
-    bases.forEach((b, i) => {
-      html = html.replace(token(i), basisLinks(this.anchor, b));
-    });
-    const markdown = tableMarkdown(withText, tableColumns, tableOptions);
+    const { html, markdown } = recordTableText(
+      rows,
+      columns,
+      { ...options, title: caption !== undefined ? `${id}. ${caption}` : id },
+      bases,
+      this.anchor,
+    );
     rows.forEach((row) => this.collectWarnings(row, { from: id }));
     this.tableCount += 1;
     const table: RecordedTable = withSummary(
@@ -556,23 +341,7 @@ export class CalculationRecord {
    */
   collectWarnings(source: unknown, options: { from?: string } = {}): number {
     const from = optionalText(options.from, "options.from");
-    let found = 0;
-    const visit = (value: unknown, depth: number): void => {
-      if (value === null || typeof value !== "object" || depth > 3) return;
-      if (isWarning(value)) {
-        this.addWarning(value, from);
-        found += 1;
-        return;
-      }
-      if (Array.isArray(value)) {
-        value.forEach((v) => visit(v, depth + 1));
-        return;
-      }
-      const warnings = (value as { warnings?: unknown }).warnings;
-      if (Array.isArray(warnings)) warnings.forEach((w) => visit(w, depth + 1));
-    };
-    visit(source, 0);
-    return found;
+    return this.warningList.collect(source, from);
   }
 
   /**
@@ -620,12 +389,7 @@ export class CalculationRecord {
       inputs: [...this.inputList],
       models: [...this.modelList],
       items: this.itemList.filter((i) => i.kind === "table" || i.chart.html !== ""),
-      warnings: [...this.warningMap.values()].map((w) => ({
-        code: w.code,
-        message: w.message,
-        from: [...w.from],
-        count: w.count,
-      })),
+      warnings: this.warningList.list(),
       cautions,
       answers: [...this.answerList],
     };
@@ -667,55 +431,11 @@ export class CalculationRecord {
   }
 
   private addWarning(warning: ResultWarning, from: string | undefined): void {
-    const key = `${warning.code}\u0000${warning.message}`;
-    let entry = this.warningMap.get(key);
-    if (!entry) {
-      entry = { code: warning.code, message: warning.message, from: new Set(), count: 0 };
-      this.warningMap.set(key, entry);
-    }
-    entry.count += 1;
-    if (from !== undefined) entry.from.add(from);
+    this.warningList.add(warning, from);
   }
 
   private resolveBasis(basis: RecordBasis, where: string): ResolvedBasis {
-    let modelId: string | undefined;
-    if (basis.model !== undefined) {
-      const id = typeof basis.model === "string" ? basis.model : basis.model?.id;
-      if (!this.modelList.some((m) => m.id === id)) {
-        throw new InputError({
-          input: `${where}.model`,
-          unit: "-",
-          validRange: `a model of this record (${this.modelList.map((m) => m.id).join(", ") || "none yet: call model() first"})`,
-          received: id ?? basis.model,
-        });
-      }
-      modelId = id;
-    }
-    const inputIds: string[] = [];
-    if (basis.inputs !== undefined) {
-      if (!Array.isArray(basis.inputs)) {
-        throw new InputError({
-          input: `${where}.inputs`,
-          unit: "-",
-          validRange: "an array of inputs",
-          received: basis.inputs,
-        });
-      }
-      basis.inputs.forEach((input, i) => {
-        const id = typeof input === "string" ? input : (input as RecordedInput | null)?.id;
-        if (!this.inputList.some((r) => r.id === id)) {
-          throw new InputError({
-            input: `${where}.inputs[${i}]`,
-            unit: "-",
-            validRange: `an input of this record (${this.inputList.map((r) => r.id).join(", ") || "none yet: call input() first"})`,
-            received: id ?? input,
-          });
-        }
-        if (!inputIds.includes(id as string)) inputIds.push(id as string);
-      });
-      inputIds.sort((a, b) => Number(a.slice(1)) - Number(b.slice(1)));
-    }
-    return { modelId, inputIds };
+    return resolveBasis(basis, where, this.modelList, this.inputList);
   }
 
   /**
@@ -737,32 +457,6 @@ export class CalculationRecord {
       images,
     };
   }
-}
-
-function chartTitle(spec: VegaLiteSpec): string | undefined {
-  const title = spec.title;
-  if (typeof title === "string") return title;
-  if (Array.isArray(title)) return title.join(" ");
-  if (title && typeof title === "object")
-    return Array.isArray(title.text) ? title.text.join(" ") : String(title.text);
-  return undefined;
-}
-
-/** The basis in words: "M1; I1, I2". */
-export function basisText(basis: ResolvedBasis): string {
-  const parts = [basis.modelId, basis.inputIds.join(", ")].filter(
-    (s) => s !== undefined && s !== "",
-  );
-  return parts.length > 0 ? parts.join("; ") : "–";
-}
-
-/** The basis as links to the record's model and input entries (ids are generated, never user text). */
-export function basisLinks(anchor: string, basis: ResolvedBasis): string {
-  const link = (id: string) => `<a href="#${anchor}-${id}">${id}</a>`;
-  const parts: string[] = [];
-  if (basis.modelId !== undefined) parts.push(link(basis.modelId));
-  if (basis.inputIds.length > 0) parts.push(basis.inputIds.map(link).join(", "));
-  return parts.length > 0 ? `<span class="calc-basis-cell">${parts.join("; ")}</span>` : "–";
 }
 
 /**

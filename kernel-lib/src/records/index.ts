@@ -45,4 +45,4 @@ export type {
 export type { ModelEntry, ModelEntryOptions, RecordableModel } from "./modelEntry.js";
 export { processSafetyCaution, SAFETY_TOPICS, isSafetyTopic } from "./processCaution.js";
 export type { SafetyTopic } from "./processCaution.js";
-export { escapeMarkdown } from "./calculationMarkdown.js";
+export { escapeMarkdown } from "../tables/escapeMarkdown.js";

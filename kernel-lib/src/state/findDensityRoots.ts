@@ -10,6 +10,7 @@
 import { R as R_CODATA } from "../constants.js";
 import { findRootBrent } from "../numerics/brent.js";
 import type { ResidualModel } from "../eos/types.js";
+import { pressureFromResidual } from "../eos/residualRelations.js";
 
 /** Options of {@link findDensityRoots}. */
 export interface DensityRootOptions {
@@ -40,7 +41,7 @@ export function findDensityRoots(
     : (options.searchLimitMolPerM3 ?? 1e6);
   const pressureOf = model.pressure
     ? (rho: number) => model.pressure!(T, rho, x)
-    : (rho: number) => rho * RT * (1 + model.residual(T, rho, x).aD);
+    : (rho: number) => pressureFromResidual(T, rho, model.residual(T, rho, x).aD, Rg);
   const f = (rho: number): number => {
     try {
       return pressureOf(rho) - pressurePa;
@@ -73,4 +74,20 @@ export function findDensityRoots(
     prevF = fr;
   }
   return roots;
+}
+
+/**
+ * Every density root at (T, P): the model's own closed form (`densityRoots`) when it has one, else
+ * the scan of {@link findDensityRoots}. The one place that makes this choice.
+ */
+export function densityRootsOf(
+  model: ResidualModel,
+  temperatureK: number,
+  pressurePa: number,
+  x: readonly number[],
+  options?: DensityRootOptions,
+): number[] {
+  return model.densityRoots
+    ? model.densityRoots(temperatureK, pressurePa, x)
+    : findDensityRoots(model, temperatureK, pressurePa, x, options);
 }

@@ -7,6 +7,8 @@ export {
   dPdRho,
 } from "./properties.js";
 export type { StateInputs, ResidualSets } from "./properties.js";
+export { phaseFugacityAtTP, fugacityDerivatives } from "./fugacity.js";
+export type { PhaseFugacity, FugacityDerivatives, CompositionHessian } from "./fugacity.js";
 export { stateAtTP, stateAtTRho, densityRootsAtTP } from "./stateAt.js";
 export type { StateAtTPOptions, DensityRoot } from "./stateAt.js";
 export { findDensityRoots } from "./findDensityRoots.js";

@@ -27,6 +27,17 @@ import type { ResidualDerivatives } from "../eos/types.js";
 import type { IdealGasProperties } from "../idealgas/types.js";
 import type { DepartureMethod, EnergySet, FluidState, PhaseLabel } from "./types.js";
 import type { ModelInfo } from "../eos/types.js";
+import {
+  dPdRho,
+  gibbsOverRTFromLnZ,
+  lnZOf,
+  pressureFromResidual,
+  residualGibbsTP,
+} from "../eos/residualRelations.js";
+
+// the pressure, (dP/drho)_T and g_r/RT relations live at the model layer (eos/residualRelations.ts),
+// where models need them too; the state layer offers them with the other property formulas
+export { dPdRho, pressureFromResidual, residualGibbsTP };
 
 /** Everything {@link assembleState} needs; the caller has already found the density. */
 export interface StateInputs {
@@ -46,44 +57,6 @@ export interface StateInputs {
   readonly gasConstant?: number;
   /** Warnings gathered so far (copied). */
   readonly warnings?: readonly ResultWarning[];
-}
-
-/** Pressure (Pa) of a state from its residual derivative aD: P = rho R T (1 + aD). */
-export function pressureFromResidual(
-  temperatureK: number,
-  densityMolPerM3: number,
-  aD: number,
-  gasConstant: number = R_CODATA,
-): number {
-  return densityMolPerM3 * gasConstant * temperatureK * (1 + aD);
-}
-
-/**
- * Residual Gibbs energy over RT at the same T and P, g_r/RT = a + aD - ln Z: the quantity that
- * decides which density root is stable at a given (T, P).
- */
-export function residualGibbsTP(residual: ResidualDerivatives): number {
-  return gibbsOverRTFromLnZ(residual.a, residual.aD, lnZOf(residual.aD));
-}
-
-/** ln Z with Z = 1 + aD; NaN where Z <= 0 (no state at the same T and P exists there). */
-function lnZOf(aD: number): number {
-  const Z = 1 + aD;
-  return Z > 0 ? Math.log(Z) : NaN;
-}
-
-// the formula of residualGibbsTP with ln Z passed in, so residualProperties takes one logarithm
-function gibbsOverRTFromLnZ(a: number, aD: number, lnZ: number): number {
-  return a + aD - lnZ;
-}
-
-/** (dP/drho)_T in Pa m3/mol from the derivatives: R T (1 + 2 aD + aDD). */
-export function dPdRho(
-  temperatureK: number,
-  residual: ResidualDerivatives,
-  gasConstant = R_CODATA,
-): number {
-  return gasConstant * temperatureK * (1 + 2 * residual.aD + residual.aDD);
 }
 
 /** Residual h, s, u, a, g in both conventions, J/mol and J/(mol K), with ln Z and ln phi. */
@@ -161,7 +134,7 @@ export function assembleState(input: StateInputs): FluidState {
   const ig = input.ideal;
   const RT = Rg * T;
   const Z = 1 + d.aD;
-  const P = rho * RT * Z;
+  const P = pressureFromResidual(T, rho, d.aD, Rg);
   residualParts(T, d, Rg);
   const hRes = parts.h;
   const uRes = parts.u;

@@ -8,6 +8,7 @@ import {
   type TableColumn,
   type TableOptions,
 } from "./columns.js";
+import { escapeMarkdown } from "./escapeMarkdown.js";
 import { checkRows } from "./tableHtml.js";
 
 /**
@@ -60,7 +61,7 @@ export function tableText(
   return lines.join("\n");
 }
 
-/** Builds a Markdown (pipe) table; `|`, `\` and line breaks in cells are escaped. */
+/** Builds a Markdown (pipe) table; cells are escaped with {@link escapeMarkdown} (one line each). */
 export function tableMarkdown(
   rows: readonly Record<string, unknown>[],
   columns: readonly TableColumn[],
@@ -68,7 +69,7 @@ export function tableMarkdown(
 ): string {
   checkRows(rows);
   const cols = resolveColumns(columns, options);
-  const esc = (s: string) => oneLine(s).replace(/[\\|`*_[\]<>]/g, (c) => `\\${c}`);
+  const esc = escapeMarkdown;
   const head = cols.map((c) => esc(c.unit ? `${c.label} (${c.unit})` : c.label));
   const lines = [
     `| ${head.join(" | ")} |`,

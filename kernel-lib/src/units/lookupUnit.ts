@@ -5,7 +5,7 @@
  * AmbiguousUnitError with the choices; unknown ones throw UnknownNameError with the closest units.
  */
 import { AmbiguousUnitError, InputError, UnknownNameError } from "../errors.js";
-import { editDistance } from "../components/editDistance.js";
+import { editDistance } from "../numerics/editDistance.js";
 import type { Dimension } from "./dimension.js";
 import { AMBIGUOUS_UNITS, UNIT_TABLE, type UnitDefinition } from "./unitTable.js";
 

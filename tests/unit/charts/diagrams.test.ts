@@ -8,7 +8,7 @@ import { InputError, UnknownNameError } from "../../../kernel-lib/src/errors.js"
 import { allLayers, compileSpec, renderSvgText, roundFloats, schemaErrors } from "./specCheck.js";
 import { SYNTHETIC_CRITICAL, syntheticPhIsotherm, syntheticSaturation } from "./sampleDiagrams.js";
 
-/** Plotted coordinates keep 7 significant figures (specParts.plotValue): compare to 1e-6. */
+/** Plotted coordinates keep 7 significant figures (charts/axisPlan.ts plotValue): compare to 1e-6. */
 function expectRelative(actual: number, expected: number): void {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(1e-6 * Math.abs(expected));
 }

@@ -3,7 +3,7 @@ import { getComponent, listComponents } from "../../../kernel-lib/src/components
 import { AmbiguousNameError } from "../../../kernel-lib/src/components/ambiguousNameError.js";
 import { defineComponent } from "../../../kernel-lib/src/components/defineComponent.js";
 import { UnknownNameError } from "../../../kernel-lib/src/errors.js";
-import { editDistance } from "../../../kernel-lib/src/components/editDistance.js";
+import { editDistance } from "../../../kernel-lib/src/numerics/editDistance.js";
 
 describe("getComponent", () => {
   it("finds by id, name, formula, CAS number and synonym, ignoring case, spaces and hyphens", () => {

@@ -10,7 +10,14 @@
  *   aT = -tau phi_t, aTT = tau^2 phi_tt + 2 tau phi_t, aDT = -delta tau phi_dt.
  */
 import type { ResultWarning } from "../../errors.js";
-import type { ModelInfo, ResidualDerivatives, ResidualModel, ResidualRequest } from "../types.js";
+import type {
+  ModelInfo,
+  ResidualDerivatives,
+  ResidualModel,
+  ResidualRequest,
+  SaturationEstimate,
+  ValidityStatus,
+} from "../types.js";
 import type { ReferenceState } from "../../idealgas/types.js";
 import { compileAncillary, type Ancillary } from "./ancillary.js";
 import { checkReferenceFluidData, type RangeData, type ReferenceFluidData } from "./fluidData.js";
@@ -32,17 +39,8 @@ export interface FluidPoint {
   readonly pressurePa: number;
 }
 
-/** Saturation starting values from the published ancillary equations. */
-export interface SaturationEstimate {
-  readonly pressurePa: number;
-  /** mol/m3 */
-  readonly liquidDensityMolPerM3: number;
-  /** mol/m3 */
-  readonly vaporDensityMolPerM3: number;
-}
-
-/** Where a state lies relative to the equation's published range. */
-export type ValidityStatus = "inside" | "extrapolated" | "outside";
+// saturation starting values and validity status are declared with the model interface
+export type { SaturationEstimate, ValidityStatus };
 
 /** A reference fluid: a ResidualModel with the extras of a published reference equation. */
 export interface ReferenceFluid extends ResidualModel {

@@ -11,6 +11,24 @@
  */
 import { R } from "../../constants.js";
 
+/**
+ * The coefficients of Tsonopoulos (1974), eqs. 3-4, the only copy (virialModel.ts uses them too):
+ * f0 = F0_0 + F0_1 y + F0_2 y^2 + F0_3 y^3 + F0_8 y^8 and f1 = F1_0 + F1_2 y^2 + F1_3 y^3 + F1_8 y^8,
+ * y = Tc / T.
+ */
+export const TSONOPOULOS = {
+  F0_0: 0.1445,
+  F0_1: -0.33,
+  F0_2: -0.1385,
+  F0_3: -0.0121,
+  F0_8: -0.000607,
+  F1_0: 0.0637,
+  F1_2: 0.331,
+  F1_3: -0.423,
+  F1_8: -0.008,
+} as const;
+const { F0_0, F0_1, F0_2, F0_3, F0_8, F1_0, F1_2, F1_3, F1_8 } = TSONOPOULOS;
+
 /** B (m3/mol) with T dB/dT and T^2 d2B/dT2 (both m3/mol). */
 export interface SecondVirial {
   b: number;
@@ -35,13 +53,13 @@ export function tsonopoulosB(
   const y7 = y3 * y3 * y;
   const y8 = y7 * y;
   const w = acentricFactor;
-  const f0 = 0.1445 - 0.33 * y - 0.1385 * y2 - 0.0121 * y3 - 0.000607 * y8;
-  const f1 = 0.0637 + 0.331 * y2 - 0.423 * y3 - 0.008 * y8;
+  const f0 = F0_0 + F0_1 * y + F0_2 * y2 + F0_3 * y3 + F0_8 * y8;
+  const f1 = F1_0 + F1_2 * y2 + F1_3 * y3 + F1_8 * y8;
   // y f_y and y^2 f_yy
-  const yf0y = -0.33 * y - 2 * 0.1385 * y2 - 3 * 0.0121 * y3 - 8 * 0.000607 * y8;
-  const yf1y = 2 * 0.331 * y2 - 3 * 0.423 * y3 - 8 * 0.008 * y8;
-  const y2f0yy = -2 * 0.1385 * y2 - 6 * 0.0121 * y3 - 56 * 0.000607 * y8;
-  const y2f1yy = 2 * 0.331 * y2 - 6 * 0.423 * y3 - 56 * 0.008 * y8;
+  const yf0y = F0_1 * y + 2 * F0_2 * y2 + 3 * F0_3 * y3 + 8 * F0_8 * y8;
+  const yf1y = 2 * F1_2 * y2 + 3 * F1_3 * y3 + 8 * F1_8 * y8;
+  const y2f0yy = 2 * F0_2 * y2 + 6 * F0_3 * y3 + 56 * F0_8 * y8;
+  const y2f1yy = 2 * F1_2 * y2 + 6 * F1_3 * y3 + 56 * F1_8 * y8;
   const scale = (R * criticalTemperatureK) / criticalPressurePa;
   out.b = scale * (f0 + w * f1);
   out.tDb = -scale * (yf0y + w * yf1y);

@@ -18,7 +18,7 @@ import { InputError, OutOfRangeError, type ResultWarning } from "../../errors.js
 import type { ModelInfo, ResidualDerivatives, ResidualRequest } from "../types.js";
 import { checkModelComponents, type ModelComponent } from "../modelComponent.js";
 import { resolveInteractions, type InteractionMatrix } from "../interaction/interactionTable.js";
-import { tsonopoulosB, type SecondVirial } from "./tsonopoulos.js";
+import { TSONOPOULOS, tsonopoulosB, type SecondVirial } from "./tsonopoulos.js";
 import { HyperDual } from "../../numerics/hyperDual.js";
 import type { ModelWithPressure } from "../pressureFunction.js";
 
@@ -123,13 +123,14 @@ export function createVirialModel(
     const y2 = y.mul(y);
     const y3 = y2.mul(y);
     const y8 = y2.mul(y2).mul(y2).mul(y2);
+    const c = TSONOPOULOS;
     const f0 = y
-      .mul(-0.33)
-      .add(0.1445)
-      .sub(y2.mul(0.1385))
-      .sub(y3.mul(0.0121))
-      .sub(y8.mul(0.000607));
-    const f1 = y2.mul(0.331).add(0.0637).sub(y3.mul(0.423)).sub(y8.mul(0.008));
+      .mul(c.F0_1)
+      .add(c.F0_0)
+      .add(y2.mul(c.F0_2))
+      .add(y3.mul(c.F0_3))
+      .add(y8.mul(c.F0_8));
+    const f1 = y2.mul(c.F1_2).add(c.F1_0).add(y3.mul(c.F1_3)).add(y8.mul(c.F1_8));
     return f0.add(f1.mul(om[k])).mul((R * tc[k]) / pc[k]);
   }
   const model: VirialModel = {

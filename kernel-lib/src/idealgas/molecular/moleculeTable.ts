@@ -2,7 +2,7 @@
  * The shipped molecular constants (data/molecules.json, with citations per molecule), lookup by id
  * or formula, and validation of constants supplied by a user.
  */
-import { editDistance } from "../../components/editDistance.js";
+import { editDistance } from "../../numerics/editDistance.js";
 import { InputError, UnknownNameError } from "../../errors.js";
 import table from "./data/molecules.json";
 import type { MolecularConstants } from "./types.js";

@@ -1,0 +1,93 @@
+/**
+ * The choice of a density root at given (T, P): mechanically unstable roots ((dP/drho)_T <= 0)
+ * are discarded; of the rest, "stable" takes the one of lowest Gibbs energy (at equal T and P the
+ * ideal parts are equal, so the lowest g_r/RT = a + aD - ln Z; the first on a tie), "vapor" the
+ * lightest and "liquid" the densest. Written once here for every caller (states at (T, P),
+ * fugacity coefficients of a phase, the stability test's trial phases).
+ */
+import type { ResidualDerivatives, ResidualModel } from "../eos/types.js";
+import { dPdRho, residualGibbsTP } from "../eos/residualRelations.js";
+import type { PhaseRequest } from "./types.js";
+
+/**
+ * What {@link chooseDensityRoot} learnt besides the chosen root's derivatives: plain numbers, so
+ * a caller can keep one record and reuse it (read it out before the next call).
+ */
+export interface RootChoice {
+  /** The chosen root, mol/m3 (NaN when no root is mechanically stable). */
+  densityMolPerM3: number;
+  /** Its position among the mechanically stable roots (0 = lightest). */
+  index: number;
+  /** How many roots are mechanically stable. */
+  stableCount: number;
+  /**
+   * Lowest and second-lowest g_r/RT among the stable roots: compared only for the "stable"
+   * request with more than one root (Infinity otherwise).
+   */
+  lowestGibbsOverRT: number;
+  secondGibbsOverRT: number;
+}
+
+/** A fresh {@link RootChoice}. */
+export function emptyRootChoice(): RootChoice {
+  return {
+    densityMolPerM3: NaN,
+    index: 0,
+    stableCount: 0,
+    lowestGibbsOverRT: Infinity,
+    secondGibbsOverRT: Infinity,
+  };
+}
+
+// the residual request of every root evaluation, allocated once
+const COMPOSITION = Object.freeze({ composition: true });
+
+/**
+ * Evaluates every root in `rhos` (mol/m3, ascending) at T (K) and x once, with composition
+ * derivatives (the chosen one needs them, and there are at most a few roots), and returns the
+ * derivatives of the root the request picks (undefined when no root is mechanically stable);
+ * `out` receives the rest.
+ */
+export function chooseDensityRoot(
+  model: ResidualModel,
+  temperatureK: number,
+  rhos: readonly number[],
+  x: readonly number[],
+  request: PhaseRequest,
+  out: RootChoice,
+): ResidualDerivatives | undefined {
+  const compareGibbs = request === "stable" && rhos.length > 1;
+  let count = 0;
+  let index = 0;
+  let rho = NaN;
+  let residual: ResidualDerivatives | undefined;
+  let best = Infinity;
+  let second = Infinity;
+  for (let k = 0; k < rhos.length; k++) {
+    const r = model.residual(temperatureK, rhos[k], x, COMPOSITION);
+    if (!(dPdRho(temperatureK, r, model.gasConstant) > 0)) continue;
+    let take = count === 0 || request === "liquid";
+    if (compareGibbs) {
+      const g = residualGibbsTP(r);
+      if (count === 0 || g < best) {
+        second = best;
+        best = g;
+        take = true;
+      } else if (g < second) {
+        second = g;
+      }
+    }
+    if (take) {
+      index = count;
+      rho = rhos[k];
+      residual = r;
+    }
+    count++;
+  }
+  out.densityMolPerM3 = rho;
+  out.index = index;
+  out.stableCount = count;
+  out.lowestGibbsOverRT = best;
+  out.secondGibbsOverRT = second;
+  return residual;
+}
