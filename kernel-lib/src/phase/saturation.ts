@@ -389,7 +389,7 @@ export function saturationAtTemperature(
   } catch (e) {
     // Below a published triple point the stable phase is solid; when the metastable
     // vapour-liquid equilibrium cannot be solved there, say so rather than how the search failed.
-    const triple = (model as SaturationHints).triple;
+    const triple = model.triple;
     if (e instanceof SolverError && triple && temperatureK < triple.temperatureK) {
       throw new PhaseUnavailableError(
         `no vapour-liquid saturation state at T = ${temperatureK} K: below the triple point (${triple.temperatureK} K, ${triple.pressurePa} Pa) of ${model.info.name}, in the solid region, and the equation's metastable vapour-liquid equilibrium could not be solved there (${e.message})`,
@@ -607,10 +607,7 @@ function lowestTemperature(
   pressurePa: number,
   options: SaturationAtPressureOptions,
 ): { temperatureK: number } {
-  const triple = (model as SaturationHints).triple;
-  const ranged = model as ResidualModel & {
-    validityStatus?: (temperatureK: number, pressurePa: number) => string;
-  };
+  const triple = model.triple;
   const refuse = (reason: string): never => {
     throw new PhaseUnavailableError(
       `no vapour-liquid saturation state at P = ${pressurePa} Pa for ${model.info.name}: ` +
@@ -633,8 +630,8 @@ function lowestTemperature(
   let tLo = triple.temperatureK;
   const usable = (T: number): boolean =>
     options.allowOutsideRange === true ||
-    typeof ranged.validityStatus !== "function" ||
-    ranged.validityStatus(T, 0) !== "outside";
+    typeof model.validityStatus !== "function" ||
+    model.validityStatus(T, 0) !== "outside";
   while (tLo * 0.99 > 0.5 * triple.temperatureK && usable(tLo * 0.99)) tLo *= 0.99;
   // the metastable equilibrium may not be solvable down to there: halve the distance to T_t
   for (let k = 0; k < 6; k++) {
