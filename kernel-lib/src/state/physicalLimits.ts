@@ -25,10 +25,12 @@
  *   fitted to vapour pressures and used in gas processing well below that), density below 1/b
  *   (refused: stateAtTRho).
  * - virial (Tsonopoulos B): density below half the critical density (eos/virial).
- * - Lee-Kesler: 0.3 <= Tr <= 4 (Lee and Kesler 1975; eos/leeKesler).
+ * - Lee-Kesler: 0.3 <= Tr <= 4 and Pr <= 10 (Lee and Kesler 1975; eos/leeKesler).
  * - reference equations: their published ranges and extrapolation ranges (eos/multiparameter),
  *   refused beyond the extrapolation range by the reference-state functions.
  * - ideal-gas heat capacities: each correlation's published range (idealgas/), refused beyond it.
+ * - the "ideal-gas" model and models from a user's pressure function: no range beyond the limits
+ *   above (the ideal gas is the model asked for; a user's function carries its own).
  */
 import { OutOfRangeError } from "../errors.js";
 

@@ -74,6 +74,15 @@ describe("outside the stated range of a cubic: a warning", () => {
       true,
     );
   });
+  it("Lee-Kesler above Pr = 10 (its fitted range)", () => {
+    // methane Pc = 4.599 MPa (from memory of the component table's source): 100 MPa is Pr ~ 22
+    const lk = defineFluid({ components: ["methane"], model: "lee-kesler" });
+    const s = lk.stateAtTP(300, 1e8);
+    expect(s.warnings.some((w) => w.code === "outside-validity" && /Pr = /.test(w.message))).toBe(
+      true,
+    );
+    expect(lk.stateAtTP(300, 5e6).warnings).toEqual([]);
+  });
   it("an ordinary state has no range warning", () => {
     expect(pr.stateAtTP(300, 5e6).warnings).toEqual([]);
   });

@@ -240,7 +240,14 @@ export function createLeeKeslerModel(
           message: `Lee-Kesler was fitted for 0.3 <= Tr <= 4; this state has Tr = ${tr.toPrecision(4)} (Tc of the mixture ${c.temperatureK.toPrecision(5)} K)`,
         });
       }
-      void rho;
+      // the fitted pressure range, Pr <= 10 (Lee and Kesler 1975; state/physicalLimits.ts)
+      const pr = (rho * R * T * (1 + model.residual(T, rho, x).aD)) / c.pressurePa;
+      if (pr > 10) {
+        warnings.push({
+          code: "outside-validity",
+          message: `Lee-Kesler was fitted for reduced pressures up to 10; this state has Pr = ${pr.toPrecision(4)} (Pc of the mixture ${c.pressurePa.toPrecision(5)} Pa)`,
+        });
+      }
       return warnings;
     },
   };
