@@ -18,13 +18,16 @@ import { temperatureEntropyChart } from "../../../kernel-lib/src/charts/temperat
 import { chartMeta } from "../../../kernel-lib/src/charts/chartSpec.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
 import { schemaErrors } from "./specCheck.js";
+import { expectReference, referenceValue } from "../../fixtures/referenceValues.js";
 
 // CO2 triple point 216.592 K, 0.51795 MPa, saturated liquid 1178.46 kg/m3 (from memory of Span
-// and Wagner, J. Phys. Chem. Ref. Data 25 (1996) 1509, Table 3); M = 44.0098 g/mol (same paper).
-const T_TRIPLE = 216.592;
-const P_TRIPLE = 0.51795e6;
-const RHO_L_TRIPLE = 1178.46 / 0.0440098; // mol/m3
-const PC = 7.3773e6; // Pa, same paper
+// and Wagner, J. Phys. Chem. Ref. Data 25 (1996) 1509); M = 44.0098 g/mol (same paper):
+// tests/fixtures/span-wagner-1996-co2.json, with the "chart-sampler" tolerance of these checks.
+const sw = (key: string) => referenceValue("span-wagner-1996-co2.json", key);
+const M_CO2 = sw("M").value / 1000;
+const T_TRIPLE = sw("triple/T").value;
+const RHO_L_TRIPLE = sw("triple/rhoL").value / M_CO2; // mol/m3
+const PC = sw("critical/p").value * 1e6; // Pa
 
 describe("isothermsFromModel on the CO2 reference equation", () => {
   const co2 = referenceFluid("carbon-dioxide");
@@ -44,7 +47,11 @@ describe("isothermsFromModel on the CO2 reference equation", () => {
       expect(top.pressurePa).toBeGreaterThan(2 * PC);
     }
     // 250 K: vapour pressure 1.7850 MPa (from memory of Span and Wagner 1996, Table 34).
-    expect(curves[0].equalArea!.pressurePa / 1.785e6).toBeCloseTo(1, 3);
+    expectReference(
+      curves[0].equalArea!.pressurePa / 1e6,
+      sw("saturation/T250/p"),
+      "chart-sampler",
+    );
     expect(curves[1].equalArea).toBeUndefined(); // supercritical
   });
 
@@ -65,8 +72,12 @@ describe("saturationFromModel on the CO2 reference equation", () => {
     expect(dome.saturation.length).toBe(15);
     expect(dome.skippedTemperaturesK).toEqual([]);
     expect(dome.saturation[0].temperatureK).toBe(T_TRIPLE);
-    expect(dome.saturation[0].pressurePa / P_TRIPLE).toBeCloseTo(1, 3);
-    expect(dome.saturation[0].liquid.densityMolPerM3! / RHO_L_TRIPLE).toBeCloseTo(1, 3);
+    expectReference(dome.saturation[0].pressurePa / 1e6, sw("triple/p"), "chart-sampler");
+    expectReference(
+      dome.saturation[0].liquid.densityMolPerM3! * M_CO2,
+      sw("triple/rhoL"),
+      "chart-sampler",
+    );
     expect(dome.domeWarnings).toHaveLength(1);
     expect(dome.domeWarnings[0]).toMatch(/starts at 216\.59 K/);
     const spec = isothermChart({ isotherms: isothermsFromModel(co2, [250]), ...dome });
@@ -98,7 +109,7 @@ describe("isotherms of a reference equation inside the dome", () => {
     const [flat] = isothermsFromModel(co2, [270], { points: 150 });
     const tie = flat.equalArea!;
     // 270 K: vapour pressure 3.2033 MPa (from memory of Span and Wagner 1996, Table 34).
-    expect(tie.pressurePa / 3.2033e6).toBeCloseTo(1, 3);
+    expectReference(tie.pressurePa / 1e6, sw("saturation/T270/p"));
     const inside = flat.points.filter(
       (p) =>
         p.densityMolPerM3 > tie.vaporDensityMolPerM3 &&
@@ -141,7 +152,7 @@ describe("P-h and T-s lines of CO2 below its triple point", () => {
     const tSat = high.points.find(
       (p, i, all) => i > 0 && p.temperatureK === all[i - 1].temperatureK,
     )!;
-    expect(tSat.temperatureK).toBeCloseTo(233.03, 1);
+    expectReference(tSat.temperatureK, sw("saturation/p1MPa/T"));
   });
 
   it("an isotherm below the triple-point temperature gets no two-phase step", () => {

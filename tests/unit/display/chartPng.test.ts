@@ -10,6 +10,7 @@ import {
 import { renderSvg } from "../../../kernel-lib/src/display/renderSvg.js";
 import type { VegaLiteSpec } from "../../../kernel-lib/src/display/vegaLiteSpec.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
+import { requiredUnderCI } from "../requiredUnderCI.js";
 
 const spec: VegaLiteSpec = {
   width: 240,
@@ -36,6 +37,8 @@ function pngSize(png: Uint8Array): { width: number; height: number } {
   expect(String.fromCharCode(...png.slice(12, 16))).toBe("IHDR");
   return { width: view.getUint32(16), height: view.getUint32(20) };
 }
+
+requiredUnderCI(systemFontsAvailable(), "a system font (Debian fonts-dejavu-core)");
 
 describe.skipIf(!systemFontsAvailable())("chartPng", () => {
   it("writes a PNG whose size is the SVG size times the scale", async () => {

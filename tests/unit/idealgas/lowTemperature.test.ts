@@ -11,6 +11,11 @@ import {
   listMolecules,
 } from "../../../kernel-lib/src/idealgas/molecular/index.js";
 import { R } from "../../../kernel-lib/src/constants.js";
+import {
+  expectReference,
+  referenceValue,
+  referenceValues,
+} from "../../fixtures/referenceValues.js";
 
 const MINUS_40_C = 233.15;
 
@@ -48,28 +53,20 @@ describe("correlation ranges reach the cold end of process work", () => {
   });
 });
 
-// NIST-JANAF values, J/(mol K), from memory of Chase (1998), NIST-JANAF Thermochemical Tables, 4th ed.
-// Tolerance 0.2 %: the low-temperature segments are fits to the rigid-rotor harmonic-oscillator
-// model, which at these temperatures differs from the tables only in the fourth significant figure.
-const JANAF_LOW: Array<[string, number, number]> = [
-  ["methane", 100, 33.258],
-  ["methane", 200, 33.473],
-  ["nitrogen", 100, 29.104],
-  ["nitrogen", 200, 29.107],
-  ["carbon-monoxide", 100, 29.104],
-  ["carbon-monoxide", 200, 29.108],
-  ["oxygen", 100, 29.106],
-  ["oxygen", 200, 29.126],
-  ["carbon-dioxide", 100, 29.208],
-  ["carbon-dioxide", 200, 32.359],
-  ["sulfur-dioxide", 100, 33.526],
-  ["sulfur-dioxide", 200, 36.372],
-];
+// NIST-JANAF values, J/(mol K), from memory of Chase (1998), NIST-JANAF Thermochemical Tables, 4th ed.:
+// tests/fixtures/janaf.json, use "correlation-low-T" (0.2 %: the low-temperature segments are fits
+// to the rigid-rotor harmonic-oscillator model, which at these temperatures differs from the tables
+// only in the fourth significant figure).
+const LOW_T = "correlation-low-T";
+const JANAF_LOW = [...referenceValues("janaf.json").values()].filter((r) => r.uses?.[LOW_T]);
 describe("low-temperature cp against NIST-JANAF (from memory of Chase 1998)", () => {
-  for (const [id, t, ref] of JANAF_LOW) {
+  it("has the 12 rows of the fixture", () => {
+    expect(JANAF_LOW).toHaveLength(12);
+  });
+  for (const ref of JANAF_LOW) {
+    const [id, t] = ref.key.split("/");
     it(`${id} at ${t} K`, () => {
-      const cp = idealGasFromCorrelation(id).cp(t);
-      expect(Math.abs(cp / ref - 1)).toBeLessThan(0.002);
+      expectReference(idealGasFromCorrelation(id).cp(Number(t)), ref, LOW_T);
     });
   }
 });
@@ -114,8 +111,12 @@ describe("correlation route versus statistical-mechanics route below ambient", (
 describe("propane: Perry's Aly-Lee (DIPPR 107) correlation", () => {
   const propane = idealGasFromCorrelation("propane");
   it("cp(298.15 K) against the NIST WebBook within 0.3 %", () => {
-    // 73.6 J/(mol K): from memory of the NIST Chemistry WebBook (gas-phase heat capacity of propane)
-    expect(Math.abs(propane.cp(298.15) / 73.6 - 1)).toBeLessThan(0.003);
+    // 73.6 J/(mol K): from memory of the NIST Chemistry WebBook (tests/fixtures/nist-webbook-gas.json)
+    expectReference(
+      propane.cp(298.15),
+      referenceValue("nist-webbook-gas.json", "propane/298.15/Cp"),
+      "aly-lee-propane",
+    );
   });
   it("agrees with the GRI-Mech 3.0 NASA polynomial from 300 to 1500 K within 1 %", () => {
     // NASA 7-coefficient cp/R of propane, 300-1000 K and 1000-5000 K: from memory of GRI-Mech 3.0

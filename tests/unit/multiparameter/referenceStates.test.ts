@@ -17,32 +17,30 @@ import { referenceIdealGasPure } from "../../../kernel-lib/src/eos/multiparamete
 import { buildReferenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluid.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 import { InputError, OutOfRangeError, UnknownNameError } from "../../../kernel-lib/src/errors.js";
+import {
+  expectReference,
+  referenceValue,
+  referenceValues,
+} from "../../fixtures/referenceValues.js";
 
 const water = referenceFluid("water");
 
 describe("density at given (T, P): IAPWS R6-95(2018) Table 7 inverted", () => {
-  // [T K, p MPa, rho kg/m3] from memory of R6-95(2018) Table 7. The pressure is printed to nine
-  // digits, so the density it implies is known to about 5e-9 / (rho/p dp/drho) relative; the
-  // tolerance 1e-7 relative covers that for every row (the stiff liquid rows constrain rho best).
-  const rows: [number, number, number][] = [
-    [300, 0.992418352e-1, 996.556],
-    [300, 0.200022515e2, 1005.308],
-    [300, 0.700004704e3, 1188.202],
-    [500, 0.999679423e-1, 0.435],
-    [500, 0.999938125, 4.532],
-    [500, 0.100003858e2, 838.025],
-    [500, 0.700000405e3, 1084.564],
-    [647, 0.220384756e2, 358.0],
-    [900, 0.100062559, 0.241],
-    [900, 0.20000069e2, 52.615],
-    [900, 0.700000006e3, 870.769],
-  ];
-  for (const [T, p, rho] of rows) {
-    it(`T = ${T} K, p = ${p} MPa -> ${rho} kg/m3`, () => {
-      const s = referenceStateTP(water, T, p * 1e6);
-      // 647 K, 22.0384756 MPa lies 7e-5 MPa above the saturation pressure (22.0384057 MPa).
-      const tol = T === 647 ? 2e-6 : 1e-7;
-      expect(Math.abs(s.densityKgPerM3 / rho - 1)).toBeLessThan(tol);
+  // tests/fixtures/iapws-r6-95-table7.json (from memory of R6-95(2018) Table 7): each row's (T, p)
+  // must give its density within the "density-from-p" tolerance of the fixture (1e-7 relative;
+  // 2e-6 at 647 K next to the saturation pressure; reasons there).
+  const table7 = referenceValues("iapws-r6-95-table7.json");
+  const states = [...table7.keys()].filter((k) => k.endsWith("/rho")).map((k) => k.slice(0, -4));
+  it("has the eleven rows of the table", () => {
+    expect(states).toHaveLength(11);
+  });
+  for (const state of states) {
+    const T = Number(/^T(\d+)-/.exec(state)?.[1]);
+    const p = table7.get(`${state}/p`)!;
+    const rho = table7.get(`${state}/rho`)!;
+    it(`T = ${T} K, p = ${p.printed} MPa -> ${rho.printed} kg/m3`, () => {
+      const s = referenceStateTP(water, T, p.value * 1e6);
+      expectReference(s.densityKgPerM3, rho, "density-from-p");
       expect(s.referenceState.kind).toBe("fluid-convention");
     });
   }
@@ -85,8 +83,15 @@ describe("ideal part through the IdealGasPure contract", () => {
     // J/(mol K) (from memory); IAPWS-95's ideal part (Cooper 1982 form) agrees within 0.1 %.
     // S: CODATA Key Values (Cox, Wagman and Medvedev 1989), the anchor of the entropy.
     const ig = referenceIdealGasPure(water);
-    expect(Math.abs(ig.cp(298.15) / 33.59 - 1)).toBeLessThan(1e-3);
-    expect(Math.abs(ig.entropyStandard(298.15) - 188.835)).toBeLessThan(1e-9);
+    expectReference(
+      ig.cp(298.15),
+      referenceValue("janaf.json", "water/298.15/Cp"),
+      "iapws-95-ideal-part",
+    );
+    expectReference(
+      ig.entropyStandard(298.15),
+      referenceValue("codata-1989.json", "water-gas/298.15/S"),
+    );
     expect(ig.enthalpyFrom298(298.15)).toBe(0);
   });
 

@@ -15,45 +15,38 @@ import {
 } from "../../../kernel-lib/src/phase/saturation.js";
 import { equalAreaIsotherm } from "../../../kernel-lib/src/phase/equalAreaIsotherm.js";
 import { OutOfRangeError, PhaseUnavailableError } from "../../../kernel-lib/src/errors.js";
+import { expectReference, referenceValue } from "../../fixtures/referenceValues.js";
+
+// tests/fixtures/iapws-r6-95-table8.json, iapws-r6-95-constants.json, wagner-pruss-2002-water.json
+const t8 = (key: string) => referenceValue("iapws-r6-95-table8.json", key);
+const constant = (key: string) => referenceValue("iapws-r6-95-constants.json", key);
+const wp = (key: string) => referenceValue("wagner-pruss-2002-water.json", key);
 
 const water = referenceFluid("water");
-const M = 0.018015268; // kg/mol (IAPWS R6-95(2018))
+const M = constant("M").value / 1000; // kg/mol (IAPWS R6-95(2018))
 
 function expectRel(actual: number, expected: number, rel: number): void {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
 }
 
 describe("IAPWS R6-95(2018) Table 8: saturation at 275, 450 and 625 K", () => {
-  // [T K, ps MPa, rho' kg/m3, rho'' kg/m3, h' kJ/kg, h'' kJ/kg, s' kJ/(kg K), s'' kJ/(kg K)]
-  // from memory of IAPWS R6-95(2018) Table 8.
-  const rows: number[][] = [
-    [
-      275, 0.698451167e-3, 0.999887406e3, 0.550664919e-2, 0.775972202e1, 0.250428995e4,
-      0.28309467e-1, 0.910660121e1,
-    ],
-    [
-      450, 0.932203564, 0.89034125e3, 0.48120036e1, 0.749161585e3, 0.277441078e4, 0.210865845e1,
-      0.660921221e1,
-    ],
-    [
-      625, 0.169082693e2, 0.567090385e3, 0.11829028e3, 0.168626976e4, 0.255071625e4, 0.380194683e1,
-      0.518506121e1,
-    ],
-  ];
-  for (const [T, ps, rhoL, rhoV, hL, hV, sL, sV] of rows) {
+  for (const T of [275, 450, 625]) {
     it(`T = ${T} K`, () => {
       const sat = saturationAtTemperature(water, T);
       expect(sat.start).toBe("ancillary equations");
-      expectRel(sat.pressurePa / 1e6, ps, 1e-8);
-      expectRel(sat.liquidDensityMolPerM3 * M, rhoL, 1e-8);
-      expectRel(sat.vaporDensityMolPerM3 * M, rhoV, 1e-8);
+      expectReference(sat.pressurePa / 1e6, t8(`T${T}/ps`));
+      expectReference(sat.liquidDensityMolPerM3 * M, t8(`T${T}/rhoL`));
+      expectReference(sat.vaporDensityMolPerM3 * M, t8(`T${T}/rhoV`));
       const L = referenceStateTRho(water, T, sat.liquidDensityMolPerM3);
       const V = referenceStateTRho(water, T, sat.vaporDensityMolPerM3);
-      expectRel(L.molar.h / M / 1e3, hL, 1e-8);
-      expectRel(V.molar.h / M / 1e3, hV, 1e-8);
-      expectRel(L.molar.s / M / 1e3, sL, 1e-8);
-      expectRel(V.molar.s / M / 1e3, sV, 1e-8);
-      // h_vap from alpha_r alone equals the difference of the absolute enthalpies.
+      expectReference(L.molar.h / M / 1e3, t8(`T${T}/hL`));
+      expectReference(V.molar.h / M / 1e3, t8(`T${T}/hV`));
+      expectReference(L.molar.s / M / 1e3, t8(`T${T}/sL`));
+      expectReference(V.molar.s / M / 1e3, t8(`T${T}/sV`));
+      // h_vap from alpha_r alone equals the difference of the absolute enthalpies (two rounded
+      // table values, so twice the table's 1e-8).
+      const [hL, hV] = [t8(`T${T}/hL`).value, t8(`T${T}/hV`).value];
+      const [sL, sV] = [t8(`T${T}/sL`).value, t8(`T${T}/sV`).value];
       expectRel(sat.enthalpyOfVaporizationJPerMol / M / 1e3, hV - hL, 2e-8);
       expectRel(sat.entropyOfVaporizationJPerMolK / M / 1e3, sV - sL, 2e-8);
     });
@@ -66,9 +59,9 @@ describe("IAPWS-95 fixed points", () => {
     // Tolerances: T and P to 1e-9 relative; the density, fixed by a very flat (dP/drho) near
     // the critical point, to 1e-6 relative.
     const c = locateCriticalPoint(water);
-    expectRel(c.temperatureK, 647.096, 1e-9);
-    expectRel(c.pressurePa, 22.064e6, 1e-9);
-    expectRel(c.densityMolPerM3 * M, 322, 1e-6);
+    expectReference(c.temperatureK, constant("Tc"), "critical-point-search");
+    expectReference(c.pressurePa / 1e6, constant("pc"), "critical-point-search");
+    expectReference(c.densityMolPerM3 * M, constant("rhoc"), "critical-point-search");
   });
 
   it("triple point: p = 611.654771 Pa, rho' = 999.793 kg/m3, rho'' = 0.00485458 kg/m3", () => {
@@ -76,9 +69,9 @@ describe("IAPWS-95 fixed points", () => {
     // Table 13.1 (values computed from IAPWS-95 at 273.16 K); tolerance half a unit in the last
     // printed digit.
     const s = saturationAtTemperature(water, 273.16);
-    expect(Math.abs(s.pressurePa - 611.654771)).toBeLessThan(5e-7);
-    expect(Math.abs(s.liquidDensityMolPerM3 * M - 999.793)).toBeLessThan(5e-4);
-    expect(Math.abs(s.vaporDensityMolPerM3 * M - 0.00485458)).toBeLessThan(5e-9);
+    expectReference(s.pressurePa, wp("triple/p"));
+    expectReference(s.liquidDensityMolPerM3 * M, wp("triple/rhoL"));
+    expectReference(s.vaporDensityMolPerM3 * M, wp("triple/rhoV"));
     // The reference state: u' = 0 and s' = 0 at the triple point (IAPWS-95 convention).
     const L = referenceStateTRho(water, 273.16, s.liquidDensityMolPerM3);
     expect(Math.abs(L.molar.u)).toBeLessThan(1e-6);
@@ -89,7 +82,7 @@ describe("IAPWS-95 fixed points", () => {
     // From memory of Wagner and Pruss (2002), section 2.3 (normal boiling temperature on ITS-90
     // computed from IAPWS-95: 373.124 K); tolerance half a unit in the third decimal.
     const s = saturationAtPressure(water, 101325);
-    expect(Math.abs(s.temperatureK - 373.124)).toBeLessThan(5e-4);
+    expectReference(s.temperatureK, wp("normal-boiling/T"));
     expect(Math.abs(s.pressurePa / 101325 - 1)).toBeLessThan(1e-11);
   });
 });

@@ -20,16 +20,21 @@ import {
 } from "../../../kernel-lib/src/phase/twoPhaseState.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 import { InputError, PhaseUnavailableError } from "../../../kernel-lib/src/errors.js";
+import { referenceValue } from "../../fixtures/referenceValues.js";
 
 const water = referenceFluid("water");
 const steam = referenceFluidBinding(water);
-const M = 0.018015268;
-// IAPWS R6-95(2018) Table 8, T = 450 K (from memory): ps MPa, h', h'' kJ/kg, s', s'' kJ/(kg K)
-const ps450 = 0.932203564;
-const hL450 = 0.749161585e3;
-const hV450 = 0.277441078e4;
-const sL450 = 0.210865845e1;
-const sV450 = 0.660921221e1;
+const M = referenceValue("iapws-r6-95-constants.json", "M").value / 1000;
+// IAPWS R6-95(2018) Table 8, T = 450 K (tests/fixtures/iapws-r6-95-table8.json, from memory):
+// ps MPa, rho' kg/m3, rho'' kg/m3, h', h'' kJ/kg, s', s'' kJ/(kg K)
+const t8 = (q: string): number => referenceValue("iapws-r6-95-table8.json", `T450/${q}`).value;
+const ps450 = t8("ps");
+const rhoL450 = t8("rhoL");
+const rhoV450 = t8("rhoV");
+const hL450 = t8("hL");
+const hV450 = t8("hV");
+const sL450 = t8("sL");
+const sV450 = t8("sV");
 
 function rel(a: number, b: number): number {
   return Math.abs(a / b - 1);
@@ -79,7 +84,7 @@ describe("states at given quality (lever rule on IAPWS R6-95 Table 8, 450 K)", (
     const v = stateAtTemperatureQuality(steam, 450, 1);
     expect(rel(l.mass.h / 1e3, hL450)).toBeLessThan(1e-8);
     expect(rel(v.mass.h / 1e3, hV450)).toBeLessThan(1e-8);
-    expect(rel(l.densityKgPerM3, 0.89034125e3)).toBeLessThan(1e-8);
+    expect(rel(l.densityKgPerM3, rhoL450)).toBeLessThan(1e-8);
   });
 
   it("g = h - T s is the same in both saturated phases", () => {
@@ -170,7 +175,7 @@ describe("(T, rho): a closed vessel", () => {
   it("inside the dome: quality from the lever rule on volumes (R6-95 Table 8 densities, 450 K)", () => {
     // v = (1 - q)/rho' + q/rho'' with rho' = 890.341250, rho'' = 4.81200360 kg/m3 (Table 8)
     const q = 0.2;
-    const v = (1 - q) / 0.89034125e3 + q / 0.48120036e1;
+    const v = (1 - q) / rhoL450 + q / rhoV450;
     const r = stateAtTemperatureDensity(steam, 450, 1 / v / M);
     expect(r.kind).toBe("two-phase");
     if (r.kind === "two-phase") {

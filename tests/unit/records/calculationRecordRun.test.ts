@@ -11,12 +11,16 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { runNotebooks } from "../../../kernel-lib/src/records/runNotebooks.js";
 import type { NotebookRecord } from "../../../kernel-lib/src/records/runNotebooks.js";
 import { checkRecords, DEFAULT_CHROMIUM_PATH } from "../../browser/checkRecords.mjs";
+import { requiredUnderCI } from "../requiredUnderCI.js";
 
 const built = fs.existsSync(
   path.resolve(__dirname, "../../../kernel-lib/dist/records/calculationRecord.js"),
 );
 const chromium = process.env.ISOCHOR_CHROMIUM ?? DEFAULT_CHROMIUM_PATH;
 const PAYLOAD = "<script>window.__isochorInjected=1</script>";
+
+requiredUnderCI(built, "the build (kernel-lib/dist: npm test builds before vitest)");
+requiredUnderCI(fs.existsSync(chromium), `Chromium at ${chromium}`);
 
 describe.skipIf(!built)("a notebook with a calculation record (needs kernel-lib/dist)", () => {
   let outDir: string;

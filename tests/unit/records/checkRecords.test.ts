@@ -9,8 +9,11 @@ import {
   DEFAULT_CHROMIUM_PATH,
   INJECTION_FLAG,
 } from "../../browser/checkRecords.mjs";
+import { requiredUnderCI } from "../requiredUnderCI.js";
 
 const chromium = process.env.ISOCHOR_CHROMIUM ?? DEFAULT_CHROMIUM_PATH;
+
+requiredUnderCI(fs.existsSync(chromium), `Chromium at ${chromium}`);
 
 describe.skipIf(!fs.existsSync(chromium))("checkRecords (headless Chromium)", () => {
   let dir: string;

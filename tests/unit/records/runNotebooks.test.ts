@@ -7,6 +7,7 @@ import { runNotebooks } from "../../../kernel-lib/src/records/runNotebooks.js";
 import type { NotebookRecord } from "../../../kernel-lib/src/records/runNotebooks.js";
 import { RunnerError } from "../../../kernel-lib/src/records/runnerError.js";
 import { nbformat4Problems } from "./nbformat4.js";
+import { requiredUnderCI } from "../requiredUnderCI.js";
 
 const fixtures = path.join(__dirname, "fixtures");
 const fixture = (name: string): string => path.join(fixtures, name);
@@ -71,6 +72,7 @@ describe("runNotebooks on a good notebook (one run shared by the tests below)", 
     expect(executed.nbformat_minor).toBe(5);
   });
 
+  requiredUnderCI(pythonNbformat(), "Python nbformat (/usr/bin/python3 -c 'import nbformat')");
   it.skipIf(!pythonNbformat())("passes the reference validator (Python nbformat.validate)", () => {
     const script =
       "import sys, nbformat; nbformat.validate(nbformat.read(sys.argv[1], as_version=4)); print('valid')";

@@ -8,31 +8,44 @@ import {
 } from "../../../kernel-lib/src/units/atmosphericPressure.js";
 import { UNIT_TABLE } from "../../../kernel-lib/src/units/unitTable.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
+import { expectReference, referenceValue } from "../../fixtures/referenceValues.js";
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 afterEach(() => resetDefaultAtmosphericPressure());
 
 describe("conversion factors against NIST SP 811 (2008), Appendix B.8", () => {
-  // Each expected value is the factor as printed in NIST SP 811 (2008) App. B.8 (from memory of
-  // that table); "exact" marks factors the table prints in bold as exact. Tolerances are half a
-  // unit in the last printed digit.
+  // The factors as printed in NIST SP 811 (2008) App. B.8 (from memory of that table):
+  // tests/fixtures/nist-sp811-2008.json, exact ones (printed in bold) with tolerance 0, the others
+  // half a unit in the last printed digit.
+  const sp811 = (key: string) => referenceValue("nist-sp811-2008.json", key);
+  const direct: [string, string][] = [
+    // [unit of the library, key of the factor]
+    ["atm", "atm"],
+    ["bar", "bar"],
+    ["psia", "psi"],
+    ["torr", "torr"],
+    ["mmHg", "mmHg"],
+    ["ft/s", "ft/s"],
+    ["Btu/h", "Btu_IT/h"],
+  ];
+  for (const [unit, key] of direct) {
+    it(`1 ${unit} = ${sp811(key).printed} ${sp811(key).unit}`, () => {
+      expectReference(toSI(1, unit), sp811(key));
+    });
+  }
+  // closed forms from the definitions: the exact pound and foot, prefixes, the psi factor
+  const pound = sp811("lb").value;
+  const ft3Exact = 0.3048 ** 3; // the foot is exact (0.3048 m), so the cubic foot is exact too
   const cases: [string, number, string, number, number][] = [
     // [unit, value, SI unit, expected SI value, relative tolerance]
-    ["atm", 1, "Pa", 101325, 0], // exact
-    ["bar", 1, "Pa", 1e5, 0], // exact
-    ["psia", 1, "Pa", 6894.757, 1e-7], // 6.894 757 E+03
-    ["torr", 1, "Pa", 133.3224, 5e-7], // 1.333 224 E+02
-    ["mmHg", 1, "Pa", 133.3224, 5e-7], // 1.333 224 E+02 (conventional mmHg)
-    ["ft/s", 1, "m/s", 0.3048, 0], // exact
-    ["km/h", 3.6, "m/s", 1, 1e-15], // 1 km/h = 0.277 777 8 m/s
-    ["Btu/h", 1, "W", 0.2930711, 5e-7], // Btu_IT/h: 2.930 711 E-01
-    ["lbmol", 1, "mol", 453.59237, 1e-15], // 1000 x pound 4.535 923 7 E-01 kg, exact
-    ["ft3/lbmol", 1, "m3/mol", 0.028316846592 / 453.59237, 1e-15], // ft3 2.831 685 E-02 exact
+    ["km/h", 3.6, "m/s", 1, 1e-15], // 1 km/h = 1000 m / 3600 s
+    ["lbmol", 1, "mol", 1000 * pound, 1e-15], // 1000 x the pound (exact)
+    ["ft3/lbmol", 1, "m3/mol", ft3Exact / (1000 * pound), 1e-15],
     ["kJ/mol", 1, "J/mol", 1000, 0],
     ["cm3/mol", 1, "m3/mol", 1e-6, 0],
     ["K/bar", 1, "K/Pa", 1e-5, 0],
-    ["degF/psi", 1, "K/Pa", 5 / 9 / 6894.757, 1e-7],
+    ["degF/psi", 1, "K/Pa", 5 / 9 / sp811("psi").value, sp811("psi").tolerance.relative!],
   ];
   for (const [unit, value, si, expected, tol] of cases) {
     it(`${value} ${unit} = ${expected} ${si}`, () => {
@@ -41,17 +54,21 @@ describe("conversion factors against NIST SP 811 (2008), Appendix B.8", () => {
       else expect(rel(got, expected)).toBeLessThanOrEqual(tol);
     });
   }
+  it("the cubic foot of the table is the exact one rounded", () => {
+    expectReference(ft3Exact, sp811("ft3"));
+  });
 
   it("mass-based units use the exact pound and Btu_IT (NIST SP 811 B.8)", () => {
-    // Btu_IT/lb = 2.326 E+03 J/kg (exact); Btu_IT/(lb °F) = 4.1868 E+03 J/(kg K) (exact);
-    // lb/ft3 = 1.601 846 E+01 kg/m3; pound = 4.535 923 7 E-01 kg (exact).
     const M = 1; // kg/mol, so per-kg and per-mol values coincide numerically
-    expect(rel(toSI(1, "Btu/lb", { molarMassKgPerMol: M }), 2326)).toBeLessThan(1e-15);
-    expect(rel(toSI(1, "Btu/(lb degF)", { molarMassKgPerMol: M }), 4186.8)).toBeLessThan(1e-15);
-    expect(rel(toSI(1, "lb/ft3", { molarMassKgPerMol: M }), 16.01846)).toBeLessThan(5e-7);
-    expect(toSI(1, "lb", { molarMassKgPerMol: M })).toBe(0.45359237);
-    expect(rel(toSI(1, "Btu/(lbmol degR)"), 4.1868)).toBeLessThan(1e-15);
-    expect(rel(toSI(1, "Btu/lbmol"), 2.326)).toBeLessThan(1e-15);
+    expectReference(toSI(1, "Btu/lb", { molarMassKgPerMol: M }), sp811("Btu_IT/lb"));
+    expectReference(toSI(1, "Btu/(lb degF)", { molarMassKgPerMol: M }), sp811("Btu_IT/(lb degF)"));
+    expectReference(toSI(1, "lb/ft3", { molarMassKgPerMol: M }), sp811("lb/ft3"));
+    expectReference(toSI(1, "lb", { molarMassKgPerMol: M }), sp811("lb"));
+    // per lbmol: the per-lb factors divided by 1000 (closed form)
+    expect(rel(toSI(1, "Btu/(lbmol degR)"), sp811("Btu_IT/(lb degF)").value / 1000)).toBeLessThan(
+      1e-15,
+    );
+    expect(rel(toSI(1, "Btu/lbmol"), sp811("Btu_IT/lb").value / 1000)).toBeLessThan(1e-15);
   });
 
   it("mass-based units convert through the molar mass (closed form: x J/kg * M kg/mol)", () => {
@@ -107,8 +124,9 @@ describe("gauge pressures", () => {
     expect(toSI(1, "MPa(g)")).toBe(1_101_325);
     expect(toSI(2, "bar(g)")).toBe(301_325);
     expect(fromSI(1_101_325, "barg")).toBeCloseTo(10, 12);
-    // 100 psig = 100 x 6894.757 Pa + 101325 Pa (NIST SP 811 B.8 psi factor).
-    expect(rel(toSI(100, "psig"), 100 * 6894.757 + 101325)).toBeLessThan(1e-7);
+    // 100 psig = 100 x 6894.757 Pa + 101325 Pa (NIST SP 811 B.8 psi factor, in the fixture).
+    const psi = referenceValue("nist-sp811-2008.json", "psi");
+    expect(rel(toSI(100, "psig"), 100 * psi.value + 101325)).toBeLessThan(psi.tolerance.relative!);
   });
 
   it("use a per-call atmospheric pressure, then the notebook default", () => {

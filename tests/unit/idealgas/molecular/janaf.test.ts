@@ -12,54 +12,37 @@
 import { describe, expect, it } from "vitest";
 import { idealGasFromMolecule } from "../../../../kernel-lib/src/idealgas/molecular/index.js";
 
-interface JanafRow {
-  id: string;
-  /** S°(298.15 K), J/(mol K) */
-  s: number;
-  /** Cp°(298.15 K), J/(mol K) */
-  cp: number;
+import {
+  expectReference,
+  referenceValue,
+  referenceValues,
+} from "../../../fixtures/referenceValues.js";
+
+// Reference values: tests/fixtures/janaf.json (from memory of NIST-JANAF, Chase 1998, 1 bar),
+// keyed <id>/<T>/<S|Cp>, each with its tolerance and reason (the header above in short).
+const JANAF = "janaf.json";
+const janaf = (key: string) => referenceValue(JANAF, key);
+/** Asserts a molecular-route result against a table value with that route's tolerance. */
+const expectJanaf = (actual: number, key: string) =>
+  expectReference(actual, janaf(key), "molecular-route");
+/** The component ids with an entropy row at `t` ("298.15", "1000") meant for this route. */
+function idsAt(t: string): string[] {
+  return [...referenceValues(JANAF).values()]
+    .filter((r) => r.key.endsWith(`/${t}/S`) && r.uses?.["molecular-route"] !== undefined)
+    .map((r) => r.key.slice(0, r.key.indexOf("/")));
 }
-
-// All from memory of NIST-JANAF Thermochemical Tables, Chase, 4th ed. (1998), 298.15 K, 1 bar.
-const AT_298: JanafRow[] = [
-  { id: "helium", s: 126.153, cp: 20.786 },
-  { id: "argon", s: 154.845, cp: 20.786 },
-  { id: "hydrogen", s: 130.68, cp: 28.836 },
-  { id: "nitrogen", s: 191.609, cp: 29.124 },
-  { id: "oxygen", s: 205.147, cp: 29.376 },
-  { id: "carbon-monoxide", s: 197.653, cp: 29.142 },
-  { id: "nitric-oxide", s: 210.758, cp: 29.845 },
-  { id: "hydrogen-chloride", s: 186.901, cp: 29.136 },
-  { id: "chlorine", s: 223.079, cp: 33.949 },
-  { id: "nitrous-oxide", s: 219.957, cp: 38.617 },
-  { id: "hydrogen-cyanide", s: 201.828, cp: 35.863 },
-  { id: "carbon-dioxide", s: 213.795, cp: 37.129 },
-  { id: "water", s: 188.834, cp: 33.59 },
-  { id: "hydrogen-sulfide", s: 205.757, cp: 34.192 },
-  { id: "sulfur-dioxide", s: 248.223, cp: 39.842 },
-  { id: "ammonia", s: 192.774, cp: 35.652 },
-  { id: "methane", s: 186.251, cp: 35.695 },
-  { id: "ethylene", s: 219.33, cp: 42.886 },
-];
-
-// From memory of NIST-JANAF Thermochemical Tables, Chase, 4th ed. (1998), 1000 K, 1 bar.
-const AT_1000: JanafRow[] = [
-  { id: "hydrogen", s: 166.114, cp: 30.205 },
-  { id: "nitrogen", s: 228.17, cp: 32.698 },
-  { id: "oxygen", s: 243.578, cp: 34.87 },
-  { id: "carbon-monoxide", s: 234.538, cp: 33.183 },
-  { id: "carbon-dioxide", s: 269.299, cp: 54.308 },
-  { id: "water", s: 232.738, cp: 41.268 },
-];
-
-const rel = (x: number, ref: number) => Math.abs(x - ref) / ref;
+const AT_298 = idsAt("298.15");
+const AT_1000 = idsAt("1000");
 
 describe("S and Cp at 298.15 K against NIST-JANAF (Chase 1998, from memory)", () => {
-  for (const row of AT_298) {
-    it(`${row.id}: S within 0.15 %, Cp within 1 %`, () => {
-      const gas = idealGasFromMolecule(row.id);
-      expect(rel(gas.entropyStandard(298.15), row.s)).toBeLessThan(0.0015);
-      expect(rel(gas.cp(298.15), row.cp)).toBeLessThan(0.01);
+  it("has the 18 species of the table rows used", () => {
+    expect(AT_298).toHaveLength(18);
+  });
+  for (const id of AT_298) {
+    it(`${id}: S within 0.15 %, Cp within 1 %`, () => {
+      const gas = idealGasFromMolecule(id);
+      expectJanaf(gas.entropyStandard(298.15), `${id}/298.15/S`);
+      expectJanaf(gas.cp(298.15), `${id}/298.15/Cp`);
       expect(gas.enthalpyFrom298(298.15)).toBe(0);
     });
   }
@@ -72,8 +55,11 @@ describe("S and Cp at 298.15 K against NIST-JANAF (Chase 1998, from memory)", ()
       "carbon-dioxide",
       "sulfur-dioxide",
     ]) {
-      const row = AT_298.find((r) => r.id === id)!;
-      expect(rel(idealGasFromMolecule(id).entropyStandard(298.15), row.s)).toBeLessThan(2e-4);
+      expectReference(
+        idealGasFromMolecule(id).entropyStandard(298.15),
+        janaf(`${id}/298.15/S`),
+        "rrho-closed-shell",
+      );
     }
   });
 
@@ -92,17 +78,13 @@ describe("S and Cp at 298.15 K against NIST-JANAF (Chase 1998, from memory)", ()
 });
 
 describe("equilibrium hydrogen below room temperature (rotational level sum)", () => {
-  // From memory of NIST-JANAF (Chase 1998), H2 table: the dip of cp below 7/2 R near 150-200 K
+  // NIST-JANAF H2 rows (tests/fixtures/janaf.json): the dip of cp below 7/2 R near 150-200 K
   // is the ortho/para rotational heat capacity, which the classical rotor cannot give.
-  const rows = [
-    { t: 100, cp: 28.154, s: 100.727 },
-    { t: 200, cp: 27.447, s: 119.412 },
-  ];
   const gas = idealGasFromMolecule("hydrogen");
-  for (const row of rows) {
-    it(`${row.t} K: S within 0.15 %, Cp within 1 %`, () => {
-      expect(rel(gas.entropyStandard(row.t), row.s)).toBeLessThan(0.0015);
-      expect(rel(gas.cp(row.t), row.cp)).toBeLessThan(0.01);
+  for (const t of [100, 200]) {
+    it(`${t} K: S within 0.15 %, Cp within 1 %`, () => {
+      expectJanaf(gas.entropyStandard(t), `hydrogen/${t}/S`);
+      expectJanaf(gas.cp(t), `hydrogen/${t}/Cp`);
     });
   }
   it("cp has a minimum below 7/2 R between 100 and 250 K (explicit levels, not the classical rotor)", () => {
@@ -113,21 +95,25 @@ describe("equilibrium hydrogen below room temperature (rotational level sum)", (
 });
 
 describe("S and Cp at 1000 K against NIST-JANAF (Chase 1998, from memory)", () => {
-  for (const row of AT_1000) {
-    it(`${row.id}: S within 0.15 %, Cp within 1.5 % and low (no anharmonicity in the model)`, () => {
-      const gas = idealGasFromMolecule(row.id);
-      expect(rel(gas.entropyStandard(1000), row.s)).toBeLessThan(0.0015);
-      expect(rel(gas.cp(1000), row.cp)).toBeLessThan(0.015);
+  it("has the 6 species of the table rows used", () => {
+    expect(AT_1000).toHaveLength(6);
+  });
+  for (const id of AT_1000) {
+    it(`${id}: S within 0.15 %, Cp within 1.5 % and low (no anharmonicity in the model)`, () => {
+      const gas = idealGasFromMolecule(id);
+      expectJanaf(gas.entropyStandard(1000), `${id}/1000/S`);
+      const cp = janaf(`${id}/1000/Cp`);
+      expectJanaf(gas.cp(1000), `${id}/1000/Cp`);
       // Anharmonicity raises the true Cp: the harmonic model is below the tables.
-      expect(gas.cp(1000)).toBeLessThan(row.cp);
+      expect(gas.cp(1000)).toBeLessThan(cp.value);
     });
   }
 
   it("N2 at 3000 K: Cp low by 0.5 % to 3 % (anharmonicity and vibration-rotation coupling)", () => {
-    // Cp(3000 K) = 37.028 J/(mol K): from memory of NIST-JANAF (Chase 1998), N2 table.
+    const ref = janaf("nitrogen/3000/Cp");
     const cp = idealGasFromMolecule("nitrogen", { maxTemperatureK: 3000 }).cp(3000);
-    const deficit = (37.028 - cp) / 37.028;
+    const deficit = (ref.value - cp) / ref.value;
     expect(deficit).toBeGreaterThan(0.005);
-    expect(deficit).toBeLessThan(0.03);
+    expect(deficit).toBeLessThan(ref.uses!["molecular-route"].relative!);
   });
 });
