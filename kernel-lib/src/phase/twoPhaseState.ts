@@ -22,7 +22,7 @@ import { MAX_TEMPERATURE_K, MIN_TEMPERATURE_K } from "../state/physicalLimits.js
 import type { FluidBinding, FluidState } from "../state/types.js";
 import { requireFinite, requirePositive } from "../validate.js";
 import { locateCriticalPoint } from "./criticalPoint.js";
-import { requirePure, type SaturationHints } from "./pureFluid.js";
+import { requirePure } from "./pureFluid.js";
 import {
   saturationAtPressure,
   saturationAtTemperature,
@@ -225,7 +225,7 @@ function acrossDome(
     });
     return { kind: "single-phase", state: r.state };
   }
-  const triple = (binding.model as SaturationHints).triple;
+  const triple = binding.model.triple;
   let sat: SaturationResult;
   try {
     sat = saturationAtPressure(binding.model, pressurePa, options);
