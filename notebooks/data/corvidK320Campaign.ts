@@ -12,7 +12,7 @@
  * tests/unit/pvt/demoCampaign.test.ts checks that the committed file equals this function's output.
  */
 import { getComponent } from "../../kernel-lib/src/components/index.js";
-import { referenceFluid } from "../../kernel-lib/src/eos/multiparameter/index.js";
+import { referenceFluid } from "../../kernel-lib/src/fluid/referenceFluids.js";
 import { seededRandom } from "../../kernel-lib/src/pvt/seededRandom.js";
 
 /** Seed of the noise (stated in the file). */

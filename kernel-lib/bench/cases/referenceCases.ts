@@ -4,11 +4,8 @@
  * given T. Each call varies the state so that no memo or cache answers it; the temperatures are
  * never whole numbers (see engineCases.ts on V8 small integers and deoptimisation).
  */
-import { referenceFluid } from "../../src/eos/multiparameter/referenceFluids.js";
-import {
-  referenceStateTP,
-  referenceStateTRho,
-} from "../../src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../src/fluid/referenceFluids.js";
+import { referenceStateTP, referenceStateTRho } from "../../src/state/referenceStates.js";
 import { saturationAtTemperature } from "../../src/phase/saturation.js";
 import { defineFluid } from "../../src/fluid/defineFluid.js";
 import type { BenchCase } from "../harness.js";

@@ -23,12 +23,12 @@ import * as fs from "node:fs";
 import * as path from "node:path";
 import { IsochorError, RequestError, UnknownNameError, InputError } from "../errors.js";
 import { defineFluid, type Fluid } from "../fluid/defineFluid.js";
-import { referenceFluid } from "../eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../fluid/referenceFluids.js";
 import {
   referenceFluidBinding,
   referenceStateTP,
   referenceStateTRho,
-} from "../eos/multiparameter/referenceStates.js";
+} from "../state/referenceStates.js";
 import type { ReferenceFluid } from "../eos/multiparameter/referenceFluid.js";
 import {
   stateAtPressureQuality,

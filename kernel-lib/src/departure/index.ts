@@ -21,7 +21,4 @@ export type {
   PlainPressureModelSpec,
   PressureModelSpecBase,
 } from "./pressureModel.js";
-export { departureFunctions, isPressureModel } from "./departureFunctions.js";
-export type { DepartureResult, DepartureFunctionOptions } from "./departureFunctions.js";
-export { isothermDepartures } from "./isothermDepartures.js";
-export type { IsothermDepartureResult, IsothermDeparturePoint } from "./isothermDepartures.js";
+export { isPressureModel } from "./pressureModel.js";

@@ -36,6 +36,7 @@ import type {
   IntegrationErrors,
   ResidualDerivativesDraft,
 } from "../eos/types.js";
+import { pressureFromResidual } from "../eos/residualRelations.js";
 import type { PressureEvaluator, PressureSeries } from "./pressureEvaluator.js";
 
 /** Options of {@link integrateResidual}. */
@@ -290,7 +291,7 @@ export function endpointWithSeries(
   const F = s.c0[0] + s.c1[0] * rho + s.c2[0] * rho * rho;
   const aD = rho * F;
   return {
-    pressurePa: rho * gasConstant * temperatureK * (1 + aD),
+    pressurePa: pressureFromResidual(temperatureK, rho, aD, gasConstant),
     aD,
     aDD: rho * rho * (s.c1[0] + 2 * s.c2[0] * rho),
     aDDD: 2 * s.c2[0] * rho * rho * rho,

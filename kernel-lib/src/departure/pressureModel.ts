@@ -80,6 +80,11 @@ export interface PressureModel extends ResidualModel {
   readonly integrationOptions: Omit<IntegrationOptions, "composition" | "maxDensityMolPerM3">;
 }
 
+/** Type guard: was this model built from a pressure function (so its departures are integrated)? */
+export function isPressureModel(model: ResidualModel): model is PressureModel {
+  return typeof model.integrate === "function";
+}
+
 function build(
   spec: PressureModelSpecBase,
   evaluator: PressureEvaluator,

@@ -5,6 +5,7 @@
  * builds every other property on them and re-exports them). With Z = 1 + aD:
  *   P = rho R T (1 + aD)
  *   (dP/drho)_T = R T (1 + 2 aD + aDD),   its reduced form ("stiffness") 1 + 2 aD + aDD
+ *   (dP/dT)_rho = rho R (1 + aD + aDT)
  *   g_r/RT at the same T and P = a + aD - ln Z (decides between density roots at given T, P)
  *   g/RT at given T and density, less its ideal-gas function of T = ln(rho) + a + aD
  *     (equal in coexisting phases of a pure fluid; d/d(rho) of it = stiffness / rho, Gibbs-Duhem)
@@ -38,6 +39,15 @@ export function dPdRho(
   gasConstant: number = R_CODATA,
 ): number {
   return gasConstant * temperatureK * stiffnessFromResidual(residual);
+}
+
+/** (dP/dT) at constant density and composition, Pa/K: rho R (1 + aD + aDT). */
+export function dPdTAtDensity(
+  densityMolPerM3: number,
+  residual: ResidualDerivatives,
+  gasConstant: number = R_CODATA,
+): number {
+  return densityMolPerM3 * gasConstant * (1 + residual.aD + residual.aDT);
 }
 
 /** ln Z with Z = 1 + aD; NaN where Z <= 0 (no state at the same T and P exists there). */

@@ -8,8 +8,9 @@
 import type { Component } from "../components/types.js";
 import { InputError } from "../errors.js";
 import { defineFluid } from "../fluid/defineFluid.js";
-import { referenceFluid, referenceFluidIds } from "../eos/multiparameter/index.js";
-import { referenceFluidBinding } from "../eos/multiparameter/index.js";
+import { referenceFluidIds } from "../eos/multiparameter/index.js";
+import { referenceFluid } from "../fluid/referenceFluids.js";
+import { referenceFluidBinding } from "../state/referenceStates.js";
 import { isModelId } from "../eos/createModel.js";
 import { saturationFromModel, type SampledDome } from "../charts/sample/saturationFromModel.js";
 import { tryPoint } from "../charts/sample/sampleGuard.js";

@@ -17,7 +17,7 @@ import { R } from "../constants.js";
 import { createModel, type ModelId } from "../eos/createModel.js";
 import { hasPressureFunction } from "../eos/pressureFunction.js";
 import type { InteractionNote } from "../eos/interaction/interactionTable.js";
-import { modelFromPressure, type PressureModel } from "../departure/pressureModel.js";
+import { modelFromPressure } from "../departure/pressureModel.js";
 import type { IntegrationOptions } from "../departure/integrateIsotherm.js";
 import {
   stateAtTP,
@@ -34,6 +34,7 @@ import {
 } from "../state/inversions.js";
 import type { DepartureMethod, FluidBinding, FluidState } from "../state/types.js";
 import { checkComposition, checkPressure, checkTemperature } from "../state/checkInputs.js";
+import type { ResultWarning } from "../errors.js";
 import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../phase/stability.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
@@ -78,6 +79,17 @@ export interface FluidSpec {
   integration?: Omit<IntegrationOptions, "composition" | "maxDensityMolPerM3">;
 }
 
+/** Options of a fluid's `stateAtTP`: those of the state layer plus the stability test. */
+export interface FluidStateAtTPOptions extends StateAtTPOptions {
+  /**
+   * Mixtures: run the tangent-plane stability test (phase/stability.ts) and add a "phase-split"
+   * warning when the mixture is not stable as one phase here. Default false: the test costs
+   * tens of single-phase states, and surfaces, inversions and flash loops call this function
+   * many times. Turn it on (or call `stabilityAtTP`) wherever a mixture might be two-phase.
+   */
+  checkStability?: boolean;
+}
+
 /** A bound fluid with its state functions. */
 export interface Fluid extends FluidBinding {
   readonly components: readonly Component[];
@@ -91,7 +103,7 @@ export interface Fluid extends FluidBinding {
     temperatureK: number,
     pressurePa: number,
     x?: readonly number[],
-    options?: StateAtTPOptions,
+    options?: FluidStateAtTPOptions,
   ): FluidState;
   /** State at T (K), rho (mol/m3). */
   stateAtTRho(temperatureK: number, densityMolPerM3: number, x?: readonly number[]): FluidState;
@@ -271,6 +283,44 @@ function kayPseudoCritical(
   };
 }
 
+/** The "phase-split" warning of a mixture that is not stable as one phase, or undefined. */
+function splitWarning(
+  model: ResidualModel,
+  T: number,
+  P: number,
+  x: readonly number[],
+): ResultWarning | undefined {
+  const test = stabilityAtTP(model, T, P, x);
+  const notes = test.warnings.map((w) => w.message);
+  if (test.stable) {
+    return notes.length > 0 ? { code: "accuracy", message: notes.join("; ") } : undefined;
+  }
+  const trial = (test.incipientComposition ?? [])
+    .map((v, i) => `${model.info.componentIds[i]} ${v.toPrecision(3)}`)
+    .join(", ");
+  return {
+    code: "phase-split",
+    message: `the mixture is not stable as one phase at T = ${T} K, P = ${P} Pa: the tangent-plane test found a trial phase with tm = ${test.minimumTangentPlaneDistance.toPrecision(3)} < 0 (${trial}); the fluid splits into phases there, this single-phase state is metastable or unstable, and its properties are not those of the real two-phase fluid (isochor has no mixture flash yet)`,
+  };
+}
+
+/**
+ * The state at (T, P) of the state layer, with the stability test's warning added last when
+ * asked for (a mixture; the test of a pure fluid is its saturation, phase/pureFluidPhase.ts).
+ */
+function stateWithStabilityCheck(
+  binding: FluidBinding,
+  T: number,
+  P: number,
+  x: readonly number[],
+  options: FluidStateAtTPOptions | undefined,
+): FluidState {
+  const state = stateAtTP(binding, T, P, x, options);
+  if (options?.checkStability !== true || x.length < 2) return state;
+  const split = splitWarning(binding.model, T, P, x);
+  return split === undefined ? state : { ...state, warnings: state.warnings.concat(split) };
+}
+
 function bindMethods(model: ResidualModel): ResidualModel {
   // class-based models use `this`; copy their methods bound so spreading keeps them working
   const m = model as unknown as Record<string, unknown>;
@@ -321,7 +371,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
         })
       : modelSpec;
   // a model built from a pressure function is numeric by nature
-  const isPressureModel = typeof (model as Partial<PressureModel>).integrate === "function";
+  const isPressureModel = typeof model.integrate === "function";
   const departureMethod: DepartureMethod = isPressureModel
     ? "numeric"
     : (spec.departure ?? "closed-form");
@@ -385,9 +435,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
   } else {
     idealGas = route;
   }
-  const interactions = (
-    model as { interactions?: { notes: InteractionNote[]; defaultedPairs: string[] } }
-  ).interactions;
+  const interactions = model.interactions;
   const binding: FluidBinding = {
     model,
     idealGas,
@@ -410,7 +458,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
     componentIds: ids,
     interactionNotes: interactions?.notes ?? [],
     defaultedPairs: interactions?.defaultedPairs ?? [],
-    stateAtTP: (T, P, x, options) => stateAtTP(binding, T, P, xOf(x), options),
+    stateAtTP: (T, P, x, options) => stateWithStabilityCheck(binding, T, P, xOf(x), options),
     stateAtTRho: (T, rho, x) => stateAtTRho(binding, T, rho, xOf(x)),
     densityRoots: (T, P, x) => {
       // densityRootsAtTP leaves the checks to its callers: this is a public entry

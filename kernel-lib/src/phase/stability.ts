@@ -23,10 +23,8 @@
 import { InputError, PhaseUnavailableError, type ResultWarning } from "../errors.js";
 import type { ModelInfo, ResidualModel } from "../eos/types.js";
 import type { ModelComponent } from "../eos/modelComponent.js";
-import { lnFugacityCoefficients } from "../state/properties.js";
 import { checkComposition, checkPressure, checkTemperature } from "../state/checkInputs.js";
-import { densityRootsOf } from "../state/findDensityRoots.js";
-import { chooseDensityRoot, emptyRootChoice } from "../state/rootChoice.js";
+import { phaseFugacityAtTP, type PhaseFugacity } from "../state/fugacity.js";
 import { wilsonK } from "./wilson.js";
 import { requireCount, requirePositive } from "../validate.js";
 
@@ -105,12 +103,13 @@ export interface StabilityResult {
 
 const METHOD =
   "tangent-plane test (Michelsen, Fluid Phase Equilib. 9 (1982) 1-19), successive substitution from Wilson K-factors";
-// the root choice of the current lnPhiAtTP call, read out at once
-const choice = emptyRootChoice();
 // a converged trial whose mole fractions all lie this close to the feed's is the trivial solution
 const TRIVIAL_DISTANCE = 1e-6;
 
-/** ln phi_i at (T, P, w) in the root of lowest Gibbs energy, written into out; returns rho. */
+/**
+ * ln phi_i at (T, P, w) in the root of lowest Gibbs energy (state/fugacity.ts, the one home of
+ * that choice), written into out; returns rho.
+ */
 function lnPhiAtTP(
   model: ResidualModel,
   T: number,
@@ -118,17 +117,20 @@ function lnPhiAtTP(
   w: readonly number[],
   out: number[],
 ): number {
-  const rhos = densityRootsOf(model, T, P, w);
-  const residual = chooseDensityRoot(model, T, rhos, w, "stable", choice);
-  const chosen = choice.densityMolPerM3;
-  const lnPhi = residual?.dnA ? lnFugacityCoefficients(residual) : [];
+  let phase: PhaseFugacity | undefined;
+  try {
+    phase = phaseFugacityAtTP(model, T, P, w, "stable");
+  } catch (e) {
+    if (!(e instanceof PhaseUnavailableError)) throw e;
+  }
+  const lnPhi = phase?.lnPhi ?? [];
   if (lnPhi.length !== out.length || !lnPhi.every(Number.isFinite)) {
     throw new PhaseUnavailableError(
       `${model.info.name} has no mechanically stable density root at T = ${T} K, P = ${P} Pa for the composition [${w.map((v) => v.toPrecision(4)).join(", ")}] (stability test)`,
     );
   }
   for (let i = 0; i < out.length; i++) out[i] = lnPhi[i];
-  return chosen;
+  return phase!.densityMolPerM3;
 }
 
 /**

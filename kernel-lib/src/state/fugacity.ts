@@ -3,10 +3,12 @@
  * the stability test, the flash, saturation points and envelopes. Nothing here assembles a full
  * state (state/stateAt.ts does), so an iteration pays only for what it uses.
  *
- * Root choice: every density root of the model at (T, P, x), mechanically unstable roots
- * ((dP/drho)_T <= 0) discarded; "stable" takes the root of lowest residual Gibbs energy
- * g_r/RT = a + aD - ln Z (at equal T and P the ideal parts are equal), "vapor" the lowest stable
- * density and "liquid" the highest. ln phi_i = dnA_i - ln Z (state/properties.ts).
+ * Root choice (state/rootChoice.ts, the same as for states at (T, P)): every density root of the
+ * model at (T, P, x), mechanically unstable roots ((dP/drho)_T <= 0) discarded; "stable" takes the
+ * root of lowest residual Gibbs energy g_r/RT = a + aD - ln Z (at equal T and P the ideal parts
+ * are equal), "vapor" the lowest stable density and "liquid" the highest. ln phi_i = dnA_i - ln Z
+ * (state/properties.ts). This is the one place that gives ln phi of a phase at (T, P): the
+ * stability test (phase/stability.ts) and the flash to come take it from here.
  *
  * Derivatives at fixed density (Michelsen & Mollerup, Thermodynamic Models: Fundamentals and
  * Computational Aspects, 2nd ed. 2007, ch. 2, eqs. for ln phi in terms of F = A_res/(RT) =
@@ -25,8 +27,15 @@
 import { R as R_CODATA } from "../constants.js";
 import { PhaseUnavailableError } from "../errors.js";
 import type { ResidualDerivatives, ResidualModel } from "../eos/types.js";
-import { findDensityRoots } from "./findDensityRoots.js";
-import { dPdRho, residualGibbsTP } from "./properties.js";
+import { dPdTAtDensity } from "../eos/residualRelations.js";
+import { densityRootsOf } from "./findDensityRoots.js";
+import {
+  dPdRho,
+  lnFugacityCoefficients,
+  pressureFromResidual,
+  residualGibbsTP,
+} from "./properties.js";
+import { chooseDensityRoot, emptyRootChoice } from "./rootChoice.js";
 import type { PhaseRequest } from "./types.js";
 
 /** ln phi of one phase at (T, P, x) with the root it was taken in. */
@@ -46,6 +55,8 @@ export interface PhaseFugacity {
 }
 
 const COMPOSITION = Object.freeze({ composition: true });
+// the root choice of the current phaseFugacityAtTP call, read out at once (plain numbers)
+const choice = emptyRootChoice();
 
 function gasConstant(model: ResidualModel): number {
   return model.gasConstant ?? R_CODATA;
@@ -65,42 +76,24 @@ export function phaseFugacityAtTP(
   phase: PhaseRequest = "stable",
 ): PhaseFugacity {
   const T = temperatureK;
-  const rhos = model.densityRoots
-    ? model.densityRoots(T, pressurePa, x)
-    : findDensityRoots(model, T, pressurePa, x);
-  const Rg = gasConstant(model);
-  let chosen: ResidualDerivatives | undefined;
-  let chosenRho = NaN;
-  let chosenG = Infinity;
-  let count = 0;
-  for (let k = 0; k < rhos.length; k++) {
-    const r = model.residual(T, rhos[k], x, COMPOSITION);
-    if (!(dPdRho(T, r, Rg) > 0)) continue;
-    count++;
-    const g = residualGibbsTP(r);
-    const take = chosen === undefined || phase === "liquid" || (phase === "stable" && g < chosenG);
-    if (take) {
-      chosen = r;
-      chosenRho = rhos[k];
-      chosenG = g;
-    }
-  }
+  const rhos = densityRootsOf(model, T, pressurePa, x);
+  const chosen = chooseDensityRoot(model, T, rhos, x, phase, choice);
+  const count = choice.stableCount;
+  const chosenRho = choice.densityMolPerM3;
+  // g_r/RT of the chosen root: compared already when "stable" had several roots
+  const compared = phase === "stable" && rhos.length > 1;
+  const lowestG = choice.lowestGibbsOverRT;
   if (chosen === undefined || chosen.dnA === undefined || !(1 + chosen.aD > 0)) {
     throw new PhaseUnavailableError(
       `${model.info.name} has no mechanically stable density root at T = ${T} K, P = ${pressurePa} Pa for the composition [${x.map((v) => v.toPrecision(4)).join(", ")}]` +
         (rhos.length > 0 ? ` (roots: ${rhos.map((r) => r.toPrecision(6)).join(", ")} mol/m3)` : ""),
     );
   }
-  const Z = 1 + chosen.aD;
-  const lnZ = Math.log(Z);
-  const dnA = chosen.dnA;
-  const lnPhi = new Array<number>(dnA.length);
-  for (let i = 0; i < dnA.length; i++) lnPhi[i] = dnA[i] - lnZ;
   return {
     densityMolPerM3: chosenRho,
-    Z,
-    lnPhi,
-    gibbsResidualOverRT: chosenG,
+    Z: 1 + chosen.aD,
+    lnPhi: lnFugacityCoefficients(chosen),
+    gibbsResidualOverRT: compared ? lowestG : residualGibbsTP(chosen),
     stableRootCount: count,
     residual: chosen,
   };
@@ -219,23 +212,21 @@ export function fugacityDerivatives(
     );
   }
   const Z = 1 + d.aD;
-  const P = rho * RT * Z;
-  const lnZ = Math.log(Z);
+  const P = pressureFromResidual(T, rho, d.aD, Rg);
+  const lnPhi = lnFugacityCoefficients(d);
   const hess = model.compositionHessian
     ? model.compositionHessian(T, rho, x)
     : numericHessian(model, T, rho, x);
   const V = 1 / rho; // one mole
   const dPdV = -rho * rho * dPdRho(T, d, Rg);
-  const dPdT = rho * Rg * (1 + d.aD + d.aDT);
+  const dPdT = dPdTAtDensity(rho, d, Rg);
   const dPdn = new Array<number>(n);
   const vBar = new Array<number>(n);
-  const lnPhi = new Array<number>(n);
   const dT = new Array<number>(n);
   const dP = new Array<number>(n);
   for (let i = 0; i < n; i++) {
     dPdn[i] = (RT / V) * (1 + hess.rhoDdnA[i]);
     vBar[i] = -dPdn[i] / dPdV;
-    lnPhi[i] = d.dnA[i] - lnZ;
     dP[i] = vBar[i] / RT - 1 / P;
     dT[i] = hess.FiT[i] + 1 / T - (vBar[i] * dPdT) / RT;
   }

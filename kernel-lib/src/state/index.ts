@@ -15,6 +15,12 @@ export { findDensityRoots } from "./findDensityRoots.js";
 export type { DensityRootOptions } from "./findDensityRoots.js";
 export { phaseLabel } from "./phaseLabel.js";
 export { temperatureAtPH, temperatureAtPS } from "./inversions.js";
+export { referenceStateTRho, referenceStateTP, referenceFluidBinding } from "./referenceStates.js";
+export type { ReferenceStateOptions } from "./referenceStates.js";
+export { departureFunctions } from "./departureFunctions.js";
+export type { DepartureResult, DepartureFunctionOptions } from "./departureFunctions.js";
+export { isothermDepartures } from "./isothermDepartures.js";
+export type { IsothermDepartureResult, IsothermDeparturePoint } from "./isothermDepartures.js";
 export type { InversionOptions, InversionResult } from "./inversions.js";
 export type {
   FluidBinding,
@@ -25,6 +31,3 @@ export type {
   PropertySet,
   DepartureMethod,
 } from "./types.js";
-// The fluid object (fluid/) binds model, ideal gas and reference state over these functions.
-export { defineFluid } from "../fluid/defineFluid.js";
-export type { Fluid, FluidSpec, ConstantOverrides } from "../fluid/defineFluid.js";

@@ -29,6 +29,7 @@ import type { DepartureMethod, EnergySet, FluidState, PhaseLabel } from "./types
 import type { ModelInfo } from "../eos/types.js";
 import {
   dPdRho,
+  dPdTAtDensity,
   gibbsOverRTFromLnZ,
   lnZOf,
   pressureFromResidual,
@@ -147,7 +148,7 @@ export function assembleState(input: StateInputs): FluidState {
   const lnPhi = lnPhiOf(d, parts.lnZ);
   // derivatives and heat capacities
   const dPdr = dPdRho(T, d, Rg);
-  const dPdT = rho * Rg * (1 + d.aD + d.aDT);
+  const dPdT = dPdTAtDensity(rho, d, Rg);
   const cvRes = -Rg * (2 * d.aT + d.aTT);
   const cv = ig.cv + cvRes;
   const cp = cv + (T * dPdT * dPdT) / (rho * rho * dPdr);

@@ -3,7 +3,9 @@
  * the model offers `densityRoots`, else a scan plus Brent, findDensityRoots.ts), mechanically
  * unstable roots ((dP/drho)_T <= 0) discarded, then either the stable one (lowest Gibbs energy; at
  * equal T and P the ideal parts are equal, so the lowest g_r/RT = a + aD - ln Z) or the requested
- * phase. Properties come from state/properties.ts.
+ * phase (the choice: state/rootChoice.ts). Properties come from state/properties.ts. The
+ * tangent-plane stability test of a mixture is a phase-layer question: fluid/defineFluid.ts runs
+ * it for `{ checkStability: true }`.
  */
 import { R as R_CODATA } from "../constants.js";
 import {
@@ -12,15 +14,15 @@ import {
   PhaseUnavailableError,
   type ResultWarning,
 } from "../errors.js";
-import type { ResidualDerivatives, ResidualModel } from "../eos/types.js";
+import type { ResidualDerivatives } from "../eos/types.js";
 import type { IdealGasProperties, ReferenceState } from "../idealgas/types.js";
 import { leanIdealGasOf, type IdealGasValues, type LeanIdealGas } from "../idealgas/leanMixture.js";
-import { assembleState, dPdRho, residualGibbsTP } from "./properties.js";
+import { assembleState, dPdRho, pressureFromResidual, residualGibbsTP } from "./properties.js";
 import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
-import { findDensityRoots, type DensityRootOptions } from "./findDensityRoots.js";
+import { densityRootsOf, type DensityRootOptions } from "./findDensityRoots.js";
+import { chooseDensityRoot, emptyRootChoice } from "./rootChoice.js";
 import { phaseLabel } from "./phaseLabel.js";
 import { MAX_PRESSURE_PA } from "./physicalLimits.js";
-import { stabilityAtTP } from "../phase/stability.js";
 import type { FluidBinding, FluidState, PhaseLabel, PhaseRequest } from "./types.js";
 
 /** Options of {@link stateAtTP}. */
@@ -29,13 +31,6 @@ export interface StateAtTPOptions {
   phase?: PhaseRequest;
   /** Options of the numerical root search (models without closed-form roots). */
   rootSearch?: DensityRootOptions;
-  /**
-   * Mixtures: run the tangent-plane stability test (phase/stability.ts) and add a "phase-split"
-   * warning when the mixture is not stable as one phase here. Default false: the test costs
-   * tens of single-phase states, and surfaces, inversions and flash loops call this function
-   * many times. Turn it on (or call `stabilityAtTP`) wherever a mixture might be two-phase.
-   */
-  checkStability?: boolean;
 }
 
 // two stable roots closer than this in g_r/RT count as a tie: (T, P) on the phase boundary. Newton
@@ -85,8 +80,8 @@ interface IdealCacheEntry {
 const idealCache = new WeakMap<FluidBinding, IdealCacheEntry>();
 const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 const NO_EXTRA: readonly ExtraWarning[] = Object.freeze([]);
-// the residual request of every state evaluation, allocated once
-const COMPOSITION = Object.freeze({ composition: true });
+// the root choice of the current stateAtTP call, read out at once (plain numbers, reused)
+const choice = emptyRootChoice();
 
 function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): IdealGasProperties {
   let entry = idealCache.get(binding);
@@ -139,27 +134,6 @@ function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): Ide
 
 /** A warning added by the state layer to the model's own. */
 type ExtraWarning = ResultWarning;
-
-/** The "phase-split" warning of a mixture that is not stable as one phase, or undefined. */
-function splitWarning(
-  model: ResidualModel,
-  T: number,
-  P: number,
-  x: readonly number[],
-): ResultWarning | undefined {
-  const test = stabilityAtTP(model, T, P, x);
-  const notes = test.warnings.map((w) => w.message);
-  if (test.stable) {
-    return notes.length > 0 ? { code: "accuracy", message: notes.join("; ") } : undefined;
-  }
-  const trial = (test.incipientComposition ?? [])
-    .map((v, i) => `${model.info.componentIds[i]} ${v.toPrecision(3)}`)
-    .join(", ");
-  return {
-    code: "phase-split",
-    message: `the mixture is not stable as one phase at T = ${T} K, P = ${P} Pa: the tangent-plane test found a trial phase with tm = ${test.minimumTangentPlaneDistance.toPrecision(3)} < 0 (${trial}); the fluid splits into phases there, this single-phase state is metastable or unstable, and its properties are not those of the real two-phase fluid (isochor has no mixture flash yet)`,
-  };
-}
 
 function finish(
   binding: FluidBinding,
@@ -217,7 +191,7 @@ export function stateAtTRho(
   const residual = model.residual(temperatureK, densityMolPerM3, x, { composition: true });
   const Rg = model.gasConstant ?? R_CODATA;
   const Z = 1 + residual.aD;
-  const P = densityMolPerM3 * Rg * temperatureK * Z;
+  const P = pressureFromResidual(temperatureK, densityMolPerM3, residual.aD, Rg);
   if (!(P <= MAX_PRESSURE_PA)) {
     throw new OutOfRangeError({
       input: "densityMolPerM3",
@@ -242,9 +216,7 @@ export function densityRootsAtTP(
   options: { rootSearch?: DensityRootOptions } = {},
 ): DensityRoot[] {
   const model = binding.model;
-  const rhos = model.densityRoots
-    ? model.densityRoots(temperatureK, pressurePa, x)
-    : findDensityRoots(model, temperatureK, pressurePa, x, options.rootSearch);
+  const rhos = densityRootsOf(model, temperatureK, pressurePa, x, options.rootSearch);
   const out: DensityRoot[] = [];
   for (const rho of rhos) {
     const r = model.residual(temperatureK, rho, x);
@@ -290,40 +262,14 @@ export function stateAtTP(
       received: request,
     });
   }
-  const rhos = model.densityRoots
-    ? model.densityRoots(temperatureK, pressurePa, x)
-    : findDensityRoots(model, temperatureK, pressurePa, x, options.rootSearch);
-  // evaluate every mechanically stable root once (with composition derivatives: the chosen one
-  // needs them, and there are at most a few roots), choosing as we go: "vapor" the first stable
-  // root (lowest density), "liquid" the last, "stable" the lowest g_r/RT (the first on a tie)
+  const rhos = densityRootsOf(model, temperatureK, pressurePa, x, options.rootSearch);
+  const residual = chooseDensityRoot(model, temperatureK, rhos, x, request, choice);
+  const count = choice.stableCount;
+  const index = choice.index;
+  const rho = choice.densityMolPerM3;
+  const best = choice.lowestGibbsOverRT;
+  const second = choice.secondGibbsOverRT;
   const compareGibbs = request === "stable" && rhos.length > 1;
-  let count = 0;
-  let index = 0;
-  let rho = NaN;
-  let residual: ResidualDerivatives | undefined;
-  let best = Infinity;
-  let second = Infinity;
-  for (let k = 0; k < rhos.length; k++) {
-    const r = model.residual(temperatureK, rhos[k], x, COMPOSITION);
-    if (!(dPdRho(temperatureK, r, model.gasConstant) > 0)) continue;
-    let take = count === 0 || request === "liquid";
-    if (compareGibbs) {
-      const g = residualGibbsTP(r);
-      if (count === 0 || g < best) {
-        second = best;
-        best = g;
-        take = true;
-      } else if (g < second) {
-        second = g;
-      }
-    }
-    if (take) {
-      index = count;
-      rho = rhos[k];
-      residual = r;
-    }
-    count++;
-  }
   if (residual === undefined) {
     throw new PhaseUnavailableError(
       `${model.info.name} has no mechanically stable density root at T = ${temperatureK} K, P = ${pressurePa} Pa` +
@@ -357,10 +303,6 @@ export function stateAtTP(
       code: "accuracy",
       message: `T = ${temperatureK} K, P = ${pressurePa} Pa is on the phase boundary of ${model.info.name} within rounding (two stable density roots whose Gibbs energies differ by ${Math.abs(second - best).toExponential(1)} RT): the phases coexist there in any proportion, and the returned ${label} root (${rho.toPrecision(6)} mol/m3) is only one of them; ask for phase "liquid" or "vapor", or give a quality`,
     });
-  }
-  if (options.checkStability === true && x.length > 1) {
-    const split = splitWarning(model, temperatureK, pressurePa, x);
-    if (split !== undefined) warnings = warnings.concat(split);
   }
   return finish(binding, temperatureK, rho, x, residual, label, warnings);
 }

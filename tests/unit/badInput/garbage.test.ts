@@ -10,12 +10,12 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { IsochorError } from "../../../kernel-lib/src/errors.js";
 import { defineFluid, type FluidSpec } from "../../../kernel-lib/src/fluid/defineFluid.js";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import {
   referenceFluidBinding,
   referenceStateTP,
   referenceStateTRho,
-} from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+} from "../../../kernel-lib/src/state/referenceStates.js";
 import {
   stateAtPressureEnthalpy,
   stateAtPressureEntropy,

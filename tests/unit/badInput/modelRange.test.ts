@@ -6,8 +6,8 @@
 import { describe, expect, it } from "vitest";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import { OutOfRangeError, InputError } from "../../../kernel-lib/src/errors.js";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceStateTP } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceStateTP } from "../../../kernel-lib/src/state/referenceStates.js";
 
 const models = [
   "peng-robinson",

@@ -11,8 +11,8 @@
 import { afterAll, describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceFluidBinding } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceFluidBinding } from "../../../kernel-lib/src/state/referenceStates.js";
 import { pureFluidStateTP } from "../../../kernel-lib/src/phase/pureFluidPhase.js";
 import {
   stateAtPressureEnthalpy,

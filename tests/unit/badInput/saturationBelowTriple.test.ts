@@ -7,8 +7,8 @@
  */
 import { describe, expect, it } from "vitest";
 import { runEvalRequest } from "../../../kernel-lib/src/cli/eval.js";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceStateTP } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceStateTP } from "../../../kernel-lib/src/state/referenceStates.js";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import { PhaseUnavailableError } from "../../../kernel-lib/src/errors.js";
 import {

@@ -4,8 +4,8 @@
  * (the dome starts at the triple point, and the chart says so).
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceFluidBinding } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceFluidBinding } from "../../../kernel-lib/src/state/referenceStates.js";
 import {
   isobarOnTemperatureEntropy,
   isothermOnPressureEnthalpy,

@@ -9,8 +9,8 @@ import {
   modelFromPlainPressure,
   modelFromPressure,
 } from "../../../kernel-lib/src/departure/pressureModel.js";
-import { departureFunctions } from "../../../kernel-lib/src/departure/departureFunctions.js";
-import { isothermDepartures } from "../../../kernel-lib/src/departure/isothermDepartures.js";
+import { departureFunctions } from "../../../kernel-lib/src/state/departureFunctions.js";
+import { isothermDepartures } from "../../../kernel-lib/src/state/isothermDepartures.js";
 import { createModel } from "../../../kernel-lib/src/eos/createModel.js";
 import { R } from "../../../kernel-lib/src/constants.js";
 import { InputError, OutOfRangeError } from "../../../kernel-lib/src/errors.js";

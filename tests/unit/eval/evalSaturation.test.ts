@@ -7,12 +7,12 @@ import { describe, expect, it } from "vitest";
 import { evalCommand, runEvalRequest } from "../../../kernel-lib/src/cli/eval.js";
 import { fakeIo } from "./fakeIo.js";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import {
   referenceFluidBinding,
   referenceStateTP,
   referenceStateTRho,
-} from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+} from "../../../kernel-lib/src/state/referenceStates.js";
 import {
   stateAtPressureQuality,
   stateAtTemperatureQuality,

@@ -6,10 +6,8 @@
  * measured maximum deviations 2e-5 to 7e-4).
  */
 import { describe, expect, it } from "vitest";
-import {
-  referenceFluid,
-  referenceFluidIds,
-} from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluidIds } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 
 describe("ancillary equations agree with the solved saturation within 0.1 %", () => {

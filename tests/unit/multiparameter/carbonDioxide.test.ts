@@ -6,8 +6,8 @@
  * tolerance is half a unit in the last digit recalled unless the fixture says otherwise.
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceStateTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceStateTRho } from "../../../kernel-lib/src/state/referenceStates.js";
 import { locateCriticalPoint } from "../../../kernel-lib/src/phase/criticalPoint.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 import { expectReference, referenceValue } from "../../fixtures/referenceValues.js";

@@ -8,7 +8,7 @@
  * state below for where quadrature stops being able to show it.
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import { integrateResidual } from "../../../kernel-lib/src/departure/integrateIsotherm.js";
 import type {
   PressureEvaluator,

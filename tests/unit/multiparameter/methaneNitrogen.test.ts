@@ -6,8 +6,8 @@
  * These checks reach 5-6 significant digits, not the 1e-8 of the IAPWS-95 verification tables.
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceStateTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceStateTRho } from "../../../kernel-lib/src/state/referenceStates.js";
 import { locateCriticalPoint } from "../../../kernel-lib/src/phase/criticalPoint.js";
 import {
   saturationAtPressure,

@@ -5,16 +5,14 @@
  */
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import {
-  referenceFluid,
-  referenceFluidIds,
-} from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluidIds } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import {
   referenceStateTP,
   referenceStateTRho,
-} from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+} from "../../../kernel-lib/src/state/referenceStates.js";
 import { referenceIdealGasPure } from "../../../kernel-lib/src/eos/multiparameter/referenceIdealGas.js";
-import { buildReferenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluid.js";
+import { buildReferenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 import { InputError, OutOfRangeError, UnknownNameError } from "../../../kernel-lib/src/errors.js";
 import {

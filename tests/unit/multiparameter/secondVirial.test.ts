@@ -9,7 +9,7 @@
  * low-density terms of the equations, which the saturation and fixed-point tests barely touch.
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import { expectReference, referenceValues } from "../../fixtures/referenceValues.js";
 
 // tests/fixtures/dymond-2002-virial.json and harvey-lemmon-2004-water.json, with the tolerances

@@ -24,10 +24,8 @@
  */
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import {
-  referenceFluid,
-  referenceFluidIds,
-} from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluidIds } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import {
   compileResidualPart,
   emptyReducedHelmholtz,

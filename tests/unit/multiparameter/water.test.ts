@@ -7,8 +7,8 @@
  * significant digits, so 1e-8 relative; 1e-8 absolute for the exact zero phi0_dt).
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceStateTRho } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceStateTRho } from "../../../kernel-lib/src/state/referenceStates.js";
 import { emptyReducedHelmholtz } from "../../../kernel-lib/src/eos/multiparameter/residualPart.js";
 import {
   expectReference,

@@ -6,7 +6,7 @@
  * a few tenths of a percent; tolerance 0.5 %.
  */
 import { describe, expect, it } from "vitest";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import { saturationAtPressure } from "../../../kernel-lib/src/phase/saturation.js";
 import { expectReference, referenceValue } from "../../fixtures/referenceValues.js";
 

@@ -6,11 +6,9 @@
  */
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import {
-  referenceFluid,
-  referenceFluidIds,
-} from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceFluidBinding } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluidIds } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceFluidBinding } from "../../../kernel-lib/src/state/referenceStates.js";
 import { locateCriticalPoint } from "../../../kernel-lib/src/phase/criticalPoint.js";
 import {
   pureFluidPhaseAt,

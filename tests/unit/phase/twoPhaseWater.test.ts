@@ -5,8 +5,8 @@
  */
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/referenceFluids.js";
-import { referenceFluidBinding } from "../../../kernel-lib/src/eos/multiparameter/referenceStates.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
+import { referenceFluidBinding } from "../../../kernel-lib/src/state/referenceStates.js";
 import {
   pureFluidPhaseAt,
   pureFluidStateTP,

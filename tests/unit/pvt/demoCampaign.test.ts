@@ -4,7 +4,7 @@ import * as path from "node:path";
 import { corvidK320CampaignCsv } from "../../../notebooks/data/corvidK320Campaign.js";
 import { main } from "../../../kernel-lib/src/cli/main.js";
 import type { CliIo } from "../../../kernel-lib/src/cli/io.js";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/index.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import { createModel } from "../../../kernel-lib/src/eos/index.js";
 import { getComponent } from "../../../kernel-lib/src/components/index.js";
 import {

@@ -9,7 +9,7 @@ import {
 } from "../../../kernel-lib/src/pvt/index.js";
 import type { PvtRouteResult } from "../../../kernel-lib/src/pvt/index.js";
 import type { ResidualModel } from "../../../kernel-lib/src/eos/types.js";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/index.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
 import { campaign, geometric, range } from "./campaign.js";
 import { departuresPR, pressurePR, secondVirialPR } from "./pengRobinsonTruth.js";

@@ -4,7 +4,7 @@ import * as path from "node:path";
 import { parsePvtCsv } from "../../../kernel-lib/src/pvt/index.js";
 import { getComponent } from "../../../kernel-lib/src/components/index.js";
 import { departuresFromPvt, residualCvFromPvt } from "../../../kernel-lib/src/pvt/index.js";
-import { referenceFluid } from "../../../kernel-lib/src/eos/multiparameter/index.js";
+import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
 import { campaign, geometric, range } from "./campaign.js";
 
 // Truth: the Span-Wagner CO2 equation (J. Phys. Chem. Ref. Data 25 (1996) 1509) as implemented in

@@ -16,6 +16,7 @@
  *   Z^3 - (1 + B - uB) Z^2 + (A + wB^2 - uB - uB^2) Z - (AB + wB^2 + wB^3) = 0,
  * u = delta1 + delta2, w = delta1 delta2, A = aP/(RT)^2, B = bP/(RT), keeping roots with Z > B.
  */
+import { pressureFromResidual } from "../residualRelations.js";
 import { R } from "../../constants.js";
 import { OutOfRangeError, type ResultWarning } from "../../errors.js";
 import { realCubicRootsInto } from "../../numerics/cubicRoots.js";
@@ -471,10 +472,13 @@ class CubicModelImpl implements CubicModel {
         },
       ];
     }
-    const b = this.mixB;
+    // rho R T / (1 - b rho) bounds P from above (the attractive term is not negative), so the
+    // exact pressure is needed only for dense states
+    const repulsive = (rho * R * temperatureK) / (1 - this.mixB * rho);
     const pressurePa =
-      (rho * R * temperatureK) / (1 - b * rho) -
-      (this.mixA * rho * rho) / ((1 + this.delta1 * b * rho) * (1 + this.delta2 * b * rho));
+      repulsive > CUBIC_MAX_PRESSURE_PA
+        ? pressureFromResidual(temperatureK, rho, this.residual(temperatureK, rho, x).aD, R)
+        : repulsive;
     if (pressurePa > CUBIC_MAX_PRESSURE_PA) {
       warnings ??= [];
       warnings.push({

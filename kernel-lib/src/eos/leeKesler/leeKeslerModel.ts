@@ -22,6 +22,7 @@
  * g_k = d alpha_r / dx_k = -aT dln Tcm/dx_k + aD (dln Vcm/dx_k + 0.085 omega_k / Zcm)
  *       + omega_k (alpha_R - alpha_0)/omega_R.
  */
+import { pressureFromResidual } from "../residualRelations.js";
 import table from "../data/leeKesler.json";
 import { R } from "../../constants.js";
 import type { ResultWarning } from "../../errors.js";
@@ -241,7 +242,7 @@ export function createLeeKeslerModel(
         });
       }
       // the fitted pressure range, Pr <= 10 (Lee and Kesler 1975; state/physicalLimits.ts)
-      const pr = (rho * R * T * (1 + model.residual(T, rho, x).aD)) / c.pressurePa;
+      const pr = pressureFromResidual(T, rho, model.residual(T, rho, x).aD, R) / c.pressurePa;
       if (pr > 10) {
         warnings.push({
           code: "outside-validity",

@@ -22,7 +22,6 @@ import type { ReferenceState } from "../../idealgas/types.js";
 import { compileAncillary, type Ancillary } from "./ancillary.js";
 import { checkReferenceFluidData, type RangeData, type ReferenceFluidData } from "./fluidData.js";
 import { compileIdealPart, type IdealPart } from "./idealPart.js";
-import { referenceDensityRoots } from "./referenceDensity.js";
 import {
   compileResidualPart,
   emptyReducedHelmholtz,
@@ -88,12 +87,27 @@ function inside(r: RangeData, temperatureK: number, pressurePa: number): boolean
 }
 
 /**
- * Builds a {@link ReferenceFluid} from its data record (the shipped files, or a user's own in the
- * same format).
+ * The stable density root(s) of a reference fluid at T (K) and P (Pa), mol/m3. The solver needs the
+ * exact saturation state, a phase-layer calculation, so it is passed in where the fluid is bound
+ * (fluid/referenceFluids.ts gives phase/referenceDensity.ts).
+ */
+export type ReferenceDensitySolver = (
+  fluid: ReferenceFluid,
+  temperatureK: number,
+  pressurePa: number,
+) => number[];
+
+/**
+ * Builds the reference equation of a data record (the shipped files, or a user's own in the same
+ * format) as a {@link ReferenceFluid}; with `densityRoots` it offers the model's `densityRoots`.
+ * The public entry is `buildReferenceFluid` (fluid/referenceFluids.ts), which supplies it.
  *
  * @throws InputError naming the first malformed field of the record.
  */
-export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
+export function buildReferenceEquation(
+  data: ReferenceFluidData,
+  densityRoots?: ReferenceDensitySolver,
+): ReferenceFluid {
   checkReferenceFluidData(data);
   const M = data.molarMassKgPerMol;
   const R =
@@ -218,9 +232,10 @@ export function buildReferenceFluid(data: ReferenceFluidData): ReferenceFluid {
     pseudoCritical() {
       return publishedCritical;
     },
-    densityRoots(temperatureK: number, pressurePa: number): number[] {
-      return referenceDensityRoots(fluid, temperatureK, pressurePa);
-    },
+    densityRoots:
+      densityRoots &&
+      ((temperatureK: number, pressurePa: number): number[] =>
+        densityRoots(fluid, temperatureK, pressurePa)),
   };
   return fluid;
 }

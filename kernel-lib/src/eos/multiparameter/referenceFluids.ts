@@ -5,7 +5,6 @@
  */
 import { UnknownNameError } from "../../errors.js";
 import type { ReferenceFluidData } from "./fluidData.js";
-import { buildReferenceFluid, type ReferenceFluid } from "./referenceFluid.js";
 import water from "./data/water.json";
 import carbonDioxide from "./data/carbon-dioxide.json";
 import methane from "./data/methane.json";
@@ -18,27 +17,19 @@ const DATA: Readonly<Record<string, ReferenceFluidData>> = {
   nitrogen: nitrogen as ReferenceFluidData,
 };
 
-const built = new Map<string, ReferenceFluid>();
-
 /** Component ids that have a reference equation, e.g. ["water"]. */
 export function referenceFluidIds(): string[] {
   return Object.keys(DATA).filter((id) => DATA[id].status === "reference");
 }
 
 /**
- * The reference equation of a fluid, as a ResidualModel with its extras.
+ * The data record of a shipped reference equation (the fluid itself, bound with its density
+ * solver: `referenceFluid`, fluid/referenceFluids.ts).
  *
  * @param componentId lower-case hyphenated component id, e.g. "water".
- * @example
- * ```ts
- * const water = referenceFluid("water"); // IAPWS-95
- * water.critical.temperatureK; // 647.096
- * ```
  * @throws UnknownNameError if no verified reference equation is shipped for the id.
  */
-export function referenceFluid(componentId: string): ReferenceFluid {
-  const cached = built.get(componentId);
-  if (cached) return cached;
+export function referenceFluidData(componentId: string): ReferenceFluidData {
   const data = DATA[componentId];
   if (!data || data.status !== "reference") {
     const ids = referenceFluidIds();
@@ -49,7 +40,5 @@ export function referenceFluid(componentId: string): ReferenceFluid {
     );
     throw new UnknownNameError("reference fluid", String(componentId), near.length ? near : ids);
   }
-  const fluid = buildReferenceFluid(data);
-  built.set(componentId, fluid);
-  return fluid;
+  return data;
 }

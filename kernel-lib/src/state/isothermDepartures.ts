@@ -6,12 +6,16 @@
  */
 import { R as R_CODATA } from "../constants.js";
 import { InputError, OutOfRangeError } from "../errors.js";
-import { checkComposition, checkTemperature } from "../state/checkInputs.js";
-import { residualProperties } from "../state/properties.js";
-import type { EnergySet } from "../state/types.js";
-import { endpointWithSeries, integrateFromZero, isothermIntegrands } from "./integrateIsotherm.js";
+import { checkComposition, checkTemperature } from "./checkInputs.js";
+import { pressureFromResidual, residualProperties } from "./properties.js";
+import type { EnergySet } from "./types.js";
+import {
+  endpointWithSeries,
+  integrateFromZero,
+  isothermIntegrands,
+} from "../departure/integrateIsotherm.js";
 import type { ResidualModel } from "../eos/types.js";
-import { isPressureModel } from "./departureFunctions.js";
+import { isPressureModel } from "../departure/pressureModel.js";
 
 /** One grid point of an isotherm. */
 export interface IsothermDeparturePoint {
@@ -91,7 +95,7 @@ export function isothermDepartures(
         const sets = residualProperties(T, d, Rg);
         return {
           densityMolPerM3: rho,
-          pressurePa: rho * Rg * T * (1 + d.aD),
+          pressurePa: pressureFromResidual(T, rho, d.aD, Rg),
           Z: 1 + d.aD,
           sameTemperatureAndDensity: sets.TV,
           sameTemperatureAndPressure: sets.TP,

@@ -1,5 +1,7 @@
 /**
  * Density at given (T, P) for a reference equation: only the physically meaningful (stable) root.
+ * It needs the exact saturation state (this layer's), so a reference equation (eos/multiparameter)
+ * receives it as its `densityRoots` where the fluid is bound (fluid/referenceFluids.ts).
  *
  * Why not a generic root scan: multiparameter equations such as IAPWS-95 oscillate wildly inside
  * the two-phase region (pressures of +-1e11 Pa at 400 K), and a scan finds spurious "roots" there
@@ -15,13 +17,13 @@
  * Metastable roots are not returned. Brent: R. P. Brent, Algorithms for Minimization without
  * Derivatives (1973), ch. 4; Newton: the safeguards stated above.
  */
-import { SolverError } from "../../errors.js";
-import type { ResidualModel } from "../types.js";
-import { findRootBrent } from "../../numerics/brent.js";
-import { locateCriticalPoint } from "../../phase/criticalPoint.js";
-import { saturationAtTemperature } from "../../phase/saturation.js";
-
-const PURE = [1];
+import { SolverError } from "../errors.js";
+import type { ResidualModel } from "../eos/types.js";
+import { dPdRho, pressureFromResidual } from "../eos/residualRelations.js";
+import { findRootBrent } from "../numerics/brent.js";
+import { locateCriticalPoint } from "./criticalPoint.js";
+import { saturationAtTemperature } from "./saturation.js";
+import { PURE } from "./pureFluid.js";
 
 /** What the density solver needs from a reference fluid. */
 export interface DensitySolverFluid extends ResidualModel {
@@ -42,7 +44,9 @@ export function referenceDensityRoots(
   const T = temperatureK;
   const P = pressurePa;
   const RT = fluid.gasConstant * T;
-  const pressure = (rho: number): number => rho * RT * (1 + fluid.residual(T, rho, PURE).aD);
+  const Rg = fluid.gasConstant;
+  const pressure = (rho: number): number =>
+    pressureFromResidual(T, rho, fluid.residual(T, rho, PURE).aD, Rg);
   const critical = locateCriticalPoint(fluid);
   const Tc = critical.temperatureK;
   const rhoC = critical.densityMolPerM3;
@@ -65,8 +69,8 @@ export function referenceDensityRoots(
     let rho = vapor ? P / RT : est.liquidDensityMolPerM3;
     for (let k = 0; k < 50; k++) {
       const d = fluid.residual(T, rho, PURE);
-      const f = rho * RT * (1 + d.aD) - P;
-      const df = RT * (1 + 2 * d.aD + d.aDD);
+      const f = pressureFromResidual(T, rho, d.aD, Rg) - P;
+      const df = dPdRho(T, d, Rg);
       if (!(df > 0)) break;
       const step = f / df;
       const next = rho - step;

@@ -5,12 +5,13 @@
  * validity policy of the equation: inside the published range, silent; outside it but inside the
  * extrapolation range, a warning naming the range; beyond that, refused unless the caller opts in.
  */
-import { OutOfRangeError } from "../../errors.js";
-import { stateAtTP, stateAtTRho, type StateAtTPOptions } from "../../state/stateAt.js";
-import type { FluidBinding, FluidState } from "../../state/types.js";
-import { requirePositive } from "../../validate.js";
-import type { ReferenceFluid } from "./referenceFluid.js";
-import { referenceIdealGasMixture } from "./referenceIdealGas.js";
+import { OutOfRangeError } from "../errors.js";
+import { pressureFromResidual } from "../eos/residualRelations.js";
+import type { ReferenceFluid } from "../eos/multiparameter/referenceFluid.js";
+import { referenceIdealGasMixture } from "../eos/multiparameter/referenceIdealGas.js";
+import { stateAtTP, stateAtTRho, type StateAtTPOptions } from "./stateAt.js";
+import type { FluidBinding, FluidState } from "./types.js";
+import { requirePositive } from "../validate.js";
 
 /** Options of {@link referenceStateTRho} and {@link referenceStateTP}. */
 export interface ReferenceStateOptions {
@@ -79,7 +80,7 @@ export function referenceStateTRho(
   requirePositive("temperatureK", temperatureK, "K");
   requirePositive("densityMolPerM3", densityMolPerM3, "mol/m3");
   const aD = fluid.residual(temperatureK, densityMolPerM3, [1]).aD;
-  const pressurePa = densityMolPerM3 * fluid.gasConstant * temperatureK * (1 + aD);
+  const pressurePa = pressureFromResidual(temperatureK, densityMolPerM3, aD, fluid.gasConstant);
   refuseOutside(fluid, temperatureK, pressurePa, { temperatureK, densityMolPerM3 }, options);
   return stateAtTRho(referenceFluidBinding(fluid), temperatureK, densityMolPerM3, [1]);
 }

@@ -5,17 +5,11 @@
  * residual derivatives into h, s, u, a, g live in state/properties.ts (`residualProperties`).
  */
 import { R as R_CODATA } from "../constants.js";
-import { checkComposition, checkDensity, checkTemperature } from "../state/checkInputs.js";
-import { residualProperties } from "../state/properties.js";
-import type { EnergySet } from "../state/types.js";
-import type { PressureModel } from "./pressureModel.js";
-import type { ResidualModel } from "../eos/types.js";
-import type { IntegratedResidual } from "./integrateIsotherm.js";
-
-/** Type guard: was this model built from a pressure function (so its departures are integrated)? */
-export function isPressureModel(model: ResidualModel): model is PressureModel {
-  return typeof (model as Partial<PressureModel>).integrate === "function";
-}
+import { checkComposition, checkDensity, checkTemperature } from "./checkInputs.js";
+import { pressureFromResidual, residualProperties } from "./properties.js";
+import type { EnergySet } from "./types.js";
+import { isPressureModel } from "../departure/pressureModel.js";
+import type { IntegratedResidual, ResidualModel } from "../eos/types.js";
 
 /** Departures at one (T, rho, x). J/mol and J/(mol K). */
 export interface DepartureResult {
@@ -83,7 +77,7 @@ export function departureFunctions(
   return {
     temperatureK,
     densityMolPerM3,
-    pressurePa: densityMolPerM3 * RT * Z,
+    pressurePa: pressureFromResidual(temperatureK, densityMolPerM3, r.derivatives.aD, Rg),
     Z,
     sameTemperatureAndDensity: sets.TV,
     sameTemperatureAndPressure: sets.TP,

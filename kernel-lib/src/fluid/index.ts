@@ -1,0 +1,5 @@
+// Public exports of fluid/: the fluid object binds model, ideal gas and reference state over the
+// state functions (state/) and the phase tests (phase/).
+export { defineFluid } from "./defineFluid.js";
+export type { Fluid, FluidSpec, ConstantOverrides, FluidStateAtTPOptions } from "./defineFluid.js";
+export { referenceFluid, buildReferenceFluid } from "./referenceFluids.js";
