@@ -47,11 +47,18 @@ const USAGE = `usage: isochor eval [request.json | -]
 Reads a JSON request from the file (or standard input when absent or "-") and writes the states as
 JSON on standard output. Fields: model, components, x, kij, constants, departure, reference,
 idealGas, phase, checkStability (mixtures: tangent-plane test at each T, P state, a split reported
-in its warnings), states (see the engine documentation). A state is {"T", "P"}, {"T", "rho"},
+in its warnings), states. A state is {"T", "P"}, {"T", "rho"},
 {"T" or "P", "saturated": "liquid"|"vapor"} or {"T" or "P", "quality"}; model "reference" takes one
 component with a reference equation (water, carbon-dioxide, methane, nitrogen). The request's
 format, with units and defaults, is the JSON Schema dist/cli/schema/eval-request.schema.json of the
 isochor package.
+
+units: SI, molar. In: T in K, P in Pa, rho in mol/m3, x and quality as fractions (0..1).
+  Out: h, u, residual h/u/a/g in J/mol; s, cp, cv in J/(mol K); w in m/s; jt in K/Pa; Z, lnPhi -.
+
+example (methane at 300 K and 50 bar = 5e6 Pa, Peng-Robinson):
+  echo '{"model": "peng-robinson", "components": ["methane"], "states": [{"T": 300, "P": 5e6}]}' \\
+    | npx isochor eval
 `;
 
 /** The response entry of one state. */

@@ -3,6 +3,7 @@
  * The `isochor` command: one entry point, one sub-command per file.
  *   isochor run <notebook.ipynb...>   execute notebooks, write executed notebooks and HTML records
  *   isochor eval [request.json]       batch property evaluation, JSON in, JSON out
+ *   isochor pvt <file.csv>            departure functions from measured P-V-T data
  */
 import type { CliIo } from "./io.js";
 import { nodeIo } from "./io.js";
@@ -30,6 +31,16 @@ const commands: Record<string, Command> = {
 function usage(): string {
   return ["usage: isochor <command> [arguments]", "", "commands:"]
     .concat(Object.values(commands).map((c) => `  ${c.summary}`))
+    .concat([
+      "",
+      "units: SI on a molar basis in and out (K, Pa, mol/m3, J/mol, J/(mol K)); pvt reads the",
+      "units written in its CSV headers. `isochor <command> --help` gives each command's units.",
+      "",
+      "examples:",
+      "  npx isochor eval request.json",
+      "  npx isochor pvt lab-data.csv --component carbon-dioxide",
+      "  npx isochor run notebooks/00-start-here.ipynb",
+    ])
     .join("\n");
 }
 
@@ -48,7 +59,8 @@ export async function main(argv: string[], io: CliIo): Promise<number> {
   return run(rest, io);
 }
 
-if (require.main === module) {
+/** Runs the command with this process's arguments and sets its exit code (bin/isochor.js). */
+export function runMain(): void {
   main(process.argv.slice(2), nodeIo()).then(
     (code) => {
       process.exitCode = code;
@@ -61,3 +73,5 @@ if (require.main === module) {
     },
   );
 }
+
+if (require.main === module) runMain();

@@ -37,6 +37,13 @@ options:
   --seed <n>           Monte Carlo seed (default 20261201)
   --samples <n>        Monte Carlo samples (default 200; 0 = linearised only)
   -h, --help           show this help
+
+units: the CSV's own, one per column header (e.g. "T [K]", "rho [kg/m3]", "P [MPa]"). Output on
+  stdout is SI molar JSON: T in K, rho in mol/m3, P in Pa, residual and uncertainty s in J/(mol K),
+  u, a, h, g in J/mol; virial B and uB in m3/mol. A readable summary goes to stderr.
+
+example:
+  npx isochor pvt notebooks/data/corvid-k320-co2-pvt.csv --component carbon-dioxide --samples 100
 `;
 
 interface Args {

@@ -2,8 +2,9 @@
  * `isochor run [--out <dir>] <notebook.ipynb...>`: executes notebooks in-process through tslab
  * (no Jupyter) and writes, for each, the executed notebook and an HTML record of the run, plus the
  * calculation records the notebook started with startRecord (HTML and Markdown).
- * Exit codes: 0 all notebooks ran; 1 a notebook is missing, not a notebook, or a cell failed
- * (nothing written for it); 2 usage error.
+ * Exit codes: 0 all notebooks ran; 1 a notebook is missing, not a notebook, or a cell failed (then
+ * its executed notebook and run record up to that cell are written, marked FAILED, and no
+ * calculation record); 2 usage error.
  */
 import * as path from "node:path";
 import { IsochorError } from "../errors.js";
@@ -22,10 +23,19 @@ and writes into the output folder:
   <name>.record.md      the same record as Markdown (a second record: <name>.record-2.*)
   <name>.record-C1.svg  each chart of the record, shown by the Markdown
 
+A cell that fails stops the run (exit status 1): the executed notebook and the run record are
+written up to and including that cell, titled and bannered "FAILED at cell N", and no calculation
+record is written.
+
 options:
   --out <dir>                output folder (default: out/records under the current directory)
-  --cell-timeout <seconds>   interrupt and fail a cell that runs longer (default 600)
+  --cell-timeout <seconds>   interrupt and fail a cell that runs longer, in s (default 600)
   -h, --help                 show this help
+
+Units are those of the notebooks (isochor computes in SI: K, Pa, mol, J, m3); times are in s.
+
+example:
+  npx isochor run --out out/records notebooks/00-start-here.ipynb
 `;
 
 interface ParsedArgs {
@@ -143,7 +153,11 @@ export async function runCommand(argv: string[], io: CliIo): Promise<number> {
         error.cellNumber === undefined && !error.detail.startsWith("its calculation record");
       const consequence = beforeRun
         ? "No notebook was run."
-        : `No record written for ${error.notebook}.`;
+        : error.failedRecordPath !== undefined
+          ? `Written up to the failing cell and marked FAILED: ${shown(io.cwd, error.failedRecordPath)}` +
+            `${error.failedNotebookPath !== undefined ? `, ${shown(io.cwd, error.failedNotebookPath)}` : ""}` +
+            `. No calculation record written for ${error.notebook}.`
+          : `No record written for ${error.notebook}.`;
       io.stderr(`isochor run: ${error.message}\n${consequence}\n`);
       return 1;
     }

@@ -27,3 +27,9 @@ export { AmbiguousNameError } from "./ambiguousNameError.js";
 export { parseFormula } from "./formula.js";
 export type { ElementCounts } from "./formula.js";
 export { editDistance } from "../numerics/editDistance.js";
+export { rackettCompressibility, rackettSaturatedLiquidVolume } from "./rackettLiquidVolume.js";
+export type {
+  RackettCompressibility,
+  RackettComponent,
+  RackettOptions,
+} from "./rackettLiquidVolume.js";

@@ -11,7 +11,12 @@ import { isCubicModelId, CUBIC_FAMILIES, type CubicModelId } from "./cubic/cubic
 import { createIdealGasModel } from "./idealGasModel.js";
 import { createVirialModel } from "./virial/virialModel.js";
 import { createLeeKeslerModel } from "./leeKesler/leeKeslerModel.js";
-import { penelouxShift, withVolumeTranslation } from "./volumeTranslation.js";
+import {
+  penelouxShift,
+  rackettShift,
+  RACKETT_TRANSLATION_LABEL,
+  withVolumeTranslation,
+} from "./volumeTranslation.js";
 
 /** Every built-in model id (the `isochor eval` names). */
 export type ModelId = "ideal-gas" | "virial" | "lee-kesler" | CubicModelId;
@@ -33,10 +38,11 @@ export interface CreateModelOptions {
   /** Binary interaction matrix (N x N). Default: eos/data/kij.json, zero where unknown. */
   kij?: readonly (readonly number[])[];
   /**
-   * Peneloux volume translation: "peneloux" for the correlation (SRK and PR families only), or
-   * per-component shifts c_i in m3/mol. Default: none.
+   * Peneloux volume translation: "peneloux" for the correlation (SRK and PR families only),
+   * "rackett" for shifts fitted to the Rackett saturated-liquid volume at Tr = 0.7 (any cubic;
+   * eos/volumeTranslation.ts), or per-component shifts c_i in m3/mol. Default: none.
    */
-  volumeTranslation?: "peneloux" | readonly number[];
+  volumeTranslation?: "peneloux" | "rackett" | readonly number[];
 }
 
 /** Type guard: is this a built-in model id? */
@@ -73,6 +79,19 @@ export function createModel(
   const vt = options.volumeTranslation;
   if (vt === undefined) return model;
   let shifts: readonly number[];
+  if (vt === "rackett") {
+    if (!isCubicModelId(id)) {
+      throw new InputError({
+        input: "volumeTranslation",
+        unit: "-",
+        validRange: `"rackett" only with a cubic model (van-der-waals, redlich-kwong, soave-redlich-kwong, peng-robinson, peng-robinson-1978)`,
+        received: `"rackett" with ${id}`,
+      });
+    }
+    const cubicId: CubicModelId = id;
+    shifts = components.map((c) => rackettShift(cubicId, c));
+    return withVolumeTranslation(model, shifts, RACKETT_TRANSLATION_LABEL) as ModelWithPressure;
+  }
   if (vt === "peneloux") {
     if (
       !isCubicModelId(id) ||

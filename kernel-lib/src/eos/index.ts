@@ -26,12 +26,20 @@ export type {
 export { leeKeslerFluid } from "./leeKesler/leeKeslerFluid.js";
 export type { LeeKeslerConstants, FluidDerivatives } from "./leeKesler/leeKeslerFluid.js";
 export { penelouxShift, withVolumeTranslation } from "./volumeTranslation.js";
+export {
+  rackettShift,
+  RACKETT_SHIFT_REDUCED_TEMPERATURE,
+  RACKETT_TRANSLATION_LABEL,
+} from "./volumeTranslation.js";
+export type { VolumeTranslationLabel } from "./volumeTranslation.js";
 export { resolveInteractions } from "./interaction/interactionTable.js";
+export { chuehPrausnitzKij } from "./interaction/interactionTable.js";
 export type {
   InteractionMatrix,
   InteractionNote,
   InteractionFamily,
 } from "./interaction/interactionTable.js";
+export type { InteractionBasis } from "./interaction/interactionTable.js";
 export { checkModelComponents } from "./modelComponent.js";
 export type { ModelComponent } from "./modelComponent.js";
 export { hasPressureFunction } from "./pressureFunction.js";

@@ -20,6 +20,16 @@
  *   PR:  c = 0.50033 (0.25969 - Z_RA) R Tc / Pc   (the analogous Peng-Robinson form; from memory
  *        of its reprint in Whitson & Brule, Phase Behavior, SPE Monograph 20 (2000), ch. 4).
  * Or the caller gives c_i (m3/mol) directly.
+ *
+ * Rackett-fitted shift (`rackettShift`, option "rackett" of createModel): the same constant
+ * translation, with c_i fitted so that the cubic's liquid volume equals the modified Rackett
+ * saturated-liquid volume (Spencer & Danner 1972, components/rackettLiquidVolume.ts, with the
+ * component's fitted Z_RA) at Tr = 0.7, Peneloux et al.'s matching point:
+ *   c_i = v_L,eos(0.7 Tc, P70) - V_Rackett(0.7 Tc),   P70 = Pc 10^-(1 + omega).
+ * P70 is the vapour pressure at Tr = 0.7 by the definition of the acentric factor (Pitzer et al.,
+ * J. Am. Chem. Soc. 77 (1955) 3433), which the Soave and Peng-Robinson alpha functions were fitted
+ * to reproduce; the liquid volume barely depends on the pressure there, so no saturation solve is
+ * needed. Peneloux's correlation above approximates the same quantity with an estimated Z_RA.
  */
 import { R } from "../constants.js";
 import { InputError, type ResultWarning } from "../errors.js";
@@ -32,6 +42,9 @@ import type {
 import type { ModelComponent } from "./modelComponent.js";
 import { hasPressureFunction } from "./pressureFunction.js";
 import type { HyperDual } from "../numerics/hyperDual.js";
+import { rackettSaturatedLiquidVolume } from "../components/rackettLiquidVolume.js";
+import { createCubicModel } from "./cubic/cubicModel.js";
+import type { CubicModelId } from "./cubic/cubicFamilies.js";
 
 /** Peneloux shift c (m3/mol) for one component, for the SRK or PR family. */
 export function penelouxShift(
@@ -45,14 +58,72 @@ export function penelouxShift(
     : 0.50033 * (0.25969 - zra) * rtp;
 }
 
+/** Reduced temperature at which the Rackett-fitted shift matches the liquid volume. */
+export const RACKETT_SHIFT_REDUCED_TEMPERATURE = 0.7;
+
+/**
+ * Constant volume shift c (m3/mol) of one component for a cubic model, fitted so that the
+ * translated liquid volume equals the modified Rackett saturated-liquid volume at Tr = 0.7 (see the
+ * header). Components without a tabulated Z_RA use the Yamada-Gunn estimate (then the result is
+ * no better than Peneloux's correlation).
+ *
+ * @param modelId - the cubic model the shift is for ("peng-robinson", "soave-redlich-kwong", ...).
+ * @throws InputError when the cubic has no liquid-like root at the matching point.
+ * @example rackettShift("peng-robinson", getComponent("propane")) // about 3.3e-6 m3/mol
+ */
+export function rackettShift(modelId: CubicModelId, component: ModelComponent): number {
+  const Tc = component.criticalTemperatureK;
+  const T = RACKETT_SHIFT_REDUCED_TEMPERATURE * Tc;
+  const P = component.criticalPressurePa * Math.pow(10, -1 - component.acentricFactor);
+  const pure = createCubicModel(modelId, [component], { kij: [[0]] });
+  const roots = pure.densityRoots ? pure.densityRoots(T, P, [1]) : [];
+  const rhoL = roots.length > 0 ? roots[roots.length - 1] : NaN;
+  // a liquid root has Z well below the critical compressibility (about 0.3 for cubics)
+  if (!(rhoL > 0 && P / (rhoL * R * T) < 0.1)) {
+    throw new InputError({
+      input: `${component.id} (constants for the Rackett-fitted shift)`,
+      unit: "-",
+      validRange: `constants for which ${modelId} has a liquid root at Tr = 0.7 and P = Pc 10^-(1+omega)`,
+      received: `roots ${roots.join(", ")} mol/m3 at ${T} K, ${P} Pa`,
+    });
+  }
+  return 1 / rhoL - rackettSaturatedLiquidVolume(component, T);
+}
+
+/** How a translated model names itself (default: the Peneloux description). */
+export interface VolumeTranslationLabel {
+  /** Appended to the base model id after "+", e.g. "rackett". */
+  readonly idSuffix: string;
+  /** Appended to the base model name after "with ", e.g. "volume translation fitted to Rackett". */
+  readonly name: string;
+  /** Citation appended to the base model's. */
+  readonly citation: string;
+}
+
+const PENELOUX_LABEL: VolumeTranslationLabel = {
+  idSuffix: "peneloux",
+  name: "Peneloux volume translation",
+  citation: "A. Peneloux, E. Rauzy, R. Freze, Fluid Phase Equilib. 8 (1982) 7-23",
+};
+
+/** The label of the Rackett-fitted translation (createModel option "rackett"). */
+export const RACKETT_TRANSLATION_LABEL: VolumeTranslationLabel = {
+  idSuffix: "rackett",
+  name: "volume translation fitted to the Rackett liquid volume at Tr = 0.7",
+  citation:
+    "constant shift as in A. Peneloux, E. Rauzy, R. Freze, Fluid Phase Equilib. 8 (1982) 7-23, fitted to the modified Rackett equation of C.F. Spencer, R.P. Danner, J. Chem. Eng. Data 17 (1972) 236",
+};
+
 /**
  * Wraps `base` with a constant volume shift per component.
  *
  * @param shiftsM3PerMol - c_i in m3/mol, one per component (positive shrinks the volume).
+ * @param label - how the result names itself; default the Peneloux description.
  */
 export function withVolumeTranslation(
   base: ResidualModel,
   shiftsM3PerMol: readonly number[],
+  label: VolumeTranslationLabel = PENELOUX_LABEL,
 ): ResidualModel {
   const n = base.info.componentIds.length;
   if (!(Array.isArray(shiftsM3PerMol) && shiftsM3PerMol.length === n)) {
@@ -88,9 +159,9 @@ export function withVolumeTranslation(
     }),
     info: {
       ...base.info,
-      id: `${base.info.id}+peneloux`,
-      name: `${base.info.name} with Peneloux volume translation`,
-      citation: `${base.info.citation}; A. Peneloux, E. Rauzy, R. Freze, Fluid Phase Equilib. 8 (1982) 7-23`,
+      id: `${base.info.id}+${label.idSuffix}`,
+      name: `${base.info.name} with ${label.name}`,
+      citation: `${base.info.citation}; ${label.citation}`,
     },
     gasConstant: base.gasConstant,
     residual(

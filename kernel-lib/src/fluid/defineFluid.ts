@@ -74,7 +74,7 @@ export interface FluidSpec {
    */
   departure?: DepartureMethod;
   /** Volume translation for built-in cubic models (see eos/volumeTranslation.ts). */
-  volumeTranslation?: "peneloux" | readonly number[];
+  volumeTranslation?: "peneloux" | "rackett" | readonly number[];
   /** Quadrature options of the numeric route. */
   integration?: Omit<IntegrationOptions, "composition" | "maxDensityMolPerM3">;
 }

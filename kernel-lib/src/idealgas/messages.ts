@@ -62,7 +62,11 @@ export function outOfRangeAdvice(
     const caution = /Benson|Joback/.test(method)
       ? " (group-contribution cp fits extrapolated below about 270 K read low: about 3-5 % at " +
         "233 K and 10 % at 200 K for the n-alkanes against Perry's Aly-Lee correlations)"
-      : "";
+      : /Aly-Lee/.test(method) && temperatureK < range.min
+        ? " (the Aly-Lee form levels off at its constant A below its range, so an extrapolated cp " +
+          "reads high: for propane it read 8 % high at 150 K and 26 % high at 100 K against the " +
+          "molecular route before propane got its low-temperature segment)"
+        : "";
     const factory = isCorrelation ? "idealGasFromCorrelation" : "idealGasFromMolecule";
     choices.push(
       `accept an extrapolated value with a warning: ${factory}("${componentId}", ` +

@@ -5,6 +5,10 @@
  *   header   kicker, title (first markdown heading), facts: notebook, run date, cells, duration,
  *            isochor version + git commit, Node / tslab / TypeScript versions, completion statement
  *   main     markdown cells as prose; code cells as numbered source blocks with their outputs
+ *
+ * A run that failed at a cell gives a record that cannot pass for a complete one: the title
+ * starts "FAILED at cell N", a banner in place of the completion statement says which cell failed
+ * and why, the cells stop at the failing one (marked FAILED), and the footer repeats it.
  *   footer   how the record was produced
  *
  * Scripts that a page needs once (RUNTIME_MARKER_ATTRIBUTE, e.g. the chart runtime) are lifted out
@@ -34,6 +38,8 @@ export interface RecordInput {
   cells: NotebookCell[];
   /** Run time of each cell in ms (undefined for cells not executed). */
   cellTimesMs: Array<number | undefined>;
+  /** The run stopped at this cell (1-based, among all cells) for this reason. Default: it ran to the end. */
+  failure?: { cellNumber: number; detail: string };
 }
 
 const ONCE_SCRIPT = new RegExp(
@@ -165,6 +171,11 @@ dl.facts dd { margin: 0; font-variant-numeric: tabular-nums; }
 dl.facts code { font-size: .82rem; }
 p.completion { margin: .9rem 0 0; padding: .45rem .7rem; border-left: 4px solid var(--ok); background: #f1f6f2; font-size: .88rem; }
 p.dirty { border-left-color: var(--warn); background: #fbf6ea; }
+.kicker.failed { color: #9b1c1c; }
+div.failed-banner { margin: .9rem 0 0; padding: .6rem .8rem; border: 3px solid #9b1c1c; background: #fbeeee; font-size: .92rem; }
+div.failed-banner b { color: #9b1c1c; text-transform: uppercase; letter-spacing: .06em; }
+section.failed-cell { border-left: 4px solid #9b1c1c; padding-left: .6rem; }
+section.failed-cell .cell-label b, .cell-label .failed { color: #9b1c1c; }
 section.cell { margin: 0 0 1.3rem; }
 section.markdown-cell h1, section.markdown-cell h2, section.markdown-cell h3 { line-height: 1.25; margin: 1.4rem 0 .5rem; }
 section.markdown-cell h1 { font-size: 1.4rem; } section.markdown-cell h2 { font-size: 1.2rem; }
@@ -196,17 +207,28 @@ footer { margin-top: 2.4rem; border-top: 1px solid var(--rule); padding-top: .6r
   .outputs > * { break-inside: avoid; }
   .cell-label { break-after: avoid; }
   section.markdown-cell h1, section.markdown-cell h2, section.markdown-cell h3 { break-after: avoid; }
-  p.completion { background: none; }
+  p.completion, div.failed-banner { background: none; }
 }
 `;
+
+/** "cell 4 was not run, and " / "cells 4 to 9 were not run, and " / "" after the last cell. */
+function notRun(failedCell: number, cellCount: number): string {
+  if (failedCell >= cellCount) return "";
+  return failedCell + 1 === cellCount
+    ? `cell ${cellCount} was not run, and `
+    : `cells ${failedCell + 1} to ${cellCount} were not run, and `;
+}
 
 /** Builds the record's HTML text. */
 export function recordHtml(input: RecordInput): string {
   const lifted = new Map<string, string>();
   const env = input.environment;
   const codeCells = input.cells.filter((c) => c.cell_type === "code").length;
+  const failure = input.failure;
+  const shownCells = failure ? input.cells.slice(0, failure.cellNumber) : input.cells;
+  const title = failure ? `FAILED at cell ${failure.cellNumber}: ${input.title}` : input.title;
   const body: string[] = [];
-  input.cells.forEach((cell, index) => {
+  shownCells.forEach((cell, index) => {
     const number = index + 1;
     const source = joinText(cell.source);
     if (cell.cell_type === "markdown") {
@@ -222,15 +244,17 @@ export function recordHtml(input: RecordInput): string {
       return;
     }
     const time = input.cellTimesMs[index];
+    const failed = failure?.cellNumber === number;
     const label =
       `<div class="cell-label"><span><b>Cell ${number}</b>` +
       (cell.execution_count !== null
         ? ` &middot; run ${cell.execution_count}`
         : " &middot; empty, not run") +
+      (failed ? ` &middot; <span class="failed">FAILED</span>` : "") +
       `</span><span>${time !== undefined ? formatSeconds(time) : ""}</span></div>`;
     const outputs = cell.outputs.map((o) => renderOutput(o, lifted)).join("\n");
     body.push(
-      `<section class="cell code-cell" id="cell-${number}">${label}` +
+      `<section class="cell code-cell${failed ? " failed-cell" : ""}" id="cell-${number}">${label}` +
         (source.trim() !== ""
           ? `<pre class="source"><code>${escapeHtml(source)}</code></pre>`
           : "") +
@@ -243,30 +267,36 @@ export function recordHtml(input: RecordInput): string {
       ? "unknown (not a git checkout)"
       : `<code>${escapeHtml(env.gitCommit.slice(0, 12))}</code>` +
         (env.gitDirty ? " with uncommitted changes" : "");
+  const statement = failure
+    ? `<div class="failed-banner" role="alert"><b>Failed at cell ${failure.cellNumber} of ${input.cells.length}</b>: ` +
+      `${escapeHtml(stripAnsi(failure.detail.split("\n")[0]))}.<br>This record stops at the <a href="#cell-${failure.cellNumber}">failing cell</a>: ` +
+      notRun(failure.cellNumber, input.cells.length) +
+      `no calculation record of this notebook was written. It is NOT the record of a complete calculation.</div>`
+    : undefined;
   const completion = env.gitDirty
     ? `All ${codeCells} code cells ran to completion, in order, in one fresh session. The working tree had uncommitted changes: commit ${escapeHtml(env.gitCommit.slice(0, 12))} alone does not reproduce this record.`
     : `All ${codeCells} code cells ran to completion, in order, in one fresh session.`;
   return `${recordDocumentHead({
     isochorVersion: env.isochorVersion,
     generatedBy: "isochor run",
-    title: input.title,
+    title,
     css: CSS,
     headScripts: [...lifted.values()].join("\n"),
   })}<header class="record-head">
-<div class="kicker">Calculation record</div>
-<h1 class="record-title">${escapeHtml(input.title)}</h1>
+<div class="kicker${failure ? " failed" : ""}">Calculation record${failure ? " &middot; INCOMPLETE: the run FAILED" : ""}</div>
+<h1 class="record-title">${escapeHtml(title)}</h1>
 <dl class="facts">
 <dt>Notebook</dt><dd>${escapeHtml(input.notebookName)}</dd>
-<dt>Run</dt><dd>${formatRecordDate(input.startedAt)} &middot; ${input.cells.length} cells (${codeCells} code) &middot; ${formatSeconds(input.elapsedMs)}</dd>
+<dt>Run</dt><dd>${formatRecordDate(input.startedAt)} &middot; ${input.cells.length} cells (${codeCells} code)${failure ? `, stopped at cell ${failure.cellNumber}` : ""} &middot; ${formatSeconds(input.elapsedMs)}</dd>
 <dt>isochor</dt><dd>${escapeHtml(env.isochorVersion)} &middot; commit ${commit}</dd>
 <dt>Environment</dt><dd>Node ${escapeHtml(env.nodeVersion)} &middot; tslab ${escapeHtml(env.tslabVersion)} (TypeScript ${escapeHtml(env.typescriptVersion)})</dd>
 </dl>
-<p class="completion${env.gitDirty ? " dirty" : ""}">${completion}</p>
+${statement ?? `<p class="completion${env.gitDirty ? " dirty" : ""}">${completion}</p>`}
 </header>
 <main>
 ${body.join("\n")}
 </main>
-<footer>Produced by <code>isochor run</code> from ${escapeHtml(input.notebookName)}; the executed notebook is ${escapeHtml(input.executedNotebookFile)}, beside this file. Charts are drawn from data embedded in this page; nothing is loaded from the network.</footer>
+<footer>${failure ? `<b>This run FAILED at cell ${failure.cellNumber}; the record is incomplete.</b> ` : ""}Produced by <code>isochor run</code> from ${escapeHtml(input.notebookName)}; the executed notebook is ${escapeHtml(input.executedNotebookFile)}, beside this file. Charts are drawn from data embedded in this page; nothing is loaded from the network.</footer>
 </body>
 </html>
 `;

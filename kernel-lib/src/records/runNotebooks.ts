@@ -4,13 +4,16 @@
  *
  *   check every path (exists, nbformat 4, no two outputs with one name)      nothing run yet
  *   for each notebook:  TslabSession in its folder -> cells in order -> outputs captured
- *                       first failing cell: RunnerError (notebook, cell, error), nothing written
  *                       success: <name>.ipynb and <name>.html written to temp names, then renamed,
  *                       plus <name>.record.html / .record.md for each calculation record the
  *                       notebook started (startRecord; the second is <name>.record-2.*, ...)
+ *                       first failing cell: <name>.ipynb and <name>.html up to and including it,
+ *                       marked FAILED at that cell (title, banner, metadata), no calculation
+ *                       record; then RunnerError (notebook, cell, error, the files written)
  *
- * A failed notebook also loses any record of it left by an earlier run, so no file in the output
- * folder claims to be the record of a notebook that does not run today.
+ * A failed notebook loses any calculation record of it left by an earlier run, and its run record
+ * is replaced by the FAILED one, so no file in the output folder claims to be the complete record
+ * of a notebook that does not run today.
  */
 import * as fs from "node:fs";
 import * as path from "node:path";
@@ -190,8 +193,16 @@ function titleOf(notebook: Notebook, absolute: string): string {
   return path.basename(absolute).replace(/\.ipynb$/i, "");
 }
 
-/** The executed notebook as nbformat 4 JSON (one space indent, like Jupyter). */
-function executedNotebookJson(notebook: Notebook, env: RunEnvironment, startedAt: Date): string {
+/**
+ * The executed notebook as nbformat 4 JSON (one space indent, like Jupyter). After a failed cell:
+ * the cells up to and including it, and `metadata.isochor.run.failed` says where and why.
+ */
+function executedNotebookJson(
+  notebook: Notebook,
+  env: RunEnvironment,
+  startedAt: Date,
+  failure?: { cellNumber: number; detail: string },
+): string {
   const metadata = {
     ...notebook.metadata,
     isochor: {
@@ -201,10 +212,32 @@ function executedNotebookJson(notebook: Notebook, env: RunEnvironment, startedAt
         gitCommit: env.gitCommit,
         node: env.nodeVersion,
         tslab: env.tslabVersion,
+        ...(failure
+          ? {
+              failed: {
+                cellNumber: failure.cellNumber,
+                cellCount: notebook.cells.length,
+                error: failure.detail,
+              },
+            }
+          : {}),
       },
     },
   };
-  return JSON.stringify({ ...notebook, metadata }, null, 1) + "\n";
+  const cells = failure ? notebook.cells.slice(0, failure.cellNumber) : notebook.cells;
+  return JSON.stringify({ ...notebook, metadata, cells }, null, 1) + "\n";
+}
+
+/** Writes every file to a temporary name first, then renames them all into place. */
+function writeAll(files: ReadonlyArray<{ target: string; content: string }>): void {
+  const temps: string[] = [];
+  try {
+    for (const f of files) temps.push(writeTemp(f.target, f.content));
+    files.forEach((f, i) => fs.renameSync(temps[i], f.target));
+  } catch (error) {
+    temps.forEach(removeQuietly);
+    throw error;
+  }
 }
 
 async function runOne(
@@ -233,6 +266,7 @@ async function runOne(
     isJS: isJavaScriptNotebook(notebook),
   });
   const cellTimesMs: Array<number | undefined> = cells.map(() => undefined);
+  let failure: RunnerError | undefined;
   try {
     progress({ kind: "session-ready", notebook: name, elapsedMs: performance.now() - started });
     let executionCount = 0;
@@ -268,7 +302,7 @@ async function runOne(
       if (!run.ok) {
         const error = run.error;
         const firstLine = source.split("\n").find((l) => l.trim() !== "") ?? "";
-        throw new RunnerError({
+        failure = new RunnerError({
           notebook: name,
           cellNumber,
           cellCount: cells.length,
@@ -276,11 +310,14 @@ async function runOne(
             `${error ? `${error.ename}: ${error.evalue}` : "the cell failed"}` +
             `\n  cell begins: ${firstLine.trim().slice(0, 120)}`,
         });
+        break;
       }
     }
   } finally {
     session.close();
   }
+  if (failure !== undefined)
+    writeFailedRun(planned, failure, { env, startedAt, started, cellTimesMs });
 
   const elapsedMs = performance.now() - started;
   const title = titleOf(notebook, absolute);
@@ -332,14 +369,7 @@ async function runOne(
   }
   const keep = new Set(files.map((f) => f.target));
   const stale = existingCalculationRecords(planned).filter((f) => !keep.has(f));
-  const temps: string[] = [];
-  try {
-    for (const f of files) temps.push(writeTemp(f.target, f.content));
-    files.forEach((f, i) => fs.renameSync(temps[i], f.target));
-  } catch (error) {
-    temps.forEach(removeQuietly);
-    throw error;
-  }
+  writeAll(files);
   stale.forEach(removeQuietly);
   progress({
     kind: "notebook-done",
@@ -361,14 +391,63 @@ async function runOne(
 }
 
 /**
+ * Writes the run of a notebook that failed at a cell: the executed notebook and the HTML record up
+ * to and including that cell, both marked FAILED there; removes the notebook's calculation
+ * records of earlier runs (its own are not written: they would be incomplete). Then throws the
+ * failure, naming the files written.
+ */
+function writeFailedRun(
+  planned: PlannedNotebook,
+  failure: RunnerError,
+  run: {
+    env: RunEnvironment;
+    startedAt: Date;
+    started: number;
+    cellTimesMs: Array<number | undefined>;
+  },
+): never {
+  resetRecordRegistry();
+  const stopped = { cellNumber: failure.cellNumber!, detail: failure.detail };
+  const html = recordHtml({
+    title: titleOf(planned.notebook, planned.absolute),
+    notebookName: planned.name,
+    executedNotebookFile: path.basename(planned.executedPath),
+    startedAt: run.startedAt,
+    elapsedMs: performance.now() - run.started,
+    environment: run.env,
+    cells: planned.notebook.cells,
+    cellTimesMs: run.cellTimesMs,
+    failure: stopped,
+  });
+  existingCalculationRecords(planned).forEach(removeQuietly);
+  writeAll([
+    {
+      target: planned.executedPath,
+      content: executedNotebookJson(planned.notebook, run.env, run.startedAt, stopped),
+    },
+    { target: planned.recordPath, content: html },
+  ]);
+  throw new RunnerError({
+    notebook: failure.notebook,
+    cellNumber: failure.cellNumber,
+    cellCount: failure.cellCount,
+    detail: failure.detail,
+    failedRecordPath: planned.recordPath,
+    failedNotebookPath: planned.executedPath,
+  });
+}
+
+/**
  * Executes notebooks in order, in-process, and writes their executed copies and HTML records.
  * Stops at the first failing cell.
  * @param paths Notebook files (.ipynb, nbformat 4).
  * @param options See {@link RunNotebooksOptions}.
  * @returns One entry per notebook, in order.
  * @throws RunnerError naming the notebook (and the cell, with its error) when a file is missing or
- *   not a notebook, or a cell fails; nothing is written for that notebook and any earlier record
- *   of it in the output folder is removed.
+ *   not a notebook, or a cell fails. For a failed cell the executed notebook and the HTML record
+ *   up to and including it are written, marked FAILED (`failedRecordPath`, `failedNotebookPath`);
+ *   otherwise nothing is written for that notebook. Either way its calculation records of earlier
+ *   runs are removed.
  */
 export async function runNotebooks(
   paths: string[],
@@ -390,8 +469,10 @@ export async function runNotebooks(
     try {
       records.push(await runOne(planned[i], i + 1, planned.length, options));
     } catch (error) {
-      removeQuietly(planned[i].executedPath);
-      removeQuietly(planned[i].recordPath);
+      if (!(error instanceof RunnerError && error.failedRecordPath !== undefined)) {
+        removeQuietly(planned[i].executedPath);
+        removeQuietly(planned[i].recordPath);
+      }
       existingCalculationRecords(planned[i]).forEach(removeQuietly);
       resetRecordRegistry();
       throw error;

@@ -11,14 +11,26 @@ export interface RunnerProblem {
   cellCount?: number;
   /** What went wrong, for an engineer (error name and message, or the file problem). */
   detail: string;
+  /**
+   * When a cell failed: the HTML record of the run up to and including that cell, written and
+   * marked FAILED (title, banner). Undefined when nothing was written.
+   */
+  failedRecordPath?: string;
+  /** When a cell failed: the executed notebook up to and including that cell. */
+  failedNotebookPath?: string;
 }
 
-/** A notebook could not be read, or one of its cells failed. Nothing was written for it. */
+/**
+ * A notebook could not be read, or one of its cells failed. For a failed cell the run up to it is
+ * written, marked FAILED ({@link RunnerProblem.failedRecordPath}); otherwise nothing is.
+ */
 export class RunnerError extends IsochorError implements RunnerProblem {
   readonly notebook: string;
   readonly cellNumber?: number;
   readonly cellCount?: number;
   readonly detail: string;
+  readonly failedRecordPath?: string;
+  readonly failedNotebookPath?: string;
   constructor(problem: RunnerProblem) {
     const where =
       problem.cellNumber !== undefined
@@ -29,5 +41,7 @@ export class RunnerError extends IsochorError implements RunnerProblem {
     this.cellNumber = problem.cellNumber;
     this.cellCount = problem.cellCount;
     this.detail = problem.detail;
+    this.failedRecordPath = problem.failedRecordPath;
+    this.failedNotebookPath = problem.failedNotebookPath;
   }
 }

@@ -30,14 +30,22 @@ describe("cells that fail while running", () => {
     const error = await failure("hangs.ipynb", 1500);
     expect(error.cellNumber).toBe(1);
     expect(error.detail).toMatch(/^Error: the cell ran longer than 1500 ms and was interrupted/);
-    expect(fs.readdirSync(outDir)).toEqual([]);
+    expect(error.failedRecordPath).toBe(path.join(outDir, "hangs.html"));
+    expect(fs.readFileSync(error.failedRecordPath!, "utf8")).toContain("FAILED at cell 1");
+    expect(fs.readdirSync(outDir).sort()).toEqual(["hangs.html", "hangs.ipynb"]);
   }, 60_000);
 
   it("an exception thrown later by a timer fails the cell that started it", async () => {
     const error = await failure("uncaught.ipynb");
     expect(error.cellNumber).toBe(1);
     expect(error.detail).toMatch(/^Error: late failure in a timer/);
-    expect(fs.readdirSync(outDir)).toEqual([]);
+    expect(error.failedNotebookPath).toBe(path.join(outDir, "uncaught.ipynb"));
+    expect(
+      fs
+        .readdirSync(outDir)
+        .filter((f) => f.startsWith("uncaught"))
+        .sort(),
+    ).toEqual(["uncaught.html", "uncaught.ipynb"]);
   }, 60_000);
 
   it("refuses a cellTimeoutMs that is not positive", async () => {

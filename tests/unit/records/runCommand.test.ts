@@ -27,11 +27,13 @@ describe("isochor run (runCommand)", () => {
   });
   afterAll(() => fs.rmSync(work, { recursive: true, force: true }));
 
-  it("a cell that throws: exit 1, names notebook, cell and error; removes an earlier record; no partial files", async () => {
+  it("a cell that throws: exit 1, names notebook, cell and error; writes the run up to it marked FAILED", async () => {
     const outDir = path.join(work, "out", "records");
     fs.mkdirSync(outDir, { recursive: true });
-    // A record left by an earlier, successful run of the same notebook must not survive.
+    // Records left by an earlier, successful run of the same notebook must not survive as such.
     fs.writeFileSync(path.join(outDir, "throws.html"), "<!doctype html><p>old</p>");
+    fs.writeFileSync(path.join(outDir, "throws.record.html"), "<!doctype html><p>old</p>");
+    fs.writeFileSync(path.join(outDir, "throws.record.md"), "# old");
     const io = captureIo(work);
     const code = await runCommand([path.join(fixtures, "throws.ipynb")], io);
     expect(code).toBe(1);
@@ -40,9 +42,43 @@ describe("isochor run (runCommand)", () => {
       `${path.join(fixtures, "throws.ipynb")}: cell 3 of 4 failed: Error: boiler feed pressure missing`,
     );
     expect(stderr).toContain('cell begins: console.log("before the failure");');
-    expect(stderr).toContain("No record written for");
+    expect(stderr).toContain(
+      "Written up to the failing cell and marked FAILED: out/records/throws.html, out/records/throws.ipynb",
+    );
+    expect(stderr).toContain("No calculation record written for");
     expect(io.out.join("")).toMatch(/cell 3 \(code 2\/3\) FAILED/);
-    expect(fs.readdirSync(outDir)).toEqual([]);
+    // the run record and the executed notebook, nothing else (no temp file, no calculation record)
+    expect(fs.readdirSync(outDir).sort()).toEqual(["throws.html", "throws.ipynb"]);
+
+    const html = fs.readFileSync(path.join(outDir, "throws.html"), "utf8");
+    // title, heading, banner and footer all say it failed, and where
+    expect(html).toContain(
+      "<title>FAILED at cell 3: Fixture: a cell throws - calculation record</title>",
+    );
+    expect(html).toContain(
+      '<h1 class="record-title">FAILED at cell 3: Fixture: a cell throws</h1>',
+    );
+    expect(html).toMatch(
+      /<div class="failed-banner" role="alert"><b>Failed at cell 3 of 4<\/b>: Error: boiler feed pressure missing\./,
+    );
+    expect(html).toContain("cell 4 was not run");
+    expect(html).toContain("This run FAILED at cell 3; the record is incomplete.");
+    expect(html).not.toContain("ran to completion");
+    // up to and including the failing cell, with its output and error; nothing after it
+    expect(html).toContain('<section class="cell code-cell failed-cell" id="cell-3">');
+    expect(html).toContain("before the failure");
+    expect(html).not.toContain("never reached");
+    expect(html).not.toContain('id="cell-4"');
+
+    const executed = JSON.parse(fs.readFileSync(path.join(outDir, "throws.ipynb"), "utf8"));
+    expect(executed.cells).toHaveLength(3);
+    expect(
+      executed.cells[2].outputs.some((o: { output_type: string }) => o.output_type === "error"),
+    ).toBe(true);
+    expect(executed.metadata.isochor.run.failed).toMatchObject({ cellNumber: 3, cellCount: 4 });
+    expect(executed.metadata.isochor.run.failed.error).toMatch(
+      /^Error: boiler feed pressure missing/,
+    );
   }, 60_000);
 
   it("a missing file and a non-notebook: exit 1 with a clear message, nothing written", async () => {

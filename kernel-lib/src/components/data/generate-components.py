@@ -24,6 +24,8 @@ SOURCES = {
  "janaf-fit-methane": "degree-6 cp/R polynomial fitted by least squares (this project) to the NIST-JANAF methane table (Chase 1998) at 200, 298.15 and 300-1500 K in 100 K steps (table values from memory; above 298 K they agree with a rigid-rotor harmonic-oscillator calculation from the four fundamental frequencies to 0.01 %); fit error below 0.08 %",
  "perry-aly-lee-propane": "Perry's Chemical Engineers' Handbook, 8th ed. (2008), Table 2-156 (DIPPR 107 / Aly-Lee form, from the DIPPR 801 database): propane C1 = 0.5192e5, C2 = 1.9245e5, C3 = 1.6265e3, C4 = 1.168e5, C5 = 723.6 (J/(kmol K) and K), 200-1500 K (coefficients from memory of the handbook; cp(298.15 K) = 73.47 J/(mol K) against 73.6 in the NIST WebBook, and within 1 % of the GRI-Mech 3.0 polynomial from 300 to 1500 K, which it replaces because that one starts at 300 K)",
  "rrho-low": "Rigid-rotor harmonic-oscillator cp fit (this project) below the first segment joint, the correlation cited next above it; below the joint, a cp/R polynomial fitted by least squares to the rigid-rotor harmonic-oscillator heat capacity from the molecular constants of idealgas/molecular/data/molecules.json (classical rotation, harmonic fundamentals), which for these rigid molecules is exact at these temperatures to well within 0.1 % (at 100 and 200 K it reproduces NIST-JANAF, e.g. CH4 33.258 and 33.473 J/(mol K), from memory of Chase 1998); fit error < 0.02 %; cp jump at the joint < 0.2 %",
+ "molecular-low": "Statistical-mechanics cp fit (this project) below the first segment joint, the correlation cited next above it: a cp/R polynomial fitted by least squares to the ideal-gas heat capacity from the molecular constants of idealgas/molecular/data/molecules.json (classical rotation, harmonic fundamentals, methyl torsions as hindered rotors with exact levels; the same model as idealGasFromMolecule), which is reliable at these temperatures because anharmonicity is negligible there and only the low-frequency modes count; fit error < 0.02 %. Ethane: 35.74, 42.34, 52.50 J/(mol K) at 100, 200, 298.15 K against 35.7, 42.3 and 52.49 from memory of the TRC tables / Chao, Wilhoit & Hall, J. Phys. Chem. Ref. Data 2 (1973) 427 (ideal-gas ethane); joined to GRI-Mech 3.0 at 298.15 K (jump < 0.01 %), which reads 0.5 % low at 200 K. Propane: joined to Perry's Aly-Lee correlation at 200 K, the molecular cp scaled smoothly between 150 and 200 K by up to 0.43 %, their difference at 200 K, so that cp joins without a step (the two routes differ by at most 0.85 % from 200 to 298.15 K, and the molecular value at 298.15 K, 73.59, is within 0.01 % of the NIST WebBook's 73.6, from memory)",
+ "aly-lee-poly": "rewritten (this project) as cp/R polynomials on 200-300, 300-600 and 600-1500 K, least squares through the correlation's values at the segment ends (no cp step at the joints), fit error < 0.02 %, so that the low-temperature segment can precede it",
  "nist-fluid": "NIST Chemistry WebBook fluid data (Lemmon, McLinden & Friend), critical point and boiling point (from memory)",
  "iapws95": "Wagner, W., Pruss, A. (2002), The IAPWS Formulation 1995 for the thermodynamic properties of ordinary water substance, J. Phys. Chem. Ref. Data 31, 387-535: critical point (Tc, Pc, rho_c = 322 kg/m3)",
 }
@@ -94,37 +96,118 @@ def rrho_linear(modes, lo=200, mid=600, hi=1500, deg=5):
 
 MOLECULES = {m["id"]: m for m in json.load(open(os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "..", "idealgas", "molecular", "data", "molecules.json")))["molecules"]}
 
+def hindered_rotor_levels(v0, fold, ired):
+    """Levels (cm-1, from the ground level) of H = -B d2/dphi2 + V0/2 (1 - cos(n phi)) in the
+    free-rotor basis exp(i m phi), the same variational treatment as
+    idealgas/molecular/hinderedRotor.ts (basis: B M^2 > V0 + 50 kB 3000 K)."""
+    b = 16.857629/ired
+    M = int(np.ceil(np.sqrt((v0 + 50*0.6950348*3000)/b))) + 2*fold
+    m = np.arange(-M, M+1)
+    H = np.diag(b*m*m + v0/2.0)
+    for i in range(len(m) - fold):
+        H[i, i+fold] = H[i+fold, i] = -v0/4.0
+    E = np.linalg.eigvalsh(H)
+    return E - E[0]
+
 def rrho_cpr(mol_id, T):
-    """cp/R of the rigid-rotor harmonic oscillator from the shipped molecular constants (valid where
-    rotation is classical and the molecule has no internal rotor; electronic levels above
-    5000 cm-1 contribute nothing below 300 K and are ignored)."""
+    """cp/R from the shipped molecular constants: classical rotation, harmonic fundamentals, and
+    each listed internal rotor as a hindered rotor (exact levels, replacing its torsion). Valid where
+    rotation is classical; electronic levels above 5000 cm-1 contribute nothing below 300 K and are
+    ignored."""
     m = MOLECULES[mol_id]
-    assert not m["internalRotors"] and all(e["energyInvCm"] == 0 or e["energyInvCm"] > 5000 for e in m["electronicLevels"])
+    assert all(e["energyInvCm"] == 0 or e["energyInvCm"] > 5000 for e in m["electronicLevels"])
     cp = np.full_like(T, 3.5 if m["geometry"] == "linear" else 4.0)
     for v in m["vibrations"]:
+        if "internalRotorIndex" in v:
+            continue
         x = 1.438776877*v["wavenumberInvCm"]/T
         cp += v["degeneracy"]*x*x*np.exp(x)/np.expm1(x)**2
+    for r in m["internalRotors"]:
+        E = hindered_rotor_levels(r["barrierInvCm"], r["fold"], r["reducedMomentAmuA2"])
+        x = 1.438776877*E[None, :]/T[:, None]
+        w = np.exp(-x)
+        q = w.sum(1)
+        cp += (x*x*w).sum(1)/q - ((x*w).sum(1)/q)**2
     return cp
 
-def with_rrho_low(cp, mol_id, lo, joint, deg=5):
-    """Prepends a low-temperature segment lo..joint fitted to the rigid-rotor harmonic-oscillator cp
-    (see SOURCES["rrho-low"]); the correlation above starts at the joint."""
+def fit_through_ends(T, y, d):
+    """Least-squares polynomial of degree d in T (relative residuals) through (T[0], y[0]) and
+    (T[-1], y[-1]) exactly, so that neighbouring segments fitted this way join without a cp step.
+    Fitted in u = (T - mid)/half for conditioning, returned as ascending raw-power coefficients in
+    T rounded to 10 significant digits."""
+    m, h = (T[0] + T[-1])/2, (T[-1] - T[0])/2
+    u = (T - m)/h
+    A = np.vander(u, d + 1, increasing=True)/y[:, None]
+    C = np.vander(np.array([-1.0, 1.0]), d + 1, increasing=True)
+    K = np.block([[2*A.T @ A, C.T], [C, np.zeros((2, 2))]])
+    rhs = np.concatenate([2*A.T @ np.ones_like(y), [y[0], y[-1]]])
+    q = np.linalg.solve(K, rhs)[:d + 1]
+    raw = np.polynomial.Polynomial(q)(np.polynomial.Polynomial([-m/h, 1/h])).coef
+    return [float("%.9e" % v) for v in raw]
+
+def alylee_cpr(c):
+    A, B, Cc, D, E = c["aJPerMolK"], c["bJPerMolK"], c["cK"], c["dJPerMolK"], c["eK"]
+    return lambda T: (A + B*((Cc/T)/np.sinh(Cc/T))**2 + D*((E/T)/np.cosh(E/T))**2)/R
+
+def alylee_as_poly(c, joints=(300, 600), deg=5):
+    """Aly-Lee correlation rewritten as cp/R polynomial segments (least squares, error < 2e-4), so
+    that a low-temperature polynomial segment can be put in front of it."""
+    A, B, Cc, D, E = c["aJPerMolK"], c["bJPerMolK"], c["cK"], c["dJPerMolK"], c["eK"]
+    f = lambda T: (A + B*((Cc/T)/np.sinh(Cc/T))**2 + D*((E/T)/np.cosh(E/T))**2)/R
+    edges = [c["minTemperatureK"], *joints, c["maxTemperatureK"]]
+    segs = []
+    for a, b in zip(edges[:-1], edges[1:]):
+        T = np.linspace(a, b, 121)
+        co = fit_through_ends(T, f(T), deg)
+        err = np.max(np.abs(np.polyval(co[::-1], T)/f(T)-1))
+        assert err < 2e-4, err
+        segs.append({"minTemperatureK": a, "maxTemperatureK": b, "coefficients": co})
+    return {"form": "polynomial", "minTemperatureK": edges[0], "maxTemperatureK": edges[-1], "segments": segs}
+
+def with_rrho_low(cp, mol_id, lo, joint, deg=5, max_jump=2e-3, splits=(), blend=None, continuous=False):
+    """Prepends low-temperature segments lo..joint (split at `splits`) fitted to the cp from the
+    molecular constants (see SOURCES["rrho-low"], SOURCES["molecular-low"]); the correlation above
+    starts at the joint. blend = (t0, f): between t0 and the joint the molecular cp/R is scaled by
+    1 + w(T) (f(joint)/mol(joint) - 1), w = 3u^2 - 2u^3, u = (T - t0)/(joint - t0), f the correlation's
+    cp/R (evaluated only at the joint, inside its range), so that cp joins without a step where the
+    two differ by more than the fit error; the change never exceeds that difference.
+    continuous=True: the low pieces go exactly through the target at their ends and the last one
+    through the correlation's value at the joint (no cp step anywhere; fit_through_ends)."""
+    target = lambda T: rrho_cpr(mol_id, T)
+    if blend is not None:
+        t0, f = blend
+        ratio = f(np.array([float(joint)]))[0]/rrho_cpr(mol_id, np.array([float(joint)]))[0] - 1
+        def target(T, t0=t0, ratio=ratio):
+            u = np.clip((T - t0)/(joint - t0), 0, 1)
+            return rrho_cpr(mol_id, T)*(1 + (3*u*u - 2*u**3)*ratio)
     # lowest degree (up to deg) that fits within 2e-4: raw-power polynomials of high degree on a
     # short interval cancel badly when integrated (cp/T) in double precision
-    T = np.linspace(lo, joint, 81)
-    for d in range(0, deg + 1):
-        c = np.polyfit(T, rrho_cpr(mol_id, T), d)
-        c = [float("%.9e" % v) for v in c]
-        err = np.max(np.abs(np.polyval(c, T)/rrho_cpr(mol_id, T)-1))
-        if err < 2e-4:
-            break
-    assert err < 2e-4, (mol_id, err)
+    edges = [lo, *splits, joint]
+    low = []
     segs = [dict(sg) for sg in cp["segments"] if sg["maxTemperatureK"] > joint]
+    above_at_joint = np.polyval(segs[0]["coefficients"][::-1], joint)
+    for a, b in zip(edges[:-1], edges[1:]):
+        T = np.linspace(a, b, 81)
+        y = target(T)
+        if continuous and b == joint:
+            y = y.copy()
+            y[-1] = above_at_joint
+        for d in range(1 if continuous else 0, deg + 1):
+            if continuous:
+                c = fit_through_ends(T, y, d)[::-1]
+            else:
+                c = np.polyfit(T, y, d)
+                c = [float("%.9e" % v) for v in c]
+            err = np.max(np.abs(np.polyval(c, T)/target(T)-1))
+            if err < 2e-4:
+                break
+        assert err < 2e-4, (mol_id, a, b, err)
+        low.append({"minTemperatureK": a, "maxTemperatureK": b, "coefficients": c[::-1]})
     segs[0]["minTemperatureK"] = joint
     above = np.polyval(segs[0]["coefficients"][::-1], joint)
-    assert abs(above/np.polyval(c, joint)-1) < 2e-3, (mol_id, above, np.polyval(c, joint))
+    assert abs(above/np.polyval(c, joint)-1) < max_jump, (mol_id, above, np.polyval(c, joint))
     return {"form": "polynomial", "minTemperatureK": lo, "maxTemperatureK": cp["maxTemperatureK"],
-            "segments": [{"minTemperatureK": lo, "maxTemperatureK": joint, "coefficients": c[::-1]}] + segs}
+            "segments": low + segs}
 
 def benson(groups):
     cp = np.zeros(6)
@@ -150,16 +233,16 @@ def add(id, name, formula, cas, syn, M, Tb, Tc, Pc, Vc, Zc, w, Hf, Gf, S, cp, cr
 add("hydrogen","Hydrogen","H2","1333-74-0",["H2"],2.016,20.28,33.19,13.13,64.1,0.305,-0.216,0,0,130.680,
     gri(200,3500,low=[2.34433112,7.98052075e-3,-1.94781510e-5,2.01572094e-8,-7.37611761e-12],high=[3.33727920,-4.94024731e-5,4.99456778e-7,-1.79566394e-10,2.00255376e-14]),form="janaf",ent="janaf",cps="gri30")
 add("nitrogen","Nitrogen","N2","7727-37-9",["N2"],28.014,77.35,126.20,33.98,90.1,0.289,0.037,0,0,191.609,
-    with_rrho_low(gri(200,6000,low=[3.53100528,-1.23660988e-4,-5.02999433e-7,2.43530612e-9,-1.40881235e-12],high=[2.95257637,1.39690040e-3,-4.92631603e-7,7.86010195e-11,-4.60755204e-15]),"nitrogen",100,200),form="janaf",ent="janaf",cps="rrho-low+burcat")
+    with_rrho_low(gri(200,6000,low=[3.53100528,-1.23660988e-4,-5.02999433e-7,2.43530612e-9,-1.40881235e-12],high=[2.95257637,1.39690040e-3,-4.92631603e-7,7.86010195e-11,-4.60755204e-15]),"nitrogen",90,200),form="janaf",ent="janaf",cps="rrho-low+burcat")
 add("oxygen","Oxygen","O2","7782-44-7",["O2"],31.999,90.17,154.58,50.43,73.4,0.288,0.022,0,0,205.147,
-    with_rrho_low(gri(200,3500,low=[3.78245636,-2.99673416e-3,9.84730201e-6,-9.68129509e-9,3.24372837e-12],high=[3.28253784,1.48308754e-3,-7.57966669e-7,2.09470555e-10,-2.16717794e-14]),"oxygen",100,200),form="janaf",ent="janaf",cps="rrho-low+gri30")
+    with_rrho_low(gri(200,3500,low=[3.78245636,-2.99673416e-3,9.84730201e-6,-9.68129509e-9,3.24372837e-12],high=[3.28253784,1.48308754e-3,-7.57966669e-7,2.09470555e-10,-2.16717794e-14]),"oxygen",90,200),form="janaf",ent="janaf",cps="rrho-low+gri30")
 add("argon","Argon","Ar","7440-37-1",["Ar"],39.948,87.27,150.86,48.98,74.57,0.291,-0.002,0,0,154.845,CONST(),form="janaf",ent="janaf",cps="janaf")
 add("helium","Helium","He","7440-59-7",["He","helium-4"],4.003,4.22,5.19,2.27,57.4,0.302,-0.390,0,0,126.152,CONST(),tb="nist-fluid",form="janaf",ent="janaf",cps="janaf")
 add("neon","Neon","Ne","7440-01-9",["Ne"],20.180,27.10,44.49,26.79,41.87,0.303,-0.0387,0,0,146.327,CONST(),crit="nist-fluid",form="codata",ent="codata",cps="janaf")
 add("krypton","Krypton","Kr","7439-90-9",["Kr"],83.798,119.73,209.48,55.25,92.17,0.292,-0.0009,0,0,164.084,CONST(),crit="nist-fluid",form="codata",ent="codata",cps="janaf")
 add("xenon","Xenon","Xe","7440-63-3",["Xe"],131.293,165.05,289.73,58.42,119.0,0.289,0.0036,0,0,169.684,CONST(),crit="nist-fluid",form="codata",ent="codata",cps="janaf")
 add("carbon-monoxide","Carbon monoxide","CO","630-08-0",["CO"],28.010,81.66,132.85,34.94,93.1,0.292,0.045,-110.527,-137.163,197.653,
-    with_rrho_low(gri(200,3500,low=[3.57953347,-6.10353680e-4,1.01681433e-6,9.07005884e-10,-9.04424499e-13],high=[2.71518561,2.06252743e-3,-9.98825771e-7,2.30053008e-10,-2.03647716e-14]),"carbon-monoxide",100,200),form="janaf",ent="janaf",cps="rrho-low+gri30")
+    with_rrho_low(gri(200,3500,low=[3.57953347,-6.10353680e-4,1.01681433e-6,9.07005884e-10,-9.04424499e-13],high=[2.71518561,2.06252743e-3,-9.98825771e-7,2.30053008e-10,-2.03647716e-14]),"carbon-monoxide",90,200),form="janaf",ent="janaf",cps="rrho-low+gri30")
 add("carbon-dioxide","Carbon dioxide","CO2","124-38-9",["CO2"],44.010,194.67,304.12,73.74,94.07,0.274,0.225,-393.522,-394.389,213.795,
     with_rrho_low(gri(200,3500,low=[2.35677352,8.98459677e-3,-7.12356269e-6,2.45919022e-9,-1.43699548e-13],high=[3.85746029,4.41437026e-3,-2.21481404e-6,5.23490188e-10,-4.72084164e-14]),"carbon-dioxide",100,200),form="janaf",ent="janaf",cps="rrho-low+gri30",
     note="CO2 has no liquid at 1 atm: the 'normal boiling point' is the normal sublimation point")
@@ -192,11 +275,12 @@ add("chlorine","Chlorine","Cl2","7782-50-5",["Cl2"],70.906,239.12,416.9,79.91,12
 
 # ---- n-alkanes
 add("methane","Methane","CH4","74-82-8",["C1","CH4"],16.043,111.66,190.56,45.99,98.6,0.286,0.011,-74.873,-50.768,186.251,
-    with_rrho_low(poly(200,1500,[5.46363337,-0.0184728187,7.41265412e-05,-1.06820644e-07,8.15639829e-11,-3.25587649e-14,5.33044089e-18]),"methane",100,300),form="janaf",ent="janaf",cps="rrho-low+janaf-fit-methane")
+    with_rrho_low(poly(200,1500,[5.46363337,-0.0184728187,7.41265412e-05,-1.06820644e-07,8.15639829e-11,-3.25587649e-14,5.33044089e-18]),"methane",90,300),form="janaf",ent="janaf",cps="rrho-low+janaf-fit-methane")
 add("ethane","Ethane","C2H6","74-84-0",["C2"],30.070,184.55,305.32,48.72,145.5,0.279,0.099,-83.82,-31.86,229.2,
-    gri(200,3500,low=[4.29142492,-5.50154270e-3,5.99438288e-5,-7.08466285e-8,2.68685771e-11],high=[1.07188150,2.16852677e-2,-1.00256067e-5,2.21412001e-9,-1.90002890e-13]),cps="gri30")
+    with_rrho_low(gri(200,3500,low=[4.29142492,-5.50154270e-3,5.99438288e-5,-7.08466285e-8,2.68685771e-11],high=[1.07188150,2.16852677e-2,-1.00256067e-5,2.21412001e-9,-1.90002890e-13]),"ethane",90,298.15,splits=(180,),continuous=True),cps="molecular-low+gri30")
 add("propane","Propane","C3H8","74-98-6",["C3"],44.097,231.02,369.83,42.48,200.0,0.276,0.152,-104.68,-24.29,270.3,
-    alylee(200,1500,0.5192,1.9245,1.6265,1.168,723.6),cps="perry-aly-lee-propane")
+    with_rrho_low(alylee_as_poly(alylee(200,1500,0.5192,1.9245,1.6265,1.168,723.6)),"propane",90,200,splits=(150,),
+                  blend=(150, alylee_cpr(alylee(200,1500,0.5192,1.9245,1.6265,1.168,723.6))),continuous=True),cps="molecular-low+perry-aly-lee-propane+aly-lee-poly")
 add("n-butane","n-Butane","C4H10","106-97-8",["butane","nC4","n-C4"],58.123,272.66,425.12,37.96,255.0,0.274,0.200,-125.79,-16.57,310.0,
     alylee(200,1500,0.7134,2.43,1.63,1.5033,730.42))
 add("isobutane","Isobutane","C4H10","75-28-5",["2-methylpropane","iC4","i-C4","i-butane"],58.123,261.34,407.85,36.40,262.7,0.278,0.186,-134.99,-21.44,295.4,

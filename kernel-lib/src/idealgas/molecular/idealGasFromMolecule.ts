@@ -18,8 +18,11 @@
  *   max = 1500 K by default, the judgement being where the rigid-rotor harmonic-oscillator model
  *         stays adequate: it lacks anharmonicity and vibration-rotation coupling, so cp falls
  *         below the tables as T rises. Against NIST-JANAF and the correlation route, cp is low by
- *         < 0.5 % at 300 K, up to about 1.5 % at 1000 K (NH3, H2) and up to about 2 % at 1500 K
- *         (H2, H2O); at 2500 K by up to about 4 % (H2, H2O). The option `maxTemperatureK` raises
+ *         < 0.5 % at 300 K, up to about 1.5 % at 1000 K (NH3) and up to about 2 % at 1500 K;
+ *         at 2500 K by up to about 4 %. H2 (rotational levels with centrifugal distortion) is
+ *         within 0.05 % up to 300 K and 0.2 % low at 1000 K; H2O (first-order distortion of the
+ *         rotor, rotorDistortion.ts) within 0.1 % at 298 K and 0.4 % high at 1000 K. Accuracy per
+ *         molecule class: DEVELOPERS.md, "the molecular ideal-gas route". The option `maxTemperatureK` raises
  *         the limit up to 3000 K for users who accept that; dissociation and ionisation are never
  *         modelled.
  * Range policy shared with the correlation route (idealgas/temperatureRange.ts): inside the range
@@ -42,6 +45,7 @@ import { linearRotorContribution } from "./linearRotor.js";
 import { linearRotorLevelsContribution } from "./linearRotorLevels.js";
 import { getMolecule, validateMolecularConstants } from "./moleculeTable.js";
 import { nonlinearRotorContribution } from "./nonlinearRotor.js";
+import { distortionCoefficient, rotorDistortionContribution } from "./rotorDistortion.js";
 import { wavenumberToKelvin } from "./spectroscopicUnits.js";
 import { translationalContribution } from "./translation.js";
 import {
@@ -74,6 +78,13 @@ export interface MolecularIdealGasOptions extends TemperatureRangeOptions {
    * enthalpyFrom298, is then evaluated with the classical rotor slightly outside that range).
    */
   readonly linearRotor?: LinearRotorTreatment;
+  /**
+   * Ortho/para (even/odd J) treatment of a molecule with `nuclearSpinWeights` (H2): "equilibrium"
+   * (default; the NIST-JANAF table's case, reached with a conversion catalyst) or "normal" (frozen
+   * at the room-temperature ratio, 3:1 for H2: what a plant without a catalyst carries). They
+   * differ below about 250 K: H2 cp at 100 K is 28.15 J/(mol K) in equilibrium, 22.56 normal.
+   */
+  readonly orthoPara?: "equilibrium" | "normal";
   /**
    * Upper limit of the valid range, K. Default 1500 (MOLECULAR_DEFAULT_MAX_TEMPERATURE_K); at most
    * 3000. Above 1500 K the harmonic model's cp is low by 1-4 % for several molecules (see header).
@@ -150,6 +161,15 @@ export function idealGasFromMolecule(
       received: torsion,
     });
   }
+  const orthoPara = options.orthoPara ?? "equilibrium";
+  if (orthoPara !== "equilibrium" && orthoPara !== "normal") {
+    throw new OutOfRangeError({
+      input: "options.orthoPara",
+      unit: "-",
+      validRange: '"equilibrium" or "normal"',
+      received: orthoPara,
+    });
+  }
   const linearChoice = options.linearRotor ?? "auto";
   if (!["auto", "classical", "level-sum"].includes(linearChoice)) {
     throw new OutOfRangeError({
@@ -199,10 +219,16 @@ export function idealGasFromMolecule(
     c.geometry === "atom"
       ? ""
       : levelSumLinear
-        ? c.nuclearSpinWeights
-          ? "rotational level sum (ortho/para equilibrium)"
-          : "rotational level sum"
-        : "classical rigid rotor",
+        ? `rotational level sum${c.centrifugalDistortionInvCm ? " with centrifugal distortion" : ""}${
+            c.nuclearSpinWeights
+              ? orthoPara === "normal"
+                ? " (normal: ortho/para frozen at the high-temperature ratio)"
+                : " (ortho/para equilibrium)"
+              : ""
+          }`
+        : c.quarticDistortion
+          ? "classical rotor with first-order centrifugal distortion"
+          : "classical rigid rotor",
     c.vibrations.length > 0
       ? torsion === "harmonic" && c.internalRotors.length > 0
         ? "harmonic oscillators (torsion included)"
@@ -224,6 +250,14 @@ export function idealGasFromMolecule(
     return temperatureK;
   };
 
+  const levelOptions = {
+    centrifugalDistortionInvCm: c.centrifugalDistortionInvCm,
+    spinModifications: orthoPara,
+  };
+  const distortion =
+    c.geometry === "nonlinear" && c.quarticDistortion
+      ? distortionCoefficient(c.rotationalConstantsInvCm, c.quarticDistortion)
+      : 0;
   const rotation = (t: number): ThermoContribution => {
     if (c.geometry === "atom") return NO_CONTRIBUTION;
     if (c.geometry === "linear") {
@@ -233,10 +267,14 @@ export function idealGasFromMolecule(
             c.symmetryNumber,
             spinWeights,
             t,
+            levelOptions,
           )
         : linearRotorContribution(c.rotationalConstantsInvCm[0], c.symmetryNumber, t);
     }
-    return nonlinearRotorContribution(c.rotationalConstantsInvCm, c.symmetryNumber, t);
+    const rigid = nonlinearRotorContribution(c.rotationalConstantsInvCm, c.symmetryNumber, t);
+    return distortion === 0
+      ? rigid
+      : sumContributions([rigid, rotorDistortionContribution(distortion, t)]);
   };
 
   type Parts = {

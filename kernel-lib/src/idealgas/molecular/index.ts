@@ -23,4 +23,5 @@ export type {
   NuclearSpinWeights,
   InternalRotor,
   ThermoContribution,
+  WatsonQuarticConstants,
 } from "./types.js";

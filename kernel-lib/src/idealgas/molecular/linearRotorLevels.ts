@@ -12,19 +12,37 @@
  * the classical T/(sigma theta_r) at high T. For a heteronuclear molecule use weights 1 and 1 with
  * sigma = 1.
  *
- * Limits: equilibrium hydrogen only. "Normal" hydrogen (ortho:para frozen at 3:1, as in a gas
- * cooled quickly without a catalyst) has a different cv below about 250 K and is not modelled.
- * The levels are those of a rigid rotor with the ground-state constant B0 (no centrifugal
- * distortion), so at high T the vibration-rotation coupling is missing.
+ * "Normal" hydrogen (option `spinModifications: "normal"`): ortho and para do not interconvert (a
+ * gas cooled without a conversion catalyst keeps its room-temperature 3:1 ratio), so the gas is an
+ * ideal mixture of two species with the high-temperature fractions x_even = g_even/(g_even + g_odd)
+ * and x_odd = g_odd/(g_even + g_odd), each with its own level sum over even or odd J:
+ *   cv = x_e cv_e + x_o cv_o,  h - h0 = x_e (h_e - h0) + x_o (h_o - h0)  (h0: the J = 0 level),
+ *   s = x_e s_e + x_o s_o - R (x_e ln x_e + x_o ln x_o) - R ln((g_e + g_o) sigma / 2),
+ * where s_e, s_o include their spin weights; at high T s tends to the same classical value as the
+ * equilibrium sum, so both share the third-law convention above (McQuarrie 2000, ch. 6, the
+ * frozen "normal hydrogen" case). The two differ in cv below about 250 K (by 20 % at 100 K).
+ * The levels are E_J = B0 x - D0 x^2 + H0 x^3, x = J(J+1) (ground state with centrifugal distortion
+ * when D0, H0 are given; Huber & Herzberg 1979 give them for the diatomics): for H2 the distortion
+ * raises cp at 298.15 K by 0.3 % (the rigid levels put J = 4 18 cm^-1 too high). The levels of the
+ * excited vibrational states are those of the ground state (no vibration-rotation coupling), which
+ * matters only at high T.
  */
 import { wavenumberToKelvin } from "./spectroscopicUnits.js";
+import { R } from "../../constants.js";
 import { levelSumContribution } from "./levelSum.js";
 import type { NuclearSpinWeights, ThermoContribution } from "./types.js";
 
 /** Options for the explicit rotational level sum. */
 export interface LinearRotorLevelsOptions {
-  /** Stop the sum when theta_r J(J+1)/T exceeds this. Default 60 (terms below e^-60 dropped). */
+  /** Stop the sum when E_J/(kB T) exceeds this. Default 60 (terms below e^-60 dropped). */
   readonly cutoff?: number;
+  /** [D, H], cm^-1: E_J = B x - D x^2 + H x^3, x = J(J+1). Default: rigid rotor. */
+  readonly centrifugalDistortionInvCm?: readonly number[];
+  /**
+   * "equilibrium" (default): even and odd J share one Boltzmann distribution. "normal": the even-J
+   * and odd-J species are frozen at their high-temperature fractions (see the header).
+   */
+  readonly spinModifications?: "equilibrium" | "normal";
 }
 
 /**
@@ -42,14 +60,38 @@ export function linearRotorLevelsContribution(
 ): ThermoContribution {
   const cutoff = options.cutoff ?? 60;
   const thetaR = wavenumberToKelvin(rotationalConstantInvCm);
+  const [distortionD, distortionH] = options.centrifugalDistortionInvCm ?? [0, 0];
+  const thetaD = wavenumberToKelvin(distortionD);
+  const thetaH = wavenumberToKelvin(distortionH);
   const theta: number[] = [];
   const g: number[] = [];
   for (let j = 0; ; j++) {
-    const th = thetaR * j * (j + 1);
+    const x = j * (j + 1);
+    const th = x * (thetaR - x * (thetaD - x * thetaH));
     theta.push(th);
     g.push((j % 2 === 0 ? weights.even : weights.odd) * (2 * j + 1));
     if (th / temperatureK > cutoff && j > 2) break;
   }
   const prefactor = 2 / (symmetryNumber * (weights.even + weights.odd));
-  return levelSumContribution({ thetaK: theta, degeneracy: g, prefactor }, temperatureK);
+  if (options.spinModifications !== "normal") {
+    return levelSumContribution({ thetaK: theta, degeneracy: g, prefactor }, temperatureK);
+  }
+  const total = weights.even + weights.odd;
+  let cp = 0;
+  let h = 0;
+  let s = -R * Math.log(1 / prefactor);
+  for (const parity of [0, 1]) {
+    const x = (parity === 0 ? weights.even : weights.odd) / total;
+    const th = theta.filter((_, j) => j % 2 === parity);
+    const part = levelSumContribution(
+      { thetaK: th, degeneracy: g.filter((_, j) => j % 2 === parity) },
+      temperatureK,
+    );
+    // levelSum measures h from each species' own lowest level; h here is measured from J = 0
+    // (s does not depend on where the levels are measured from)
+    cp += x * part.cp;
+    h += x * (part.enthalpyFrom0K + R * th[0]);
+    s += x * (part.entropy - R * Math.log(x));
+  }
+  return { cp, enthalpyFrom0K: h, entropy: s };
 }

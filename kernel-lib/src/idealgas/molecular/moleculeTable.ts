@@ -127,6 +127,48 @@ export function validateMolecularConstants(c: MolecularConstants): MolecularCons
       );
     }
   }
+  const cd = c.centrifugalDistortionInvCm;
+  if (cd !== undefined) {
+    if (c.geometry !== "linear") {
+      fail(p("centrifugalDistortionInvCm"), "cm^-1", "only for linear molecules", cd);
+    }
+    const b = rot[0];
+    // dE/dx = B - 2 D x + 3 H x^2 > 0 for every x (no discriminant): the levels rise with J
+    if (
+      !Array.isArray(cd) ||
+      cd.length !== 2 ||
+      !(cd[0] >= 0 && cd[0] < 0.01 * b) ||
+      !(cd[1] >= 0 && cd[1] < 0.01 * cd[0] + Number.MIN_VALUE) ||
+      !(cd[0] * cd[0] < 3 * cd[1] * b)
+    ) {
+      fail(
+        p("centrifugalDistortionInvCm"),
+        "cm^-1",
+        "[D, H] with 0 <= D < 0.01 B, 0 <= H < 0.01 D and D^2 < 3 H B (levels rising with J for every J)",
+        cd,
+      );
+    }
+  }
+  const qd = c.quarticDistortion;
+  if (qd !== undefined) {
+    if (c.geometry !== "nonlinear") {
+      fail(p("quarticDistortion"), "cm^-1", "only for nonlinear molecules", qd);
+    }
+    const keys = [
+      "deltaJInvCm",
+      "deltaJKInvCm",
+      "deltaKInvCm",
+      "smallDeltaJInvCm",
+      "smallDeltaKInvCm",
+    ] as const;
+    const smallest = Math.min(...rot);
+    for (const key of keys) {
+      const v = (qd as unknown as Record<string, unknown>)[key];
+      if (!(typeof v === "number" && Math.abs(v) < 0.01 * smallest)) {
+        fail(p(`quarticDistortion.${key}`), "cm^-1", "a finite number, |value| < 0.01 C", v);
+      }
+    }
+  }
   if (!Array.isArray(c.vibrations)) fail(p("vibrations"), "-", "an array", c.vibrations);
   const rotors = Array.isArray(c.internalRotors)
     ? c.internalRotors

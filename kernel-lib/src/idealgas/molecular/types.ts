@@ -58,6 +58,15 @@ export interface InternalRotor {
   readonly label?: string;
 }
 
+/** Watson's A-reduced quartic centrifugal-distortion constants, cm^-1. */
+export interface WatsonQuarticConstants {
+  readonly deltaJInvCm: number;
+  readonly deltaJKInvCm: number;
+  readonly deltaKInvCm: number;
+  readonly smallDeltaJInvCm: number;
+  readonly smallDeltaKInvCm: number;
+}
+
 /** Shape of the molecule, which selects the rotational partition function. */
 export type MolecularGeometry = "atom" | "linear" | "nonlinear";
 
@@ -81,6 +90,18 @@ export interface MolecularConstants {
   readonly rotationalConstantsInvCm: readonly number[];
   /** If present (linear molecules only), rotational levels are summed explicitly with these weights. */
   readonly nuclearSpinWeights?: NuclearSpinWeights;
+  /**
+   * Centrifugal distortion of a linear molecule, cm^-1: [D, H] in the ground-state levels
+   * E_J = B x - D x^2 + H x^3, x = J(J+1) (validated so the levels rise with J for every J). Used by the explicit level sum (molecules with
+   * `nuclearSpinWeights`, or the "level-sum" option); ignored by the classical rotor. Default none.
+   */
+  readonly centrifugalDistortionInvCm?: readonly number[];
+  /**
+   * Watson's A-reduced quartic centrifugal-distortion constants of a nonlinear molecule (I^r
+   * representation, a axis = z), cm^-1; when given, the classical rotor gets the first-order
+   * correction of rotorDistortion.ts. Default none (rigid rotor).
+   */
+  readonly quarticDistortion?: WatsonQuarticConstants;
   readonly vibrations: readonly VibrationalMode[];
   /** Electronic levels; the ground level has energy 0. Default: a single non-degenerate ground level. */
   readonly electronicLevels: readonly ElectronicLevel[];

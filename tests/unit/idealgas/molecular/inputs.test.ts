@@ -53,7 +53,7 @@ describe("molecule table", () => {
     } catch (e) {
       expect((e as UnknownNameError).suggestions[0]).toBe("ethane");
     }
-    expect(() => idealGasFromMolecule("propane")).toThrow(UnknownNameError);
+    expect(() => idealGasFromMolecule("n-butane")).toThrow(UnknownNameError);
     expect(() => getMolecule(42 as unknown as string)).toThrow(InputError);
   });
 
