@@ -39,14 +39,27 @@ export interface InputProblem {
   hint?: string;
 }
 
+/** Longest text of a received value echoed in a message; longer ones are cut and their length told. */
+const ECHO_LIMIT = 200;
+
+function clip(text: string): string {
+  return text.length <= ECHO_LIMIT
+    ? text
+    : `${text.slice(0, ECHO_LIMIT)}... (${text.length} characters)`;
+}
+
 function show(value: unknown): string {
   if (typeof value === "number") return Number.isNaN(value) ? "NaN" : String(value);
-  if (typeof value === "string") return JSON.stringify(value);
+  if (typeof value === "string") {
+    return value.length <= ECHO_LIMIT
+      ? JSON.stringify(value)
+      : `${JSON.stringify(value.slice(0, ECHO_LIMIT))}... (${value.length} characters)`;
+  }
   if (value === undefined) return "undefined";
   try {
-    return JSON.stringify(value) ?? String(value);
+    return clip(JSON.stringify(value) ?? String(value));
   } catch {
-    return String(value);
+    return clip(String(value));
   }
 }
 

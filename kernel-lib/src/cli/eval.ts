@@ -263,9 +263,11 @@ function fluidOf(request: EvalRequest, model: Exclude<EvalRequest["model"], "ref
     if (e instanceof InputError) {
       const field = e.input.startsWith("kij")
         ? `$.${e.input}`
-        : e.input.startsWith("components[")
-          ? `$.constants`
-          : "$";
+        : /^components\[\d+\]$/.test(e.input)
+          ? `$.${e.input}`
+          : e.input.startsWith("components[")
+            ? `$.constants`
+            : "$";
       throw new RequestError(field, e.message);
     }
     if (e instanceof IsochorError) throw new RequestError("$", e.message);
@@ -482,7 +484,8 @@ export async function evalCommand(argv: string[], io: CliIo): Promise<number> {
   }
   let raw: unknown;
   try {
-    raw = JSON.parse(text);
+    // a UTF-8 byte-order mark (some editors write one) is not part of the JSON text
+    raw = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
   } catch (e) {
     const err = new RequestError(
       "$",

@@ -135,7 +135,7 @@ function jsonPath(pointer: string): string {
 
 /**
  * The problem to report among all of ajv's errors: an unknown field first (it is often a
- * misspelt one, and explains the other errors), else the first error in the schema's order that
+ * misspelt one, and explains the other errors), then a value of the wrong type, else the first error in the schema's order that
  * is neither the failure of one branch of anyOf/oneOf (the combinator's own error says what was
  * wanted) nor an "if" summary.
  */
@@ -143,7 +143,14 @@ function firstProblem(errors: readonly ErrorObject[]): ErrorObject {
   const reported = errors.filter(
     (e) => e.keyword !== "if" && !/\/(anyOf|oneOf)\/\d+\//.test(e.schemaPath),
   );
-  return reported.find((e) => e.keyword === "additionalProperties") ?? reported[0] ?? errors[0];
+  // a value of the wrong type next (a state given as a number also fails the state-form rules,
+  // whose messages would then name fields the value does not have)
+  return (
+    reported.find((e) => e.keyword === "additionalProperties") ??
+    reported.find((e) => e.keyword === "type") ??
+    reported[0] ??
+    errors[0]
+  );
 }
 
 /** A RequestError from an ajv error: the JSON path and a message in the request's words. */

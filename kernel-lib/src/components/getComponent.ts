@@ -26,6 +26,9 @@ export function normalizeComponentName(name: string): string {
   return name.toLowerCase().replace(/[\s\-_,'.]/g, "");
 }
 
+/** Characters of an unknown name compared for suggestions (the table's longest key is far shorter). */
+const MAX_NAME_COMPARED = 64;
+
 function keysOf(c: Component): string[] {
   return [c.id, c.name, c.formula, c.casNumber, ...c.synonyms]
     .filter((k) => k !== "")
@@ -60,9 +63,12 @@ export function getComponent(
       matches.map((c) => c.id),
     );
   }
+  // Suggestions compare at most the first MAX_NAME_COMPARED characters (names in the table are far
+  // shorter), so a huge string is refused in milliseconds instead of a quadratic edit distance.
+  const head = key.slice(0, MAX_NAME_COMPARED);
   const scored: { id: string; distance: number }[] = [];
   for (const c of all) {
-    const distance = Math.min(...keysOf(c).map((k) => editDistance(key, k)));
+    const distance = Math.min(...keysOf(c).map((k) => editDistance(head, k)));
     scored.push({ id: c.id, distance });
   }
   scored.sort((a, b) => a.distance - b.distance);

@@ -33,6 +33,7 @@ import {
   type InversionResult,
 } from "../state/inversions.js";
 import type { DepartureMethod, FluidBinding, FluidState } from "../state/types.js";
+import { checkComposition, checkPressure, checkTemperature } from "../state/checkInputs.js";
 import type { ResultWarning } from "../errors.js";
 import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../phase/stability.js";
 import {
@@ -260,8 +261,20 @@ function resolveComponents(spec: FluidSpec): Component[] {
       received: spec.components,
     });
   }
-  return spec.components.map((c, i) => {
-    const base = typeof c === "string" ? getComponent(c) : c;
+  const resolved = spec.components.map((c, i): Component => {
+    const entry: unknown = c;
+    if (!(typeof entry === "string" || (isRecord(entry) && typeof entry.id === "string"))) {
+      throw new InputError({
+        input: `components[${i}]`,
+        unit: "-",
+        validRange: "a component id or name (string) or a Component record",
+        received: c,
+      });
+    }
+    return typeof c === "string" ? getComponent(c) : c;
+  });
+  refuseDuplicates(spec.components, resolved);
+  return resolved.map((base, i) => {
     const o = spec.constants?.[i];
     if (!o) return base;
     return {
@@ -273,6 +286,90 @@ function resolveComponents(spec: FluidSpec): Component[] {
       criticalVolumeM3PerMol: o.criticalVolumeM3PerMol ?? base.criticalVolumeM3PerMol,
     };
   });
+}
+
+function isRecord(v: unknown): v is Record<string, unknown> {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+
+/** Refuses spec fields of the wrong kind (a notebook may pass anything) before they are used. */
+function checkSpecFields(spec: FluidSpec): void {
+  const fail = (input: string, validRange: string, received: unknown): never => {
+    throw new InputError({ input, unit: "-", validRange, received });
+  };
+  const m: unknown = spec.model;
+  if (!(
+    m === undefined ||
+    typeof m === "string" ||
+    (isRecord(m) && typeof m.residual === "function" && isRecord(m.info))
+  )) {
+    fail("model", "a model id (string) or a ResidualModel object", m);
+  }
+  const ig: unknown = spec.idealGas;
+  if (!(
+    ig === undefined ||
+    ig === "correlation" ||
+    ig === "molecular" ||
+    (isRecord(ig) && typeof ig.at === "function")
+  )) {
+    fail("idealGas", '"correlation" or "molecular" or an IdealGasMixture', ig);
+  }
+  const dep: unknown = spec.departure;
+  if (!(dep === undefined || dep === "closed-form" || dep === "numeric")) {
+    fail("departure", '"closed-form" or "numeric"', dep);
+  }
+  const constants: unknown = spec.constants;
+  if (constants !== undefined) {
+    if (!Array.isArray(constants))
+      fail("constants", "an array with one entry per component", constants);
+    (constants as unknown[]).forEach((c, i) => {
+      if (!(c === undefined || c === null || isRecord(c))) {
+        fail(`constants[${i}]`, "an object of constant overrides, or undefined", c);
+      }
+    });
+  }
+  const ref: unknown = spec.referenceState;
+  if (!(
+    ref === undefined ||
+    (isRecord(ref) &&
+      (ref.kind === "formation" || ref.kind === "zero-at" || ref.kind === "fluid-convention"))
+  )) {
+    fail(
+      "referenceState",
+      '{ kind: "formation" }, { kind: "zero-at", temperatureK, pressurePa } or { kind: "fluid-convention", description }',
+      ref,
+    );
+  }
+}
+
+/**
+ * Refuses one component listed twice: two entries that resolve to the same id (whether written as
+ * id, name, formula, CAS number or synonym), or two records with the same CAS number. A formula
+ * alone is not a duplicate: isomers share one (n-butane and isobutane, C4H10).
+ */
+function refuseDuplicates(
+  given: readonly (string | Component)[],
+  resolved: readonly Component[],
+): void {
+  const label = (i: number): string =>
+    `components[${i}] ${JSON.stringify(typeof given[i] === "string" ? given[i] : resolved[i].id)}`;
+  for (let j = 1; j < resolved.length; j++) {
+    for (let i = 0; i < j; i++) {
+      const a = resolved[i];
+      const b = resolved[j];
+      const sameCas =
+        a.casNumber !== "" && a.casNumber !== undefined && a.casNumber === b.casNumber;
+      if (a.id === b.id || sameCas) {
+        throw new InputError({
+          input: `components[${j}]`,
+          unit: "-",
+          validRange: `a component not already listed (${label(i)} and ${label(j)} are the same component: ${a.id}${sameCas ? `, CAS ${a.casNumber}` : ""})`,
+          received: given[j],
+          hint: "list each component once and add up its mole fractions",
+        });
+      }
+    }
+  }
 }
 
 /**
@@ -370,6 +467,16 @@ function bindMethods(model: ResidualModel): ResidualModel {
  * ```
  */
 export function defineFluid(spec: FluidSpec): Fluid {
+  if (!isRecord(spec)) {
+    throw new InputError({
+      input: "spec",
+      unit: "-",
+      validRange:
+        'an object, the argument of defineFluid, e.g. { components: ["methane"], model: "peng-robinson" }',
+      received: spec,
+    });
+  }
+  checkSpecFields(spec);
   const components = resolveComponents(spec);
   const ids = components.map((c) => c.id);
   const modelSpec = spec.model ?? "peng-robinson";
@@ -476,7 +583,13 @@ export function defineFluid(spec: FluidSpec): Fluid {
     defaultedPairs: interactions?.defaultedPairs ?? [],
     stateAtTP: (T, P, x, options) => stateWithStabilityCheck(binding, T, P, xOf(x), options),
     stateAtTRho: (T, rho, x) => stateAtTRho(binding, T, rho, xOf(x)),
-    densityRoots: (T, P, x) => densityRootsAtTP(binding, T, P, xOf(x)),
+    densityRoots: (T, P, x) => {
+      // densityRootsAtTP leaves the checks to its callers: this is a public entry
+      checkTemperature(T);
+      checkPressure(P);
+      checkComposition(xOf(x), components.length);
+      return densityRootsAtTP(binding, T, P, xOf(x));
+    },
     stabilityAtTP: (T, P, x, options) =>
       stabilityAtTP(model, T, P, xOf(x), { constants: components, ...options }),
     envelope: (z, options) => phaseEnvelope(binding, z, { constants: components, ...options }),

@@ -344,6 +344,14 @@ function closedFormRootsRoute(
 }
 
 function validateOptions(options: SaturationOptions): { tolerance: number; maxIterations: number } {
+  if (!(typeof options === "object" && options !== null)) {
+    throw new InputError({
+      input: "options",
+      unit: "-",
+      validRange: "an options object (or nothing)",
+      received: options,
+    });
+  }
   const tolerance = options.tolerance ?? 1e-12;
   if (!(tolerance > 0 && tolerance < 1)) {
     throw new InputError({
@@ -374,6 +382,27 @@ export function saturationAtTemperature(
   model: ResidualModel,
   temperatureK: number,
   options: SaturationOptions = {},
+): SaturationResult {
+  options = options ?? {};
+  try {
+    return solveAtTemperature(model, temperatureK, options);
+  } catch (e) {
+    // Below a published triple point the stable phase is solid; when the metastable
+    // vapour-liquid equilibrium cannot be solved there, say so rather than how the search failed.
+    const triple = model.triple;
+    if (e instanceof SolverError && triple && temperatureK < triple.temperatureK) {
+      throw new PhaseUnavailableError(
+        `no vapour-liquid saturation state at T = ${temperatureK} K: below the triple point (${triple.temperatureK} K, ${triple.pressurePa} Pa) of ${model.info.name}, in the solid region, and the equation's metastable vapour-liquid equilibrium could not be solved there (${e.message})`,
+      );
+    }
+    throw e;
+  }
+}
+
+function solveAtTemperature(
+  model: ResidualModel,
+  temperatureK: number,
+  options: SaturationOptions,
 ): SaturationResult {
   requirePure(model, "saturation");
   requirePositive("temperatureK", temperatureK, "K");
@@ -499,6 +528,7 @@ export function saturationAtPressure(
   pressurePa: number,
   options: SaturationAtPressureOptions = {},
 ): SaturationResult {
+  options = options ?? {};
   requirePure(model, "saturation");
   requirePositive("pressurePa", pressurePa, "Pa");
   validateOptions(options);
@@ -512,8 +542,10 @@ export function saturationAtPressure(
   const Tc = critical.temperatureK;
   const hints = model;
   const lnP = Math.log(pressurePa);
-  // Bracket in T: [T_lo, Tc) with ln psat(T) increasing in T.
-  let tLo = hints.triple ? 0.98 * hints.triple.temperatureK : 0.3 * Tc;
+  // Bracket in T: [T_lo, Tc) with ln psat(T) increasing in T. Below a triple point the metastable
+  // line is followed down to the lowest temperature the equation solves at (lowestTemperature).
+  const floor = lowestTemperature(model, Tc, pressurePa, options);
+  let tLo = floor.temperatureK;
   let tHi = Tc * (1 - 1e-9);
   // Start: from the ancillary (bisected) or Clausius-Clapeyron between Tc and 0.7 Tc.
   let T: number;
@@ -550,5 +582,75 @@ export function saturationAtPressure(
     }
   }
   if (!sat) throw new SolverError("saturation at given pressure", "no iteration ran");
+  // The result is verified: the requested pressure is met, never the bracket end returned.
+  const miss = Math.abs(Math.log(sat.pressurePa) - lnP);
+  if (!(miss <= Math.max(pTol, 1e-9))) {
+    throw new SolverError(
+      "saturation at given pressure (Newton-Clapeyron on T)",
+      `P = ${pressurePa} Pa not met: last T = ${sat.temperatureK} K gives ${sat.pressurePa} Pa (ln P residual ${miss}); bracket ${tLo}..${tHi} K`,
+    );
+  }
   return { ...sat, iterations };
+}
+
+/**
+ * The lowest temperature of the saturation search at given P and a check that P is reachable
+ * there. Without a triple point: 0.3 Tc (cubics and other models solve the equation well below
+ * any real triple point). With one: 0.98 T_t when P is above the triple-point pressure; below it
+ * the metastable line is followed down to the lowest temperature the equation may be used at
+ * (its extrapolation range, or 0.5 T_t when it states none), and P below the saturation pressure
+ * there is refused with a PhaseUnavailableError naming the triple point.
+ */
+function lowestTemperature(
+  model: ResidualModel,
+  Tc: number,
+  pressurePa: number,
+  options: SaturationAtPressureOptions,
+): { temperatureK: number } {
+  const triple = model.triple;
+  const refuse = (reason: string): never => {
+    throw new PhaseUnavailableError(
+      `no vapour-liquid saturation state at P = ${pressurePa} Pa for ${model.info.name}: ` +
+        (triple
+          ? `below the triple point (${triple.temperatureK} K, ${triple.pressurePa} Pa), where the stable phases are solid and vapour, and ${reason}`
+          : reason),
+    );
+  };
+  if (!triple) {
+    const tLo = 0.3 * Tc;
+    const psat = saturationAtTemperature(model, tLo, options).pressurePa;
+    if (!(pressurePa >= psat)) {
+      refuse(
+        `the pressure is below the saturation pressure ${psat} Pa at the lowest temperature searched (0.3 Tc = ${tLo} K)`,
+      );
+    }
+    return { temperatureK: tLo };
+  }
+  if (pressurePa >= triple.pressurePa) return { temperatureK: 0.98 * triple.temperatureK };
+  let tLo = triple.temperatureK;
+  const usable = (T: number): boolean =>
+    options.allowOutsideRange === true ||
+    typeof model.validityStatus !== "function" ||
+    model.validityStatus(T, 0) !== "outside";
+  while (tLo * 0.99 > 0.5 * triple.temperatureK && usable(tLo * 0.99)) tLo *= 0.99;
+  // the metastable equilibrium may not be solvable down to there: halve the distance to T_t
+  for (let k = 0; k < 6; k++) {
+    let psat: number;
+    try {
+      psat = solveAtTemperature(model, tLo, options).pressurePa;
+    } catch (e) {
+      if (!(e instanceof SolverError)) throw e;
+      tLo = 0.5 * (tLo + triple.temperatureK);
+      continue;
+    }
+    if (!(pressurePa >= psat)) {
+      refuse(
+        `the pressure is below the metastable saturation pressure ${psat} Pa at the lowest temperature the equation is used at (${tLo} K)`,
+      );
+    }
+    return { temperatureK: tLo };
+  }
+  return refuse(
+    `the metastable vapour-liquid equilibrium could not be solved below ${triple.temperatureK} K`,
+  );
 }

@@ -8,11 +8,17 @@
  * The saturated phases come from phase/saturation.ts and their properties from the engine's
  * state functions (state/stateAt.ts); single-phase (P, h) and (P, s) from state/inversions.ts.
  */
-import { InputError, type ResultWarning } from "../errors.js";
+import {
+  InputError,
+  OutOfRangeError,
+  PhaseUnavailableError,
+  type ResultWarning,
+} from "../errors.js";
 import type { ModelInfo } from "../eos/types.js";
 import type { ReferenceState } from "../idealgas/types.js";
 import { stateAtTRho } from "../state/stateAt.js";
 import { temperatureAtPH, temperatureAtPS } from "../state/inversions.js";
+import { MAX_TEMPERATURE_K, MIN_TEMPERATURE_K } from "../state/physicalLimits.js";
 import type { FluidBinding, FluidState } from "../state/types.js";
 import { requireFinite, requirePositive } from "../validate.js";
 import { locateCriticalPoint } from "./criticalPoint.js";
@@ -183,9 +189,12 @@ export function stateAtTemperatureDensity(
 export interface DomeInversionOptions extends SaturationOptions {
   /** Initial guess for a supercritical-pressure inversion, K. Default the critical temperature. */
   initialGuessK?: number;
-  /** Lowest temperature searched on the liquid side, K. Default 20. */
+  /**
+   * Lowest temperature searched on the liquid side, K. Default 1 (the search is cut to where the
+   * fluid can be evaluated: see state/inversions.ts).
+   */
   minTemperatureK?: number;
-  /** Highest temperature searched on the vapour side, K. Default 3000. */
+  /** Highest temperature searched on the vapour side, K. Default 1e4 (likewise cut). */
   maxTemperatureK?: number;
 }
 
@@ -205,8 +214,8 @@ function acrossDome(
   );
   const invert = property === "h" ? temperatureAtPH : temperatureAtPS;
   const critical = locateCriticalPoint(binding.model, { guess: options.criticalGuess });
-  const tMin = options.minTemperatureK ?? 20;
-  const tMax = options.maxTemperatureK ?? 3000;
+  const tMin = options.minTemperatureK ?? MIN_TEMPERATURE_K;
+  const tMax = options.maxTemperatureK ?? MAX_TEMPERATURE_K;
   if (!(pressurePa < critical.pressurePa)) {
     const r = invert(binding, pressurePa, target, [1], {
       phase: "stable",
@@ -216,10 +225,40 @@ function acrossDome(
     });
     return { kind: "single-phase", state: r.state };
   }
-  const sat = saturationAtPressure(binding.model, pressurePa, options);
+  const triple = binding.model.triple;
+  let sat: SaturationResult;
+  try {
+    sat = saturationAtPressure(binding.model, pressurePa, options);
+  } catch (e) {
+    if (!(e instanceof PhaseUnavailableError && triple && pressurePa < triple.pressurePa)) throw e;
+    // Below the triple-point pressure there is no vapour-liquid dome to cross (only the
+    // sublimation line, below which the fluid is solid, outside every model here): a fluid state
+    // at this pressure is vapour.
+    const r = invert(binding, pressurePa, target, [1], {
+      phase: "vapor",
+      minTemperatureK: tMin,
+      maxTemperatureK: tMax,
+    });
+    return { kind: "single-phase", state: r.state };
+  }
   const Tsat = sat.temperatureK;
-  const L = stateAtTRho(binding, Tsat, sat.liquidDensityMolPerM3, [1]);
-  const V = stateAtTRho(binding, Tsat, sat.vaporDensityMolPerM3, [1]);
+  let L: FluidState;
+  let V: FluidState;
+  try {
+    L = stateAtTRho(binding, Tsat, sat.liquidDensityMolPerM3, [1]);
+    V = stateAtTRho(binding, Tsat, sat.vaporDensityMolPerM3, [1]);
+  } catch (e) {
+    if (!(e instanceof OutOfRangeError)) throw e;
+    // The saturated phases cannot be evaluated (e.g. the ideal-gas cp range of hydrogen starts
+    // far above its 31 K saturation temperature at 1 MPa): every state that can be evaluated at
+    // this pressure lies above Tsat, i.e. is vapour; the inversion names why when none matches.
+    const r = invert(binding, pressurePa, target, [1], {
+      phase: "vapor",
+      minTemperatureK: Math.min(Tsat * (1 + 1e-9), tMax),
+      maxTemperatureK: Math.max(tMax, Tsat * (1 + 2e-9)),
+    });
+    return { kind: "single-phase", state: r.state };
+  }
   const yL = L.molar[property];
   const yV = V.molar[property];
   if (target >= yL && target <= yV) {

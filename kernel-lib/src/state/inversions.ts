@@ -1,8 +1,13 @@
 /**
  * Temperature at given (P, h) and (P, s) in one phase: what a valve (isenthalpic) and a compressor
  * or turbine (isentropic) step needs. Method: the residual f(T) = h(T, P) - h_target (or s) is
- * monotonic in T within a phase (cp > 0); a bracket is found by stepping geometrically away from a
- * starting temperature in the direction the sign of f demands, then Brent's method
+ * monotonic in T within a phase (cp > 0); the search window is the requested temperature range
+ * cut to where the fluid's ideal-gas part can be evaluated (the heat-capacity ranges of the
+ * components present, with the ideal-gas layer's extrapolation margin, and the physical limits of
+ * state/physicalLimits.ts); the start is the given guess, else 300 K when inside the window, else
+ * its geometric middle, and when the phase does not exist there the first temperature of a
+ * geometric grid over the window (nearest first) where it does; a bracket is found by stepping
+ * geometrically away from the start in the direction the sign of f demands, then Brent's method
  * (numerics/brent.ts; Brent 1973, ch. 4) locates the root. A jump of h or s across the bracket
  * (the root sits on a phase change of the "stable" branch, i.e. inside the two-phase region) is
  * detected from the final residual and refused with a SolverError saying so.
@@ -11,6 +16,8 @@ import { InputError, IsochorError, SolverError } from "../errors.js";
 import { findRootBrent } from "../numerics/brent.js";
 import { requireFinite } from "../validate.js";
 import { checkComposition, checkPressure } from "./checkInputs.js";
+import { DEFAULT_EXTRAPOLATION_MARGIN } from "../idealgas/temperatureRange.js";
+import { MAX_TEMPERATURE_K, MIN_TEMPERATURE_K } from "./physicalLimits.js";
 import { stateAtTP } from "./stateAt.js";
 import type { FluidBinding, FluidState, PhaseRequest } from "./types.js";
 
@@ -18,11 +25,18 @@ import type { FluidBinding, FluidState, PhaseRequest } from "./types.js";
 export interface InversionOptions {
   /** Phase to stay in: "stable" (default), "liquid" or "vapor". */
   phase?: PhaseRequest;
-  /** Starting temperature of the bracket search, K. Default 300. */
+  /**
+   * Starting temperature of the bracket search, K. Default 300 K, or the geometric middle of the
+   * search window when 300 K lies outside it.
+   */
   initialGuessK?: number;
-  /** Lowest temperature tried, K. Default 20. */
+  /**
+   * Lowest temperature tried, K. Default: the lowest temperature the fluid can be evaluated at
+   * (the ideal-gas heat-capacity ranges of the components present with their extrapolation
+   * margin, and the physical limits); the search never goes below that, whatever is given.
+   */
   minTemperatureK?: number;
-  /** Highest temperature tried, K. Default 3000. */
+  /** Highest temperature tried, K. Default: the highest the fluid can be evaluated at (likewise). */
   maxTemperatureK?: number;
   /** Absolute tolerance on T, K. Default 1e-9. */
   toleranceK?: number;
@@ -56,10 +70,11 @@ function invert(
   checkPressure(pressurePa);
   requireFinite(name, target, unit);
   checkComposition(x, binding.model.info.componentIds.length);
+  options = options ?? {};
   const phase = options.phase ?? "stable";
-  const tMin = options.minTemperatureK ?? 20;
-  const tMax = options.maxTemperatureK ?? 3000;
-  const guess = options.initialGuessK ?? 300;
+  const tMin = options.minTemperatureK ?? MIN_TEMPERATURE_K;
+  const tMax = options.maxTemperatureK ?? MAX_TEMPERATURE_K;
+  const guess = options.initialGuessK ?? Math.min(Math.max(300, tMin), tMax);
   if (!(tMin > 0 && tMax > tMin && guess >= tMin && guess <= tMax)) {
     throw new InputError({
       input: "minTemperatureK, initialGuessK, maxTemperatureK",
@@ -68,6 +83,21 @@ function invert(
       received: [tMin, guess, tMax],
     });
   }
+  // the window where the fluid can be evaluated at all: the ideal-gas ranges of the components
+  // present (with the extrapolation margin) and the physical limits
+  const ig = idealGasWindow(binding, x);
+  const lo = Math.max(tMin, ig.min);
+  const hi = Math.min(tMax, ig.max);
+  if (!(lo < hi)) {
+    throw new SolverError(
+      `temperature at given (P, ${property})`,
+      `the requested temperatures ${tMin} K to ${tMax} K lie outside the range where the fluid can be evaluated (${ig.min} K to ${ig.max} K: ${ig.basis})`,
+    );
+  }
+  const start = Math.min(
+    hi,
+    Math.max(lo, options.initialGuessK ?? (300 >= lo && 300 <= hi ? 300 : Math.sqrt(lo * hi))),
+  );
   let evaluations = 0;
   const f = (T: number): number => {
     evaluations++;
@@ -87,12 +117,27 @@ function invert(
       throw e;
     }
   };
-  let a = guess;
+  let a = start;
   let fa = safe(a);
+  if (!Number.isFinite(fa)) {
+    // the phase does not exist at the start (or the model cannot be evaluated there): the first
+    // temperature of a geometric grid over the window, nearest to the start first, where it does
+    const grid: number[] = [];
+    for (let i = 0; i <= 24; i++) grid.push(lo * Math.pow(hi / lo, i / 24));
+    grid.sort((p, q) => Math.abs(Math.log(p / start)) - Math.abs(Math.log(q / start)));
+    for (const T of grid) {
+      const v = safe(T);
+      if (Number.isFinite(v)) {
+        a = T;
+        fa = v;
+        break;
+      }
+    }
+  }
   if (!Number.isFinite(fa)) {
     throw new SolverError(
       `temperature at given (P, ${property})`,
-      `no ${phase} state at the starting temperature ${guess} K and P = ${pressurePa} Pa (${tried.join("; ")}); give initialGuessK inside the phase`,
+      `no ${phase} state at P = ${pressurePa} Pa anywhere between ${lo} K and ${hi} K (${ig.basis}); tried ${tried.join("; ")}`,
     );
   }
   // h and s rise with T: step up when below the target, down when above, with steps growing from
@@ -103,7 +148,7 @@ function invert(
   let fb = fa;
   let step = 0.02;
   for (let k = 0; k < 80 && step > 1e-6; k++) {
-    const next = up ? Math.min(b * (1 + step), tMax) : Math.max(b / (1 + step), tMin);
+    const next = up ? Math.min(b * (1 + step), hi) : Math.max(b / (1 + step), lo);
     if (next === b) break;
     const fn = safe(next);
     if (!Number.isFinite(fn)) {
@@ -118,14 +163,17 @@ function invert(
     step = Math.min(step * 2, 1);
   }
   if (!(fa < 0 !== fb < 0 || fb === 0)) {
+    const edge = up
+      ? `the target is above ${property} at ${b.toPrecision(6)} K, the highest temperature reached (window ${lo} K to ${hi} K: ${ig.basis}, maxTemperatureK ${tMax} K, or where the ${phase} phase ends)`
+      : `the target is below ${property} at ${b.toPrecision(6)} K, the lowest temperature reached (window ${lo} K to ${hi} K: ${ig.basis}, minTemperatureK ${tMin} K, or where the ${phase} phase ends)`;
     throw new SolverError(
       `temperature at given (P, ${property})`,
-      `no bracket of ${property} = ${target} ${unit} at P = ${pressurePa} Pa in the ${phase} phase between ${tMin} K and ${tMax} K; tried ${tried.join("; ")}`,
+      `no bracket of ${property} = ${target} ${unit} at P = ${pressurePa} Pa in the ${phase} phase: ${edge}; tried ${tried.join("; ")}`,
     );
   }
-  const lo = Math.min(a, b);
-  const hi = Math.max(a, b);
-  const root = findRootBrent(f, lo, hi, {
+  const left = Math.min(a, b);
+  const right = Math.max(a, b);
+  const root = findRootBrent(f, left, right, {
     tolerance: options.toleranceK ?? 1e-9,
     maxIterations: options.maxIterations ?? 100,
   });
@@ -181,4 +229,31 @@ export function temperatureAtPS(
   options: InversionOptions = {},
 ): InversionResult {
   return invert(binding, pressurePa, entropyJPerMolK, x, options, "s");
+}
+
+/**
+ * Where the ideal-gas part of the fluid can be evaluated: the intersection of the heat-capacity
+ * ranges of the components present, widened by the ideal-gas layer's extrapolation margin
+ * (idealgas/temperatureRange.ts), within the physical limits (state/physicalLimits.ts).
+ */
+function idealGasWindow(
+  binding: FluidBinding,
+  x: readonly number[],
+): { min: number; max: number; basis: string } {
+  let min = MIN_TEMPERATURE_K;
+  let max = MAX_TEMPERATURE_K;
+  const parts: string[] = [];
+  const pures = binding.idealGas.components;
+  for (let i = 0; i < pures.length; i++) {
+    const range = pures[i].validTemperatureK;
+    if (!(x[i] > 0) || !range) continue;
+    min = Math.max(min, range.min * (1 - DEFAULT_EXTRAPOLATION_MARGIN));
+    max = Math.min(max, range.max * (1 + DEFAULT_EXTRAPOLATION_MARGIN));
+    parts.push(`${pures[i].componentId} ${range.min}-${range.max} K`);
+  }
+  const basis =
+    parts.length > 0
+      ? `ideal-gas heat-capacity ranges ${parts.join(", ")} with a ${DEFAULT_EXTRAPOLATION_MARGIN * 100} % extrapolation margin`
+      : "the physical limits of state/physicalLimits.ts";
+  return { min, max, basis };
 }

@@ -8,7 +8,12 @@
  * it for `{ checkStability: true }`.
  */
 import { R as R_CODATA } from "../constants.js";
-import { OutOfRangeError, PhaseUnavailableError, type ResultWarning } from "../errors.js";
+import {
+  InputError,
+  OutOfRangeError,
+  PhaseUnavailableError,
+  type ResultWarning,
+} from "../errors.js";
 import type { ResidualDerivatives } from "../eos/types.js";
 import type { IdealGasProperties, ReferenceState } from "../idealgas/types.js";
 import { leanIdealGasOf, type IdealGasValues, type LeanIdealGas } from "../idealgas/leanMixture.js";
@@ -17,6 +22,7 @@ import { checkComposition, checkDensity, checkPressure, checkTemperature } from 
 import { densityRootsOf, type DensityRootOptions } from "./findDensityRoots.js";
 import { chooseDensityRoot, emptyRootChoice } from "./rootChoice.js";
 import { phaseLabel } from "./phaseLabel.js";
+import { MAX_PRESSURE_PA } from "./physicalLimits.js";
 import type { FluidBinding, FluidState, PhaseLabel, PhaseRequest } from "./types.js";
 
 /** Options of {@link stateAtTP}. */
@@ -186,6 +192,14 @@ export function stateAtTRho(
   const Rg = model.gasConstant ?? R_CODATA;
   const Z = 1 + residual.aD;
   const P = pressureFromResidual(temperatureK, densityMolPerM3, residual.aD, Rg);
+  if (!(P <= MAX_PRESSURE_PA)) {
+    throw new OutOfRangeError({
+      input: "densityMolPerM3",
+      unit: "mol/m3",
+      validRange: `a density whose pressure is at most ${MAX_PRESSURE_PA} Pa (the limit of physical sense, state/physicalLimits.ts; ${model.info.name} gives P = ${P} Pa at ${temperatureK} K)`,
+      received: densityMolPerM3,
+    });
+  }
   const phase = phaseLabel(model, temperatureK, P, densityMolPerM3, x, "only", Z);
   return finish(binding, temperatureK, densityMolPerM3, x, residual, phase, NO_EXTRA);
 }
@@ -238,7 +252,16 @@ export function stateAtTP(
   checkTemperature(temperatureK);
   checkPressure(pressurePa);
   checkComposition(x, model.info.componentIds.length);
+  if (options === null) options = DEFAULT_OPTIONS;
   const request = options.phase ?? "stable";
+  if (!(request === "stable" || request === "liquid" || request === "vapor")) {
+    throw new InputError({
+      input: "options.phase",
+      unit: "-",
+      validRange: '"stable" or "liquid" or "vapor"',
+      received: request,
+    });
+  }
   const rhos = densityRootsOf(model, temperatureK, pressurePa, x, options.rootSearch);
   const residual = chooseDensityRoot(model, temperatureK, rhos, x, request, choice);
   const count = choice.stableCount;

@@ -16,6 +16,7 @@
  *   Z^3 - (1 + B - uB) Z^2 + (A + wB^2 - uB - uB^2) Z - (AB + wB^2 + wB^3) = 0,
  * u = delta1 + delta2, w = delta1 delta2, A = aP/(RT)^2, B = bP/(RT), keeping roots with Z > B.
  */
+import { pressureFromResidual } from "../residualRelations.js";
 import { R } from "../../constants.js";
 import { OutOfRangeError, type ResultWarning } from "../../errors.js";
 import { realCubicRootsInto } from "../../numerics/cubicRoots.js";
@@ -507,11 +508,11 @@ class CubicModelImpl implements CubicModel {
     x: readonly number[],
   ): readonly ResultWarning[] {
     const kind = this.family.alpha;
-    if (kind === "constant" || kind === "redlich-kwong") return NO_WARNINGS;
     // psi_i at T is in the mixture cache already (the state layer asks after residual() at the
     // same T and x); the cache holds sqrt(a_c,i) psi_i, whose sign is that of psi_i
     this.update(temperatureK, x);
-    let warnings: ResultWarning[] | undefined;
+    let warnings = this.rangeWarnings(temperatureK, _rho, x);
+    if (kind === "constant" || kind === "redlich-kwong") return warnings ?? NO_WARNINGS;
     for (let i = 0; i < this.n; i++) {
       if (!(this.psi[i] > 0)) {
         warnings ??= [];
@@ -523,7 +524,55 @@ class CubicModelImpl implements CubicModel {
     }
     return warnings ?? NO_WARNINGS;
   }
+
+  /**
+   * The stated range of the cubics (state/physicalLimits.ts gives the basis): T from 0.3 Tc of
+   * the heaviest component present to 1500 K, P up to 100 MPa. Uses the mixture cache at (T, x).
+   */
+  private rangeWarnings(
+    temperatureK: number,
+    rho: number,
+    x: readonly number[],
+  ): ResultWarning[] | undefined {
+    let warnings: ResultWarning[] | undefined;
+    let tcMax = 0;
+    let heaviest = 0;
+    for (let i = 0; i < this.n; i++) {
+      if (x[i] > 0 && this.tc[i] > tcMax) {
+        tcMax = this.tc[i];
+        heaviest = i;
+      }
+    }
+    if (temperatureK < 0.3 * tcMax || temperatureK > CUBIC_MAX_TEMPERATURE_K) {
+      warnings = [
+        {
+          code: "outside-validity",
+          message: `T = ${temperatureK} K is outside the stated range of ${this.family.name} (from 0.3 Tc of ${this.components[heaviest].id} = ${(0.3 * tcMax).toPrecision(4)} K to ${CUBIC_MAX_TEMPERATURE_K} K): its alpha function was fitted to vapour pressures at reduced temperatures 0.4 to 1`,
+        },
+      ];
+    }
+    // rho R T / (1 - b rho) bounds P from above (the attractive term is not negative), so the
+    // exact pressure is needed only for dense states
+    const repulsive = (rho * R * temperatureK) / (1 - this.mixB * rho);
+    const pressurePa =
+      repulsive > CUBIC_MAX_PRESSURE_PA
+        ? pressureFromResidual(temperatureK, rho, this.residual(temperatureK, rho, x).aD, R)
+        : repulsive;
+    if (pressurePa > CUBIC_MAX_PRESSURE_PA) {
+      warnings ??= [];
+      warnings.push({
+        code: "outside-validity",
+        message: `P = ${pressurePa.toPrecision(6)} Pa is above the stated range of ${this.family.name} (up to 100 MPa): cubic equations are fitted to vapour pressures and are not meant for such pressures`,
+      });
+    }
+    return warnings;
+  }
 }
+
+/** Highest temperature of the cubics' stated range, K (state/physicalLimits.ts). */
+const CUBIC_MAX_TEMPERATURE_K = 1500;
+/** Highest pressure of the cubics' stated range, Pa (state/physicalLimits.ts). */
+const CUBIC_MAX_PRESSURE_PA = 1e8;
 
 /**
  * Builds a cubic equation of state for these components.

@@ -22,6 +22,7 @@
  * g_k = d alpha_r / dx_k = -aT dln Tcm/dx_k + aD (dln Vcm/dx_k + 0.085 omega_k / Zcm)
  *       + omega_k (alpha_R - alpha_0)/omega_R.
  */
+import { pressureFromResidual } from "../residualRelations.js";
 import table from "../data/leeKesler.json";
 import { R } from "../../constants.js";
 import type { ResultWarning } from "../../errors.js";
@@ -240,7 +241,14 @@ export function createLeeKeslerModel(
           message: `Lee-Kesler was fitted for 0.3 <= Tr <= 4; this state has Tr = ${tr.toPrecision(4)} (Tc of the mixture ${c.temperatureK.toPrecision(5)} K)`,
         });
       }
-      void rho;
+      // the fitted pressure range, Pr <= 10 (Lee and Kesler 1975; state/physicalLimits.ts)
+      const pr = pressureFromResidual(T, rho, model.residual(T, rho, x).aD, R) / c.pressurePa;
+      if (pr > 10) {
+        warnings.push({
+          code: "outside-validity",
+          message: `Lee-Kesler was fitted for reduced pressures up to 10; this state has Pr = ${pr.toPrecision(4)} (Pc of the mixture ${c.pressurePa.toPrecision(5)} Pa)`,
+        });
+      }
       return warnings;
     },
   };
