@@ -68,6 +68,20 @@ describe("Heidemann-Khalil critical points (Peng-Robinson)", () => {
     expect(mid.temperatureK).toBeLessThan(getComponent("n-heptane").criticalTemperatureK);
   });
 
+  it("ethane/n-heptane on the heptane-rich side: no spurious negative-pressure root", () => {
+    // a critical point of a liquid-vapour pair has P > 0 and, for this type I system, a
+    // temperature between the pure critical temperatures (Kay 1938, as above); the scan once
+    // bracketed a sign change of the cubic form near 130 K with P < -90 MPa here
+    const f = defineFluid({ components: ["ethane", "n-heptane"], model: "peng-robinson" });
+    for (const x of [0.3, 0.4, 0.5]) {
+      const c = mixtureCriticalPoint(f.model, [x, 1 - x]);
+      expect(c.pressurePa).toBeGreaterThan(0);
+      expect(c.temperatureK).toBeGreaterThan(getComponent("ethane").criticalTemperatureK);
+      expect(c.temperatureK).toBeLessThan(getComponent("n-heptane").criticalTemperatureK);
+      expect(Math.abs(c.residual.eigenvalue)).toBeLessThan(1e-8);
+    }
+  });
+
   it("methane/ethane: the critical temperature falls monotonically with methane", () => {
     // a type I system with a continuous locus between the pure critical points (e.g. Michelsen
     // & Mollerup, Thermodynamic Models, 2nd ed. (2007), ch. 12)

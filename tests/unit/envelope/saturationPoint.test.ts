@@ -149,11 +149,20 @@ describe("published binary data (Peng-Robinson with the table's k_ij)", () => {
 
 describe("water: a metastable point is flagged", () => {
   it("the bubble point of a wet hydrocarbon liquid carries a phase-split warning", () => {
-    // propane with 10 % water (PR, table k_ij) at 300 K: water and liquid propane are nearly
-    // immiscible (mutual solubilities below 0.1 mol %, e.g. Kobayashi & Katz, Ind. Eng. Chem. 45
-    // (1953) 440, from memory), so one liquid of this composition splits and a vapour-liquid
-    // point on its bubble line is metastable: it is returned (verified) with the warning
-    const wet = defineFluid({ components: ["propane", "water"], model: "peng-robinson" });
+    // propane with 10 % water (PR, k_ij = 0 given explicitly) at 300 K: water and liquid propane
+    // are nearly immiscible (mutual solubilities below 0.1 mol %, e.g. Kobayashi & Katz, Ind.
+    // Eng. Chem. 45 (1953) 440, from memory), so one liquid of this composition splits and a
+    // vapour-liquid point on its bubble line is metastable: it is returned (verified) with the
+    // warning. k_ij = 0 keeps the 10 % liquid the feed's root at its bubble pressure; with the
+    // table's 0.55 (a non-aqueous-phase value) see the next test.
+    const wet = defineFluid({
+      components: ["propane", "water"],
+      model: "peng-robinson",
+      kij: [
+        [0, 0],
+        [0, 0],
+      ],
+    });
     const b = saturationPointAtTemperature(wet, 300, [0.9, 0.1]);
     expect(b.kind).toBe("bubble");
     expect(lnFugacityGap(wet, b)).toBeLessThan(1e-9);
@@ -162,6 +171,18 @@ describe("water: a metastable point is flagged", () => {
     );
     // a dry hydrocarbon pair has no such warning
     expect(bubblePointAtTemperature(pentaneHexane, 320, [0.4, 0.6]).warnings).toEqual([]);
+  });
+  it("with the table's propane/water k_ij the 10 % water feed is a gas: its point is a dew point", () => {
+    // k_ij = 0.55 (kij.json) makes a liquid with 10 % water so unfavourable that the feed's
+    // stable root at its saturation pressure is the gas; the incipient phase is a propane-rich
+    // liquid, denser than the feed, so the point is labelled a dew point (saturationPoint.ts)
+    const wet = defineFluid({ components: ["propane", "water"], model: "peng-robinson" });
+    const d = saturationPointAtTemperature(wet, 300, [0.9, 0.1]);
+    expect(lnFugacityGap(wet, d)).toBeLessThan(1e-9);
+    expect(d.kind).toBe("dew");
+    expect(d.liquid.densityMolPerM3).toBeGreaterThan(d.vapor.densityMolPerM3);
+    d.liquid.x.forEach((v, i) => expect(v).toBeCloseTo(d.incipient![i], 12));
+    expect(d.liquid.x[0]).toBeGreaterThan(0.9);
   });
 });
 

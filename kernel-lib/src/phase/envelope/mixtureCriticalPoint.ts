@@ -12,12 +12,15 @@
  *   n F_ij = n (d ln phi_i / dn_j)_{T,P} - 1 - v_i v_j (dP/dV)_{T,n} / RT.
  * Nested one-dimensional solves (Brent): for a density rho, T*(rho) is the highest temperature
  * where lambda = 0 (lambda > 0 above it); then C(rho) at T*(rho) is brought to zero in ln rho,
- * bracketed by a scan outward from the pseudo-critical density (Kay's rule or the model's own).
+ * bracketed by a scan outward from the pseudo-critical density (Kay's rule or the model's own);
+ * the scan stops in a direction at the first density whose spinodal pressure is not positive (a
+ * sign change of C there is no physical critical point) and the result must have P > 0.
  * The point found is not tested for global stability (a critical point inside a three-phase
  * region would be metastable).
  */
 import { PhaseUnavailableError, SolverError, type ResultWarning } from "../../errors.js";
 import { R as R_CODATA } from "../../constants.js";
+import { pressureFromResidual } from "../../eos/residualRelations.js";
 import type { ModelInfo, ResidualModel } from "../../eos/types.js";
 import { findRootBrent } from "../../numerics/brent.js";
 import { symmetricEigen } from "../../numerics/symmetricEigen.js";
@@ -162,10 +165,16 @@ export function mixtureCriticalPoint(
     lastT = t;
     return t;
   };
+  const Rg = model.gasConstant ?? R_CODATA;
+  // pressure on the spinodal at (T, rho): a critical point needs P > 0
+  const pressureAt = (T: number, rho: number): number =>
+    pressureFromResidual(T, rho, model.residual(T, rho, z, {}).aD, Rg);
+  let lastSpinodalP = NaN;
   const cubicAt = (lnRho: number): number => {
     const rho = Math.exp(lnRho);
     const T = spinodalT(rho);
     if (T === undefined) throw new PhaseUnavailableError(`no spinodal at rho = ${rho} mol/m3`);
+    lastSpinodalP = pressureAt(T, rho);
     const { u } = smallestEigen(model, T, rho, z, present);
     const dn = new Array<number>(n).fill(0);
     present.forEach((i, k) => (dn[i] = Math.sqrt(z[i]) * u[k]));
@@ -208,6 +217,10 @@ export function mixtureCriticalPoint(
           break;
         }
         tried.push(Math.exp(l));
+        // beyond the first density whose spinodal pressure is not positive the scan stops in
+        // this direction: a sign change of C out there is no physical critical point (it gave
+        // P < -90 MPa near 130 K for ethane/n-heptane), and the other direction is tried
+        if (!(lastSpinodalP > 0)) break;
         if (c * c0 <= 0) bracket = dir > 0 ? [lPrev, l] : [l, lPrev];
         lPrev = l;
         c0 = c;
@@ -228,9 +241,7 @@ export function mixtureCriticalPoint(
   if (T === undefined) {
     throw new SolverError(METHOD, `the spinodal was lost at the converged density ${rho} mol/m3`);
   }
-  const Rg = model.gasConstant ?? R_CODATA;
-  const r = model.residual(T, rho, z, {});
-  const P = rho * Rg * T * (1 + r.aD);
+  const P = pressureAt(T, rho);
   const eig = smallestEigen(model, T, rho, z, present).lambda;
   const cubic = cubicAt(root.value);
   if (!(Math.abs(eig) < 1e-8 && P > 0)) {
