@@ -9,9 +9,11 @@
  *     K_i = phi_i(z) / phi_i(w) (at the trial's stationary point W_i / z_i): successive
  *     substitution with dominant-eigenvalue acceleration, then Newton on the Gibbs energy
  *     (twoPhaseSplit.ts);
- *  3. the phase of largest amount of the converged split is tested for stability; a split found
- *     there adds a third phase (threePhaseSplit.ts), seeded with the trial composition; a phase
- *     that vanishes sends the flash back to two phases from the survivors;
+ *  3. every phase of the converged split is tested for stability with the same trials (Wilson
+ *     plus nearly pure trials of every present component); a split found in any of them adds a
+ *     third phase (threePhaseSplit.ts), seeded with the trial composition of lowest tm; a phase
+ *     that vanishes sends the flash back to two phases from the survivors; a two-phase result
+ *     that stays unstable is a SolverError, never returned;
  *  4. every result is verified (verifyEquilibrium.ts): equal fugacity, Gibbs energy below the
  *     feed, material balance, no trivial solution, labels by density. Anything else is a
  *     SolverError naming the state and what was tried.
@@ -48,9 +50,9 @@ export interface FlashOptions {
   /**
    * Nearly pure trial phases added to the Wilson starts of every stability test (aqueous phases
    * and liquid-liquid splits that Wilson's K-factors miss). "auto" (default): every present
-   * component when at most four are present; otherwise water, if present (each trial costs about
-   * as much as a Wilson trial, and many-component hydrocarbon mixtures split as vapour-liquid,
-   * which the Wilson trials find). "none": Wilson starts only. Or component indices.
+   * component (each trial costs about as much as a Wilson trial; fewer trials let a five-component
+   * feed with two liquids pass as one phase). Component indices: those as well as every present
+   * component. "none": Wilson starts only (faster; a missed liquid phase is then possible).
    */
   extraTrials?: "auto" | "none" | readonly number[];
 }
@@ -73,32 +75,15 @@ export function prepareFeed(z: readonly number[]): { z: number[]; present: numbe
   return { z: out, present };
 }
 
-/** The extra nearly pure trials of the stability tests (see FlashOptions.extraTrials). */
-function extraTrialsOf(
-  binding: FluidBinding,
-  present: readonly number[],
-  options: FlashOptions,
-): readonly number[] {
+/**
+ * The extra nearly pure trials of the stability tests (see FlashOptions.extraTrials): every
+ * present component, plus the given indices; none for "none".
+ */
+function extraTrialsOf(present: readonly number[], options: FlashOptions): readonly number[] {
   const rule = options.extraTrials ?? "auto";
   if (rule === "none") return [];
-  if (rule !== "auto") return rule;
-  if (present.length <= 4) return present;
-  const ids = binding.model.info.componentIds;
-  const constants =
-    options.stability?.constants ??
-    (binding.model as { components?: readonly { criticalTemperatureK: number }[] }).components;
-  const out: number[] = [];
-  const water = present.find((i) => ids[i] === "water");
-  if (water !== undefined) out.push(water);
-  if (constants !== undefined) {
-    let heaviest = present[0];
-    for (const i of present) {
-      if (constants[i].criticalTemperatureK > constants[heaviest].criticalTemperatureK)
-        heaviest = i;
-    }
-    if (heaviest !== water) out.push(heaviest);
-  }
-  return out;
+  if (rule === "auto") return present;
+  return [...new Set([...present, ...rule])];
 }
 
 /**
@@ -163,7 +148,7 @@ export function flashTP(
   if (present.length < 2) return single(undefined, []);
   const stabilityOptions: StabilityOptions = {
     ...options.stability,
-    extraTrials: extraTrialsOf(binding, present, options),
+    extraTrials: extraTrialsOf(present, options),
   };
   const stability = stabilityAtTP(model, T, P, zz, stabilityOptions);
   if (stability.stable) return single(stability, stability.warnings);
@@ -203,51 +188,66 @@ export function flashTP(
   }
   let method = METHOD_2;
   let finalStability: StabilityResult | undefined;
-  if (maxPhases >= 3) {
-    for (let round = 0; round < 3; round++) {
-      let largest = phases[0];
-      for (const p of phases) if (p.amount > largest.amount) largest = p;
-      const test = stabilityAtTP(model, T, P, largest.x, stabilityOptions);
-      finalStability = test;
-      if (test.stable || phases.length >= 3) break;
-      const w = test.incipientComposition!;
-      const start: WorkingPhase[] = phases.map((p) => ({ ...p, amount: p.amount * 0.95 }));
-      start.push({ x: w.slice(), lnPhi: [], densityMolPerM3: NaN, amount: 0.05 });
-      const out = convergeMultiphase(model, T, P, zz, present, start, tolerance, maxIterations * 3);
-      iterations += out.iterations;
-      method = METHOD_3;
-      if (out.converged) {
-        phases = out.phases;
-        finalStability = test;
-        break;
-      }
-      if (out.vanished && out.phases.length === 2) {
-        // back to two phases from the survivors
-        const [a, b] = out.phases;
-        const lnK = new Array<number>(zz.length).fill(0);
-        for (const i of present) lnK[i] = a.lnPhi[i] - b.lnPhi[i];
-        const two = convergeTwoPhase(model, T, P, zz, present, lnK, splitOptions);
-        iterations += two.iterations;
-        if (!two.converged) {
-          throw new SolverError(
-            "isothermal flash",
-            `at ${where()}: the three-phase attempt lost a phase and the two-phase split from the survivors did not converge (${two.reason})`,
-          );
-        }
-        phases = two.phases;
-        continue;
-      }
+  // Post-check of the returned phases: every phase (not only the largest), with Wilson trials plus
+  // nearly pure trials of every present component (Wilson trials alone miss liquid-liquid splits,
+  // e.g. an H2S-rich beside a decane-rich liquid at 185 K); the most unstable phase seeds the next.
+  const testPhases = (ps: readonly WorkingPhase[]): StabilityResult => {
+    let worst: StabilityResult | undefined;
+    for (const p of ps) {
+      const t = stabilityAtTP(model, T, P, p.x, stabilityOptions);
+      if (worst === undefined || t.minimumTangentPlaneDistance < worst.minimumTangentPlaneDistance)
+        worst = t;
+    }
+    return worst!;
+  };
+  for (let round = 0; round < 3; round++) {
+    if (phases.length >= 3) break;
+    const test = testPhases(phases);
+    finalStability = test;
+    if (test.stable) break;
+    if (maxPhases < 3) {
       throw new SolverError(
         "isothermal flash",
-        `at ${where()}: the phase of largest amount of the two-phase split is unstable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}), and the three-phase split ${out.reason ?? "failed"}`,
+        `at ${where()}: the converged two-phase split is not stable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}) and options.maxPhases = 2 forbids a third phase`,
       );
     }
-    if (finalStability !== undefined && !finalStability.stable && phases.length < 3) {
-      throw new SolverError(
-        "isothermal flash",
-        `at ${where()}: the converged two-phase split is not stable (tm = ${finalStability.minimumTangentPlaneDistance.toExponential(3)}) and no three-phase split was found`,
-      );
+    const w = test.incipientComposition!;
+    const start: WorkingPhase[] = phases.map((p) => ({ ...p, amount: p.amount * 0.95 }));
+    start.push({ x: w.slice(), lnPhi: [], densityMolPerM3: NaN, amount: 0.05 });
+    const out = convergeMultiphase(model, T, P, zz, present, start, tolerance, maxIterations * 3);
+    iterations += out.iterations;
+    method = METHOD_3;
+    if (out.converged) {
+      phases = out.phases;
+      break;
     }
+    if (out.vanished && out.phases.length === 2) {
+      // back to two phases from the survivors
+      const [a, b] = out.phases;
+      const lnK = new Array<number>(zz.length).fill(0);
+      for (const i of present) lnK[i] = a.lnPhi[i] - b.lnPhi[i];
+      const two = convergeTwoPhase(model, T, P, zz, present, lnK, splitOptions);
+      iterations += two.iterations;
+      if (!two.converged) {
+        throw new SolverError(
+          "isothermal flash",
+          `at ${where()}: the three-phase attempt lost a phase and the two-phase split from the survivors did not converge (${two.reason})`,
+        );
+      }
+      phases = two.phases;
+      finalStability = undefined;
+      continue;
+    }
+    throw new SolverError(
+      "isothermal flash",
+      `at ${where()}: a phase of the two-phase split is unstable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}), and the three-phase split ${out.reason ?? "failed"}`,
+    );
+  }
+  if (phases.length < 3 && (finalStability === undefined || !finalStability.stable)) {
+    throw new SolverError(
+      "isothermal flash",
+      `at ${where()}: the converged two-phase split is not stable (tm = ${finalStability?.minimumTangentPlaneDistance.toExponential(3) ?? "not tested after the last split"}) and no three-phase split was found`,
+    );
   }
   const warnings: ResultWarning[] = [];
   return assembleEquilibrium(
