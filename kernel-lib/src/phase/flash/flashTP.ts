@@ -4,14 +4,16 @@
  * Phase Equilib. 9 (1982) 1-19 and 21-40; M. L. Michelsen and J. M. Mollerup, Thermodynamic
  * Models: Fundamentals and Computational Aspects, 2nd ed. 2007, ch. 9-11):
  *  1. the tangent-plane test of the feed (phase/stability.ts), from Wilson's K-factors plus nearly
- *     pure trials (FlashOptions.extraTrials); stable: one phase, returned with the verdict;
+ *     pure trials (FlashOptions.extraTrials); stable: tested again with a nearly pure trial of
+ *     every present component, and if still stable, one phase, returned with the verdict;
  *  2. otherwise each trial that found tm < 0, lowest tm first, seeds a two-phase split with
  *     K_i = phi_i(z) / phi_i(w) (at the trial's stationary point W_i / z_i): successive
  *     substitution with dominant-eigenvalue acceleration, then Newton on the Gibbs energy
  *     (twoPhaseSplit.ts);
- *  3. every phase of the converged split is tested for stability with the same trials (Wilson
- *     plus nearly pure trials of every present component); a split found in any of them adds a
- *     third phase (threePhaseSplit.ts), seeded with the trial composition of lowest tm; a phase
+ *  3. every phase of the converged split is tested for stability (Wilson trials; the phase of
+ *     largest amount also with nearly pure trials of every present component: at equal fugacity
+ *     all phases share one tangent plane, so those fixed starts need one phase); a split found
+ *     in any of them adds a third phase (threePhaseSplit.ts), seeded with the trial composition of lowest tm; a phase
  *     that vanishes sends the flash back to two phases from the survivors; a two-phase result
  *     that stays unstable is a SolverError, never returned;
  *  4. every result is verified (verifyEquilibrium.ts): equal fugacity, Gibbs energy below the
@@ -49,10 +51,12 @@ export interface FlashOptions {
   stability?: StabilityOptions;
   /**
    * Nearly pure trial phases added to the Wilson starts of every stability test (aqueous phases
-   * and liquid-liquid splits that Wilson's K-factors miss). "auto" (default): every present
-   * component (each trial costs about as much as a Wilson trial; fewer trials let a five-component
-   * feed with two liquids pass as one phase). Component indices: those as well as every present
-   * component. "none": Wilson starts only (faster; a missed liquid phase is then possible).
+   * and liquid-liquid splits that Wilson's K-factors miss). "auto" (default): the first test of
+   * the feed tries every present component when at most four are present, otherwise water and
+   * the heaviest component; every answer is then verified with every present component (a feed
+   * found stable is tested again, and the phase of largest amount of a split is tested with all).
+   * Component indices: those in the first test, every present component in the verification.
+   * "none": Wilson starts only (faster; a missed liquid phase is then possible).
    */
   extraTrials?: "auto" | "none" | readonly number[];
 }
@@ -76,10 +80,39 @@ export function prepareFeed(z: readonly number[]): { z: number[]; present: numbe
 }
 
 /**
- * The extra nearly pure trials of the stability tests (see FlashOptions.extraTrials): every
- * present component, plus the given indices; none for "none".
+ * The nearly pure trials of the first test of the feed (see FlashOptions.extraTrials): with
+ * "auto", every present component when at most four are present, otherwise water and the
+ * heaviest component (a feed found stable by these is tested again with every component).
  */
-function extraTrialsOf(present: readonly number[], options: FlashOptions): readonly number[] {
+function feedTrialsOf(
+  binding: FluidBinding,
+  present: readonly number[],
+  options: FlashOptions,
+): readonly number[] {
+  const rule = options.extraTrials ?? "auto";
+  if (rule === "none") return [];
+  if (rule !== "auto") return rule;
+  if (present.length <= 4) return present;
+  const ids = binding.model.info.componentIds;
+  const constants =
+    options.stability?.constants ??
+    (binding.model as { components?: readonly { criticalTemperatureK: number }[] }).components;
+  const out: number[] = [];
+  const water = present.find((i) => ids[i] === "water");
+  if (water !== undefined) out.push(water);
+  if (constants !== undefined) {
+    let heaviest = present[0];
+    for (const i of present) {
+      if (constants[i].criticalTemperatureK > constants[heaviest].criticalTemperatureK)
+        heaviest = i;
+    }
+    if (heaviest !== water) out.push(heaviest);
+  }
+  return out;
+}
+
+/** The nearly pure trials that verify a result: every present component (none for "none"). */
+function checkTrialsOf(present: readonly number[], options: FlashOptions): readonly number[] {
   const rule = options.extraTrials ?? "auto";
   if (rule === "none") return [];
   if (rule === "auto") return present;
@@ -146,11 +179,14 @@ export function flashTP(
     );
   };
   if (present.length < 2) return single(undefined, []);
-  const stabilityOptions: StabilityOptions = {
-    ...options.stability,
-    extraTrials: extraTrialsOf(present, options),
-  };
-  const stability = stabilityAtTP(model, T, P, zz, stabilityOptions);
+  const feedTrials = feedTrialsOf(binding, present, options);
+  const checkTrials = checkTrialsOf(present, options);
+  const stabilityOptions: StabilityOptions = { ...options.stability, extraTrials: checkTrials };
+  let stability = stabilityAtTP(model, T, P, zz, { ...options.stability, extraTrials: feedTrials });
+  if (stability.stable && checkTrials.some((i) => !feedTrials.includes(i))) {
+    // a one-phase answer is verified with a nearly pure trial of every present component
+    stability = stabilityAtTP(model, T, P, zz, stabilityOptions);
+  }
   if (stability.stable) return single(stability, stability.warnings);
 
   const splitOptions = { tolerance, newtonAfter, maxIterations };
@@ -191,10 +227,15 @@ export function flashTP(
   // Post-check of the returned phases: every phase (not only the largest), with Wilson trials plus
   // nearly pure trials of every present component (Wilson trials alone miss liquid-liquid splits,
   // e.g. an H2S-rich beside a decane-rich liquid at 185 K); the most unstable phase seeds the next.
+  // At a converged split the phases share one tangent plane (equal fugacities), so tm(w) is the
+  // same function from every phase: the nearly pure trials (fixed starts) need one phase only.
+  const wilsonOnly: StabilityOptions = { ...options.stability, extraTrials: [] };
   const testPhases = (ps: readonly WorkingPhase[]): StabilityResult => {
     let worst: StabilityResult | undefined;
+    let largest = ps[0];
+    for (const p of ps) if (p.amount > largest.amount) largest = p;
     for (const p of ps) {
-      const t = stabilityAtTP(model, T, P, p.x, stabilityOptions);
+      const t = stabilityAtTP(model, T, P, p.x, p === largest ? stabilityOptions : wilsonOnly);
       if (worst === undefined || t.minimumTangentPlaneDistance < worst.minimumTangentPlaneDistance)
         worst = t;
     }
