@@ -4,14 +4,18 @@
  * Phase Equilib. 9 (1982) 1-19 and 21-40; M. L. Michelsen and J. M. Mollerup, Thermodynamic
  * Models: Fundamentals and Computational Aspects, 2nd ed. 2007, ch. 9-11):
  *  1. the tangent-plane test of the feed (phase/stability.ts), from Wilson's K-factors plus nearly
- *     pure trials (FlashOptions.extraTrials); stable: one phase, returned with the verdict;
+ *     pure trials (FlashOptions.extraTrials); stable: tested again with a nearly pure trial of
+ *     every present component, and if still stable, one phase, returned with the verdict;
  *  2. otherwise each trial that found tm < 0, lowest tm first, seeds a two-phase split with
  *     K_i = phi_i(z) / phi_i(w) (at the trial's stationary point W_i / z_i): successive
  *     substitution with dominant-eigenvalue acceleration, then Newton on the Gibbs energy
  *     (twoPhaseSplit.ts);
- *  3. the phase of largest amount of the converged split is tested for stability; a split found
- *     there adds a third phase (threePhaseSplit.ts), seeded with the trial composition; a phase
- *     that vanishes sends the flash back to two phases from the survivors;
+ *  3. every phase of the converged split is tested for stability (Wilson trials; the phase of
+ *     largest amount also with nearly pure trials of every present component: at equal fugacity
+ *     all phases share one tangent plane, so those fixed starts need one phase); a split found
+ *     in any of them adds a third phase (threePhaseSplit.ts), seeded with the trial composition of lowest tm; a phase
+ *     that vanishes sends the flash back to two phases from the survivors; a two-phase result
+ *     that stays unstable is a SolverError, never returned;
  *  4. every result is verified (verifyEquilibrium.ts): equal fugacity, Gibbs energy below the
  *     feed, material balance, no trivial solution, labels by density. Anything else is a
  *     SolverError naming the state and what was tried.
@@ -47,10 +51,12 @@ export interface FlashOptions {
   stability?: StabilityOptions;
   /**
    * Nearly pure trial phases added to the Wilson starts of every stability test (aqueous phases
-   * and liquid-liquid splits that Wilson's K-factors miss). "auto" (default): every present
-   * component when at most four are present; otherwise water, if present (each trial costs about
-   * as much as a Wilson trial, and many-component hydrocarbon mixtures split as vapour-liquid,
-   * which the Wilson trials find). "none": Wilson starts only. Or component indices.
+   * and liquid-liquid splits that Wilson's K-factors miss). "auto" (default): the first test of
+   * the feed tries every present component when at most four are present, otherwise water and
+   * the heaviest component; every answer is then verified with every present component (a feed
+   * found stable is tested again, and the phase of largest amount of a split is tested with all).
+   * Component indices: those in the first test, every present component in the verification.
+   * "none": Wilson starts only (faster; a missed liquid phase is then possible).
    */
   extraTrials?: "auto" | "none" | readonly number[];
 }
@@ -73,8 +79,12 @@ export function prepareFeed(z: readonly number[]): { z: number[]; present: numbe
   return { z: out, present };
 }
 
-/** The extra nearly pure trials of the stability tests (see FlashOptions.extraTrials). */
-function extraTrialsOf(
+/**
+ * The nearly pure trials of the first test of the feed (see FlashOptions.extraTrials): with
+ * "auto", every present component when at most four are present, otherwise water and the
+ * heaviest component (a feed found stable by these is tested again with every component).
+ */
+function feedTrialsOf(
   binding: FluidBinding,
   present: readonly number[],
   options: FlashOptions,
@@ -99,6 +109,14 @@ function extraTrialsOf(
     if (heaviest !== water) out.push(heaviest);
   }
   return out;
+}
+
+/** The nearly pure trials that verify a result: every present component (none for "none"). */
+function checkTrialsOf(present: readonly number[], options: FlashOptions): readonly number[] {
+  const rule = options.extraTrials ?? "auto";
+  if (rule === "none") return [];
+  if (rule === "auto") return present;
+  return [...new Set([...present, ...rule])];
 }
 
 /**
@@ -161,11 +179,14 @@ export function flashTP(
     );
   };
   if (present.length < 2) return single(undefined, []);
-  const stabilityOptions: StabilityOptions = {
-    ...options.stability,
-    extraTrials: extraTrialsOf(binding, present, options),
-  };
-  const stability = stabilityAtTP(model, T, P, zz, stabilityOptions);
+  const feedTrials = feedTrialsOf(binding, present, options);
+  const checkTrials = checkTrialsOf(present, options);
+  const stabilityOptions: StabilityOptions = { ...options.stability, extraTrials: checkTrials };
+  let stability = stabilityAtTP(model, T, P, zz, { ...options.stability, extraTrials: feedTrials });
+  if (stability.stable && checkTrials.some((i) => !feedTrials.includes(i))) {
+    // a one-phase answer is verified with a nearly pure trial of every present component
+    stability = stabilityAtTP(model, T, P, zz, stabilityOptions);
+  }
   if (stability.stable) return single(stability, stability.warnings);
 
   const splitOptions = { tolerance, newtonAfter, maxIterations };
@@ -203,51 +224,71 @@ export function flashTP(
   }
   let method = METHOD_2;
   let finalStability: StabilityResult | undefined;
-  if (maxPhases >= 3) {
-    for (let round = 0; round < 3; round++) {
-      let largest = phases[0];
-      for (const p of phases) if (p.amount > largest.amount) largest = p;
-      const test = stabilityAtTP(model, T, P, largest.x, stabilityOptions);
-      finalStability = test;
-      if (test.stable || phases.length >= 3) break;
-      const w = test.incipientComposition!;
-      const start: WorkingPhase[] = phases.map((p) => ({ ...p, amount: p.amount * 0.95 }));
-      start.push({ x: w.slice(), lnPhi: [], densityMolPerM3: NaN, amount: 0.05 });
-      const out = convergeMultiphase(model, T, P, zz, present, start, tolerance, maxIterations * 3);
-      iterations += out.iterations;
-      method = METHOD_3;
-      if (out.converged) {
-        phases = out.phases;
-        finalStability = test;
-        break;
-      }
-      if (out.vanished && out.phases.length === 2) {
-        // back to two phases from the survivors
-        const [a, b] = out.phases;
-        const lnK = new Array<number>(zz.length).fill(0);
-        for (const i of present) lnK[i] = a.lnPhi[i] - b.lnPhi[i];
-        const two = convergeTwoPhase(model, T, P, zz, present, lnK, splitOptions);
-        iterations += two.iterations;
-        if (!two.converged) {
-          throw new SolverError(
-            "isothermal flash",
-            `at ${where()}: the three-phase attempt lost a phase and the two-phase split from the survivors did not converge (${two.reason})`,
-          );
-        }
-        phases = two.phases;
-        continue;
-      }
+  // Post-check of the returned phases: every phase (not only the largest), with Wilson trials plus
+  // nearly pure trials of every present component (Wilson trials alone miss liquid-liquid splits,
+  // e.g. an H2S-rich beside a decane-rich liquid at 185 K); the most unstable phase seeds the next.
+  // At a converged split the phases share one tangent plane (equal fugacities), so tm(w) is the
+  // same function from every phase: the nearly pure trials (fixed starts) need one phase only.
+  const wilsonOnly: StabilityOptions = { ...options.stability, extraTrials: [] };
+  const testPhases = (ps: readonly WorkingPhase[]): StabilityResult => {
+    let worst: StabilityResult | undefined;
+    let largest = ps[0];
+    for (const p of ps) if (p.amount > largest.amount) largest = p;
+    for (const p of ps) {
+      const t = stabilityAtTP(model, T, P, p.x, p === largest ? stabilityOptions : wilsonOnly);
+      if (worst === undefined || t.minimumTangentPlaneDistance < worst.minimumTangentPlaneDistance)
+        worst = t;
+    }
+    return worst!;
+  };
+  for (let round = 0; round < 3; round++) {
+    if (phases.length >= 3) break;
+    const test = testPhases(phases);
+    finalStability = test;
+    if (test.stable) break;
+    if (maxPhases < 3) {
       throw new SolverError(
         "isothermal flash",
-        `at ${where()}: the phase of largest amount of the two-phase split is unstable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}), and the three-phase split ${out.reason ?? "failed"}`,
+        `at ${where()}: the converged two-phase split is not stable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}) and options.maxPhases = 2 forbids a third phase`,
       );
     }
-    if (finalStability !== undefined && !finalStability.stable && phases.length < 3) {
-      throw new SolverError(
-        "isothermal flash",
-        `at ${where()}: the converged two-phase split is not stable (tm = ${finalStability.minimumTangentPlaneDistance.toExponential(3)}) and no three-phase split was found`,
-      );
+    const w = test.incipientComposition!;
+    const start: WorkingPhase[] = phases.map((p) => ({ ...p, amount: p.amount * 0.95 }));
+    start.push({ x: w.slice(), lnPhi: [], densityMolPerM3: NaN, amount: 0.05 });
+    const out = convergeMultiphase(model, T, P, zz, present, start, tolerance, maxIterations * 3);
+    iterations += out.iterations;
+    method = METHOD_3;
+    if (out.converged) {
+      phases = out.phases;
+      break;
     }
+    if (out.vanished && out.phases.length === 2) {
+      // back to two phases from the survivors
+      const [a, b] = out.phases;
+      const lnK = new Array<number>(zz.length).fill(0);
+      for (const i of present) lnK[i] = a.lnPhi[i] - b.lnPhi[i];
+      const two = convergeTwoPhase(model, T, P, zz, present, lnK, splitOptions);
+      iterations += two.iterations;
+      if (!two.converged) {
+        throw new SolverError(
+          "isothermal flash",
+          `at ${where()}: the three-phase attempt lost a phase and the two-phase split from the survivors did not converge (${two.reason})`,
+        );
+      }
+      phases = two.phases;
+      finalStability = undefined;
+      continue;
+    }
+    throw new SolverError(
+      "isothermal flash",
+      `at ${where()}: a phase of the two-phase split is unstable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}), and the three-phase split ${out.reason ?? "failed"}`,
+    );
+  }
+  if (phases.length < 3 && (finalStability === undefined || !finalStability.stable)) {
+    throw new SolverError(
+      "isothermal flash",
+      `at ${where()}: the converged two-phase split is not stable (tm = ${finalStability?.minimumTangentPlaneDistance.toExponential(3) ?? "not tested after the last split"}) and no three-phase split was found`,
+    );
   }
   const warnings: ResultWarning[] = [];
   return assembleEquilibrium(
