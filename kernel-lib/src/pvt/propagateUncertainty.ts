@@ -19,34 +19,42 @@ export interface PropagationResult {
   samples: number;
 }
 
-/** Monte Carlo propagation (JCGM 101): `samples` seeded replicates of the pressures through `evaluate`. */
+/**
+ * Monte Carlo propagation (JCGM 101): `samples` seeded replicates of the pressures through `evaluate`.
+ * `evaluate` gets one reused buffer of replicate pressures and must not keep it; its output is read
+ * before the next call, so it may reuse its own output buffer too.
+ */
 export function monteCarloPropagation(
-  evaluate: (pressuresPa: readonly number[]) => ArrayLike<number>,
+  evaluate: (pressuresPa: ArrayLike<number>) => ArrayLike<number>,
   pressuresPa: readonly number[],
   sigmaPa: readonly number[],
   samples: number,
   seed: number,
 ): PropagationResult {
   const rng = seededRandom(seed);
-  let mean: number[] | undefined;
-  let m2: number[] | undefined;
+  const n = pressuresPa.length;
+  const p = new Float64Array(n);
+  let mean: Float64Array | undefined;
+  let m2: Float64Array | undefined;
   for (let s = 1; s <= samples; s++) {
-    const p = pressuresPa.map((v, i) => v + sigmaPa[i] * rng.normal());
+    for (let i = 0; i < n; i++) p[i] = pressuresPa[i] + sigmaPa[i] * rng.normal();
     const out = evaluate(p);
     if (!mean || !m2) {
-      mean = Array.from(out);
-      m2 = new Array<number>(out.length).fill(0);
+      mean = Float64Array.from(out);
+      m2 = new Float64Array(out.length);
       continue;
     }
     // Welford's running variance (Welford, Technometrics 4 (1962) 419).
     for (let k = 0; k < out.length; k++) {
-      const d = out[k] - mean[k];
-      mean[k] = mean[k] + d / s;
-      m2[k] = m2[k] + d * (out[k] - mean[k]);
+      const o = out[k];
+      const d = o - mean[k];
+      const mk = mean[k] + d / s;
+      mean[k] = mk;
+      m2[k] = m2[k] + d * (o - mk);
     }
   }
   return {
-    standardUncertainty: (m2 ?? []).map((v) => Math.sqrt(v / Math.max(samples - 1, 1))),
+    standardUncertainty: m2 ? Array.from(m2, (v) => Math.sqrt(v / Math.max(samples - 1, 1))) : [],
     samples,
   };
 }

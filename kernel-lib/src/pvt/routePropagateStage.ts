@@ -56,23 +56,34 @@ export function propagateIsochoreRoute(
     freezeIsotherm(f.temperatureK, f.densityMolPerM3, f.bridges, context.gasConstant),
   );
   const length = maps.reduce((sum, m) => sum + m.length, 0);
+  // Buffers reused by every replicate (the replicate's values are consumed before the next one).
+  const deltas = groups.map((g) => new Float64Array(g.members.length));
+  const nodePressures = nominal.frozen.map((f) => new Float64Array(f.nodes.length));
+  const nodeSlopes = nominal.frozen.map((f) => new Float64Array(f.nodes.length));
+  const out = new Float64Array(length);
   const mc =
     samples > 0
       ? monteCarloPropagation(
           (P) => {
-            const moved = groups.map((g, k) => fits[k].shifted(g.members.map((i) => P[i] - P0[i])));
-            const out = new Float64Array(length);
-            let offset = 0;
-            nominal.frozen.forEach((f, k) => {
-              const ev = f.nodes.map((j) => moved[j](f.temperatureK));
-              maps[k].evaluate(
-                ev.map((e) => e.pressurePa),
-                ev.map((e) => e.slopePaPerK),
-                out,
-                offset,
-              );
-              offset += maps[k].length;
+            const moved = groups.map((g, k) => {
+              const members = g.members;
+              const delta = deltas[k];
+              for (let r = 0; r < members.length; r++) delta[r] = P[members[r]] - P0[members[r]];
+              return fits[k].shifted(delta);
             });
+            let offset = 0;
+            for (let k = 0; k < nominal.frozen.length; k++) {
+              const f = nominal.frozen[k];
+              const pressures = nodePressures[k];
+              const slopes = nodeSlopes[k];
+              for (let q = 0; q < f.nodes.length; q++) {
+                const e = moved[f.nodes[q]](f.temperatureK);
+                pressures[q] = e.pressurePa;
+                slopes[q] = e.slopePaPerK;
+              }
+              maps[k].evaluate(pressures, slopes, out, offset);
+              offset += maps[k].length;
+            }
             report(context, "Monte Carlo", ++done, samples, "samples");
             return out;
           },
