@@ -9,6 +9,7 @@ import { modelFromPressure } from "../../src/departure/pressureModel.js";
 import { residualProperties } from "../../src/state/properties.js";
 import { getComponent } from "../../src/components/getComponent.js";
 import type { BenchCase } from "../harness.js";
+import { TEN, X10 } from "./richGas.js";
 import type { Component } from "../../src/components/types.js";
 
 /**
@@ -26,20 +27,6 @@ function withConstantCp(id: string): Component {
     idealGasCp: { form: "polynomial", ...range, segments: [{ ...range, coefficients: [4] }] },
   };
 }
-
-const TEN = [
-  "nitrogen",
-  "carbon-dioxide",
-  "methane",
-  "ethane",
-  "propane",
-  "isobutane",
-  "n-butane",
-  "isopentane",
-  "n-pentane",
-  "n-hexane",
-];
-const X10 = [0.02, 0.03, 0.7, 0.1, 0.06, 0.02, 0.03, 0.015, 0.015, 0.01];
 
 // states cycled through so no cache sees the same temperature twice in a row. None is a whole
 // number: V8 keeps whole numbers as small integers, and a mix of small-integer and fractional

@@ -7,20 +7,7 @@
 import { defineFluid } from "../../src/fluid/defineFluid.js";
 import { phaseEnvelope } from "../../src/phase/envelope/phaseEnvelope.js";
 import type { BenchCase } from "../harness.js";
-
-const TEN = [
-  "nitrogen",
-  "carbon-dioxide",
-  "methane",
-  "ethane",
-  "propane",
-  "isobutane",
-  "n-butane",
-  "isopentane",
-  "n-pentane",
-  "n-hexane",
-];
-const X10 = [0.02, 0.03, 0.7, 0.1, 0.06, 0.02, 0.03, 0.015, 0.015, 0.01];
+import { TEN, X10 } from "./richGas.js";
 
 export const envelopeCases: BenchCase[] = [
   {

@@ -7,20 +7,8 @@
 import { defineFluid } from "../../src/fluid/defineFluid.js";
 import { overallProperty } from "../../src/phase/flash/stateFunctionFlash.js";
 import type { BenchCase } from "../harness.js";
+import { TEN, X10 } from "./richGas.js";
 
-const TEN = [
-  "nitrogen",
-  "carbon-dioxide",
-  "methane",
-  "ethane",
-  "propane",
-  "isobutane",
-  "n-butane",
-  "isopentane",
-  "n-pentane",
-  "n-hexane",
-];
-const X10 = [0.02, 0.03, 0.7, 0.1, 0.06, 0.02, 0.03, 0.015, 0.015, 0.01];
 // 248.125 to 251.875 K (none a whole number, see engineCases.ts)
 const TEMPERATURES = Float64Array.from({ length: 16 }, (_, i) => 248.125 + 0.25 * i);
 const P = 50e5;
