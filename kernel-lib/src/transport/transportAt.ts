@@ -111,7 +111,14 @@ function chungAt(
     });
   }
   const Tr = T / p.criticalTemperatureK;
-  if (rho * p.criticalVolumeCm3PerMol * 1e-6 > 2 && Tr < 0.6) {
+  const liquidLike = rho * p.criticalVolumeCm3PerMol * 1e-6 > 2;
+  if (liquidLike) {
+    warnings.push({
+      code: "accuracy",
+      message: `transport properties: a liquid-like density (${(rho * p.criticalVolumeCm3PerMol * 1e-6).toFixed(2)} times the critical): the viscosity follows the density steeply here (liquid methane at 120 K: about 6 % per 1 % of density, 3 % for the conductivity), so the model's liquid density decides the accuracy; a cubic equation without volume translation can be 10 % off in liquid density (use volumeTranslation: "rackett" or a reference equation)`,
+    });
+  }
+  if (liquidLike && Tr < 0.6) {
     warnings.push({
       code: "accuracy",
       message: `transport properties: a liquid at Tr = ${Tr.toFixed(3)} (below 0.6): Chung's viscosity may be off by 20 % or more here (from memory of Poling et al. 2001, section 9-6); a liquid-specific viscosity method is better far below the critical temperature`,
@@ -167,7 +174,11 @@ function iapwsAt(
  * (mol/m3) and mole fractions x. rho = 0 gives the dilute-gas limit.
  *
  * Method: IAPWS 2008/2011 for pure water bound to IAPWS-95, Chung et al. (1988) otherwise (see
- * chung.ts for its stated accuracy: about 5-10 % for dense fluids, worse for cold liquids).
+ * chung.ts for its stated accuracy: about 5-10 % for dense fluids, worse for cold liquids). For a
+ * liquid the result is only as good as the density passed in: Chung's viscosity moves about 6 %
+ * per 1 % of liquid density (liquid methane at 120 K), so take liquid densities from a model that
+ * gets them right (a cubic with `volumeTranslation: "rackett"`, or a reference equation); liquid
+ * states carry a warning saying so.
  * Transport properties of a two-phase mixture as a whole do not exist: call this per phase.
  *
  * @example

@@ -61,6 +61,7 @@ describe("gases at 300 K and 1 bar: CRC Handbook", () => {
       expect(r.pressurePa / 1e5).toBeCloseTo(1, 12);
       expectReference(r.viscosityPaS * 1e6, crc(`${id}/T300-P1bar/eta`));
       expectReference(r.thermalConductivityWPerMK * 1e3, crc(`${id}/T300-P1bar/lambda`));
+      expect(r.warnings).toEqual([]);
     });
   }
 
@@ -83,7 +84,10 @@ describe("liquids", () => {
     const r = transportAtTRho(hexane, 298.15, rho);
     expectReference(r.viscosityPaS * 1e3, crc("n-hexane/T298.15/eta"));
     expectReference(r.thermalConductivityWPerMK, crc("n-hexane/T298.15/lambda"));
-    expect(r.warnings.map((w) => w.code)).toEqual(["accuracy"]);
+    // the liquid-density and cold-liquid warnings
+    expect(r.warnings.map((w) => w.code)).toEqual(["accuracy", "accuracy"]);
+    expect(r.warnings[0].message).toContain("liquid-like density");
+    expect(r.warnings[1].message).toContain("Tr = 0.587");
   });
 
   it("methane at its normal boiling point (Younglove and Ely 1987)", () => {
