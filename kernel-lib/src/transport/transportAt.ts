@@ -124,7 +124,18 @@ function chungAt(
       message: `transport properties: a liquid at Tr = ${Tr.toFixed(3)} (below 0.6): Chung's viscosity may be off by 20 % or more here (from memory of Poling et al. 2001, section 9-6); a liquid-specific viscosity method is better far below the critical temperature`,
     });
   }
-  const cv0 = fluid.idealGas.at(T, 1e5, x).cv;
+  const tStar = (1.2593 * T) / p.criticalTemperatureK;
+  if (!(tStar >= 0.3 && tStar <= 100)) {
+    warnings.push({
+      code: "outside-validity",
+      message: `transport properties: T* = 1.2593 T / Tc = ${tStar.toPrecision(3)} is outside 0.3 to 100, the range of the collision integral of Neufeld, Janzen and Aziz (1972) that Chung's method uses; extrapolated`,
+    });
+  }
+  const ideal = fluid.idealGas.at(T, 1e5, x);
+  for (const w of ideal.warnings) {
+    warnings.push({ code: w.code, message: `transport properties (ideal-gas cv): ${w.message}` });
+  }
+  const cv0 = ideal.cv;
   return {
     viscosityPaS: chungViscosity(p, T, rho),
     thermalConductivityWPerMK: chungThermalConductivity(p, T, rho, cv0),

@@ -221,3 +221,24 @@ describe("component data", () => {
     expect(r.warnings.some((w) => w.message.includes("my-cut"))).toBe(true);
   });
 });
+
+describe("range warnings", () => {
+  it("T* above 100 (the collision integral's range, Neufeld et al. 1972) is warned", () => {
+    const helium = defineFluid({ components: ["helium"] });
+    // Tc = 5.2 K: T* = 1.2593 T / Tc is about 240 at 1000 K
+    const r = transportAtTRho(helium, 1000, 0);
+    expect(r.warnings.some((w) => w.code === "outside-validity" && w.message.includes("T*"))).toBe(
+      true,
+    );
+    expect(transportAtTRho(helium, 300, 0).warnings).toEqual([]);
+  });
+
+  it("a polar mixture: x = (1, 0) with water first is pure water by Chung", () => {
+    const wet = defineFluid({ components: ["water", "methane"] });
+    const pure = defineFluid({ components: ["water"] });
+    const a = transportAtTRho(wet, 600, 100, [1, 0]);
+    const b = transportAtTRho(pure, 600, 100);
+    expect(a.viscosityPaS / b.viscosityPaS).toBeCloseTo(1, 12);
+    expect(a.thermalConductivityWPerMK / b.thermalConductivityWPerMK).toBeCloseTo(1, 12);
+  });
+});
