@@ -22,6 +22,12 @@
  * these the result carries a warning.
  */
 
+/**
+ * Molar mass of IAPWS-95, kg/mol (R6-95(2018), from memory): the releases' densities in kg/m3 are
+ * the equation's molar densities times this value.
+ */
+export const IAPWS_MOLAR_MASS_KG_PER_MOL = 0.018015268;
+
 const T_STAR = 647.096;
 const RHO_STAR = 322;
 const P_STAR = 22.064e6;

@@ -20,6 +20,7 @@ import {
   type ChungComponent,
 } from "./chung.js";
 import {
+  IAPWS_MOLAR_MASS_KG_PER_MOL,
   IAPWS_REFERENCE_TEMPERATURE_K,
   iapwsBackgroundConductivity,
   iapwsBackgroundViscosity,
@@ -148,7 +149,9 @@ function iapwsAt(
   rho: number,
   warnings: ResultWarning[],
 ): { viscosityPaS: number; thermalConductivityWPerMK: number } {
-  const M = fluid.molarMassesKgPerMol[0];
+  // the releases' kg/m3 are IAPWS-95's mol/m3 times its own molar mass (the component table's
+  // 18.015 g/mol differs by 1.5e-5 relative)
+  const M = IAPWS_MOLAR_MASS_KG_PER_MOL;
   const rhoKg = rho * M;
   let viscosityPaS = iapwsBackgroundViscosity(T, rhoKg);
   let lambda = iapwsBackgroundConductivity(T, rhoKg);
@@ -165,8 +168,8 @@ function iapwsAt(
     );
     viscosityPaS *= iapwsViscosityEnhancement(xi);
     lambda += iapwsCriticalEnhancement(T, rhoKg, {
-      cpJPerKgK: state.mass.cp,
-      cvJPerKgK: state.mass.cv,
+      cpJPerKgK: state.molar.cp / M,
+      cvJPerKgK: state.molar.cv / M,
       correlationLengthNm: xi,
       viscosityPaS,
     });

@@ -68,6 +68,21 @@ describe("which method a water fluid gets", () => {
     expect(r.viscosityPaS * 1e6).toBeLessThan(895);
   });
 
+  it("a defineFluid water reproduces the near-critical table too (its own ideal-gas cp)", () => {
+    // the fluid's ideal part is the correlation route, not IAPWS-95's phi0: cp and cv differ by
+    // about 1e-5 relative, so lambda2 does too; viscosity does not use them
+    const fluid = defineFluid({ components: ["water"], model: referenceFluid("water") });
+    for (const rho of [272, 322]) {
+      const r = transportAtTRho(fluid, 647.35, rho / M);
+      const lambda = referenceValues("iapws-r15-11-conductivity.json").get(
+        `T647.35-rho${rho}/lambda`,
+      )!;
+      const mu = referenceValues("iapws-r12-08-viscosity.json").get(`T647.35-rho${rho}/mu`)!;
+      expect(Math.abs((r.thermalConductivityWPerMK * 1e3) / lambda.value - 1)).toBeLessThan(1e-5);
+      expectReference(r.viscosityPaS * 1e6, mu);
+    }
+  });
+
   it("water with a cubic equation, or with method chung-1988: Chung", () => {
     const cubic = defineFluid({ components: ["water"], model: "peng-robinson" });
     expect(cubic.transportAtTP(500, 1e5).method).toBe("chung-1988");
