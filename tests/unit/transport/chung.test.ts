@@ -222,6 +222,19 @@ describe("component data", () => {
   });
 });
 
+describe("a component without a critical volume", () => {
+  it("gets Pitzer's Zc = 0.291 - 0.080 omega, with a warning, and a value near the table's", () => {
+    const octane = tableComponents().find((c) => c.id === "n-octane")!;
+    const cut = { ...octane, id: "cut-without-vc", criticalVolumeM3PerMol: Number.NaN };
+    const withVc = defineFluid({ components: [octane] }).transportAtTP(450, 1e5);
+    const estimated = defineFluid({ components: [cut] }).transportAtTP(450, 1e5);
+    expect(estimated.warnings.some((w) => w.message.includes("no critical volume"))).toBe(true);
+    // n-octane: Zc = Pc Vc / (R Tc) = 0.2591 from the table's constants and Pitzer's estimate
+    // 0.291 - 0.080 * 0.399 = 0.2591 agree within 0.1 %, so the viscosities agree within 0.5 %
+    expect(Math.abs(estimated.viscosityPaS / withVc.viscosityPaS - 1)).toBeLessThan(0.005);
+  });
+});
+
 describe("range warnings", () => {
   it("T* above 100 (the collision integral's range, Neufeld et al. 1972) is warned", () => {
     const helium = defineFluid({ components: ["helium"] });
