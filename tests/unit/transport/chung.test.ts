@@ -76,6 +76,20 @@ describe("gases at 300 K and 1 bar: CRC Handbook", () => {
   });
 });
 
+describe("a polar gas: the dipole moment in Fc", () => {
+  it("sulfur dioxide at 40 degC and 1 bar (Poling et al. 2001, section 9-4 example)", () => {
+    const so2 = defineFluid({ components: ["sulfur-dioxide"] });
+    const r = so2.transportAtTP(313.15, 1e5);
+    const ref = referenceValue("poling-2001-transport.json", "sulfur-dioxide/T313.15-P1bar/eta");
+    expectReference(r.viscosityPaS * 1e7, ref); // Pa s -> micropoise
+    // the dipole moment matters here: without it the value is about 4 % lower (mu_r^4 term of Fc)
+    const nonpolar = defineFluid({
+      components: [{ ...so2.components[0], id: "so2-without-dipole" }],
+    }).transportAtTP(313.15, 1e5);
+    expect(nonpolar.viscosityPaS).toBeLessThan(0.97 * r.viscosityPaS);
+  });
+});
+
 describe("liquids", () => {
   it("n-hexane at 25 degC (CRC Handbook), with the cold-liquid warning", () => {
     const crc = (key: string) => referenceValue("crc-handbook-transport.json", key);
