@@ -34,7 +34,6 @@ import {
 } from "../state/inversions.js";
 import type { DepartureMethod, FluidBinding, FluidState } from "../state/types.js";
 import { checkComposition, checkPressure, checkTemperature } from "../state/checkInputs.js";
-import type { ResultWarning } from "../errors.js";
 import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../phase/stability.js";
 import {
   saturationPointAtPressure,
@@ -68,6 +67,9 @@ import {
   type StateFlashOptions,
 } from "../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium, StateFunctionEquilibrium } from "../phase/flash/types.js";
+import { referenceIdealGasMixture } from "../eos/multiparameter/referenceIdealGas.js";
+import type { ReferenceFluid } from "../eos/multiparameter/referenceFluid.js";
+import { phaseStateOf, splitWarning, type PhaseState, type StateRequest } from "./phaseState.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
 // x). Not frozen: a frozen array has other elements kinds and slowed every state call by half.
@@ -96,7 +98,11 @@ export interface FluidSpec {
   kij?: readonly (readonly number[])[];
   /** Overrides of the table constants, one entry (or undefined) per component. */
   constants?: readonly (ConstantOverrides | undefined)[];
-  /** Ideal-gas route: "correlation" (default), "molecular", or your own IdealGasMixture. */
+  /**
+   * Ideal-gas route: "correlation" (default), "molecular", or your own IdealGasMixture. With a
+   * reference equation as the model (`referenceFluid("water")`) the default is the equation's own
+   * ideal part in the publication's reference state.
+   */
   idealGas?: "correlation" | "molecular" | IdealGasMixture;
   /** Zero of h and s. Default: the formation basis. */
   referenceState?: ReferenceState;
@@ -130,6 +136,22 @@ export interface Fluid extends FluidBinding {
   readonly interactionNotes: readonly InteractionNote[];
   /** Pairs whose k_ij was defaulted to zero, e.g. "hydrogen/methane". */
   readonly defaultedPairs: readonly string[];
+  /**
+   * THE state of the fluid from any one pair of specifications, as named fields (SI): (T, P),
+   * (T, rho), (P, h), (P, s), (T, s), (u, rho), (T, vaporFraction), (P, vaporFraction), plus the
+   * composition `x` (may be omitted for a pure fluid) and options (fluid/phaseState.ts). Mixtures
+   * go through the verified flashes, so a state inside the two-phase region comes back with its
+   * phases; a pure fluid through its saturation. Any other combination is an InputError.
+   *
+   * @example
+   * ```ts
+   * const st = gas.state({ P: 10e5, h: -80_000, x: [0.85, 0.1, 0.05] });
+   * st.phase;                        // "two-phase"
+   * st.phases.map((p) => p.amount);  // mol per mol feed, vapour first
+   * st.check?.maxLnFugacityDifference; // <= 1e-10
+   * ```
+   */
+  state(request: StateRequest): PhaseState;
   /** State at T (K), P (Pa); x may be omitted for a pure fluid. */
   stateAtTP(
     temperatureK: number,
@@ -236,14 +258,21 @@ export interface Fluid extends FluidBinding {
     x?: readonly number[],
     options?: StateFlashOptions,
   ): StateFunctionEquilibrium;
-  /** T at (P, h) in one phase (valves). */
+  /**
+   * T at (P, h) in one phase (valves).
+   * @deprecated Use `fluid.state({ P, h, x })`: it finds the phases (a mixture inside the
+   * two-phase region is never returned single-phase) and returns the one PhaseState.
+   */
   temperatureAtPH(
     pressurePa: number,
     enthalpyJPerMol: number,
     x?: readonly number[],
     options?: InversionOptions,
   ): InversionResult;
-  /** T at (P, s) in one phase (compressors, expanders). */
+  /**
+   * T at (P, s) in one phase (compressors, expanders).
+   * @deprecated Use `fluid.state({ P, s, x })`, which finds the phases.
+   */
   temperatureAtPS(
     pressurePa: number,
     entropyJPerMolK: number,
@@ -400,27 +429,6 @@ function kayPseudoCritical(
   };
 }
 
-/** The "phase-split" warning of a mixture that is not stable as one phase, or undefined. */
-function splitWarning(
-  model: ResidualModel,
-  T: number,
-  P: number,
-  x: readonly number[],
-): ResultWarning | undefined {
-  const test = stabilityAtTP(model, T, P, x);
-  const notes = test.warnings.map((w) => w.message);
-  if (test.stable) {
-    return notes.length > 0 ? { code: "accuracy", message: notes.join("; ") } : undefined;
-  }
-  const trial = (test.incipientComposition ?? [])
-    .map((v, i) => `${model.info.componentIds[i]} ${v.toPrecision(3)}`)
-    .join(", ");
-  return {
-    code: "phase-split",
-    message: `the mixture is not stable as one phase at T = ${T} K, P = ${P} Pa: the tangent-plane test found a trial phase with tm = ${test.minimumTangentPlaneDistance.toPrecision(3)} < 0 (${trial}); the fluid splits into phases there, this single-phase state is metastable or unstable, and its properties are not those of the real two-phase fluid (flashTP gives the phases and their amounts)`,
-  };
-}
-
 /**
  * The state at (T, P) of the state layer, with the stability test's warning added last when
  * asked for (a mixture; the test of a pure fluid is its saturation, phase/pureFluidPhase.ts).
@@ -434,8 +442,14 @@ function stateWithStabilityCheck(
 ): FluidState {
   const state = stateAtTP(binding, T, P, x, options);
   if (options?.checkStability !== true || x.length < 2) return state;
-  const split = splitWarning(binding.model, T, P, x);
+  const split = splitWarning(binding, T, P, x);
   return split === undefined ? state : { ...state, warnings: state.warnings.concat(split) };
+}
+
+/** A reference equation (fluid/referenceFluids.ts) passed as the model. */
+function isReferenceFluid(model: ResidualModel): model is ReferenceFluid {
+  const m = model as Partial<ReferenceFluid>;
+  return typeof m.idealReduced === "function" && typeof m.molarMassKgPerMol === "number";
 }
 
 function bindMethods(model: ResidualModel): ResidualModel {
@@ -543,20 +557,26 @@ export function defineFluid(spec: FluidSpec): Fluid {
     });
   }
   let idealGas: IdealGasMixture;
-  const route = spec.idealGas ?? "correlation";
-  if (route === "correlation" || route === "molecular") {
+  const reference = isReferenceFluid(model) ? model : undefined;
+  const route = spec.idealGas ?? (reference ? reference : "correlation");
+  if (reference !== undefined && route === reference) {
+    // a reference equation carries its own ideal part and the publication's reference state
+    idealGas = referenceIdealGasMixture(reference);
+  } else if (route === "correlation" || route === "molecular") {
     const pures: IdealGasPure[] = components.map((c) =>
       route === "correlation" ? idealGasFromCorrelation(c) : idealGasFromMolecule(c.id),
     );
     idealGas = idealGasMixture(pures, { referenceState: spec.referenceState, components });
   } else {
-    idealGas = route;
+    idealGas = route as IdealGasMixture;
   }
   const interactions = model.interactions;
   const binding: FluidBinding = {
     model,
     idealGas,
-    molarMassesKgPerMol: components.map((c) => c.molarMassKgPerMol),
+    molarMassesKgPerMol: reference
+      ? [reference.molarMassKgPerMol]
+      : components.map((c) => c.molarMassKgPerMol),
     departureMethod,
   };
   const xOf = (x: readonly number[] | undefined): readonly number[] => {
@@ -581,6 +601,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
     componentIds: ids,
     interactionNotes: interactions?.notes ?? [],
     defaultedPairs: interactions?.defaultedPairs ?? [],
+    state: (request) => phaseStateOf(binding, request, components),
     stateAtTP: (T, P, x, options) => stateWithStabilityCheck(binding, T, P, xOf(x), options),
     stateAtTRho: (T, rho, x) => stateAtTRho(binding, T, rho, xOf(x)),
     densityRoots: (T, P, x) => {
