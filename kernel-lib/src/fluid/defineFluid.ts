@@ -203,13 +203,19 @@ export interface Fluid extends FluidBinding {
     z: readonly number[],
     options?: BubbleDewOptions,
   ): MixtureSaturationPoint;
-  /** Saturation point of any vapour fraction (`options.vaporFraction`) at T (K). */
+  /**
+   * Saturation point of any vapour fraction (`options.vaporFraction`) at T (K).
+   * @deprecated Use `fluid.state({ T, vaporFraction, x })`: both phases in `phases[]`.
+   */
   saturationPointAtTemperature(
     temperatureK: number,
     z: readonly number[],
     options?: SaturationPointOptions,
   ): MixtureSaturationPoint;
-  /** Saturation point of any vapour fraction (`options.vaporFraction`) at P (Pa). */
+  /**
+   * Saturation point of any vapour fraction (`options.vaporFraction`) at P (Pa).
+   * @deprecated Use `fluid.state({ P, vaporFraction, x })`.
+   */
   saturationPointAtPressure(
     pressurePa: number,
     z: readonly number[],
@@ -223,6 +229,7 @@ export interface Fluid extends FluidBinding {
   /**
    * Phase equilibrium at T (K), P (Pa): one to three verified phases (phase/flash/flashTP.ts),
    * the stability test of this fluid's Wilson constants first.
+   * @deprecated Use `fluid.state({ T, P, x })`: the same verified flash as one PhaseState.
    */
   flashTP(
     temperatureK: number,
@@ -230,28 +237,40 @@ export interface Fluid extends FluidBinding {
     x?: readonly number[],
     options?: FlashOptions,
   ): Equilibrium;
-  /** Phase equilibrium at P (Pa) and molar enthalpy h (J/mol): a valve outlet. */
+  /**
+   * Phase equilibrium at P (Pa) and molar enthalpy h (J/mol): a valve outlet.
+   * @deprecated Use `fluid.state({ P, h, x })`: the same flash as one PhaseState.
+   */
   flashPH(
     pressurePa: number,
     enthalpyJPerMol: number,
     x?: readonly number[],
     options?: StateFlashOptions,
   ): StateFunctionEquilibrium;
-  /** Phase equilibrium at P (Pa) and molar entropy s (J/(mol K)). */
+  /**
+   * Phase equilibrium at P (Pa) and molar entropy s (J/(mol K)).
+   * @deprecated Use `fluid.state({ P, s, x })`: the same flash as one PhaseState.
+   */
   flashPS(
     pressurePa: number,
     entropyJPerMolK: number,
     x?: readonly number[],
     options?: StateFlashOptions,
   ): StateFunctionEquilibrium;
-  /** Phase equilibrium at T (K) and molar entropy s (J/(mol K)). */
+  /**
+   * Phase equilibrium at T (K) and molar entropy s (J/(mol K)).
+   * @deprecated Use `fluid.state({ T, s, x })`: the same flash as one PhaseState.
+   */
   flashTS(
     temperatureK: number,
     entropyJPerMolK: number,
     x?: readonly number[],
     options?: StateFlashOptions,
   ): StateFunctionEquilibrium;
-  /** Phase equilibrium at molar internal energy u (J/mol) and molar density rho (mol/m3): a vessel. */
+  /**
+   * Phase equilibrium at molar internal energy u (J/mol) and molar density rho (mol/m3): a vessel.
+   * @deprecated Use `fluid.state({ u, rho, x })`: the same flash as one PhaseState.
+   */
   flashUV(
     internalEnergyJPerMol: number,
     densityMolPerM3: number,
@@ -558,6 +577,14 @@ export function defineFluid(spec: FluidSpec): Fluid {
   }
   let idealGas: IdealGasMixture;
   const reference = isReferenceFluid(model) ? model : undefined;
+  if (reference !== undefined && reference.info.componentIds.join() !== ids.join()) {
+    throw new InputError({
+      input: "components",
+      unit: "-",
+      validRange: `the component of the reference equation (${reference.info.componentIds.join(", ")})`,
+      received: ids,
+    });
+  }
   const route = spec.idealGas ?? (reference ? reference : "correlation");
   if (reference !== undefined && route === reference) {
     // a reference equation carries its own ideal part and the publication's reference state
