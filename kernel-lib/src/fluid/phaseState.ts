@@ -185,6 +185,11 @@ export interface PhaseState {
   readonly molar: OverallProperties;
   /** Overall specific properties: J/kg, J/(kg K). */
   readonly mass: OverallProperties;
+  /**
+   * Residual (departure) properties of the single phase at the same T and P, J/mol and
+   * J/(mol K); undefined in two or three phases (each phase's own in `phases[k].residual`).
+   */
+  readonly residual: PropertySet | undefined;
   /** Speed of sound of the single phase, m/s; undefined in two or three phases. */
   readonly speedOfSoundMPerS: number | undefined;
   /** Joule-Thomson coefficient (dT/dP)_h of the single phase, K/Pa; undefined in two or three phases. */
@@ -371,6 +376,7 @@ function assemble(binding: FluidBinding, a: Assembly): PhaseState {
     molarMassKgPerMol: M,
     molar,
     mass,
+    residual: one?.residual,
     speedOfSoundMPerS: one?.speedOfSoundMPerS,
     jouleThomsonKPerPa: one?.jouleThomsonKPerPa,
     phase,

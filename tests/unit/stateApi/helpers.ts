@@ -35,6 +35,7 @@ export function expectConsistent(st: PhaseState): void {
     expect(Number.isFinite(st.molar.cp)).toBe(true);
     expect(Number.isFinite(st.molar.cv)).toBe(true);
     expect(Number.isFinite(st.jouleThomsonKPerPa)).toBe(true);
+    expect(st.residual).toBe(positive[0].residual);
     expect(["vapor", "liquid", "supercritical"]).toContain(st.phase);
   } else {
     // two or three phases: no number, never NaN
@@ -42,6 +43,7 @@ export function expectConsistent(st: PhaseState): void {
     expect(st.molar.cv).toBeUndefined();
     expect(st.speedOfSoundMPerS).toBeUndefined();
     expect(st.jouleThomsonKPerPa).toBeUndefined();
+    expect(st.residual).toBeUndefined();
     expect(st.phase).toBe(positive.length === 2 ? "two-phase" : "three-phase");
     expect(st.check).toBeDefined();
     expect(st.check!.maxLnFugacityDifference).toBeLessThanOrEqual(1e-10);
