@@ -18,7 +18,7 @@ import {
 import { saturationAtTemperature } from "../../../kernel-lib/src/phase/saturation.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
 import { referenceValue } from "../../fixtures/referenceValues.js";
-import { expectConsistent } from "./helpers.js";
+import { expectConsistent, expectRoundTrips } from "./helpers.js";
 
 const water = defineFluid({ components: ["water"], model: referenceFluid("water") });
 const steam = referenceFluidBinding(referenceFluid("water"));
@@ -176,6 +176,27 @@ describe("mixtures: never single-phase inside the two-phase region", () => {
     expect(st.phases).toHaveLength(1);
     expect(st.check).toBeUndefined();
     expect(st.warnings.some((w) => w.code === "phase-split")).toBe(true);
+  });
+  it("three phases (vapour, oil, water) come back labelled, verified and round-trip by (P, h)", () => {
+    // methane / n-decane / water at 320 K, 3 MPa: a gas, a decane-rich liquid and an aqueous
+    // liquid (derived: the mutual solubility of water and alkanes is small; no value checked)
+    const oilWater = defineFluid({
+      components: ["methane", "n-decane", "water"],
+      model: "peng-robinson",
+    });
+    const z = [0.3, 0.3, 0.4];
+    const st = oilWater.state({ T: 320, P: 30e5, x: z });
+    expect(st.phase).toBe("three-phase");
+    expect(st.phases.map((p) => p.kind)).toEqual(["vapor", "liquid", "liquid-2"]);
+    expect(st.phases[2].x[2]).toBeGreaterThan(0.99); // the aqueous phase is the densest
+    expectConsistent(st);
+    const again = oilWater.state({ P: 30e5, h: st.molar.h, x: z });
+    expect(again.phase).toBe("three-phase");
+    expect(Math.abs(again.temperatureK - 320)).toBeLessThan(1e-6);
+  });
+  it("a two-phase natural gas round-trips through every pair", () => {
+    const st = expectRoundTrips(gas, 230, 30e5, gasX);
+    expect(st.phase).toBe("two-phase");
   });
   it("dew point and a quality point at given P carry both phases", () => {
     const dew = gas.state({ P: 30e5, vaporFraction: 1, x: gasX });
