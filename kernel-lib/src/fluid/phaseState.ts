@@ -79,6 +79,15 @@ export const STATE_PAIRS: readonly (readonly [StateVariable, StateVariable])[] =
 
 const VARIABLES: readonly StateVariable[] = ["T", "P", "rho", "h", "s", "u", "vaporFraction"];
 const OPTION_FIELDS = ["x", "phase", "flash", "saturation"];
+const UNITS: Readonly<Record<StateVariable, string>> = {
+  T: "K",
+  P: "Pa",
+  rho: "mol/m3",
+  h: "J/mol",
+  s: "J/(mol K)",
+  u: "J/mol",
+  vaporFraction: "mol/mol",
+};
 
 /**
  * A state request: exactly one pair of specifications, the composition and options, all named.
@@ -249,6 +258,32 @@ export function specifiedPair(request: StateRequest): [StateVariable, StateVaria
     });
   }
   const given = VARIABLES.filter((v) => keys.includes(v));
+  const r = request as Record<string, unknown>;
+  for (const v of given) {
+    const value = r[v];
+    if (!(typeof value === "number" && Number.isFinite(value))) {
+      throw new InputError({
+        input: v,
+        unit: UNITS[v],
+        validRange: "a finite number (SI)",
+        received: value,
+      });
+    }
+  }
+  for (const o of ["flash", "saturation"]) {
+    const value = r[o];
+    if (!(
+      value === undefined ||
+      (typeof value === "object" && value !== null && !Array.isArray(value))
+    )) {
+      throw new InputError({
+        input: o,
+        unit: "-",
+        validRange: "an options object (or leave it out)",
+        received: value,
+      });
+    }
+  }
   const pair = STATE_PAIRS.find(
     (p) => given.length === 2 && p[0] === given[0] && p[1] === given[1],
   );

@@ -62,6 +62,13 @@ describe("requests that are not one valid pair are refused, naming the fields", 
       );
     });
   }
+  it("a specification that is not a finite number, or options that are not objects", () => {
+    const text = { T: "300", P: 1e5 } as unknown as StateRequest;
+    expect(() => water.state(text)).toThrow(/^T must be a finite number/);
+    expect(() => water.state({ T: 300, P: Number.POSITIVE_INFINITY })).toThrow(InputError);
+    const badOptions = { T: 300, P: 1e5, flash: 3 } as unknown as StateRequest;
+    expect(() => water.state(badOptions)).toThrow(/flash/);
+  });
   it("an unknown field (a misspelt name) is named", () => {
     const request = { T: 300, pressure: 1e5 } as unknown as StateRequest;
     expect(() => water.state(request)).toThrow(/pressure/);
