@@ -4,3 +4,12 @@ export { defineFluid } from "./defineFluid.js";
 export type { Fluid, FluidSpec, ConstantOverrides, FluidStateAtTPOptions } from "./defineFluid.js";
 export type { FluidTransportOptions } from "./defineFluid.js";
 export { referenceFluid, buildReferenceFluid } from "./referenceFluids.js";
+export { phaseStateOf, specifiedPair, STATE_PAIRS } from "./phaseState.js";
+export type {
+  PhaseState,
+  StatePhase,
+  StateRequest,
+  StateVariable,
+  OverallPhase,
+  OverallProperties,
+} from "./phaseState.js";
