@@ -31,3 +31,5 @@ export type { PumpSpec, PumpResult } from "./pump.js";
 export { compressorTrain } from "./compressorTrain.js";
 export type { CompressorTrainSpec, CompressorTrainResult, TrainCooler } from "./compressorTrain.js";
 export { processWarning, temperatureWarnings, liquidFraction } from "./warnings.js";
+export { pathStates } from "./pathStates.js";
+export type { PathState } from "./pathStates.js";
