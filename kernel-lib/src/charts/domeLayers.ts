@@ -305,7 +305,7 @@ export function mixtureEnergyDomeLayers(
     });
   } else if (!dome.complete) {
     warnings.add(
-      "The mixture's envelope did not close: its boundary is drawn as far as it was traced, without the two-phase fill.",
+      "The mixture's boundary is not closed (the envelope stopped, or points were left out): it is drawn as far as it goes, without the two-phase fill.",
     );
   }
   layers.push({

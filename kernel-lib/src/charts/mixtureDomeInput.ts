@@ -44,7 +44,7 @@ export interface ChartMixtureDome {
     readonly vaporFraction: number;
     readonly points: readonly ChartMixtureDomePoint[];
   }[];
-  /** True when the boundary closes (one piece from low pressure to low pressure). */
+  /** True when the boundary closes (one piece from low pressure to low pressure, no point left out). */
   readonly complete: boolean;
   /** Notes for the chart (e.g. where and why an incomplete envelope stopped). */
   readonly notes?: readonly string[];

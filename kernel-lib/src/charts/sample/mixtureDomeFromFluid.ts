@@ -145,12 +145,15 @@ export function mixtureDomeFromFluid(
   const qualityLines = (envelope.qualityLines ?? []).map((line) => {
     const points: ChartMixtureDomePoint[] = [];
     let off = 0;
+    let outside = 0;
     for (const q of line.points) {
       let eq: Equilibrium | undefined;
       try {
         eq = tryPoint(() => flashTP(fluid, q.T, q.P, feed));
       } catch (e) {
         if (!(e instanceof OutOfRangeError)) throw e;
+        outside++;
+        continue;
       }
       // the lighter phase comes first (near and above the critical pressure both phases may be
       // labelled liquids by density; the line's vapour fraction is the lighter phase's amount)
@@ -170,9 +173,15 @@ export function mixtureDomeFromFluid(
         entropyJPerMolK: o.s,
       });
     }
+    const label = Number(line.vaporFraction.toPrecision(12));
     if (off > 0) {
       notes.push(
-        `vapour fraction ${line.vaporFraction}: ${off} point(s) left out (the flash at its T and P did not return two phases with that vapour fraction)`,
+        `vapour fraction ${label}: ${off} point(s) left out (the flash at its T and P did not return two phases with that vapour fraction)`,
+      );
+    }
+    if (outside > 0) {
+      notes.push(
+        `vapour fraction ${label}: ${outside} point(s) left out (outside a correlation's range, e.g. an ideal-gas cp)`,
       );
     }
     return { vaporFraction: line.vaporFraction, points };
@@ -185,7 +194,8 @@ export function mixtureDomeFromFluid(
       boundary,
       ...(critical ? { critical } : {}),
       qualityLines,
-      complete: envelope.complete,
+      // the fill needs the whole closed boundary
+      complete: envelope.complete && skipped === 0,
       notes,
     },
     envelope,
