@@ -209,9 +209,59 @@ export function wetGasEnvelope(
   const wc = constants?.[water];
   const waterDewLine: WaterDewPoint[] = [];
   const waterDewMissing: { P: number; reason: string }[] = [];
+  /** A verified, bracketed water dew point at P from a start (T, incipient), or why not. */
+  const waterDewAt = (
+    P: number,
+    T0: number | undefined,
+    x: readonly number[],
+  ): WaterDewPoint | string => {
+    const kFactors = feed.map((v, i) => Math.max(v, 1e-300) / Math.max(x[i], 1e-300));
+    let point;
+    try {
+      point = dewPointAtPressure(binding, P, feed, {
+        ...(constants ? { constants } : {}),
+        start: { ...(T0 !== undefined ? { temperatureK: T0 } : {}), kFactors },
+      });
+    } catch (e) {
+      if (!(e instanceof SolverError || e instanceof PhaseUnavailableError)) throw e;
+      return e.message;
+    }
+    const incipient = point.incipient ?? point.liquid.x;
+    if (!(incipient[water] >= AQUEOUS_WATER_FRACTION)) {
+      return `the dew point found at ${point.temperatureK.toPrecision(6)} K has a hydrocarbon incipient liquid (water ${incipient[water].toPrecision(3)}), not an aqueous one`;
+    }
+    const T = point.temperatureK;
+    const cold = tryFlash(binding, T - bracketK, P, feed, flashOptions);
+    const warm = tryFlash(binding, T + bracketK, P, feed, flashOptions);
+    if (typeof cold === "string" || typeof warm === "string") {
+      return `water dew point at ${T.toPrecision(6)} K found, but a bracketing flash failed: ${typeof cold === "string" ? cold : warm}`;
+    }
+    const coldHasAqueous = cold.phases.some(
+      (p) => p.kind !== "vapor" && p.state.x[water] >= AQUEOUS_WATER_FRACTION,
+    );
+    const warmOne = warm.phases.length === 1;
+    let note: string | undefined;
+    if (!coldHasAqueous) {
+      note = `the flash ${bracketK} K colder (${cold.phases.map((p) => p.kind).join(" + ")}) holds no aqueous liquid`;
+    } else if (!warmOne) {
+      note = `at ${T.toPrecision(6)} K, ${P.toPrecision(6)} Pa the feed already holds a hydrocarbon liquid ${bracketK} K warmer (${warm.phases.map((p) => `${p.kind} ${p.amount.toPrecision(3)}`).join(", ")}): the water dew point lies inside the hydrocarbon two-phase region, and the first liquid on cooling there is hydrocarbon`;
+    }
+    return {
+      T,
+      P,
+      incipient,
+      fugacityResidual: point.fugacityResidual,
+      colder: bracket(cold, water),
+      warmer: bracket(warm, water),
+      outerBoundary: coldHasAqueous && warmOne,
+      ...(note ? { note } : {}),
+    };
+  };
+
   let previous: WaterDewPoint | undefined;
   for (const P of pressures) {
-    // start: the previous point, else Wilson's water dew temperature, z_w P = P_sat,w(T)
+    // start: the previous point, else Wilson's water dew temperature, z_w P = P_sat,w(T), with a
+    // nearly pure water incipient liquid
     let T0: number | undefined = previous?.T;
     if (T0 === undefined && wc) {
       // ln(z_w P / Pc) = c (1 - Tc / T) solved for T, with Wilson's c = 5.373 (1 + omega) read
@@ -227,61 +277,32 @@ export function wetGasEnvelope(
       ? previous.incipient.slice()
       : feed.map((v, i) => (i === water ? 0 : Math.max(v * 1e-4, 1e-12)));
     if (!previous) x[water] = 1 - x.reduce((a, b) => a + b, 0);
-    const kFactors = feed.map((v, i) => Math.max(v, 1e-300) / Math.max(x[i], 1e-300));
-    let point;
-    try {
-      point = dewPointAtPressure(binding, P, feed, {
-        ...(constants ? { constants } : {}),
-        start: { ...(T0 !== undefined ? { temperatureK: T0 } : {}), kFactors },
-      });
-    } catch (e) {
-      if (!(e instanceof SolverError || e instanceof PhaseUnavailableError)) throw e;
-      waterDewMissing.push({ P, reason: e.message });
+    const found = waterDewAt(P, T0, x);
+    if (typeof found === "string") {
+      waterDewMissing.push({ P, reason: found });
       previous = undefined;
       continue;
     }
-    const incipient = point.incipient ?? point.liquid.x;
-    if (!(incipient[water] >= AQUEOUS_WATER_FRACTION)) {
-      waterDewMissing.push({
-        P,
-        reason: `the dew point found at ${point.temperatureK.toPrecision(6)} K has a hydrocarbon incipient liquid (water ${incipient[water].toPrecision(3)}), not an aqueous one`,
-      });
-      previous = undefined;
-      continue;
+    waterDewLine.push(found);
+    previous = found;
+  }
+  // a second pass for the pressures where the first start fell on a hydrocarbon dew point or
+  // failed: started from the nearest verified water dew point (continuation in ln P)
+  if (waterDewMissing.length > 0 && waterDewLine.length > 0) {
+    const retry = waterDewMissing.splice(0, waterDewMissing.length);
+    for (const miss of retry) {
+      const near = waterDewLine.reduce((a, b) =>
+        Math.abs(Math.log(b.P / miss.P)) < Math.abs(Math.log(a.P / miss.P)) ? b : a,
+      );
+      const found = waterDewAt(miss.P, near.T, near.incipient);
+      if (typeof found === "string")
+        waterDewMissing.push({
+          P: miss.P,
+          reason: `${miss.reason}; from the nearest water dew point: ${found}`,
+        });
+      else waterDewLine.push(found);
     }
-    const T = point.temperatureK;
-    const cold = tryFlash(binding, T - bracketK, P, feed, flashOptions);
-    const warm = tryFlash(binding, T + bracketK, P, feed, flashOptions);
-    if (typeof cold === "string" || typeof warm === "string") {
-      waterDewMissing.push({
-        P,
-        reason: `water dew point at ${T.toPrecision(6)} K found, but a bracketing flash failed: ${typeof cold === "string" ? cold : warm}`,
-      });
-      previous = undefined;
-      continue;
-    }
-    const coldHasAqueous = cold.phases.some(
-      (p) => p.kind !== "vapor" && p.state.x[water] >= AQUEOUS_WATER_FRACTION,
-    );
-    const warmOne = warm.phases.length === 1;
-    let note: string | undefined;
-    if (!coldHasAqueous) {
-      note = `the flash ${bracketK} K colder (${cold.phases.map((p) => p.kind).join(" + ")}) holds no aqueous liquid`;
-    } else if (!warmOne) {
-      note = `at ${T.toPrecision(6)} K, ${P.toPrecision(6)} Pa the feed already holds a hydrocarbon liquid ${bracketK} K warmer (${warm.phases.map((p) => `${p.kind} ${p.amount.toPrecision(3)}`).join(", ")}): the water dew point lies inside the hydrocarbon two-phase region, and the first liquid on cooling there is hydrocarbon`;
-    }
-    const wp: WaterDewPoint = {
-      T,
-      P,
-      incipient,
-      fugacityResidual: point.fugacityResidual,
-      colder: bracket(cold, water),
-      warmer: bracket(warm, water),
-      outerBoundary: coldHasAqueous && warmOne,
-      ...(note ? { note } : {}),
-    };
-    waterDewLine.push(wp);
-    previous = wp;
+    waterDewLine.sort((a, b) => a.P - b.P);
   }
   const belowTriple = waterDewLine.filter((p) => p.T < WATER_TRIPLE_K);
   if (belowTriple.length > 0) {
