@@ -325,9 +325,20 @@ export function mixtureEnergyDomeLayers(
   }));
   if (lines.length > 0) {
     const rowsOut = curveRows(lines, xAxis, yAxis, warnings, "mixture-quality");
+    // each label at the line's lowest drawn point inside the axis ranges (a line of beta that
+    // began as 1 - beta starts at the critical point, where the labels would pile up)
+    const inside = (v: number, d: readonly [number, number] | undefined) =>
+      d === undefined || (v >= Math.min(d[0], d[1]) && v <= Math.max(d[0], d[1]));
     const labels = lines
       .map((c) => {
-        const first = rowsOut.find((r) => r.series === c.label);
+        const first = rowsOut
+          .filter(
+            (r) => r.series === c.label && inside(r.x, xAxis.domain) && inside(r.y, yAxis.domain),
+          )
+          .reduce<(typeof rowsOut)[number] | undefined>(
+            (best, r) => (best === undefined || r.y < best.y ? r : best),
+            undefined,
+          );
         return first
           ? { x: first.x, y: first.y, label: `β = ${c.label.split(" ").pop()}` }
           : undefined;
