@@ -6,10 +6,11 @@
 import { toDisplay } from "./displayUnits.js";
 import type { EnergyBasis } from "./energyBasis.js";
 import type { ChartCriticalPoint, ChartSaturationRow } from "./saturationInput.js";
+import type { ChartMixtureDome, ChartMixtureDomePoint } from "./mixtureDomeInput.js";
 import { plotValue, positionEncoding, type AxisPlan } from "./axisPlan.js";
 import { curveRows } from "./curveRows.js";
 import { shortNumber } from "./shortNumber.js";
-import type { WarningList } from "./warningList.js";
+import { WarningList } from "./warningList.js";
 import { INK } from "./theme.js";
 
 /** How to read a diagram coordinate of a saturated phase (SI); undefined when missing. */
@@ -229,5 +230,151 @@ export function energyDomeLayers(
       ...qualityLayers(saturation, qualities, xOf, yOf, xAxis, yAxis, warnings),
     ],
     critical: criticalLayers(critical, criticalX, critical?.[ordinate], xAxis, yAxis),
+  };
+}
+
+/**
+ * The dome of a mixture on an energy diagram (P-h, T-s): the envelope's boundary with the feed's
+ * h or s at each point (bubble line: the saturated liquid at z; dew line: the saturated vapour at
+ * z), joined at the critical point where the line changes kind; filled when the envelope closes;
+ * lines of constant vapour fraction from the feed's overall h or s (not the lever rule, which
+ * does not hold for a mixture: bubble and dew points at one pressure have different T).
+ */
+export function mixtureEnergyDomeLayers(
+  dome: ChartMixtureDome,
+  abscissa: "enthalpyJPerMol" | "entropyJPerMolK",
+  ordinate: "pressurePa" | "temperatureK",
+  basis: EnergyBasis,
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+  warnings: WarningList,
+): { dome: Record<string, unknown>[]; critical: Record<string, unknown>[] } {
+  const xy = (p: ChartMixtureDomePoint) => {
+    const v = p[abscissa];
+    return { x: v === undefined ? NaN : basis.perBasis(v), y: p[ordinate] };
+  };
+  const critical = dome.critical;
+  const criticalXY =
+    critical && critical[abscissa] !== undefined
+      ? xy(critical as ChartMixtureDomePoint)
+      : undefined;
+  // runs of one kind within one segment; the critical point closes one run and opens the next
+  const runs: { label: string; points: { x: number; y: number }[] }[] = [];
+  const outline: { x: number; y: number }[] = [];
+  const pts = dome.boundary;
+  pts.forEach((p, k) => {
+    const prev = k > 0 ? pts[k - 1] : undefined;
+    const label = p.kind === "bubble" ? "bubble line" : "dew line";
+    if (prev === undefined || prev.segment !== p.segment || prev.kind !== p.kind) {
+      const joined = prev !== undefined && prev.segment === p.segment ? criticalXY : undefined;
+      if (joined) {
+        runs[runs.length - 1].points.push(joined);
+        outline.push(joined);
+      }
+      runs.push({ label, points: joined ? [joined] : [] });
+    }
+    const q = xy(p);
+    runs[runs.length - 1].points.push(q);
+    outline.push(q);
+  });
+  const lineRows = curveRows(runs, xAxis, yAxis, warnings, "mixture-dome");
+  const layers: Record<string, unknown>[] = [];
+  if (dome.complete && outline.length >= 3) {
+    const fillRows = curveRows(
+      [{ label: "two-phase region", points: outline }],
+      xAxis,
+      yAxis,
+      new WarningList(), // the fill repeats the boundary's points: their notes are given once
+      "mixture-fill",
+    );
+    layers.push({
+      data: { values: fillRows },
+      mark: {
+        type: "line",
+        fill: INK.twoPhaseFill,
+        fillOpacity: 0.85,
+        strokeWidth: 0,
+        clip: true,
+      },
+      encoding: {
+        x: positionEncoding("x", xAxis),
+        y: positionEncoding("y", yAxis),
+        order: { field: "order", type: "quantitative" },
+        detail: { field: "path", type: "nominal" },
+      },
+    });
+  } else if (!dome.complete) {
+    warnings.add(
+      "The mixture's boundary is not closed (the envelope stopped, or points were left out): it is drawn as far as it goes, without the two-phase fill.",
+    );
+  }
+  layers.push({
+    data: { values: lineRows },
+    mark: { type: "line", color: INK.dome, strokeWidth: 2.2, clip: true },
+    encoding: {
+      x: positionEncoding("x", xAxis),
+      y: positionEncoding("y", yAxis),
+      order: { field: "order", type: "quantitative" },
+      detail: { field: "path", type: "nominal" },
+      tooltip: [{ field: "series", type: "nominal", title: "Line" }],
+    },
+  });
+  const lines = (dome.qualityLines ?? []).map((l) => ({
+    label: `vapour fraction ${shortNumber(l.vaporFraction)}`,
+    points: l.points.map(xy),
+  }));
+  if (lines.length > 0) {
+    const rowsOut = curveRows(lines, xAxis, yAxis, warnings, "mixture-quality");
+    // each label at the line's lowest drawn point inside the axis ranges (a line of beta that
+    // began as 1 - beta starts at the critical point, where the labels would pile up)
+    const inside = (v: number, d: readonly [number, number] | undefined) =>
+      d === undefined || (v >= Math.min(d[0], d[1]) && v <= Math.max(d[0], d[1]));
+    const labels = lines
+      .map((c) => {
+        const first = rowsOut
+          .filter(
+            (r) => r.series === c.label && inside(r.x, xAxis.domain) && inside(r.y, yAxis.domain),
+          )
+          .reduce<(typeof rowsOut)[number] | undefined>(
+            (best, r) => (best === undefined || r.y < best.y ? r : best),
+            undefined,
+          );
+        return first
+          ? { x: first.x, y: first.y, label: `β = ${c.label.split(" ").pop()}` }
+          : undefined;
+      })
+      .filter((v) => v !== undefined);
+    layers.push(
+      {
+        data: { values: rowsOut },
+        mark: {
+          type: "line",
+          color: INK.guide,
+          strokeWidth: 0.9,
+          strokeDash: [1, 2.5],
+          clip: true,
+        },
+        encoding: {
+          x: positionEncoding("x", xAxis),
+          y: positionEncoding("y", yAxis),
+          order: { field: "order", type: "quantitative" },
+          detail: { field: "path", type: "nominal" },
+        },
+      },
+      {
+        data: { values: labels },
+        mark: { type: "text", color: INK.guide, fontSize: 9, dy: 9, clip: true },
+        encoding: {
+          x: positionEncoding("x", xAxis),
+          y: positionEncoding("y", yAxis),
+          text: { field: "label", type: "nominal" },
+        },
+      },
+    );
+  }
+  for (const note of dome.notes ?? []) warnings.add(String(note));
+  return {
+    dome: layers,
+    critical: criticalLayers(critical, criticalXY?.x, criticalXY?.y, xAxis, yAxis),
   };
 }

@@ -39,6 +39,11 @@ export type {
   ChartSaturatedPhase,
   ChartCriticalPoint,
 } from "./saturationInput.js";
+export type {
+  ChartMixtureDome,
+  ChartMixtureDomePoint,
+  ChartMixtureBoundaryPoint,
+} from "./mixtureDomeInput.js";
 export { isothermChart } from "./isotherms.js";
 export type {
   IsothermChartData,

@@ -7,7 +7,8 @@ import { InputError } from "../errors.js";
 import { requireFinite } from "../validate.js";
 import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
-import { energyDomeLayers } from "./domeLayers.js";
+import { energyDomeLayers, mixtureEnergyDomeLayers } from "./domeLayers.js";
+import { checkMixtureDome, type ChartMixtureDome } from "./mixtureDomeInput.js";
 import { energyBasis } from "./energyBasis.js";
 import { placeGuideLabels } from "./labelPlacement.js";
 import { INK } from "./theme.js";
@@ -43,6 +44,12 @@ export interface PressureEnthalpyData {
   critical?: ChartCriticalPoint;
   /** Notes of a sampled dome (saturationFromModel), copied into the chart's warnings. */
   domeWarnings?: readonly string[];
+  /**
+   * The two-phase region of a mixture (mixtureDomeFromFluid): bubble and dew lines of the feed,
+   * its critical point and lines of constant vapour fraction. Drawn instead of, or beside, the
+   * pure-fluid `saturation` rows.
+   */
+  mixtureDome?: ChartMixtureDome;
   /** Isotherms (legend, colour and dash per isotherm). */
   isotherms?: readonly {
     temperatureK: number;
@@ -81,13 +88,19 @@ export function pressureEnthalpyChart(
 ): ChartSpec {
   const saturation = checkSaturation(data.saturation);
   const critical = checkCritical(data.critical);
+  const mixtureDome = checkMixtureDome(data.mixtureDome);
   const isotherms = checkArray("isotherms", data.isotherms);
   const isentropes = checkArray("isentropes", data.isentropes);
-  if (saturation.length === 0 && isotherms.length === 0 && isentropes.length === 0) {
+  if (
+    saturation.length === 0 &&
+    mixtureDome === undefined &&
+    isotherms.length === 0 &&
+    isentropes.length === 0
+  ) {
     throw new InputError({
       input: "data",
       unit: "-",
-      validRange: "saturation rows, isotherms or isentropes",
+      validRange: "saturation rows, a mixture dome, isotherms or isentropes",
       received: "nothing to draw",
     });
   }
@@ -118,7 +131,18 @@ export function pressureEnthalpyChart(
     yAxis,
     warnings,
   );
-  const layers: Record<string, unknown>[] = [...fixed.dome];
+  const mixture = mixtureDome
+    ? mixtureEnergyDomeLayers(
+        mixtureDome,
+        "enthalpyJPerMol",
+        "pressurePa",
+        basis,
+        xAxis,
+        yAxis,
+        warnings,
+      )
+    : { dome: [], critical: [] };
+  const layers: Record<string, unknown>[] = [...fixed.dome, ...mixture.dome];
 
   const isentropeRows = curveRows(
     isentropes.map((c, i) => {
@@ -160,7 +184,7 @@ export function pressureEnthalpyChart(
     ),
   );
   layers.push(...isentropeLabels);
-  layers.push(...fixed.critical);
+  layers.push(...fixed.critical, ...mixture.critical);
 
   const spec = topLevel(
     "pressure-enthalpy",

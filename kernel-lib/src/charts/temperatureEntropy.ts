@@ -4,7 +4,8 @@
  */
 import { InputError } from "../errors.js";
 import type { ChartSpec } from "./chartSpec.js";
-import { energyDomeLayers } from "./domeLayers.js";
+import { energyDomeLayers, mixtureEnergyDomeLayers } from "./domeLayers.js";
+import { checkMixtureDome, type ChartMixtureDome } from "./mixtureDomeInput.js";
 import { energyBasis } from "./energyBasis.js";
 import { checkQualities } from "./pressureEnthalpy.js";
 import {
@@ -36,6 +37,12 @@ export interface TemperatureEntropyData {
   critical?: ChartCriticalPoint;
   /** Notes of a sampled dome (saturationFromModel), copied into the chart's warnings. */
   domeWarnings?: readonly string[];
+  /**
+   * The two-phase region of a mixture (mixtureDomeFromFluid): bubble and dew lines of the feed,
+   * its critical point and lines of constant vapour fraction. Drawn instead of, or beside, the
+   * pure-fluid `saturation` rows.
+   */
+  mixtureDome?: ChartMixtureDome;
   /** Isobars, one series each. */
   isobars?: readonly {
     pressurePa: number;
@@ -66,12 +73,13 @@ export function temperatureEntropyChart(
 ): ChartSpec {
   const saturation = checkSaturation(data.saturation);
   const critical = checkCritical(data.critical);
+  const mixtureDome = checkMixtureDome(data.mixtureDome);
   const isobars = checkArray("isobars", data.isobars);
-  if (saturation.length === 0 && isobars.length === 0) {
+  if (saturation.length === 0 && mixtureDome === undefined && isobars.length === 0) {
     throw new InputError({
       input: "data",
       unit: "-",
-      validRange: "saturation rows or isobars",
+      validRange: "saturation rows, a mixture dome or isobars",
       received: "nothing to draw",
     });
   }
@@ -102,7 +110,18 @@ export function temperatureEntropyChart(
     yAxis,
     warnings,
   );
-  const layers: Record<string, unknown>[] = [...fixed.dome];
+  const mixture = mixtureDome
+    ? mixtureEnergyDomeLayers(
+        mixtureDome,
+        "entropyJPerMolK",
+        "temperatureK",
+        basis,
+        xAxis,
+        yAxis,
+        warnings,
+      )
+    : { dome: [], critical: [] };
+  const layers: Record<string, unknown>[] = [...fixed.dome, ...mixture.dome];
   layers.push(
     ...constantValueSeriesLayers(
       {
@@ -122,7 +141,7 @@ export function temperatureEntropyChart(
       warnings,
     ),
   );
-  layers.push(...fixed.critical);
+  layers.push(...fixed.critical, ...mixture.critical);
   return topLevel(
     "temperature-entropy",
     "Temperature-entropy diagram",

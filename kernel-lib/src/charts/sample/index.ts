@@ -16,3 +16,5 @@ export { surfaceFromFluid } from "./surfaceFromFluid.js";
 export type { SurfaceSampleOptions } from "./surfaceFromFluid.js";
 export type { DisplayQuantityKindInput } from "./surfaceTypes.js";
 export type { SampleProgress } from "./sampleGuard.js";
+export { mixtureDomeFromFluid } from "./mixtureDomeFromFluid.js";
+export type { MixtureDomeSampleOptions, SampledMixtureDome } from "./mixtureDomeFromFluid.js";

@@ -23,3 +23,10 @@ export type {
 } from "./phaseEnvelope.js";
 export { mixtureCriticalPoint } from "./mixtureCriticalPoint.js";
 export type { MixtureCriticalPoint, MixtureCriticalOptions } from "./mixtureCriticalPoint.js";
+export { wetGasEnvelope } from "./wetGasEnvelope.js";
+export type {
+  WetGasEnvelope,
+  WetGasEnvelopeOptions,
+  WaterDewPoint,
+  BracketFlash,
+} from "./wetGasEnvelope.js";

@@ -387,7 +387,11 @@ export function phaseEnvelope(
     }
   }
 
-  const stoppedBecause = complete ? undefined : reasons.join(" | ");
+  let stoppedBecause = complete ? undefined : reasons.join(" | ");
+  if (stoppedBecause !== undefined && /third phase \(water/.test(stoppedBecause)) {
+    stoppedBecause +=
+      " | water forms its own liquid phase in this feed: wetGasEnvelope (phase/envelope/wetGasEnvelope.ts) gives the hydrocarbon envelope on a water-free basis and the water dew line, each point verified";
+  }
   if (!complete) {
     warnings.push({
       code: stoppedBecause?.includes("third phase") ? "phase-split" : "model-limitation",

@@ -150,9 +150,12 @@ export function solveMultiphaseSplit(
       if (t === tMax)
         for (let k = 0; k < np; k++) if (step[k] < 0 && -beta[k] / step[k] === tMax) trial[k] = 0;
       const qt = evalQ(trial);
-      // near the minimum the decrease of Q (~ |g|^2) is below its rounding: there a step is
-      // accepted when it reduces the largest free gradient instead
-      const better = gmax < 1e-6 ? gradientMax(trial) < gmax : qt <= q + 1e-4 * t * slope;
+      // near the minimum the decrease of Q (~ |g|^2 / H) is below its rounding: there a step is
+      // accepted when it reduces the largest free gradient instead. "Near" is judged by the
+      // predicted decrease as well as by the gradient: with a trace phase (e.g. 1e-5 mol of
+      // water) H is large and Q stops resolving its decrease while |g| is still about 1e-6
+      const belowRounding = gmax < 1e-6 || -t * slope < 1e-12 * Math.max(1, Math.abs(q));
+      const better = belowRounding ? gradientMax(trial) < gmax : qt <= q + 1e-4 * t * slope;
       if (better) {
         q = qt;
         accepted = true;
