@@ -17,6 +17,7 @@ export * from "./eos/index.js";
 export * from "./departure/index.js";
 export * from "./state/index.js";
 export * from "./phase/index.js";
+export * from "./sweep/index.js";
 export * from "./fluid/index.js";
 export * from "./charts/index.js";
 export * from "./tables/index.js";

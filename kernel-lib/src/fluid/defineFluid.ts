@@ -68,6 +68,8 @@ import {
   type StateFlashOptions,
 } from "../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium, StateFunctionEquilibrium } from "../phase/flash/types.js";
+import { runSweep } from "../sweep/runSweep.js";
+import type { SweepRequest, SweepResult } from "../sweep/types.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
 // x). Not frozen: a frozen array has other elements kinds and slowed every state call by half.
@@ -243,6 +245,23 @@ export interface Fluid extends FluidBinding {
     x?: readonly number[],
     options?: InversionOptions,
   ): InversionResult;
+  /**
+   * Many states at once (sweep/): arrays or ranges of (T, P), (T, rho), (P, h) or (P, s), the
+   * wanted properties written into Float64Arrays, a phase count and kind and an error code per
+   * point (a failing point never stops the sweep). Mixture points that split are flashed.
+   * @example
+   * ```ts
+   * const r = fluid.sweep({ specification: "TP", first: { from: 200, to: 500, count: 200 },
+   *   second: { from: 1e5, to: 20e6, count: 200 }, properties: ["h", "s"] });
+   * r.values.h; // Float64Array of 40,000 J/mol, T-major
+   * ```
+   */
+  sweep(request: SweepRequest): SweepResult;
+  /**
+   * The definition this fluid was built from (components, model, k_ij, ideal gas, reference
+   * state), kept so that worker threads can build the same fluid (parallel/).
+   */
+  readonly spec: FluidSpec;
   /** T at (P, s) in one phase (compressors, expanders). */
   temperatureAtPS(
     pressurePa: number,
@@ -613,5 +632,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
     flashUV: (u, rho, x, options) => flashUV(binding, u, rho, xOf(x), withConstants(options)),
     temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),
     temperatureAtPS: (P, s, x, options) => temperatureAtPS(binding, P, s, xOf(x), options),
+    sweep: (request) => runSweep({ binding, constants: components }, request),
+    spec,
   };
 }

@@ -28,6 +28,7 @@ const LAYERS: readonly (readonly string[])[] = [
   ["departure"],
   ["state"],
   ["phase"],
+  ["sweep"],
   ["fluid"],
   ["process", "pvt"],
   ["charts", "tables", "explorers"],
