@@ -50,6 +50,16 @@ const RATIOS: readonly { case: string; baseline: string; meaning: string }[] = [
     baseline: "pr-mix10-TP-residual-only",
     meaning: "cost of the state with the ideal-gas correlations over the engine alone",
   },
+  {
+    case: "grid-residual-200x200-per-state",
+    baseline: "grid-residual-200x200",
+    meaning: "speed-up of fluid.sweep over one stateAtTP per point (residual h, s grid)",
+  },
+  {
+    case: "surface-200x200",
+    baseline: "surface-200x200-sweep",
+    meaning: "speed-up of fluid.sweep over one stateAtTP per point (h, s surface)",
+  },
 ];
 
 const round3 = (v: number) => Math.round(v * 1000) / 1000;

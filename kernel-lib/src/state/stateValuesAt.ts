@@ -9,7 +9,7 @@ import { R as R_CODATA } from "../constants.js";
 import { OutOfRangeError, PhaseUnavailableError } from "../errors.js";
 import type { ResidualDerivativesDraft, ResidualModel } from "../eos/types.js";
 import { pressureFromResidual } from "../eos/residualRelations.js";
-import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
+import { checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
 import { chooseDensityRootInto, emptyRootChoice, type RootChoice } from "./rootChoice.js";
 import { residualValuesInto, stateValuesInto, type StateValues } from "./properties.js";
 import { idealGasAt, mixtureMolarMass } from "./stateAt.js";
@@ -74,6 +74,7 @@ export type LeanExtent = "residual" | "all";
  * `extent` "residual": pressure, Z and the departures only); returns its phase label (the rule of
  * state/phaseLabel.ts, as stateAtTP). Throws the typed errors of stateAtTP for bad input and for
  * a missing root; the root at a phase-boundary tie is the one stateAtTP returns (no warning here).
+ * The composition is not checked here: the caller checks it once for all its states.
  */
 export function stateValuesAtTP(
   binding: FluidBinding & { model: LeanModel },
@@ -87,7 +88,6 @@ export function stateValuesAtTP(
   const model = binding.model;
   checkTemperature(temperatureK);
   checkPressure(pressurePa);
-  checkComposition(x, model.info.componentIds.length);
   const count = model.densityRootsInto(temperatureK, pressurePa, x, scratch.roots);
   const choice = scratch.choice;
   const d = chooseDensityRootInto(
@@ -123,7 +123,7 @@ export function stateValuesAtTP(
 
 /**
  * The state at T (K), rho (mol/m3), x into `scratch.values`; returns its phase label (as
- * stateAtTRho). Throws the typed errors of stateAtTRho.
+ * stateAtTRho). Throws the typed errors of stateAtTRho. The composition is not checked here.
  */
 export function stateValuesAtTRho(
   binding: FluidBinding & { model: LeanModel },
@@ -136,7 +136,6 @@ export function stateValuesAtTRho(
   const model = binding.model;
   checkTemperature(temperatureK);
   checkDensity(densityMolPerM3);
-  checkComposition(x, model.info.componentIds.length);
   const max = model.maxDensity(temperatureK, x);
   if (!(densityMolPerM3 < max)) {
     throw new OutOfRangeError({

@@ -242,11 +242,35 @@ const NEEDS_ALL: ReadonlySet<SweepProperty> = new Set<SweepProperty>([
   "cvRes",
 ]);
 
-// property ids (indices in SWEEP_PROPERTIES), for the switch of the write loop
-const ID = Object.fromEntries(SWEEP_PROPERTIES.map((p, i) => [p, i])) as Record<
-  SweepProperty,
-  number
->;
+// property ids (indices in SWEEP_PROPERTIES; a test checks the order), for the switch of the
+// write loop: a literal object of constants (Object.fromEntries made a slow dictionary)
+export const PROPERTY_ID = {
+  T: 0,
+  P: 1,
+  rho: 2,
+  rhoMass: 3,
+  Z: 4,
+  h: 5,
+  s: 6,
+  u: 7,
+  a: 8,
+  g: 9,
+  cp: 10,
+  cv: 11,
+  w: 12,
+  jt: 13,
+  kappaT: 14,
+  beta: 15,
+  hRes: 16,
+  sRes: 17,
+  uRes: 18,
+  aRes: 19,
+  gRes: 20,
+  cpRes: 21,
+  cvRes: 22,
+  quality: 23,
+} as const;
+const ID = PROPERTY_ID;
 
 /** One point's numbers, shared by every path (a reused record of plain numbers). */
 interface Point {
@@ -470,10 +494,24 @@ export function evaluateSweepRange(
   for (let k = 0; k < nProps; k++) perAmount[k] = PER_AMOUNT.has(plan.properties[k]) ? 1 : 0;
   let failed = 0;
   let nextChunk = start + chunk;
+  // grid position of point `start`, advanced without a division per point
+  let row = grid ? Math.floor(start / n2) : 0;
+  let col = grid ? start - row * n2 : 0;
   for (let i = start; i < end; i++) {
     const local = i - start;
-    const a = grid ? plan.firstAxis[(i / n2) | 0] : plan.firstAxis[i];
-    const b = grid ? plan.secondAxis[i % n2] : plan.secondAxis[i];
+    let a: number;
+    let b: number;
+    if (grid) {
+      a = plan.firstAxis[row];
+      b = plan.secondAxis[col];
+      if (++col === n2) {
+        col = 0;
+        row++;
+      }
+    } else {
+      a = plan.firstAxis[i];
+      b = plan.secondAxis[i];
+    }
     try {
       evaluatePoint(ctx, a, b);
       const pt = ctx.pt;

@@ -290,3 +290,12 @@ describe("per-point errors never stop a sweep", () => {
     expect(r.units.h).toBe("J/kg");
   });
 });
+
+describe("the property ids of the write loop", () => {
+  it("follow SWEEP_PROPERTIES", async () => {
+    const { PROPERTY_ID } = await import("../../../kernel-lib/src/sweep/runSweep.js");
+    const { SWEEP_PROPERTIES } = await import("../../../kernel-lib/src/sweep/types.js");
+    expect(Object.keys(PROPERTY_ID)).toEqual(SWEEP_PROPERTIES);
+    expect(Object.values(PROPERTY_ID)).toEqual(SWEEP_PROPERTIES.map((_, i) => i));
+  });
+});
