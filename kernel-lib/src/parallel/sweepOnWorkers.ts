@@ -146,6 +146,8 @@ export async function sweepOnWorkers(
   let failed = 0;
   const pool: Worker[] = [];
   const doneBy = new Float64Array(n);
+  // a worker whose job is done is terminated, which exits it with code 1: not a failure
+  const jobDone = new Uint8Array(n);
   try {
     await new Promise<void>((resolve, reject) => {
       let finished = 0;
@@ -173,6 +175,7 @@ export async function sweepOnWorkers(
           } else if (m.type === "fail") {
             stop(new IsochorError("runner-failed", `sweep worker ${k + 1} of ${n}: ${m.message}`));
           } else {
+            jobDone[k] = 1;
             copyInto(columns, m, m.start);
             failed += m.failed;
             errors.push(...m.errors);
@@ -186,7 +189,7 @@ export async function sweepOnWorkers(
         });
         w.on("error", (e) => stop(e));
         w.on("exit", (code) => {
-          if (!settled && code !== 0) {
+          if (!settled && jobDone[k] === 0) {
             stop(new IsochorError("runner-failed", `sweep worker ${k + 1} exited with ${code}`));
           }
         });
