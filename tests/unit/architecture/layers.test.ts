@@ -32,7 +32,7 @@ const LAYERS: readonly (readonly string[])[] = [
   ["fluid"],
   ["process", "pvt"],
   ["charts", "tables", "explorers"],
-  ["display", "progress", "records", "cli", "parallel"],
+  ["display", "progress", "records", "cli", "parallel", "propertyTables"],
   ["core.ts"],
   ["index.ts"],
 ];
