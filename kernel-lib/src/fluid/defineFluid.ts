@@ -646,6 +646,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
     temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),
     temperatureAtPS: (P, s, x, options) => temperatureAtPS(binding, P, s, xOf(x), options),
     sweep: (request) => runSweep({ binding, constants: components }, request),
-    spec,
+    // a copy: a caller who edits the spec object later does not change what workers rebuild
+    spec: { ...spec, components: [...spec.components] },
   };
 }
