@@ -72,6 +72,11 @@ const RATIOS: readonly {
     meaning: "scaling from 1 worker to all cores (wall clock; ideal: the number of cores)",
     clock: "wall",
   },
+  {
+    case: "transport-mix10-TRho",
+    baseline: "pr-mix10-TP",
+    meaning: "cost of viscosity and conductivity (Chung) over the state of the same gas",
+  },
 ];
 
 const round3 = (v: number) => Math.round(v * 1000) / 1000;

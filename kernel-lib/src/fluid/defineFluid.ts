@@ -72,6 +72,8 @@ import {
 import type { Equilibrium, StateFunctionEquilibrium } from "../phase/flash/types.js";
 import { runSweep } from "../sweep/runSweep.js";
 import type { SweepRequest, SweepResult } from "../sweep/types.js";
+import { transportOfState } from "../transport/transportAt.js";
+import type { TransportOfState, TransportOptions } from "../transport/types.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
 // x). Not frozen: a frozen array has other elements kinds and slowed every state call by half.
@@ -125,6 +127,9 @@ export interface FluidStateAtTPOptions extends StateAtTPOptions {
    */
   checkStability?: boolean;
 }
+
+/** Options of a fluid's `transportAtTP`: the state's (phase choice, stability) and the method's. */
+export interface FluidTransportOptions extends FluidStateAtTPOptions, TransportOptions {}
 
 /** A bound fluid with its state functions. */
 export interface Fluid extends FluidBinding {
@@ -271,6 +276,18 @@ export interface Fluid extends FluidBinding {
     x?: readonly number[],
     options?: InversionOptions,
   ): InversionResult;
+  /**
+   * Viscosity (Pa s) and thermal conductivity (W/(m K)) of the single-phase state at T (K),
+   * P (Pa) (transport/: IAPWS 2008/2011 for IAPWS-95 water, Chung et al. 1988 otherwise).
+   */
+  transportAtTP(
+    temperatureK: number,
+    pressurePa: number,
+    x?: readonly number[],
+    options?: FluidTransportOptions,
+  ): TransportOfState;
+  /** Viscosity and thermal conductivity of a state of this fluid (e.g. one phase of a flash). */
+  transportOfState(state: FluidState, options?: TransportOptions): TransportOfState;
 }
 
 function resolveComponents(spec: FluidSpec): Component[] {
@@ -601,6 +618,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
       received: x,
     });
   };
+  const transportFluid = { ...binding, components };
   // the flashes' stability tests start from this fluid's critical constants (Wilson K-factors)
   const withConstants = <O extends FlashOptions>(options: O | undefined): O =>
     ({
@@ -648,5 +666,12 @@ export function defineFluid(spec: FluidSpec): Fluid {
     sweep: (request) => runSweep({ binding, constants: components }, request),
     // a copy: a caller who edits the spec object later does not change what workers rebuild
     spec: { ...spec, components: [...spec.components] },
+    transportAtTP: (T, P, x, options) =>
+      transportOfState(
+        transportFluid,
+        stateWithStabilityCheck(binding, T, P, xOf(x), options),
+        options,
+      ),
+    transportOfState: (state, options) => transportOfState(transportFluid, state, options),
   };
 }
