@@ -29,6 +29,12 @@ export interface BenchCase {
   /** Measurement options of this case (they win over the command line's), e.g. few samples for slow calls. */
   readonly measure?: MeasureOptions;
   setup(): () => unknown;
+  /**
+   * Instead of `setup`, for work that ends asynchronously (worker threads): the function timed
+   * per call returns a promise; measured by {@link measureAsync} (one warm-up call, then
+   * `measure.samples` calls). `setup` is then never called.
+   */
+  setupAsync?(): () => Promise<unknown>;
 }
 
 /** Options of {@link measure}. */
@@ -150,4 +156,37 @@ export function measure(fn: () => unknown, options: MeasureOptions = {}): Timing
 /** Keeps results alive so the optimiser cannot drop the work. */
 export function consumed(): unknown {
   return sink;
+}
+
+/**
+ * Median seconds per call of an asynchronous `fn` (e.g. a sweep on worker threads): one warm-up
+ * call, then `samples` calls, each timed alone. The process CPU time counts every thread of the
+ * process (workers included), so `cpu` is the total work and `wall` the elapsed time.
+ */
+export async function measureAsync(
+  fn: () => Promise<unknown>,
+  options: MeasureOptions = {},
+): Promise<Timing> {
+  const samples = options.samples ?? 3;
+  const w0 = performance.now();
+  sink = await fn();
+  const warmupSeconds = (performance.now() - w0) / 1000;
+  const wall: number[] = [];
+  const cpu: number[] = [];
+  for (let s = 0; s < samples; s++) {
+    const c0 = cpuSeconds();
+    const t0 = performance.now();
+    sink = await fn();
+    wall.push((performance.now() - t0) / 1000);
+    cpu.push(cpuSeconds() - c0);
+  }
+  return {
+    cpu: median(cpu),
+    wall: median(wall),
+    cpuMin: Math.min(...cpu),
+    samples,
+    callsPerBatch: 1,
+    warmupSeconds,
+    settled: true,
+  };
 }

@@ -25,11 +25,17 @@
  */
 import * as os from "node:os";
 import { spawnSync } from "node:child_process";
-import { measure, consumed, median, type Timing } from "./harness.js";
+import { measure, measureAsync, consumed, median, type Timing } from "./harness.js";
 import { allCases } from "./cases/index.js";
 
 /** Case / baseline pairs reported as ratios (both must have run). */
-const RATIOS: readonly { case: string; baseline: string; meaning: string }[] = [
+const RATIOS: readonly {
+  case: string;
+  baseline: string;
+  meaning: string;
+  /** Which clock the ratio compares (default "cpu"; "wall" for work spread over threads). */
+  clock?: "cpu" | "wall";
+}[] = [
   {
     case: "departure-numeric",
     baseline: "departure-closed-form",
@@ -49,6 +55,22 @@ const RATIOS: readonly { case: string; baseline: string; meaning: string }[] = [
     case: "pr-mix10-TP",
     baseline: "pr-mix10-TP-residual-only",
     meaning: "cost of the state with the ideal-gas correlations over the engine alone",
+  },
+  {
+    case: "grid-residual-200x200-per-state",
+    baseline: "grid-residual-200x200",
+    meaning: "speed-up of fluid.sweep over one stateAtTP per point (residual h, s grid)",
+  },
+  {
+    case: "surface-200x200",
+    baseline: "surface-200x200-sweep",
+    meaning: "speed-up of fluid.sweep over one stateAtTP per point (h, s surface)",
+  },
+  {
+    case: "sweep-1e6-mix10-1worker",
+    baseline: "sweep-1e6-mix10",
+    meaning: "scaling from 1 worker to all cores (wall clock; ideal: the number of cores)",
+    clock: "wall",
   },
   {
     case: "transport-mix10-TRho",
@@ -88,10 +110,12 @@ function parseArgs(argv: readonly string[]): Args {
   return args;
 }
 
-function runWorker(name: string, samples: number): void {
+async function runWorker(name: string, samples: number): Promise<void> {
   const c = allCases.find((k) => k.name === name);
   if (!c) throw new Error(`no bench case named ${name}`);
-  const timing = measure(c.setup(), { samples, ...c.measure });
+  const timing = c.setupAsync
+    ? await measureAsync(c.setupAsync(), { samples, ...c.measure })
+    : measure(c.setup(), { samples, ...c.measure });
   process.stdout.write(JSON.stringify(timing) + "\n");
   void consumed();
 }
@@ -183,11 +207,16 @@ function runAll(args: Args): void {
     if (value === undefined || base === undefined) continue;
     const a = timings.get(r.case)!;
     const b = timings.get(r.baseline)!;
-    const perRound = a.slice(0, b.length).map((t, i) => t.cpu / b[i].cpu);
+    const wall = r.clock === "wall";
+    const perRound = a
+      .slice(0, b.length)
+      .map((t, i) => (wall ? t.wall / b[i].wall : t.cpu / b[i].cpu));
+    const ratio = wall ? median(a.map((t) => t.wall)) / median(b.map((t) => t.wall)) : value / base;
     process.stdout.write(
       JSON.stringify({
         ratio: `${r.case} / ${r.baseline}`,
-        value: value / base,
+        clock: r.clock ?? "cpu",
+        value: ratio,
         spreadMin: Math.min(...perRound),
         spreadMax: Math.max(...perRound),
         meaning: r.meaning,
@@ -208,5 +237,5 @@ function runAll(args: Args): void {
 }
 
 const args = parseArgs(process.argv.slice(2));
-if (args.worker !== undefined) runWorker(args.worker, args.samples);
+if (args.worker !== undefined) void runWorker(args.worker, args.samples);
 else runAll(args);

@@ -8,3 +8,5 @@ export * from "./records/index.js";
 export * from "./progress/index.js";
 export { readPvtCsvFile } from "./pvt/readPvtCsvFile.js";
 export * from "./explorers/index.js";
+export * from "./parallel/index.js";
+export * from "./propertyTables/index.js";

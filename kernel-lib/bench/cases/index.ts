@@ -6,6 +6,7 @@ import { envelopeCases } from "./envelopeCases.js";
 import { flashCases } from "./flashCases.js";
 import { pvtCases } from "./pvtCases.js";
 import { processCases } from "./processCases.js";
+import { sweepCases } from "./sweepCases.js";
 import { transportCases } from "./transportCases.js";
 
 export const allCases: BenchCase[] = [
@@ -15,5 +16,6 @@ export const allCases: BenchCase[] = [
   ...flashCases,
   ...pvtCases,
   ...processCases,
+  ...sweepCases,
   ...transportCases,
 ];

@@ -23,6 +23,9 @@ import { referenceFluidIds } from "../eos/multiparameter/referenceFluids.js";
 import type { ReferenceState } from "../idealgas/types.js";
 import type { ConstantOverrides } from "../fluid/defineFluid.js";
 import type { DepartureMethod, PhaseRequest } from "../state/types.js";
+import { getComponent } from "../components/getComponent.js";
+import { parseQuantity } from "../units/quantity.js";
+import type { Dimension } from "../units/dimension.js";
 import schema from "./schema/eval-request.schema.json";
 
 /**
@@ -188,6 +191,8 @@ function requestError(e: ErrorObject): RequestError {
       const expected = `expected ${allowed.length > 1 ? "one of " : ""}${allowed.map((c) => JSON.stringify(c)).join(", ")}`;
       return new RequestError(path, rule !== undefined ? `${rule}, ${got}` : `${expected}, ${got}`);
     }
+    case "anyOf":
+      return new RequestError(path, `${rule ?? "matches none of the allowed forms"}, ${got}`);
     case "exclusiveMinimum":
       return new RequestError(path, `must be > ${String(e.schema)}, ${got}`);
     case "minimum":
@@ -213,7 +218,73 @@ export function parseEvalRequest(raw: Json): EvalRequest {
   const validate = validator();
   if (!validate(raw)) throw requestError(firstProblem(validate.errors ?? []));
   checkCounts(raw as unknown as RequestJson);
-  return toRequest(raw as unknown as RequestJson);
+  return toRequest(withQuantities(raw as unknown as RequestJson));
+}
+
+/** Dimension of each state field given as a quantity with its unit. */
+const STATE_DIMENSIONS: Readonly<Record<string, Dimension>> = {
+  T: "temperature",
+  P: "pressure",
+  rho: "molar-density",
+  h: "molar-energy",
+  s: "molar-entropy",
+  u: "molar-energy",
+};
+
+/** Molar mass of the feed, kg/mol, or undefined when a component is unknown to the table. */
+function feedMolarMass(r: RequestJson): number | undefined {
+  const x = r.x ?? [1];
+  let M = 0;
+  for (let i = 0; i < r.components.length; i++) {
+    const given = r.constants?.[i]?.M;
+    let Mi: number;
+    if (given !== undefined) Mi = given;
+    else {
+      try {
+        Mi = getComponent(r.components[i]).molarMassKgPerMol;
+      } catch {
+        return undefined;
+      }
+    }
+    M += x[i] * Mi;
+  }
+  return M;
+}
+
+/**
+ * State fields given as text ("30 degC", "60 barg", "-350 kJ/kg") turned into SI numbers by the
+ * units module (the same rules and refusals as the library: gauge pressure against 101325 Pa,
+ * "psi" ambiguous, mass-based units through the feed's molar mass).
+ */
+function withQuantities(r: RequestJson): RequestJson {
+  if (r.states === undefined || !r.states.some((s) => Object.values(s).some(isText))) return r;
+  const M = feedMolarMass(r);
+  const states = r.states.map((state, i) => {
+    const out: Record<string, unknown> = { ...state };
+    for (const [field, value] of Object.entries(state)) {
+      const dimension = STATE_DIMENSIONS[field];
+      if (dimension === undefined || typeof value !== "string") continue;
+      const path = `$.states[${i}].${field}`;
+      try {
+        out[field] = parseQuantity(value, {
+          dimension,
+          molarMassKgPerMol: M,
+          input: path,
+        }).value;
+      } catch (e) {
+        throw new RequestError(
+          path,
+          `${JSON.stringify(value)}: ${e instanceof Error ? e.message : String(e)}`,
+        );
+      }
+    }
+    return out as StateJson;
+  });
+  return { ...r, states };
+}
+
+function isText(v: unknown): v is string {
+  return typeof v === "string";
 }
 
 /** A request that passed the schema (types as the schema says). */
@@ -234,6 +305,7 @@ interface RequestJson {
 }
 
 interface StateJson {
+  // numbers in SI, or quantities with their units as text until withQuantities converts them
   T?: number;
   P?: number;
   rho?: number;

@@ -136,6 +136,26 @@ export interface ResidualModel {
    */
   densityRoots?(temperatureK: number, pressurePa: number, x: readonly number[]): number[];
   /**
+   * Optional (sweeps): {@link densityRoots} written into `out` (length >= 3), ascending, their
+   * number returned; no allocation. Must give the same numbers as `densityRoots`.
+   */
+  densityRootsInto?(
+    temperatureK: number,
+    pressurePa: number,
+    x: readonly number[],
+    out: Float64Array,
+  ): number;
+  /**
+   * Optional (sweeps): the derivatives of {@link residual} without composition derivatives,
+   * written into `out` (no allocation). Must give the same numbers as `residual`.
+   */
+  residualInto?(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+    out: ResidualDerivativesDraft,
+  ): void;
+  /**
    * Optional (added by the engine issue, additive): the pressure P(T, rho, x) in Pa alone, for
    * models where the full residual is expensive (pressure-function models integrate); root searches
    * use it when present. Must equal rho R T (1 + aD).

@@ -69,6 +69,8 @@ import {
   type StateFlashOptions,
 } from "../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium, StateFunctionEquilibrium } from "../phase/flash/types.js";
+import { runSweep } from "../sweep/runSweep.js";
+import type { SweepRequest, SweepResult } from "../sweep/types.js";
 import { transportOfState } from "../transport/transportAt.js";
 import type { TransportOfState, TransportOptions } from "../transport/types.js";
 import { referenceIdealGasMixture } from "../eos/multiparameter/referenceIdealGas.js";
@@ -295,6 +297,23 @@ export interface Fluid extends FluidBinding {
     x?: readonly number[],
     options?: InversionOptions,
   ): InversionResult;
+  /**
+   * Many states at once (sweep/): arrays or ranges of (T, P), (T, rho), (P, h) or (P, s), the
+   * wanted properties written into Float64Arrays, a phase count and kind and an error code per
+   * point (a failing point never stops the sweep). Mixture points that split are flashed.
+   * @example
+   * ```ts
+   * const r = fluid.sweep({ specification: "TP", first: { from: 200, to: 500, count: 200 },
+   *   second: { from: 1e5, to: 20e6, count: 200 }, properties: ["h", "s"] });
+   * r.values.h; // Float64Array of 40,000 J/mol, T-major
+   * ```
+   */
+  sweep(request: SweepRequest): SweepResult;
+  /**
+   * The definition this fluid was built from (components, model, k_ij, ideal gas, reference
+   * state), kept so that worker threads can build the same fluid (parallel/).
+   */
+  readonly spec: FluidSpec;
   /**
    * T at (P, s) in one phase (compressors, expanders).
    * @deprecated Use `fluid.state({ P, s, x })`, which finds the phases.
@@ -692,6 +711,9 @@ export function defineFluid(spec: FluidSpec): Fluid {
     flashUV: (u, rho, x, options) => flashUV(binding, u, rho, xOf(x), withConstants(options)),
     temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),
     temperatureAtPS: (P, s, x, options) => temperatureAtPS(binding, P, s, xOf(x), options),
+    sweep: (request) => runSweep({ binding, constants: components }, request),
+    // a copy: a caller who edits the spec object later does not change what workers rebuild
+    spec: { ...spec, components: [...spec.components] },
     transportAtTP: (T, P, x, options) =>
       transportOfState(
         transportFluid,

@@ -126,6 +126,151 @@ export function residualProperties(
 // the warnings of a state that has none, shared (FluidState.warnings is read-only)
 const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 
+/**
+ * Every number of a state, as plain fields (a record a caller keeps and reuses: sweeps fill one
+ * per point without allocating). Molar SI values; `residual*` relative to the ideal gas at the
+ * same T and P, `residualTV*` at the same T and density.
+ */
+export interface StateValues {
+  pressurePa: number;
+  Z: number;
+  h: number;
+  s: number;
+  u: number;
+  a: number;
+  g: number;
+  cp: number;
+  cv: number;
+  hRes: number;
+  uRes: number;
+  sTV: number;
+  aTV: number;
+  gTV: number;
+  sTP: number;
+  aTP: number;
+  gTP: number;
+  lnZ: number;
+  cvRes: number;
+  dPdRho: number;
+  dPdT: number;
+  /** NaN for a mechanically unstable state. */
+  speedOfSound: number;
+  kappaT: number;
+  beta: number;
+  jt: number;
+  isentropicExponent: number;
+}
+
+/** A fresh {@link StateValues} (all NaN). */
+export function emptyStateValues(): StateValues {
+  return {
+    pressurePa: NaN,
+    Z: NaN,
+    h: NaN,
+    s: NaN,
+    u: NaN,
+    a: NaN,
+    g: NaN,
+    cp: NaN,
+    cv: NaN,
+    hRes: NaN,
+    uRes: NaN,
+    sTV: NaN,
+    aTV: NaN,
+    gTV: NaN,
+    sTP: NaN,
+    aTP: NaN,
+    gTP: NaN,
+    lnZ: NaN,
+    cvRes: NaN,
+    dPdRho: NaN,
+    dPdT: NaN,
+    speedOfSound: NaN,
+    kappaT: NaN,
+    beta: NaN,
+    jt: NaN,
+    isentropicExponent: NaN,
+  };
+}
+
+/**
+ * Only the departures of a state at the same T and P (h_r J/mol, s_r J/(mol K), u_r, a_r, g_r,
+ * ln Z) into `out` (the other fields untouched): the residual sweeps' path, the formulas of the header.
+ */
+export function residualValuesInto(
+  temperatureK: number,
+  d: ResidualDerivatives,
+  gasConstant: number,
+  out: StateValues,
+): void {
+  residualParts(temperatureK, d, gasConstant);
+  out.hRes = parts.h;
+  out.uRes = parts.u;
+  out.sTV = parts.sTV;
+  out.aTV = parts.aTV;
+  out.gTV = parts.gTV;
+  out.sTP = parts.sTP;
+  out.aTP = parts.aTP;
+  out.gTP = parts.gTP;
+  out.lnZ = parts.lnZ;
+}
+
+/**
+ * Every property of the header at T (K), rho (mol/m3) from the residual derivatives and the ideal
+ * gas (any pressure), into `out`: assembleState builds its record from these very numbers, so a
+ * sweep that fills `out` gets the single-state values to the last bit.
+ */
+export function stateValuesInto(
+  temperatureK: number,
+  densityMolPerM3: number,
+  d: ResidualDerivatives,
+  ig: IdealGasProperties,
+  molarMassKgPerMol: number,
+  gasConstant: number,
+  out: StateValues,
+): void {
+  const Rg = gasConstant;
+  const T = temperatureK;
+  const rho = densityMolPerM3;
+  const RT = Rg * T;
+  const Z = 1 + d.aD;
+  const P = pressureFromResidual(T, rho, d.aD, Rg);
+  residualValuesInto(T, d, Rg, out);
+  // derivatives and heat capacities
+  const dPdr = dPdRho(T, d, Rg);
+  const dPdT = dPdTAtDensity(rho, d, Rg);
+  const cvRes = -Rg * (2 * d.aT + d.aTT);
+  const cv = ig.cv + cvRes;
+  const cp = cv + (T * dPdT * dPdT) / (rho * rho * dPdr);
+  const M = molarMassKgPerMol;
+  const stable = dPdr > 0;
+  const w2 = ((cp / cv) * dPdr) / M;
+  const kappaT = 1 / (rho * dPdr);
+  const beta = kappaT * dPdT;
+  // absolute: ideal gas at the same T and density plus the TV residuals
+  const lnPressureShift = Math.log((rho * RT) / ig.pressurePa);
+  out.pressurePa = P;
+  out.Z = Z;
+  out.h = ig.h + out.hRes;
+  out.s = ig.s - Rg * lnPressureShift + out.sTV;
+  out.u = ig.u + out.uRes;
+  out.a = ig.a + RT * lnPressureShift + out.aTV;
+  out.g = ig.g + RT * lnPressureShift + out.gTV;
+  out.cp = cp;
+  out.cv = cv;
+  out.cvRes = cvRes;
+  out.dPdRho = dPdr;
+  out.dPdT = dPdT;
+  out.speedOfSound = stable && w2 > 0 ? Math.sqrt(w2) : NaN;
+  out.kappaT = kappaT;
+  out.beta = beta;
+  out.jt = (T * beta - 1) / (rho * cp);
+  out.isentropicExponent = ((cp / cv) * rho * dPdr) / P;
+}
+
+// the values of the current assembleState call (read out at once, single-threaded)
+const assembled = emptyStateValues();
+
 /** Builds the full state record (see the header for every formula). */
 export function assembleState(input: StateInputs): FluidState {
   const Rg = input.gasConstant ?? R_CODATA;
@@ -133,42 +278,23 @@ export function assembleState(input: StateInputs): FluidState {
   const rho = input.densityMolPerM3;
   const d = input.residual;
   const ig = input.ideal;
-  const RT = Rg * T;
-  const Z = 1 + d.aD;
-  const P = pressureFromResidual(T, rho, d.aD, Rg);
-  residualParts(T, d, Rg);
-  const hRes = parts.h;
-  const uRes = parts.u;
-  const sTV = parts.sTV;
-  const aTV = parts.aTV;
-  const gTV = parts.gTV;
-  const sTP = parts.sTP;
-  const aTP = parts.aTP;
-  const gTP = parts.gTP;
-  const lnPhi = lnPhiOf(d, parts.lnZ);
-  // derivatives and heat capacities
-  const dPdr = dPdRho(T, d, Rg);
-  const dPdT = dPdTAtDensity(rho, d, Rg);
-  const cvRes = -Rg * (2 * d.aT + d.aTT);
-  const cv = ig.cv + cvRes;
-  const cp = cv + (T * dPdT * dPdT) / (rho * rho * dPdr);
   const M = input.molarMassKgPerMol;
+  const v = assembled;
+  stateValuesInto(T, rho, d, ig, M, Rg, v);
+  const P = v.pressurePa;
+  const Z = v.Z;
+  const lnPhi = lnPhiOf(d, v.lnZ);
+  const dPdr = v.dPdRho;
+  const stable = dPdr > 0;
+  const h = v.h;
+  const s = v.s;
+  const u = v.u;
+  const a = v.a;
+  const g = v.g;
+  const cp = v.cp;
+  const cv = v.cv;
   // one division for the seven specific values (a multiply differs from dividing by at most 1 ulp)
   const perMass = 1 / M;
-  const stable = dPdr > 0;
-  const w2 = ((cp / cv) * dPdr) / M;
-  const speed = stable && w2 > 0 ? Math.sqrt(w2) : NaN;
-  const kappaT = 1 / (rho * dPdr);
-  const beta = kappaT * dPdT;
-  const jt = (T * beta - 1) / (rho * cp);
-  const kappaS = ((cp / cv) * rho * dPdr) / P;
-  // absolute: ideal gas at the same T and density plus the TV residuals
-  const lnPressureShift = Math.log((rho * RT) / ig.pressurePa);
-  const h = ig.h + hRes;
-  const s = ig.s - Rg * lnPressureShift + sTV;
-  const u = ig.u + uRes;
-  const a = ig.a + RT * lnPressureShift + aTV;
-  const g = ig.g + RT * lnPressureShift + gTV;
   const given = input.warnings;
   let warnings: readonly ResultWarning[] = NO_WARNINGS;
   if (!stable || !(Z > 0) || (given !== undefined && given.length > 0) || ig.warnings.length > 0) {
@@ -206,15 +332,23 @@ export function assembleState(input: StateInputs): FluidState {
       cp: cp * perMass,
       cv: cv * perMass,
     },
-    residual: { h: hRes, s: sTP, u: uRes, a: aTP, g: gTP, cp: cp - ig.cp, cv: cvRes },
-    residualTV: { h: hRes, s: sTV, u: uRes, a: aTV, g: gTV },
+    residual: {
+      h: v.hRes,
+      s: v.sTP,
+      u: v.uRes,
+      a: v.aTP,
+      g: v.gTP,
+      cp: cp - ig.cp,
+      cv: v.cvRes,
+    },
+    residualTV: { h: v.hRes, s: v.sTV, u: v.uRes, a: v.aTV, g: v.gTV },
     lnPhi,
-    speedOfSoundMPerS: speed,
-    jouleThomsonKPerPa: jt,
-    isothermalCompressibilityPerPa: kappaT,
-    thermalExpansionPerK: beta,
-    isentropicExponent: kappaS,
-    dPdTPaPerK: dPdT,
+    speedOfSoundMPerS: v.speedOfSound,
+    jouleThomsonKPerPa: v.jt,
+    isothermalCompressibilityPerPa: v.kappaT,
+    thermalExpansionPerK: v.beta,
+    isentropicExponent: v.isentropicExponent,
+    dPdTPaPerK: v.dPdT,
     dPdRhoPaM3PerMol: dPdr,
     molarMassKgPerMol: M,
     model: input.model,

@@ -5,7 +5,7 @@
  * lightest and "liquid" the densest. Written once here for every caller (states at (T, P),
  * fugacity coefficients of a phase, the stability test's trial phases).
  */
-import type { ResidualDerivatives, ResidualModel } from "../eos/types.js";
+import type { ResidualDerivatives, ResidualDerivativesDraft, ResidualModel } from "../eos/types.js";
 import { dPdRho, residualGibbsTP } from "../eos/residualRelations.js";
 import type { PhaseRequest } from "./types.js";
 
@@ -81,6 +81,63 @@ export function chooseDensityRoot(
       index = count;
       rho = rhos[k];
       residual = r;
+    }
+    count++;
+  }
+  out.densityMolPerM3 = rho;
+  out.index = index;
+  out.stableCount = count;
+  out.lowestGibbsOverRT = best;
+  out.secondGibbsOverRT = second;
+  return residual;
+}
+
+/**
+ * The choice of {@link chooseDensityRoot} for a model with `residualInto` (no allocation: the
+ * sweeps' path): roots `rhos[0 .. count - 1]` (ascending), derivatives without composition
+ * derivatives written into the two scratch records in turn. Returns the record holding the chosen
+ * root's derivatives (undefined when no root is mechanically stable); `out` receives the rest.
+ * The same comparisons on the same numbers as chooseDensityRoot, so the same choice.
+ */
+export function chooseDensityRootInto(
+  model: ResidualModel & { residualInto: NonNullable<ResidualModel["residualInto"]> },
+  temperatureK: number,
+  rhos: Float64Array,
+  rootCount: number,
+  x: readonly number[],
+  request: PhaseRequest,
+  out: RootChoice,
+  scratchA: ResidualDerivativesDraft,
+  scratchB: ResidualDerivativesDraft,
+): ResidualDerivativesDraft | undefined {
+  const compareGibbs = request === "stable" && rootCount > 1;
+  let count = 0;
+  let index = 0;
+  let rho = NaN;
+  let residual: ResidualDerivativesDraft | undefined;
+  let free = scratchA;
+  let best = Infinity;
+  let second = Infinity;
+  for (let k = 0; k < rootCount; k++) {
+    const r = free;
+    model.residualInto(temperatureK, rhos[k], x, r);
+    if (!(dPdRho(temperatureK, r, model.gasConstant) > 0)) continue;
+    let take = count === 0 || request === "liquid";
+    if (compareGibbs) {
+      const g = residualGibbsTP(r);
+      if (count === 0 || g < best) {
+        second = best;
+        best = g;
+        take = true;
+      } else if (g < second) {
+        second = g;
+      }
+    }
+    if (take) {
+      index = count;
+      rho = rhos[k];
+      residual = r;
+      free = r === scratchA ? scratchB : scratchA;
     }
     count++;
   }

@@ -50,7 +50,8 @@ export interface DensityRoot {
   readonly mechanicallyStable: boolean;
 }
 
-function mixtureMolarMass(binding: FluidBinding, x: readonly number[]): number {
+/** Molar mass of the mixture x, kg/mol. */
+export function mixtureMolarMass(binding: FluidBinding, x: readonly number[]): number {
   let m = 0;
   for (let i = 0; i < x.length; i++) m += x[i] * binding.molarMassesKgPerMol[i];
   return m;
@@ -83,7 +84,16 @@ const NO_EXTRA: readonly ExtraWarning[] = Object.freeze([]);
 // the root choice of the current stateAtTP call, read out at once (plain numbers, reused)
 const choice = emptyRootChoice();
 
-function idealGasAt(binding: FluidBinding, T: number, x: readonly number[]): IdealGasProperties {
+/**
+ * The ideal-gas mixture at T (K) and x (at the fixed pressure of the state layer; properties.ts
+ * moves it to rho R T), from the last evaluation per binding when T and x are the same. Inputs
+ * must have been checked. For the state layer's own lean paths (sweeps).
+ */
+export function idealGasAt(
+  binding: FluidBinding,
+  T: number,
+  x: readonly number[],
+): IdealGasProperties {
   let entry = idealCache.get(binding);
   if (entry && entry.T === T && entry.x.length === x.length) {
     let same = true;

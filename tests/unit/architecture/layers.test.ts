@@ -28,10 +28,11 @@ const LAYERS: readonly (readonly string[])[] = [
   ["departure"],
   ["state", "transport"],
   ["phase"],
+  ["sweep"],
   ["fluid"],
   ["process", "pvt"],
   ["charts", "tables", "explorers"],
-  ["display", "progress", "records", "cli"],
+  ["display", "progress", "records", "cli", "parallel", "propertyTables"],
   ["core.ts"],
   ["index.ts"],
 ];

@@ -26,6 +26,7 @@ import type {
   ModelInfo,
   PseudoCriticalPoint,
   ResidualDerivatives,
+  ResidualDerivativesDraft,
   ResidualRequest,
 } from "../types.js";
 import { checkModelComponents, type ModelComponent } from "../modelComponent.js";
@@ -38,6 +39,8 @@ const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 
 // Z roots of the current densityRoots call, reused (read out before the next call: no allocation)
 const Z_ROOTS = new Float64Array(3);
+// densities of the current densityRoots call, copied out at once
+const DENSITY_SCRATCH = new Float64Array(3);
 
 /** Options of {@link createCubicModel}. */
 export interface CubicModelOptions {
@@ -308,6 +311,54 @@ class CubicModelImpl implements CubicModel {
     x: readonly number[],
     request?: ResidualRequest,
   ): ResidualDerivatives {
+    // one object shape whether or not dnA is requested
+    const result: ResidualDerivativesDraft = {
+      a: 0,
+      aD: 0,
+      aDD: 0,
+      aT: 0,
+      aTT: 0,
+      aDT: 0,
+      aDDD: 0,
+      dnA: undefined,
+    };
+    this.residualInto(temperatureK, densityMolPerM3, x, result);
+    if (request?.composition) {
+      const n = this.n;
+      const a = this.mixA;
+      const b = this.mixB;
+      const eps = b * densityMolPerM3;
+      const F = a / (b * R * temperatureK);
+      const I = this.lastI;
+      const I1 = this.lastI1;
+      const logTerm = this.lastLogTerm;
+      const q = eps / (1 - eps);
+      const dnA = new Array<number>(n);
+      for (let i = 0; i < n; i++) {
+        const bRatio = this.bi[i] / b;
+        dnA[i] =
+          logTerm + bRatio * q - F * ((2 * this.sumA[i]) / a - bRatio) * I - F * bRatio * eps * I1;
+      }
+      result.dnA = dnA;
+    }
+    return result;
+  }
+
+  // I, I' and -ln(1 - eps) of the last residualInto call (read by residual() at once)
+  private lastI = NaN;
+  private lastI1 = NaN;
+  private lastLogTerm = NaN;
+
+  /**
+   * The derivatives of {@link residual} without composition derivatives, written into `out` (no
+   * allocation: the sweeps' hot path). The same arithmetic as residual(), so the same numbers.
+   */
+  residualInto(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+    out: ResidualDerivativesDraft,
+  ): void {
     const T = temperatureK;
     this.update(T, x);
     const a = this.mixA;
@@ -337,29 +388,16 @@ class CubicModelImpl implements CubicModel {
     const oneMinusEps = 1 - eps;
     const logTerm = -Math.log1p(-eps);
     const q = eps / oneMinusEps;
-    const alphaR = logTerm - F * I;
-    let dnA: number[] | undefined;
-    if (request?.composition) {
-      const n = this.n;
-      dnA = new Array<number>(n);
-      for (let i = 0; i < n; i++) {
-        const bRatio = this.bi[i] / b;
-        dnA[i] =
-          logTerm + bRatio * q - F * ((2 * this.sumA[i]) / a - bRatio) * I - F * bRatio * eps * I1;
-      }
-    }
-    // one object shape whether or not dnA is requested
-    const result: ResidualDerivatives = {
-      a: alphaR,
-      aD: q - F * eps * I1,
-      aDD: q * q - F * eps * eps * I2,
-      aT: -TF * I,
-      aTT: -TTF * I,
-      aDT: -TF * eps * I1,
-      aDDD: 2 * q * q * q - F * eps * eps * eps * I3,
-      dnA,
-    };
-    return result;
+    this.lastI = I;
+    this.lastI1 = I1;
+    this.lastLogTerm = logTerm;
+    out.a = logTerm - F * I;
+    out.aD = q - F * eps * I1;
+    out.aDD = q * q - F * eps * eps * I2;
+    out.aT = -TF * I;
+    out.aTT = -TTF * I;
+    out.aDT = -TF * eps * I1;
+    out.aDDD = 2 * q * q * q - F * eps * eps * eps * I3;
   }
 
   /**
@@ -443,6 +481,22 @@ class CubicModelImpl implements CubicModel {
   }
 
   densityRoots(temperatureK: number, pressurePa: number, x: readonly number[]): number[] {
+    const count = this.densityRootsInto(temperatureK, pressurePa, x, DENSITY_SCRATCH);
+    const out: number[] = [];
+    for (let k = 0; k < count; k++) out.push(DENSITY_SCRATCH[k]);
+    return out;
+  }
+
+  /**
+   * The roots of {@link densityRoots} written into `out` (ascending, mol/m3; at most 3), their
+   * number returned: no allocation (the sweeps' hot path), the same numbers.
+   */
+  densityRootsInto(
+    temperatureK: number,
+    pressurePa: number,
+    x: readonly number[],
+    out: Float64Array,
+  ): number {
     const T = temperatureK;
     this.update(T, x);
     const RT = R * T;
@@ -458,16 +512,16 @@ class CubicModelImpl implements CubicModel {
       -(A * B + w * B * B + w * B * B * B),
       roots,
     );
-    const out: number[] = [];
+    let n = 0;
     // ascending Z means descending density; return densities ascending
     for (let k = count - 1; k >= 0; k--) {
       const Z = roots[k];
       if (Z > B) {
         const rho = pressurePa / (Z * RT);
-        if (out.length === 0 || rho !== out[out.length - 1]) out.push(rho);
+        if (n === 0 || rho !== out[n - 1]) out[n++] = rho;
       }
     }
-    return out;
+    return n;
   }
 
   private lastPseudo: { x: number[]; value: PseudoCriticalPoint } | undefined;
