@@ -82,3 +82,11 @@ export type {
   EnvelopePathState,
 } from "./phaseEnvelope.js";
 export * from "./sample/index.js";
+export { heatCurveChart } from "./heatCurve.js";
+export type {
+  HeatCurveChartCurve,
+  HeatCurveChartData,
+  HeatCurveChartOptions,
+  HeatCurveChartPinch,
+  HeatCurveChartPoint,
+} from "./heatCurve.js";
