@@ -18,6 +18,7 @@ export * from "./departure/index.js";
 export * from "./state/index.js";
 export * from "./phase/index.js";
 export * from "./fluid/index.js";
+export * from "./process/index.js";
 export * from "./charts/index.js";
 export * from "./tables/index.js";
 export * from "./pvt/index.js";

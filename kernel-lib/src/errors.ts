@@ -160,6 +160,13 @@ export interface ResultWarning {
    * "phase-split": a mixture is not stable as one phase at these conditions (tangent-plane test),
    * so the single-phase state is metastable or unstable.
    */
-  code: "outside-validity" | "extrapolated" | "model-limitation" | "accuracy" | "phase-split";
+  /** "process-condition": a plant condition found by a process step (process/types.ts). */
+  code:
+    | "outside-validity"
+    | "extrapolated"
+    | "model-limitation"
+    | "accuracy"
+    | "phase-split"
+    | "process-condition";
   message: string;
 }

@@ -12,3 +12,19 @@ export { toSI, fromSI, convertUnit } from "./convert.js";
 export type { UnitConversionOptions } from "./convert.js";
 export { parseQuantity, formatQuantity } from "./quantity.js";
 export type { ParsedQuantity, FormatQuantityOptions } from "./quantity.js";
+export {
+  FLOW_UNITS,
+  NAMED_REFERENCE_CONDITIONS,
+  lookupFlowUnit,
+  resolveReferenceConditions,
+  idealGasMolarVolumeM3PerMol,
+  molarFlowToSI,
+  molarFlowFromSI,
+} from "./flow.js";
+export type {
+  FlowKind,
+  FlowUnitDefinition,
+  ReferenceConditions,
+  ReferenceConditionsSpec,
+  FlowConversionContext,
+} from "./flow.js";

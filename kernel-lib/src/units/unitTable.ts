@@ -204,6 +204,9 @@ export const UNIT_TABLE: readonly UnitDefinition[] = Object.freeze([
   unit("kW", "power", 1e3),
   unit("MW", "power", 1e6),
   unit("Btu/h", "power", BTU_IT_J / 3600, ["Btu/hr"]),
+  // Horsepower (550 ft lbf/s, NIST SP 811 B.8: 745.6999 W) and metric horsepower (75 kgf m/s).
+  unit("hp", "power", 550 * FOOT_M * POUND_KG * STANDARD_GRAVITY, ["bhp"]),
+  unit("hp(metric)", "power", 75 * STANDARD_GRAVITY),
 ]);
 
 /**
