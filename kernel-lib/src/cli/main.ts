@@ -4,6 +4,7 @@
  *   isochor run <notebook.ipynb...>   execute notebooks, write executed notebooks and HTML records
  *   isochor eval [request.json]       batch property evaluation, JSON in, JSON out
  *   isochor pvt <file.csv>            departure functions from measured P-V-T data
+ *   isochor step [request.json]       one process step on a real fluid, JSON in, JSON out
  */
 import type { CliIo } from "./io.js";
 import { nodeIo } from "./io.js";
@@ -26,6 +27,10 @@ const commands: Record<string, Command> = {
     summary: "pvt <file.csv>          departure functions from measured P-V-T data",
     load: async () => (await import("./pvt.js")).pvtCommand,
   },
+  step: {
+    summary: "step [request.json]     one process step (valve ... separator) from a JSON request",
+    load: async () => (await import("./step.js")).stepCommand,
+  },
 };
 
 function usage(): string {
@@ -39,6 +44,7 @@ function usage(): string {
       "examples:",
       "  npx isochor eval request.json",
       "  npx isochor pvt lab-data.csv --component carbon-dioxide",
+      "  npx isochor step cooler.json",
       "  npx isochor run notebooks/00-start-here.ipynb",
     ])
     .join("\n");
