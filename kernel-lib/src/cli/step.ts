@@ -28,6 +28,8 @@ import { cooler, heater, type HeaterResult } from "../process/heater.js";
 import { exchanger, type ExchangerResult } from "../process/exchanger.js";
 import { mixer } from "../process/mixer.js";
 import { separator } from "../process/separator.js";
+import { valve } from "../process/valve.js";
+import { compressorStage } from "../process/compressor.js";
 import type { Equilibrium } from "../phase/flash/types.js";
 import { equilibriumResponse, fluidOf, replacer, type EvalStateResponse } from "./eval.js";
 import {
@@ -175,6 +177,12 @@ const SPEC_PATHS: Readonly<Record<string, string>> = {
   hot: "$.inlet",
   cold: "$.step.cold",
   inlet: "$.inlet",
+  // the valve and compressor name their spec fields without a prefix
+  outletPressurePa: "$.step.P",
+  isentropicEfficiency: "$.step.isentropicEfficiency",
+  polytropicEfficiency: "$.step.polytropicEfficiency",
+  dischargeTemperatureLimitK: "$.step.dischargeTemperatureLimit",
+  minimumDesignMetalTemperatureK: "$.step.minimumDesignMetalTemperature",
 };
 
 function pathOfInput(input: string): string {
@@ -223,12 +231,28 @@ function runStep(fluid: Fluid, request: StepRequest, inlet: Stream): StepResult 
         minimumDesignMetalTemperatureK: mdmt(s),
         heatCurve: curveOptions(s),
       });
+    case "valve":
+      return valve(inlet, {
+        outletPressurePa: s.P as number,
+        minimumDesignMetalTemperatureK: mdmt(s),
+      });
+    case "compressor":
+      if (s.stages !== undefined || s.intercoolerT !== undefined) break;
+      if (s.P === undefined) throw new RequestError("$.step.P", "is required for a compressor");
+      return compressorStage(inlet, {
+        outletPressurePa: s.P,
+        isentropicEfficiency: s.isentropicEfficiency,
+        polytropicEfficiency: s.polytropicEfficiency,
+        dischargeTemperatureLimitK: s.dischargeTemperatureLimit,
+        minimumDesignMetalTemperatureK: mdmt(s),
+      });
     default:
-      throw new RequestError(
-        "$.step.kind",
-        `the step kind "${s.kind}" is not available in this build; available: heater, cooler, exchanger, mixer, separator`,
-      );
+      break;
   }
+  throw new RequestError(
+    s.kind === "compressor" ? "$.step.stages" : "$.step.kind",
+    `${s.kind === "compressor" ? "compressor trains" : `the step kind "${s.kind}"`} not available in this build; available: valve, compressor (one stage), heater, cooler, exchanger, mixer, separator`,
+  );
 }
 
 function stateOf(eq: Equilibrium, fluid: Fluid): EvalStateResponse {

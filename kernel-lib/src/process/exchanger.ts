@@ -26,7 +26,7 @@ import { overallProperty } from "../phase/flash/stateFunctionFlash.js";
 import { requireChoice, requirePositive } from "../validate.js";
 import { closeBalances } from "./balance.js";
 import { heatCurve, type HeatCurve, type HeatCurveOptions } from "./heatCurve.js";
-import { outletTemperatureWarnings, processWarning } from "./heatWarnings.js";
+import { processWarning, temperatureWarnings } from "./warnings.js";
 import { streamEnthalpyJPerMol, streamFromEquilibrium, type Stream } from "./stream.js";
 import { PROCESS_CAUTION, type StepResult } from "./types.js";
 
@@ -255,8 +255,8 @@ export function exchanger(hot: Stream, cold: Stream, spec: ExchangerSpec): Excha
   );
   const check = closeBalances("exchanger", [hot, cold], [hotOut, coldOut], 0, 0);
   warnings.push(
-    ...outletTemperatureWarnings("hot outlet", ev.hotEq.temperatureK, mdmt),
-    ...outletTemperatureWarnings("cold outlet", ev.coldEq.temperatureK, mdmt),
+    ...temperatureWarnings(ev.hotEq, "hot outlet", mdmt),
+    ...temperatureWarnings(ev.coldEq, "cold outlet", mdmt),
     ...ev.hotCurve.warnings,
     ...ev.coldCurve.warnings,
   );

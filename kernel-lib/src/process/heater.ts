@@ -11,7 +11,7 @@ import { overallProperty, type StateFlashOptions } from "../phase/flash/stateFun
 import { requireFinite, requirePositive } from "../validate.js";
 import { closeBalances } from "./balance.js";
 import { heatCurve, type HeatCurve, type HeatCurveOptions } from "./heatCurve.js";
-import { outletTemperatureWarnings } from "./heatWarnings.js";
+import { temperatureWarnings } from "./warnings.js";
 import { streamEnthalpyJPerMol, streamFromEquilibrium, type Stream } from "./stream.js";
 import { PROCESS_CAUTION, type StepResult } from "./types.js";
 
@@ -130,7 +130,7 @@ function heatStep(kind: "heater" | "cooler", inlet: Stream, spec: HeaterSpec): H
   const check = closeBalances(kind, [inlet], [outlet], 0, duty);
   const curve = heatCurve(fluid, z, inlet.state, outletEq, F, spec.heatCurve);
   const warnings: ResultWarning[] = [
-    ...outletTemperatureWarnings(`${kind} outlet`, outletEq.temperatureK, mdmt),
+    ...temperatureWarnings(outletEq, `${kind} outlet`, mdmt),
     ...curve.warnings,
     ...outletEq.warnings,
   ];

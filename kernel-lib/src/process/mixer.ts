@@ -9,7 +9,7 @@ import { InputError, type ResultWarning } from "../errors.js";
 import type { StateFlashOptions } from "../phase/flash/stateFunctionFlash.js";
 import { requirePositive } from "../validate.js";
 import { closeBalances } from "./balance.js";
-import { outletTemperatureWarnings } from "./heatWarnings.js";
+import { temperatureWarnings } from "./warnings.js";
 import { streamEnthalpyJPerMol, streamFromEquilibrium, type Stream } from "./stream.js";
 import { PROCESS_CAUTION, type StepResult } from "./types.js";
 
@@ -109,7 +109,7 @@ export function mixer(inlets: readonly Stream[], spec: MixerSpec = {}): MixerRes
           "K",
         );
   const warnings: ResultWarning[] = [
-    ...outletTemperatureWarnings("mixer outlet", eq.temperatureK, mdmt),
+    ...temperatureWarnings(eq, "mixer outlet", mdmt),
     ...eq.warnings,
   ];
   const method =

@@ -13,7 +13,7 @@ import type { Equilibrium, EquilibriumPhase } from "../phase/flash/types.js";
 import { overallProperty, type StateFlashOptions } from "../phase/flash/stateFunctionFlash.js";
 import { requirePositive } from "../validate.js";
 import { closeBalances } from "./balance.js";
-import { outletTemperatureWarnings } from "./heatWarnings.js";
+import { temperatureWarnings } from "./warnings.js";
 import { streamEnthalpyJPerMol, streamFromEquilibrium, type Stream } from "./stream.js";
 import { PROCESS_CAUTION, type StepResult } from "./types.js";
 
@@ -136,10 +136,7 @@ export function separator(inlet: Stream, spec: SeparatorSpec = {}): SeparatorRes
           spec.minimumDesignMetalTemperatureK,
           "K",
         );
-  const warnings: ResultWarning[] = [
-    ...outletTemperatureWarnings("separator", eq.temperatureK, mdmt),
-    ...eq.warnings,
-  ];
+  const warnings: ResultWarning[] = [...temperatureWarnings(eq, "separator", mdmt), ...eq.warnings];
   const method =
     (adiabatic
       ? "Adiabatic separator: flash at the drum P and the inlet enthalpy (outer search on T around isothermal flashes, Michelsen 1987). "

@@ -94,6 +94,27 @@ describe("isochor step: responses", () => {
   });
 });
 
+describe("isochor step: the steps of the other process files", () => {
+  it("a valve: no power, no duty, the outlet at the given pressure", () => {
+    const r = runStepRequest({ ...fluid, inlet, step: { kind: "valve", P: 5e5 } });
+    expect(r.kind).toBe("valve");
+    expect(r.power).toBe(0);
+    expect((r.outlet as { P?: number }).P).toBe(5e5);
+    // Joule-Thomson cooling of a methane/propane gas
+    expect((r.outlet as { T?: number }).T).toBeLessThan(350);
+  });
+
+  it("a compressor stage: power into the fluid, specificWork = power / molar flow", () => {
+    const r = runStepRequest({
+      ...fluid,
+      inlet,
+      step: { kind: "compressor", P: 5e6, polytropicEfficiency: 0.78 },
+    });
+    expect(r.power).toBeGreaterThan(0);
+    expect(Math.abs(r.specificWork - r.power / 10) / r.specificWork).toBeLessThan(1e-12);
+  });
+});
+
 describe("isochor step: bad requests", () => {
   const cases: [string, unknown, string][] = [
     [
@@ -159,6 +180,17 @@ describe("isochor step: bad requests", () => {
       { ...fluid, x: [1], inlet, step: { kind: "cooler", T: 300 } },
       "$.x",
     ],
+    [
+      "efficiency above 1",
+      { ...fluid, inlet, step: { kind: "compressor", P: 5e6, isentropicEfficiency: 1.5 } },
+      "$.step.isentropicEfficiency",
+    ],
+    [
+      "a valve outlet above its inlet",
+      { ...fluid, inlet, step: { kind: "valve", P: 3e6 } },
+      "$.step.P",
+    ],
+    ["a valve without P", { ...fluid, inlet, step: { kind: "valve" } }, "$.step.P"],
   ];
   for (const [what, request, path] of cases) {
     it(`refuses ${what} at ${path} with exit 2`, async () => {
