@@ -7,6 +7,9 @@
  * Data are SI (W, K); the axes follow the unit choice ("power" and "temperature" display units).
  * Safety: labels go in as data values only (see topLevel.ts).
  */
+import { InputError } from "../errors.js";
+import type { ExchangerResult } from "../process/exchanger.js";
+import type { HeaterResult } from "../process/heater.js";
 import { requireFinite, requirePositive } from "../validate.js";
 import { planAxis, plotValue, positionEncoding } from "./axisPlan.js";
 import { checkNonEmptyArray, checkText, type BaseChartOptions } from "./chartOptions.js";
@@ -171,5 +174,61 @@ export function heatCurveChart(
   }
   return topLevel("heat-curve", "Heat curve", options, [xAxis, yAxis], warnings, {
     layer: layers,
+  });
+}
+
+/**
+ * The heat-curve chart of a step result: a heater's or cooler's curve (heat measured from the
+ * cold end: the inlet of a heater, the outlet of a cooler), or an exchanger's two curves with
+ * its pinch.
+ * @example stepHeatCurveChart(exchanger(hot, cold, { minimumApproachK: 10 }), { units: "field" })
+ */
+export function stepHeatCurveChart(
+  result: HeaterResult | ExchangerResult,
+  options: HeatCurveChartOptions = {},
+): ChartSpec {
+  if (result?.kind === "exchanger") {
+    const x = result;
+    const curve = (name: string, pts: ExchangerResult["curves"]["hot"]): HeatCurveChartCurve => ({
+      label: name,
+      points: pts.map((p) => ({
+        heatW: p.heatFromColdEndW,
+        temperatureK: p.temperatureK,
+        ...(p.marker ? { marker: p.marker } : {}),
+      })),
+    });
+    const m = x.minimumApproach;
+    return heatCurveChart(
+      {
+        curves: [
+          curve(`hot: ${x.inlets[0].name ?? "hot stream"}`, x.curves.hot),
+          curve(`cold: ${x.inlets[1].name ?? "cold stream"}`, x.curves.cold),
+        ],
+        pinch: {
+          heatW: m.heatFromColdEndW,
+          hotTemperatureK: m.hotTemperatureK,
+          coldTemperatureK: m.coldTemperatureK,
+        },
+      },
+      { title: "Heat curves", ...options },
+    );
+  }
+  if (result?.kind === "heater" || result?.kind === "cooler") {
+    const Q = Math.abs(result.dutyW);
+    const points = result.heatCurve.points.map((p) => ({
+      heatW: result.kind === "heater" ? p.dutyW : Q + p.dutyW,
+      temperatureK: p.temperatureK,
+      ...(p.marker ? { marker: p.marker } : {}),
+    }));
+    return heatCurveChart(
+      { curves: [{ label: result.inlets[0].name ?? result.kind, points }] },
+      { title: "Heat curve", ...options },
+    );
+  }
+  throw new InputError({
+    input: "result",
+    unit: "-",
+    validRange: "the result of heater, cooler or exchanger",
+    received: (result as { kind?: unknown } | undefined)?.kind,
   });
 }

@@ -82,7 +82,7 @@ export type {
   EnvelopePathState,
 } from "./phaseEnvelope.js";
 export * from "./sample/index.js";
-export { heatCurveChart } from "./heatCurve.js";
+export { heatCurveChart, stepHeatCurveChart } from "./heatCurve.js";
 export type {
   HeatCurveChartCurve,
   HeatCurveChartData,

@@ -5,7 +5,7 @@
  * pinch; the P-h path otherwise), the stream table (T, P, vapour fraction, flows), the power and
  * duty, and the step's warnings.
  */
-import { heatCurveChart, type HeatCurveChartCurve } from "../charts/heatCurve.js";
+import { stepHeatCurveChart } from "../charts/heatCurve.js";
 import { processPathChart } from "../charts/processPath.js";
 import { overallProperty } from "../phase/flash/stateFunctionFlash.js";
 import type { ExchangerResult } from "../process/exchanger.js";
@@ -62,46 +62,10 @@ function streamRow(role: string, s: Stream): Record<string, unknown> {
 
 /** The chart of a step: its heat curve(s), or its path on P-h axes. */
 function stepChart(result: StepResult, label: string): Record<string, unknown> {
-  if (result.kind === "exchanger") {
-    const x = result as ExchangerResult;
-    const curve = (name: string, pts: ExchangerResult["curves"]["hot"]): HeatCurveChartCurve => ({
-      label: name,
-      points: pts.map((p) => ({
-        heatW: p.heatFromColdEndW,
-        temperatureK: p.temperatureK,
-        ...(p.marker ? { marker: p.marker } : {}),
-      })),
-    });
-    const m = x.minimumApproach;
-    return heatCurveChart(
-      {
-        curves: [
-          curve(`hot: ${x.inlets[0].name ?? "hot stream"}`, x.curves.hot),
-          curve(`cold: ${x.inlets[1].name ?? "cold stream"}`, x.curves.cold),
-        ],
-        pinch: {
-          heatW: m.heatFromColdEndW,
-          hotTemperatureK: m.hotTemperatureK,
-          coldTemperatureK: m.coldTemperatureK,
-        },
-      },
-      { title: `Heat curves: ${label}` },
-    );
-  }
-  if (result.kind === "heater" || result.kind === "cooler") {
-    const h = result as HeaterResult;
-    const Q = Math.abs(h.dutyW);
-    // heat from the cold end: the inlet of a heater, the outlet of a cooler
-    const points = h.heatCurve.points.map((p) => ({
-      heatW: result.kind === "heater" ? p.dutyW : Q + p.dutyW,
-      temperatureK: p.temperatureK,
-      ...(p.marker ? { marker: p.marker } : {}),
-    }));
-    return heatCurveChart(
-      { curves: [{ label: result.inlets[0].name ?? result.kind, points }] },
-      { title: `Heat curve: ${label}` },
-    );
-  }
+  if (result.kind === "exchanger")
+    return stepHeatCurveChart(result as ExchangerResult, { title: `Heat curves: ${label}` });
+  if (result.kind === "heater" || result.kind === "cooler")
+    return stepHeatCurveChart(result as HeaterResult, { title: `Heat curve: ${label}` });
   return processPathChart(
     result.path.map((eq, i) => ({
       label: i === 0 ? "inlet" : i === result.path.length - 1 ? "outlet" : undefined,

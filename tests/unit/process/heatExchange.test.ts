@@ -13,6 +13,8 @@ import { exchanger } from "../../../kernel-lib/src/process/exchanger.js";
 import { PROCESS_CAUTION } from "../../../kernel-lib/src/process/types.js";
 import { overallProperty } from "../../../kernel-lib/src/phase/flash/stateFunctionFlash.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
+import { stepHeatCurveChart } from "../../../kernel-lib/src/charts/heatCurve.js";
+import { allLayers, schemaErrors } from "../charts/specCheck.js";
 
 // water by its reference equation (IAPWS-95): the saturation line is the equation's own
 const water = defineFluid({ components: ["water"], model: referenceFluid("water") });
@@ -193,6 +195,28 @@ describe("two-stream counter-current exchanger", () => {
     expect(r.warnings.map((w) => (w as { condition?: string }).condition)).toContain(
       "temperature-cross",
     );
+  });
+
+  it("charts both curves with the dew point and the pinch (a valid Vega-Lite spec)", () => {
+    const r = exchanger(steam(), bfw(6), { dutyW: 30e3 });
+    const spec = stepHeatCurveChart(r, { units: { system: "SI", temperature: "degC" } });
+    expect(schemaErrors(spec)).toEqual([]);
+    const layers = allLayers(spec as Record<string, unknown>);
+    expect(layers.some((l) => (l.mark as { type: string }).type === "rule")).toBe(true);
+    const texts = JSON.stringify(layers);
+    expect(texts).toContain("dew point");
+    expect(texts).toContain("hot: steam");
+    expect(texts).toContain("cold: bfw");
+    // the cooler's curve runs from the cold end (its outlet, heat 0) to its inlet (|Q|)
+    const c = cooler(steam(), { outletTemperatureK: 350 });
+    const rows = (
+      allLayers(stepHeatCurveChart(c) as Record<string, unknown>)[0].data as {
+        values: { x: number; y: number }[];
+      }
+    ).values;
+    expect(rows[0].y).toBeCloseTo(400, 9);
+    expect(rows[0].x).toBeCloseTo(Math.abs(c.dutyW) / 1e3, 4);
+    expect(rows[rows.length - 1].x).toBeCloseTo(0, 9);
   });
 
   it("the duty from a minimum approach meets that approach", () => {
