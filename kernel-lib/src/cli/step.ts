@@ -30,6 +30,9 @@ import { mixer } from "../process/mixer.js";
 import { separator } from "../process/separator.js";
 import { valve } from "../process/valve.js";
 import { compressorStage } from "../process/compressor.js";
+import { compressorTrain } from "../process/compressorTrain.js";
+import { turbine } from "../process/turbine.js";
+import { pump } from "../process/pump.js";
 import type { Equilibrium } from "../phase/flash/types.js";
 import { equilibriumResponse, fluidOf, replacer, type EvalStateResponse } from "./eval.js";
 import {
@@ -183,6 +186,10 @@ const SPEC_PATHS: Readonly<Record<string, string>> = {
   polytropicEfficiency: "$.step.polytropicEfficiency",
   dischargeTemperatureLimitK: "$.step.dischargeTemperatureLimit",
   minimumDesignMetalTemperatureK: "$.step.minimumDesignMetalTemperature",
+  efficiency: "$.step.isentropicEfficiency",
+  stages: "$.step.stages",
+  interstagePressuresPa: "$.step.stages",
+  intercoolerTemperatureK: "$.step.intercoolerT",
 };
 
 function pathOfInput(input: string): string {
@@ -237,8 +244,24 @@ function runStep(fluid: Fluid, request: StepRequest, inlet: Stream): StepResult 
         minimumDesignMetalTemperatureK: mdmt(s),
       });
     case "compressor":
-      if (s.stages !== undefined || s.intercoolerT !== undefined) break;
       if (s.P === undefined) throw new RequestError("$.step.P", "is required for a compressor");
+      if (s.stages !== undefined || s.intercoolerT !== undefined) {
+        if (s.intercoolerT === undefined)
+          throw new RequestError("$.step.intercoolerT", 'is required for a train ("stages")');
+        return compressorTrain(inlet, {
+          outletPressurePa: s.P,
+          ...(typeof s.stages === "number"
+            ? { stages: s.stages }
+            : s.stages !== undefined
+              ? { interstagePressuresPa: s.stages }
+              : {}),
+          isentropicEfficiency: s.isentropicEfficiency,
+          polytropicEfficiency: s.polytropicEfficiency,
+          intercoolerTemperatureK: s.intercoolerT,
+          dischargeTemperatureLimitK: s.dischargeTemperatureLimit,
+          minimumDesignMetalTemperatureK: mdmt(s),
+        });
+      }
       return compressorStage(inlet, {
         outletPressurePa: s.P,
         isentropicEfficiency: s.isentropicEfficiency,
@@ -246,12 +269,25 @@ function runStep(fluid: Fluid, request: StepRequest, inlet: Stream): StepResult 
         dischargeTemperatureLimitK: s.dischargeTemperatureLimit,
         minimumDesignMetalTemperatureK: mdmt(s),
       });
+    case "turbine":
+      return turbine(inlet, {
+        outletPressurePa: s.P as number,
+        isentropicEfficiency: s.isentropicEfficiency,
+        polytropicEfficiency: s.polytropicEfficiency,
+        minimumDesignMetalTemperatureK: mdmt(s),
+      });
+    case "pump":
+      return pump(inlet, {
+        outletPressurePa: s.P as number,
+        efficiency: s.isentropicEfficiency as number,
+        minimumDesignMetalTemperatureK: mdmt(s),
+      });
     default:
       break;
   }
   throw new RequestError(
-    s.kind === "compressor" ? "$.step.stages" : "$.step.kind",
-    `${s.kind === "compressor" ? "compressor trains" : `the step kind "${s.kind}"`} not available in this build; available: valve, compressor (one stage), heater, cooler, exchanger, mixer, separator`,
+    "$.step.kind",
+    `the step kind "${s.kind}" is not available; available: valve, compressor, turbine, pump, heater, cooler, exchanger, mixer, separator`,
   );
 }
 

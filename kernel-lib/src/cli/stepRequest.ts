@@ -117,15 +117,19 @@ const KIND_FIELDS: Readonly<Record<StepKind, { takes: string[]; oneOf?: string[]
     ],
     oneOf: [["isentropicEfficiency", "polytropicEfficiency"]],
   },
-  turbine: { takes: ["P", "isentropicEfficiency", "minimumDesignMetalTemperature"] },
-  pump: { takes: ["P", "isentropicEfficiency"] },
+  turbine: {
+    takes: ["P", "isentropicEfficiency", "polytropicEfficiency", "minimumDesignMetalTemperature"],
+    oneOf: [["isentropicEfficiency", "polytropicEfficiency"]],
+  },
+  pump: { takes: ["P", "isentropicEfficiency", "minimumDesignMetalTemperature"] },
 };
 
 /** Fields a kind requires besides its one-of groups. */
 const KIND_REQUIRES: Readonly<Partial<Record<StepKind, string[]>>> = {
   exchanger: ["cold"],
   valve: ["P"],
-  turbine: ["P", "isentropicEfficiency"],
+  compressor: ["P"],
+  turbine: ["P"],
   pump: ["P", "isentropicEfficiency"],
 };
 

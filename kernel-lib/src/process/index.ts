@@ -9,6 +9,8 @@ export {
   streamFlowIn,
   molarFlowOf,
   molarMassOf,
+  phaseAsEquilibrium,
+  splitPhases,
 } from "./stream.js";
 export type { Stream, StreamSpec, FlowSpec, GivenFlow, StandardVolumeBasis } from "./stream.js";
 export { PROCESS_CAUTION } from "./types.js";
@@ -35,3 +37,20 @@ export { mixer } from "./mixer.js";
 export type { MixerResult, MixerSpec } from "./mixer.js";
 export { separator } from "./separator.js";
 export type { SeparatorResult, SeparatorSpec } from "./separator.js";
+export { valve } from "./valve.js";
+export type { ValveSpec, ValveResult } from "./valve.js";
+export { compressorStage } from "./compressor.js";
+export type { CompressorSpec, CompressorStageResult } from "./compressor.js";
+export { integratePolytropicPath } from "./polytropicPath.js";
+export type { PolytropicPathOptions, PolytropicPath } from "./polytropicPath.js";
+export { schultzCompression } from "./schultz.js";
+export type { SchultzResult } from "./schultz.js";
+export { turbine } from "./turbine.js";
+export type { TurbineSpec, TurbineResult } from "./turbine.js";
+export { pump } from "./pump.js";
+export type { PumpSpec, PumpResult } from "./pump.js";
+export { compressorTrain } from "./compressorTrain.js";
+export type { CompressorTrainSpec, CompressorTrainResult, TrainCooler } from "./compressorTrain.js";
+export { processWarning, temperatureWarnings, liquidFraction } from "./warnings.js";
+export { pathStates } from "./pathStates.js";
+export type { PathState } from "./pathStates.js";

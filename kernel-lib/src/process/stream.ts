@@ -338,3 +338,61 @@ export function streamFlowIn(
   ).molarFlowMolPerS;
   return stream.molarFlowMolPerS / perUnit;
 }
+
+/**
+ * One phase of an equilibrium as an equilibrium of its own: the phase at the same T and P with
+ * its composition as the feed, amount 1. A phase of a verified equilibrium is itself in
+ * equilibrium (it sits on its saturation boundary), so no new flash is run; the check of the
+ * parent is kept.
+ */
+export function phaseAsEquilibrium(eq: Equilibrium, phaseIndex: number): Equilibrium {
+  const p = eq.phases[phaseIndex];
+  if (p === undefined) {
+    throw new InputError({
+      input: "phaseIndex",
+      unit: "-",
+      validRange: `0 to ${eq.phases.length - 1}`,
+      received: phaseIndex,
+    });
+  }
+  return {
+    temperatureK: eq.temperatureK,
+    pressurePa: eq.pressurePa,
+    z: p.state.x.slice(),
+    phases: [{ kind: p.kind, amount: 1, state: p.state }],
+    check: {
+      ...eq.check,
+      method: `${p.kind} phase of: ${eq.check.method}`,
+    },
+    model: eq.model,
+    warnings: eq.warnings,
+  };
+}
+
+/**
+ * A stream split into its phases (a separator or knock-out drum at the stream's T and P): the
+ * vapour (if any) and each liquid phase as its own stream, flows by the phase amounts. The
+ * material balance is exact to the flash's (1e-12).
+ */
+export function splitPhases(
+  stream: Stream,
+  names: { vapor?: string; liquid?: string } = {},
+): { vapor?: Stream; liquids: Stream[] } {
+  let vapor: Stream | undefined;
+  const liquids: Stream[] = [];
+  stream.state.phases.forEach((p, i) => {
+    const eq = phaseAsEquilibrium(stream.state, i);
+    const s = streamFromEquilibrium(
+      stream.fluid,
+      eq.z,
+      eq,
+      stream.molarFlowMolPerS * p.amount,
+      p.kind === "vapor"
+        ? names.vapor
+        : `${names.liquid ?? "liquid"}${p.kind === "liquid-2" ? " 2" : ""}`,
+    );
+    if (p.kind === "vapor") vapor = s;
+    else liquids.push(s);
+  });
+  return { vapor, liquids };
+}

@@ -22,6 +22,7 @@ export type ProcessCondition =
   | "wet-expander-exit"
   | "temperature-cross"
   | "pump-cavitation-margin"
+  | "knock-out-liquid"
   | "other";
 
 /** A warning of a process step, with the basis (the rule or limit it applies). */

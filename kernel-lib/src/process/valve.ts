@@ -14,6 +14,7 @@ import { PROCESS_CAUTION, type StepResult } from "./types.js";
 import {
   checkOptionalTemperature,
   describePhases,
+  isLiquidPhase,
   liquidFraction,
   processWarning,
   temperatureWarnings,
@@ -123,9 +124,9 @@ export function valve(inlet: Stream, spec: ValveSpec): ValveResult {
   const check = closeBalances("valve", [inlet], [outlet], 0, 0);
   const liquid = liquidFraction(outEq);
   let liquidMass = 0;
-  for (const p of outEq.phases) {
-    if (p.kind !== "vapor") liquidMass += p.amount * p.state.molarMassKgPerMol;
-  }
+  outEq.phases.forEach((p, i) => {
+    if (isLiquidPhase(outEq, i)) liquidMass += p.amount * p.state.molarMassKgPerMol;
+  });
   const warnings = [
     ...temperatureWarnings(outEq, "the valve outlet", spec.minimumDesignMetalTemperatureK),
   ];

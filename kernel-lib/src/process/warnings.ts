@@ -20,10 +20,22 @@ export function processWarning(
 
 const degC = (T: number): string => `${(T - 273.15).toFixed(1)} degC`;
 
-/** Liquid mole fraction of an equilibrium (all non-vapour phases). */
+/**
+ * Is this phase a liquid? Its kind, or for a single phase also the state's own label (the flash
+ * labels the one phase of a reference equation's pure fluid "vapor" even when the state says
+ * "liquid": the state's label, from the fluid's own critical point, is taken then).
+ */
+export function isLiquidPhase(eq: Equilibrium, index: number): boolean {
+  const p = eq.phases[index];
+  return p.kind !== "vapor" || (eq.phases.length === 1 && p.state.phase === "liquid");
+}
+
+/** Liquid mole fraction of an equilibrium (all liquid phases). */
 export function liquidFraction(eq: Equilibrium): number {
   let l = 0;
-  for (const p of eq.phases) if (p.kind !== "vapor") l += p.amount;
+  eq.phases.forEach((p, i) => {
+    if (isLiquidPhase(eq, i)) l += p.amount;
+  });
   return l;
 }
 

@@ -115,6 +115,49 @@ describe("isochor step: the steps of the other process files", () => {
   });
 });
 
+describe("isochor step: turbine, pump and trains", () => {
+  const water = { model: "reference", components: ["water"] };
+  it("a steam turbine gives power out of the fluid (negative)", () => {
+    const r = runStepRequest({
+      ...water,
+      inlet: { T: 700, P: 40e5, flow: { value: 10, unit: "t/h" } },
+      step: { kind: "turbine", P: 1e5, isentropicEfficiency: 0.8 },
+    });
+    expect(r.kind).toBe("turbine");
+    expect(r.power).toBeLessThan(0);
+    expect(r.check.energyBalanceRelativeError).toBeLessThan(1e-9);
+  });
+
+  it("a pump takes its efficiency from isentropicEfficiency", () => {
+    const r = runStepRequest({
+      ...water,
+      inlet: { T: 300, P: 1e5, flow: { value: 20, unit: "kg/s" } },
+      step: { kind: "pump", P: 20e5, isentropicEfficiency: 0.7 },
+    });
+    expect(r.power).toBeGreaterThan(0);
+    // the ideal pump work v dP / eta, about 20 kg/s * (19e5 Pa / 996.5 kg/m3) / 0.7 = 54.5 kW
+    // (hand calculation, liquid density of water at 300 K from memory of the steam tables)
+    expect(Math.abs(r.power - 54.5e3) / 54.5e3).toBeLessThan(0.01);
+  });
+
+  it("a two-stage train with intercooling lists every outlet", () => {
+    const r = runStepRequest({
+      ...fluid,
+      inlet: { T: 300, P: 10e5, flow: { value: 1, unit: "mol/s" } },
+      step: {
+        kind: "compressor",
+        P: 60e5,
+        stages: 2,
+        polytropicEfficiency: 0.78,
+        intercoolerT: 313.15,
+      },
+    });
+    expect(r.kind).toBe("compressor-train");
+    expect(r.power).toBeGreaterThan(0);
+    expect((r.outlet as { P?: number }).P).toBeCloseTo(60e5, 6);
+  });
+});
+
 describe("isochor step: bad requests", () => {
   const cases: [string, unknown, string][] = [
     [
@@ -191,6 +234,20 @@ describe("isochor step: bad requests", () => {
       "$.step.P",
     ],
     ["a valve without P", { ...fluid, inlet, step: { kind: "valve" } }, "$.step.P"],
+    [
+      "a train without an intercooler temperature",
+      {
+        ...fluid,
+        inlet,
+        step: { kind: "compressor", P: 6e6, stages: 2, isentropicEfficiency: 0.8 },
+      },
+      "$.step.intercoolerT",
+    ],
+    [
+      "a turbine outlet above its inlet",
+      { ...fluid, inlet, step: { kind: "turbine", P: 3e6, isentropicEfficiency: 0.8 } },
+      "$.step.P",
+    ],
   ];
   for (const [what, request, path] of cases) {
     it(`refuses ${what} at ${path} with exit 2`, async () => {
