@@ -86,7 +86,7 @@ export function phasesLabel(eq: Equilibrium): string {
 export function vaporFractionOf(eq: Equilibrium): number {
   let beta = 0;
   for (const p of eq.phases) if (p.kind === "vapor") beta += p.amount;
-  // one phase: a supercritical or "vapor"-labelled state counts as vapour
+  // one phase: the flash labels it "vapor" or "liquid" (phase/flash/types.ts), counted as such
   return beta;
 }
 
