@@ -6,6 +6,7 @@ import { envelopeCases } from "./envelopeCases.js";
 import { flashCases } from "./flashCases.js";
 import { pvtCases } from "./pvtCases.js";
 import { processCases } from "./processCases.js";
+import { transportCases } from "./transportCases.js";
 
 export const allCases: BenchCase[] = [
   ...engineCases,
@@ -14,4 +15,5 @@ export const allCases: BenchCase[] = [
   ...flashCases,
   ...pvtCases,
   ...processCases,
+  ...transportCases,
 ];

@@ -91,3 +91,7 @@ export type {
   HeatCurveChartPinch,
   HeatCurveChartPoint,
 } from "./heatCurve.js";
+export { departureBandChart } from "./departureBandChart.js";
+export type { DepartureBandChartOptions } from "./departureBandChart.js";
+export { departureResidualChart } from "./departureResidualChart.js";
+export type { DepartureResidualChartOptions } from "./departureResidualChart.js";

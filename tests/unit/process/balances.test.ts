@@ -40,7 +40,8 @@ describe("energy balances of the steps", () => {
       P: 60e5,
       flow: { value: 100, unit: "kmol/h" },
     });
-    const r = valve(hp, { outletPressurePa: 5e5 });
+    // an MDMT of 310 K (invented, above the outlet temperature) must raise its warning
+    const r = valve(hp, { outletPressurePa: 5e5, minimumDesignMetalTemperatureK: 310 });
     expect(r.check.energyBalanceRelativeError).toBeLessThan(1e-9);
     expect(r.temperatureDropK).toBeGreaterThan(5);
     expect(Math.abs(streamEnthalpyJPerMol(r.outlet) - streamEnthalpyJPerMol(hp))).toBeLessThan(
@@ -48,6 +49,13 @@ describe("energy balances of the steps", () => {
     );
     expect(r.powerW).toBe(0);
     expect(r.outlet.state.phases.length).toBe(2);
+    const mdmt = r.warnings.find(
+      (w) => (w as { condition?: string }).condition === "below-minimum-design-metal-temperature",
+    );
+    expect((mdmt as { basis?: string } | undefined)?.basis).toMatch(/310 K given by the caller/);
+    expect(r.outlet.state.temperatureK < 273.15).toBe(
+      r.warnings.some((w) => (w as { condition?: string }).condition === "low-temperature"),
+    );
     expect(r.liquidMolarFlowMolPerS).toBeGreaterThan(0);
     expect(
       r.warnings.some((w) => (w as { condition?: string }).condition === "two-phase-outlet"),
