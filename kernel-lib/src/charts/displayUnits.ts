@@ -23,6 +23,7 @@ export type QuantityKind =
   | "massEnergy"
   | "massEntropy"
   | "speed"
+  | "power"
   | "dimensionless";
 
 /** One display unit: its symbol as printed and the conversion from the SI value. */
@@ -86,6 +87,7 @@ export const DISPLAY_UNITS: Readonly<Record<QuantityKind, readonly DisplayUnit[]
     unit("Btu/(lb degR)", "Btu/(lb·°R)"),
   ],
   speed: [unit("m/s", "m/s"), unit("ft/s", "ft/s")],
+  power: [unit("W", "W"), unit("kW", "kW"), unit("MW", "MW"), unit("Btu/h", "Btu/h")],
   // Dimensionless: not a unit of units/; a ratio shown as is or in per cent.
   dimensionless: [
     // No symbol: a dash after a number reads as a minus sign.
@@ -110,6 +112,7 @@ const SYSTEMS: Readonly<Record<UnitSystem, Readonly<Record<QuantityKind, string>
     massEnergy: "kJ/kg",
     massEntropy: "kJ/(kg K)",
     speed: "m/s",
+    power: "kW",
     dimensionless: "-",
   },
   field: {
@@ -124,6 +127,7 @@ const SYSTEMS: Readonly<Record<UnitSystem, Readonly<Record<QuantityKind, string>
     massEnergy: "Btu/lb",
     massEntropy: "Btu/(lb degR)",
     speed: "ft/s",
+    power: "Btu/h",
     dimensionless: "-",
   },
 };

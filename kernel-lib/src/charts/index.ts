@@ -88,6 +88,14 @@ export type {
   EnvelopePathState,
 } from "./phaseEnvelope.js";
 export * from "./sample/index.js";
+export { heatCurveChart, stepHeatCurveChart } from "./heatCurve.js";
+export type {
+  HeatCurveChartCurve,
+  HeatCurveChartData,
+  HeatCurveChartOptions,
+  HeatCurveChartPinch,
+  HeatCurveChartPoint,
+} from "./heatCurve.js";
 export { departureBandChart } from "./departureBandChart.js";
 export type { DepartureBandChartOptions } from "./departureBandChart.js";
 export { departureResidualChart } from "./departureResidualChart.js";

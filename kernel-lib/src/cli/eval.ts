@@ -256,7 +256,13 @@ function evaluatorOf(request: EvalRequest): Evaluator {
 }
 
 /** Builds the fluid of a request; problems are reported with the path of the field. */
-function fluidOf(request: EvalRequest, model: Exclude<EvalRequest["model"], "reference">): Fluid {
+export function fluidOf(
+  request: Pick<
+    EvalRequest,
+    "components" | "kij" | "constants" | "idealGas" | "reference" | "departure"
+  >,
+  model: Exclude<EvalRequest["model"], "reference">,
+): Fluid {
   try {
     return defineFluid({
       components: request.components,
@@ -412,7 +418,7 @@ function flashOf(
 }
 
 /** The entry of an equilibrium: one phase keeps every single-phase field (see evalEquilibrium.ts). */
-function equilibriumResponse(eq: Equilibrium, binding: FluidBinding): EvalStateResponse {
+export function equilibriumResponse(eq: Equilibrium, binding: FluidBinding): EvalStateResponse {
   const fields = equilibriumFields(eq, gasConstantOf(binding.model));
   const warnings = warningTexts(eq.warnings);
   if (eq.phases.length === 1) {
@@ -512,7 +518,7 @@ export function runEvalRequest(raw: unknown): EvalResponse {
 }
 
 /** JSON has no NaN: non-finite numbers are written as null. */
-function replacer(_key: string, value: unknown): unknown {
+export function replacer(_key: string, value: unknown): unknown {
   return typeof value === "number" && !Number.isFinite(value) ? null : value;
 }
 

@@ -144,7 +144,7 @@ function jsonPath(pointer: string): string {
  * is neither the failure of one branch of anyOf/oneOf (the combinator's own error says what was
  * wanted) nor an "if" summary.
  */
-function firstProblem(errors: readonly ErrorObject[]): ErrorObject {
+export function firstProblem(errors: readonly ErrorObject[]): ErrorObject {
   const reported = errors.filter(
     (e) => e.keyword !== "if" && !/\/(anyOf|oneOf)\/\d+\//.test(e.schemaPath),
   );
@@ -159,7 +159,7 @@ function firstProblem(errors: readonly ErrorObject[]): ErrorObject {
 }
 
 /** A RequestError from an ajv error: the JSON path and a message in the request's words. */
-function requestError(e: ErrorObject): RequestError {
+export function requestError(e: ErrorObject): RequestError {
   const path = jsonPath(e.instancePath);
   const rule = (e.parentSchema as { "x-message"?: string } | undefined)?.["x-message"];
   const got = `got ${describe(e.data)}`;
@@ -287,6 +287,12 @@ function isText(v: unknown): v is string {
   return typeof v === "string";
 }
 
+/** The fluid fields of a request that passed a schema (shared with `isochor step`). */
+export type FluidFieldsJson = Pick<
+  RequestJson,
+  "model" | "components" | "x" | "kij" | "constants" | "departure" | "reference" | "idealGas"
+>;
+
 /** A request that passed the schema (types as the schema says). */
 interface RequestJson {
   model: EvalModelId;
@@ -317,7 +323,7 @@ interface StateJson {
 }
 
 /** The checks a JSON Schema cannot state: sizes tied to the number of components, sums, names. */
-function checkCounts(r: RequestJson): void {
+export function checkCounts(r: FluidFieldsJson): void {
   const n = r.components.length;
   if (r.model === "reference") {
     const ids = referenceFluidIds();
@@ -365,8 +371,13 @@ const CONSTANT_NAMES: Record<string, keyof ConstantOverrides> = {
   Vc: "criticalVolumeM3PerMol",
 };
 
-/** The typed request, defaults filled in (the schema has checked every field). */
-function toRequest(r: RequestJson): EvalRequest {
+/** The typed fluid fields of a request, defaults filled in (shared with `isochor step`). */
+export function fluidFieldsOf(
+  r: FluidFieldsJson,
+): Pick<
+  EvalRequest,
+  "model" | "components" | "x" | "kij" | "constants" | "departure" | "reference" | "idealGas"
+> {
   const reference: ReferenceState =
     r.reference === undefined || r.reference === "formation"
       ? { kind: "formation" }
@@ -385,6 +396,13 @@ function toRequest(r: RequestJson): EvalRequest {
     departure: r.departure ?? "closed-form",
     reference,
     idealGas: r.idealGas ?? "correlation",
+  };
+}
+
+/** The typed request, defaults filled in (the schema has checked every field). */
+function toRequest(r: RequestJson): EvalRequest {
+  return {
+    ...fluidFieldsOf(r),
     phase: r.phase ?? "stable",
     checkStability: r.checkStability ?? false,
     transport: r.transport ?? false,

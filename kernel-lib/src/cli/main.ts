@@ -5,6 +5,7 @@
  *   isochor eval [request.json]       batch property evaluation, JSON in, JSON out
  *   isochor pvt <file.csv>            departure functions from measured P-V-T data
  *   isochor table <states.csv>        properties of many states, CSV in, CSV out
+ *   isochor step [request.json]       one process step on a real fluid, JSON in, JSON out
  */
 import type { CliIo } from "./io.js";
 import { nodeIo } from "./io.js";
@@ -31,6 +32,10 @@ const commands: Record<string, Command> = {
     summary: "table <states.csv>      properties of a CSV of states, as a CSV with units",
     load: async () => (await import("./table.js")).tableCommand,
   },
+  step: {
+    summary: "step [request.json]     one process step (valve ... separator) from a JSON request",
+    load: async () => (await import("./step.js")).stepCommand,
+  },
 };
 
 function usage(): string {
@@ -45,6 +50,7 @@ function usage(): string {
       "  npx isochor eval request.json",
       "  npx isochor pvt lab-data.csv --component carbon-dioxide",
       "  npx isochor table states.csv --components methane --units T=degC,h=kJ/kg",
+      "  npx isochor step cooler.json",
       "  npx isochor run notebooks/00-start-here.ipynb",
     ])
     .join("\n");

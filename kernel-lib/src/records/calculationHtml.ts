@@ -242,6 +242,20 @@ export function calculationRecordFragment(c: CalculationRecordContent): string {
         : `<p class="muted">No model recorded.</p>`,
     ),
   );
+  if (c.methods !== undefined && c.methods.length > 0) {
+    parts.push(
+      section(
+        ++n,
+        "Method and assumptions",
+        c.methods
+          .map(
+            (a) =>
+              `<div class="calc-method" id="${c.anchor}-${a.id}"><p><b>${e(a.id)}. ${e(a.label)}.</b> ${e(a.text)}</p></div>`,
+          )
+          .join(""),
+      ),
+    );
+  }
   const items = c.items.map((item) => {
     // Charts get fresh ids in every rendering (see rekeyCharts); tables have none.
     if (item.kind === "table")

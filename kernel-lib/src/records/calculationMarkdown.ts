@@ -109,6 +109,10 @@ export function calculationRecordMarkdown(
     for (const note of model.notes) out.push(`- Note: ${m(note)}`);
     out.push("");
   }
+  if (c.methods !== undefined && c.methods.length > 0) {
+    heading("Method and assumptions");
+    for (const a of c.methods) out.push(`**${a.id}. ${m(a.label)}.** ${m(a.text)}`, "");
+  }
   heading("Results");
   if (c.items.length === 0) out.push("No results recorded.", "");
   else

@@ -42,6 +42,7 @@ import type {
   RecordBasis,
   RecordedChart,
   RecordedInput,
+  RecordedMethod,
   RecordedTable,
   RecordItem,
   ResolvedBasis,
@@ -50,6 +51,8 @@ import { recordedInput, type RecordInputOptions } from "./recordInput.js";
 import { recordTableText, type RecordResultsOptions } from "./recordTable.js";
 import { INSPECT, optionalText, requireText, withSummary } from "./recordText.js";
 import { RecordWarnings } from "./recordWarnings.js";
+import type { StepResult } from "../process/types.js";
+import { recordStep, type RecordedStep, type RecordStepOptions } from "./recordStep.js";
 import {
   registerRecord,
   type RenderFilesOptions,
@@ -63,6 +66,7 @@ export type {
   RecordBasis,
   RecordedChart,
   RecordedInput,
+  RecordedMethod,
   RecordedTable,
   RecordedWarning,
   ResolvedBasis,
@@ -118,6 +122,7 @@ export class CalculationRecord {
   private readonly topicList: SafetyTopic[];
   private readonly inputList: RecordedInput[] = [];
   private readonly modelList: ModelEntry[] = [];
+  private readonly methodList: RecordedMethod[] = [];
   private readonly itemList: RecordItem[] = [];
   private readonly warningList = new RecordWarnings();
   private readonly cautionList: string[] = [];
@@ -223,6 +228,31 @@ export class CalculationRecord {
       );
     }
     return entry;
+  }
+
+  /**
+   * Adds an entry to the "Method and assumptions" section: what was computed and how, with its
+   * assumptions (a process step's `method`, a note on a correlation's use, ...).
+   * @example rec.method("Cooler E-101", result.method)
+   */
+  method(label: string, text: string): RecordedMethod {
+    const entry: RecordedMethod = {
+      id: `A${this.methodList.length + 1}`,
+      label: requireText(label, "label"),
+      text: requireText(text, "text"),
+    };
+    this.methodList.push(entry);
+    return entry;
+  }
+
+  /**
+   * Records a process step: its inlets as inputs, the fluid's model, its method and assumptions,
+   * its caution, the path chart (the heat curve of a heater, cooler or exchanger; the P-h path
+   * otherwise), the stream table, the power and duty, and its warnings (see records/recordStep.ts).
+   * @example await rec.step(cooler(gas, { outletTemperatureK: 313.15 }), { label: "E-101 cooler" })
+   */
+  async step(result: StepResult, options: RecordStepOptions = {}): Promise<RecordedStep> {
+    return recordStep(this, result, options);
   }
 
   /**
@@ -388,6 +418,7 @@ export class CalculationRecord {
       topics: [...this.topicList],
       inputs: [...this.inputList],
       models: [...this.modelList],
+      methods: [...this.methodList],
       items: this.itemList.filter((i) => i.kind === "table" || i.chart.html !== ""),
       warnings: this.warningList.list(),
       cautions,

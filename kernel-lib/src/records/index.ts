@@ -41,7 +41,9 @@ export type {
   RecordedChart,
   RecordedWarning,
   CalculationRecordContent,
+  RecordedMethod,
 } from "./calculationRecord.js";
+export type { RecordStepOptions, RecordedStep } from "./recordStep.js";
 export type { ModelEntry, ModelEntryOptions, RecordableModel } from "./modelEntry.js";
 export { processSafetyCaution, SAFETY_TOPICS, isSafetyTopic } from "./processCaution.js";
 export type { SafetyTopic } from "./processCaution.js";

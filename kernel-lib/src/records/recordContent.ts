@@ -70,6 +70,16 @@ export interface RecordedWarning {
   readonly count: number;
 }
 
+/** A "Method and assumptions" entry: what was computed and how (a step's method, a note). */
+export interface RecordedMethod {
+  /** Record-local id, "A1", "A2", ... */
+  readonly id: string;
+  /** What it is about, e.g. "Cooler E-101". */
+  readonly label: string;
+  /** The method and its assumptions (plain text). */
+  readonly text: string;
+}
+
 /** A table or a chart of the record, in the order they were added. */
 export type RecordItem =
   { kind: "table"; table: RecordedTable } | { kind: "chart"; chart: RecordedChart };
@@ -86,6 +96,8 @@ export interface CalculationRecordContent {
   readonly topics: readonly SafetyTopic[];
   readonly inputs: readonly RecordedInput[];
   readonly models: readonly ModelEntry[];
+  /** "Method and assumptions" entries (shown when there are any). */
+  readonly methods?: readonly RecordedMethod[];
   /** Tables and charts in the order they were added. */
   readonly items: ReadonlyArray<RecordItem>;
   readonly warnings: readonly RecordedWarning[];

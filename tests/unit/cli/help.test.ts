@@ -22,7 +22,7 @@ async function help(argv: string[]): Promise<{ code: number; out: string }> {
 }
 
 describe("isochor --help", () => {
-  for (const command of [[], ["eval"], ["pvt"], ["run"], ["table"]]) {
+  for (const command of [[], ["eval"], ["pvt"], ["run"], ["table"], ["step"]]) {
     it(`${["isochor", ...command].join(" ")} --help states the units and shows an example`, async () => {
       const { code, out } = await help([...command, "--help"]);
       expect(code).toBe(0);
