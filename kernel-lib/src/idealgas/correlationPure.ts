@@ -68,6 +68,9 @@ export function idealGasFromCorrelation(
     method,
     source: component.sources.heatCapacity,
     validTemperatureK: Object.freeze(range),
+    ...(options.extrapolationMargin !== undefined
+      ? { extrapolationMargin: options.extrapolationMargin }
+      : {}),
     component,
     cp(temperatureK: number): number {
       check(temperatureK);

@@ -23,6 +23,11 @@ export interface IdealGasPure {
   readonly source: string;
   /** Temperature range in which the method is valid, K. */
   readonly validTemperatureK: { readonly min: number; readonly max: number };
+  /**
+   * Allowed extrapolation beyond validTemperatureK as a fraction of the limit, when the factory
+   * was given one (the state layer's (P, h) and (P, s) search windows follow it); absent: 0.1.
+   */
+  readonly extrapolationMargin?: number;
   /** Isobaric heat capacity cp°(T), J/(mol K). */
   cp(temperatureK: number): number;
   /** Sensible enthalpy h°(T) - h°(298.15 K), J/mol. */

@@ -20,6 +20,7 @@ import type { CalculationRecordContent, RecordedInput } from "./recordContent.js
 import { formatRecordDate } from "./recordDate.js";
 import { fullNumber as num, fullValues as values } from "./recordNumbers.js";
 import { recordDocumentHead } from "./recordHtml.js";
+import { hasMoreThanCitation, memoryStatement, shortCitation } from "./sourceNotes.js";
 
 const CSS = `
 .isochor-calc { --c-ink:#1f2a33; --c-muted:#5b6770; --c-rule:#c9d1d7; --c-band:#f3f5f6;
@@ -60,9 +61,18 @@ const CSS = `
 .isochor-calc .calc-id { font-weight:700; color:var(--c-accent); white-space:nowrap; }
 .isochor-calc .calc-model { border-top:1px solid var(--c-rule); padding-top:.4rem; margin-top:.6rem; }
 .isochor-calc .calc-model:first-of-type { border-top:0; margin-top:0; }
-.isochor-calc dl.calc-kv { display:grid; grid-template-columns:10rem 1fr; margin:.2rem 0; font-size:.86rem; }
+.isochor-calc dl.calc-kv { display:grid; grid-template-columns:minmax(5.5rem,10rem) minmax(0,1fr); margin:.2rem 0;
+  font-size:.86rem; }
 .isochor-calc dl.calc-kv dt { color:var(--c-muted); }
-.isochor-calc dl.calc-kv dd { margin:0 0 .2rem; }
+.isochor-calc dl.calc-kv dd { margin:0 0 .2rem; min-width:0; }
+.isochor-calc td, .isochor-calc dd, .isochor-calc code, .isochor-calc p, .isochor-calc li { overflow-wrap:anywhere; }
+.isochor-calc details.calc-note summary { cursor:pointer; }
+.isochor-calc details.calc-note[open] summary { color:var(--c-muted); }
+.isochor-calc details.calc-note div { font-size:.76rem; color:var(--c-muted); margin:.2rem 0 .3rem; }
+@media (max-width:40rem) {
+  .isochor-calc dl.calc-kv { grid-template-columns:minmax(0,1fr); }
+  .isochor-calc dl.calc-kv dt { margin-top:.3rem; }
+}
 .isochor-calc .calc-item { margin:.7rem 0 1rem; overflow-x:auto; }
 .isochor-calc .calc-basis { font-size:.78rem; color:var(--c-muted); }
 .isochor-calc .calc-basis-cell { white-space:nowrap; font-size:.8rem; }
@@ -125,6 +135,15 @@ function inputRows(anchor: string, inputs: readonly RecordedInput[]): string {
   );
 }
 
+/** A provenance note as its one-line citation, the full note folded away when it says more. */
+function sourceNote(note: string): string {
+  if (!hasMoreThanCitation(note)) return e(note);
+  return (
+    `<details class="calc-note"><summary>${e(shortCitation(note))}</summary>` +
+    `<div>${e(note)}</div></details>`
+  );
+}
+
 function modelBlock(anchor: string, m: ModelEntry): string {
   const kv: string[] = [];
   const add = (k: string, v: string) => kv.push(`<dt>${e(k)}</dt><dd>${v}</dd>`);
@@ -146,12 +165,14 @@ function modelBlock(anchor: string, m: ModelEntry): string {
           .map(
             (g) =>
               `<tr><td>${e(g.componentId)}</td><td>${e(shortMethod(g.method))}</td>` +
-              `<td class="num">${num(g.validTemperatureK.min)}-${num(g.validTemperatureK.max)} K</td><td>${e(g.source)}</td></tr>`,
+              `<td class="num">${num(g.validTemperatureK.min)}-${num(g.validTemperatureK.max)} K</td><td>${sourceNote(g.source)}</td></tr>`,
           )
           .join("") +
         `</tbody></table>`,
     );
   }
+  const memory = memoryStatement(m);
+  if (memory !== undefined) add("Recalled data", e(memory));
   const known = m.interaction.filter((p) => !m.defaultedPairs.includes(p.pair));
   if (known.length > 0) {
     add(
@@ -160,7 +181,7 @@ function modelBlock(anchor: string, m: ModelEntry): string {
         known
           .map(
             (p) =>
-              `<tr><td>${e(p.pair)}</td><td class="num">${num(p.kij)}</td><td>${e(p.source)}</td></tr>`,
+              `<tr><td>${e(p.pair)}</td><td class="num">${num(p.kij)}</td><td>${sourceNote(p.source)}</td></tr>`,
           )
           .join("") +
         `</tbody></table>`,

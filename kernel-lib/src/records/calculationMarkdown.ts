@@ -13,6 +13,7 @@ import { basisText } from "./recordBasis.js";
 import type { CalculationRecordContent } from "./recordContent.js";
 import { formatRecordDate } from "./recordDate.js";
 import { fullNumber as num, fullValues as values } from "./recordNumbers.js";
+import { hasMoreThanCitation, memoryStatement, shortCitation } from "./sourceNotes.js";
 
 // The escaping is tables/escapeMarkdown.ts (one for tables and records); kept importable here.
 export { escapeMarkdown, escapeMarkdownBlock };
@@ -94,13 +95,23 @@ export function calculationRecordMarkdown(
     out.push(
       `- Validity: ${model.validity.length > 0 ? model.validity.map(m).join(" ") : "no range known to the library; see the citation"}`,
     );
+    // one-line citations here; a note that says more is listed once under the model, numbered
+    const notes: string[] = [];
+    const cite = (note: string): string => {
+      if (!hasMoreThanCitation(note)) return m(note);
+      let k = notes.indexOf(note);
+      if (k < 0) k = notes.push(note) - 1;
+      return `${m(shortCitation(note))} [${model.id}.${k + 1}]`;
+    };
     for (const g of model.idealGas) {
       out.push(
-        `- Ideal gas, ${m(g.componentId)}: ${m(shortMethod(g.method))}, ${num(g.validTemperatureK.min)}-${num(g.validTemperatureK.max)} K; ${m(g.source)}`,
+        `- Ideal gas, ${m(g.componentId)}: ${m(shortMethod(g.method))}, ${num(g.validTemperatureK.min)}-${num(g.validTemperatureK.max)} K; ${cite(g.source)}`,
       );
     }
     for (const p of model.interaction.filter((q) => !model.defaultedPairs.includes(q.pair)))
-      out.push(`- k\\_ij ${m(p.pair)} = ${num(p.kij)} (${m(p.source)})`);
+      out.push(`- k\\_ij ${m(p.pair)} = ${num(p.kij)} (${cite(p.source)})`);
+    const memory = memoryStatement(model);
+    if (memory !== undefined) out.push(`- Recalled data: ${m(memory)}`);
     if (model.defaultedPairs.length > 0) {
       out.push(
         `- Defaulted k\\_ij (set to zero, no value known): ${m(model.defaultedPairs.join(", "))}`,
@@ -108,6 +119,11 @@ export function calculationRecordMarkdown(
     }
     for (const note of model.notes) out.push(`- Note: ${m(note)}`);
     out.push("");
+    if (notes.length > 0) {
+      out.push(`Source notes of ${model.id}:`, "");
+      notes.forEach((note, k) => out.push(`- [${model.id}.${k + 1}] ${m(note)}`));
+      out.push("");
+    }
   }
   if (c.methods !== undefined && c.methods.length > 0) {
     heading("Method and assumptions");

@@ -17,6 +17,8 @@ import { findRootBrent } from "../numerics/brent.js";
 import { requireFinite } from "../validate.js";
 import { checkComposition, checkPressure } from "./checkInputs.js";
 import { DEFAULT_EXTRAPOLATION_MARGIN } from "../idealgas/temperatureRange.js";
+import { outOfRangeAdvice } from "../idealgas/messages.js";
+import type { IdealGasPure } from "../idealgas/types.js";
 import { MAX_TEMPERATURE_K, MIN_TEMPERATURE_K } from "./physicalLimits.js";
 import { stateAtTP } from "./stateAt.js";
 import type { FluidBinding, FluidState, PhaseRequest } from "./types.js";
@@ -89,9 +91,11 @@ function invert(
   const lo = Math.max(tMin, ig.min);
   const hi = Math.min(tMax, ig.max);
   if (!(lo < hi)) {
+    const limiter = tMax <= ig.min ? ig.lowLimiter : tMin >= ig.max ? ig.highLimiter : undefined;
+    const stop = limiter ? `; ${rangeStop(limiter, tMax <= ig.min ? tMax : tMin)}` : "";
     throw new SolverError(
       `temperature at given (P, ${property})`,
-      `the requested temperatures ${tMin} K to ${tMax} K lie outside the range where the fluid can be evaluated (${ig.min} K to ${ig.max} K: ${ig.basis})`,
+      `the requested temperatures ${tMin} K to ${tMax} K lie outside the range where the fluid can be evaluated (${ig.min} K to ${ig.max} K: ${ig.basis})${stop}`,
     );
   }
   const start = Math.min(
@@ -99,9 +103,12 @@ function invert(
     Math.max(lo, options.initialGuessK ?? (300 >= lo && 300 <= hi ? 300 : Math.sqrt(lo * hi))),
   );
   let evaluations = 0;
+  let lastCp = NaN;
   const f = (T: number): number => {
     evaluations++;
-    return stateAtTP(binding, T, pressurePa, x, { phase }).molar[property] - target;
+    const molar = stateAtTP(binding, T, pressurePa, x, { phase }).molar;
+    lastCp = molar.cp;
+    return molar[property] - target;
   };
   const tried: string[] = [];
   const safe = (T: number): number => {
@@ -146,6 +153,7 @@ function invert(
   const up = fa < 0;
   let b = a;
   let fb = fa;
+  let cpB = lastCp;
   let step = 0.02;
   for (let k = 0; k < 80 && step > 1e-6; k++) {
     const next = up ? Math.min(b * (1 + step), hi) : Math.max(b / (1 + step), lo);
@@ -159,10 +167,26 @@ function invert(
     fa = fb;
     b = next;
     fb = fn;
+    cpB = lastCp;
     if (fa < 0 !== fb < 0 || fb === 0) break;
     step = Math.min(step * 2, 1);
   }
   if (!(fa < 0 !== fb < 0 || fb === 0)) {
+    // when the search ended at the edge of a component's heat-capacity range (with its margin),
+    // say whose range it was and what to do, with the temperature the target roughly needs
+    // (one Newton step from the last state: dh = cp dT, ds = cp dT / T)
+    const needed =
+      property === "h" ? b - fb / cpB : b * Math.exp(-fb / (Number.isFinite(cpB) ? cpB : NaN));
+    const atLow = !up && lo === ig.min && b <= lo * 1.001 ? ig.lowLimiter : undefined;
+    const atHigh = up && hi === ig.max && b >= hi / 1.001 ? ig.highLimiter : undefined;
+    const limiter = atLow ?? atHigh;
+    if (limiter) {
+      const estimate = Number.isFinite(needed) && needed > 0 ? needed : up ? hi * 1.05 : lo * 0.95;
+      throw new SolverError(
+        `temperature at given (P, ${property})`,
+        `${property} = ${target} ${unit} at P = ${pressurePa} Pa needs a temperature ${up ? "above" : "below"} ${b.toPrecision(6)} K (about ${estimate.toPrecision(4)} K), ${rangeStop(limiter, estimate)}; tried ${tried.slice(-4).join("; ")}`,
+      );
+    }
     const edge = up
       ? `the target is above ${property} at ${b.toPrecision(6)} K, the highest temperature reached (window ${lo} K to ${hi} K: ${ig.basis}, maxTemperatureK ${tMax} K, or where the ${phase} phase ends)`
       : `the target is below ${property} at ${b.toPrecision(6)} K, the lowest temperature reached (window ${lo} K to ${hi} K: ${ig.basis}, minTemperatureK ${tMin} K, or where the ${phase} phase ends)`;
@@ -239,21 +263,63 @@ export function temperatureAtPS(
 function idealGasWindow(
   binding: FluidBinding,
   x: readonly number[],
-): { min: number; max: number; basis: string } {
+): {
+  min: number;
+  max: number;
+  basis: string;
+  lowLimiter?: IdealGasPure;
+  highLimiter?: IdealGasPure;
+} {
   let min = MIN_TEMPERATURE_K;
   let max = MAX_TEMPERATURE_K;
+  let lowLimiter: IdealGasPure | undefined;
+  let highLimiter: IdealGasPure | undefined;
   const parts: string[] = [];
   const pures = binding.idealGas.components;
   for (let i = 0; i < pures.length; i++) {
     const range = pures[i].validTemperatureK;
     if (!(x[i] > 0) || !range) continue;
-    min = Math.max(min, range.min * (1 - DEFAULT_EXTRAPOLATION_MARGIN));
-    max = Math.min(max, range.max * (1 + DEFAULT_EXTRAPOLATION_MARGIN));
-    parts.push(`${pures[i].componentId} ${range.min}-${range.max} K`);
+    const m = pures[i].extrapolationMargin;
+    const margin = m !== undefined && m >= 0 && m < 1 ? m : DEFAULT_EXTRAPOLATION_MARGIN;
+    const low = range.min * (1 - margin);
+    const high = range.max * (1 + margin);
+    if (low > min) {
+      min = low;
+      lowLimiter = pures[i];
+    }
+    if (high < max) {
+      max = high;
+      highLimiter = pures[i];
+    }
+    parts.push(
+      `${pures[i].componentId} ${range.min}-${range.max} K` +
+        (margin !== DEFAULT_EXTRAPOLATION_MARGIN ? ` (margin ${margin})` : ""),
+    );
   }
   const basis =
     parts.length > 0
       ? `ideal-gas heat-capacity ranges ${parts.join(", ")} with a ${DEFAULT_EXTRAPOLATION_MARGIN * 100} % extrapolation margin`
       : "the physical limits of state/physicalLimits.ts";
-  return { min, max, basis };
+  return { min, max, basis, lowLimiter, highLimiter };
+}
+
+/**
+ * "stopped by the ideal-gas heat-capacity range of <component> (...)" and what to do about it
+ * (idealgas/messages.ts, outOfRangeAdvice), for a temperature the target needs.
+ */
+function rangeStop(pure: IdealGasPure, temperatureK: number): string {
+  const r = pure.validTemperatureK;
+  const m = pure.extrapolationMargin;
+  const margin = m !== undefined && m >= 0 && m < 1 ? m : DEFAULT_EXTRAPOLATION_MARGIN;
+  return (
+    `stopped by the ideal-gas heat-capacity range of ${pure.componentId} (${pure.method}: ` +
+    `${r.min} K to ${r.max} K, usable ${round2(r.min * (1 - margin))}-${round2(r.max * (1 + margin))} K ` +
+    `with the ${margin * 100} % extrapolation margin). ` +
+    outOfRangeAdvice(pure.componentId, pure.method, r, Number(temperatureK.toFixed(1))) +
+    " (for a fluid: defineFluid({ ..., idealGas: idealGasMixture([...pures], options) }))"
+  );
+}
+
+function round2(v: number): number {
+  return Math.round(v * 100) / 100;
 }
