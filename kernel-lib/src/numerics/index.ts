@@ -19,3 +19,5 @@ export type {
   OdeEvent,
   OdeEventHit,
 } from "./dormandPrince.js";
+export { minimizeBrent } from "./brentMinimize.js";
+export type { MinimizeOptions, MinimizeResult } from "./brentMinimize.js";

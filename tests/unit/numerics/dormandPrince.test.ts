@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { integrateDormandPrince } from "../../../kernel-lib/src/numerics/dormandPrince.js";
+import { minimizeBrent } from "../../../kernel-lib/src/numerics/brentMinimize.js";
 import { InputError, SolverError } from "../../../kernel-lib/src/errors.js";
 
 // Every reference here is a closed-form solution of the equation integrated.
@@ -108,5 +109,21 @@ describe("integrateDormandPrince", () => {
     ).toThrow(InputError);
     expect(() => integrateDormandPrince((_t, y) => [y[0] * y[0]], 0, [1], 2)).toThrow(SolverError);
     expect(() => integrateDormandPrince(() => [NaN], 0, [1], 1)).toThrow(SolverError);
+  });
+});
+
+describe("minimizeBrent", () => {
+  it("finds the minimum of (x - 2)^2 + 1 and of -x e^-x (closed forms 2 and 1)", () => {
+    const r = minimizeBrent((x) => (x - 2) ** 2 + 1, 0, 5, { tolerance: 1e-9 });
+    expect(Math.abs(r.value - 2)).toBeLessThan(1e-7);
+    expect(r.minimum).toBeCloseTo(1, 12);
+    const s = minimizeBrent((x) => -x * Math.exp(-x), 0, 10, { tolerance: 1e-10 });
+    expect(Math.abs(s.value - 1)).toBeLessThan(1e-6);
+  });
+  it("ends at the edge when the function is monotone, and refuses a bad interval", () => {
+    const r = minimizeBrent((x) => x, 1, 2, { tolerance: 1e-9 });
+    expect(r.value - 1).toBeLessThanOrEqual(r.errorEstimate);
+    expect(r.errorEstimate).toBeLessThan(1e-7);
+    expect(() => minimizeBrent((x) => x, 2, 1)).toThrow(InputError);
   });
 });
