@@ -233,9 +233,9 @@ export function integrateDormandPrince(
   }
   const events = options.events ?? [];
   let evaluations = 0;
-  const rhs = (t: number, y: readonly number[]): Float64Array => {
+  const rhs = (t: number, y: ArrayLike<number>): Float64Array => {
     evaluations++;
-    const v = f(t, y);
+    const v = f(t, Array.from(y));
     if (v.length !== n) {
       throw new SolverError(method, `f returned ${v.length} values at t = ${t}, expected ${n}`);
     }
