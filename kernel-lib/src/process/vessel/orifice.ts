@@ -233,13 +233,34 @@ function fluxAlong(
     const p = at(Math.exp(lnP));
     return -p.rhoMass * velocity(s, p);
   };
-  const m = minimizeBrent(negG, lnB, ln0, { tolerance: relTol });
-  const pb = at(backPressurePa);
-  const gB = pb.rhoMass * velocity(s, pb);
-  if (gB >= -m.minimum || Math.exp(m.value) <= backPressurePa * (1 + 4 * relTol)) {
-    return result(pb, false);
+  // step down from the stagnation pressure until G falls: the maximum is then bracketed by the
+  // last three points (G is unimodal along the isentrope), and no state far below it is visited
+  const ratios = [0.9, 0.75, 0.62, 0.52, 0.43, 0.35, 0.27, 0.2, 0.14, 0.09, 0.05, 0.02, 0.005];
+  let prevLn = ln0;
+  let prevG = 0;
+  let prevPrevLn = ln0;
+  let bracket: [number, number] | undefined;
+  for (const r of ratios) {
+    const lnP = ln0 + Math.log(r);
+    if (lnP <= lnB) break;
+    const g = -negG(lnP);
+    if (g < prevG) {
+      bracket = [lnP, prevPrevLn];
+      break;
+    }
+    prevPrevLn = prevLn;
+    prevLn = lnP;
+    prevG = g;
   }
+  if (bracket === undefined) {
+    const pb = at(backPressurePa);
+    const gB = pb.rhoMass * velocity(s, pb);
+    if (gB >= prevG) return result(pb, false);
+    bracket = [lnB, prevPrevLn];
+  }
+  const m = minimizeBrent(negG, bracket[0], bracket[1], { tolerance: relTol });
   const pt = at(Math.exp(m.value));
+  if (pt.P <= backPressurePa * (1 + 4 * relTol)) return result(at(backPressurePa), false);
   return result(pt, true);
 }
 
