@@ -50,6 +50,12 @@ export interface OrificeFluxOptions {
   route?: "auto" | "single-phase" | "equilibrium";
   /** Relative tolerance on the throat pressure. Default 1e-7. */
   pressureTolerance?: number;
+  /**
+   * A guess of the choking pressure ratio P_throat / P0 (e.g. from the previous time step): the
+   * equilibrium route then searches around it first (within +-3 % in ln P), and falls back to the
+   * full search when the maximum is not inside.
+   */
+  throatRatioHint?: number;
 }
 
 /** The flux and the throat. */
@@ -170,6 +176,7 @@ function fluxAlong(
   backPressurePa: number,
   route: "single-phase" | "equilibrium",
   relTol: number,
+  hint?: number,
 ): OrificeFlux & { points: PathPoint[] } {
   let evaluations = 0;
   let guess = s.temperatureK;
@@ -233,6 +240,33 @@ function fluxAlong(
     const p = at(Math.exp(lnP));
     return -p.rhoMass * velocity(s, p);
   };
+  if (hint !== undefined && hint > 0 && hint < 1) {
+    const lo = Math.max(lnB, ln0 + Math.log(hint) - 0.03);
+    const hi = Math.min(ln0 - 1e-6, ln0 + Math.log(hint) + 0.03);
+    // three points around the hint and the vertex of their parabola: accepted when the vertex
+    // lies between the outer two and G there is the largest of the four (G is smooth and
+    // nearly quadratic at its maximum unless the expansion crosses a phase boundary there)
+    const lnH = ln0 + Math.log(hint);
+    const d = 0.004;
+    if (lnH - d > lnB && lnH + d < ln0 - 1e-6) {
+      const g0 = -negG(lnH - d);
+      const g1 = -negG(lnH);
+      const g2 = -negG(lnH + d);
+      const curvature = g0 - 2 * g1 + g2;
+      if (curvature < 0 && g1 >= g0 && g1 >= g2) {
+        const lnV = lnH + (0.5 * d * (g0 - g2)) / curvature;
+        const pv = at(Math.exp(lnV));
+        const gv = pv.rhoMass * velocity(s, pv);
+        if (gv >= g1 && Math.abs(lnV - lnH) <= d) return result(pv, true);
+      }
+    }
+    if (hi > lo) {
+      const tol = Math.max(relTol, 1e-9);
+      const m = minimizeBrent(negG, lo, hi, { tolerance: tol });
+      const inside = m.value - lo > 4 * m.errorEstimate && hi - m.value > 4 * m.errorEstimate;
+      if (inside) return result(at(Math.exp(m.value)), true);
+    }
+  }
   // step down from the stagnation pressure until G falls: the maximum is then bracketed by the
   // last three points (G is unimodal along the isentrope), and no state far below it is visited
   const ratios = [0.9, 0.75, 0.62, 0.52, 0.43, 0.35, 0.27, 0.2, 0.14, 0.09, 0.05, 0.02, 0.005];
@@ -298,7 +332,14 @@ export function orificeMassFlux(
     });
   }
   if (route === "equilibrium") {
-    const { points: _p, ...r } = fluxAlong(fluid, stagnation, backPressurePa, route, relTol);
+    const { points: _p, ...r } = fluxAlong(
+      fluid,
+      stagnation,
+      backPressurePa,
+      route,
+      relTol,
+      options.throatRatioHint,
+    );
     return r;
   }
   if (route === "single-phase") {
@@ -326,7 +367,14 @@ export function orificeMassFlux(
       return r;
     }
   }
-  const { points: _p, ...r } = fluxAlong(fluid, stagnation, backPressurePa, "equilibrium", relTol);
+  const { points: _p, ...r } = fluxAlong(
+    fluid,
+    stagnation,
+    backPressurePa,
+    "equilibrium",
+    relTol,
+    options.throatRatioHint,
+  );
   return r;
 }
 

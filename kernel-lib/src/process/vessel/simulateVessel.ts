@@ -27,6 +27,7 @@ import { integrateDormandPrince, type OdeEvent } from "../../numerics/dormandPri
 import type { PhaseKind } from "../../phase/flash/types.js";
 import type { FluidState } from "../../state/types.js";
 import { VESSEL_CAUTIONS, VESSEL_NOT_MODELLED } from "./cautions.js";
+import { contentsFlash } from "./contentsFlash.js";
 import { vesselGeometry, type VesselGeometry } from "./geometry.js";
 import { airAt, naturalConvectionCoefficient, type TransportProperties } from "./heatTransfer.js";
 import {
@@ -381,7 +382,17 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   let mode: "single-phase" | "equilibrium" = "single-phase";
   let guessT = init.temperatureK;
   let guessP = init.pressurePa;
+  const uvSolver = contentsFlash(fluid);
+  const contentsCache: { key: string; c: Contents }[] = [];
   const contentsAt = (y: readonly number[]): Contents => {
+    const key = `${mode}|${y.slice(0, nc + 1).join(",")}`;
+    for (const e of contentsCache) if (e.key === key) return e.c;
+    const c = contentsFresh(y);
+    contentsCache.unshift({ key, c });
+    if (contentsCache.length > 8) contentsCache.pop();
+    return c;
+  };
+  const contentsFresh = (y: readonly number[]): Contents => {
     const n = y.slice(0, nc);
     for (let i = 0; i < nc; i++) {
       if (!(n[i] >= 0)) {
@@ -424,7 +435,10 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       P = st.pressurePa;
       phases = [{ kind: st.phase === "liquid" ? "liquid" : "vapor", amount: 1, state: st }];
     } else {
-      const eq = fluid.flashUV(u, rho, z, { initialGuessK: guessT, initialGuessPa: guessP });
+      const eq =
+        z.filter((v) => v > 0).length === 1
+          ? fluid.flashUV(u, rho, z, { initialGuessK: guessT, initialGuessPa: guessP })
+          : uvSolver.solve(u, rho, z, guessT, guessP);
       T = eq.temperatureK;
       P = eq.pressurePa;
       phases = eq.phases.map((p) => ({ kind: p.kind, amount: p.amount, state: p.state }));
@@ -544,18 +558,27 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   // ---- right-hand side ----------------------------------------------------------------------
   // the single-phase route fails when a trial step's isentrope enters the two-phase region: that
   // evaluation takes the equilibrium route (the accepted-step check then changes the mode)
+  const throatHints = new Map<number, number>();
   const fluxOf = (
     stag: StagnationState,
     back: number,
     route: "single-phase" | "auto",
+    which: number,
   ): OrificeFlux => {
-    if (route === "auto" || idealGas) return orificeMassFlux(fluid, stag, back, { route });
-    try {
-      return orificeMassFlux(fluid, stag, back, { route: "single-phase" });
-    } catch (e) {
-      if (!(e instanceof SolverError || e instanceof InputError)) throw e;
-      return orificeMassFlux(fluid, stag, back, { route: "equilibrium" });
+    const opts = { throatRatioHint: throatHints.get(which), pressureTolerance: 1e-6 };
+    let flux: OrificeFlux;
+    if (route === "auto" || idealGas) {
+      flux = orificeMassFlux(fluid, stag, back, { ...opts, route });
+    } else {
+      try {
+        flux = orificeMassFlux(fluid, stag, back, { ...opts, route: "single-phase" });
+      } catch (e) {
+        if (!(e instanceof SolverError || e instanceof InputError)) throw e;
+        flux = orificeMassFlux(fluid, stag, back, { ...opts, route: "equilibrium" });
+      }
     }
+    if (flux.choked) throatHints.set(which, flux.throatPressurePa / stag.pressurePa);
+    return flux;
   };
   const cache: { key: string; ev: Evaluation }[] = [];
   const evaluate = (y: readonly number[]): Evaluation => {
@@ -576,7 +599,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
         continue;
       }
       const stag = stagnationOf(c, o.draws);
-      const flux = fluxOf(stag, o.backPressurePa, route);
+      const flux = fluxOf(stag, o.backPressurePa, route, outletFlux.length);
       outletFlux.push(flux);
       const mdot =
         (o.dischargeCoefficient * Math.PI * o.diameterM ** 2 * flux.massFluxKgPerM2S) / 4;
@@ -586,7 +609,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       hOut += ndot * stag.enthalpyJPerMol;
     }
     if (supply !== undefined && supply.stag.pressurePa > c.P * (1 + 1e-9)) {
-      const flux = fluxOf(supply.stag, c.P, route);
+      const flux = fluxOf(supply.stag, c.P, route, -1);
       outletFlux.push(flux);
       const mdot = supply.areaCd * flux.massFluxKgPerM2S;
       const ndot = mdot / supply.stag.molarMassKgPerMol;
@@ -681,7 +704,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   const pTarget = until.pressurePa;
 
   // ---- events -------------------------------------------------------------------------------
-  const pOf = (y: readonly number[]): number => evaluate(y).contents.P;
+  const pOf = (y: readonly number[]): number => contentsAt(y).P;
   const events: OdeEvent[] = [];
   if (pTarget !== undefined) {
     events.push({
@@ -776,6 +799,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       }
       mode = "equilibrium";
       cache.length = 0;
+      contentsCache.length = 0;
       continue;
     }
     for (let k = 1; k < r.t.length; k++) {
