@@ -15,6 +15,7 @@ import { SolverError } from "../../errors.js";
 import type { Fluid } from "../../fluid/defineFluid.js";
 import { overallProperty } from "../../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium } from "../../phase/flash/types.js";
+import type { FlashOptions } from "../../phase/flash/flashTP.js";
 
 /** A warm-started (u, v) solver with its remembered Jacobian. */
 export interface ContentsFlash {
@@ -25,7 +26,11 @@ export interface ContentsFlash {
 }
 
 /** Creates the solver for a fluid; `specTolerance` as in flashUV (default 1e-9). */
-export function contentsFlash(fluid: Fluid, specTolerance = 1e-9): ContentsFlash {
+export function contentsFlash(
+  fluid: Fluid,
+  specTolerance = 1e-9,
+  flash: FlashOptions = {},
+): ContentsFlash {
   let J: [number, number, number, number] | undefined; // d(ru, rv)/d(T, lnP)
   let fallbacks = 0;
   const residual = (eq: Equilibrium, u: number, v: number): [number, number] => {
@@ -42,14 +47,14 @@ export function contentsFlash(fluid: Fluid, specTolerance = 1e-9): ContentsFlash
     const v = 1 / rho;
     let T = T0;
     let lnP = Math.log(P0);
-    let eq = fluid.flashTP(T, Math.exp(lnP), z);
+    let eq = fluid.flashTP(T, Math.exp(lnP), z, flash);
     let r = residual(eq, u, v);
     let norm = Math.max(Math.abs(r[0]), Math.abs(r[1]));
     const jacobian = (): [number, number, number, number] => {
       const dT = 1e-5 * T;
       const dl = 1e-5;
-      const a = residual(fluid.flashTP(T + dT, Math.exp(lnP), z), u, v);
-      const b = residual(fluid.flashTP(T, Math.exp(lnP + dl), z), u, v);
+      const a = residual(fluid.flashTP(T + dT, Math.exp(lnP), z, flash), u, v);
+      const b = residual(fluid.flashTP(T, Math.exp(lnP + dl), z, flash), u, v);
       return [(a[0] - r[0]) / dT, (b[0] - r[0]) / dl, (a[1] - r[1]) / dT, (b[1] - r[1]) / dl];
     };
     let fresh = false;
@@ -68,7 +73,7 @@ export function contentsFlash(fluid: Fluid, specTolerance = 1e-9): ContentsFlash
       const s = Math.max(Math.abs(dT) / (0.1 * T), Math.abs(dl) / 0.2, 1);
       dT /= s;
       dl /= s;
-      const eqNew = fluid.flashTP(T + dT, Math.exp(lnP + dl), z);
+      const eqNew = fluid.flashTP(T + dT, Math.exp(lnP + dl), z, flash);
       const rNew = residual(eqNew, u, v);
       const normNew = Math.max(Math.abs(rNew[0]), Math.abs(rNew[1]));
       if (!(normNew < norm)) {
@@ -107,6 +112,7 @@ export function contentsFlash(fluid: Fluid, specTolerance = 1e-9): ContentsFlash
       fallbacks++;
       J = undefined;
       return fluid.flashUV(u, rho, z, {
+        ...flash,
         initialGuessK: guessT,
         initialGuessPa: guessP,
         specTolerance,

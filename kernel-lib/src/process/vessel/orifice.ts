@@ -28,6 +28,7 @@ import { findRootBrent } from "../../numerics/brent.js";
 import { minimizeBrent } from "../../numerics/brentMinimize.js";
 import { overallProperty } from "../../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium } from "../../phase/flash/types.js";
+import type { FlashOptions } from "../../phase/flash/flashTP.js";
 import type { FluidState } from "../../state/types.js";
 
 /** The stagnation (vessel) state of the stream that flows. */
@@ -56,6 +57,8 @@ export interface OrificeFluxOptions {
    * full search when the maximum is not inside.
    */
   throatRatioHint?: number;
+  /** Options of the phase-equilibrium calculations (flashPS, flashTP). */
+  flash?: FlashOptions;
 }
 
 /** The flux and the throat. */
@@ -124,8 +127,17 @@ function singlePhasePoint(fluid: Fluid, s: StagnationState, P: number, guessK: n
 }
 
 /** The equilibrium isentrope point at P ((P, s) flash). */
-function equilibriumPoint(fluid: Fluid, s: StagnationState, P: number, guessK: number): PathPoint {
-  const eq: Equilibrium = fluid.flashPS(P, s.entropyJPerMolK, s.x, { initialGuessK: guessK });
+function equilibriumPoint(
+  fluid: Fluid,
+  s: StagnationState,
+  P: number,
+  guessK: number,
+  flash: FlashOptions,
+): PathPoint {
+  const eq: Equilibrium = fluid.flashPS(P, s.entropyJPerMolK, s.x, {
+    ...flash,
+    initialGuessK: guessK,
+  });
   const v = overallProperty(eq, "v");
   const vapor = eq.phases.find((p) => p.kind === "vapor");
   return {
@@ -163,8 +175,9 @@ export function isStableSinglePhase(
   pressurePa: number,
   x: readonly number[],
   densityMolPerM3: number,
+  flash: FlashOptions = {},
 ): boolean {
-  const eq = fluid.flashTP(temperatureK, pressurePa, x);
+  const eq = fluid.flashTP(temperatureK, pressurePa, x, flash);
   if (eq.phases.length !== 1) return false;
   const rho = eq.phases[0].state.densityMolPerM3;
   return Math.abs(rho - densityMolPerM3) <= 1e-6 * densityMolPerM3;
@@ -177,6 +190,7 @@ function fluxAlong(
   route: "single-phase" | "equilibrium",
   relTol: number,
   hint?: number,
+  flash: FlashOptions = {},
 ): OrificeFlux & { points: PathPoint[] } {
   let evaluations = 0;
   let guess = s.temperatureK;
@@ -186,7 +200,7 @@ function fluxAlong(
     const p =
       route === "single-phase"
         ? singlePhasePoint(fluid, s, P, guess)
-        : equilibriumPoint(fluid, s, P, guess);
+        : equilibriumPoint(fluid, s, P, guess, flash);
     guess = p.T;
     points.push(p);
     return p;
@@ -339,6 +353,7 @@ export function orificeMassFlux(
       route,
       relTol,
       options.throatRatioHint,
+      options.flash,
     );
     return r;
   }
@@ -360,7 +375,14 @@ export function orificeMassFlux(
     const mid = singlePhasePoint(fluid, stagnation, midP, throat.T);
     const checks: PathPoint[] = [throat, mid];
     const stable = checks.every((p) =>
-      isStableSinglePhase(fluid, p.T, p.P, x, p.rhoMass / stagnation.molarMassKgPerMol),
+      isStableSinglePhase(
+        fluid,
+        p.T,
+        p.P,
+        x,
+        p.rhoMass / stagnation.molarMassKgPerMol,
+        options.flash,
+      ),
     );
     if (stable) {
       const { points: _p, ...r } = single;
@@ -374,6 +396,7 @@ export function orificeMassFlux(
     "equilibrium",
     relTol,
     options.throatRatioHint,
+    options.flash,
   );
   return r;
 }

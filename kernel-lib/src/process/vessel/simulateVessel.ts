@@ -382,7 +382,8 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   let mode: "single-phase" | "equilibrium" = "single-phase";
   let guessT = init.temperatureK;
   let guessP = init.pressurePa;
-  const uvSolver = contentsFlash(fluid);
+  const flashOptions = options.flash ?? {};
+  const uvSolver = contentsFlash(fluid, 1e-9, flashOptions);
   const contentsCache: { key: string; c: Contents }[] = [];
   const contentsAt = (y: readonly number[]): Contents => {
     const key = `${mode}|${y.slice(0, nc + 1).join(",")}`;
@@ -437,7 +438,11 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     } else {
       const eq =
         z.filter((v) => v > 0).length === 1
-          ? fluid.flashUV(u, rho, z, { initialGuessK: guessT, initialGuessPa: guessP })
+          ? fluid.flashUV(u, rho, z, {
+              ...flashOptions,
+              initialGuessK: guessT,
+              initialGuessPa: guessP,
+            })
           : uvSolver.solve(u, rho, z, guessT, guessP);
       T = eq.temperatureK;
       P = eq.pressurePa;
@@ -565,7 +570,11 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     route: "single-phase" | "auto",
     which: number,
   ): OrificeFlux => {
-    const opts = { throatRatioHint: throatHints.get(which), pressureTolerance: 1e-6 };
+    const opts = {
+      throatRatioHint: throatHints.get(which),
+      pressureTolerance: 1e-6,
+      flash: flashOptions,
+    };
     let flux: OrificeFlux;
     if (route === "auto" || idealGas) {
       flux = orificeMassFlux(fluid, stag, back, { ...opts, route });
@@ -635,7 +644,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     if (idealGas) return true;
     const ev = evaluate(y);
     const c = ev.contents;
-    if (!isStableSinglePhase(fluid, c.T, c.P, c.z, c.rho)) return false;
+    if (!isStableSinglePhase(fluid, c.T, c.P, c.z, c.rho, flashOptions)) return false;
     for (const f of ev.outletFlux) {
       if (f === undefined) continue;
       if (f.route === "equilibrium") return false;
@@ -643,7 +652,14 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       const stag = filling ? supply!.stag : stagnationOf(c, outlets[0].draws);
       const rhoThroat = f.throatDensityKgPerM3 / stag.molarMassKgPerMol;
       if (
-        !isStableSinglePhase(fluid, f.throatTemperatureK, f.throatPressurePa, stag.x, rhoThroat)
+        !isStableSinglePhase(
+          fluid,
+          f.throatTemperatureK,
+          f.throatPressurePa,
+          stag.x,
+          rhoThroat,
+          flashOptions,
+        )
       ) {
         return false;
       }

@@ -6,6 +6,7 @@ import type { ResultWarning } from "../../errors.js";
 import type { ModelInfo } from "../../eos/types.js";
 import type { Fluid } from "../../fluid/defineFluid.js";
 import type { FluidState } from "../../state/types.js";
+import type { FlashOptions } from "../../phase/flash/flashTP.js";
 import type { VesselShape } from "./geometry.js";
 import type { TransportProperties } from "./heatTransfer.js";
 
@@ -140,6 +141,12 @@ export interface VesselOptions {
   maxSteps?: number;
   /** Called after each accepted step. */
   onProgress?: (p: VesselProgress) => void;
+  /**
+   * Options of every phase-equilibrium calculation of the run (flashTP, flashPS, flashUV), e.g.
+   * `{ extraTrials: "none" }` for Wilson starts only in the stability tests (faster; a second
+   * liquid that Wilson's K-factors miss is then possible: not for water-rich contents).
+   */
+  flash?: FlashOptions;
 }
 
 /** The time series of a run (one entry per accepted step). */
