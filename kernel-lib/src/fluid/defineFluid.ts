@@ -68,6 +68,8 @@ import {
   type StateFlashOptions,
 } from "../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium, StateFunctionEquilibrium } from "../phase/flash/types.js";
+import { transportOfState } from "../transport/transportAt.js";
+import type { TransportOfState, TransportOptions } from "../transport/types.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
 // x). Not frozen: a frozen array has other elements kinds and slowed every state call by half.
@@ -121,6 +123,9 @@ export interface FluidStateAtTPOptions extends StateAtTPOptions {
    */
   checkStability?: boolean;
 }
+
+/** Options of a fluid's `transportAtTP`: the state's (phase choice, stability) and the method's. */
+export interface FluidTransportOptions extends FluidStateAtTPOptions, TransportOptions {}
 
 /** A bound fluid with its state functions. */
 export interface Fluid extends FluidBinding {
@@ -250,6 +255,18 @@ export interface Fluid extends FluidBinding {
     x?: readonly number[],
     options?: InversionOptions,
   ): InversionResult;
+  /**
+   * Viscosity (Pa s) and thermal conductivity (W/(m K)) of the single-phase state at T (K),
+   * P (Pa) (transport/: IAPWS 2008/2011 for IAPWS-95 water, Chung et al. 1988 otherwise).
+   */
+  transportAtTP(
+    temperatureK: number,
+    pressurePa: number,
+    x?: readonly number[],
+    options?: FluidTransportOptions,
+  ): TransportOfState;
+  /** Viscosity and thermal conductivity of a state of this fluid (e.g. one phase of a flash). */
+  transportOfState(state: FluidState, options?: TransportOptions): TransportOfState;
 }
 
 function resolveComponents(spec: FluidSpec): Component[] {
@@ -569,6 +586,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
       received: x,
     });
   };
+  const transportFluid = { ...binding, components };
   // the flashes' stability tests start from this fluid's critical constants (Wilson K-factors)
   const withConstants = <O extends FlashOptions>(options: O | undefined): O =>
     ({
@@ -613,5 +631,12 @@ export function defineFluid(spec: FluidSpec): Fluid {
     flashUV: (u, rho, x, options) => flashUV(binding, u, rho, xOf(x), withConstants(options)),
     temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),
     temperatureAtPS: (P, s, x, options) => temperatureAtPS(binding, P, s, xOf(x), options),
+    transportAtTP: (T, P, x, options) =>
+      transportOfState(
+        transportFluid,
+        stateWithStabilityCheck(binding, T, P, xOf(x), options),
+        options,
+      ),
+    transportOfState: (state, options) => transportOfState(transportFluid, state, options),
   };
 }
