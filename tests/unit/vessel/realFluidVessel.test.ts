@@ -83,6 +83,27 @@ describe("adiabatic blowdown of methane (PR) from 100 bar, 25 degC", () => {
     expect(run.minimum.temperatureK).toBeLessThan(273.15);
     expect(run.cautions[0]).toMatch(/BELOW the minimum design metal temperature/);
   });
+
+  it("wall heat transfer with the fluid's own transport properties warms the gas above the adiabatic run", () => {
+    const common = {
+      fluid: methane,
+      shape,
+      initial: { temperatureK: 298.15, pressurePa: 100e5 },
+      outlets: [outlet],
+      until: { pressurePa: 40e5 },
+    };
+    const adiabatic = simulateVessel(common);
+    const walled = simulateVessel({
+      ...common,
+      wall: { thicknessM: 0.03 },
+      heat: { kind: "wall", outside: { kind: "air", ambientK: 298.15 } },
+    });
+    expect(walled.warnings.map((w) => w.message).join(" ")).toMatch(/Chung/);
+    expect(walled.minimum.temperatureK).toBeGreaterThan(adiabatic.minimum.temperatureK);
+    expect(walled.minimum.wallTemperatureK).toBeLessThan(298.15);
+    expect(walled.minimum.wallTemperatureK).toBeGreaterThan(walled.minimum.temperatureK);
+    expect(walled.balance.energyRelativeError).toBeLessThan(1e-8);
+  });
 });
 
 describe("orifice flux of methane", () => {

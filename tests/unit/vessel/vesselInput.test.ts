@@ -99,9 +99,12 @@ describe("bad input is refused with typed errors naming the input", () => {
       },
       /basis/,
     );
+    // a fluid object without a transport method, and no transport function given
+    const noTransport = { ...methane, transportOfState: undefined } as unknown as typeof methane;
     refused(
       {
         ...good,
+        fluid: noTransport,
         wall: { thicknessM: 0.02 },
         heat: { kind: "wall", outside: { kind: "insulated" } },
       },

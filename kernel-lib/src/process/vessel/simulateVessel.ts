@@ -265,6 +265,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   // ---- heat -------------------------------------------------------------------------------
   const heat = spec.heat ?? "adiabatic";
   let wallHeat: WallHeatSpec | undefined;
+  let transport: ((state: FluidState) => TransportProperties) | undefined;
   let wallMass = 0;
   let wallCp = 0;
   if (heat !== "adiabatic") {
@@ -296,7 +297,17 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     }
     const inside = heat.inside ?? "natural-convection";
     if (inside === "natural-convection") {
-      if (typeof heat.transport !== "function") {
+      if (heat.transport === undefined && typeof fluid.transportOfState === "function") {
+        transport = (st) => fluid.transportOfState(st);
+        warnings.push({
+          code: "model-limitation",
+          message:
+            "inside heat transfer: viscosity and thermal conductivity of the contents from the fluid's transport method (Chung et al. 1988, Ind. Eng. Chem. Res. 27, 671-679, or the IAPWS releases for water), in natural-convection correlations (Churchill and Chu 1975) uncertain by tens of percent",
+        });
+      } else {
+        transport = heat.transport;
+      }
+      if (typeof transport !== "function") {
         bad(
           "spec.heat.transport",
           "-",
@@ -526,7 +537,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     ] as const) {
       if (phase === undefined || !(area > 0)) continue;
       const st = phase.state;
-      const tp: TransportProperties = wallHeat.transport!(st);
+      const tp: TransportProperties = transport!(st);
       const coeff = naturalConvectionCoefficient(
         geometry.surface,
         {

@@ -91,7 +91,8 @@ export interface WallHeatSpec {
     | { readonly kind: "insulated" };
   /**
    * Viscosity and thermal conductivity of a single-phase state of the contents (needed for
-   * natural convection inside). Pass the transport-property method of your choice.
+   * natural convection inside). Default: the fluid's own `transportOfState` (transport/: Chung
+   * et al. 1988, or the IAPWS releases for water).
    */
   readonly transport?: (state: FluidState) => TransportProperties;
 }
