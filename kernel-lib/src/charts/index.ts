@@ -83,3 +83,5 @@ export type {
   EnvelopePathState,
 } from "./phaseEnvelope.js";
 export * from "./sample/index.js";
+export { vesselHistoryChart, vesselPathOnEnvelopeChart } from "./vesselHistory.js";
+export type { VesselHistoryOptions } from "./vesselHistory.js";
