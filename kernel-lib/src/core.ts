@@ -19,6 +19,7 @@ export * from "./state/index.js";
 export * from "./transport/index.js";
 export * from "./phase/index.js";
 export * from "./fluid/index.js";
+export * from "./process/vessel/index.js";
 export * from "./charts/index.js";
 export * from "./tables/index.js";
 export * from "./pvt/index.js";

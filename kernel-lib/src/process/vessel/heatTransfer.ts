@@ -27,7 +27,7 @@ import { R } from "../../constants.js";
 const G = 9.80665;
 
 /** Transport properties of a fluid state (from a transport-property method). */
-export interface TransportProperties {
+export interface ContentsTransport {
   /** Dynamic viscosity, Pa s. */
   readonly viscosityPaS: number;
   /** Thermal conductivity, W/(m K). */

@@ -11,5 +11,5 @@ export {
   rayleighNumber,
   airAt,
 } from "./heatTransfer.js";
-export type { ConvectionFluid, ConvectionSurface, TransportProperties } from "./heatTransfer.js";
+export type { ConvectionFluid, ConvectionSurface, ContentsTransport } from "./heatTransfer.js";
 export { VESSEL_CAUTIONS, VESSEL_NOT_MODELLED } from "./cautions.js";

@@ -29,7 +29,7 @@ import type { FluidState } from "../../state/types.js";
 import { VESSEL_CAUTIONS, VESSEL_NOT_MODELLED } from "./cautions.js";
 import { contentsFlash } from "./contentsFlash.js";
 import { vesselGeometry, type VesselGeometry } from "./geometry.js";
-import { airAt, naturalConvectionCoefficient, type TransportProperties } from "./heatTransfer.js";
+import { airAt, naturalConvectionCoefficient, type ContentsTransport } from "./heatTransfer.js";
 import {
   isIdealGasModel,
   isStableSinglePhase,
@@ -265,7 +265,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   // ---- heat -------------------------------------------------------------------------------
   const heat = spec.heat ?? "adiabatic";
   let wallHeat: WallHeatSpec | undefined;
-  let transport: ((state: FluidState) => TransportProperties) | undefined;
+  let transport: ((state: FluidState) => ContentsTransport) | undefined;
   let wallMass = 0;
   let wallCp = 0;
   if (heat !== "adiabatic") {
@@ -537,7 +537,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     ] as const) {
       if (phase === undefined || !(area > 0)) continue;
       const st = phase.state;
-      const tp: TransportProperties = transport!(st);
+      const tp: ContentsTransport = transport!(st);
       const coeff = naturalConvectionCoefficient(
         geometry.surface,
         {
@@ -773,6 +773,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
           : 1e-9 * Math.max(m0, Math.abs(U0), 1),
   );
   const p0 = first.contents.P;
+  let progressSteps = 0;
   for (let round = 0; round < 3; round++) {
     let phaseBoundary = false;
     const r = integrateDormandPrince((_t, yy) => evaluate(yy).dy, t, y, tEnd, {
@@ -792,7 +793,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
           options.onProgress({
             timeS: tt,
             pressurePa: P,
-            steps: accepted + ts.length,
+            steps: ++progressSteps,
             fraction: Math.min(1, Math.max(byP, byT)),
           });
         }

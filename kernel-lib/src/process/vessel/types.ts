@@ -8,7 +8,7 @@ import type { Fluid } from "../../fluid/defineFluid.js";
 import type { FluidState } from "../../state/types.js";
 import type { FlashOptions } from "../../phase/flash/flashTP.js";
 import type { VesselShape } from "./geometry.js";
-import type { TransportProperties } from "./heatTransfer.js";
+import type { ContentsTransport } from "./heatTransfer.js";
 
 /** The wall as one lump of metal at one temperature. */
 export interface WallSpec {
@@ -94,7 +94,7 @@ export interface WallHeatSpec {
    * natural convection inside). Default: the fluid's own `transportOfState` (transport/: Chung
    * et al. 1988, or the IAPWS releases for water).
    */
-  readonly transport?: (state: FluidState) => TransportProperties;
+  readonly transport?: (state: FluidState) => ContentsTransport;
 }
 
 /** When to stop (the first reached). At least one of pressurePa and timeS. */
