@@ -8,6 +8,7 @@ import { explorerDefinition } from "../../../kernel-lib/src/explorers/explorerDe
 import { ExplorerFluids } from "../../../kernel-lib/src/explorers/explorerFluids.js";
 import type {
   DepartureExplorerState,
+  IsothermExplorerState,
   ExplorerState,
   PressureEnthalpyExplorerState,
 } from "../../../kernel-lib/src/explorers/explorerState.js";
@@ -85,7 +86,7 @@ describe("isotherm explorer", () => {
       components: "carbon dioxide",
       temperatureK: 273.15,
     });
-    expect(state.insideDome).toBe("tie-line");
+    expect((state as IsothermExplorerState).insideDome).toBe("tie-line");
     const fluids = new ExplorerFluids(state.components);
     const def = explorerDefinition(state);
     const s = def.update(state, "model", "reference", fluids);

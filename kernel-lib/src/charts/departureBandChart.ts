@@ -6,15 +6,17 @@
  * A pure function: the returned spec is plain JSON the user may still edit. SI molar units on the
  * axes (mol/m3; J/mol or J/(mol K)).
  */
-import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
-import type { ModelComparisonPoint } from "./compareWithModel.js";
+import { themeConfig } from "./theme.js";
+import { VEGA_LITE_SCHEMA } from "./topLevel.js";
+import type { ChartSpec as VegaLiteSpec } from "./chartSpec.js";
+import type { ModelComparisonPoint } from "../pvt/compareWithModel.js";
 import {
   checkDepartureChartOptions,
   densityEncoding,
   isothermColorEncoding,
   isothermLabel,
 } from "./departureChartParts.js";
-import type { PvtRouteResult } from "./departuresFromPvt.js";
+import type { PvtRouteResult } from "../pvt/departuresFromPvt.js";
 
 /** Options of {@link departureBandChart}. */
 export interface DepartureBandChartOptions {
@@ -97,7 +99,8 @@ export function departureBandChart(
     });
   }
   return {
-    $schema: "https://vega.github.io/schema/vega-lite/v6.json",
+    $schema: VEGA_LITE_SCHEMA,
+    config: themeConfig(),
     title: {
       text: options.title ?? `Residual ${NAMES[q]} from P-V-T data`,
       subtitle:
