@@ -125,4 +125,40 @@ describe("orifice flux of methane", () => {
     const throat = methane.stateAtTP(a.throatTemperatureK, a.throatPressurePa);
     expect(Math.abs(a.throatVelocityMPerS / throat.speedOfSoundMPerS - 1)).toBeLessThan(1e-5);
   });
+
+  it("from saturated vapour the throat is two-phase (HEM) and G is largest at the throat found", () => {
+    // saturated methane vapour at 30 bar: the isentrope enters the dome at once
+    const sat = saturationAtPressure(methane.model, 30e5);
+    const v = methane.stateAtTRho(sat.temperatureK, sat.vaporDensityMolPerM3);
+    const stag = {
+      pressurePa: sat.pressurePa,
+      temperatureK: sat.temperatureK,
+      x: [1],
+      enthalpyJPerMol: v.molar.h,
+      entropyJPerMolK: v.molar.s,
+      molarMassKgPerMol: v.molarMassKgPerMol,
+    };
+    const f = orificeMassFlux(methane, stag, 1e5);
+    expect(f.route).toBe("equilibrium");
+    expect(f.choked).toBe(true);
+    expect(f.twoPhaseThroat).toBe(true);
+    expect(f.throatVaporFraction).toBeLessThan(1);
+    // G = rho w along the isentrope from the (P, s) flash, independently, 1 % either side
+    const G = (P: number): number => {
+      const eq = methane.flashPS(P, stag.entropyJPerMolK);
+      let h = 0;
+      let vol = 0;
+      for (const p of eq.phases) {
+        h += p.amount * p.state.molar.h;
+        vol += p.amount / p.state.densityMolPerM3;
+      }
+      return (
+        (stag.molarMassKgPerMol / vol) *
+        Math.sqrt((2 * (stag.enthalpyJPerMol - h)) / stag.molarMassKgPerMol)
+      );
+    };
+    expect(Math.abs(G(f.throatPressurePa) / f.massFluxKgPerM2S - 1)).toBeLessThan(1e-9);
+    expect(G(f.throatPressurePa * 1.01)).toBeLessThan(f.massFluxKgPerM2S);
+    expect(G(f.throatPressurePa * 0.99)).toBeLessThan(f.massFluxKgPerM2S);
+  });
 });
