@@ -656,11 +656,13 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     const ev = evaluate(y);
     const c = ev.contents;
     if (!isStableSinglePhase(fluid, c.T, c.P, c.z, c.rho, flashOptions)) return false;
-    for (const f of ev.outletFlux) {
+    for (let k = 0; k < ev.outletFlux.length; k++) {
+      const f = ev.outletFlux[k];
       if (f === undefined) continue;
       if (f.route === "equilibrium") return false;
-      // the throat state of the single-phase route: stable as one phase there?
-      const stag = filling ? supply!.stag : stagnationOf(c, outlets[0].draws);
+      // the throat state of the single-phase route: stable as one phase there? (the fluxes are
+      // the outlets' in order, then the supply's)
+      const stag = k < outlets.length ? stagnationOf(c, outlets[k].draws) : supply!.stag;
       const rhoThroat = f.throatDensityKgPerM3 / stag.molarMassKgPerMol;
       if (
         !isStableSinglePhase(
@@ -779,7 +781,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     const r = integrateDormandPrince((_t, yy) => evaluate(yy).dy, t, y, tEnd, {
       relativeTolerance: rtol,
       absoluteTolerance: atol,
-      maxSteps: maxSteps - accepted - rejected,
+      maxSteps: Math.max(1, maxSteps - accepted - rejected),
       events,
       onStep: (tt, yy) => {
         if (mode === "single-phase" && !singlePhaseHolds(yy)) {
