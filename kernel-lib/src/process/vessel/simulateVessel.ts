@@ -132,7 +132,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     code: "model-limitation" as const,
     message: n,
   }));
-  const rtol = options.relativeTolerance ?? 1e-7;
+  const rtol = options.relativeTolerance ?? 1e-6;
   if (!(rtol > 0 && rtol < 0.01)) bad("options.relativeTolerance", "-", "> 0 and < 0.01", rtol);
 
   // ---- initial contents -------------------------------------------------------------------
