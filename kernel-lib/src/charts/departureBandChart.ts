@@ -64,7 +64,7 @@ export function departureBandChart(
       mark: { type: "area", opacity: 0.25 },
       encoding: {
         x,
-        y: { field: "lower", type: "quantitative", title: `Residual ${NAMES[q]} / (${unit})` },
+        y: { field: "lower", type: "quantitative", title: `Residual ${NAMES[q]} / ${unit}` },
         y2: { field: "upper" },
         color,
       },
@@ -78,9 +78,9 @@ export function departureBandChart(
         color,
         tooltip: [
           { field: "isotherm", type: "nominal" },
-          { field: "rho", type: "quantitative", title: "ρ / (mol/m3)", format: ".5~g" },
-          { field: "value", type: "quantitative", title: `${q}_res / (${unit})`, format: ".5~g" },
-          { field: "u", type: "quantitative", title: `u / (${unit})`, format: ".2~g" },
+          { field: "rho", type: "quantitative", title: "ρ / mol/m³", format: ".5~g" },
+          { field: "value", type: "quantitative", title: `${q}_res / ${unit}`, format: ".5~g" },
+          { field: "u", type: "quantitative", title: `u / ${unit}`, format: ".2~g" },
         ],
       },
     },

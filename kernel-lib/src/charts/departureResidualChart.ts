@@ -79,7 +79,7 @@ export function departureResidualChart(
           y: {
             field: "lower",
             type: "quantitative",
-            title: `Δ${q}_res (data − ${model}) / (${unit})`,
+            title: `Δ${q}_res (data − ${model}) / ${unit}`,
           },
           y2: { field: "upper" },
           color,

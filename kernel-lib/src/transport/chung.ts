@@ -44,7 +44,8 @@
  * Checked (tests/unit/transport/chung.test.ts): nitrogen against Lemmon and Jacobsen (2004) within
  * 4 % (dilute, dense gas) and 11-14 % (liquid at 100 K); nitrogen, methane, carbon dioxide and air
  * at 300 K and 1 bar against the CRC Handbook within 1.5 %; liquid n-hexane at 25 degC within 3 %;
- * liquid methane at its boiling point within 8 %; liquid CO2 at 0 degC (viscosity) within 1 %.
+ * liquid methane at its boiling point within 8 %; liquid CO2 at 0 degC (viscosity) within 1 %;
+ * sulfur dioxide gas at 40 degC (a polar gas, Poling et al. section 9-4 example) within 1 %.
  */
 
 /** The constants of one component that Chung's method uses (SI, dipole in debye). */

@@ -119,6 +119,15 @@ function chungAt(
       message: `transport properties: a liquid-like density (${(rho * p.criticalVolumeCm3PerMol * 1e-6).toFixed(2)} times the critical): the viscosity follows the density steeply here (liquid methane at 120 K: about 6 % per 1 % of density, 3 % for the conductivity), so the model's liquid density decides the accuracy; a cubic equation without volume translation can be 10 % off in liquid density (use volumeTranslation: "rackett" or a reference equation)`,
     });
   }
+  const reducedDensity = rho * p.criticalVolumeCm3PerMol * 1e-6;
+  if (Tr > 0.9 && Tr < 1.2 && reducedDensity > 0.3 && reducedDensity < 2) {
+    // the bounds are a generous rule of thumb (common practice, no source): nitrogen at its
+    // critical point reads 29 mW/(m K) against 676 (Lemmon and Jacobsen 2004, from memory)
+    warnings.push({
+      code: "model-limitation",
+      message: `transport properties: near the critical point (Tr = ${Tr.toFixed(3)}, rho/rho_c = ${reducedDensity.toFixed(2)} on Chung's mixture constants): Chung's method has no critical enhancement, so the true thermal conductivity is higher, up to many times at the critical point itself; the viscosity is little affected`,
+    });
+  }
   if (liquidLike && Tr < 0.6) {
     warnings.push({
       code: "accuracy",
