@@ -21,6 +21,7 @@ export * from "./phase/index.js";
 export * from "./sweep/index.js";
 export * from "./fluid/index.js";
 export * from "./process/index.js";
+export * from "./process/vessel/index.js";
 export * from "./charts/index.js";
 export * from "./tables/index.js";
 export * from "./pvt/index.js";

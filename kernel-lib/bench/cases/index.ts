@@ -8,6 +8,7 @@ import { pvtCases } from "./pvtCases.js";
 import { processCases } from "./processCases.js";
 import { sweepCases } from "./sweepCases.js";
 import { transportCases } from "./transportCases.js";
+import { vesselCases } from "./vesselCases.js";
 
 export const allCases: BenchCase[] = [
   ...engineCases,
@@ -18,4 +19,5 @@ export const allCases: BenchCase[] = [
   ...processCases,
   ...sweepCases,
   ...transportCases,
+  ...vesselCases,
 ];

@@ -100,3 +100,5 @@ export { departureBandChart } from "./departureBandChart.js";
 export type { DepartureBandChartOptions } from "./departureBandChart.js";
 export { departureResidualChart } from "./departureResidualChart.js";
 export type { DepartureResidualChartOptions } from "./departureResidualChart.js";
+export { vesselHistoryChart, vesselPathOnEnvelopeChart } from "./vesselHistory.js";
+export type { VesselHistoryOptions } from "./vesselHistory.js";

@@ -12,3 +12,12 @@ export { integrateAdaptive } from "./gaussKronrod.js";
 export type { QuadratureOptions, QuadratureResult } from "./gaussKronrod.js";
 export { HyperDual, hd, derivatives2, partials2 } from "./hyperDual.js";
 export type { HyperDualLike, Num, Derivatives2, Partials2 } from "./hyperDual.js";
+export { integrateDormandPrince } from "./dormandPrince.js";
+export type {
+  DormandPrinceOptions,
+  DormandPrinceResult,
+  OdeEvent,
+  OdeEventHit,
+} from "./dormandPrince.js";
+export { minimizeBrent } from "./brentMinimize.js";
+export type { MinimizeOptions, MinimizeResult } from "./brentMinimize.js";

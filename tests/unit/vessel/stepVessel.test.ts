@@ -1,0 +1,56 @@
+import { describe, expect, it } from "vitest";
+import { RequestError } from "../../../kernel-lib/src/errors.js";
+import { vesselSeriesCsv, vesselStepFromRequest } from "../../../kernel-lib/src/cli/stepVessel.js";
+
+const request = {
+  model: "peng-robinson",
+  components: ["methane"],
+  inlet: { T: 298.15, P: 50e5 },
+  step: {
+    kind: "vessel",
+    volume: 2,
+    outlet: { diameter: 0.02, dischargeCoefficient: 0.8, backPressure: 1e5 },
+    heat: "adiabatic",
+    until: { P: 30e5 },
+  },
+};
+
+function pathOf(raw: unknown): string {
+  try {
+    vesselStepFromRequest(raw);
+  } catch (e) {
+    expect(e).toBeInstanceOf(RequestError);
+    return (e as RequestError).path;
+  }
+  throw new Error("not refused");
+}
+
+describe("vessel step of isochor step", () => {
+  it("returns the series, the minimum and the cautions, and CSV of the series", () => {
+    const r = vesselStepFromRequest(request);
+    const n = r.series.time.length;
+    expect(n).toBeGreaterThan(3);
+    for (const key of ["P", "T", "Twall", "mass", "massFlow", "liquidFraction"] as const) {
+      expect(r.series[key]).toHaveLength(n);
+    }
+    expect(r.stoppedBecause).toBe("target-pressure");
+    expect(r.series.P[n - 1]).toBeCloseTo(30e5, -1);
+    expect(r.minimum.T).toBe(r.series.T[n - 1]);
+    expect(r.cautions.join(" ")).toMatch(/licensed engineers/);
+    const csv = vesselSeriesCsv(r).trim().split("\n");
+    expect(csv[0]).toBe("time_s,P_Pa,T_K,Twall_K,mass_kg,massFlow_kg_per_s,liquidFraction");
+    expect(csv).toHaveLength(n + 1);
+  });
+
+  it("refuses bad fields with their JSON paths", () => {
+    const step = request.step;
+    expect(pathOf({ ...request, step: { ...step, volume: 0 } })).toBe("$.step.volume");
+    expect(
+      pathOf({ ...request, step: { ...step, outlet: { ...step.outlet, backPressure: 60e5 } } }),
+    ).toBe("$.step.outlet.backPressure");
+    expect(pathOf({ ...request, step: { ...step, kind: "valve" } })).toBe("$.step.kind");
+    expect(pathOf({ ...request, inlet: { T: 300 } })).toBe("$.inlet.P");
+    expect(pathOf({ ...request, components: ["unobtainium"] })).toMatch(/^\$\.components/);
+    expect(pathOf({ ...request, step: { ...step, until: {} } })).toBe("$.step.until");
+  });
+});
