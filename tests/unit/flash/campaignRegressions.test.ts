@@ -1,0 +1,55 @@
+/**
+ * Failures found by the robustness campaign (kernel-lib/bench/flashCampaign.ts, `npm run
+ * campaign`), each kept as a regression test with the campaign's case number (seed 20261204).
+ * Every test accepts a verified result whose phases the tangent-plane test finds stable, or a
+ * typed SolverError saying what failed; the failure was a returned result that is neither.
+ */
+import { describe, expect, it } from "vitest";
+import { defineFluid, type Fluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
+import { SolverError } from "../../../kernel-lib/src/errors.js";
+import { idealGasFromCorrelation } from "../../../kernel-lib/src/idealgas/correlationPure.js";
+import { idealGasMixture } from "../../../kernel-lib/src/idealgas/mixture.js";
+import { stabilityAtTP } from "../../../kernel-lib/src/phase/stability.js";
+import { expectVerified } from "./helpers.js";
+
+/** A fluid whose cp correlations may extrapolate below 200 K (as the campaign's: the split does not use them). */
+function coldFluid(ids: string[]): Fluid {
+  const idealGas = idealGasMixture(
+    ids.map((id) => idealGasFromCorrelation(id, { extrapolationMargin: 0.6 })),
+    { extrapolationMargin: 0.6 },
+  );
+  return defineFluid({ components: ids, model: "peng-robinson", idealGas });
+}
+
+const normalise = (z: number[]): number[] => {
+  const s = z.reduce((a, b) => a + b, 0);
+  return z.map((v) => v / s);
+};
+
+describe("flashTP: an unstable three-phase split is never returned", () => {
+  // campaign case 6: hydrogen, CO2, water and light hydrocarbons at 168 K and 3 MPa. The old
+  // flash stopped testing once it had three phases and returned vapour + two liquids whose vapour
+  // was unstable (tm = -0.055): a fourth phase forms there with Peng-Robinson.
+  it("H2 + CO2 + CH4 + nC4 + nC5 + water at 168 K, 3 MPa: stable phases or a SolverError", () => {
+    const ids = ["carbon-dioxide", "hydrogen", "methane", "n-butane", "n-pentane", "water"];
+    const fluid = coldFluid(ids);
+    const z = normalise([0.173414, 0.166271, 0.0285444, 0.226553, 0.304154, 0.101064]);
+    const T = 167.8886689711362;
+    const P = 2988638.9084624564;
+    let eq: ReturnType<Fluid["flashTP"]> | undefined;
+    try {
+      eq = fluid.flashTP(T, P, z);
+    } catch (e) {
+      expect(e).toBeInstanceOf(SolverError);
+      expect((e as Error).message).toMatch(/three-phase split is not stable.*fourth phase/);
+    }
+    if (eq !== undefined) {
+      expectVerified(fluid, eq, { stability: false });
+      const present = z.map((_, i) => i);
+      for (const p of eq.phases) {
+        const t = stabilityAtTP(fluid.model, T, P, p.state.x.slice(), { extraTrials: present });
+        expect(t.stable, `${p.kind} phase`).toBe(true);
+      }
+    }
+  });
+});
