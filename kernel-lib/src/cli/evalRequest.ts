@@ -68,7 +68,7 @@ export interface EvalRequest {
   readonly reference: ReferenceState;
   readonly idealGas: "correlation" | "molecular";
   readonly phase: EvalPhase;
-  /** Run the mixture stability test at (T, P) states. Default false. */
+  /** Run the mixture stability test at (T, P) states. Default true (false: untested single-phase states). */
   readonly checkStability: boolean;
   /** Also return the phase envelope of x. Default false. */
   readonly envelope: boolean;
@@ -311,7 +311,7 @@ function toRequest(r: RequestJson): EvalRequest {
     reference,
     idealGas: r.idealGas ?? "correlation",
     phase: r.phase ?? "stable",
-    checkStability: r.checkStability ?? false,
+    checkStability: r.checkStability ?? true,
     envelope: r.envelope ?? false,
     states: (r.states ?? []).map(toState),
   };

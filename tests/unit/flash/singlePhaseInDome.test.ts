@@ -1,0 +1,103 @@
+/**
+ * No mixture state is reported single-phase inside the two-phase region without a warning
+ * (issue 12, "Done when"), and failure mode (4) of its "Why": a (P, h) calculation of a mixture
+ * returning a temperature off by kelvins without saying so. The gas is the ten-component rich
+ * gas of the benchmarks (invented demo composition), let down through a valve from 80 barg and
+ * 60 degC to 10 barg: the flash finds gas and condensate at about 19.6 degC; the single-phase
+ * inversion finds about 14.2 degC on the metastable vapour branch, which must carry a warning.
+ */
+import { describe, expect, it } from "vitest";
+import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
+import {
+  PHASE_SPLIT_NOT_TESTED,
+  temperatureAtPH,
+  temperatureAtPS,
+} from "../../../kernel-lib/src/state/inversions.js";
+import { runEvalRequest } from "../../../kernel-lib/src/cli/eval.js";
+
+const TEN = [
+  "nitrogen",
+  "carbon-dioxide",
+  "methane",
+  "ethane",
+  "propane",
+  "isobutane",
+  "n-butane",
+  "isopentane",
+  "n-pentane",
+  "n-hexane",
+];
+const X10 = [0.02, 0.03, 0.7, 0.1, 0.06, 0.02, 0.03, 0.015, 0.015, 0.01];
+const gas = defineFluid({ components: TEN, model: "peng-robinson" });
+const P_ATM = 101325;
+const inlet = gas.stateAtTP(333.15, 80e5 + P_ATM, X10);
+const P_OUT = 10e5 + P_ATM;
+const codes = (ws: readonly { code: string }[]) => ws.map((w) => w.code);
+
+describe("(P, h) and (P, s) of a mixture inside the two-phase region", () => {
+  it("(4) the valve outlet: the flash splits, and the single-phase inversion says it is not the answer", () => {
+    expect(codes(inlet.warnings)).not.toContain("phase-split");
+    const flash = gas.flashPH(P_OUT, inlet.molar.h, X10);
+    expect(flash.phases.map((p) => p.kind)).toEqual(["vapor", "liquid"]);
+    const single = gas.temperatureAtPH(P_OUT, inlet.molar.h, X10);
+    // the metastable vapour branch is kelvins away from the equilibrium temperature ...
+    expect(Math.abs(single.temperatureK - flash.temperatureK)).toBeGreaterThan(2);
+    // ... and says so: a "phase-split" warning naming the flash, no untested note left
+    expect(codes(single.state.warnings)).toContain("phase-split");
+    expect(single.state.warnings.find((w) => w.code === "phase-split")!.message).toMatch(
+      /not stable as one phase.*flashTP/,
+    );
+    expect(single.state.warnings.map((w) => w.message)).not.toContain(PHASE_SPLIT_NOT_TESTED);
+  });
+
+  it("an isentropic expansion into the dome warns the same way", () => {
+    const flash = gas.flashPS(P_OUT, inlet.molar.s, X10);
+    expect(flash.phases.length).toBe(2);
+    const single = gas.temperatureAtPS(P_OUT, inlet.molar.s, X10);
+    expect(codes(single.state.warnings)).toContain("phase-split");
+  });
+
+  it("outside the dome the inversion carries no phase-split warning", () => {
+    const hot = gas.stateAtTP(400, 30e5, X10);
+    const back = gas.temperatureAtPH(30e5, hot.molar.h, X10);
+    expect(Math.abs(back.temperatureK - 400)).toBeLessThan(1e-6);
+    expect(codes(back.state.warnings)).not.toContain("phase-split");
+    expect(back.state.warnings.map((w) => w.message)).not.toContain(PHASE_SPLIT_NOT_TESTED);
+  });
+
+  it("the state layer's inversion of a mixture says that it did not test the split", () => {
+    const r = temperatureAtPH(gas, P_OUT, inlet.molar.h, X10);
+    expect(r.state.warnings.map((w) => w.message)).toContain(PHASE_SPLIT_NOT_TESTED);
+    const s = temperatureAtPS(gas, P_OUT, inlet.molar.s, X10);
+    expect(s.state.warnings.map((w) => w.message)).toContain(PHASE_SPLIT_NOT_TESTED);
+    // a pure fluid has nothing to split at a single-phase result: no note
+    const methane = defineFluid({ components: ["methane"], model: "peng-robinson" });
+    const h = methane.stateAtTP(300, 50e5).molar.h;
+    expect(temperatureAtPH(methane, 50e5, h, [1]).state.warnings).toEqual([]);
+  });
+});
+
+describe("stateAtTP of a mixture inside the two-phase region", () => {
+  it("warns phase-split by default; checkStability: false skips the test", () => {
+    const inside = gas.stateAtTP(250, 50e5, X10);
+    expect(codes(inside.warnings)).toContain("phase-split");
+    const skipped = gas.stateAtTP(250, 50e5, X10, { checkStability: false });
+    expect(codes(skipped.warnings)).not.toContain("phase-split");
+    // a trace of a second component is still a mixture
+    const c1c4 = defineFluid({ components: ["methane", "n-butane"], model: "peng-robinson" });
+    expect(codes(c1c4.stateAtTP(280, 20e5, [0.7, 0.3]).warnings)).toContain("phase-split");
+    // one component present: the state layer's own phase logic, no mixture test
+    expect(codes(c1c4.stateAtTP(280, 20e5, [1, 0]).warnings)).not.toContain("phase-split");
+  });
+
+  it("isochor eval: a (T, P) state of a mixture inside the dome carries the warning by default", () => {
+    const response = runEvalRequest({
+      model: "peng-robinson",
+      components: TEN,
+      x: X10,
+      states: [{ T: 250, P: 50e5 }],
+    });
+    const st = response.states[0] as { warnings?: string[] };
+    expect(st.warnings?.some((w) => /not stable as one phase/.test(w))).toBe(true);
+  });
+});
