@@ -1,6 +1,7 @@
 /**
  * Robustness campaign of the mixture flashes (issue 12, item 10):
- * `npm run campaign -- [--count N] [--seed S] [--from K] [--progress M] [--examples E]`.
+ * `npm run campaign -- [--count N] [--seed S] [--from K] [--progress M] [--examples E]
+ * [--max-seconds S]` (S > 0: stop after S seconds of wall time and report the cases done).
  *
  * Runs N random isothermal flashes (default 100,000) of Peng-Robinson mixtures with the table's
  * k_ij: 2-12 components drawn from the refinery and gas-plant set below (light hydrocarbons to
@@ -94,10 +95,18 @@ interface Args {
   from: number;
   progress: number;
   examples: number;
+  maxSeconds: number;
 }
 
 function parseArgs(argv: readonly string[]): Args {
-  const args: Args = { count: 100_000, seed: 20261204, from: 0, progress: 1000, examples: 3 };
+  const args: Args = {
+    count: 100_000,
+    seed: 20261204,
+    from: 0,
+    progress: 1000,
+    examples: 3,
+    maxSeconds: 0,
+  };
   for (let i = 0; i < argv.length; i++) {
     if (argv[i] === "--") continue;
     const [flag, inline] = argv[i].split("=", 2);
@@ -110,6 +119,7 @@ function parseArgs(argv: readonly string[]): Args {
     else if (flag === "--from") args.from = n;
     else if (flag === "--progress") args.progress = n;
     else if (flag === "--examples") args.examples = n;
+    else if (flag === "--max-seconds") args.maxSeconds = n;
     else throw new Error(`unknown option ${flag}`);
   }
   return args;
@@ -406,7 +416,10 @@ function main(): void {
     if (list.length < args.examples) list.push(describe(c));
   };
   const wall0 = performance.now();
+  let done = 0;
   for (let k = 0; k < args.count; k++) {
+    if (args.maxSeconds > 0 && performance.now() - wall0 > 1000 * args.maxSeconds) break;
+    done++;
     const c = makeCase(args.seed, args.from + k);
     if (c.setupFailure !== undefined) bump(setupFailures, `${c.kind}: ${c.setupFailure}`);
     const fluid = fluidOf(c.ids);
@@ -495,7 +508,7 @@ function main(): void {
       lines.push(`  ${String(v).padStart(7)}  ${k}`);
   };
   lines.push(
-    `flash campaign: ${args.count} flashes from case ${args.from}, seed ${args.seed}, started ${started.toISOString()}, ${wallSeconds.toFixed(0)} s wall`,
+    `flash campaign: ${done} flashes from case ${args.from}${done < args.count ? ` (stopped by --max-seconds; ${args.count} asked)` : ""}, seed ${args.seed}, started ${started.toISOString()}, ${wallSeconds.toFixed(0)} s wall`,
   );
   lines.push(
     `machine: ${os.cpus().length} cores (${os.cpus()[0]?.model ?? "?"}), load average 1/5/15 min before ${load0.map((v) => v.toFixed(2)).join("/")}, after ${load1.map((v) => v.toFixed(2)).join("/")}; node ${process.version}`,
@@ -531,7 +544,8 @@ function main(): void {
   console.log(
     JSON.stringify({
       campaign: "flash",
-      count: args.count,
+      count: done,
+      asked: args.count,
       from: args.from,
       seed: args.seed,
       started: started.toISOString(),
