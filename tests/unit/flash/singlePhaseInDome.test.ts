@@ -14,6 +14,9 @@ import {
   temperatureAtPS,
 } from "../../../kernel-lib/src/state/inversions.js";
 import { runEvalRequest } from "../../../kernel-lib/src/cli/eval.js";
+import { surfaceFromFluid } from "../../../kernel-lib/src/charts/sample/surfaceFromFluid.js";
+import { propertySurfaceChart } from "../../../kernel-lib/src/charts/propertySurface.js";
+import { chartMeta } from "../../../kernel-lib/src/charts/chartSpec.js";
 
 const TEN = [
   "nitrogen",
@@ -99,5 +102,48 @@ describe("stateAtTP of a mixture inside the two-phase region", () => {
     });
     const st = response.states[0] as { warnings?: string[] };
     expect(st.warnings?.some((w) => /not stable as one phase/.test(w))).toBe(true);
+  });
+});
+
+describe("the property-surface sampler of a mixture", () => {
+  const c1c4 = defineFluid({ components: ["methane", "n-butane"], model: "peng-robinson" });
+  const Z = {
+    name: "Compressibility factor Z",
+    kind: "dimensionless" as const,
+    pick: (st: { Z: number }) => st.Z,
+  };
+  const temps = [250, 280, 310, 340, 370, 400];
+  const pressures = [5e5, 10e5, 20e5, 40e5, 60e5];
+  it("blanks the cells inside the two-phase region and says so in the chart's warnings", () => {
+    const surf = surfaceFromFluid(c1c4, temps, pressures, Z, { x: [0.7, 0.3] });
+    let blank = 0;
+    surf.values.forEach((row, i) =>
+      row.forEach((v, j) => {
+        // every blank cell is one the flash splits, every filled one a single phase
+        const phases = c1c4.flashTP(temps[i], pressures[j], [0.7, 0.3]).phases.length;
+        if (Number.isNaN(v)) {
+          blank++;
+          expect(phases, `${temps[i]} K, ${pressures[j]} Pa`).toBeGreaterThan(1);
+        } else expect(phases, `${temps[i]} K, ${pressures[j]} Pa`).toBe(1);
+      }),
+    );
+    expect(blank).toBeGreaterThan(0);
+    expect(surf.domeWarnings.join(" ")).toMatch(
+      new RegExp(`^${blank} of 30 grid points lie in the two-phase region`),
+    );
+    const spec = propertySurfaceChart(surf, { levels: 4 });
+    expect(chartMeta(spec)!.warnings.join(" ")).toMatch(/two-phase region of this mixture/);
+  });
+  it("without the test the cells are filled and the warning says the split was not tested", () => {
+    const surf = surfaceFromFluid(c1c4, temps, pressures, Z, {
+      x: [0.7, 0.3],
+      checkStability: false,
+    });
+    expect(surf.values.flat().every((v) => Number.isFinite(v))).toBe(true);
+    expect(surf.domeWarnings.join(" ")).toMatch(/without the stability test/);
+  });
+  it("a pure fluid has no such warning", () => {
+    const surf = surfaceFromFluid(c1c4, [300, 400], [1e5, 2e5], Z, { x: [1, 0] });
+    expect(surf.domeWarnings).toEqual([]);
   });
 });
