@@ -88,7 +88,8 @@ export const DISPLAY_UNITS: Readonly<Record<QuantityKind, readonly DisplayUnit[]
   speed: [unit("m/s", "m/s"), unit("ft/s", "ft/s")],
   // Dimensionless: not a unit of units/; a ratio shown as is or in per cent.
   dimensionless: [
-    { id: "-", symbol: "–", scale: 1, offset: 0 },
+    // No symbol: a dash after a number reads as a minus sign.
+    { id: "-", symbol: "", scale: 1, offset: 0 },
     { id: "%", symbol: "%", scale: 100, offset: 0 },
   ],
 };
@@ -166,6 +167,11 @@ export function toDisplay(valueSI: number, target: DisplayUnit): number {
 /** Converts a value in a display unit back to SI. */
 export function fromDisplay(value: number, source: DisplayUnit): number {
   return (value - source.offset) / source.scale;
+}
+
+/** A number in a display unit as text, "40.0 °C"; a dimensionless number without a symbol. */
+export function withUnit(text: string, unit: DisplayUnit): string {
+  return unit.symbol === "" ? text : `${text} ${unit.symbol}`;
 }
 
 /**

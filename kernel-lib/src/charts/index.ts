@@ -14,6 +14,7 @@ export {
   toDisplay as toDisplayValue,
   fromDisplay as fromDisplayValue,
   quantityTitle,
+  withUnit,
 } from "./displayUnits.js";
 export type {
   QuantityKind as DisplayQuantityKind,

@@ -11,7 +11,7 @@ import { requirePositive } from "../validate.js";
 import { positionEncoding, type AxisPlan } from "./axisPlan.js";
 import { checkArray } from "./chartOptions.js";
 import { curveRows, type ChartXY, type LineRow } from "./curveRows.js";
-import { toDisplay, type DisplayUnit } from "./displayUnits.js";
+import { toDisplay, withUnit, type DisplayUnit } from "./displayUnits.js";
 import { shortNumber } from "./shortNumber.js";
 import { SERIES_COLORS, SERIES_DASHES } from "./theme.js";
 import type { WarningList } from "./warningList.js";
@@ -87,7 +87,7 @@ export function seriesLabels<K extends string>(
 ): string[] {
   return curves.map((c, i) => {
     requirePositive(`${input}[${i}].${key}`, c[key], unitSI);
-    return c.label ?? `${shortNumber(toDisplay(c[key], displayUnit))} ${displayUnit.symbol}`;
+    return c.label ?? withUnit(shortNumber(toDisplay(c[key], displayUnit)), displayUnit);
   });
 }
 

@@ -65,6 +65,8 @@ export interface IsothermExplorerOptions extends ExplorerOptionsBase {
   points?: number;
   /** Abscissa: "molarVolume" (log, default) or "density". */
   abscissa?: "molarVolume" | "density";
+  /** Inside the dome: "tie-line" (stable isotherm, default) or "loop" (the model's loop). */
+  insideDome?: "tie-line" | "loop";
 }
 
 /** Options of the departure explorer. */
@@ -251,6 +253,7 @@ function isothermState(options: IsothermExplorerOptions): IsothermExplorerState 
     temperatureRangeK: range,
     points: checkCount("points", options.points ?? 400, 20, 4000),
     abscissa,
+    insideDome: requireChoice("insideDome", options.insideDome ?? "tie-line", ["tie-line", "loop"]),
   };
 }
 

@@ -8,6 +8,7 @@ import { InputError } from "../errors.js";
 import {
   resolveUnit,
   toDisplay,
+  withUnit,
   type QuantityKind,
   type UnitChoice,
 } from "../charts/displayUnits.js";
@@ -82,7 +83,9 @@ export function modelIn(state: ExplorerStateBase, value: ControlValue): Explorer
 /** "Methane, Peng-Robinson (1976)" (plain text). */
 export function fluidSubtitle(state: ExplorerStateBase, fluids: ExplorerFluids): string {
   const names = state.components.map((c) => c.name).join(" + ");
-  return `${names}, ${fluids.fluid(state.model).name}`;
+  const model = fluids.fluid(state.model).name;
+  // A reference equation's name already starts with the fluid: "Carbon dioxide (Span and Wagner 1996)".
+  return model.toLowerCase().startsWith(names.toLowerCase()) ? model : `${names}, ${model}`;
 }
 
 /** Unknown control key: a typed error naming the keys the explorer has. */
@@ -103,5 +106,5 @@ export function formatQuantity(
   digits = 5,
 ): string {
   const unit = resolveUnit(kind, units);
-  return `${formatSignificant(toDisplay(valueSI, unit), { digits })} ${unit.symbol}`;
+  return withUnit(formatSignificant(toDisplay(valueSI, unit), { digits }), unit);
 }

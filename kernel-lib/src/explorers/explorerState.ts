@@ -68,6 +68,11 @@ export interface IsothermExplorerState extends ExplorerStateBase {
   readonly points: number;
   /** Abscissa: molar volume (log) or molar density. */
   abscissa: "molarVolume" | "density";
+  /**
+   * Inside the dome: "tie-line" (the stable isotherm, flat at the vapour pressure; default) or
+   * "loop" (the model's own van der Waals loop with the equal-area lobes, clipped to the window).
+   */
+  insideDome: "tie-line" | "loop";
 }
 
 /** Departure functions against pressure (or density) at one temperature and composition. */

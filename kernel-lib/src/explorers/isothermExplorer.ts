@@ -66,6 +66,16 @@ export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
         ],
         value: state.abscissa,
       },
+      {
+        type: "select",
+        key: "insideDome",
+        label: "Inside the dome",
+        options: [
+          { value: "tie-line", label: "Stable isotherm (tie line)" },
+          { value: "loop", label: "The model's loop" },
+        ],
+        value: state.insideDome,
+      },
     ];
   },
 
@@ -78,7 +88,10 @@ export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
     if (key === "abscissa") {
       return { ...state, abscissa: requireChoice("abscissa", value, ["molarVolume", "density"]) };
     }
-    throw unknownControl(key, ["temperatureK", "model", "abscissa"]);
+    if (key === "insideDome") {
+      return { ...state, insideDome: requireChoice(key, value, ["tie-line", "loop"]) };
+    }
+    throw unknownControl(key, ["temperatureK", "model", "abscissa", "insideDome"]);
   },
 
   chart(state, fluids: ExplorerFluids) {
@@ -89,11 +102,16 @@ export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
       [state.temperatureK],
       {
         points: state.points,
+        insideDome: state.insideDome,
+        equalArea: state.insideDome === "loop",
       },
     );
-    // Fixed label and pressure axis per model: a slider move then changes only data, which the
-    // page redraws in place (widgets/src/explorers/liveChart.ts) instead of re-embedding.
+    // Fixed label and pressure axis per model and view: a slider move then changes only data,
+    // which the page redraws in place (widgets/src/explorers/liveChart.ts) instead of
+    // re-embedding. The stable isotherm never goes below zero pressure; the loop window keeps
+    // the lobes of a cubic and clips the swings of a reference equation (marks clip to it).
     const Pc = dome?.critical.pressurePa;
+    const lowest = state.insideDome === "loop" ? -0.5 : 0;
     return isothermChart(
       {
         isotherms: [{ ...curve, label: SLIDER_LABEL }],
@@ -101,7 +119,7 @@ export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
       },
       {
         x: state.abscissa,
-        ...(Pc !== undefined ? { pressureRangePa: [-0.5 * Pc, 2 * Pc] as const } : {}),
+        ...(Pc !== undefined ? { pressureRangePa: [lowest * Pc, 2 * Pc] as const } : {}),
         units: state.units,
         width: state.width,
         height: state.height,
@@ -116,11 +134,21 @@ export const isothermExplorer: ExplorerDefinition<IsothermExplorerState> = {
     if (!dome) return "No vapour-liquid critical point for this model and composition.";
     const Tc = dome.critical.temperatureK;
     const T = `T = ${formatQuantity(state.temperatureK, "temperature", state.units)}. `;
+    const TcText = formatQuantity(Tc, "temperature", state.units);
+    if (state.temperatureK >= Tc) {
+      return `${T}Above the critical temperature (Tc = ${TcText} in this model): one phase at every density.`;
+    }
+    if (state.insideDome === "tie-line") {
+      return `${T}Below the critical temperature (Tc = ${TcText} in this model): between the saturated vapour and liquid the stable isotherm runs flat at the vapour pressure (the equal-area tie line). Choose "The model's loop" to see what the equation does there.`;
+    }
+    const reference = !Number.isFinite(
+      fluids.fluid(state.model).binding.model.maxDensity(300, [1]),
+    );
     return (
-      T +
-      (state.temperatureK < Tc
-        ? `Below the critical temperature (Tc = ${formatQuantity(Tc, "temperature", state.units)} in this model): the loop is replaced by the equal-area tie line at the vapour pressure.`
-        : `Above the critical temperature (Tc = ${formatQuantity(Tc, "temperature", state.units)} in this model): one phase at every density.`)
+      `${T}Below the critical temperature (Tc = ${TcText} in this model): the model's loop, with the equal-area lobes, clipped to the chart window.` +
+      (reference
+        ? " A reference equation is fitted to stable and metastable states only; between its spinodals the pressure swings by tens of MPa, and that part of the loop has no physical meaning."
+        : "")
     );
   },
 };

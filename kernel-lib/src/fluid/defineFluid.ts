@@ -11,6 +11,8 @@ import { getComponent } from "../components/getComponent.js";
 import type { IdealGasMixture, IdealGasPure, ReferenceState } from "../idealgas/types.js";
 import { idealGasFromCorrelation } from "../idealgas/correlationPure.js";
 import { idealGasMixture } from "../idealgas/mixture.js";
+import { zeroAtReferenceState } from "../idealgas/referenceState.js";
+import { shiftToSaturatedLiquid } from "./saturatedLiquidReference.js";
 import { idealGasFromMolecule } from "../idealgas/molecular/index.js";
 import type { PseudoCriticalPoint, ResidualModel } from "../eos/types.js";
 import { R } from "../constants.js";
@@ -340,11 +342,14 @@ function checkSpecFields(spec: FluidSpec): void {
   if (!(
     ref === undefined ||
     (isRecord(ref) &&
-      (ref.kind === "formation" || ref.kind === "zero-at" || ref.kind === "fluid-convention"))
+      (ref.kind === "formation" ||
+        ref.kind === "zero-at" ||
+        ref.kind === "fluid-convention" ||
+        ref.kind === "saturated-liquid"))
   )) {
     fail(
       "referenceState",
-      '{ kind: "formation" }, { kind: "zero-at", temperatureK, pressurePa } or { kind: "fluid-convention", description }',
+      '{ kind: "formation" }, { kind: "zero-at", temperatureK, pressurePa }, { kind: "saturated-liquid", at: "0 degC" | "-40 degC" | "normal-boiling-point" | K } or { kind: "fluid-convention", description }',
       ref,
     );
   }
@@ -574,21 +579,29 @@ export function defineFluid(spec: FluidSpec): Fluid {
   }
   let idealGas: IdealGasMixture;
   const route = spec.idealGas ?? "correlation";
+  // a saturated-liquid convention is applied on top of an auxiliary zero-at basis (the fluid's
+  // own model gives the saturated liquids): fluid/saturatedLiquidReference.ts
+  const tradeReference =
+    spec.referenceState?.kind === "saturated-liquid" ? spec.referenceState : undefined;
   if (route === "correlation" || route === "molecular") {
     const pures: IdealGasPure[] = components.map((c) =>
       route === "correlation" ? idealGasFromCorrelation(c) : idealGasFromMolecule(c.id),
     );
-    idealGas = idealGasMixture(pures, { referenceState: spec.referenceState, components });
+    const referenceState = tradeReference ? zeroAtReferenceState(298.15, 1e5) : spec.referenceState;
+    idealGas = idealGasMixture(pures, { referenceState, components });
   } else {
     idealGas = route;
   }
   const interactions = model.interactions;
-  const binding: FluidBinding = {
+  const auxiliary: FluidBinding = {
     model,
     idealGas,
     molarMassesKgPerMol: components.map((c) => c.molarMassKgPerMol),
     departureMethod,
   };
+  const binding: FluidBinding = tradeReference
+    ? { ...auxiliary, idealGas: shiftToSaturatedLiquid(auxiliary, components, tradeReference) }
+    : auxiliary;
   const xOf = (x: readonly number[] | undefined): readonly number[] => {
     if (x !== undefined) return x;
     if (components.length === 1) return PURE;

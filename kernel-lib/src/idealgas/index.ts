@@ -15,6 +15,7 @@ export {
   pureReferenceValues,
 } from "./referenceState.js";
 export type { PureReferenceValues } from "./referenceState.js";
+export type { SaturatedLiquidReference } from "./types.js";
 export { checkTemperatureRange, DEFAULT_EXTRAPOLATION_MARGIN } from "./temperatureRange.js";
 export type { TemperatureRangeOptions } from "./temperatureRange.js";
 // The statistical-mechanics route (written in idealgas/molecular/ by its owner), same IdealGasPure contract.

@@ -85,6 +85,16 @@ export function idealGasMixture(
     });
   }
   const referenceState = options.referenceState ?? formationReferenceState();
+  if (referenceState.kind === "saturated-liquid") {
+    // needs the fluid's residual model for the saturated liquids: defineFluid applies it
+    throw new InputError({
+      input: "referenceState.kind",
+      unit: "-",
+      validRange: '"formation" or "zero-at" for an ideal-gas mixture on its own',
+      received: referenceState.kind,
+      hint: "Give the saturated-liquid convention to defineFluid, which has the model for the saturated liquids",
+    });
+  }
   if (referenceState.kind === "zero-at") {
     requirePositive("referenceState.temperatureK", referenceState.temperatureK, "K");
     requirePositive("referenceState.pressurePa", referenceState.pressurePa, "Pa");
@@ -256,7 +266,9 @@ function prepareFastPath(
   referenceState: ReferenceState,
   components: readonly Component[] | undefined,
 ): FastPure[] | undefined {
-  if (referenceState.kind === "fluid-convention") return undefined;
+  if (referenceState.kind === "fluid-convention" || referenceState.kind === "saturated-liquid") {
+    return undefined;
+  }
   const out: FastPure[] = [];
   for (let i = 0; i < list.length; i++) {
     const pure = list[i];

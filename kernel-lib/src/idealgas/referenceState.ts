@@ -15,7 +15,12 @@ import { InputError } from "../errors.js";
 import { requirePositive } from "../validate.js";
 import { getComponent } from "../components/getComponent.js";
 import type { Component } from "../components/types.js";
-import { STANDARD_PRESSURE_PA, type IdealGasPure, type ReferenceState } from "./types.js";
+import {
+  STANDARD_PRESSURE_PA,
+  type IdealGasPure,
+  type ReferenceState,
+  type SaturatedLiquidReference,
+} from "./types.js";
 
 /** The formation basis (elements at 298.15 K and 1 bar). */
 export function formationReferenceState(): ReferenceState {
@@ -42,7 +47,57 @@ export function describeReferenceState(reference: ReferenceState): string {
       return `h = 0 and s = 0 for each pure ideal gas at ${reference.temperatureK} K and ${reference.pressurePa} Pa`;
     case "fluid-convention":
       return `fluid convention: ${reference.description}`;
+    case "saturated-liquid":
+      return describeSaturatedLiquidReference(reference);
   }
+}
+
+/** The saturated-liquid convention in words, e.g. "saturated liquid at 273.15 K: h = 200 kJ/kg, s = 1 kJ/(kg K)". */
+export function describeSaturatedLiquidReference(reference: SaturatedLiquidReference): string {
+  const { temperatureText, hJPerKg, sJPerKgK } = saturatedLiquidTargets(reference);
+  return `saturated liquid of each component at ${temperatureText}: h = ${hJPerKg / 1000} kJ/kg, s = ${sJPerKgK / 1000} kJ/(kg K)`;
+}
+
+/** The temperature (K, or undefined for the normal boiling point) and the h, s values of a convention. */
+export function saturatedLiquidTargets(reference: SaturatedLiquidReference): {
+  temperatureK: number | undefined;
+  temperatureText: string;
+  hJPerKg: number;
+  sJPerKgK: number;
+} {
+  const at = reference.at;
+  const zeroCelsius = at === "0 degC";
+  const hJPerKg = reference.hJPerKg ?? (zeroCelsius ? 200e3 : 0);
+  const sJPerKgK = reference.sJPerKgK ?? (zeroCelsius ? 1e3 : 0);
+  if (!Number.isFinite(hJPerKg) || !Number.isFinite(sJPerKgK)) {
+    throw new InputError({
+      input: "referenceState.hJPerKg, referenceState.sJPerKgK",
+      unit: "J/kg, J/(kg K)",
+      validRange: "finite numbers",
+      received: [reference.hJPerKg, reference.sJPerKgK],
+    });
+  }
+  if (at === "0 degC")
+    return { temperatureK: 273.15, temperatureText: "0 degC (273.15 K)", hJPerKg, sJPerKgK };
+  if (at === "-40 degC")
+    return { temperatureK: 233.15, temperatureText: "-40 degC (233.15 K)", hJPerKg, sJPerKgK };
+  if (at === "normal-boiling-point") {
+    return {
+      temperatureK: undefined,
+      temperatureText: "its normal boiling point (101.325 kPa)",
+      hJPerKg,
+      sJPerKgK,
+    };
+  }
+  if (typeof at === "number" && at > 0 && Number.isFinite(at)) {
+    return { temperatureK: at, temperatureText: `${at} K`, hJPerKg, sJPerKgK };
+  }
+  throw new InputError({
+    input: "referenceState.at",
+    unit: "K",
+    validRange: '"0 degC", "-40 degC", "normal-boiling-point" or a temperature > 0 K',
+    received: at,
+  });
 }
 
 /** A pure component's ideal-gas h and s at its reference pressure, in a reference state. */
@@ -93,12 +148,13 @@ export function pureReferenceValues(
       };
     }
     case "fluid-convention":
+    case "saturated-liquid":
       throw new InputError({
         input: "referenceState.kind",
         unit: "-",
         validRange: '"formation" or "zero-at" for an ideal-gas mixture',
         received: reference.kind,
-        hint: "Fluid conventions belong to the reference equation that defines them",
+        hint: "Fluid conventions belong to the reference equation that defines them, saturated-liquid conventions to a fluid (defineFluid)",
       });
   }
 }

@@ -47,7 +47,26 @@ export type ReferenceState =
       /** A fluid-specific convention of a published equation (e.g. IAPWS-95: u = s = 0, saturated liquid at the triple point). */
       readonly kind: "fluid-convention";
       readonly description: string;
-    };
+    }
+  | SaturatedLiquidReference;
+
+/**
+ * A convention of the trade: h and s of each pure component's saturated liquid fixed at a stated
+ * temperature (fluid/saturatedLiquidReference.ts applies it with the fluid's own model):
+ * - at "0 degC": h = 200 kJ/kg and s = 1 kJ/(kg K) (refrigeration practice);
+ * - at "-40 degC": h = 0 and s = 0;
+ * - at "normal-boiling-point" (101.325 kPa): h = 0 and s = 0;
+ * - at a temperature in K, with the h and s you give (default 0).
+ * Common practice of refrigeration and gas-processing property charts; no single source.
+ */
+export interface SaturatedLiquidReference {
+  readonly kind: "saturated-liquid";
+  readonly at: "0 degC" | "-40 degC" | "normal-boiling-point" | number;
+  /** h of the saturated liquid there, J/kg. Default: 200e3 at "0 degC", else 0. */
+  readonly hJPerKg?: number;
+  /** s of the saturated liquid there, J/(kg K). Default: 1e3 at "0 degC", else 0. */
+  readonly sJPerKgK?: number;
+}
 
 /** Molar ideal-gas properties of a mixture at (T, P, x), in the stated reference state. */
 export interface IdealGasProperties {

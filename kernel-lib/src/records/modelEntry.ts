@@ -6,6 +6,7 @@ import { InputError } from "../errors.js";
 import type { ModelInfo, ResidualModel } from "../eos/types.js";
 import type { Fluid } from "../fluid/defineFluid.js";
 import type { ReferenceState } from "../idealgas/types.js";
+import { describeSaturatedLiquidReference } from "../idealgas/referenceState.js";
 import { modelScope } from "./modelScope.js";
 
 /** What a record can describe as a model. */
@@ -103,6 +104,8 @@ export function describeReferenceState(state: ReferenceState): string {
       return `h = 0 and s = 0 for the ideal gas at ${state.temperatureK} K and ${state.pressurePa} Pa`;
     case "fluid-convention":
       return state.description;
+    case "saturated-liquid":
+      return describeSaturatedLiquidReference(state);
   }
 }
 

@@ -8,6 +8,7 @@ import { explorerDefinition } from "../../../kernel-lib/src/explorers/explorerDe
 import { ExplorerFluids } from "../../../kernel-lib/src/explorers/explorerFluids.js";
 import type {
   DepartureExplorerState,
+  IsothermExplorerState,
   ExplorerState,
   PressureEnthalpyExplorerState,
 } from "../../../kernel-lib/src/explorers/explorerState.js";
@@ -76,6 +77,47 @@ describe("isotherm explorer", () => {
       const Z = ((far.y as number) * 1e6 * ((far.x as number) / 1000)) / (R * 320);
       expect(Math.abs(Z - 1), model).toBeLessThan(2e-3);
     }
+  });
+
+  it("opens on the reference equation at 0 degC with the stable isotherm, the loop on request", () => {
+    // The stable isotherm below Tc: vapour branch, flat tie line at the vapour pressure, liquid
+    // branch; no point below zero pressure and none outside the drawn window.
+    const state = createExplorerState("isotherms", {
+      components: "carbon dioxide",
+      temperatureK: 273.15,
+    });
+    expect((state as IsothermExplorerState).insideDome).toBe("tie-line");
+    const fluids = new ExplorerFluids(state.components);
+    const def = explorerDefinition(state);
+    const s = def.update(state, "model", "reference", fluids);
+    const Pc = fluids.dome("reference")!.critical.pressurePa / 1e6; // MPa, the chart's unit
+    const stable = seriesRows(def.chart(s, fluids), "at the slider temperature");
+    expect(stable.length).toBeGreaterThan(100);
+    const pressures = stable.map((r) => r.y as number).filter((y) => y <= 2 * Pc);
+    expect(Math.min(...pressures)).toBeGreaterThanOrEqual(0);
+    expect(def.status!(s, fluids)).toMatch(/stable isotherm runs flat/);
+    // The tie line: many points at one pressure (the vapour pressure, 3.485 MPa at 0 degC from
+    // memory of Span and Wagner 1996, Table 34; 1 %: the chart samples a grid), spanning the dome.
+    const flat = stable.filter((r) => Math.abs((r.y as number) / 3.485 - 1) < 0.01);
+    const xs = flat.map((r) => r.x as number);
+    expect(flat.length).toBeGreaterThanOrEqual(2);
+    expect(Math.max(...xs) / Math.min(...xs)).toBeGreaterThan(5); // vapour to liquid volume
+    // The loop view: negative pressures appear, and the status says why the loop looks so.
+    const loop = def.update(s, "insideDome", "loop", fluids);
+    const looped = seriesRows(def.chart(loop, fluids), "at the slider temperature");
+    expect(Math.min(...looped.map((r) => r.y as number))).toBeLessThan(0);
+    expect(def.status!(loop, fluids)).toMatch(/no physical meaning/);
+    expect(() => def.update(s, "insideDome", "wiggle", fluids)).toThrow(InputError);
+  });
+
+  it("names the reference equation once in the subtitle", () => {
+    const state = createExplorerState("isotherms", { components: "carbon dioxide" });
+    const fluids = new ExplorerFluids(state.components);
+    const def = explorerDefinition(state);
+    const s = def.update(state, "model", "reference", fluids);
+    const text = JSON.stringify(def.chart(s, fluids));
+    expect(text).toMatch(/Carbon dioxide \(Span and Wagner 1996\)/);
+    expect(text).not.toMatch(/Carbon dioxide, Carbon dioxide/);
   });
 
   it("refuses control values it cannot take, and leaves the old state alone", () => {

@@ -155,10 +155,14 @@ describe("data-file checks (buildReferenceFluid)", () => {
       ...good,
       residual: {
         ...good.residual,
-        power: good.residual.power.map((t, i) => (i === 3 ? { ...t, d: 1.5 } : t)),
+        polynomialExponential: good.residual.polynomialExponential.map((t, i) =>
+          i === 3 ? { ...t, d: 1.5 } : t,
+        ),
       },
     };
-    expect(() => buildReferenceFluid(badTerm)).toThrow(/data\.residual\.power\[3\]\.d/);
+    expect(() => buildReferenceFluid(badTerm)).toThrow(
+      /data\.residual\.polynomialExponential\[3\]\.d/,
+    );
     expect(() => buildReferenceFluid({ ...good, molarMassKgPerMol: NaN })).toThrow(InputError);
     expect(() =>
       buildReferenceFluid({

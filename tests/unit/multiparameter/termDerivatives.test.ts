@@ -315,16 +315,20 @@ describe("analytic derivatives = Ridders-extrapolated differences", () => {
 
 describe("term engine edge cases", () => {
   it("an empty equation is zero", () => {
-    const p = compileResidualPart({ power: [], gaussian: [], nonAnalytic: [] });
+    const p = compileResidualPart({
+      polynomialExponential: [],
+      gaussianBell: [],
+      nearCritical: [],
+    });
     const r = p.evaluate(1.1, 0.7, emptyReducedHelmholtz());
     expect([r.f, r.fD, r.fDD, r.fDDD, r.fT, r.fTT, r.fDT]).toEqual([0, 0, 0, 0, 0, 0, 0]);
   });
 
   it("a single polynomial term n delta^d tau^t matches its closed form", () => {
     const p = compileResidualPart({
-      power: [{ n: 0.7, d: 3, t: 1.5, l: 0 }],
-      gaussian: [],
-      nonAnalytic: [],
+      polynomialExponential: [{ n: 0.7, d: 3, t: 1.5, c: 0 }],
+      gaussianBell: [],
+      nearCritical: [],
     });
     const r = p.evaluate(1.2, 0.4, emptyReducedHelmholtz());
     const f = 0.7 * 0.4 ** 3 * 1.2 ** 1.5;
@@ -339,7 +343,11 @@ describe("term engine edge cases", () => {
 
   it("rejects a non-integer density exponent", () => {
     expect(() =>
-      compileResidualPart({ power: [{ n: 1, d: 1.5, t: 1, l: 0 }], gaussian: [], nonAnalytic: [] }),
+      compileResidualPart({
+        polynomialExponential: [{ n: 1, d: 1.5, t: 1, c: 0 }],
+        gaussianBell: [],
+        nearCritical: [],
+      }),
     ).toThrow(RangeError);
   });
 

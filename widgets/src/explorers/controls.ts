@@ -7,6 +7,7 @@ import {
   fromDisplayValue,
   resolveDisplayUnit,
   toDisplayValue,
+  withUnit,
   type DisplayUnitChoice,
 } from "../../../kernel-lib/src/charts/index.js";
 import { formatSignificant } from "../../../kernel-lib/src/tables/formatNumber.js";
@@ -71,8 +72,29 @@ function shown(
 ): string {
   const unit = unitOf(c, units);
   const perBasis = molarMass && /^mass/.test(c.quantity) ? valueSI / molarMass : valueSI;
-  const text = formatSignificant(toDisplayValue(perBasis, unit), { digits: 5 });
-  return unit.symbol === "-" ? text : `${text} ${unit.symbol}`;
+  const shownValue = toDisplayValue(perBasis, unit);
+  // As many decimals as one slider step resolves ("40.0 °C", "0.96"), not a fixed count of
+  // significant digits ("40.000 °C", "0.96000").
+  const step = sliderStepInDisplay(c, perBasis, unit);
+  const decimals = Math.min(6, Math.max(0, Math.ceil(-Math.log10(step))));
+  const text =
+    Number.isFinite(step) && step > 0
+      ? formatSignificant(shownValue, { decimals })
+      : formatSignificant(shownValue, { digits: 5 });
+  return withUnit(text, unit);
+}
+
+/** The change of the shown value over one slider step, in display units. */
+function sliderStepInDisplay(
+  c: SliderControl | NumberControl,
+  shownSI: number,
+  unit: ReturnType<typeof unitOf>,
+): number {
+  if (c.type !== "slider") return NaN;
+  const span = c.log
+    ? Math.abs(shownSI) * (Math.log(c.max / c.min) / c.steps)
+    : Math.abs(c.max - c.min) / c.steps;
+  return span * unit.scale;
 }
 
 /**

@@ -7,9 +7,9 @@
  * Temperatures are spaced more densely towards the critical point (uniform in sqrt(1 - T/Tc)),
  * where the dome closes steeply: the top of the dome comes out round, not flat.
  *
- * The dome starts at 0.55 Tc by default, or at the model's own lowest temperature when that is
- * higher (a reference equation's triple point or the low end of its validity range: CO2's
- * 216.592 K is 0.71 Tc); the warnings say where it starts and why.
+ * The dome starts at the model's own lowest temperature when it has one (a reference equation's
+ * triple point or the low end of its validity range: water's 273.16 K, CO2's 216.592 K), else at
+ * 0.55 Tc; the warnings say where it starts and why.
  */
 import { maxOf, minOf } from "../../numerics/extent.js";
 import { InputError, OutOfRangeError } from "../../errors.js";
@@ -27,8 +27,8 @@ export interface SaturationSampleOptions {
   /** Number of saturation temperatures. Default 40. */
   points?: number;
   /**
-   * Lowest temperature as a fraction of the critical temperature. Default: 0.55, or the model's
-   * own lowest temperature (triple point, low end of its validity range) when that is higher.
+   * Lowest temperature as a fraction of the critical temperature. Default: the model's own
+   * lowest temperature (triple point, low end of its validity range) when it has one, else 0.55.
    * An explicit value is used as given; points the model refuses are left out and reported.
    */
   fromReducedTemperature?: number;
@@ -82,10 +82,12 @@ export function saturationFromModel(
   }
   const cp = locateCriticalPoint(model);
   const domeWarnings: string[] = [];
-  // Start: the default 0.55 Tc, raised to the model's own lowest temperature when higher.
+  // Start: the model's own lowest temperature (a reference equation's triple point or validity
+  // limit) when it has one, so that a dome reaches down to where the fluid can be liquid (water's
+  // to 0.01 degC, not flat at 0.55 Tc = 83 degC); else (cubics) 0.55 Tc.
   let tStart = lo * cp.temperatureK;
   const lowest = modelLowestTemperatureK(model);
-  if (loOption === undefined && lowest !== undefined && lowest > tStart) {
+  if (loOption === undefined && lowest !== undefined) {
     if (!(lowest < hi * cp.temperatureK)) {
       throw new InputError({
         input: "toReducedTemperature",
@@ -96,8 +98,7 @@ export function saturationFromModel(
     }
     domeWarnings.push(
       `The saturation dome starts at ${round(lowest)} K, the lowest temperature of ` +
-        `${model.info.name} (triple point or validity limit), not at the default 0.55 Tc = ` +
-        `${round(tStart)} K.`,
+        `${model.info.name} (triple point or validity limit).`,
     );
     tStart = lowest;
   }

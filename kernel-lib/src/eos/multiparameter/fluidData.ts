@@ -82,7 +82,7 @@ export interface ReferenceFluidData {
  * fluid passed to buildReferenceFluid) fails with the path of the bad field instead of producing
  * NaN. Checks presence, finiteness and sign of every number the equation uses; not the physics.
  *
- * @throws InputError naming the field (e.g. "data.residual.power[3].d"), its range and the value.
+ * @throws InputError naming the field (e.g. "data.residual.polynomialExponential[3].d"), its range and the value.
  */
 export function checkReferenceFluidData(data: ReferenceFluidData): void {
   const fail = (input: string, validRange: string, received: unknown): never => {
@@ -126,36 +126,36 @@ export function checkReferenceFluidData(data: ReferenceFluidData): void {
   }
   finite("ideal.c0", data.ideal?.c0);
   finite("ideal.c1", data.ideal?.c1);
-  finite("ideal.logTau", data.ideal?.logTau);
-  list("ideal.power", data.ideal?.power).forEach((t, i) => {
-    finite(`ideal.power[${i}].n`, t.n);
-    finite(`ideal.power[${i}].t`, t.t);
+  finite("ideal.lnTau", data.ideal?.lnTau);
+  list("ideal.tauPowers", data.ideal?.tauPowers).forEach((t, i) => {
+    finite(`ideal.tauPowers[${i}].n`, t.n);
+    finite(`ideal.tauPowers[${i}].t`, t.t);
   });
-  list("ideal.planckEinstein", data.ideal?.planckEinstein).forEach((t, i) => {
-    finite(`ideal.planckEinstein[${i}].m`, t.m);
-    positive(`ideal.planckEinstein[${i}].theta`, t.theta);
+  list("ideal.vibrational", data.ideal?.vibrational).forEach((t, i) => {
+    finite(`ideal.vibrational[${i}].n`, t.n);
+    positive(`ideal.vibrational[${i}].gamma`, t.gamma);
   });
   const integer = (path: string, v: unknown): void => {
     if (!(typeof v === "number" && Number.isInteger(v) && v >= 0 && v <= 32)) {
       fail(path, "an integer from 0 to 32", v);
     }
   };
-  list("residual.power", data.residual?.power).forEach((t, i) => {
-    finite(`residual.power[${i}].n`, t.n);
-    integer(`residual.power[${i}].d`, t.d);
-    finite(`residual.power[${i}].t`, t.t);
-    integer(`residual.power[${i}].l`, t.l);
+  list("residual.polynomialExponential", data.residual?.polynomialExponential).forEach((t, i) => {
+    finite(`residual.polynomialExponential[${i}].n`, t.n);
+    integer(`residual.polynomialExponential[${i}].d`, t.d);
+    finite(`residual.polynomialExponential[${i}].t`, t.t);
+    integer(`residual.polynomialExponential[${i}].c`, t.c);
   });
-  list("residual.gaussian", data.residual?.gaussian).forEach((t, i) => {
+  list("residual.gaussianBell", data.residual?.gaussianBell).forEach((t, i) => {
     for (const k of ["n", "t", "alpha", "beta", "gamma", "epsilon"]) {
-      finite(`residual.gaussian[${i}].${k}`, t[k]);
+      finite(`residual.gaussianBell[${i}].${k}`, t[k]);
     }
-    integer(`residual.gaussian[${i}].d`, t.d);
+    integer(`residual.gaussianBell[${i}].d`, t.d);
   });
-  list("residual.nonAnalytic", data.residual?.nonAnalytic).forEach((t, i) => {
-    finite(`residual.nonAnalytic[${i}].n`, t.n);
+  list("residual.nearCritical", data.residual?.nearCritical).forEach((t, i) => {
+    finite(`residual.nearCritical[${i}].n`, t.n);
     for (const k of ["a", "b", "beta", "A", "B", "C", "D"]) {
-      positive(`residual.nonAnalytic[${i}].${k}`, t[k]);
+      positive(`residual.nearCritical[${i}].${k}`, t[k]);
     }
   });
   const anc = data.ancillaries;

@@ -3,7 +3,7 @@
  * coefficient tables into flat arrays and evaluated without allocation.
  *
  * Term forms (tau = T_red / T, delta = rho / rho_red):
- *   power / exponential:  n delta^d tau^t exp(-g delta^l)            (l = 0: no exponential)
+ *   power / exponential:  n delta^d tau^t exp(-g delta^c)            (c = 0: no exponential)
  *   Gaussian bell-shaped: n delta^d tau^t exp(-alpha (delta - eps)^2 - beta (tau - gamma)^2)
  *   non-analytic:         n Delta^b delta psi,
  *       theta = (1 - tau) + A ((delta - 1)^2)^(1 / (2 beta)),
@@ -22,17 +22,17 @@
  *
  * Speed (this runs in the engine's tight loops): integer powers of delta and tau come from tables
  * of repeated products, exponents that are multiples of 1/8 from tau^(1/8) (three square roots),
- * terms with equal exp(-g delta^l) share one exp(), and non-analytic terms with equal
+ * terms with equal exp(-g delta^c) share one exp(), and non-analytic terms with equal
  * (a, beta, A, B) share theta and Delta.
  */
 
-/** One power term (l = 0) or exponential term (l > 0): n delta^d tau^t exp(-g delta^l). */
+/** One polynomial term (c = 0) or exponential term (c > 0): n delta^d tau^t exp(-g delta^c), the papers' symbols. */
 export interface PowerTermData {
   readonly n: number;
   readonly d: number;
   readonly t: number;
-  readonly l: number;
-  /** Coefficient of delta^l in the exponent; 1 in IAPWS-95 and Span-Wagner. */
+  readonly c: number;
+  /** Coefficient of delta^c in the exponent; 1 in IAPWS-95 and Span-Wagner. */
   readonly g?: number;
 }
 
@@ -61,9 +61,9 @@ export interface NonAnalyticTermData {
 
 /** Coefficient tables of a residual part. */
 export interface ResidualPartData {
-  readonly power: readonly PowerTermData[];
-  readonly gaussian: readonly GaussianTermData[];
-  readonly nonAnalytic: readonly NonAnalyticTermData[];
+  readonly polynomialExponential: readonly PowerTermData[];
+  readonly gaussianBell: readonly GaussianTermData[];
+  readonly nearCritical: readonly NonAnalyticTermData[];
 }
 
 /**
@@ -112,10 +112,10 @@ const MAX_INT_POWER = 32;
 /**
  * Compiles coefficient tables into a fast evaluator. Integer exponents of delta (and of tau, where
  * integer) are taken from tables of repeated products; non-integer tau exponents use
- * exp(t ln tau); terms with the same exponential delta^l share one exp().
+ * exp(t ln tau); terms with the same exponential delta^c share one exp().
  */
 export function compileResidualPart(data: ResidualPartData): ResidualPart {
-  const np = data.power.length;
+  const np = data.polynomialExponential.length;
   const pn = new Float64Array(np);
   const pd = new Int32Array(np);
   const pt = new Float64Array(np);
@@ -130,15 +130,15 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
   let maxT = 1;
   let maxL = 1;
   for (let i = 0; i < np; i++) {
-    const term = data.power[i];
+    const term = data.polynomialExponential[i];
     if (!Number.isInteger(term.d) || term.d < 0 || term.d > MAX_INT_POWER) {
       throw new RangeError(
         `power term ${i}: d must be an integer 0..${MAX_INT_POWER}, got ${term.d}`,
       );
     }
-    if (!Number.isInteger(term.l) || term.l < 0 || term.l > MAX_INT_POWER) {
+    if (!Number.isInteger(term.c) || term.c < 0 || term.c > MAX_INT_POWER) {
       throw new RangeError(
-        `power term ${i}: l must be an integer 0..${MAX_INT_POWER}, got ${term.l}`,
+        `power term ${i}: c must be an integer 0..${MAX_INT_POWER}, got ${term.c}`,
       );
     }
     pn[i] = term.n;
@@ -154,14 +154,14 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
     } else {
       ptEighths[i] = -1;
     }
-    pl[i] = term.l;
+    pl[i] = term.c;
     pg[i] = term.g ?? 1;
     maxD = Math.max(maxD, term.d);
-    maxL = Math.max(maxL, term.l);
+    maxL = Math.max(maxL, term.c);
     if (ptInt[i] >= 0) maxT = Math.max(maxT, ptInt[i]);
   }
-  const ng = data.gaussian.length;
-  const gauss = data.gaussian.map((g) => ({
+  const ng = data.gaussianBell.length;
+  const gauss = data.gaussianBell.map((g) => ({
     ...g,
     tInt: Number.isInteger(g.t) && g.t >= 0 && g.t <= MAX_INT_POWER ? g.t : -1,
   }));
@@ -172,7 +172,7 @@ export function compileResidualPart(data: ResidualPartData): ResidualPart {
     maxD = Math.max(maxD, g.d);
     if (g.tInt >= 0) maxT = Math.max(maxT, g.tInt);
   }
-  const nonAnalytic = data.nonAnalytic.map((x) => ({ ...x }));
+  const nonAnalytic = data.nearCritical.map((x) => ({ ...x }));
   const dPow = new Float64Array(Math.max(maxD, maxL) + 1);
   const tPow = new Float64Array(maxT + 1);
   const q8 = new Float64Array(8);
