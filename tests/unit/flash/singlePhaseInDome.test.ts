@@ -15,6 +15,11 @@ import {
 } from "../../../kernel-lib/src/state/inversions.js";
 import { runEvalRequest } from "../../../kernel-lib/src/cli/eval.js";
 import { surfaceFromFluid } from "../../../kernel-lib/src/charts/sample/surfaceFromFluid.js";
+import {
+  compressibilityFromFluid,
+  departuresFromFluid,
+} from "../../../kernel-lib/src/charts/sample/index.js";
+import { departureChart } from "../../../kernel-lib/src/charts/departures.js";
 import { propertySurfaceChart } from "../../../kernel-lib/src/charts/propertySurface.js";
 import { chartMeta } from "../../../kernel-lib/src/charts/chartSpec.js";
 
@@ -145,5 +150,32 @@ describe("the property-surface sampler of a mixture", () => {
   it("a pure fluid has no such warning", () => {
     const surf = surfaceFromFluid(c1c4, [300, 400], [1e5, 2e5], Z, { x: [1, 0] });
     expect(surf.domeWarnings).toEqual([]);
+  });
+});
+
+describe("the departure and compressibility samplers of a mixture", () => {
+  const c1c4 = defineFluid({ components: ["methane", "n-butane"], model: "peng-robinson" });
+  const x = [0.7, 0.3];
+  const pressures = [5e5, 20e5, 40e5];
+  it("leave out the points where the mixture splits, and the chart says points were left out", () => {
+    const curves = departuresFromFluid(c1c4, [280, 400], pressures, { x });
+    pressures.forEach((P, j) => {
+      const split = c1c4.flashTP(280, P, x).phases.length > 1;
+      expect(Number.isNaN(curves[0].points[j].h), `280 K, ${P} Pa`).toBe(split);
+    });
+    expect(curves[0].points.some((p) => Number.isNaN(p.h))).toBe(true);
+    expect(curves[1].points.every((p) => Number.isFinite(p.h))).toBe(true);
+    const spec = departureChart(curves, { property: "h" });
+    expect(chartMeta(spec)!.warnings.join(" ")).toMatch(/left out/);
+    // reduced isotherms with given pseudo-critical constants (invented round values)
+    const z = compressibilityFromFluid(c1c4, [280 / 250], [5e5 / 50e5, 20e5 / 50e5, 40e5 / 50e5], {
+      x,
+      criticalTemperatureK: 250,
+      criticalPressurePa: 50e5,
+    });
+    pressures.forEach((P, j) => {
+      const split = c1c4.flashTP(280, P, x).phases.length > 1;
+      expect(Number.isNaN(z[0].points[j].z), `280 K, ${P} Pa`).toBe(split);
+    });
   });
 });

@@ -10,13 +10,11 @@
  * states per point; `checkStability: false` skips it (the cells then show single-phase values,
  * metastable or unstable inside the dome, and the warning says the split was not tested).
  */
-import type { ResidualModel } from "../../eos/types.js";
-import { stabilityAtTP } from "../../phase/stability.js";
 import { stateAtTP } from "../../state/stateAt.js";
 import type { FluidBinding, FluidState } from "../../state/types.js";
 import { requirePositive } from "../../validate.js";
 import type { DisplayQuantityKindInput } from "./surfaceTypes.js";
-import { tryPoint, type SampleProgress } from "./sampleGuard.js";
+import { mixtureSplitsAt, tryPoint, type SampleProgress } from "./sampleGuard.js";
 
 /** Options of {@link surfaceFromFluid}. */
 export interface SurfaceSampleOptions {
@@ -61,7 +59,7 @@ export function surfaceFromFluid(
     pressuresPa.map((P) => {
       const s = tryPoint(() => stateAtTP(fluid, T, P, x));
       let v = s ? quantity.pick(s) : NaN;
-      if (s && test && splits(fluid.model, T, P, x)) {
+      if (s && test && mixtureSplitsAt(fluid.model, T, P, x)) {
         split++;
         v = NaN;
       }
@@ -86,9 +84,4 @@ export function surfaceFromFluid(
     quantity: { name: quantity.name, kind: quantity.kind },
     domeWarnings,
   };
-}
-
-/** Whether the mixture splits at (T, P); a test that cannot be made counts as no split. */
-function splits(model: ResidualModel, T: number, P: number, x: readonly number[]): boolean {
-  return tryPoint(() => !stabilityAtTP(model, T, P, x).stable) ?? false;
 }
