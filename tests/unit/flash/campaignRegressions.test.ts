@@ -6,7 +6,8 @@
  */
 import { describe, expect, it } from "vitest";
 import { defineFluid, type Fluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
-import { SolverError } from "../../../kernel-lib/src/errors.js";
+import { InputError, SolverError } from "../../../kernel-lib/src/errors.js";
+import { overallProperty } from "../../../kernel-lib/src/phase/flash/stateFunctionFlash.js";
 import { idealGasFromCorrelation } from "../../../kernel-lib/src/idealgas/correlationPure.js";
 import { idealGasMixture } from "../../../kernel-lib/src/idealgas/mixture.js";
 import { stabilityAtTP } from "../../../kernel-lib/src/phase/stability.js";
@@ -70,5 +71,38 @@ describe("flashTP: near a mixture critical point the split converges", () => {
     expect(expectVerified(fluid, eq)).toBe(2);
     // both phases are present in amounts well away from zero (not a trivial or vanishing split)
     for (const p of eq.phases) expect(p.amount).toBeGreaterThan(0.3);
+  });
+});
+
+describe("flashPH: an underflowing K-value is a failed step, not bad input", () => {
+  // campaign case 45727 (its (P, h) round trip): the outer temperature search of flashPH went
+  // down to 40 K, where ln K of n-nonane from a trial phase fell below -745; exp() gave K = 0,
+  // and the Rachford-Rice solver refused it as bad input (InputError "K[5] must be > 0"),
+  // blaming the caller. It must recover T or refuse with a SolverError.
+  it("ethane/H2S/water/... at 148 K, 86 bar: T recovered or a SolverError, never an InputError", () => {
+    const ids = [
+      "ethane",
+      "hydrogen-sulfide",
+      "isobutane",
+      "isopentane",
+      "methane",
+      "n-nonane",
+      "water",
+    ];
+    const fluid = coldFluid(ids);
+    const z = normalise([
+      0.473095, 0.288855, 0.0755373, 0.0277068, 0.0893136, 0.0359533, 0.00953858,
+    ]);
+    const T = 148.48610504996032;
+    const P = 8622505.870251866;
+    const eq = fluid.flashTP(T, P, z);
+    const h = overallProperty(eq, "h");
+    try {
+      const back = fluid.flashPH(P, h, z);
+      expect(Math.abs(back.temperatureK - T)).toBeLessThan(1e-6);
+    } catch (e) {
+      expect(e).not.toBeInstanceOf(InputError);
+      expect(e).toBeInstanceOf(SolverError);
+    }
   });
 });

@@ -137,7 +137,17 @@ function evaluate(
 ): SsState {
   const n = z.length;
   const K = new Array<number>(n).fill(1);
-  for (const i of present) K[i] = Math.exp(lnK[i]);
+  for (const i of present) {
+    K[i] = Math.exp(lnK[i]);
+    // ln K beyond about +-709 (a very heavy trace far from its boiling point) under- or
+    // overflows: a failed step for the callers (they try another start), not bad input
+    if (!(K[i] > 0 && K[i] < Infinity)) {
+      throw new SolverError(
+        "two-phase split",
+        `K of component ${i} is ${K[i]} (ln K = ${lnK[i]}), outside the floating-point range`,
+      );
+    }
+  }
   const rr = solveRachfordRice(z, K);
   normalizeComposition(rr.x);
   normalizeComposition(rr.y);
@@ -192,10 +202,7 @@ export function convergeTwoPhase(
     s = evaluate(model, T, P, z, present, lnK0.slice());
   } catch (e) {
     if (e instanceof SolverError)
-      return fail(
-        undefined,
-        "the starting K-values give no Rachford-Rice root (all K on one side of 1)",
-      );
+      return fail(undefined, `the starting K-values give no split: ${e.message}`);
     throw e;
   }
   let prevDelta: number[] | undefined;
