@@ -50,6 +50,11 @@ const RATIOS: readonly { case: string; baseline: string; meaning: string }[] = [
     baseline: "pr-mix10-TP-residual-only",
     meaning: "cost of the state with the ideal-gas correlations over the engine alone",
   },
+  {
+    case: "transport-mix10-TRho",
+    baseline: "pr-mix10-TP",
+    meaning: "cost of viscosity and conductivity (Chung) over the state of the same gas",
+  },
 ];
 
 const round3 = (v: number) => Math.round(v * 1000) / 1000;

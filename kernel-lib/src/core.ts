@@ -16,6 +16,7 @@ export * from "./petroleum/index.js";
 export * from "./eos/index.js";
 export * from "./departure/index.js";
 export * from "./state/index.js";
+export * from "./transport/index.js";
 export * from "./phase/index.js";
 export * from "./fluid/index.js";
 export * from "./charts/index.js";

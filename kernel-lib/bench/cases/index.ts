@@ -5,6 +5,7 @@ import { referenceCases } from "./referenceCases.js";
 import { envelopeCases } from "./envelopeCases.js";
 import { flashCases } from "./flashCases.js";
 import { pvtCases } from "./pvtCases.js";
+import { transportCases } from "./transportCases.js";
 
 export const allCases: BenchCase[] = [
   ...engineCases,
@@ -12,4 +13,5 @@ export const allCases: BenchCase[] = [
   ...envelopeCases,
   ...flashCases,
   ...pvtCases,
+  ...transportCases,
 ];

@@ -83,3 +83,7 @@ export type {
   EnvelopePathState,
 } from "./phaseEnvelope.js";
 export * from "./sample/index.js";
+export { departureBandChart } from "./departureBandChart.js";
+export type { DepartureBandChartOptions } from "./departureBandChart.js";
+export { departureResidualChart } from "./departureResidualChart.js";
+export type { DepartureResidualChartOptions } from "./departureResidualChart.js";

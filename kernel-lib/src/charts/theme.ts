@@ -65,6 +65,16 @@ export const HEATMAP_SCHEME = "cividis";
 export const DEFAULT_WIDTH = 520;
 export const DEFAULT_HEIGHT = 340;
 
+/**
+ * A spec with the project's look: a raw spec without a `config` block (written by hand, or by a
+ * builder of another library) gets the theme; a spec that has one keeps it. Display and record
+ * functions pass every spec through here, so all charts in a notebook and a record look alike.
+ */
+export function withTheme<S extends object>(spec: S): S {
+  if ("config" in spec && (spec as { config?: unknown }).config !== undefined) return spec;
+  return { ...spec, config: themeConfig() };
+}
+
 /** The Vega-Lite `config` block of every builder's spec (editable like any other field). */
 export function themeConfig(): Record<string, unknown> {
   return {

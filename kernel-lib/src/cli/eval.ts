@@ -15,6 +15,8 @@
  * one density) are null. Model "reference" evaluates the reference equation of the one component
  * (eos/multiparameter) in its publication's reference state, refusing states beyond the
  * equation's extrapolation range as error entries.
+ * With "transport": true, single-phase entries add "viscosity" (Pa s), "thermalConductivity"
+ * (W/(m K)) and "transportMethod" (transport/); two- and three-phase entries give null for both.
  * One bad state yields an error entry; a malformed request is refused (exit 2) with
  * {"error": {"code": "bad-request", "message", "path"}}; a problem in the fluid definition (an
  * unknown component, a bad k_ij) is refused the same way with the path of the field. Exit 0 otherwise.
@@ -52,6 +54,7 @@ import {
   type EvalEnvelope,
   type EvalEquilibriumFields,
 } from "./evalEquilibrium.js";
+import { transportAtTRho } from "../transport/transportAt.js";
 import { parseCliArgs } from "./cliArgs.js";
 import type { CliIo } from "./io.js";
 
@@ -72,6 +75,7 @@ isochor package.
 units: SI, molar. In: T in K, P in Pa, rho in mol/m3, h and u in J/mol, s in J/(mol K), x and
   quality (vapour mole fraction) as fractions (0..1).
   Out: h, u, residual h/u/a/g in J/mol; s, cp, cv in J/(mol K); w in m/s; jt in K/Pa; Z, lnPhi -.
+  "transport": true adds viscosity in Pa s and thermalConductivity in W/(m K) to single-phase states.
 
 example (methane at 300 K and 50 bar = 5e6 Pa, Peng-Robinson):
   echo '{"model": "peng-robinson", "components": ["methane"], "states": [{"T": 300, "P": 5e6}]}' \\
@@ -100,6 +104,10 @@ export type EvalStateResponse =
       /** The zero of h, s, u in words (every result says which reference state it uses). */
       referenceState: string;
       warnings?: string[];
+      /** With "transport": true (EvalTransportFields). */
+      viscosity?: number | null;
+      thermalConductivity?: number | null;
+      transportMethod?: string;
     }
   | {
       T: number;
@@ -120,12 +128,26 @@ export type EvalStateResponse =
       residualTV: null;
       referenceState: string;
       warnings?: string[];
+      /** With "transport": true (EvalTransportFields). */
+      viscosity?: number | null;
+      thermalConductivity?: number | null;
+      transportMethod?: string;
     }
   | EvalEquilibriumResponse
   | { error: { code: string; message: string } };
 
+/** The fields `"transport": true` adds (null: more than one phase, or outside the method's range). */
+export interface EvalTransportFields {
+  /** Dynamic viscosity, Pa s. */
+  viscosity?: number | null;
+  /** Thermal conductivity, W/(m K). */
+  thermalConductivity?: number | null;
+  /** "chung-1988" or "iapws-2008-2011" (transport/types.ts). */
+  transportMethod?: string;
+}
+
 /** An equilibrium of two or three phases (evalEquilibrium.ts says what each field means). */
-export interface EvalEquilibriumResponse extends EvalEquilibriumFields {
+export interface EvalEquilibriumResponse extends EvalEquilibriumFields, EvalTransportFields {
   cp: null;
   cv: null;
   w: null;
@@ -315,6 +337,43 @@ function evaluate(ev: Evaluator, request: EvalRequest, st: EvalState): EvalState
   }
 }
 
+/**
+ * Adds viscosity and thermal conductivity to a single-phase entry when the request asks for them
+ * (at the entry's T, rho and the request's x: a single phase of a flash or saturation point has
+ * the feed's composition); null for two or three phases; a transport failure becomes null with a
+ * warning, so that the thermodynamic state is still returned.
+ */
+function withTransport(
+  ev: Evaluator,
+  request: EvalRequest,
+  out: EvalStateResponse,
+): EvalStateResponse {
+  if (!request.transport || "error" in out) return out;
+  if (out.phase === "two-phase" || out.phase === "three-phase") {
+    return { ...out, viscosity: null, thermalConductivity: null };
+  }
+  const fluid = ev.kind === "engine" ? ev.fluid : ev.binding;
+  try {
+    const t = transportAtTRho(fluid, out.T, out.rho, request.x);
+    const warnings = [...(out.warnings ?? []), ...warningTexts(t.warnings)];
+    return {
+      ...out,
+      viscosity: t.viscosityPaS,
+      thermalConductivity: t.thermalConductivityWPerMK,
+      transportMethod: t.method,
+      ...(warnings.length > 0 ? { warnings: [...new Set(warnings)] } : {}),
+    };
+  } catch (e) {
+    if (!(e instanceof IsochorError)) throw e;
+    return {
+      ...out,
+      viscosity: null,
+      thermalConductivity: null,
+      warnings: [...(out.warnings ?? []), `transport properties: ${e.message}`],
+    };
+  }
+}
+
 /** The flash of an equilibrium state (a fluid's own methods pass its Wilson constants). */
 function flashOf(
   ev: Evaluator,
@@ -429,7 +488,7 @@ export function runEvalRequest(raw: unknown): EvalResponse {
   const request = parseEvalRequest(raw);
   const ev = evaluatorOf(request);
   const response: EvalResponse = {
-    states: request.states.map((st) => evaluate(ev, request, st)),
+    states: request.states.map((st) => withTransport(ev, request, evaluate(ev, request, st))),
   };
   if (request.envelope) {
     try {

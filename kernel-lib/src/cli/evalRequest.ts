@@ -70,6 +70,8 @@ export interface EvalRequest {
   readonly phase: EvalPhase;
   /** Run the mixture stability test at (T, P) states. Default true (false: untested single-phase states). */
   readonly checkStability: boolean;
+  /** Also return viscosity and thermal conductivity of single-phase states. Default false. */
+  readonly transport: boolean;
   /** Also return the phase envelope of x. Default false. */
   readonly envelope: boolean;
   /** May be empty when `envelope` is true. */
@@ -226,6 +228,7 @@ interface RequestJson {
   idealGas?: "correlation" | "molecular";
   phase?: EvalPhase;
   checkStability?: boolean;
+  transport?: boolean;
   envelope?: boolean;
   states?: StateJson[];
 }
@@ -312,6 +315,7 @@ function toRequest(r: RequestJson): EvalRequest {
     idealGas: r.idealGas ?? "correlation",
     phase: r.phase ?? "stable",
     checkStability: r.checkStability ?? true,
+    transport: r.transport ?? false,
     envelope: r.envelope ?? false,
     states: (r.states ?? []).map(toState),
   };

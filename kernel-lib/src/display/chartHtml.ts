@@ -24,6 +24,7 @@ import { InputError } from "../errors.js";
 import { chartTitle } from "./chartTitle.js";
 import { escapeHtml, jsonForScript } from "./escapeHtml.js";
 import { renderSvg } from "./renderSvg.js";
+import { withTheme } from "../charts/theme.js";
 import { vegaRuntimeScript } from "./vegaRuntime.js";
 import type { VegaLiteSpec } from "./vegaLiteSpec.js";
 
@@ -126,6 +127,7 @@ export async function chartFigure(
       received: options.caption,
     });
   }
+  spec = withTheme(spec);
   const svg = await renderSvg(spec);
   const width = /^<svg[^>]*\swidth="([\d.]+)"/.exec(svg)?.[1];
   const height = /^<svg[^>]*\sheight="([\d.]+)"/.exec(svg)?.[1];

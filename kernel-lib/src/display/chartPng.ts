@@ -3,6 +3,7 @@
  * resvg draws text only with fonts it can load; with no font found it would draw charts with blank
  * labels, so that case is refused with a message that says how to fix it.
  */
+import { withTheme } from "../charts/theme.js";
 import * as fs from "node:fs";
 import * as os from "node:os";
 import * as path from "node:path";
@@ -100,7 +101,7 @@ export async function chartPng(
         "or pass options.fontFiles.",
     );
   }
-  const svg = await renderSvg(spec);
+  const svg = await renderSvg(withTheme(spec));
   const { Resvg } = await import("@resvg/resvg-js");
   const resvg = new Resvg(svg, {
     fitTo: { mode: "zoom", value: scale },

@@ -37,7 +37,6 @@ import {
 } from "../state/inversions.js";
 import type { DepartureMethod, FluidBinding, FluidState } from "../state/types.js";
 import { checkComposition, checkPressure, checkTemperature } from "../state/checkInputs.js";
-import type { ResultWarning } from "../errors.js";
 import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../phase/stability.js";
 import {
   saturationPointAtPressure,
@@ -71,6 +70,11 @@ import {
   type StateFlashOptions,
 } from "../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium, StateFunctionEquilibrium } from "../phase/flash/types.js";
+import { transportOfState } from "../transport/transportAt.js";
+import type { TransportOfState, TransportOptions } from "../transport/types.js";
+import { referenceIdealGasMixture } from "../eos/multiparameter/referenceIdealGas.js";
+import type { ReferenceFluid } from "../eos/multiparameter/referenceFluid.js";
+import { phaseStateOf, splitWarning, type PhaseState, type StateRequest } from "./phaseState.js";
 
 // the composition of a pure fluid when none is given, shared and never written to (states copy
 // x). Not frozen: a frozen array has other elements kinds and slowed every state call by half.
@@ -99,7 +103,11 @@ export interface FluidSpec {
   kij?: readonly (readonly number[])[];
   /** Overrides of the table constants, one entry (or undefined) per component. */
   constants?: readonly (ConstantOverrides | undefined)[];
-  /** Ideal-gas route: "correlation" (default), "molecular", or your own IdealGasMixture. */
+  /**
+   * Ideal-gas route: "correlation" (default), "molecular", or your own IdealGasMixture. With a
+   * reference equation as the model (`referenceFluid("water")`) the default is the equation's own
+   * ideal part in the publication's reference state.
+   */
   idealGas?: "correlation" | "molecular" | IdealGasMixture;
   /** Zero of h and s. Default: the formation basis. */
   referenceState?: ReferenceState;
@@ -126,6 +134,9 @@ export interface FluidStateAtTPOptions extends StateAtTPOptions {
   checkStability?: boolean;
 }
 
+/** Options of a fluid's `transportAtTP`: the state's (phase choice, stability) and the method's. */
+export interface FluidTransportOptions extends FluidStateAtTPOptions, TransportOptions {}
+
 /** A bound fluid with its state functions. */
 export interface Fluid extends FluidBinding {
   readonly components: readonly Component[];
@@ -134,6 +145,22 @@ export interface Fluid extends FluidBinding {
   readonly interactionNotes: readonly InteractionNote[];
   /** Pairs whose k_ij was defaulted to zero, e.g. "hydrogen/methane". */
   readonly defaultedPairs: readonly string[];
+  /**
+   * THE state of the fluid from any one pair of specifications, as named fields (SI): (T, P),
+   * (T, rho), (P, h), (P, s), (T, s), (u, rho), (T, vaporFraction), (P, vaporFraction), plus the
+   * composition `x` (may be omitted for a pure fluid) and options (fluid/phaseState.ts). Mixtures
+   * go through the verified flashes, so a state inside the two-phase region comes back with its
+   * phases; a pure fluid through its saturation. Any other combination is an InputError.
+   *
+   * @example
+   * ```ts
+   * const st = gas.state({ P: 10e5, h: -80_000, x: [0.85, 0.1, 0.05] });
+   * st.phase;                        // "two-phase"
+   * st.phases.map((p) => p.amount);  // mol per mol feed, vapour first
+   * st.check?.maxLnFugacityDifference; // <= 1e-10
+   * ```
+   */
+  state(request: StateRequest): PhaseState;
   /** State at T (K), P (Pa); x may be omitted for a pure fluid. */
   stateAtTP(
     temperatureK: number,
@@ -185,13 +212,19 @@ export interface Fluid extends FluidBinding {
     z: readonly number[],
     options?: BubbleDewOptions,
   ): MixtureSaturationPoint;
-  /** Saturation point of any vapour fraction (`options.vaporFraction`) at T (K). */
+  /**
+   * Saturation point of any vapour fraction (`options.vaporFraction`) at T (K).
+   * @deprecated Use `fluid.state({ T, vaporFraction, x })`: both phases in `phases[]`.
+   */
   saturationPointAtTemperature(
     temperatureK: number,
     z: readonly number[],
     options?: SaturationPointOptions,
   ): MixtureSaturationPoint;
-  /** Saturation point of any vapour fraction (`options.vaporFraction`) at P (Pa). */
+  /**
+   * Saturation point of any vapour fraction (`options.vaporFraction`) at P (Pa).
+   * @deprecated Use `fluid.state({ P, vaporFraction, x })`.
+   */
   saturationPointAtPressure(
     pressurePa: number,
     z: readonly number[],
@@ -205,6 +238,7 @@ export interface Fluid extends FluidBinding {
   /**
    * Phase equilibrium at T (K), P (Pa): one to three verified phases (phase/flash/flashTP.ts),
    * the stability test of this fluid's Wilson constants first.
+   * @deprecated Use `fluid.state({ T, P, x })`: the same verified flash as one PhaseState.
    */
   flashTP(
     temperatureK: number,
@@ -212,28 +246,40 @@ export interface Fluid extends FluidBinding {
     x?: readonly number[],
     options?: FlashOptions,
   ): Equilibrium;
-  /** Phase equilibrium at P (Pa) and molar enthalpy h (J/mol): a valve outlet. */
+  /**
+   * Phase equilibrium at P (Pa) and molar enthalpy h (J/mol): a valve outlet.
+   * @deprecated Use `fluid.state({ P, h, x })`: the same flash as one PhaseState.
+   */
   flashPH(
     pressurePa: number,
     enthalpyJPerMol: number,
     x?: readonly number[],
     options?: StateFlashOptions,
   ): StateFunctionEquilibrium;
-  /** Phase equilibrium at P (Pa) and molar entropy s (J/(mol K)). */
+  /**
+   * Phase equilibrium at P (Pa) and molar entropy s (J/(mol K)).
+   * @deprecated Use `fluid.state({ P, s, x })`: the same flash as one PhaseState.
+   */
   flashPS(
     pressurePa: number,
     entropyJPerMolK: number,
     x?: readonly number[],
     options?: StateFlashOptions,
   ): StateFunctionEquilibrium;
-  /** Phase equilibrium at T (K) and molar entropy s (J/(mol K)). */
+  /**
+   * Phase equilibrium at T (K) and molar entropy s (J/(mol K)).
+   * @deprecated Use `fluid.state({ T, s, x })`: the same flash as one PhaseState.
+   */
   flashTS(
     temperatureK: number,
     entropyJPerMolK: number,
     x?: readonly number[],
     options?: StateFlashOptions,
   ): StateFunctionEquilibrium;
-  /** Phase equilibrium at molar internal energy u (J/mol) and molar density rho (mol/m3): a vessel. */
+  /**
+   * Phase equilibrium at molar internal energy u (J/mol) and molar density rho (mol/m3): a vessel.
+   * @deprecated Use `fluid.state({ u, rho, x })`: the same flash as one PhaseState.
+   */
   flashUV(
     internalEnergyJPerMol: number,
     densityMolPerM3: number,
@@ -242,7 +288,9 @@ export interface Fluid extends FluidBinding {
   ): StateFunctionEquilibrium;
   /**
    * T at (P, h) in one phase (valves). A mixture's result is tested for stability and carries a
-   * "phase-split" warning when it lies inside the two-phase region (use flashPH there).
+   * "phase-split" warning when it lies inside the two-phase region.
+   * @deprecated Use `fluid.state({ P, h, x })`: it finds the phases (a mixture inside the
+   * two-phase region is never returned single-phase) and returns the one PhaseState.
    */
   temperatureAtPH(
     pressurePa: number,
@@ -252,7 +300,8 @@ export interface Fluid extends FluidBinding {
   ): InversionResult;
   /**
    * T at (P, s) in one phase (compressors, expanders); a mixture's result is tested like
-   * temperatureAtPH's (use flashPS inside the two-phase region).
+   * temperatureAtPH's.
+   * @deprecated Use `fluid.state({ P, s, x })`, which finds the phases.
    */
   temperatureAtPS(
     pressurePa: number,
@@ -260,6 +309,18 @@ export interface Fluid extends FluidBinding {
     x?: readonly number[],
     options?: InversionOptions,
   ): InversionResult;
+  /**
+   * Viscosity (Pa s) and thermal conductivity (W/(m K)) of the single-phase state at T (K),
+   * P (Pa) (transport/: IAPWS 2008/2011 for IAPWS-95 water, Chung et al. 1988 otherwise).
+   */
+  transportAtTP(
+    temperatureK: number,
+    pressurePa: number,
+    x?: readonly number[],
+    options?: FluidTransportOptions,
+  ): TransportOfState;
+  /** Viscosity and thermal conductivity of a state of this fluid (e.g. one phase of a flash). */
+  transportOfState(state: FluidState, options?: TransportOptions): TransportOfState;
 }
 
 function resolveComponents(spec: FluidSpec): Component[] {
@@ -413,27 +474,6 @@ function kayPseudoCritical(
   };
 }
 
-/** The "phase-split" warning of a mixture that is not stable as one phase, or undefined. */
-function splitWarning(
-  model: ResidualModel,
-  T: number,
-  P: number,
-  x: readonly number[],
-): ResultWarning | undefined {
-  const test = stabilityAtTP(model, T, P, x);
-  const notes = test.warnings.map((w) => w.message);
-  if (test.stable) {
-    return notes.length > 0 ? { code: "accuracy", message: notes.join("; ") } : undefined;
-  }
-  const trial = (test.incipientComposition ?? [])
-    .map((v, i) => `${model.info.componentIds[i]} ${v.toPrecision(3)}`)
-    .join(", ");
-  return {
-    code: "phase-split",
-    message: `the mixture is not stable as one phase at T = ${T} K, P = ${P} Pa: the tangent-plane test found a trial phase with tm = ${test.minimumTangentPlaneDistance.toPrecision(3)} < 0 (${trial}); the fluid splits into phases there, this single-phase state is metastable or unstable, and its properties are not those of the real two-phase fluid (flashTP gives the phases and their amounts)`,
-  };
-}
-
 /** Number of components with a positive mole fraction. */
 function presentCount(x: readonly number[]): number {
   let n = 0;
@@ -451,7 +491,7 @@ function inversionWithStabilityCheck(binding: FluidBinding, r: InversionResult):
   const x = r.state.x;
   if (presentCount(x) < 2) return r;
   const kept = r.state.warnings.filter((w) => w.message !== PHASE_SPLIT_NOT_TESTED);
-  const split = splitWarning(binding.model, r.temperatureK, r.state.pressurePa, x);
+  const split = splitWarning(binding, r.temperatureK, r.state.pressurePa, x);
   const warnings = split === undefined ? kept : kept.concat(split);
   return { ...r, state: { ...r.state, warnings } };
 }
@@ -469,8 +509,14 @@ function stateWithStabilityCheck(
 ): FluidState {
   const state = stateAtTP(binding, T, P, x, options);
   if (options?.checkStability === false || presentCount(x) < 2) return state;
-  const split = splitWarning(binding.model, T, P, x);
+  const split = splitWarning(binding, T, P, x);
   return split === undefined ? state : { ...state, warnings: state.warnings.concat(split) };
+}
+
+/** A reference equation (fluid/referenceFluids.ts) passed as the model. */
+function isReferenceFluid(model: ResidualModel): model is ReferenceFluid {
+  const m = model as Partial<ReferenceFluid>;
+  return typeof m.idealReduced === "function" && typeof m.molarMassKgPerMol === "number";
 }
 
 function bindMethods(model: ResidualModel): ResidualModel {
@@ -578,25 +624,39 @@ export function defineFluid(spec: FluidSpec): Fluid {
     });
   }
   let idealGas: IdealGasMixture;
-  const route = spec.idealGas ?? "correlation";
+  const reference = isReferenceFluid(model) ? model : undefined;
+  if (reference !== undefined && reference.info.componentIds.join() !== ids.join()) {
+    throw new InputError({
+      input: "components",
+      unit: "-",
+      validRange: `the component of the reference equation (${reference.info.componentIds.join(", ")})`,
+      received: ids,
+    });
+  }
+  const route = spec.idealGas ?? (reference ? reference : "correlation");
   // a saturated-liquid convention is applied on top of an auxiliary zero-at basis (the fluid's
   // own model gives the saturated liquids): fluid/saturatedLiquidReference.ts
   const tradeReference =
     spec.referenceState?.kind === "saturated-liquid" ? spec.referenceState : undefined;
-  if (route === "correlation" || route === "molecular") {
+  if (reference !== undefined && route === reference) {
+    // a reference equation carries its own ideal part and the publication's reference state
+    idealGas = referenceIdealGasMixture(reference);
+  } else if (route === "correlation" || route === "molecular") {
     const pures: IdealGasPure[] = components.map((c) =>
       route === "correlation" ? idealGasFromCorrelation(c) : idealGasFromMolecule(c.id),
     );
     const referenceState = tradeReference ? zeroAtReferenceState(298.15, 1e5) : spec.referenceState;
     idealGas = idealGasMixture(pures, { referenceState, components });
   } else {
-    idealGas = route;
+    idealGas = route as IdealGasMixture;
   }
   const interactions = model.interactions;
   const auxiliary: FluidBinding = {
     model,
     idealGas,
-    molarMassesKgPerMol: components.map((c) => c.molarMassKgPerMol),
+    molarMassesKgPerMol: reference
+      ? [reference.molarMassKgPerMol]
+      : components.map((c) => c.molarMassKgPerMol),
     departureMethod,
   };
   const binding: FluidBinding = tradeReference
@@ -612,6 +672,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
       received: x,
     });
   };
+  const transportFluid = { ...binding, components };
   // the flashes' stability tests start from this fluid's critical constants (Wilson K-factors)
   const withConstants = <O extends FlashOptions>(options: O | undefined): O =>
     ({
@@ -624,6 +685,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
     componentIds: ids,
     interactionNotes: interactions?.notes ?? [],
     defaultedPairs: interactions?.defaultedPairs ?? [],
+    state: (request) => phaseStateOf(binding, request, components),
     stateAtTP: (T, P, x, options) => stateWithStabilityCheck(binding, T, P, xOf(x), options),
     stateAtTRho: (T, rho, x) => stateAtTRho(binding, T, rho, xOf(x)),
     densityRoots: (T, P, x) => {
@@ -658,5 +720,12 @@ export function defineFluid(spec: FluidSpec): Fluid {
       inversionWithStabilityCheck(binding, temperatureAtPH(binding, P, h, xOf(x), options)),
     temperatureAtPS: (P, s, x, options) =>
       inversionWithStabilityCheck(binding, temperatureAtPS(binding, P, s, xOf(x), options)),
+    transportAtTP: (T, P, x, options) =>
+      transportOfState(
+        transportFluid,
+        stateWithStabilityCheck(binding, T, P, xOf(x), options),
+        options,
+      ),
+    transportOfState: (state, options) => transportOfState(transportFluid, state, options),
   };
 }

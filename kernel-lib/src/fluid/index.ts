@@ -2,4 +2,14 @@
 // state functions (state/) and the phase tests (phase/).
 export { defineFluid } from "./defineFluid.js";
 export type { Fluid, FluidSpec, ConstantOverrides, FluidStateAtTPOptions } from "./defineFluid.js";
+export type { FluidTransportOptions } from "./defineFluid.js";
 export { referenceFluid, buildReferenceFluid } from "./referenceFluids.js";
+export { phaseStateOf, specifiedPair, STATE_PAIRS } from "./phaseState.js";
+export type {
+  PhaseState,
+  StatePhase,
+  StateRequest,
+  StateVariable,
+  OverallPhase,
+  OverallProperties,
+} from "./phaseState.js";

@@ -128,6 +128,9 @@ function mix(binding: FluidBinding, sat: SaturationResult, quality: number): Two
  * wet.pressurePa; // 932203.56 Pa, wet.mass.h = 0.7 h' + 0.3 h''
  * ```
  * @throws InputError for bad T or q; PhaseUnavailableError at or above T_c.
+ * @deprecated Use `fluid.state({ T, vaporFraction })` (fluid/phaseState.ts): the same saturated phases in
+ * `phases[]`, one PhaseState for pure fluids and mixtures. For a reference equation bind it with
+ * `defineFluid({ components: [id], model: referenceFluid(id) })`.
  */
 export function stateAtTemperatureQuality(
   binding: FluidBinding,
@@ -144,6 +147,9 @@ export function stateAtTemperatureQuality(
  * The pure fluid at pressure P (Pa) and quality q.
  *
  * @throws InputError for bad P or q; PhaseUnavailableError at or above P_c.
+ * @deprecated Use `fluid.state({ P, vaporFraction })` (fluid/phaseState.ts): the same saturated phases in
+ * `phases[]`, one PhaseState for pure fluids and mixtures. For a reference equation bind it with
+ * `defineFluid({ components: [id], model: referenceFluid(id) })`.
  */
 export function stateAtPressureQuality(
   binding: FluidBinding,
@@ -162,6 +168,9 @@ export function stateAtPressureQuality(
  * densities (q from v = (1 - q) v_L + q v_V), else the single-phase state at (T, rho).
  *
  * @throws InputError for bad T or rho.
+ * @deprecated Use `fluid.state({ T, rho })` (fluid/phaseState.ts): the same saturated phases in
+ * `phases[]`, one PhaseState for pure fluids and mixtures. For a reference equation bind it with
+ * `defineFluid({ components: [id], model: referenceFluid(id) })`.
  */
 export function stateAtTemperatureDensity(
   binding: FluidBinding,
@@ -300,6 +309,9 @@ function acrossDome(
  * the single-phase state (e.g. the outlet of a throttling valve).
  *
  * @throws InputError for bad P or h; SolverError when no state is found (says what was tried).
+ * @deprecated Use `fluid.state({ P, h })` (fluid/phaseState.ts): the same saturated phases in
+ * `phases[]`, one PhaseState for pure fluids and mixtures. For a reference equation bind it with
+ * `defineFluid({ components: [id], model: referenceFluid(id) })`.
  */
 export function stateAtPressureEnthalpy(
   binding: FluidBinding,
@@ -314,6 +326,9 @@ export function stateAtPressureEnthalpy(
  * The pure fluid at pressure P (Pa) and molar entropy s (J/(mol K)): two-phase with its quality
  * when s lies between the saturated liquid and vapour, else single-phase (e.g. an isentropic
  * expansion into the dome).
+ * @deprecated Use `fluid.state({ P, s })` (fluid/phaseState.ts): the same saturated phases in
+ * `phases[]`, one PhaseState for pure fluids and mixtures. For a reference equation bind it with
+ * `defineFluid({ components: [id], model: referenceFluid(id) })`.
  */
 export function stateAtPressureEntropy(
   binding: FluidBinding,

@@ -59,7 +59,3 @@ export { departuresAcrossDome } from "./acrossDome.js";
 export type { SaturationData, DomeState, AcrossDomeResult } from "./acrossDome.js";
 export { surfacePressureModel } from "./surfacePressureModel.js";
 export type { SurfacePressureModelOptions } from "./surfacePressureModel.js";
-export { departureBandChart } from "./departureBandChart.js";
-export type { DepartureBandChartOptions } from "./departureBandChart.js";
-export { departureResidualChart } from "./departureResidualChart.js";
-export type { DepartureResidualChartOptions } from "./departureResidualChart.js";

@@ -26,7 +26,7 @@ const LAYERS: readonly (readonly string[])[] = [
   ["idealgas"],
   ["eos"],
   ["departure"],
-  ["state"],
+  ["state", "transport"],
   ["phase"],
   ["fluid"],
   ["process", "pvt"],

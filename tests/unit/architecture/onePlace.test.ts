@@ -85,6 +85,16 @@ const BLOCKS: readonly Block[] = [
     owner: "state/findDensityRoots.ts",
     pattern: /model\.densityRoots\s*\?/,
   },
+  {
+    name: "Neufeld et al. (1972) collision integral 1.16145 T*^-0.14874 (Chung's viscosity)",
+    owner: "transport/chung.ts",
+    pattern: /1\.16145/,
+  },
+  {
+    name: "IAPWS 2011 critical enhancement of conductivity, Lambda = 177.8514",
+    owner: "transport/iapwsWater.ts",
+    pattern: /177\.8514/,
+  },
 ];
 
 function sourceFiles(dir: string): string[] {

@@ -518,6 +518,49 @@ const cases: Case[] = [
     code: "bad-input",
     names: /"hot"/,
   },
+  // the state API, fluid.state({ ... })
+  {
+    name: "fluid.state with one specification",
+    run: () => pr.state({ T: 300 }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^state specification must be exactly one of the pairs \(T, P\).*given: \(T\)/,
+  },
+  {
+    name: "fluid.state with three specifications",
+    run: () => pr.state({ T: 300, P: 1e5, h: 0 }),
+    cls: InputError,
+    code: "bad-input",
+    names: /given: \(T, P, h\)/,
+  },
+  {
+    name: "fluid.state with a misspelt field",
+    run: () => pr.state(garbage({ T: 300, pressure: 1e5 })),
+    cls: InputError,
+    code: "bad-input",
+    names: /^state request field pressure must be one of T, P, rho/,
+  },
+  {
+    name: "fluid.state of a mixture without x",
+    run: () => mix.state({ T: 300, P: 1e5 }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^x must be 2 mole fractions/,
+  },
+  {
+    name: "fluid.state with a vapour fraction above 1",
+    run: () => pr.state({ T: 150, vaporFraction: 1.5 }),
+    cls: InputError,
+    code: "bad-input",
+    names: /vaporFraction/,
+  },
+  {
+    name: "fluid.state with a vapour fraction above the critical temperature",
+    run: () => pr.state({ T: 250, vaporFraction: 0.5 }),
+    cls: PhaseUnavailableError,
+    code: "phase-unavailable",
+    names: /T = 250 K.*critical temperature/,
+  },
 ];
 
 describe("library API: bad input gives a typed error naming it", () => {

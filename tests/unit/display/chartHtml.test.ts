@@ -3,6 +3,7 @@ import { CHART_STATE_ATTRIBUTE, chartHtml } from "../../../kernel-lib/src/displa
 import { escapeHtml, jsonForScript } from "../../../kernel-lib/src/display/escapeHtml.js";
 import { RUNTIME_MARKER_ATTRIBUTE } from "../../../kernel-lib/src/display/vegaRuntime.js";
 import type { VegaLiteSpec } from "../../../kernel-lib/src/display/vegaLiteSpec.js";
+import { themeConfig } from "../../../kernel-lib/src/charts/theme.js";
 
 const hostile = '</script><script>alert("x")</script>';
 const spec: VegaLiteSpec = {
@@ -60,7 +61,15 @@ describe("chartHtml", () => {
         html,
       )?.[1];
     expect(json).toBeDefined();
-    expect(JSON.parse(json as string)).toEqual(spec);
+    // the raw spec comes back with the project's theme merged in, nothing else changed
+    expect(JSON.parse(json as string)).toEqual({ ...spec, config: themeConfig() });
+  });
+
+  it("keeps a spec's own config block (the theme goes only where there is none)", async () => {
+    const own = { ...spec, config: { background: "#ffffff" } };
+    const html = await chartHtml(own);
+    const json = /class="isochor-chart-spec">([\s\S]*?)<\/script>/.exec(html)?.[1];
+    expect(JSON.parse(json as string).config).toEqual({ background: "#ffffff" });
   });
 
   it("puts the runtime first, once, only when asked", async () => {

@@ -1,3 +1,4 @@
+import { withTheme } from "../../../kernel-lib/src/charts/theme.js";
 import * as fs from "node:fs";
 import * as os from "node:os";
 import * as path from "node:path";
@@ -42,7 +43,7 @@ requiredUnderCI(systemFontsAvailable(), "a system font (Debian fonts-dejavu-core
 
 describe.skipIf(!systemFontsAvailable())("chartPng", () => {
   it("writes a PNG whose size is the SVG size times the scale", async () => {
-    const svg = await renderSvg(spec);
+    const svg = await renderSvg(withTheme(spec)); // chartPng themes a raw spec;
     const svgWidth = Number(/<svg[^>]* width="(\d+)"/.exec(svg)?.[1]);
     const svgHeight = Number(/<svg[^>]* height="(\d+)"/.exec(svg)?.[1]);
     const png1 = await chartPng(spec, { scale: 1 });

@@ -1,12 +1,15 @@
 import { describe, expect, it } from "vitest";
 import {
   compareWithModel,
-  departureBandChart,
-  departureResidualChart,
   departuresFromPvt,
   surfaceResidualModel,
 } from "../../../kernel-lib/src/pvt/index.js";
+import {
+  departureBandChart,
+  departureResidualChart,
+} from "../../../kernel-lib/src/charts/index.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
+import { themeConfig } from "../../../kernel-lib/src/charts/theme.js";
 import { compileSpec, schemaErrors } from "../charts/specCheck.js";
 import { campaign, geometric, range } from "./campaign.js";
 import { pressurePR } from "./pengRobinsonTruth.js";
@@ -25,6 +28,7 @@ describe("departureBandChart", () => {
 
   it("validates against the Vega-Lite schema and compiles, with bands of +/- 2 u around every state", async () => {
     const spec = departureBandChart(result, { quantity: "s" });
+    expect(spec.config).toEqual(themeConfig()); // the project's look, as every builder
     expect(schemaErrors(spec)).toEqual([]);
     const { warnings } = await compileSpec(spec);
     expect(warnings).toEqual([]);
@@ -52,6 +56,7 @@ describe("departureBandChart", () => {
   it("residual chart: data minus model with the data's band around zero; schema-valid and compiles", async () => {
     const cmp = compareWithModel(result, surfaceResidualModel(result.surfaceFit.surface));
     const spec = departureResidualChart(result, cmp, { quantity: "s", modelLabel: "surface fit" });
+    expect(spec.config).toEqual(themeConfig());
     expect(schemaErrors(spec)).toEqual([]);
     const { warnings } = await compileSpec(spec);
     expect(warnings).toEqual([]);

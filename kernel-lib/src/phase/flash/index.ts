@@ -3,6 +3,7 @@ export { flashTP } from "./flashTP.js";
 export type { FlashOptions } from "./flashTP.js";
 export { flashPH, flashPS, flashTS, flashUV, overallProperty } from "./stateFunctionFlash.js";
 export type { StateFlashOptions } from "./stateFunctionFlash.js";
+export { flashTV } from "./flashTV.js";
 export { solveRachfordRice } from "./rachfordRice.js";
 export type { RachfordRiceOptions, RachfordRiceResult } from "./rachfordRice.js";
 export { solveMultiphaseSplit } from "./multiphaseRachfordRice.js";

@@ -47,7 +47,7 @@ export function isothermLabel(temperatureK: number): string {
 
 /** A fresh x encoding: molar density, field "rho", mol/m3. */
 export function densityEncoding(): Record<string, unknown> {
-  return { field: "rho", type: "quantitative", title: "Molar density ρ / (mol/m3)" };
+  return { field: "rho", type: "quantitative", title: "Molar density ρ / mol/m³" };
 }
 
 /** A fresh colour encoding: one colour per isotherm (field "isotherm"), in data order. */

@@ -4,16 +4,18 @@
  * band around zero: where a model's curve leaves the band, the data say it is wrong there.
  * A pure function returning an editable Vega-Lite spec; SI molar units on the axes.
  */
-import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
+import { themeConfig } from "./theme.js";
+import { VEGA_LITE_SCHEMA } from "./topLevel.js";
+import type { ChartSpec as VegaLiteSpec } from "./chartSpec.js";
 import { InputError } from "../errors.js";
-import type { ModelComparisonPoint } from "./compareWithModel.js";
+import type { ModelComparisonPoint } from "../pvt/compareWithModel.js";
 import {
   checkDepartureChartOptions,
   densityEncoding,
   isothermColorEncoding,
   isothermLabel,
 } from "./departureChartParts.js";
-import type { PvtRouteResult } from "./departuresFromPvt.js";
+import type { PvtRouteResult } from "../pvt/departuresFromPvt.js";
 
 /** Options of {@link departureResidualChart}. */
 export interface DepartureResidualChartOptions {
@@ -60,7 +62,8 @@ export function departureResidualChart(
   const color = isothermColorEncoding();
   const model = options.modelLabel ?? "model";
   return {
-    $schema: "https://vega.github.io/schema/vega-lite/v6.json",
+    $schema: VEGA_LITE_SCHEMA,
+    config: themeConfig(),
     title: {
       text: `Data minus ${model}: residual ${q}`,
       subtitle: `band: ±${k} standard uncertainties of the data`,
@@ -76,7 +79,7 @@ export function departureResidualChart(
           y: {
             field: "lower",
             type: "quantitative",
-            title: `Δ${q}_res (data − ${model}) / (${unit})`,
+            title: `Δ${q}_res (data − ${model}) / ${unit}`,
           },
           y2: { field: "upper" },
           color,

@@ -6,15 +6,17 @@
  * A pure function: the returned spec is plain JSON the user may still edit. SI molar units on the
  * axes (mol/m3; J/mol or J/(mol K)).
  */
-import type { VegaLiteSpec } from "../display/vegaLiteSpec.js";
-import type { ModelComparisonPoint } from "./compareWithModel.js";
+import { themeConfig } from "./theme.js";
+import { VEGA_LITE_SCHEMA } from "./topLevel.js";
+import type { ChartSpec as VegaLiteSpec } from "./chartSpec.js";
+import type { ModelComparisonPoint } from "../pvt/compareWithModel.js";
 import {
   checkDepartureChartOptions,
   densityEncoding,
   isothermColorEncoding,
   isothermLabel,
 } from "./departureChartParts.js";
-import type { PvtRouteResult } from "./departuresFromPvt.js";
+import type { PvtRouteResult } from "../pvt/departuresFromPvt.js";
 
 /** Options of {@link departureBandChart}. */
 export interface DepartureBandChartOptions {
@@ -62,7 +64,7 @@ export function departureBandChart(
       mark: { type: "area", opacity: 0.25 },
       encoding: {
         x,
-        y: { field: "lower", type: "quantitative", title: `Residual ${NAMES[q]} / (${unit})` },
+        y: { field: "lower", type: "quantitative", title: `Residual ${NAMES[q]} / ${unit}` },
         y2: { field: "upper" },
         color,
       },
@@ -76,9 +78,9 @@ export function departureBandChart(
         color,
         tooltip: [
           { field: "isotherm", type: "nominal" },
-          { field: "rho", type: "quantitative", title: "ρ / (mol/m3)", format: ".5~g" },
-          { field: "value", type: "quantitative", title: `${q}_res / (${unit})`, format: ".5~g" },
-          { field: "u", type: "quantitative", title: `u / (${unit})`, format: ".2~g" },
+          { field: "rho", type: "quantitative", title: "ρ / mol/m³", format: ".5~g" },
+          { field: "value", type: "quantitative", title: `${q}_res / ${unit}`, format: ".5~g" },
+          { field: "u", type: "quantitative", title: `u / ${unit}`, format: ".2~g" },
         ],
       },
     },
@@ -97,7 +99,8 @@ export function departureBandChart(
     });
   }
   return {
-    $schema: "https://vega.github.io/schema/vega-lite/v6.json",
+    $schema: VEGA_LITE_SCHEMA,
+    config: themeConfig(),
     title: {
       text: options.title ?? `Residual ${NAMES[q]} from P-V-T data`,
       subtitle:
