@@ -63,7 +63,7 @@ const USAGE = `usage: isochor eval [request.json | -]
 Reads a JSON request from the file (or standard input when absent or "-") and writes the states as
 JSON on standard output. Fields: model, components, x, kij, constants, departure, reference,
 idealGas, phase, checkStability (mixtures: tangent-plane test at each T, P state, a split reported
-in its warnings), envelope (true: also the mixture's phase envelope), states. A state is
+in its warnings; default true), envelope (true: also the mixture's phase envelope), states. A state is
 {"T", "P"}, {"T", "rho"}, {"P", "h"}, {"P", "s"}, {"T", "s"}, {"u", "rho"},
 {"T" or "P", "saturated": "liquid"|"vapor"} or {"T" or "P", "quality"}. "phase": "equilibrium"
 flashes every state; (P, h), (P, s), (T, s) and (u, rho) states are always flashes, and list their

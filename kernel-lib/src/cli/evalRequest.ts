@@ -71,7 +71,7 @@ export interface EvalRequest {
   readonly reference: ReferenceState;
   readonly idealGas: "correlation" | "molecular";
   readonly phase: EvalPhase;
-  /** Run the mixture stability test at (T, P) states. Default false. */
+  /** Run the mixture stability test at (T, P) states. Default true (false: untested single-phase states). */
   readonly checkStability: boolean;
   /** Also return viscosity and thermal conductivity of single-phase states. Default false. */
   readonly transport: boolean;
@@ -404,7 +404,7 @@ function toRequest(r: RequestJson): EvalRequest {
   return {
     ...fluidFieldsOf(r),
     phase: r.phase ?? "stable",
-    checkStability: r.checkStability ?? false,
+    checkStability: r.checkStability ?? true,
     transport: r.transport ?? false,
     envelope: r.envelope ?? false,
     states: (r.states ?? []).map(toState),

@@ -29,6 +29,7 @@ import {
   type StateAtTPOptions,
 } from "../state/stateAt.js";
 import {
+  PHASE_SPLIT_NOT_TESTED,
   temperatureAtPH,
   temperatureAtPS,
   type InversionOptions,
@@ -126,10 +127,11 @@ export interface FluidSpec {
 /** Options of a fluid's `stateAtTP`: those of the state layer plus the stability test. */
 export interface FluidStateAtTPOptions extends StateAtTPOptions {
   /**
-   * Mixtures: run the tangent-plane stability test (phase/stability.ts) and add a "phase-split"
-   * warning when the mixture is not stable as one phase here. Default false: the test costs
-   * tens of single-phase states, and surfaces, inversions and flash loops call this function
-   * many times. Turn it on (or call `stabilityAtTP`) wherever a mixture might be two-phase.
+   * Mixtures (two or more components present): run the tangent-plane stability test
+   * (phase/stability.ts) and add a "phase-split" warning when the mixture is not stable as one
+   * phase here. Default true, so that no mixture state is reported single-phase inside the
+   * two-phase region without a warning; the test costs about 20 single-phase states, so a loop
+   * that knows its states are single-phase may pass false (its states are then not tested).
    */
   checkStability?: boolean;
 }
@@ -287,7 +289,8 @@ export interface Fluid extends FluidBinding {
     options?: StateFlashOptions,
   ): StateFunctionEquilibrium;
   /**
-   * T at (P, h) in one phase (valves).
+   * T at (P, h) in one phase (valves). A mixture's result is tested for stability and carries a
+   * "phase-split" warning when it lies inside the two-phase region.
    * @deprecated Use `fluid.state({ P, h, x })`: it finds the phases (a mixture inside the
    * two-phase region is never returned single-phase) and returns the one PhaseState.
    */
@@ -315,7 +318,8 @@ export interface Fluid extends FluidBinding {
    */
   readonly spec: FluidSpec;
   /**
-   * T at (P, s) in one phase (compressors, expanders).
+   * T at (P, s) in one phase (compressors, expanders); a mixture's result is tested like
+   * temperatureAtPH's.
    * @deprecated Use `fluid.state({ P, s, x })`, which finds the phases.
    */
   temperatureAtPS(
@@ -489,6 +493,28 @@ function kayPseudoCritical(
   };
 }
 
+/** Number of components with a positive mole fraction. */
+function presentCount(x: readonly number[]): number {
+  let n = 0;
+  for (const v of x) if (v > 0) n++;
+  return n;
+}
+
+/**
+ * A single-phase inversion of a mixture with the stability test made at its result: the state
+ * layer's note that it could not test (state/inversions.ts) is replaced by the test's verdict,
+ * a "phase-split" warning when the mixture splits there (the (P, h) or (P, s) point lies inside
+ * the two-phase region; flashPH / flashPS give the phases).
+ */
+function inversionWithStabilityCheck(binding: FluidBinding, r: InversionResult): InversionResult {
+  const x = r.state.x;
+  if (presentCount(x) < 2) return r;
+  const kept = r.state.warnings.filter((w) => w.message !== PHASE_SPLIT_NOT_TESTED);
+  const split = splitWarning(binding, r.temperatureK, r.state.pressurePa, x);
+  const warnings = split === undefined ? kept : kept.concat(split);
+  return { ...r, state: { ...r.state, warnings } };
+}
+
 /**
  * The state at (T, P) of the state layer, with the stability test's warning added last when
  * asked for (a mixture; the test of a pure fluid is its saturation, phase/pureFluidPhase.ts).
@@ -501,7 +527,7 @@ function stateWithStabilityCheck(
   options: FluidStateAtTPOptions | undefined,
 ): FluidState {
   const state = stateAtTP(binding, T, P, x, options);
-  if (options?.checkStability !== true || x.length < 2) return state;
+  if (options?.checkStability === false || presentCount(x) < 2) return state;
   const split = splitWarning(binding, T, P, x);
   return split === undefined ? state : { ...state, warnings: state.warnings.concat(split) };
 }
@@ -709,8 +735,10 @@ export function defineFluid(spec: FluidSpec): Fluid {
     flashPS: (P, s, x, options) => flashPS(binding, P, s, xOf(x), withConstants(options)),
     flashTS: (T, s, x, options) => flashTS(binding, T, s, xOf(x), withConstants(options)),
     flashUV: (u, rho, x, options) => flashUV(binding, u, rho, xOf(x), withConstants(options)),
-    temperatureAtPH: (P, h, x, options) => temperatureAtPH(binding, P, h, xOf(x), options),
-    temperatureAtPS: (P, s, x, options) => temperatureAtPS(binding, P, s, xOf(x), options),
+    temperatureAtPH: (P, h, x, options) =>
+      inversionWithStabilityCheck(binding, temperatureAtPH(binding, P, h, xOf(x), options)),
+    temperatureAtPS: (P, s, x, options) =>
+      inversionWithStabilityCheck(binding, temperatureAtPS(binding, P, s, xOf(x), options)),
     sweep: (request) => runSweep({ binding, constants: components }, request),
     // a copy: a caller who edits the spec object later does not change what workers rebuild
     spec: { ...spec, components: [...spec.components] },

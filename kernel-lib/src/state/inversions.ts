@@ -11,6 +11,12 @@
  * (numerics/brent.ts; Brent 1973, ch. 4) locates the root. A jump of h or s across the bracket
  * (the root sits on a phase change of the "stable" branch, i.e. inside the two-phase region) is
  * detected from the final residual and refused with a SolverError saying so.
+ *
+ * A mixture's root can also lie inside the two-phase region with no jump at all (the single-phase
+ * branch continues through the dome, e.g. a natural gas let down across its dew line). This layer
+ * cannot run the tangent-plane test (phase/ sits above it), so a mixture result carries a
+ * "model-limitation" warning saying that its phase split was not tested; a Fluid's
+ * temperatureAtPH/PS (fluid/defineFluid.ts) replaces it with the test's verdict.
  */
 import { InputError, IsochorError, SolverError } from "../errors.js";
 import { findRootBrent } from "../numerics/brent.js";
@@ -22,6 +28,10 @@ import type { IdealGasPure } from "../idealgas/types.js";
 import { MAX_TEMPERATURE_K, MIN_TEMPERATURE_K } from "./physicalLimits.js";
 import { stateAtTP } from "./stateAt.js";
 import type { FluidBinding, FluidState, PhaseRequest } from "./types.js";
+
+/** The warning of a mixture result whose phase split was not tested (see the header). */
+export const PHASE_SPLIT_NOT_TESTED =
+  "mixture: this single-phase inversion did not test whether the mixture splits into phases at the result (the state layer has no stability test); fluid.temperatureAtPH / temperatureAtPS test it, and flashPH / flashPS give the phases and their amounts";
 
 /** Options of {@link temperatureAtPH} and {@link temperatureAtPS}. */
 export interface InversionOptions {
@@ -214,9 +224,20 @@ function invert(
       `${property} jumps at T = ${root.value.toPrecision(8)} K, P = ${pressurePa} Pa (residual ${residual.toPrecision(4)} ${unit} after ${root.iterations} Brent iterations): the target lies between two phases, i.e. inside the two-phase region; a single-phase temperature does not exist (use the saturation and flash routines)`,
     );
   }
+  let present = 0;
+  for (const v of x) if (v > 0) present++;
   return {
     temperatureK: root.value,
-    state,
+    state:
+      present < 2
+        ? state
+        : {
+            ...state,
+            warnings: state.warnings.concat({
+              code: "model-limitation",
+              message: PHASE_SPLIT_NOT_TESTED,
+            }),
+          },
     residual,
     errorEstimate: root.errorEstimate,
     iterations: root.iterations + evaluations,

@@ -124,7 +124,7 @@ describe("isochor eval", () => {
     expect(await evalCommand([], io)).toBe(2);
     expect(JSON.parse(io.out).error.path).toBe("$");
   });
-  it("checkStability reports a split in the state's warnings, and only when asked", () => {
+  it("checkStability (default true) reports a split in the state's warnings, false skips it", () => {
     // 70 % methane, 30 % n-butane at 280 K, 20 bar must drop liquid: the n-butane partial
     // pressure, 6 bar, is far above its vapour pressure there (tests/unit/phase/stability.test.ts)
     const body = {
@@ -140,7 +140,12 @@ describe("isochor eval", () => {
     const [cold, hot] = checked.states as { warnings?: string[] }[];
     expect(cold.warnings?.some((w) => /not stable as one phase/.test(w))).toBe(true);
     expect(hot.warnings ?? []).toEqual([]);
-    const unchecked = runEvalRequest(body).states[0] as { warnings?: string[] };
+    // the default tests a mixture state: none comes back single-phase inside the dome unwarned
+    const byDefault = runEvalRequest(body).states[0] as { warnings?: string[] };
+    expect(byDefault.warnings?.some((w) => /not stable as one phase/.test(w))).toBe(true);
+    const unchecked = runEvalRequest({ ...body, checkStability: false }).states[0] as {
+      warnings?: string[];
+    };
     expect(unchecked.warnings ?? []).toEqual([]);
   });
   it("constants override the table (Tc changes Z)", () => {

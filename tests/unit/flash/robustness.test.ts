@@ -1,5 +1,5 @@
 /**
- * Robustness slice of the isothermal flash: 2,000 random flashes (2-6 components from the table,
+ * Robustness slice of the isothermal flash: 10,000 random flashes (2-6 components from the table,
  * random compositions with traces down to 1e-8, 150-600 K, 0.05-30 MPa, Peng-Robinson with the
  * table's k_ij). Each must either return an equilibrium that passes independent checks (ln f
  * recomputed from the returned states equal to 1e-10, material balance to 1e-12, densities and
@@ -64,22 +64,21 @@ function silentFailure(fluid: Fluid, eq: ReturnType<Fluid["flashTP"]>): string |
     if (eq.phases[k].kind === "vapor") return "a vapour denser than another phase";
   }
   if (!(eq.check.gibbsChangeOverRT <= 1e-12)) return `Gibbs change ${eq.check.gibbsChangeOverRT}`;
-  if (eq.phases.length < 3) {
-    for (const p of eq.phases) {
-      const x = p.state.x.slice();
-      const present = x.map((v, i) => (v > 0 ? i : -1)).filter((i) => i >= 0);
-      const t = stabilityAtTP(fluid.model, eq.temperatureK, eq.pressurePa, x, {
-        constants: fluid.components,
-        extraTrials: present,
-      });
-      if (!t.stable)
-        return `returned ${p.kind} phase is unstable (tm = ${t.minimumTangentPlaneDistance})`;
-    }
+  // every returned phase, of two or three, must be stable
+  for (const p of eq.phases) {
+    const x = p.state.x.slice();
+    const present = x.map((v, i) => (v > 0 ? i : -1)).filter((i) => i >= 0);
+    const t = stabilityAtTP(fluid.model, eq.temperatureK, eq.pressurePa, x, {
+      constants: fluid.components,
+      extraTrials: present,
+    });
+    if (!t.stable)
+      return `returned ${p.kind} phase is unstable (tm = ${t.minimumTangentPlaneDistance})`;
   }
   return undefined;
 }
 
-describe("robustness: 2,000 random flashes", () => {
+describe("robustness: 10,000 random flashes", () => {
   it("each converges with verified equal fugacity or throws a typed error; no silent failure", () => {
     const random = rng(20261204);
     const fluids = new Map<string, Fluid>();
@@ -90,7 +89,7 @@ describe("robustness: 2,000 random flashes", () => {
       typed: new Map<string, number>(),
       silent: [] as string[],
     };
-    const N = 2000;
+    const N = 10000;
     for (let c = 0; c < N; c++) {
       const size = 2 + Math.floor(random() * 5);
       const pool = TABLE.slice();
@@ -133,6 +132,7 @@ describe("robustness: 2,000 random flashes", () => {
     expect(counts.silent).toEqual([]);
     expect(counts.one + counts.two + counts.three + typed).toBe(N);
     // the slice must exercise splits, not only single phases
-    expect(counts.two).toBeGreaterThan(100);
-  });
+    expect(counts.two).toBeGreaterThan(500);
+    // about 10 s of CPU on an idle machine; the allowance is for a loaded one
+  }, 300_000);
 });

@@ -84,13 +84,15 @@ describe("a gas that must drop liquid, and the same gas hot", () => {
     expect(t.minimumTangentPlaneDistance).toBeGreaterThan(-1e-8);
   });
 
-  it("stateAtTP warns 'phase-split' only when asked to check, and only where it splits", () => {
+  it("stateAtTP warns 'phase-split' by default where it splits; checkStability: false skips it", () => {
     const inside = gas.stateAtTP(280, 20e5, feed, { checkStability: true });
     expect(inside.warnings.map((w) => w.code)).toContain("phase-split");
     expect(inside.warnings.find((w) => w.code === "phase-split")?.message).toMatch(
       /not stable as one phase/,
     );
-    const unchecked = gas.stateAtTP(280, 20e5, feed);
+    const byDefault = gas.stateAtTP(280, 20e5, feed);
+    expect(byDefault.warnings.map((w) => w.code)).toContain("phase-split");
+    const unchecked = gas.stateAtTP(280, 20e5, feed, { checkStability: false });
     expect(unchecked.warnings.map((w) => w.code)).not.toContain("phase-split");
     const hot = gas.stateAtTP(400, 5e5, feed, { checkStability: true });
     expect(hot.warnings).toEqual([]);

@@ -9,7 +9,7 @@ import { stateAtTP } from "../../state/stateAt.js";
 import type { FluidBinding } from "../../state/types.js";
 import { requirePositive } from "../../validate.js";
 import type { ReducedIsotherm } from "../compressibility.js";
-import { tryPoint, type SampleProgress } from "./sampleGuard.js";
+import { mixtureSplitsAt, tryPoint, type SampleProgress } from "./sampleGuard.js";
 
 /** Options of {@link compressibilityFromFluid}. */
 export interface CompressibilitySampleOptions {
@@ -59,9 +59,13 @@ export function compressibilityFromFluid(
     return {
       reducedTemperature: tr,
       points: reducedPressures.map((pr) => {
-        const s = tryPoint(() => stateAtTP(fluid, tr * (Tc as number), pr * (Pc as number), x));
+        const T = tr * (Tc as number);
+        const P = pr * (Pc as number);
+        const s = tryPoint(() => stateAtTP(fluid, T, P, x));
         options.onProgress?.(++done, total);
-        return { reducedPressure: pr, z: s ? s.Z : NaN };
+        // a mixture that splits here has no single-phase Z: a gap the chart reports
+        const split = s !== undefined && mixtureSplitsAt(fluid.model, T, P, x);
+        return { reducedPressure: pr, z: s && !split ? s.Z : NaN };
       }),
     };
   });

@@ -9,7 +9,7 @@ import { saturationAtTemperature } from "../../phase/saturation.js";
 import { stateAtTP, stateAtTRho } from "../../state/stateAt.js";
 import type { FluidBinding, FluidState } from "../../state/types.js";
 import type { DepartureCurve, DeparturePoint } from "../departures.js";
-import { tryPoint, type SampleProgress } from "./sampleGuard.js";
+import { mixtureSplitsAt, tryPoint, type SampleProgress } from "./sampleGuard.js";
 
 /** Options of {@link departuresFromFluid}. */
 export interface DepartureSampleOptions {
@@ -52,7 +52,9 @@ export function departuresFromFluid(
     const points: DeparturePoint[] = pressuresPa.map((P) => {
       const s = tryPoint(() => stateAtTP(fluid, T, P, x));
       options.onProgress?.(++done, total);
-      if (!s) return { pressurePa: P, h: NaN, s: NaN, u: NaN, a: NaN, g: NaN };
+      // a mixture that splits here has no single-phase departure: a gap the chart reports
+      if (!s || mixtureSplitsAt(fluid.model, T, P, x))
+        return { pressurePa: P, h: NaN, s: NaN, u: NaN, a: NaN, g: NaN };
       return pick(s);
     });
     // A pure fluid below Tc jumps from vapour to liquid at the vapour pressure: add both

@@ -2,12 +2,19 @@
  * A property on a temperature-pressure grid for the property-surface chart: the stable state at
  * each (T, P) from state/stateAtTP, the property picked from it. Cells without a state are NaN
  * (left blank in the heat map). A 200 x 200 grid is 40 000 states: pass `onProgress`.
+ *
+ * A mixture (two or more components present) is tested for stability at every grid point
+ * (tangent-plane test, phase/stability.ts): where it splits there is no single-phase value, so
+ * the cell is left blank (NaN) and `domeWarnings` (which propertySurfaceChart copies into the
+ * chart's warnings) says how many cells lie in the two-phase region. The test costs about 20
+ * states per point; `checkStability: false` skips it (the cells then show single-phase values,
+ * metastable or unstable inside the dome, and the warning says the split was not tested).
  */
 import { stateAtTP } from "../../state/stateAt.js";
 import type { FluidBinding, FluidState } from "../../state/types.js";
 import { requirePositive } from "../../validate.js";
 import type { DisplayQuantityKindInput } from "./surfaceTypes.js";
-import { tryPoint, type SampleProgress } from "./sampleGuard.js";
+import { mixtureSplitsAt, tryPoint, type SampleProgress } from "./sampleGuard.js";
 
 /** Options of {@link surfaceFromFluid}. */
 export interface SurfaceSampleOptions {
@@ -15,6 +22,8 @@ export interface SurfaceSampleOptions {
   x?: readonly number[];
   /** Progress callback (states done, total). */
   onProgress?: SampleProgress;
+  /** Mixtures: blank the cells where the mixture splits into phases (see the header). Default true. */
+  checkStability?: boolean;
 }
 
 /**
@@ -33,23 +42,46 @@ export function surfaceFromFluid(
   pressuresPa: number[];
   values: number[][];
   quantity: DisplayQuantityKindInput;
+  /** Notes for the chart: cells in the two-phase region of a mixture (see the header). */
+  domeWarnings: string[];
 } {
   const x = options.x ?? [1];
   temperaturesK.forEach((t, i) => requirePositive(`temperaturesK[${i}]`, t, "K"));
   pressuresPa.forEach((p, j) => requirePositive(`pressuresPa[${j}]`, p, "Pa"));
   const total = temperaturesK.length * pressuresPa.length;
+  let present = 0;
+  for (const v of x) if (v > 0) present++;
+  const mixture = present >= 2;
+  const test = mixture && options.checkStability !== false;
+  let split = 0;
   let done = 0;
   const values = temperaturesK.map((T) =>
     pressuresPa.map((P) => {
       const s = tryPoint(() => stateAtTP(fluid, T, P, x));
+      let v = s ? quantity.pick(s) : NaN;
+      if (s && test && mixtureSplitsAt(fluid.model, T, P, x)) {
+        split++;
+        v = NaN;
+      }
       options.onProgress?.(++done, total);
-      return s ? quantity.pick(s) : NaN;
+      return v;
     }),
   );
+  const domeWarnings: string[] = [];
+  if (split > 0) {
+    domeWarnings.push(
+      `${split} of ${total} grid points lie in the two-phase region of this mixture (the tangent-plane test finds a split there): they have no single-phase value and are left blank; flashTP gives the phases there.`,
+    );
+  } else if (mixture && !test) {
+    domeWarnings.push(
+      "mixture surface sampled without the stability test (checkStability: false): inside the two-phase region the cells show single-phase values of the feed, which the real fluid does not have.",
+    );
+  }
   return {
     temperaturesK: [...temperaturesK],
     pressuresPa: [...pressuresPa],
     values,
     quantity: { name: quantity.name, kind: quantity.kind },
+    domeWarnings,
   };
 }

@@ -13,13 +13,13 @@
  * traced the same way; past the critical point a line of beta continues as the line of 1 - beta.
  */
 import type { ResultWarning } from "../../errors.js";
-import { PhaseUnavailableError, SolverError } from "../../errors.js";
+import { IsochorError, PhaseUnavailableError, SolverError } from "../../errors.js";
 import type { ModelInfo } from "../../eos/types.js";
 import type { FluidBinding } from "../../state/types.js";
 import { phaseFugacityAtTP } from "../../state/fugacity.js";
 import { requireCount, requireNonNegative, requirePositive } from "../../validate.js";
 import { InputError } from "../../errors.js";
-import type { WilsonConstants } from "../stability.js";
+import { stabilityAtTP, type WilsonConstants } from "../stability.js";
 import { mixtureCriticalPoint, type MixtureCriticalPoint } from "./mixtureCriticalPoint.js";
 import { attemptAtPressure, modelConstants, saturationSystemOf } from "./saturationStarts.js";
 import type { SaturationSystem } from "./saturationSystem.js";
@@ -178,7 +178,48 @@ function traceFrom(
   if (a.solution === undefined) {
     return `no saturation point of vapour fraction ${sys.beta} at the minimum pressure ${settings.minimumPressurePa} Pa (${a.tried.join("; ") || "no start"})`;
   }
-  return traceLine(sys, a.solution, settings);
+  const trace = traceLine(sys, a.solution, settings);
+  if (trace.points.length > 0 || sys.beta !== 1 || a.point === undefined) return trace;
+  // A dew point that is not stable at its start: another liquid (water in a wet gas) condenses
+  // at a higher temperature, so the first dew point found (the hydrocarbon one, from Wilson's
+  // K-factors) lies inside the region where that liquid is present. The dew line of the
+  // envelope is then the other liquid's: start again from the incipient phase of the
+  // tangent-plane test there (K_i = z_i / w_i), at increasing temperatures.
+  const again = otherLiquidDewStart(binding, sys, settings, a.point.temperatureK);
+  return again === undefined ? trace : traceLine(sys, again, settings);
+}
+
+/** The dew point at the minimum pressure of the liquid the tangent-plane test finds first. */
+function otherLiquidDewStart(
+  binding: FluidBinding,
+  sys: SaturationSystem,
+  settings: TraceSettings,
+  temperatureK: number,
+): Parameters<typeof traceLine>[1] | undefined {
+  const P = settings.minimumPressurePa;
+  let test;
+  try {
+    test = stabilityAtTP(binding.model, temperatureK, P, sys.z, { constants: settings.constants });
+  } catch (e) {
+    if (e instanceof IsochorError) return undefined;
+    throw e;
+  }
+  const w = test.incipientComposition;
+  if (test.stable || w === undefined) return undefined;
+  const kFactors = sys.z.map((zi, i) => (zi > 0 ? zi / Math.max(w[i], 1e-15) : 1));
+  for (const f of [1.25, 1.5, 2, 1.1, 2.5]) {
+    const b = attemptAtPressure(
+      binding,
+      sys,
+      P,
+      settings.constants,
+      { tolerance: settings.tolerance, maxIterations: 40, trivialLnK: 1e-4 },
+      { kFactors, temperatureK: temperatureK * f },
+    );
+    if (b.solution !== undefined && b.point !== undefined && b.point.temperatureK > temperatureK)
+      return b.solution;
+  }
+  return undefined;
 }
 
 function checkFractions(v: readonly number[] | undefined): number[] {

@@ -15,7 +15,8 @@
  *     all phases share one tangent plane, so those fixed starts need one phase); a split found
  *     in any of them adds a third phase (threePhaseSplit.ts), seeded with the trial composition of lowest tm; a phase
  *     that vanishes sends the flash back to two phases from the survivors; a two-phase result
- *     that stays unstable is a SolverError, never returned;
+ *     that stays unstable is a SolverError, never returned; a three-phase result is tested the
+ *     same way, and one that is unstable (a fourth phase would form) is a SolverError too;
  *  4. every result is verified (verifyEquilibrium.ts): equal fugacity, Gibbs energy below the
  *     feed, material balance, no trivial solution, labels by density. Anything else is a
  *     SolverError naming the state and what was tried.
@@ -283,6 +284,19 @@ export function flashTP(
       "isothermal flash",
       `at ${where()}: a phase of the two-phase split is unstable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)}), and the three-phase split ${out.reason ?? "failed"}`,
     );
+  }
+  if (phases.length === 3) {
+    // a three-phase split is tested like a two-phase one: a phase that is still unstable means
+    // a fourth phase (e.g. hydrogen, water, hydrocarbon and CO2/H2S-rich liquids below 170 K),
+    // which this flash does not look for; such a split is refused, never returned
+    const test = testPhases(phases);
+    finalStability = test;
+    if (!test.stable) {
+      throw new SolverError(
+        "isothermal flash",
+        `at ${where()}: the converged three-phase split is not stable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)} for a trial phase): a fourth phase would form, and this flash finds at most three`,
+      );
+    }
   }
   if (phases.length < 3 && (finalStability === undefined || !finalStability.stable)) {
     throw new SolverError(
