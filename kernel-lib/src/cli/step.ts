@@ -10,6 +10,7 @@
  * why: a solver failure, no phase where one is needed); 2 a bad request (an error with the JSON
  * path of the problem, as in `isochor eval`).
  */
+import { vesselSeriesCsv, vesselStepFromRequest } from "./stepVessel.js";
 import * as fs from "node:fs";
 import * as path from "node:path";
 import {
@@ -63,6 +64,15 @@ Response: "outlet" (a state as in isochor eval, with "phases", plus "name", "mol
 "duty", "specificWork", "path" (states), "warnings" ({code, condition, message, basis}),
 "caution", "method", "check" (balances); heaters and coolers add "heatCurve", exchangers
 "curves" and "minimumApproach".
+
+Vessel depressurisation or filling: "step": {"kind": "vessel", "volume" (m3), "wall"?,
+"outlet": {"diameter" (m), "dischargeCoefficient", "backPressure" (Pa)}, "heat": "adiabatic" |
+{...}, "until": {"P": Pa} | {"time": s}} with "inlet" the initial contents (T, P; no flow).
+Response: "series": {"time" [s], "P" [Pa], "T" [K], "Twall" [K], "mass" [kg], "massFlow" [kg/s],
+"liquidFraction" [-]}, "minimum": {"T", "time", "Twall"}, "warnings", "cautions"; with --csv the
+series as CSV on standard output and the cautions on standard error. The result is a model:
+minimum design metal temperature, relief and flare design and depressuring specifications are
+decided under the site's codes, the applicable standards and by licensed engineers.
 
 units: SI, molar. In: T in K, P in Pa (absolute), duty in W, minimumApproach in K, efficiencies
   as fractions (0..1]; flow in the unit given ("mol/s", "kmol/h", "kg/s", "kg/h", "t/h", "Sm3/h"
@@ -287,7 +297,7 @@ function runStep(fluid: Fluid, request: StepRequest, inlet: Stream): StepResult 
   }
   throw new RequestError(
     "$.step.kind",
-    `the step kind "${s.kind}" is not available; available: valve, compressor, turbine, pump, heater, cooler, exchanger, mixer, separator`,
+    `the step kind "${s.kind}" is not available; available: valve, compressor, turbine, pump, heater, cooler, exchanger, mixer, separator, vessel`,
   );
 }
 
@@ -381,7 +391,12 @@ export function runStepRequest(raw: unknown): StepResponse {
 
 /** The `step` sub-command. */
 export async function stepCommand(argv: string[], io: CliIo): Promise<number> {
-  const args = parseCliArgs(argv, {});
+  // --csv (vessel runs: the time series as CSV) is a flag; the shared parser reads value options
+  const csv = argv.includes("--csv");
+  const args = parseCliArgs(
+    argv.filter((a) => a !== "--csv"),
+    {},
+  );
   if (args === "help") {
     io.stdout(USAGE);
     return 0;
@@ -422,6 +437,18 @@ export async function stepCommand(argv: string[], io: CliIo): Promise<number> {
     return fail(err, 2, err.path);
   }
   try {
+    const step = (raw as { step?: { kind?: unknown } } | null)?.step;
+    if (step !== null && typeof step === "object" && step.kind === "vessel") {
+      // vessel depressurisation or filling (process/vessel/, cli/stepVessel.ts)
+      const response = vesselStepFromRequest(raw);
+      if (csv) {
+        io.stdout(vesselSeriesCsv(response));
+        for (const c of response.cautions) io.stderr(`isochor step: caution: ${c}\n`);
+      } else {
+        io.stdout(JSON.stringify(response, replacer) + "\n");
+      }
+      return 0;
+    }
     const response = runStepRequest(raw);
     io.stdout(JSON.stringify(response, replacer) + "\n");
     return 0;

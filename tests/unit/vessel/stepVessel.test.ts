@@ -1,6 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { RequestError } from "../../../kernel-lib/src/errors.js";
 import { vesselSeriesCsv, vesselStepFromRequest } from "../../../kernel-lib/src/cli/stepVessel.js";
+import { stepCommand } from "../../../kernel-lib/src/cli/step.js";
+import { fakeIo } from "../eval/fakeIo.js";
 
 const request = {
   model: "peng-robinson",
@@ -52,5 +54,22 @@ describe("vessel step of isochor step", () => {
     expect(pathOf({ ...request, inlet: { T: 300 } })).toBe("$.inlet.P");
     expect(pathOf({ ...request, components: ["unobtainium"] })).toMatch(/^\$\.components/);
     expect(pathOf({ ...request, step: { ...step, until: {} } })).toBe("$.step.until");
+  });
+
+  it("runs through isochor step: JSON by default, CSV with --csv and the cautions on stderr", async () => {
+    const json = fakeIo(JSON.stringify(request));
+    expect(await stepCommand([], json)).toBe(0);
+    const body = JSON.parse(json.out) as { series: { time: number[] }; cautions: string[] };
+    expect(body.series.time.length).toBeGreaterThan(3);
+    const csv = fakeIo(JSON.stringify(request));
+    expect(await stepCommand(["--csv"], csv)).toBe(0);
+    expect(csv.out.split("\n")[0]).toBe(
+      "time_s,P_Pa,T_K,Twall_K,mass_kg,massFlow_kg_per_s,liquidFraction",
+    );
+    expect(csv.out.trim().split("\n")).toHaveLength(body.series.time.length + 1);
+    expect(csv.err).toMatch(/caution: .*licensed engineers/);
+    const bad = fakeIo(JSON.stringify({ ...request, step: { ...request.step, volume: -1 } }));
+    expect(await stepCommand([], bad)).toBe(2);
+    expect(JSON.parse(bad.out).error.path).toBe("$.step.volume");
   });
 });
