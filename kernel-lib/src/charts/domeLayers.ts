@@ -92,6 +92,30 @@ export function domeLayers(
   ];
 }
 
+/** Share of each fixed axis span kept clear at its ends for a label (text beside a point). */
+const LABEL_MARGIN = 0.04;
+
+/**
+ * Is a point (display units) inside the fixed axis ranges, LABEL_MARGIN of the span clear of each
+ * end (in log space on a log axis)? Axes without a fixed range accept every value.
+ */
+export function insidePlot(
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+  margin = LABEL_MARGIN,
+): (x: number, y: number) => boolean {
+  const within = (axis: AxisPlan, v: number): boolean => {
+    if (!axis.domain) return true;
+    const f = axis.log ? Math.log : (u: number) => u;
+    const lo = f(Math.min(axis.domain[0], axis.domain[1]));
+    const hi = f(Math.max(axis.domain[0], axis.domain[1]));
+    const pad = margin * (hi - lo);
+    const t = f(v);
+    return t >= lo + pad && t <= hi - pad;
+  };
+  return (x, y) => within(xAxis, x) && within(yAxis, y);
+}
+
 /** Lines of constant vapour quality q (mole fraction vapour), by the lever rule, x = xl + q (xv - xl). */
 export function qualityLayers(
   rows: readonly ChartSaturationRow[],
@@ -113,10 +137,12 @@ export function qualityLayers(
     }),
   }));
   const rowsOut = curveRows(curves, xAxis, yAxis, warnings, "quality");
-  // Label each quality line at its lowest point (first row: lowest saturation T).
+  // Label each quality line at its lowest visible point (rows run from the lowest saturation T):
+  // a fixed axis range that starts above the dome's foot would otherwise clip the label.
+  const inside = insidePlot(xAxis, yAxis);
   const labels = curves
     .map((c) => {
-      const first = rowsOut.find((r) => r.series === c.label);
+      const first = rowsOut.find((r) => r.series === c.label && inside(r.x, r.y));
       return first ? { x: first.x, y: first.y, label: c.label } : undefined;
     })
     .filter((v) => v !== undefined);

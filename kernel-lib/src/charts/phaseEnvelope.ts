@@ -21,6 +21,7 @@ import { shortNumber } from "./shortNumber.js";
 import { topLevel } from "./topLevel.js";
 import { WarningList } from "./warningList.js";
 import { INK } from "./theme.js";
+import { pathTag } from "./pathTag.js";
 
 /** What the chart draws: the fields of a phase envelope result (SI). */
 export interface PhaseEnvelopeChartData {
@@ -191,7 +192,7 @@ function pathLayers(
       order: i,
       step: String(i + 1),
       label: s.label === undefined ? `state ${i + 1}` : String(s.label),
-      tag: s.label === undefined ? String(i + 1) : `${i + 1} ${String(s.label)}`,
+      tag: pathTag(s.label === undefined ? undefined : String(s.label), i, path.length),
     };
   });
   const enc = { x: positionEncoding("x", xAxis), y: positionEncoding("y", yAxis) };

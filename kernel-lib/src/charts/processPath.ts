@@ -15,6 +15,7 @@ import { WarningList } from "./warningList.js";
 import { placeGuideLabels } from "./labelPlacement.js";
 import { applyLogTicks } from "./logTicks.js";
 import { INK } from "./theme.js";
+import { pathTag } from "./pathTag.js";
 
 /** One state of a process path, SI per mole. */
 export interface ProcessPathState {
@@ -169,7 +170,7 @@ function pathLayers(
       order: i,
       step: String(i + 1),
       label: s.label === undefined ? `state ${i + 1}` : String(s.label),
-      tag: s.label === undefined ? String(i + 1) : `${i + 1} ${String(s.label)}`,
+      tag: pathTag(s.label === undefined ? undefined : String(s.label), i, list.length),
       labelRole: "fixed",
     };
   });

@@ -3,6 +3,11 @@
  * and does not change while a slider moves (the saturation dome, the critical point). One cache
  * per explorer on the page; a slider move then costs only the curve it redraws.
  *
+ * All models of one explorer share one reference state (EXPLORER_REFERENCE_STATE: h = 0 and s = 0
+ * for each pure ideal gas at 25 degC and 1 bar), so that the numbers of two models of the same state
+ * differ only by the models' physics, not by each model's own zero (a reference equation's
+ * publication convention, a cubic model's formation basis).
+ *
  * Browser-safe.
  */
 import type { Component } from "../components/types.js";
@@ -15,6 +20,8 @@ import { isModelId } from "../eos/createModel.js";
 import { saturationFromModel, type SampledDome } from "../charts/sample/saturationFromModel.js";
 import { tryPoint } from "../charts/sample/sampleGuard.js";
 import type { FluidBinding } from "../state/types.js";
+import type { IdealGasMixture, IdealGasProperties } from "../idealgas/types.js";
+import { zeroAtReferenceState } from "../idealgas/referenceState.js";
 import type { ExplorerModelId } from "./explorerState.js";
 
 /** A model of the explorer's components, with its display name. */
@@ -25,6 +32,66 @@ export interface ExplorerFluid {
   readonly binding: FluidBinding;
   /** Lowest temperature of the dome, K (a reference equation's triple point). Default: 0.55 Tc. */
   readonly lowestSaturationK?: number;
+}
+
+/** Temperature of the explorers' shared zero, K (25 degC). */
+const T0_K = 298.15;
+/** Pressure of the explorers' shared zero, Pa (1 bar). */
+const P0_PA = 1e5;
+
+/** The reference state every model of an explorer is shifted to. */
+export const EXPLORER_REFERENCE_STATE = zeroAtReferenceState(T0_K, P0_PA);
+
+/** The shared reference state in words, for captions, notes and status lines. */
+export const EXPLORER_REFERENCE_TEXT =
+  "h = 0 and s = 0 for the ideal gas at 25 degC and 1 bar, for every model";
+
+/**
+ * The binding with its ideal gas shifted so that each pure ideal gas has h = 0 and s = 0 at T0, P0
+ * (whatever basis the model came with). The shifts are constants per component, linear in the
+ * mole fractions: every difference between states of one model is unchanged, and so are phase
+ * equilibria (both phases see the same shift of g at one T and composition).
+ */
+export function onExplorerReferenceState(binding: FluidBinding): FluidBinding {
+  const inner = binding.idealGas;
+  const n = inner.components.length;
+  const dh = new Float64Array(n);
+  const ds = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    const e = Array.from({ length: n }, (_, i) => (i === k ? 1 : 0));
+    const zero = inner.at(T0_K, P0_PA, e);
+    dh[k] = -zero.h;
+    ds[k] = -zero.s;
+  }
+  const idealGas: IdealGasMixture = {
+    components: inner.components,
+    referenceState: EXPLORER_REFERENCE_STATE,
+    at(temperatureK: number, pressurePa: number, x: readonly number[]): IdealGasProperties {
+      const base = inner.at(temperatureK, pressurePa, x);
+      let DH = 0;
+      let DS = 0;
+      for (let k = 0; k < n; k++) {
+        DH += x[k] * dh[k];
+        DS += x[k] * ds[k];
+      }
+      const TDS = temperatureK * DS;
+      return {
+        ...base,
+        h: base.h + DH,
+        s: base.s + DS,
+        u: base.u + DH,
+        a: base.a + DH - TDS,
+        g: base.g + DH - TDS,
+        referenceState: EXPLORER_REFERENCE_STATE,
+      };
+    },
+  };
+  return {
+    model: binding.model,
+    idealGas,
+    molarMassesKgPerMol: binding.molarMassesKgPerMol,
+    ...(binding.departureMethod ? { departureMethod: binding.departureMethod } : {}),
+  };
 }
 
 /** Is a reference equation shipped for this (pure) fluid? */
@@ -77,12 +144,12 @@ export class ExplorerFluids {
         f = {
           id,
           name: ref.info.name,
-          binding: referenceFluidBinding(ref),
+          binding: onExplorerReferenceState(referenceFluidBinding(ref)),
           lowestSaturationK: ref.triple.temperatureK,
         };
       } else {
         const fluid = defineFluid({ components: this.components, model: id });
-        f = { id, name: fluid.model.info.name, binding: fluid };
+        f = { id, name: fluid.model.info.name, binding: onExplorerReferenceState(fluid) };
       }
       this.fluids.set(id, f);
     }

@@ -39,7 +39,7 @@ import {
   numberIn,
   unknownControl,
 } from "./explorerCommon.js";
-import type { ExplorerFluids } from "./explorerFluids.js";
+import { EXPLORER_REFERENCE_TEXT, type ExplorerFluids } from "./explorerFluids.js";
 import type { PressureEnthalpyExplorerState } from "./explorerState.js";
 
 /** Points on each isentrope (each point is a (P, s) inversion, costlier than an isotherm point). */
@@ -161,8 +161,8 @@ export const pressureEnthalpyExplorer: ExplorerDefinition<PressureEnthalpyExplor
       return movedTo(state, state.pressurePa, s.molar.h, fluids);
     }
     if (key === "model") {
-      // Keep the point's T and P (or P and quality inside the dome): each model has its own
-      // enthalpy reference, so h itself cannot carry over.
+      // Keep the point's T and P (or P and quality inside the dome): the models share one
+      // reference state, but the same h is a different state in another model.
       const point = pointState(state, fluids);
       const next = { ...state, model: modelIn(state, value) };
       const binding = fluids.fluid(next.model).binding;
@@ -212,7 +212,7 @@ export const pressureEnthalpyExplorer: ExplorerDefinition<PressureEnthalpyExplor
         width: state.width,
         height: state.height,
         title: state.title ?? "Pressure-enthalpy diagram",
-        subtitle: fluidSubtitle(state, fluids),
+        subtitle: `${fluidSubtitle(state, fluids)}; h = 0 for the ideal gas at 25 degC, 1 bar`,
       },
     );
     return withProcessPath(spec, [
@@ -275,7 +275,7 @@ export const pressureEnthalpyExplorer: ExplorerDefinition<PressureEnthalpyExplor
     return tableHtml(rows, columns, {
       units: state.units,
       ...(M ? { molarMassKgPerMol: M } : {}),
-      note: `${fluids.fluid(state.model).name}; enthalpy and entropy in this model's reference state.`,
+      note: `${fluids.fluid(state.model).name}; reference state: ${EXPLORER_REFERENCE_TEXT}.`,
     });
   },
 
@@ -289,6 +289,6 @@ export const pressureEnthalpyExplorer: ExplorerDefinition<PressureEnthalpyExplor
     const critical = dome
       ? `; critical point ${formatQuantity(dome.critical.temperatureK, "temperature", state.units)}, ${formatQuantity(dome.critical.pressurePa, "pressure", state.units)}`
       : "";
-    return `State point: ${where} at ${formatQuantity(temperatureOf(point), "temperature", state.units)}${critical}. Drag on the diagram to move it.`;
+    return `State point: ${where} at ${formatQuantity(temperatureOf(point), "temperature", state.units)}${critical}. Drag on the diagram to move it. Reference state: ${EXPLORER_REFERENCE_TEXT}.`;
   },
 };
