@@ -40,7 +40,12 @@ import {
 import { gasConstantOf } from "../phase/pureFluid.js";
 import { describeReferenceState } from "../idealgas/referenceState.js";
 import type { FluidBinding, FluidState } from "../state/types.js";
-import { parseEvalRequest, type EvalRequest, type EvalState } from "./evalRequest.js";
+import {
+  parseEvalRequest,
+  type EvalInputEcho,
+  type EvalRequest,
+  type EvalState,
+} from "./evalRequest.js";
 import { flashPH, flashPS, flashTP, flashTS, flashUV } from "../phase/flash/index.js";
 import type { Equilibrium } from "../phase/flash/types.js";
 import {
@@ -56,6 +61,7 @@ import {
 } from "./evalEquilibrium.js";
 import { transportAtTRho } from "../transport/transportAt.js";
 import { parseCliArgs } from "./cliArgs.js";
+import { convertEntry, convertTP, unitsMap } from "./evalOutput.js";
 import type { CliIo } from "./io.js";
 
 const USAGE = `usage: isochor eval [request.json | -]
@@ -485,7 +491,10 @@ function mixtureQualityResponse(
 
 /** The response: one entry per state, and the envelope when asked for. */
 export interface EvalResponse {
-  states: EvalStateResponse[];
+  /** With "output": the unit of each field of the entries (evalOutput.ts). */
+  units?: Record<string, string>;
+  /** `input`: the state as given, when a state carries a unit or "output" is given. */
+  states: (EvalStateResponse & { input?: EvalInputEcho })[];
   envelope?: EvalEnvelope | { error: { code: string; message: string } };
 }
 
@@ -493,8 +502,15 @@ export interface EvalResponse {
 export function runEvalRequest(raw: unknown): EvalResponse {
   const request = parseEvalRequest(raw);
   const ev = evaluatorOf(request);
+  const output = request.output;
   const response: EvalResponse = {
-    states: request.states.map((st) => withTransport(ev, request, evaluate(ev, request, st))),
+    ...(output !== undefined ? { units: unitsMap(output, request.transport) } : {}),
+    states: request.states.map((st, i) => {
+      const entry = withTransport(ev, request, evaluate(ev, request, st));
+      const converted = output !== undefined ? convertEntry(entry, output) : entry;
+      const input = request.inputs?.[i];
+      return input !== undefined ? { ...converted, input } : converted;
+    }),
   };
   if (request.envelope) {
     try {
@@ -504,7 +520,17 @@ export function runEvalRequest(raw: unknown): EvalResponse {
           "a phase envelope is a mixture's (two or more components); for a pure fluid ask for saturated states along T or P",
         );
       }
-      response.envelope = envelopeResponse(ev.fluid.envelope(request.x));
+      const envelope = envelopeResponse(ev.fluid.envelope(request.x));
+      response.envelope =
+        output === undefined
+          ? envelope
+          : {
+              ...envelope,
+              points: envelope.points.map((p) => convertTP(p, output)),
+              critical: envelope.critical.map((p) => convertTP(p, output)),
+              cricondenbar: envelope.cricondenbar && convertTP(envelope.cricondenbar, output),
+              cricondentherm: envelope.cricondentherm && convertTP(envelope.cricondentherm, output),
+            };
     } catch (e) {
       response.envelope = {
         error: {
