@@ -201,13 +201,7 @@ function convert(
   if (typeof value !== "number" || !Number.isFinite(value)) return value;
   const si = lookupUnit(unit);
   if (si.factor === 1 && si.offset === 0 && !si.gauge && si.molarMassPower === 0) return value;
-  try {
-    return roundConverted(fromSI(value, unit, { molarMassKgPerMol: M, dimension }));
-  } catch (e) {
-    // a value the unit cannot show (a gauge pressure below vacuum is still a number; NaN is not)
-    if (e instanceof IsochorError) return value;
-    throw e;
-  }
+  return roundConverted(fromSI(value, unit, { molarMassKgPerMol: M, dimension }));
 }
 
 /** Converts the unit-bearing fields of an object in place with the molar mass M. */
@@ -243,16 +237,25 @@ function phaseMolarMass(output: EvalOutput, x: unknown): number | undefined {
  * An entry of the response in the output units: the overall fields with the feed's molar mass,
  * each phase of a flash with its own composition's. Error entries are returned unchanged.
  */
-export function convertEntry<E extends object>(entry: E, output: EvalOutput): E {
+export function convertEntry<E extends object>(
+  entry: E,
+  output: EvalOutput,
+): E | { error: { code: string; message: string } } {
   if ("error" in entry) return entry;
   const out: Record<string, unknown> = { ...(entry as Record<string, unknown>) };
-  convertFields(out, output, output.feedMolarMassKgPerMol);
-  if (Array.isArray(out.phases)) {
-    out.phases = (out.phases as Record<string, unknown>[]).map((p) => {
-      const q = { ...p };
-      convertFields(q, output, phaseMolarMass(output, q.x));
-      return q;
-    });
+  try {
+    convertFields(out, output, output.feedMolarMassKgPerMol);
+    if (Array.isArray(out.phases)) {
+      out.phases = (out.phases as Record<string, unknown>[]).map((p) => {
+        const q = { ...p };
+        convertFields(q, output, phaseMolarMass(output, q.x));
+        return q;
+      });
+    }
+  } catch (e) {
+    // never an SI number under a unit that says otherwise: the entry becomes an error entry
+    if (!(e instanceof IsochorError)) throw e;
+    return { error: { code: e.code, message: `output units: ${e.message}` } };
   }
   return out as E;
 }
