@@ -148,6 +148,23 @@ describe("isochor eval: output units and basis", () => {
     });
   });
 
+  it("the envelope's T and P come in the output units too", () => {
+    type Env = { envelope: { points: { T: number; P: number }[]; cricondenbar: { P: number } } };
+    const gas = { model: "peng-robinson", components: ["methane", "n-butane"], x: [0.6, 0.4] };
+    const a = runEvalRequest({ ...gas, envelope: true }) as unknown as Env;
+    const b = runEvalRequest({
+      ...gas,
+      envelope: true,
+      output: { units: { T: "degC", P: "bar" } },
+    }) as unknown as Env;
+    expect(b.envelope.points.length).toBe(a.envelope.points.length);
+    a.envelope.points.forEach((p, i) => {
+      expect(b.envelope.points[i].T).toBeCloseTo(p.T - 273.15, 9);
+      expect(b.envelope.points[i].P).toBeCloseTo(p.P / 1e5, 9);
+    });
+    expect(b.envelope.cricondenbar.P).toBeCloseTo(a.envelope.cricondenbar.P / 1e5, 9);
+  });
+
   it("refuses unknown, ambiguous and wrong-dimension units and unknown fields with the path", async () => {
     for (const [output, path, words] of [
       [{ units: { P: "psi" } }, "$.output.units.P", /psia, psig/],
