@@ -148,6 +148,19 @@ describe("isochor eval: output units and basis", () => {
     });
   });
 
+  it("with transport the units map names viscosity and conductivity in SI", () => {
+    const r = entries({
+      states: [{ T: 300, P: 5e6 }],
+      transport: true,
+      output: { units: "field" },
+    });
+    expect(r.units).toMatchObject({ viscosity: "Pa s", thermalConductivity: "W/(m K)" });
+    const plain = entries({ states: [{ T: 300, P: 5e6 }], transport: true });
+    expect(r.states[0].viscosity).toBe(plain.states[0].viscosity);
+    // numbers given in SI are echoed when output is asked
+    expect(r.states[0].input).toEqual({ given: { T: 300, P: 5e6 }, SI: { T: 300, P: 5e6 } });
+  });
+
   it("the envelope's T and P come in the output units too", () => {
     type Env = { envelope: { points: { T: number; P: number }[]; cricondenbar: { P: number } } };
     const gas = { model: "peng-robinson", components: ["methane", "n-butane"], x: [0.6, 0.4] };
