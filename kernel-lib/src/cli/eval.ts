@@ -5,7 +5,9 @@
  *   {"states": [ {"T", "P", "rho", "Z", "phase", "h", "s", "u", "cp", "cv", "w", "jt", "lnPhi": [...],
  *                 "residual": {"h", "s", "u", "a", "g"}, "residualTV": {"s", "a", "g"}}
  *              | {"error": {"code", "message"}} ]}
- * all SI molar (J/mol, J/(mol K), m/s, K/Pa; residual = same T and P, residualTV = same T and density).
+ * all SI molar (J/mol, J/(mol K), m/s, K/Pa; residual = same T and P, residualTV = same T and density)
+ * unless the request's "output" asks for other units or the mass basis (evalOutput.ts): then the
+ * response adds "units" (the unit of each field) and each entry its "input" as given.
  * Every state entry also carries "referenceState": the zero of h, s and u, in words.
  * States given by saturation or quality (pure fluids) add "quality" (vapour fraction, 0..1): at
  * quality 0 or 1 the entry is the saturated liquid or vapour with every field; strictly inside the
@@ -40,7 +42,12 @@ import {
 import { gasConstantOf } from "../phase/pureFluid.js";
 import { describeReferenceState } from "../idealgas/referenceState.js";
 import type { FluidBinding, FluidState } from "../state/types.js";
-import { parseEvalRequest, type EvalRequest, type EvalState } from "./evalRequest.js";
+import {
+  parseEvalRequest,
+  type EvalInputEcho,
+  type EvalRequest,
+  type EvalState,
+} from "./evalRequest.js";
 import { flashPH, flashPS, flashTP, flashTS, flashUV } from "../phase/flash/index.js";
 import type { Equilibrium } from "../phase/flash/types.js";
 import {
@@ -56,6 +63,7 @@ import {
 } from "./evalEquilibrium.js";
 import { transportAtTRho } from "../transport/transportAt.js";
 import { parseCliArgs } from "./cliArgs.js";
+import { convertEntry, convertTP, unitsMap } from "./evalOutput.js";
 import type { CliIo } from "./io.js";
 
 const USAGE = `usage: isochor eval [request.json | -]
@@ -76,10 +84,22 @@ units: SI, molar. In: T in K, P in Pa, rho in mol/m3, h and u in J/mol, s in J/(
   quality (vapour mole fraction) as fractions (0..1).
   Out: h, u, residual h/u/a/g in J/mol; s, cp, cv in J/(mol K); w in m/s; jt in K/Pa; Z, lnPhi -.
   "transport": true adds viscosity in Pa s and thermalConductivity in W/(m K) to single-phase states.
+  A state field may be a quantity with its unit as text: "30 degC", "60 barg" (gauge against
+  101325 Pa), "1.5 MPa", "-350 kJ/kg" (mass units through the feed's molar mass); "psi" is
+  ambiguous (psia or psig). Such a state echoes "input": {"given": as written, "SI": the values}.
+  "output": {"units": "SI" | "field" | {"T": "degC", "P": "barg", "h": "kJ/kg", ...},
+  "basis": "molar" | "mass"} gives T, P, rho, h, s, u, cp, cv, w, jt (and the residuals) in those
+  units, names them in the response's "units" map and echoes every input. "field": degF, psia,
+  lbmol/ft3 (lb/ft3), Btu/lbmol (Btu/lb), Btu/(lbmol degR) (Btu/(lb degR)), ft/s, degF/psi.
 
 example (methane at 300 K and 50 bar = 5e6 Pa, Peng-Robinson):
   echo '{"model": "peng-robinson", "components": ["methane"], "states": [{"T": 300, "P": 5e6}]}' \\
     | npx isochor eval
+
+example (about the same state in plant units, answered per kg in kJ, degC and barg):
+  echo '{"model": "peng-robinson", "components": ["methane"], "states": [{"T": "26.85 degC",
+    "P": "49 barg"}], "output": {"units": {"T": "degC", "P": "barg", "h": "kJ/kg",
+    "s": "kJ/(kg K)"}, "basis": "mass"}}' | npx isochor eval
 `;
 
 /** The response entry of one state. */
@@ -485,7 +505,10 @@ function mixtureQualityResponse(
 
 /** The response: one entry per state, and the envelope when asked for. */
 export interface EvalResponse {
-  states: EvalStateResponse[];
+  /** With "output": the unit of each field of the entries (evalOutput.ts). */
+  units?: Record<string, string>;
+  /** `input`: the state as given, when a state carries a unit or "output" is given. */
+  states: (EvalStateResponse & { input?: EvalInputEcho })[];
   envelope?: EvalEnvelope | { error: { code: string; message: string } };
 }
 
@@ -493,8 +516,15 @@ export interface EvalResponse {
 export function runEvalRequest(raw: unknown): EvalResponse {
   const request = parseEvalRequest(raw);
   const ev = evaluatorOf(request);
+  const output = request.output;
   const response: EvalResponse = {
-    states: request.states.map((st) => withTransport(ev, request, evaluate(ev, request, st))),
+    ...(output !== undefined ? { units: unitsMap(output, request.transport) } : {}),
+    states: request.states.map((st, i) => {
+      const entry = withTransport(ev, request, evaluate(ev, request, st));
+      const converted = output !== undefined ? convertEntry(entry, output) : entry;
+      const input = request.inputs?.[i];
+      return input !== undefined ? { ...converted, input } : converted;
+    }),
   };
   if (request.envelope) {
     try {
@@ -504,7 +534,17 @@ export function runEvalRequest(raw: unknown): EvalResponse {
           "a phase envelope is a mixture's (two or more components); for a pure fluid ask for saturated states along T or P",
         );
       }
-      response.envelope = envelopeResponse(ev.fluid.envelope(request.x));
+      const envelope = envelopeResponse(ev.fluid.envelope(request.x));
+      response.envelope =
+        output === undefined
+          ? envelope
+          : {
+              ...envelope,
+              points: envelope.points.map((p) => convertTP(p, output)),
+              critical: envelope.critical.map((p) => convertTP(p, output)),
+              cricondenbar: envelope.cricondenbar && convertTP(envelope.cricondenbar, output),
+              cricondentherm: envelope.cricondentherm && convertTP(envelope.cricondentherm, output),
+            };
     } catch (e) {
       response.envelope = {
         error: {

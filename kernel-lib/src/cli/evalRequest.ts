@@ -27,6 +27,7 @@ import { getComponent } from "../components/getComponent.js";
 import { parseQuantity } from "../units/quantity.js";
 import type { Dimension } from "../units/dimension.js";
 import schema from "./schema/eval-request.schema.json";
+import { parseOutput, roundConverted, type EvalOutput, type OutputJson } from "./evalOutput.js";
 
 /**
  * One requested state. "TQ" and "PQ" are pure-fluid states on or inside the saturation dome at
@@ -79,6 +80,19 @@ export interface EvalRequest {
   readonly envelope: boolean;
   /** May be empty when `envelope` is true. */
   readonly states: readonly EvalState[];
+  /** The "output" field checked: units and basis of the response (absent: SI molar as before). */
+  readonly output?: EvalOutput;
+  /**
+   * Each state's input echo (one per state), present when a state carries a unit or "output" is
+   * given: the fields exactly as in the request, and their SI values.
+   */
+  readonly inputs?: readonly EvalInputEcho[];
+}
+
+/** A state's input as given ("30 degC" stays "30 degC") and in SI (303.15 K). */
+export interface EvalInputEcho {
+  readonly given: Readonly<Record<string, unknown>>;
+  readonly SI: Readonly<Record<string, unknown>>;
 }
 
 type Json = unknown;
@@ -217,8 +231,25 @@ export function parseEvalRequest(raw: Json): EvalRequest {
     throw new RequestError("$", `expected a request object, got ${describe(raw)}`);
   const validate = validator();
   if (!validate(raw)) throw requestError(firstProblem(validate.errors ?? []));
-  checkCounts(raw as unknown as RequestJson);
-  return toRequest(withQuantities(raw as unknown as RequestJson));
+  const r = raw as unknown as RequestJson;
+  checkCounts(r);
+  const converted = withQuantities(r);
+  const request = toRequest(converted);
+  const echo = r.output !== undefined || r.states !== converted.states;
+  return {
+    ...request,
+    ...(r.output !== undefined
+      ? { output: parseOutput(r.output, componentMolarMasses(r), request.x) }
+      : {}),
+    ...(echo
+      ? {
+          inputs: (r.states ?? []).map((given, i) => ({
+            given: { ...given },
+            SI: { ...converted.states![i] },
+          })),
+        }
+      : {}),
+  };
 }
 
 /** Dimension of each state field given as a quantity with its unit. */
@@ -231,30 +262,35 @@ const STATE_DIMENSIONS: Readonly<Record<string, Dimension>> = {
   u: "molar-energy",
 };
 
-/** Molar mass of the feed, kg/mol, or undefined when a component is unknown to the table. */
-function feedMolarMass(r: RequestJson): number | undefined {
-  const x = r.x ?? [1];
-  let M = 0;
+/** Molar mass of each component, kg/mol, or undefined when a component is unknown to the table. */
+function componentMolarMasses(r: RequestJson): number[] | undefined {
+  const out: number[] = [];
   for (let i = 0; i < r.components.length; i++) {
     const given = r.constants?.[i]?.M;
-    let Mi: number;
-    if (given !== undefined) Mi = given;
+    if (given !== undefined) out.push(given);
     else {
       try {
-        Mi = getComponent(r.components[i]).molarMassKgPerMol;
+        out.push(getComponent(r.components[i]).molarMassKgPerMol);
       } catch {
         return undefined;
       }
     }
-    M += x[i] * Mi;
   }
-  return M;
+  return out;
+}
+
+/** Molar mass of the feed, kg/mol, or undefined when a component is unknown to the table. */
+function feedMolarMass(r: RequestJson): number | undefined {
+  const x = r.x ?? [1];
+  return componentMolarMasses(r)?.reduce((sum, M, i) => sum + x[i] * M, 0);
 }
 
 /**
  * State fields given as text ("30 degC", "60 barg", "-350 kJ/kg") turned into SI numbers by the
  * units module (the same rules and refusals as the library: gauge pressure against 101325 Pa,
- * "psi" ambiguous, mass-based units through the feed's molar mass).
+ * "psi" ambiguous, mass-based units through the feed's molar mass). A converted value is
+ * rounded to 15 significant digits (evalOutput.roundConverted): "40 bar" is 4e6 Pa, not
+ * 3999999.9999999995, both in the computation and in the response.
  */
 function withQuantities(r: RequestJson): RequestJson {
   if (r.states === undefined || !r.states.some((s) => Object.values(s).some(isText))) return r;
@@ -266,11 +302,13 @@ function withQuantities(r: RequestJson): RequestJson {
       if (dimension === undefined || typeof value !== "string") continue;
       const path = `$.states[${i}].${field}`;
       try {
-        out[field] = parseQuantity(value, {
-          dimension,
-          molarMassKgPerMol: M,
-          input: path,
-        }).value;
+        out[field] = roundConverted(
+          parseQuantity(value, {
+            dimension,
+            molarMassKgPerMol: M,
+            input: path,
+          }).value,
+        );
       } catch (e) {
         throw new RequestError(
           path,
@@ -308,6 +346,7 @@ interface RequestJson {
   transport?: boolean;
   envelope?: boolean;
   states?: StateJson[];
+  output?: OutputJson;
 }
 
 interface StateJson {
