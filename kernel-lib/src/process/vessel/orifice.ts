@@ -18,6 +18,12 @@
  * and the middle of the expansion are stable as one phase; otherwise (or if the single-phase
  * inversion fails) it takes the equilibrium route.
  *
+ * The equilibrium route is screened when the caller leaves the flash's extra trial phases at
+ * "auto": the interior points of the choke search (which only locate the maximum) are solved by
+ * a secant on T around isothermal flashes with the Wilson-start stability tests, and the throat
+ * that is returned is computed again with the caller's options and must agree (same phases, G
+ * within 1e-9), else the whole search is repeated with the caller's options (SCREEN_AGREEMENT).
+ *
  * The ideal-gas choked flux G* = P0 sqrt(gamma M / (R T0)) (2 / (gamma + 1))^((gamma + 1) / (2
  * (gamma - 1))) is given by {@link idealGasChokedMassFlux} as a check only.
  */
@@ -138,6 +144,69 @@ function equilibriumPoint(
     ...flash,
     initialGuessK: guessK,
   });
+  return pathPointOf(s, P, eq);
+}
+
+/**
+ * The equilibrium isentrope point at P from the isothermal flash at a known temperature T of the
+ * isentrope (the screened search's throat): accepted when its entropy meets s0 within
+ * SPEC_TOLERANCE (relative to max(|s0|, R), the default of the (P, s) flash), else undefined.
+ */
+function equilibriumPointAtT(
+  fluid: Fluid,
+  s: StagnationState,
+  P: number,
+  T: number,
+  flash: FlashOptions,
+): PathPoint | undefined {
+  const eq = fluid.flashTP(T, P, s.x, flash);
+  const scale = Math.max(Math.abs(s.entropyJPerMolK), R);
+  const residual = Math.abs(overallProperty(eq, "s") - s.entropyJPerMolK) / scale;
+  return residual <= SPEC_TOLERANCE ? pathPointOf(s, P, eq) : undefined;
+}
+
+/**
+ * The isentrope point at P by the secant method on T around the isothermal flash (the first step
+ * from the phases' frozen heat capacity, ds/dT = cp/T), from a close guess (a neighbouring point
+ * of the choke search): accepted when the entropy meets s0 within SPEC_TOLERANCE / 100 in at most
+ * SECANT_STEPS flashes, else undefined (the caller then takes the (P, s) flash, which brackets).
+ * Used for the screened interior points only.
+ */
+function secantPoint(
+  fluid: Fluid,
+  s: StagnationState,
+  P: number,
+  guessK: number,
+  flash: FlashOptions,
+): PathPoint | undefined {
+  const scale = Math.max(Math.abs(s.entropyJPerMolK), R);
+  const tol = SPEC_TOLERANCE / 100;
+  let T0 = guessK;
+  let eq = fluid.flashTP(T0, P, s.x, flash);
+  let r0 = overallProperty(eq, "s") - s.entropyJPerMolK;
+  if (Math.abs(r0) / scale <= tol) return pathPointOf(s, P, eq);
+  let cp = 0;
+  for (const ph of eq.phases) cp += ph.amount * ph.state.molar.cp;
+  if (!(cp > 0)) return undefined;
+  let T1 = T0 - (r0 * T0) / cp;
+  for (let k = 0; k < SECANT_STEPS; k++) {
+    if (!(T1 > 0.5 * guessK && T1 < 1.5 * guessK)) return undefined;
+    eq = fluid.flashTP(T1, P, s.x, flash);
+    const r1 = overallProperty(eq, "s") - s.entropyJPerMolK;
+    if (Math.abs(r1) / scale <= tol) return pathPointOf(s, P, eq);
+    if (r1 === r0) return undefined;
+    const T2 = T1 - (r1 * (T1 - T0)) / (r1 - r0);
+    T0 = T1;
+    r0 = r1;
+    T1 = T2;
+  }
+  return undefined;
+}
+
+/** Flashes the secant search of {@link secantPoint} may take. */
+const SECANT_STEPS = 6;
+
+function pathPointOf(s: StagnationState, P: number, eq: Equilibrium): PathPoint {
   const v = overallProperty(eq, "v");
   const vapor = eq.phases.find((p) => p.kind === "vapor");
   return {
@@ -183,6 +252,22 @@ export function isStableSinglePhase(
   return Math.abs(rho - densityMolPerM3) <= 1e-6 * densityMolPerM3;
 }
 
+/**
+ * Screening of the equilibrium route: the interior points of the choke search (which only locate
+ * the maximum of G) use flashes with the Wilson-start stability tests only (FlashOptions
+ * extraTrials "none"); the throat state that is returned is computed again with the caller's
+ * options (all trial phases) and accepted only when it has the same number of phases and the
+ * same G within SCREEN_AGREEMENT (relative). Otherwise the whole search is repeated with the
+ * caller's options, so a phase missed by the Wilson starts near the throat cannot change the
+ * result. Every point is still a verified equilibrium (equal fugacities) of the (P, s) flash.
+ */
+const SCREEN_AGREEMENT = 1e-9;
+/** The (P, s) flash's default specification tolerance (phase/flash/stateFunctionFlash.ts). */
+const SPEC_TOLERANCE = 1e-9;
+
+/** The screened search disagreed with the full flash at its throat. */
+class ScreenMismatch extends Error {}
+
 function fluxAlong(
   fluid: Fluid,
   s: StagnationState,
@@ -191,21 +276,54 @@ function fluxAlong(
   relTol: number,
   hint?: number,
   flash: FlashOptions = {},
+  screen = false,
 ): OrificeFlux & { points: PathPoint[] } {
   let evaluations = 0;
   let guess = s.temperatureK;
   const points: PathPoint[] = [];
+  // screening (see SCREENED_TRIALS): the search runs on the Wilson-start flashes, the point
+  // returned is computed again with the caller's flash options and must agree
+  const searchFlash: FlashOptions = screen ? { ...flash, extraTrials: "none" } : flash;
   const at = (P: number): PathPoint => {
     evaluations++;
-    const p =
-      route === "single-phase"
-        ? singlePhasePoint(fluid, s, P, guess)
-        : equilibriumPoint(fluid, s, P, guess, flash);
+    let p: PathPoint;
+    if (route === "single-phase") p = singlePhasePoint(fluid, s, P, guess);
+    else if (screen) {
+      // the guess extrapolated in ln P along the two latest points
+      const n = points.length;
+      let g = guess;
+      if (n >= 2) {
+        const a = points[n - 2];
+        const b = points[n - 1];
+        const d = Math.log(b.P) - Math.log(a.P);
+        if (d !== 0) g = b.T + ((b.T - a.T) / d) * (Math.log(P) - Math.log(b.P));
+      }
+      if (!(g > 0)) g = guess;
+      p =
+        secantPoint(fluid, s, P, g, searchFlash) ??
+        equilibriumPoint(fluid, s, P, guess, searchFlash);
+    } else p = equilibriumPoint(fluid, s, P, guess, searchFlash);
     guess = p.T;
     points.push(p);
     return p;
   };
-  const result = (p: PathPoint, choked: boolean): OrificeFlux & { points: PathPoint[] } => {
+  const result = (ps: PathPoint, choked: boolean): OrificeFlux & { points: PathPoint[] } => {
+    let p = ps;
+    if (screen) {
+      evaluations++;
+      p =
+        equilibriumPointAtT(fluid, s, ps.P, ps.T, flash) ??
+        equilibriumPoint(fluid, s, ps.P, ps.T, flash);
+      points.push(p);
+      const gScreen = ps.rhoMass * velocity(s, ps);
+      const gFull = p.rhoMass * velocity(s, p);
+      if (
+        p.phases !== ps.phases ||
+        !(Math.abs(gFull - gScreen) <= SCREEN_AGREEMENT * Math.max(gFull, gScreen))
+      ) {
+        throw new ScreenMismatch();
+      }
+    }
     const w = velocity(s, p);
     return {
       massFluxKgPerM2S: p.rhoMass * w,
@@ -346,14 +464,12 @@ export function orificeMassFlux(
     });
   }
   if (route === "equilibrium") {
-    const { points: _p, ...r } = fluxAlong(
+    const { points: _p, ...r } = equilibriumFlux(
       fluid,
       stagnation,
       backPressurePa,
-      route,
       relTol,
-      options.throatRatioHint,
-      options.flash,
+      options,
     );
     return r;
   }
@@ -389,16 +505,40 @@ export function orificeMassFlux(
       return r;
     }
   }
-  const { points: _p, ...r } = fluxAlong(
-    fluid,
-    stagnation,
-    backPressurePa,
-    "equilibrium",
-    relTol,
-    options.throatRatioHint,
-    options.flash,
-  );
+  const { points: _p, ...r } = equilibriumFlux(fluid, stagnation, backPressurePa, relTol, options);
   return r;
+}
+
+/** The equilibrium route, screened when the caller's trial phases allow it (SCREEN_AGREEMENT). */
+function equilibriumFlux(
+  fluid: Fluid,
+  stagnation: StagnationState,
+  backPressurePa: number,
+  relTol: number,
+  options: OrificeFluxOptions,
+): OrificeFlux & { points: PathPoint[] } {
+  const flash = options.flash ?? {};
+  const screen = (flash.extraTrials ?? "auto") === "auto";
+  const run = (screened: boolean): OrificeFlux & { points: PathPoint[] } =>
+    fluxAlong(
+      fluid,
+      stagnation,
+      backPressurePa,
+      "equilibrium",
+      relTol,
+      options.throatRatioHint,
+      flash,
+      screened,
+    );
+  if (!screen) return run(false);
+  try {
+    return run(true);
+  } catch (e) {
+    // a failed screened search (a disagreement, or a flash that failed without the extra
+    // trials) is repeated in full: the caller's options decide
+    if (!(e instanceof ScreenMismatch || e instanceof SolverError)) throw e;
+    return run(false);
+  }
 }
 
 /**
