@@ -167,9 +167,11 @@ function equilibriumPointAtT(
 
 /**
  * The isentrope point at P by the secant method on T around the isothermal flash (the first step
- * from the phases' frozen heat capacity, ds/dT = cp/T), from a close guess (a neighbouring point
- * of the choke search): accepted when the entropy meets s0 within SPEC_TOLERANCE / 100 in at most
- * SECANT_STEPS flashes, else undefined (the caller then takes the (P, s) flash, which brackets).
+ * from the latest secant slope, else the phases' frozen heat capacity, ds/dT = cp/T), from a
+ * close guess (a neighbouring point of the choke search): accepted when the entropy meets s0
+ * within SPEC_TOLERANCE / 100 in at most SECANT_STEPS flashes, else undefined (the caller then
+ * takes the (P, s) flash, which brackets).
+ * slope.dsdT, when positive, replaces the frozen first slope and is updated with the secant's.
  * Used for the screened interior points only.
  */
 function secantPoint(
@@ -178,6 +180,7 @@ function secantPoint(
   P: number,
   guessK: number,
   flash: FlashOptions,
+  slope: { dsdT: number },
 ): PathPoint | undefined {
   const scale = Math.max(Math.abs(s.entropyJPerMolK), R);
   const tol = SPEC_TOLERANCE / 100;
@@ -185,14 +188,19 @@ function secantPoint(
   let eq = fluid.flashTP(T0, P, s.x, flash);
   let r0 = overallProperty(eq, "s") - s.entropyJPerMolK;
   if (Math.abs(r0) / scale <= tol) return pathPointOf(s, P, eq);
-  let cp = 0;
-  for (const ph of eq.phases) cp += ph.amount * ph.state.molar.cp;
-  if (!(cp > 0)) return undefined;
-  let T1 = T0 - (r0 * T0) / cp;
+  let dsdT = slope.dsdT;
+  if (!(dsdT > 0)) {
+    let cp = 0;
+    for (const ph of eq.phases) cp += ph.amount * ph.state.molar.cp;
+    dsdT = cp / T0;
+  }
+  if (!(dsdT > 0)) return undefined;
+  let T1 = T0 - r0 / dsdT;
   for (let k = 0; k < SECANT_STEPS; k++) {
     if (!(T1 > 0.5 * guessK && T1 < 1.5 * guessK)) return undefined;
     eq = fluid.flashTP(T1, P, s.x, flash);
     const r1 = overallProperty(eq, "s") - s.entropyJPerMolK;
+    if (r1 !== r0) slope.dsdT = (r1 - r0) / (T1 - T0);
     if (Math.abs(r1) / scale <= tol) return pathPointOf(s, P, eq);
     if (r1 === r0) return undefined;
     const T2 = T1 - (r1 * (T1 - T0)) / (r1 - r0);
@@ -265,6 +273,9 @@ const SCREEN_AGREEMENT = 1e-9;
 /** The (P, s) flash's default specification tolerance (phase/flash/stateFunctionFlash.ts). */
 const SPEC_TOLERANCE = 1e-9;
 
+/** Rounds of three points of the hinted choke search before Brent's minimisation. */
+const HINT_ROUNDS = 3;
+
 /** The screened search disagreed with the full flash at its throat. */
 class ScreenMismatch extends Error {}
 
@@ -284,6 +295,8 @@ function fluxAlong(
   // screening (see SCREENED_TRIALS): the search runs on the Wilson-start flashes, the point
   // returned is computed again with the caller's flash options and must agree
   const searchFlash: FlashOptions = screen ? { ...flash, extraTrials: "none" } : flash;
+  // ds/dT along the isobars of the latest secant (the first step of the next one)
+  const slope = { dsdT: NaN };
   const at = (P: number): PathPoint => {
     evaluations++;
     let p: PathPoint;
@@ -300,7 +313,7 @@ function fluxAlong(
       }
       if (!(g > 0)) g = guess;
       p =
-        secantPoint(fluid, s, P, g, searchFlash) ??
+        secantPoint(fluid, s, P, g, searchFlash, slope) ??
         equilibriumPoint(fluid, s, P, guess, searchFlash);
     } else p = equilibriumPoint(fluid, s, P, guess, searchFlash);
     guess = p.T;
@@ -377,20 +390,27 @@ function fluxAlong(
     const hi = Math.min(ln0 - 1e-6, ln0 + Math.log(hint) + 0.03);
     // three points around the hint and the vertex of their parabola: accepted when the vertex
     // lies between the outer two and G there is the largest of the four (G is smooth and
-    // nearly quadratic at its maximum unless the expansion crosses a phase boundary there)
-    const lnH = ln0 + Math.log(hint);
+    // nearly quadratic at its maximum unless the expansion crosses a phase boundary there);
+    // a vertex outside the three points (the throat moved more than d) centres the next three
+    // on it, up to HINT_ROUNDS times, within +-3 % of the hint
+    let lnH = ln0 + Math.log(hint);
     const d = 0.004;
-    if (lnH - d > lnB && lnH + d < ln0 - 1e-6) {
+    for (let round = 0; round < HINT_ROUNDS; round++) {
+      if (!(lnH - d > lnB && lnH + d < ln0 - 1e-6)) break;
       const g0 = -negG(lnH - d);
       const g1 = -negG(lnH);
       const g2 = -negG(lnH + d);
       const curvature = g0 - 2 * g1 + g2;
-      if (curvature < 0 && g1 >= g0 && g1 >= g2) {
-        const lnV = lnH + (0.5 * d * (g0 - g2)) / curvature;
+      if (!(curvature < 0)) break;
+      const lnV = lnH + (0.5 * d * (g0 - g2)) / curvature;
+      if (g1 >= g0 && g1 >= g2) {
         const pv = at(Math.exp(lnV));
         const gv = pv.rhoMass * velocity(s, pv);
         if (gv >= g1 && Math.abs(lnV - lnH) <= d) return result(pv, true);
+        break;
       }
+      if (!(lnV > lo + d && lnV < hi - d)) break;
+      lnH = lnV;
     }
     if (hi > lo) {
       const tol = Math.max(relTol, 1e-9);
