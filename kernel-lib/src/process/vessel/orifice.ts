@@ -63,6 +63,11 @@ export interface OrificeFluxOptions {
    * full search when the maximum is not inside.
    */
   throatRatioHint?: number;
+  /**
+   * A guess of the throat temperature ratio T_throat / T0 (with throatRatioHint): the first
+   * temperature guess of the hinted search. Affects the work only, not the result.
+   */
+  throatTemperatureRatioHint?: number;
   /** Options of the phase-equilibrium calculations (flashPS, flashTP). */
   flash?: FlashOptions;
 }
@@ -288,9 +293,13 @@ function fluxAlong(
   hint?: number,
   flash: FlashOptions = {},
   screen = false,
+  tHint?: number,
 ): OrificeFlux & { points: PathPoint[] } {
   let evaluations = 0;
   let guess = s.temperatureK;
+  if (hint !== undefined && tHint !== undefined && tHint > 0.2 && tHint < 5) {
+    guess = tHint * s.temperatureK;
+  }
   const points: PathPoint[] = [];
   // screening (see SCREENED_TRIALS): the search runs on the Wilson-start flashes, the point
   // returned is computed again with the caller's flash options and must agree
@@ -549,6 +558,7 @@ function equilibriumFlux(
       options.throatRatioHint,
       flash,
       screened,
+      options.throatTemperatureRatioHint,
     );
   if (!screen) return run(false);
   try {
