@@ -18,6 +18,12 @@
  * and the middle of the expansion are stable as one phase; otherwise (or if the single-phase
  * inversion fails) it takes the equilibrium route.
  *
+ * The equilibrium route is screened when the caller leaves the flash's extra trial phases at
+ * "auto": the interior points of the choke search (which only locate the maximum) are solved by
+ * a secant on T around isothermal flashes with the Wilson-start stability tests, and the throat
+ * that is returned is computed again with the caller's options and must agree (same phases, G
+ * within 1e-9), else the whole search is repeated with the caller's options (SCREEN_AGREEMENT).
+ *
  * The ideal-gas choked flux G* = P0 sqrt(gamma M / (R T0)) (2 / (gamma + 1))^((gamma + 1) / (2
  * (gamma - 1))) is given by {@link idealGasChokedMassFlux} as a check only.
  */
@@ -57,6 +63,11 @@ export interface OrificeFluxOptions {
    * full search when the maximum is not inside.
    */
   throatRatioHint?: number;
+  /**
+   * A guess of the throat temperature ratio T_throat / T0 (with throatRatioHint): the first
+   * temperature guess of the hinted search. Affects the work only, not the result.
+   */
+  throatTemperatureRatioHint?: number;
   /** Options of the phase-equilibrium calculations (flashPS, flashTP). */
   flash?: FlashOptions;
 }
@@ -138,6 +149,77 @@ function equilibriumPoint(
     ...flash,
     initialGuessK: guessK,
   });
+  return pathPointOf(s, P, eq);
+}
+
+/**
+ * The equilibrium isentrope point at P from the isothermal flash at a known temperature T of the
+ * isentrope (the screened search's throat): accepted when its entropy meets s0 within
+ * SPEC_TOLERANCE (relative to max(|s0|, R), the default of the (P, s) flash), else undefined.
+ */
+function equilibriumPointAtT(
+  fluid: Fluid,
+  s: StagnationState,
+  P: number,
+  T: number,
+  flash: FlashOptions,
+): PathPoint | undefined {
+  const eq = fluid.flashTP(T, P, s.x, flash);
+  const scale = Math.max(Math.abs(s.entropyJPerMolK), R);
+  const residual = Math.abs(overallProperty(eq, "s") - s.entropyJPerMolK) / scale;
+  return residual <= SPEC_TOLERANCE ? pathPointOf(s, P, eq) : undefined;
+}
+
+/**
+ * The isentrope point at P by the secant method on T around the isothermal flash (the first step
+ * from the latest secant slope, else the phases' frozen heat capacity, ds/dT = cp/T), from a
+ * close guess (a neighbouring point of the choke search): accepted when the entropy meets s0
+ * within SPEC_TOLERANCE / 100 in at most SECANT_STEPS flashes, else undefined (the caller then
+ * takes the (P, s) flash, which brackets).
+ * slope.dsdT, when positive, replaces the frozen first slope and is updated with the secant's.
+ * Used for the screened interior points only.
+ */
+function secantPoint(
+  fluid: Fluid,
+  s: StagnationState,
+  P: number,
+  guessK: number,
+  flash: FlashOptions,
+  slope: { dsdT: number },
+): PathPoint | undefined {
+  const scale = Math.max(Math.abs(s.entropyJPerMolK), R);
+  const tol = SPEC_TOLERANCE / 100;
+  let T0 = guessK;
+  let eq = fluid.flashTP(T0, P, s.x, flash);
+  let r0 = overallProperty(eq, "s") - s.entropyJPerMolK;
+  if (Math.abs(r0) / scale <= tol) return pathPointOf(s, P, eq);
+  let dsdT = slope.dsdT;
+  if (!(dsdT > 0)) {
+    let cp = 0;
+    for (const ph of eq.phases) cp += ph.amount * ph.state.molar.cp;
+    dsdT = cp / T0;
+  }
+  if (!(dsdT > 0)) return undefined;
+  let T1 = T0 - r0 / dsdT;
+  for (let k = 0; k < SECANT_STEPS; k++) {
+    if (!(T1 > 0.5 * guessK && T1 < 1.5 * guessK)) return undefined;
+    eq = fluid.flashTP(T1, P, s.x, flash);
+    const r1 = overallProperty(eq, "s") - s.entropyJPerMolK;
+    if (r1 !== r0) slope.dsdT = (r1 - r0) / (T1 - T0);
+    if (Math.abs(r1) / scale <= tol) return pathPointOf(s, P, eq);
+    if (r1 === r0) return undefined;
+    const T2 = T1 - (r1 * (T1 - T0)) / (r1 - r0);
+    T0 = T1;
+    r0 = r1;
+    T1 = T2;
+  }
+  return undefined;
+}
+
+/** Flashes the secant search of {@link secantPoint} may take. */
+const SECANT_STEPS = 6;
+
+function pathPointOf(s: StagnationState, P: number, eq: Equilibrium): PathPoint {
   const v = overallProperty(eq, "v");
   const vapor = eq.phases.find((p) => p.kind === "vapor");
   return {
@@ -183,6 +265,25 @@ export function isStableSinglePhase(
   return Math.abs(rho - densityMolPerM3) <= 1e-6 * densityMolPerM3;
 }
 
+/**
+ * Screening of the equilibrium route: the interior points of the choke search (which only locate
+ * the maximum of G) use flashes with the Wilson-start stability tests only (FlashOptions
+ * extraTrials "none"); the throat state that is returned is computed again with the caller's
+ * options (all trial phases) and accepted only when it has the same number of phases and the
+ * same G within SCREEN_AGREEMENT (relative). Otherwise the whole search is repeated with the
+ * caller's options, so a phase missed by the Wilson starts near the throat cannot change the
+ * result. Every point is still a verified equilibrium (equal fugacities) of the (P, s) flash.
+ */
+const SCREEN_AGREEMENT = 1e-9;
+/** The (P, s) flash's default specification tolerance (phase/flash/stateFunctionFlash.ts). */
+const SPEC_TOLERANCE = 1e-9;
+
+/** Rounds of three points of the hinted choke search before Brent's minimisation. */
+const HINT_ROUNDS = 3;
+
+/** The screened search disagreed with the full flash at its throat. */
+class ScreenMismatch extends Error {}
+
 function fluxAlong(
   fluid: Fluid,
   s: StagnationState,
@@ -191,21 +292,60 @@ function fluxAlong(
   relTol: number,
   hint?: number,
   flash: FlashOptions = {},
+  screen = false,
+  tHint?: number,
 ): OrificeFlux & { points: PathPoint[] } {
   let evaluations = 0;
   let guess = s.temperatureK;
+  if (hint !== undefined && tHint !== undefined && tHint > 0.2 && tHint < 5) {
+    guess = tHint * s.temperatureK;
+  }
   const points: PathPoint[] = [];
+  // screening (see SCREENED_TRIALS): the search runs on the Wilson-start flashes, the point
+  // returned is computed again with the caller's flash options and must agree
+  const searchFlash: FlashOptions = screen ? { ...flash, extraTrials: "none" } : flash;
+  // ds/dT along the isobars of the latest secant (the first step of the next one)
+  const slope = { dsdT: NaN };
   const at = (P: number): PathPoint => {
     evaluations++;
-    const p =
-      route === "single-phase"
-        ? singlePhasePoint(fluid, s, P, guess)
-        : equilibriumPoint(fluid, s, P, guess, flash);
+    let p: PathPoint;
+    if (route === "single-phase") p = singlePhasePoint(fluid, s, P, guess);
+    else if (screen) {
+      // the guess extrapolated in ln P along the two latest points
+      const n = points.length;
+      let g = guess;
+      if (n >= 2) {
+        const a = points[n - 2];
+        const b = points[n - 1];
+        const d = Math.log(b.P) - Math.log(a.P);
+        if (d !== 0) g = b.T + ((b.T - a.T) / d) * (Math.log(P) - Math.log(b.P));
+      }
+      if (!(g > 0)) g = guess;
+      p =
+        secantPoint(fluid, s, P, g, searchFlash, slope) ??
+        equilibriumPoint(fluid, s, P, guess, searchFlash);
+    } else p = equilibriumPoint(fluid, s, P, guess, searchFlash);
     guess = p.T;
     points.push(p);
     return p;
   };
-  const result = (p: PathPoint, choked: boolean): OrificeFlux & { points: PathPoint[] } => {
+  const result = (ps: PathPoint, choked: boolean): OrificeFlux & { points: PathPoint[] } => {
+    let p = ps;
+    if (screen) {
+      evaluations++;
+      p =
+        equilibriumPointAtT(fluid, s, ps.P, ps.T, flash) ??
+        equilibriumPoint(fluid, s, ps.P, ps.T, flash);
+      points.push(p);
+      const gScreen = ps.rhoMass * velocity(s, ps);
+      const gFull = p.rhoMass * velocity(s, p);
+      if (
+        p.phases !== ps.phases ||
+        !(Math.abs(gFull - gScreen) <= SCREEN_AGREEMENT * Math.max(gFull, gScreen))
+      ) {
+        throw new ScreenMismatch();
+      }
+    }
     const w = velocity(s, p);
     return {
       massFluxKgPerM2S: p.rhoMass * w,
@@ -259,20 +399,27 @@ function fluxAlong(
     const hi = Math.min(ln0 - 1e-6, ln0 + Math.log(hint) + 0.03);
     // three points around the hint and the vertex of their parabola: accepted when the vertex
     // lies between the outer two and G there is the largest of the four (G is smooth and
-    // nearly quadratic at its maximum unless the expansion crosses a phase boundary there)
-    const lnH = ln0 + Math.log(hint);
+    // nearly quadratic at its maximum unless the expansion crosses a phase boundary there);
+    // a vertex outside the three points (the throat moved more than d) centres the next three
+    // on it, up to HINT_ROUNDS times, within +-3 % of the hint
+    let lnH = ln0 + Math.log(hint);
     const d = 0.004;
-    if (lnH - d > lnB && lnH + d < ln0 - 1e-6) {
+    for (let round = 0; round < HINT_ROUNDS; round++) {
+      if (!(lnH - d > lnB && lnH + d < ln0 - 1e-6)) break;
       const g0 = -negG(lnH - d);
       const g1 = -negG(lnH);
       const g2 = -negG(lnH + d);
       const curvature = g0 - 2 * g1 + g2;
-      if (curvature < 0 && g1 >= g0 && g1 >= g2) {
-        const lnV = lnH + (0.5 * d * (g0 - g2)) / curvature;
+      if (!(curvature < 0)) break;
+      const lnV = lnH + (0.5 * d * (g0 - g2)) / curvature;
+      if (g1 >= g0 && g1 >= g2) {
         const pv = at(Math.exp(lnV));
         const gv = pv.rhoMass * velocity(s, pv);
         if (gv >= g1 && Math.abs(lnV - lnH) <= d) return result(pv, true);
+        break;
       }
+      if (!(lnV > lo + d && lnV < hi - d)) break;
+      lnH = lnV;
     }
     if (hi > lo) {
       const tol = Math.max(relTol, 1e-9);
@@ -346,14 +493,12 @@ export function orificeMassFlux(
     });
   }
   if (route === "equilibrium") {
-    const { points: _p, ...r } = fluxAlong(
+    const { points: _p, ...r } = equilibriumFlux(
       fluid,
       stagnation,
       backPressurePa,
-      route,
       relTol,
-      options.throatRatioHint,
-      options.flash,
+      options,
     );
     return r;
   }
@@ -389,16 +534,41 @@ export function orificeMassFlux(
       return r;
     }
   }
-  const { points: _p, ...r } = fluxAlong(
-    fluid,
-    stagnation,
-    backPressurePa,
-    "equilibrium",
-    relTol,
-    options.throatRatioHint,
-    options.flash,
-  );
+  const { points: _p, ...r } = equilibriumFlux(fluid, stagnation, backPressurePa, relTol, options);
   return r;
+}
+
+/** The equilibrium route, screened when the caller's trial phases allow it (SCREEN_AGREEMENT). */
+function equilibriumFlux(
+  fluid: Fluid,
+  stagnation: StagnationState,
+  backPressurePa: number,
+  relTol: number,
+  options: OrificeFluxOptions,
+): OrificeFlux & { points: PathPoint[] } {
+  const flash = options.flash ?? {};
+  const screen = (flash.extraTrials ?? "auto") === "auto";
+  const run = (screened: boolean): OrificeFlux & { points: PathPoint[] } =>
+    fluxAlong(
+      fluid,
+      stagnation,
+      backPressurePa,
+      "equilibrium",
+      relTol,
+      options.throatRatioHint,
+      flash,
+      screened,
+      options.throatTemperatureRatioHint,
+    );
+  if (!screen) return run(false);
+  try {
+    return run(true);
+  } catch (e) {
+    // a failed screened search (a disagreement, or a flash that failed without the extra
+    // trials) is repeated in full: the caller's options decide
+    if (!(e instanceof ScreenMismatch || e instanceof SolverError)) throw e;
+    return run(false);
+  }
 }
 
 /**

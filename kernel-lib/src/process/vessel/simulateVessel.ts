@@ -575,6 +575,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   // the single-phase route fails when a trial step's isentrope enters the two-phase region: that
   // evaluation takes the equilibrium route (the accepted-step check then changes the mode)
   const throatHints = new Map<number, number>();
+  const throatTHints = new Map<number, number>();
   const fluxOf = (
     stag: StagnationState,
     back: number,
@@ -583,6 +584,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   ): OrificeFlux => {
     const opts = {
       throatRatioHint: throatHints.get(which),
+      throatTemperatureRatioHint: throatTHints.get(which),
       pressureTolerance: 1e-6,
       flash: flashOptions,
     };
@@ -598,6 +600,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       }
     }
     if (flux.choked) throatHints.set(which, flux.throatPressurePa / stag.pressurePa);
+    if (flux.choked) throatTHints.set(which, flux.throatTemperatureK / stag.temperatureK);
     return flux;
   };
   const cache: { key: string; ev: Evaluation }[] = [];
