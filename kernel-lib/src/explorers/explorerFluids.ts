@@ -10,6 +10,7 @@
  *
  * Browser-safe.
  */
+import { shiftedIdealGas } from "../idealgas/shiftedMixture.js";
 import type { Component } from "../components/types.js";
 import { InputError } from "../errors.js";
 import { defineFluid } from "../fluid/defineFluid.js";
@@ -20,7 +21,6 @@ import { isModelId } from "../eos/createModel.js";
 import { saturationFromModel, type SampledDome } from "../charts/sample/saturationFromModel.js";
 import { tryPoint } from "../charts/sample/sampleGuard.js";
 import type { FluidBinding } from "../state/types.js";
-import type { IdealGasMixture, IdealGasProperties } from "../idealgas/types.js";
 import { zeroAtReferenceState } from "../idealgas/referenceState.js";
 import type { ExplorerModelId } from "./explorerState.js";
 
@@ -63,29 +63,7 @@ export function onExplorerReferenceState(binding: FluidBinding): FluidBinding {
     dh[k] = -zero.h;
     ds[k] = -zero.s;
   }
-  const idealGas: IdealGasMixture = {
-    components: inner.components,
-    referenceState: EXPLORER_REFERENCE_STATE,
-    at(temperatureK: number, pressurePa: number, x: readonly number[]): IdealGasProperties {
-      const base = inner.at(temperatureK, pressurePa, x);
-      let DH = 0;
-      let DS = 0;
-      for (let k = 0; k < n; k++) {
-        DH += x[k] * dh[k];
-        DS += x[k] * ds[k];
-      }
-      const TDS = temperatureK * DS;
-      return {
-        ...base,
-        h: base.h + DH,
-        s: base.s + DS,
-        u: base.u + DH,
-        a: base.a + DH - TDS,
-        g: base.g + DH - TDS,
-        referenceState: EXPLORER_REFERENCE_STATE,
-      };
-    },
-  };
+  const idealGas = shiftedIdealGas(inner, dh, ds, EXPLORER_REFERENCE_STATE);
   return {
     model: binding.model,
     idealGas,

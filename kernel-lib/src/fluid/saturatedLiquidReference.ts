@@ -9,11 +9,8 @@
  */
 import { InputError } from "../errors.js";
 import type { Component } from "../components/types.js";
-import type {
-  IdealGasMixture,
-  IdealGasProperties,
-  SaturatedLiquidReference,
-} from "../idealgas/types.js";
+import type { IdealGasMixture, SaturatedLiquidReference } from "../idealgas/types.js";
+import { shiftedIdealGas } from "../idealgas/shiftedMixture.js";
 import { saturatedLiquidTargets } from "../idealgas/referenceState.js";
 import { componentCritical, componentSaturation } from "../phase/flash/pureComponent.js";
 import { stateAtTRho } from "../state/stateAt.js";
@@ -66,28 +63,5 @@ export function shiftToSaturatedLiquid(
     dh[k] = targets.hJPerKg * M - liquid.molar.h;
     ds[k] = targets.sJPerKgK * M - liquid.molar.s;
   }
-  const inner = binding.idealGas;
-  return {
-    components: inner.components,
-    referenceState: reference,
-    at(temperatureK: number, pressurePa: number, x: readonly number[]): IdealGasProperties {
-      const base = inner.at(temperatureK, pressurePa, x);
-      let DH = 0;
-      let DS = 0;
-      for (let k = 0; k < n; k++) {
-        DH += x[k] * dh[k];
-        DS += x[k] * ds[k];
-      }
-      const TDS = temperatureK * DS;
-      return {
-        ...base,
-        h: base.h + DH,
-        s: base.s + DS,
-        u: base.u + DH,
-        a: base.a + DH - TDS,
-        g: base.g + DH - TDS,
-        referenceState: reference,
-      };
-    },
-  };
+  return shiftedIdealGas(binding.idealGas, dh, ds, reference);
 }
