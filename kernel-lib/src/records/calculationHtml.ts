@@ -22,69 +22,73 @@ import { fullNumber as num, fullValues as values } from "./recordNumbers.js";
 import { recordDocumentHead } from "./recordHtml.js";
 import { hasMoreThanCitation, memoryStatement, shortCitation } from "./sourceNotes.js";
 
+// Sizes in px, not rem: the classic notebook page sets html { font-size: 10px }, which drew the
+// whole record (60rem wide then) about 580 px wide, with every column and margin shrunk alike.
 const CSS = `
 .isochor-calc { --c-ink:#1f2a33; --c-muted:#5b6770; --c-rule:#c9d1d7; --c-band:#f3f5f6;
   --c-accent:#1f5f7a; --c-caution:#9a3b12; --c-warn:#7a5a00;
   color:var(--c-ink); font:14px/1.5 system-ui,"Segoe UI","DejaVu Sans",Helvetica,Arial,sans-serif;
-  max-width:60rem; }
+  max-width:960px; }
 .isochor-calc * { box-sizing:border-box; }
 .isochor-calc .calc-head { border:2px solid var(--c-ink); display:grid;
-  grid-template-columns: 1fr auto; margin-bottom:1.2rem; }
-.isochor-calc .calc-head .calc-titlebox { padding:.7rem .9rem; border-right:1px solid var(--c-ink); }
-.isochor-calc .calc-kicker { font-size:.7rem; letter-spacing:.16em; text-transform:uppercase;
+  grid-template-columns: 1fr auto; margin-bottom:19.2px; }
+.isochor-calc .calc-head .calc-titlebox { padding:11.2px 14.4px; border-right:1px solid var(--c-ink); }
+.isochor-calc .calc-kicker { font-size:11.2px; letter-spacing:.16em; text-transform:uppercase;
   color:var(--c-accent); font-weight:700; }
-.isochor-calc h1.calc-title { font-size:1.35rem; line-height:1.25; margin:.2rem 0 0; }
-.isochor-calc dl.calc-facts { margin:0; display:grid; grid-template-columns:max-content minmax(9rem,16rem);
-  font-size:.78rem; }
-.isochor-calc dl.calc-facts dt, .isochor-calc dl.calc-facts dd { margin:0; padding:.18rem .6rem;
+.isochor-calc h1.calc-title { font-size:21.6px; line-height:1.25; margin:3.2px 0 0; }
+.isochor-calc dl.calc-facts { margin:0; display:grid; grid-template-columns:max-content minmax(144px,256px);
+  font-size:12.48px; }
+.isochor-calc dl.calc-facts dt, .isochor-calc dl.calc-facts dd { margin:0; padding:2.88px 9.6px;
   border-bottom:1px solid var(--c-rule); }
 .isochor-calc dl.calc-facts dt { color:var(--c-muted); text-transform:uppercase; letter-spacing:.06em;
-  font-size:.68rem; padding-top:.25rem; }
+  font-size:10.88px; padding-top:4px; }
 .isochor-calc dl.calc-facts dd { font-variant-numeric:tabular-nums; overflow-wrap:anywhere; }
-.isochor-calc section.calc-section { margin:0 0 1.3rem; }
-.isochor-calc h2 { font-size:1rem; margin:0 0 .5rem; padding-bottom:.2rem; border-bottom:1px solid var(--c-ink);
-  display:flex; gap:.6rem; align-items:baseline; }
-.isochor-calc h2 .num { color:var(--c-accent); font-variant-numeric:tabular-nums; min-width:1.2rem; }
-.isochor-calc h3 { font-size:.92rem; margin:.8rem 0 .3rem; }
-.isochor-calc p { margin:.3rem 0; }
-.isochor-calc .calc-question { font-size:1.02rem; }
-.isochor-calc .calc-answer { border-left:4px solid var(--c-accent); background:var(--c-band); padding:.5rem .8rem; }
-.isochor-calc .calc-caution { border:2px solid var(--c-caution); padding:.55rem .8rem; margin:.4rem 0; }
+.isochor-calc section.calc-section { margin:0 0 20.8px; }
+.isochor-calc h2 { font-size:16px; margin:0 0 8px; padding-bottom:3.2px; border-bottom:1px solid var(--c-ink);
+  display:flex; gap:9.6px; align-items:baseline; }
+.isochor-calc h2 .num { color:var(--c-accent); font-variant-numeric:tabular-nums; min-width:19.2px; }
+.isochor-calc h3 { font-size:14.72px; margin:12.8px 0 4.8px; }
+.isochor-calc p { margin:4.8px 0; }
+.isochor-calc .calc-question { font-size:16.32px; }
+.isochor-calc .calc-answer { border-left:4px solid var(--c-accent); background:var(--c-band); padding:8px 12.8px; }
+.isochor-calc .calc-caution { border:2px solid var(--c-caution); padding:8.8px 12.8px; margin:6.4px 0; }
 .isochor-calc .calc-caution b { color:var(--c-caution); text-transform:uppercase; letter-spacing:.08em;
-  font-size:.75rem; display:block; margin-bottom:.15rem; }
-.isochor-calc table.calc-grid { border-collapse:collapse; width:100%; font-size:.84rem; }
+  font-size:12px; display:block; margin-bottom:2.4px; }
+.isochor-calc table.calc-grid { border-collapse:collapse; width:100%; font-size:13.44px; }
 .isochor-calc table.calc-grid th, .isochor-calc table.calc-grid td { border-bottom:1px solid var(--c-rule);
-  padding:.22rem .5rem; text-align:left; vertical-align:top; }
-.isochor-calc table.calc-grid th { font-size:.7rem; text-transform:uppercase; letter-spacing:.06em;
+  padding:3.52px 8px; text-align:left; vertical-align:top; }
+.isochor-calc table.calc-grid th { font-size:11.2px; text-transform:uppercase; letter-spacing:.06em;
   color:var(--c-muted); font-weight:600; border-bottom:1px solid var(--c-ink); }
 .isochor-calc td.num { text-align:right; font-variant-numeric:tabular-nums; white-space:nowrap; }
 .isochor-calc .calc-id { font-weight:700; color:var(--c-accent); white-space:nowrap; }
-.isochor-calc .calc-model { border-top:1px solid var(--c-rule); padding-top:.4rem; margin-top:.6rem; }
+.isochor-calc .calc-model { border-top:1px solid var(--c-rule); padding-top:6.4px; margin-top:9.6px; }
 .isochor-calc .calc-model:first-of-type { border-top:0; margin-top:0; }
-.isochor-calc dl.calc-kv { display:grid; grid-template-columns:minmax(5.5rem,10rem) minmax(0,1fr); margin:.2rem 0;
-  font-size:.86rem; }
+.isochor-calc dl.calc-kv { display:grid; grid-template-columns:minmax(88px,160px) minmax(0,1fr); margin:3.2px 0;
+  font-size:13.76px; }
 .isochor-calc dl.calc-kv dt { color:var(--c-muted); }
-.isochor-calc dl.calc-kv dd { margin:0 0 .2rem; min-width:0; }
+.isochor-calc dl.calc-kv dd { margin:0 0 3.2px; min-width:0; }
 .isochor-calc td, .isochor-calc dd, .isochor-calc code, .isochor-calc p, .isochor-calc li { overflow-wrap:anywhere; }
+.isochor-calc h1, .isochor-calc h3, .isochor-calc a, .isochor-calc summary, .isochor-calc details div,
+.isochor-calc figcaption, .isochor-calc caption { overflow-wrap:anywhere; }
 .isochor-calc details.calc-note summary { cursor:pointer; }
 .isochor-calc details.calc-note[open] summary { color:var(--c-muted); }
-.isochor-calc details.calc-note div { font-size:.76rem; color:var(--c-muted); margin:.2rem 0 .3rem; }
-@media (max-width:40rem) {
+.isochor-calc details.calc-note div { font-size:12.16px; color:var(--c-muted); margin:3.2px 0 4.8px; }
+@media (max-width:640px) {
   .isochor-calc dl.calc-kv { grid-template-columns:minmax(0,1fr); }
-  .isochor-calc dl.calc-kv dt { margin-top:.3rem; }
+  .isochor-calc dl.calc-kv dt { margin-top:4.8px; }
 }
-.isochor-calc .calc-item { margin:.7rem 0 1rem; overflow-x:auto; }
-.isochor-calc .calc-basis { font-size:.78rem; color:var(--c-muted); }
-.isochor-calc .calc-basis-cell { white-space:nowrap; font-size:.8rem; }
-.isochor-calc table.calc-small { font-size:.78rem; }
+.isochor-calc .calc-item { margin:11.2px 0 16px; overflow-x:auto; }
+.isochor-calc .calc-basis { font-size:12.48px; color:var(--c-muted); }
+.isochor-calc .calc-basis-cell { white-space:nowrap; font-size:12.8px; }
+.isochor-calc table.calc-small { font-size:12.48px; }
 .isochor-calc a { color:var(--c-accent); }
-.isochor-calc ul.calc-warnings { margin:.2rem 0; padding-left:1.2rem; }
-.isochor-calc ul.calc-warnings li { margin:.15rem 0; }
-.isochor-calc .calc-code { font:600 .72rem ui-monospace,"DejaVu Sans Mono",monospace; color:var(--c-warn);
+.isochor-calc ul.calc-warnings { margin:3.2px 0; padding-left:19.2px; }
+.isochor-calc ul.calc-warnings li { margin:2.4px 0; }
+.isochor-calc .calc-code { font:600 11.52px ui-monospace,"DejaVu Sans Mono",monospace; color:var(--c-warn);
   text-transform:uppercase; }
 .isochor-calc .muted { color:var(--c-muted); }
 .isochor-calc figure.isochor-chart img { max-width:100%; height:auto; }
-.isochor-calc code { font:.82rem ui-monospace,"DejaVu Sans Mono",monospace; }
+.isochor-calc code { font:13.12px ui-monospace,"DejaVu Sans Mono",monospace; }
 @media print {
   .isochor-calc { font-size:9.5pt; max-width:none; }
   .isochor-calc section.calc-section, .isochor-calc .calc-item, .isochor-calc .calc-model { break-inside:avoid; }

@@ -93,10 +93,12 @@ describe("the record inside a notebook cell (about 580 px)", () => {
     );
     expect(html).toContain(path);
   });
-  it("the key-value grid may shrink its value column and stacks below 40rem", () => {
-    expect(html).toContain("grid-template-columns:minmax(5.5rem,10rem) minmax(0,1fr)");
+  it("the key-value grid may shrink its value column and stacks below 640 px", () => {
+    // sizes in px: a notebook page's root font size (10 px in the classic notebook) must not
+    // shrink the record (tests/unit/records/recordWidth.test.ts)
+    expect(html).toContain("grid-template-columns:minmax(88px,160px) minmax(0,1fr)");
     expect(html).toMatch(
-      /@media \(max-width:40rem\) \{\s*\.isochor-calc dl\.calc-kv \{ grid-template-columns:minmax\(0,1fr\); \}/,
+      /@media \(max-width:640px\) \{\s*\.isochor-calc dl\.calc-kv \{ grid-template-columns:minmax\(0,1fr\); \}/,
     );
   });
 });
