@@ -10,6 +10,7 @@ export { renderSvg } from "./renderSvg.js";
 export { chartHtml, CHART_STATE_ATTRIBUTE } from "./chartHtml.js";
 export type { ChartHtmlOptions } from "./chartHtml.js";
 export { showChart } from "./showChart.js";
+export { showTable } from "./showTable.js";
 export type { ShowChartOptions } from "./showChart.js";
 export { resetDisplaySession } from "./displaySession.js";
 export { chartPng, savePng, systemFontsAvailable } from "./chartPng.js";

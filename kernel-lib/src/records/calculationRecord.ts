@@ -13,7 +13,8 @@
  */
 import { randomBytes } from "node:crypto";
 import { InputError, type ResultWarning } from "../errors.js";
-import type { TableColumn } from "../tables/columns.js";
+import type { ResultTable, TableColumn } from "../tables/columns.js";
+import { isResultTable } from "../tables/columns.js";
 import { chartMeta } from "../charts/chartSpec.js";
 import { chartFigure } from "../display/chartHtml.js";
 import { chartTitle } from "../display/chartTitle.js";
@@ -261,12 +262,25 @@ export class CalculationRecord {
    * @param rows Row objects, SI values (e.g. FluidState objects or your own).
    * @param columns Column specs of tables/ (units to show, significant figures).
    * @example rec.results(states, cols, { caption: "Inlet states", model: m, inputs: [T, P] })
+   * @example rec.results(stateTable(states, { names }), { caption: "Inlet states", model: m })
    */
+  results(table: ResultTable, options?: RecordResultsOptions): RecordedTable;
   results(
     rows: readonly Record<string, unknown>[],
     columns: readonly TableColumn[],
-    options: RecordResultsOptions = {},
+    options?: RecordResultsOptions,
+  ): RecordedTable;
+  results(
+    first: readonly Record<string, unknown>[] | ResultTable,
+    second?: readonly TableColumn[] | RecordResultsOptions,
+    third?: RecordResultsOptions,
   ): RecordedTable {
+    // a table of stateTable / stepTable: its options, overridden by the ones given here
+    const rows = isResultTable(first) ? first.rows : first;
+    const columns = isResultTable(first) ? first.columns : (second as readonly TableColumn[]);
+    const options: RecordResultsOptions = isResultTable(first)
+      ? { ...first.options, ...(second as RecordResultsOptions | undefined) }
+      : (third ?? {});
     const id = `T${this.tableCount + 1}`;
     const caption = optionalText(options.caption, "options.caption");
     if (!Array.isArray(rows)) {

@@ -29,6 +29,11 @@ export interface NumberColumn {
   decimals?: number;
   /** The values are differences (no temperature offset, no gauge). Default false. */
   difference?: boolean;
+  /**
+   * Field of the row holding that row's molar mass, kg/mol, for mass units (kJ/kg, kg/m3) when
+   * rows differ in composition. Default: the table's `molarMassKgPerMol`.
+   */
+  molarMassKey?: string;
 }
 
 /** A column of text (component names, phase labels, notes), shown as plain text. */
@@ -58,6 +63,47 @@ export interface TableOptions {
   molarMassKgPerMol?: number;
   /** Text shown for a missing value (undefined or null). Default "–". */
   missing?: string;
+}
+
+/** Rows, columns and options of a table: pass it to tableHtml, tableText, showTable or rec.results. */
+export interface ResultTable {
+  readonly rows: readonly Record<string, unknown>[];
+  readonly columns: readonly TableColumn[];
+  readonly options: TableOptions;
+}
+
+/** Is this a {@link ResultTable}? */
+export function isResultTable(value: unknown): value is ResultTable {
+  return (
+    typeof value === "object" &&
+    value !== null &&
+    !Array.isArray(value) &&
+    Array.isArray((value as ResultTable).rows) &&
+    Array.isArray((value as ResultTable).columns)
+  );
+}
+
+/**
+ * The arguments of a table function: (rows, columns, options) or (table, options overriding the
+ * table's own).
+ */
+export function tableArguments(
+  first: readonly Record<string, unknown>[] | ResultTable,
+  second: readonly TableColumn[] | TableOptions | undefined,
+  third: TableOptions | undefined,
+): {
+  rows: readonly Record<string, unknown>[];
+  columns: readonly TableColumn[];
+  options: TableOptions;
+} {
+  if (isResultTable(first)) {
+    return {
+      rows: first.rows,
+      columns: first.columns,
+      options: { ...first.options, ...(second as TableOptions | undefined) },
+    };
+  }
+  return { rows: first, columns: second as readonly TableColumn[], options: third ?? {} };
 }
 
 /** A column resolved for rendering: head, unit symbol and a cell formatter. */
@@ -108,10 +154,11 @@ export function resolveColumns(
     const scale = unitId === "%" ? 100 : 1;
     const symbol = unitId === undefined || unitId === "-" ? "" : prettySymbol(unitId);
     const format = { digits: c.digits, decimals: c.decimals };
-    // Check the unit (and the molar mass for mass units) once, before any row.
+    // Check the unit (and the molar mass for mass units) once, before any row; a per-row molar
+    // mass is checked in each cell.
     if (!dimensionless)
       fromSI(1, unitId, {
-        molarMassKgPerMol: options.molarMassKgPerMol,
+        molarMassKgPerMol: c.molarMassKey !== undefined ? 0.1 : options.molarMassKgPerMol,
         difference: true,
         input: `columns[${i}] (${c.key})`,
       });
@@ -135,7 +182,10 @@ export function resolveColumns(
         const shown = dimensionless
           ? v * scale
           : fromSI(v, unitId, {
-              molarMassKgPerMol: options.molarMassKgPerMol,
+              molarMassKgPerMol:
+                c.molarMassKey !== undefined
+                  ? (row[c.molarMassKey] as number)
+                  : options.molarMassKgPerMol,
               difference: c.difference,
               input: `row.${c.key}`,
             });

@@ -5,18 +5,32 @@
  */
 import { escapeHtml } from "./escapeHtml.js";
 import { InputError } from "../errors.js";
-import { resolveColumns, type TableColumn, type TableOptions } from "./columns.js";
+import {
+  resolveColumns,
+  tableArguments,
+  type ResultTable,
+  type TableColumn,
+  type TableOptions,
+} from "./columns.js";
 import { FONT_FAMILY, INK } from "../charts/theme.js";
 
 /**
- * Builds an HTML table.
+ * Builds an HTML table from rows and column specs, or from a table of stateTable / stepTable.
+ * @example tableHtml(stateTable(states, { names: ["inlet", "outlet"] }))
  * @example tableHtml(states, [{ key: "name", label: "Stream", text: true }, { key: "temperatureK", label: "T", unit: "degC" }])
  */
+export function tableHtml(table: ResultTable, options?: TableOptions): string;
 export function tableHtml(
   rows: readonly Record<string, unknown>[],
   columns: readonly TableColumn[],
-  options: TableOptions = {},
+  options?: TableOptions,
+): string;
+export function tableHtml(
+  first: readonly Record<string, unknown>[] | ResultTable,
+  second?: readonly TableColumn[] | TableOptions,
+  third?: TableOptions,
 ): string {
+  const { rows, columns, options } = tableArguments(first, second, third);
   checkRows(rows);
   const cols = resolveColumns(columns, options);
   const cellStyle = "padding:3px 10px;border-bottom:1px solid " + INK.grid;

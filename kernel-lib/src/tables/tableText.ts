@@ -4,6 +4,8 @@
  */
 import {
   resolveColumns,
+  tableArguments,
+  type ResultTable,
   type ResolvedColumn,
   type TableColumn,
   type TableOptions,
@@ -15,11 +17,18 @@ import { checkRows } from "./tableHtml.js";
  * Builds a plain-text table.
  * @example console.log(tableText(states, columns, { caption: "Corvid Point flare header" }))
  */
+export function tableText(table: ResultTable, options?: TableOptions): string;
 export function tableText(
   rows: readonly Record<string, unknown>[],
   columns: readonly TableColumn[],
-  options: TableOptions = {},
+  options?: TableOptions,
+): string;
+export function tableText(
+  first: readonly Record<string, unknown>[] | ResultTable,
+  second?: readonly TableColumn[] | TableOptions,
+  third?: TableOptions,
 ): string {
+  const { rows, columns, options } = tableArguments(first, second, third);
   checkRows(rows);
   const cols = resolveColumns(columns, options);
   const cells = rows.map((row) => cols.map((c) => oneLine(c.cell(row))));
@@ -62,11 +71,18 @@ export function tableText(
 }
 
 /** Builds a Markdown (pipe) table; cells are escaped with {@link escapeMarkdown} (one line each). */
+export function tableMarkdown(table: ResultTable, options?: TableOptions): string;
 export function tableMarkdown(
   rows: readonly Record<string, unknown>[],
   columns: readonly TableColumn[],
-  options: TableOptions = {},
+  options?: TableOptions,
+): string;
+export function tableMarkdown(
+  first: readonly Record<string, unknown>[] | ResultTable,
+  second?: readonly TableColumn[] | TableOptions,
+  third?: TableOptions,
 ): string {
+  const { rows, columns, options } = tableArguments(first, second, third);
   checkRows(rows);
   const cols = resolveColumns(columns, options);
   const esc = escapeMarkdown;

@@ -1,0 +1,484 @@
+/**
+ * States, streams and process steps that table themselves: `stateTable(states)` and
+ * `stepTable(steps)` return rows, columns and options ready for tableHtml, tableText, a record's
+ * `results` or display's `showTable`, with sensible columns and units (T in degC, P in bar, h in
+ * kJ/mol or kJ/kg, ...), the phase in words, and a note naming the reference state of h and s.
+ * Columns and units stay configurable: pick columns by name, override a unit, add your own.
+ */
+import { InputError } from "../errors.js";
+import { R } from "../constants.js";
+import type { ReferenceState } from "../idealgas/types.js";
+import { describeReferenceState } from "../idealgas/referenceState.js";
+import { resolveUnit, type QuantityKind, type UnitChoice } from "../charts/displayUnits.js";
+import type { NumberColumn, ResultTable, TableColumn, TableOptions } from "./columns.js";
+
+/** Named columns of a state table. */
+export type StateColumnName =
+  | "name"
+  | "T"
+  | "P"
+  | "phase"
+  | "vaporFraction"
+  | "density"
+  | "Z"
+  | "h"
+  | "s"
+  | "u"
+  | "g"
+  | "cp"
+  | "cv"
+  | "w"
+  | "jouleThomson"
+  | "hResidual"
+  | "sResidual"
+  | "molarFlow"
+  | "massFlow";
+
+/** A column of your own: a table column plus how to get its SI value from a state. */
+export type CustomStateColumn = TableColumn & {
+  /** The cell's value from the state (SI, molar; mass units use the row's molar mass). */
+  value: (state: TableState, index: number) => unknown;
+};
+
+/** What can be a row: a fluid.state result, a stateAtTP result, a flash result or a stream. */
+export type TableState = object;
+
+/** Options of {@link stateTable}. */
+export interface StateTableOptions extends TableOptions {
+  /** One name per state, shown first ("State" column). Default: streams' names, else none. */
+  names?: readonly string[];
+  /** Head of the name column. Default "State". */
+  nameLabel?: string;
+  /**
+   * Columns in order, by name or your own. Default: name, T, P, phase, vapour fraction (when a
+   * row has two or more phases), density, Z, h, s, and molar and mass flow for streams.
+   */
+  columns?: readonly (StateColumnName | CustomStateColumn)[];
+  /** Unit of a named column, overriding the default, e.g. { P: "barg", h: "kJ/kg" }. */
+  unitOf?: Partial<Record<StateColumnName, string>>;
+  /** "molar" (default: h in kJ/mol, s in J/(mol K)) or "mass" (kJ/kg, kJ/(kg K)). */
+  basis?: "molar" | "mass";
+  /** Say the reference state of h and s in the note. Default true. */
+  referenceNote?: boolean;
+}
+
+interface NamedColumn {
+  label: string;
+  /** Quantity kind (for `units`), and the default unit on the molar and the mass basis. */
+  kind?: QuantityKind;
+  molar?: string;
+  mass?: string;
+  digits?: number;
+  decimals?: number;
+  text?: true;
+}
+
+const NAMED: Readonly<Record<StateColumnName, NamedColumn>> = {
+  name: { label: "State", text: true },
+  T: { label: "T", kind: "temperature", molar: "degC", decimals: 2 },
+  P: { label: "P", kind: "pressure", molar: "bar", digits: 5 },
+  phase: { label: "Phase", text: true },
+  vaporFraction: { label: "Vapour fraction", molar: "-", decimals: 4 },
+  density: { label: "Density", kind: "massDensity", molar: "kg/m3", digits: 5 },
+  Z: { label: "Z", molar: "-", decimals: 4 },
+  h: { label: "h", kind: "molarEnergy", molar: "kJ/mol", mass: "kJ/kg", digits: 6 },
+  s: { label: "s", kind: "molarEntropy", molar: "J/(mol K)", mass: "kJ/(kg K)", digits: 5 },
+  u: { label: "u", kind: "molarEnergy", molar: "kJ/mol", mass: "kJ/kg", digits: 6 },
+  g: { label: "g", kind: "molarEnergy", molar: "kJ/mol", mass: "kJ/kg", digits: 6 },
+  cp: { label: "cp", kind: "molarEntropy", molar: "J/(mol K)", mass: "kJ/(kg K)", digits: 5 },
+  cv: { label: "cv", kind: "molarEntropy", molar: "J/(mol K)", mass: "kJ/(kg K)", digits: 5 },
+  w: { label: "Speed of sound", kind: "speed", molar: "m/s", digits: 4 },
+  jouleThomson: { label: "Joule-Thomson", molar: "K/bar", digits: 3 },
+  hResidual: { label: "h − hⁱᵍ", kind: "molarEnergy", molar: "kJ/mol", mass: "kJ/kg", digits: 5 },
+  sResidual: {
+    label: "s − sⁱᵍ",
+    kind: "molarEntropy",
+    molar: "J/(mol K)",
+    mass: "kJ/(kg K)",
+    digits: 5,
+  },
+  molarFlow: { label: "Molar flow, kmol/h", digits: 5 },
+  massFlow: { label: "Mass flow, kg/h", digits: 5 },
+};
+
+/** Field of the row that holds its molar mass (for mass units). */
+const MOLAR_MASS_KEY = "molarMassKgPerMol";
+
+/** Phase words, one spelling everywhere in tables. */
+const PHASE_WORDS: Readonly<Record<string, string>> = {
+  vapor: "vapour",
+  liquid: "liquid",
+  "liquid-2": "second liquid",
+  supercritical: "supercritical",
+};
+
+interface PhaseLike {
+  kind: string;
+  amount: number;
+  state?: { molar?: Record<string, number>; densityMolPerM3?: number; molarMassKgPerMol?: number };
+}
+
+/** The overall values of one state, SI molar, and what it is. */
+interface Extracted {
+  row: Record<string, unknown>;
+  phaseCount: number;
+  referenceState?: ReferenceState;
+  isStream: boolean;
+}
+
+function isObject(v: unknown): v is Record<string, unknown> {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+
+/** Reads a state, an equilibrium or a stream into SI molar row values. */
+function extract(input: unknown, index: number): Extracted {
+  if (!isObject(input)) {
+    throw new InputError({
+      input: `states[${index}]`,
+      unit: "-",
+      validRange: "a state (fluid.state, stateAtTP), a flash result or a stream",
+      received: input,
+    });
+  }
+  const stream = isObject(input.state) && typeof input.molarFlowMolPerS === "number";
+  const s = (stream ? input.state : input) as Record<string, unknown>;
+  if (typeof s.temperatureK !== "number" || typeof s.pressurePa !== "number") {
+    throw new InputError({
+      input: `states[${index}]`,
+      unit: "-",
+      validRange: "an object with temperatureK and pressurePa (a state, flash result or stream)",
+      received: Object.keys(s),
+    });
+  }
+  const phases = Array.isArray(s.phases) ? (s.phases as PhaseLike[]) : undefined;
+  const present = phases?.filter((p) => p.amount > 0) ?? [];
+  const molar = isObject(s.molar) ? (s.molar as Record<string, number | undefined>) : undefined;
+  // overall values: the state's own (fluid.state, stateAtTP), else summed over the phases (flash)
+  const overall = (key: string): number | undefined => {
+    if (molar && typeof molar[key] === "number") return molar[key];
+    if (present.length === 0) return undefined;
+    let sum = 0;
+    for (const p of present) {
+      const v = p.state?.molar?.[key];
+      if (typeof v !== "number") return undefined;
+      sum += p.amount * v;
+    }
+    return sum;
+  };
+  let volume = 0;
+  let mass = 0;
+  for (const p of present) {
+    volume += p.amount / (p.state?.densityMolPerM3 ?? NaN);
+    mass += p.amount * (p.state?.molarMassKgPerMol ?? NaN);
+  }
+  const density =
+    typeof s.densityMolPerM3 === "number" ? s.densityMolPerM3 : present.length ? 1 / volume : NaN;
+  const molarMass =
+    typeof s.molarMassKgPerMol === "number"
+      ? s.molarMassKgPerMol
+      : stream && typeof input.molarMassKgPerMol === "number"
+        ? input.molarMassKgPerMol
+        : mass;
+  const single = present.length <= 1;
+  const residual = isObject(s.residual) ? (s.residual as Record<string, number>) : undefined;
+  const kinds = present.map((p) => p.kind);
+  const phaseWord =
+    present.length > 1
+      ? kinds.map((k) => PHASE_WORDS[k] ?? k).join(" + ")
+      : typeof s.phase === "string"
+        ? (PHASE_WORDS[s.phase] ?? s.phase)
+        : kinds.length === 1
+          ? (PHASE_WORDS[kinds[0]] ?? kinds[0])
+          : undefined;
+  const vapour =
+    typeof s.vaporFraction === "number"
+      ? s.vaporFraction
+      : phases
+        ? present.filter((p) => p.kind === "vapor").reduce((a, p) => a + p.amount, 0)
+        : s.phase === "vapor"
+          ? 1
+          : s.phase === "liquid"
+            ? 0
+            : undefined;
+  const flow = stream ? (input.molarFlowMolPerS as number) : undefined;
+  const warnings = [
+    ...(Array.isArray(s.warnings) ? s.warnings : []),
+    ...(stream || !Array.isArray(input.warnings) || input === s ? [] : input.warnings),
+  ];
+  const row: Record<string, unknown> = {
+    name: stream && typeof input.name === "string" ? input.name : undefined,
+    T: s.temperatureK,
+    P: s.pressurePa,
+    phase: phaseWord,
+    vaporFraction: vapour,
+    density,
+    Z: typeof s.Z === "number" ? s.Z : s.pressurePa / (density * R * s.temperatureK),
+    h: overall("h"),
+    s: overall("s"),
+    u: overall("u"),
+    g: overall("g"),
+    cp: single ? overall("cp") : undefined,
+    cv: single ? overall("cv") : undefined,
+    w: single && typeof s.speedOfSoundMPerS === "number" ? s.speedOfSoundMPerS : undefined,
+    jouleThomson:
+      single && typeof s.jouleThomsonKPerPa === "number" ? s.jouleThomsonKPerPa : undefined,
+    hResidual: single ? residual?.h : undefined,
+    sResidual: single ? residual?.s : undefined,
+    molarFlow: flow !== undefined ? flow * 3.6 : undefined,
+    massFlow: flow !== undefined ? flow * molarMass * 3600 : undefined,
+    [MOLAR_MASS_KEY]: molarMass,
+    warnings,
+  };
+  const firstPhaseState = present[0]?.state as { referenceState?: ReferenceState } | undefined;
+  const referenceState = isObject(s.referenceState)
+    ? (s.referenceState as unknown as ReferenceState)
+    : firstPhaseState?.referenceState;
+  return { row, phaseCount: present.length, referenceState, isStream: stream };
+}
+
+/** The table column of a named column with its unit. */
+function namedColumn(
+  name: StateColumnName,
+  options: StateTableOptions,
+  nameLabel: string,
+): TableColumn {
+  const spec = NAMED[name];
+  if (spec === undefined) {
+    throw new InputError({
+      input: "options.columns",
+      unit: "-",
+      validRange: `column names ${Object.keys(NAMED).join(", ")}, or { key, label, value } objects`,
+      received: name,
+    });
+  }
+  if (spec.text) return { key: name, label: name === "name" ? nameLabel : spec.label, text: true };
+  const mass = options.basis === "mass" && spec.mass !== undefined;
+  const kind = spec.kind && mass ? massKind(spec.kind) : spec.kind;
+  const unit =
+    options.unitOf?.[name] ??
+    (options.units !== undefined && kind !== undefined
+      ? resolveUnit(kind, options.units as UnitChoice).id
+      : mass
+        ? spec.mass
+        : spec.molar);
+  const column: NumberColumn = {
+    key: name,
+    label: spec.label,
+    unit: unit === undefined || unit === "-" ? undefined : unit,
+    molarMassKey: MOLAR_MASS_KEY,
+  };
+  // an overridden unit keeps the column's digits unless the default counted decimals of degC
+  if (spec.decimals !== undefined && unit === (mass ? spec.mass : spec.molar))
+    column.decimals = spec.decimals;
+  else column.digits = spec.digits ?? 5;
+  return column;
+}
+
+function massKind(kind: QuantityKind): QuantityKind {
+  if (kind === "molarEnergy") return "massEnergy";
+  if (kind === "molarEntropy") return "massEntropy";
+  return kind;
+}
+
+/** The options every table format takes, without the state-table ones. */
+function tableOptionsOf(options: TableOptions): TableOptions {
+  const out: TableOptions = {};
+  if (options.caption !== undefined) out.caption = options.caption;
+  if (options.note !== undefined) out.note = options.note;
+  if (options.units !== undefined) out.units = options.units;
+  if (options.molarMassKgPerMol !== undefined) out.molarMassKgPerMol = options.molarMassKgPerMol;
+  if (options.missing !== undefined) out.missing = options.missing;
+  return out;
+}
+
+/** Same reference state? (compared field by field) */
+function sameReference(a: ReferenceState, b: ReferenceState): boolean {
+  return JSON.stringify(a) === JSON.stringify(b);
+}
+
+/** The note on the reference state of h, s, u, g of the rows. */
+function referenceNote(refs: readonly (ReferenceState | undefined)[]): string | undefined {
+  const known = refs.filter((r): r is ReferenceState => r !== undefined);
+  if (known.length === 0) return undefined;
+  const distinct: ReferenceState[] = [];
+  for (const r of known) if (!distinct.some((d) => sameReference(d, r))) distinct.push(r);
+  if (distinct.length === 1) return `h and s: ${describeReferenceState(distinct[0])}.`;
+  return (
+    `h and s are NOT comparable between these rows: they are on ${distinct.length} different ` +
+    `reference states (${distinct.map(describeReferenceState).join("; ")}). Put the fluids on ` +
+    "one zero with sharedReferenceState(fluids) before comparing them."
+  );
+}
+
+/**
+ * A table of states: fluid.state or stateAtTP results, flash results, or streams (with their
+ * flows). Values stay SI in the rows; the columns convert them.
+ * @example
+ * ```ts
+ * showTable(stateTable([inlet, outlet], { names: ["suction", "discharge"] }));
+ * rec.results(stateTable(states, { columns: ["name", "T", "P", "h"], unitOf: { P: "barg" } }), { caption: "States" });
+ * ```
+ */
+export function stateTable(
+  states: readonly TableState[],
+  options: StateTableOptions = {},
+): ResultTable {
+  if (!Array.isArray(states)) {
+    throw new InputError({
+      input: "states",
+      unit: "-",
+      validRange: "an array of states, flash results or streams",
+      received: states,
+    });
+  }
+  const names = options.names;
+  if (names !== undefined && (!Array.isArray(names) || names.length !== states.length)) {
+    throw new InputError({
+      input: "options.names",
+      unit: "-",
+      validRange: `${states.length} names, one per state`,
+      received: names,
+    });
+  }
+  const extracted = states.map((s, i) => extract(s, i));
+  const rows = extracted.map((e, i) => {
+    const row = { ...e.row };
+    if (names !== undefined) row.name = names[i];
+    return row;
+  });
+  const hasNames = rows.some((r) => r.name !== undefined);
+  const split = extracted.some((e) => e.phaseCount > 1);
+  const streams = extracted.some((e) => e.isStream);
+  const chosen: readonly (StateColumnName | CustomStateColumn)[] = options.columns ?? [
+    ...(hasNames ? (["name"] as const) : []),
+    "T",
+    "P",
+    "phase",
+    ...(split ? (["vaporFraction"] as const) : []),
+    "density",
+    "Z",
+    "h",
+    "s",
+    ...(streams ? (["molarFlow", "massFlow"] as const) : []),
+  ];
+  const nameLabel = options.nameLabel ?? "State";
+  const columns: TableColumn[] = chosen.map((c, j) => {
+    if (typeof c === "string") return namedColumn(c, options, nameLabel);
+    if (!isObject(c) || typeof c.value !== "function") {
+      throw new InputError({
+        input: `options.columns[${j}]`,
+        unit: "-",
+        validRange: "a column name or { key, label, value: (state, index) => value, ... }",
+        received: c,
+      });
+    }
+    const { value, ...column } = c;
+    rows.forEach((row, i) => {
+      row[column.key] = value(states[i], i);
+    });
+    return "text" in column ? column : { molarMassKey: MOLAR_MASS_KEY, ...column };
+  });
+  const showsEnergy = chosen.some((c) => c === "h" || c === "s" || c === "u" || c === "g");
+  const note = [
+    options.note,
+    options.referenceNote === false || !showsEnergy
+      ? undefined
+      : referenceNote(extracted.map((e) => e.referenceState)),
+  ]
+    .filter((t) => t !== undefined)
+    .join(" ");
+  return {
+    rows,
+    columns,
+    options: { ...tableOptionsOf(options), ...(note ? { note } : {}) },
+  };
+}
+
+/** What a step result looks like to {@link stepTable}. */
+interface StepLike {
+  kind: string;
+  inlets: readonly unknown[];
+  outlet: unknown;
+  powerW?: number;
+  dutyW?: number;
+  check?: { energyBalanceRelativeError?: number };
+  warnings?: readonly unknown[];
+}
+
+/** Options of {@link stepTable}. */
+export interface StepTableOptions extends TableOptions {
+  /** One name per step. Default: the inlet stream's name, else the step's kind. */
+  names?: readonly string[];
+  /** Unit of T, P or power/duty, e.g. { T: "degF", P: "barg", power: "MW" }. */
+  unitOf?: { T?: string; P?: string; power?: string };
+}
+
+/**
+ * One row per process step (valve, compressor, turbine, heater, ...): inlet and outlet T and P,
+ * the outlet's phases and vapour fraction, power or duty into the fluid, and the energy balance
+ * the step closed. For the streams of one step in full, use stateTable([...r.inlets, ...r.outlets]).
+ * @example showTable(stepTable([valveA, valveB], { names: ["PV-2104", "PV-4312"] }))
+ */
+export function stepTable(
+  steps: readonly StepLike[] | StepLike,
+  options: StepTableOptions = {},
+): ResultTable {
+  const list = (Array.isArray(steps) ? steps : [steps]) as readonly StepLike[];
+  list.forEach((r, i) => {
+    if (!isObject(r) || !Array.isArray(r.inlets) || r.inlets.length === 0 || !isObject(r.outlet)) {
+      throw new InputError({
+        input: `steps[${i}]`,
+        unit: "-",
+        validRange: "a process step result (valve, compressorStage, turbine, heater, ...)",
+        received: r,
+      });
+    }
+  });
+  if (options.names !== undefined && options.names.length !== list.length) {
+    throw new InputError({
+      input: "options.names",
+      unit: "-",
+      validRange: `${list.length} names, one per step`,
+      received: options.names,
+    });
+  }
+  const rows = list.map((r, i) => {
+    const inlet = extract(r.inlets[0], i).row;
+    const outlet = extract(r.outlet, i).row;
+    const inletName = (r.inlets[0] as { name?: unknown }).name;
+    return {
+      name: options.names?.[i] ?? (typeof inletName === "string" ? inletName : r.kind),
+      inletT: inlet.T,
+      inletP: inlet.P,
+      outletT: outlet.T,
+      outletP: outlet.P,
+      changeT: (outlet.T as number) - (inlet.T as number),
+      phase: outlet.phase,
+      vaporFraction: outlet.vaporFraction,
+      power: r.powerW,
+      duty: r.dutyW,
+      balance: r.check?.energyBalanceRelativeError,
+      warnings: [...(r.warnings ?? []), ...(outlet.warnings as unknown[])],
+    };
+  });
+  const T = options.unitOf?.T ?? "degC";
+  const P = options.unitOf?.P ?? "bar";
+  const W = options.unitOf?.power ?? "kW";
+  const num = (key: string, label: string, unit: string | undefined, digits: number) =>
+    ({ key, label, ...(unit ? { unit } : {}), digits }) as NumberColumn;
+  const columns: TableColumn[] = [
+    { key: "name", label: "Step", text: true },
+    num("inletT", "Inlet T", T, 5),
+    num("inletP", "Inlet P", P, 5),
+    num("outletT", "Outlet T", T, 5),
+    num("outletP", "Outlet P", P, 5),
+    { ...num("changeT", "Change of T", T === "degC" ? "K" : T, 4), difference: true },
+    { key: "phase", label: "Outlet phase", text: true },
+    num("vaporFraction", "Outlet vapour fraction", undefined, 4),
+    // power and duty only when a step has some (a valve has neither)
+    ...(rows.some((r) => !!r.power) ? [num("power", "Power into fluid", W, 5)] : []),
+    ...(rows.some((r) => !!r.duty) ? [num("duty", "Duty into fluid", W, 5)] : []),
+    num("balance", "Energy balance closed to (relative)", undefined, 1),
+  ];
+  return { rows, columns, options: tableOptionsOf(options) };
+}
