@@ -35,16 +35,16 @@ export type StateColumnName =
   | "massFlow";
 
 /** A column of your own: a table column plus how to get its SI value from a state. */
-export type CustomStateColumn = TableColumn & {
+export type CustomStateColumn<S = TableState> = TableColumn & {
   /** The cell's value from the state (SI, molar; mass units use the row's molar mass). */
-  value: (state: TableState, index: number) => unknown;
+  value: (state: S, index: number) => unknown;
 };
 
 /** What can be a row: a fluid.state result, a stateAtTP result, a flash result or a stream. */
 export type TableState = object;
 
 /** Options of {@link stateTable}. */
-export interface StateTableOptions extends TableOptions {
+export interface StateTableOptions<S = TableState> extends TableOptions {
   /** One name per state, shown first ("State" column). Default: streams' names, else none. */
   names?: readonly string[];
   /** Head of the name column. Default "State". */
@@ -53,7 +53,7 @@ export interface StateTableOptions extends TableOptions {
    * Columns in order, by name or your own. Default: name, T, P, phase, vapour fraction (when a
    * row has two or more phases), density, Z, h, s, and molar and mass flow for streams.
    */
-  columns?: readonly (StateColumnName | CustomStateColumn)[];
+  columns?: readonly (StateColumnName | CustomStateColumn<S>)[];
   /** Unit of a named column, overriding the default, e.g. { P: "barg", h: "kJ/kg" }. */
   unitOf?: Partial<Record<StateColumnName, string>>;
   /** "molar" (default: h in kJ/mol, s in J/(mol K)) or "mass" (kJ/kg, kJ/(kg K)). */
@@ -239,7 +239,7 @@ function extract(input: unknown, index: number): Extracted {
 /** The table column of a named column with its unit. */
 function namedColumn(
   name: StateColumnName,
-  options: StateTableOptions,
+  options: StateTableOptions<never>,
   nameLabel: string,
 ): TableColumn {
   const spec = NAMED[name];
@@ -302,7 +302,8 @@ function referenceNote(refs: readonly (ReferenceState | undefined)[]): string | 
   if (known.length === 0) return undefined;
   const distinct: ReferenceState[] = [];
   for (const r of known) if (!distinct.some((d) => sameReference(d, r))) distinct.push(r);
-  if (distinct.length === 1) return `h and s: ${describeReferenceState(distinct[0])}.`;
+  if (distinct.length === 1)
+    return `h and s: ${describeReferenceState(distinct[0]).replace(/\.?$/, ".")}`;
   return (
     `h and s are NOT comparable between these rows: they are on ${distinct.length} different ` +
     `reference states (${distinct.map(describeReferenceState).join("; ")}). Put the fluids on ` +
@@ -319,9 +320,9 @@ function referenceNote(refs: readonly (ReferenceState | undefined)[]): string | 
  * rec.results(stateTable(states, { columns: ["name", "T", "P", "h"], unitOf: { P: "barg" } }), { caption: "States" });
  * ```
  */
-export function stateTable(
-  states: readonly TableState[],
-  options: StateTableOptions = {},
+export function stateTable<S extends TableState>(
+  states: readonly S[],
+  options: StateTableOptions<S> = {},
 ): ResultTable {
   if (!Array.isArray(states)) {
     throw new InputError({
@@ -349,7 +350,7 @@ export function stateTable(
   const hasNames = rows.some((r) => r.name !== undefined);
   const split = extracted.some((e) => e.phaseCount > 1);
   const streams = extracted.some((e) => e.isStream);
-  const chosen: readonly (StateColumnName | CustomStateColumn)[] = options.columns ?? [
+  const chosen: readonly (StateColumnName | CustomStateColumn<S>)[] = options.columns ?? [
     ...(hasNames ? (["name"] as const) : []),
     "T",
     "P",
@@ -466,13 +467,16 @@ export function stepTable(
   const W = options.unitOf?.power ?? "kW";
   const num = (key: string, label: string, unit: string | undefined, digits: number) =>
     ({ key, label, ...(unit ? { unit } : {}), digits }) as NumberColumn;
+  // temperatures in degC or K to 0.01 K, like stateTable's; other units to 5 figures
+  const temperature = (key: string, label: string, unit: string): NumberColumn =>
+    unit === "degC" || unit === "K" ? { key, label, unit, decimals: 2 } : num(key, label, unit, 5);
   const columns: TableColumn[] = [
     { key: "name", label: "Step", text: true },
-    num("inletT", "Inlet T", T, 5),
+    temperature("inletT", "Inlet T", T),
     num("inletP", "Inlet P", P, 5),
-    num("outletT", "Outlet T", T, 5),
+    temperature("outletT", "Outlet T", T),
     num("outletP", "Outlet P", P, 5),
-    { ...num("changeT", "Change of T", T === "degC" ? "K" : T, 4), difference: true },
+    { ...temperature("changeT", "Change of T", T === "degC" ? "K" : T), difference: true },
     { key: "phase", label: "Outlet phase", text: true },
     num("vaporFraction", "Outlet vapour fraction", undefined, 4),
     // power and duty only when a step has some (a valve has neither)

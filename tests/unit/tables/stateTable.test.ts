@@ -77,7 +77,7 @@ describe("stateTable: one call, sensible columns and units", () => {
           label: "Ideal-gas density",
           unit: "kg/m3",
           digits: 4,
-          value: (s) => (s as typeof vapour).densityMolPerM3 * (s as typeof vapour).Z,
+          value: (s) => s.densityMolPerM3 * s.Z,
         },
       ],
       unitOf: { P: "barg" },
