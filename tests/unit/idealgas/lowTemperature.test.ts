@@ -160,9 +160,26 @@ describe("cold service: the light components reach 90-100 K", () => {
     }
   });
 
+  it("propylene below 250 K: the molecular route's cp (one methyl top), not the polynomial", () => {
+    // Poling et al.'s polynomial (stated range 50-1000 K) reads 2.6 % below the molecular route at
+    // 90-100 K; the molecular route's own uncertainty there is about 1.2 % (the torsion's recalled
+    // parameters), so the low segment follows the molecular route like ethane's and propane's
+    const corr = idealGasFromCorrelation("propylene");
+    const mol = idealGasFromMolecule("propylene");
+    expect(corr.validTemperatureK.min).toBe(50);
+    for (let t = 50; t <= 250; t += 5) {
+      const tol = t <= 200 ? 2e-4 : 7e-4;
+      expect(Math.abs(corr.cp(t) / mol.cp(t) - 1), `${t} K`).toBeLessThan(tol);
+    }
+    // 64.32 J/(mol K) at 298.15 K: from memory of the TRC tables (Chao & Zwolinski, J. Phys. Chem.
+    // Ref. Data 4 (1975) 251); the polynomial there, and the molecular route within 0.4 %
+    expect(Math.abs(corr.cp(298.15) / 64.32 - 1)).toBeLessThan(3e-3);
+    expect(Math.abs(mol.cp(298.15) / 64.32 - 1)).toBeLessThan(4e-3);
+  });
+
   it("ethane, propane, ethylene: no cp step at any segment joint (the fits go through the joint values)", () => {
     // a step would show as an error in finite-difference cv and in (P, h) inversions across it
-    for (const id of ["ethane", "propane", "ethylene", "hydrogen-sulfide"]) {
+    for (const id of ["ethane", "propane", "ethylene", "hydrogen-sulfide", "propylene"]) {
       const cp = getComponent(id).idealGasCp;
       if (cp.form !== "polynomial") throw new Error(`${id}: expected polynomial segments`);
       for (let k = 0; k + 1 < cp.segments.length; k++) {
