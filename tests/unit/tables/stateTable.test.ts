@@ -178,3 +178,25 @@ describe("stepTable: one row per process step", () => {
     expect(() => stepTable([{} as never])).toThrow(/steps\[0\]/);
   });
 });
+
+describe("a record takes the table in one call", () => {
+  it("rec.results(stateTable(...)) records the rows, the columns, the note and the warnings", async () => {
+    const { startRecord } = await import("../../../kernel-lib/src/records/calculationRecord.js");
+    const rec = startRecord({
+      question: "Which states does the FG-100 letdown pass through?",
+      site: "Corvid Point Refinery (invented)",
+      register: false,
+    });
+    const model = rec.model(gas, { label: "Peng-Robinson" });
+    const t = rec.results(stateTable([vapour, split], { names: ["feed", "chilled"] }), {
+      caption: "States",
+      model,
+    });
+    expect(t.rows).toBe(2);
+    expect(t.markdown).toContain("| State | T (°C) | P (bar) | Phase | Vapour fraction |");
+    expect(t.markdown).toContain("vapour + liquid");
+    expect(t.markdown).toContain("h and s: formation basis");
+    // the options given to results override the table's own caption
+    expect(t.markdown).toContain("T1. States");
+  });
+});
