@@ -10,7 +10,7 @@
  *
  * Browser-safe.
  */
-import { shiftedIdealGas } from "../idealgas/shiftedMixture.js";
+import { zeroAtIdealGas } from "../idealgas/shiftedMixture.js";
 import type { Component } from "../components/types.js";
 import { InputError } from "../errors.js";
 import { defineFluid } from "../fluid/defineFluid.js";
@@ -53,20 +53,9 @@ export const EXPLORER_REFERENCE_TEXT =
  * equilibria (both phases see the same shift of g at one T and composition).
  */
 export function onExplorerReferenceState(binding: FluidBinding): FluidBinding {
-  const inner = binding.idealGas;
-  const n = inner.components.length;
-  const dh = new Float64Array(n);
-  const ds = new Float64Array(n);
-  for (let k = 0; k < n; k++) {
-    const e = Array.from({ length: n }, (_, i) => (i === k ? 1 : 0));
-    const zero = inner.at(T0_K, P0_PA, e);
-    dh[k] = -zero.h;
-    ds[k] = -zero.s;
-  }
-  const idealGas = shiftedIdealGas(inner, dh, ds, EXPLORER_REFERENCE_STATE);
   return {
     model: binding.model,
-    idealGas,
+    idealGas: zeroAtIdealGas(binding.idealGas, T0_K, P0_PA),
     molarMassesKgPerMol: binding.molarMassesKgPerMol,
     ...(binding.departureMethod ? { departureMethod: binding.departureMethod } : {}),
   };
