@@ -17,7 +17,9 @@
 // Exported for the vitest wrapper (tests/unit/display/notebookPage.test.ts):
 //   notebookPageUnavailable() -> null or the reason the check cannot run here
 //   checkNotebookPage({ chromiumPath? }) -> [{ name, ok, message }]
-// CLI: node tests/browser/notebookPageCheck.mjs
+// CLI: node tests/browser/notebookPageCheck.mjs (ISOCHOR_TIMING=1 prints the time of each phase;
+// about 50 s on an idle machine: 4 s server, 12 s Chromium and page, 18 s first run with the kernel
+// start, 7 s refresh and re-run, 8 s shutdown)
 import { spawn } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import { existsSync, mkdirSync, rmSync, writeFileSync } from "node:fs";
@@ -200,10 +202,16 @@ export async function checkNotebookPage({
   server.stdout.on("data", (d) => (output += d));
   server.stderr.on("data", (d) => (output += d));
   const log = () => output.split("\n").slice(-30).join("\n");
+  const t0 = Date.now();
+  const mark = (what) => {
+    if (process.env.ISOCHOR_TIMING)
+      console.error(`${((Date.now() - t0) / 1000).toFixed(1)} s: ${what}`);
+  };
   let browser;
   try {
     const base = `http://127.0.0.1:${port}`;
     await waitForServer(`${base}/api/status?token=${token}`, server, log, timeoutMs);
+    mark("server up");
     browser = await launchChromium(chromiumPath, { width: 1100, height: 1600 });
     const page = await browser.context.newPage();
     const problems = [];
@@ -226,7 +234,9 @@ export async function checkNotebookPage({
     const url = `${base}/notebooks/${NOTEBOOK}?token=${token}`;
 
     await page.goto(url, { waitUntil: "load", timeout: timeoutMs });
+    mark("page loaded");
     await runAll(page, timeoutMs);
+    mark("first run settled");
     const first = await pageState(page);
     record(
       "first run: chart and explorer live from the inline runtime",
@@ -244,7 +254,9 @@ export async function checkNotebookPage({
       () => document.querySelectorAll("[data-isochor-chart]").length,
     );
     record("refresh: the page starts without outputs", reloaded === 0, `${reloaded} charts`);
+    mark("reloaded");
     await runAll(page, timeoutMs);
+    mark("second run settled");
     const second = await pageState(page);
     record(
       "re-run after refresh: outputs without inline runtime go live",
