@@ -7,7 +7,7 @@ export interface NotebookPageCheck {
 export interface CheckNotebookPageOptions {
   /** Chromium binary. Default /usr/lib/chromium/chromium. */
   chromiumPath?: string;
-  /** Longest wait for the server, the kernel and the outputs, ms. Default 40000. */
+  /** Longest wait for the server, the kernel and the outputs, ms. Default 90000 (generous: `npm test` runs it beside other tests). */
   timeoutMs?: number;
 }
 /** Null when the check can run here, otherwise the reason it cannot. */

@@ -173,7 +173,7 @@ function allLive(state) {
  */
 export async function checkNotebookPage({
   chromiumPath = DEFAULT_CHROMIUM_PATH,
-  timeoutMs = 40000,
+  timeoutMs = 90000,
 } = {}) {
   const results = [];
   const record = (name, ok, message = "") => results.push({ name, ok, message });

@@ -23,6 +23,6 @@ describe("charts and explorers in a real notebook page", () => {
       // every check ran: first run, refresh, re-run live, served by the server, no errors
       expect(results.length).toBe(5);
     },
-    150_000,
+    300_000,
   );
 });
