@@ -12,7 +12,9 @@
 //      again) and run all cells again: the new outputs carry no inline runtime, and each must load
 //      it from the server (/nbextensions/isochor/, display/pageLoader.ts) and go live, with a
 //      rendered <svg> or <canvas> in the chart;
-//   4. no request leaves 127.0.0.1 for anything of ours (no CDN), no page error.
+//   4. no request leaves 127.0.0.1 for anything of ours (no CDN), no page error;
+//   5. reload once more with the served folder blocked and run again: the outputs stay static and
+//      the notes under the chart and the explorer name the missing runtime (not trust).
 //
 // Exported for the vitest wrapper (tests/unit/display/notebookPage.test.ts):
 //   notebookPageUnavailable() -> null or the reason the check cannot run here
@@ -273,6 +275,44 @@ export async function checkNotebookPage({
       "no page error, nothing of ours outside the server",
       problems.length === 0,
       problems.join("\n"),
+    );
+
+    // a page whose server does not serve the runtime: the outputs stay static and say why
+    await page.route("**/nbextensions/isochor/**", (route) => route.abort("failed"));
+    await page.evaluate(() => {
+      Jupyter.notebook.set_dirty(false);
+      window.onbeforeunload = null;
+    });
+    await page.reload({ waitUntil: "load", timeout: timeoutMs });
+    await runAll(page, timeoutMs);
+    await page.waitForFunction(
+      () =>
+        Array.from(document.querySelectorAll(".isochor-explorer-note")).every((el) =>
+          /not on this page/.test(el.textContent ?? ""),
+        ),
+      undefined,
+      { timeout: timeoutMs },
+    );
+    mark("third run, without the served runtime, settled");
+    const third = await page.evaluate(() => ({
+      chartNotes: Array.from(document.querySelectorAll(".isochor-chart-note")).map(
+        (el) => el.textContent,
+      ),
+      explorerNotes: Array.from(document.querySelectorAll(".isochor-explorer-note")).map(
+        (el) => el.textContent,
+      ),
+      live: document.querySelectorAll('[data-isochor-chart="live"]').length,
+    }));
+    const namesCause = (text) =>
+      /not on this page/.test(text) && /could not load/.test(text) && !/trust/i.test(text);
+    record(
+      "without the served runtime: static, and the notes name the cause, not trust",
+      third.live === 0 &&
+        third.chartNotes.length >= 1 &&
+        third.chartNotes.every(namesCause) &&
+        third.explorerNotes.length >= 1 &&
+        third.explorerNotes.every(namesCause),
+      JSON.stringify(third),
     );
     await page.evaluate(() => Jupyter.notebook.kernel.kill());
   } catch (error) {

@@ -74,7 +74,8 @@ export const RUNTIME_MISSING_WAY_OUT =
  */
 function bootScript(id: string, runtimeWaitMs: number): string {
   return `(function () {
-  var id = ${JSON.stringify(id)}, waited = 0, asked = false, reason = "it did not arrive in time";
+  var id = ${JSON.stringify(id)}, waited = 0, asked = false, refused = false;
+  var reason = "it did not arrive in time";
   ${pageLoaderSource()}
   function ready() { return typeof window.vegaEmbed === "function"; }
   function giveUp(root) {
@@ -94,9 +95,10 @@ function bootScript(id: string, runtimeWaitMs: number): string {
         asked = true;
         isochorLoad(${JSON.stringify(RUNTIME_FILES.chart)}, ready).then(start, function (error) {
           reason = error.message;
+          refused = true;
         });
       }
-      if (waited >= ${runtimeWaitMs}) { giveUp(root); return; }
+      if (refused || waited >= ${runtimeWaitMs}) { giveUp(root); return; }
       waited += 100;
       setTimeout(start, 100);
       return;

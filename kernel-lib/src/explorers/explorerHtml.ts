@@ -56,11 +56,12 @@ export interface ExplorerHtmlOptions {
  */
 function bootScript(id: string, runtimeWaitMs: number): string {
   return `(function () {
-  var id = ${JSON.stringify(id)}, waited = 0, asked = false, reason = "it did not arrive in time";
+  var id = ${JSON.stringify(id)}, waited = 0, asked = false, refused = false;
+  var reason = "it did not arrive in time";
   ${pageLoaderSource()}
   function runtimeReady() { return typeof window.vegaEmbed === "function"; }
   function bundleReady() { return !!window.isochorWidgets; }
-  function failed(error) { reason = error.message; }
+  function failed(error) { reason = error.message; refused = true; }
   function giveUp(root) {
     var note = root.querySelector(".isochor-explorer-note");
     var text = runtimeReady()
@@ -84,7 +85,7 @@ function bootScript(id: string, runtimeWaitMs: number): string {
           isochorLoad(${JSON.stringify(RUNTIME_FILES.explorers)}, bundleReady),
         ]).then(start, failed);
       }
-      if (waited >= ${runtimeWaitMs}) { giveUp(root); return; }
+      if (refused || waited >= ${runtimeWaitMs}) { giveUp(root); return; }
       waited += 100;
       setTimeout(start, 100);
       return;

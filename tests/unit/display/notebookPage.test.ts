@@ -20,8 +20,8 @@ describe("charts and explorers in a real notebook page", () => {
       const results = await checkNotebookPage({ chromiumPath: process.env.ISOCHOR_CHROMIUM });
       const failed = results.filter((r) => !r.ok).map((r) => `${r.name}: ${r.message}`);
       expect(failed).toEqual([]);
-      // every check ran: first run, refresh, re-run live, served by the server, no errors
-      expect(results.length).toBe(5);
+      // every check ran: first run, refresh, re-run live, served by the server, no errors, notes
+      expect(results.length).toBe(6);
     },
     300_000,
   );
