@@ -5,7 +5,15 @@
 import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { debianPython, jupyterLocal, kernelDir, tslabBinary } from "./jupyter-env.mjs";
+import { pathToFileURL } from "node:url";
+import {
+  debianPython,
+  jupyterDataDir,
+  jupyterLocal,
+  kernelDir,
+  repoRoot,
+  tslabBinary,
+} from "./jupyter-env.mjs";
 
 export function installKernel({ quiet = false } = {}) {
   if (!existsSync(tslabBinary)) {
@@ -41,6 +49,30 @@ export function installKernel({ quiet = false } = {}) {
   return kernelDir;
 }
 
+/**
+ * Writes the chart runtime and the explorers' bundle under .jupyter-local/share/jupyter/
+ * nbextensions/isochor/, where the classic notebook serves them: outputs of a page that was
+ * refreshed or reopened on a running kernel load them from there (display/pageLoader.ts).
+ * Needs the build (kernel-lib/dist, widgets/dist); without it, says so and writes nothing.
+ */
+export async function installPageRuntime({ quiet = false } = {}) {
+  const writer = join(repoRoot, "kernel-lib", "dist", "display", "notebookRuntimeFiles.js");
+  if (!existsSync(writer)) {
+    console.warn(`page runtime not written: ${writer} is missing (run npm run build first)`);
+    return null;
+  }
+  const { writeNotebookRuntimeFiles } = await import(pathToFileURL(writer).href);
+  const { folder, bytes } = writeNotebookRuntimeFiles(jupyterDataDir);
+  if (!quiet) {
+    const sizes = Object.entries(bytes)
+      .map(([name, n]) => `${name} ${(n / 1024).toFixed(0)} KB`)
+      .join(", ");
+    console.log(`page runtime for refreshed pages: ${folder} (${sizes})`);
+  }
+  return folder;
+}
+
 if (import.meta.url === `file://${process.argv[1]}`) {
   installKernel();
+  await installPageRuntime();
 }

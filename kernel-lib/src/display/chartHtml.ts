@@ -7,7 +7,9 @@
  *                                                            shown until the live view is up
  *     <div class="isochor-chart-live"></div>                 vega-embed renders here
  *     <script type="application/json"> spec </script>        escaped for the script element
- *     <script> boot </script>                                waits for window.vegaEmbed, embeds
+ *     <script> boot </script>                                waits for window.vegaEmbed (loads it
+ *                                                            from the notebook server when the
+ *                                                            page lacks it: pageLoader.ts), embeds
  *     <figcaption> caption (escaped) </figcaption>
  *   </figure>
  *
@@ -17,7 +19,8 @@
  *
  * Marker for checkers: `data-isochor-chart` goes "static" -> "live" once vega-embed has rendered,
  * or "failed" (with a console error) if it could not. Untrusted notebooks and pages without
- * scripts keep the static SVG, which is the intended fallback.
+ * scripts keep the static SVG, which is the intended fallback; a page that runs scripts but cannot
+ * get the runtime keeps it too, with a note under it naming that cause and the way out.
  */
 import { randomBytes } from "node:crypto";
 import { InputError } from "../errors.js";
@@ -25,6 +28,7 @@ import { chartTitle } from "./chartTitle.js";
 import { escapeHtml, jsonForScript } from "./escapeHtml.js";
 import { renderSvg } from "./renderSvg.js";
 import { withTheme } from "../charts/theme.js";
+import { LOAD_AFTER_MS, pageLoaderSource, RUNTIME_FILES } from "./pageLoader.js";
 import { vegaRuntimeScript } from "./vegaRuntime.js";
 import type { VegaLiteSpec } from "./vegaLiteSpec.js";
 
@@ -53,18 +57,48 @@ function newChartId(): string {
   return "isochor-chart-" + randomBytes(6).toString("hex");
 }
 
+/** What a page without the runtime tells its reader, and the way out (shared with explorers). */
+export const RUNTIME_MISSING_NOTE =
+  "The chart runtime is not on this page: the kernel sends it inline with the first chart or " +
+  "explorer of its session, and this page was opened or reloaded after that. Loading it from " +
+  "the notebook server failed too: ";
+/** The way out, after the reason. */
+export const RUNTIME_MISSING_WAY_OUT =
+  ". Run resetDisplaySession() in a cell and re-run this one, or restart the kernel.";
+
 /**
  * Browser-side boot of one chart. Plain ES2017, no template literals with user text: the id is
  * generated here, the spec travels as JSON data in its own element and is never evaluated as code.
+ * Without the runtime on the page it loads it from the notebook server (pageLoader.ts) after a
+ * short grace time; when that fails too, a note under the chart names the cause.
  */
 function bootScript(id: string, runtimeWaitMs: number): string {
   return `(function () {
-  var id = ${JSON.stringify(id)}, waited = 0;
+  var id = ${JSON.stringify(id)}, waited = 0, asked = false, refused = false;
+  var reason = "it did not arrive in time";
+  ${pageLoaderSource()}
+  function ready() { return typeof window.vegaEmbed === "function"; }
+  function giveUp(root) {
+    var note = document.createElement("div");
+    note.className = "isochor-chart-note";
+    note.style.cssText = "font-size:0.85em;opacity:0.75";
+    note.textContent = "Static chart. " + ${JSON.stringify(RUNTIME_MISSING_NOTE)} + reason +
+      ${JSON.stringify(RUNTIME_MISSING_WAY_OUT)};
+    root.appendChild(note);
+    console.warn("isochor chart " + id + " stayed static: " + reason);
+  }
   function start() {
     var root = document.getElementById(id);
     if (!root || root.getAttribute(${JSON.stringify(CHART_STATE_ATTRIBUTE)}) !== "static") return;
-    if (typeof window.vegaEmbed !== "function") {
-      if (waited >= ${runtimeWaitMs}) return;
+    if (!ready()) {
+      if (!asked && waited >= ${LOAD_AFTER_MS}) {
+        asked = true;
+        isochorLoad(${JSON.stringify(RUNTIME_FILES.chart)}, ready).then(start, function (error) {
+          reason = error.message;
+          refused = true;
+        });
+      }
+      if (refused || waited >= ${runtimeWaitMs}) { giveUp(root); return; }
       waited += 100;
       setTimeout(start, 100);
       return;
@@ -75,6 +109,8 @@ function bootScript(id: string, runtimeWaitMs: number): string {
     window.vegaEmbed(live, spec, { actions: false, renderer: "svg" }).then(function () {
       root.querySelector(".isochor-chart-static").style.display = "none";
       live.style.display = "";
+      var stale = root.querySelector(".isochor-chart-note");
+      if (stale) stale.parentNode.removeChild(stale);
       root.setAttribute(${JSON.stringify(CHART_STATE_ATTRIBUTE)}, "live");
     }, function (error) {
       root.setAttribute(${JSON.stringify(CHART_STATE_ATTRIBUTE)}, "failed");

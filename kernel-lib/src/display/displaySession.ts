@@ -29,8 +29,9 @@ export function displaySession(): DisplaySession {
 
 /**
  * Starts a fresh display session: the next chart shown carries the inline runtime again.
- * Call it when the page was reloaded without restarting the kernel (charts then stay static
- * until the runtime is sent). The records runner calls it before each notebook.
+ * A page reloaded without restarting the kernel loads the runtime from its notebook server
+ * (pageLoader.ts); where the server does not serve it, call this and re-run the cell. The
+ * records runner calls it before each notebook.
  */
 export function resetDisplaySession(): void {
   const session = displaySession();

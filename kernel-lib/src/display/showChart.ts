@@ -1,6 +1,8 @@
 /**
  * Shows a chart in the current tslab cell, in one call and one output (text/html: nbconvert's HTML
- * export would strip image/svg+xml). The first chart of a kernel session carries the runtime.
+ * export would strip image/svg+xml). The first chart of a kernel session carries the runtime; a
+ * page that lacks it (refreshed or reopened on a running kernel) loads it from the notebook
+ * server, see pageLoader.ts.
  */
 import { chartHtml } from "./chartHtml.js";
 import { displaySession } from "./displaySession.js";
@@ -11,8 +13,8 @@ import type { VegaLiteSpec } from "./vegaLiteSpec.js";
 export interface ShowChartOptions {
   /**
    * Send the inline runtime with this chart even if it was sent before in this kernel session
-   * (use after reloading the page without restarting the kernel). Default: only with the first
-   * chart of the session.
+   * (for a page without a notebook server behind it that serves the runtime: see pageLoader.ts).
+   * Default: only with the first chart of the session.
    */
   includeRuntime?: boolean;
   /** Caption under the chart, as plain text (escaped). Default: none. */

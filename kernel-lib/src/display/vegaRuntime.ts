@@ -1,7 +1,8 @@
 /**
  * The inline chart runtime: vega, vega-lite and vega-embed minified builds, read from node_modules
  * and wrapped in one <script> element (about 830 KB). It is sent once per notebook session and once
- * per record, never per chart, and nothing is fetched from the network.
+ * per record, never per chart, and nothing is fetched from the internet (a page that missed the
+ * session's copy loads the same text from its own notebook server: pageLoader.ts).
  *
  * The builds are UMD bundles. In the classic notebook RequireJS is present (`define.amd`), and a UMD
  * bundle would then register an anonymous AMD module instead of setting `window.vega` (and

@@ -21,7 +21,12 @@
  * counts explorers too, and `data-isochor-explorer` goes "live" (or "failed").
  */
 import { randomBytes } from "node:crypto";
-import { CHART_STATE_ATTRIBUTE } from "../display/chartHtml.js";
+import {
+  CHART_STATE_ATTRIBUTE,
+  RUNTIME_MISSING_NOTE,
+  RUNTIME_MISSING_WAY_OUT,
+} from "../display/chartHtml.js";
+import { LOAD_AFTER_MS, pageLoaderSource, RUNTIME_FILES } from "../display/pageLoader.js";
 import { escapeHtml, jsonForScript } from "../display/escapeHtml.js";
 import { renderSvg } from "../display/renderSvg.js";
 import { InputError } from "../errors.js";
@@ -44,14 +49,43 @@ export interface ExplorerHtmlOptions {
   runtimeWaitMs?: number;
 }
 
+/**
+ * Browser-side boot of one explorer: waits for the chart runtime and the bundle; a page without
+ * them loads them from the notebook server (display/pageLoader.ts) after a short grace time, and
+ * when that fails the note under the explorer names the cause (not trust: this script runs).
+ */
 function bootScript(id: string, runtimeWaitMs: number): string {
   return `(function () {
-  var id = ${JSON.stringify(id)}, waited = 0;
+  var id = ${JSON.stringify(id)}, waited = 0, asked = false, refused = false;
+  var reason = "it did not arrive in time";
+  ${pageLoaderSource()}
+  function runtimeReady() { return typeof window.vegaEmbed === "function"; }
+  function bundleReady() { return !!window.isochorWidgets; }
+  function failed(error) { reason = error.message; refused = true; }
+  function giveUp(root) {
+    var note = root.querySelector(".isochor-explorer-note");
+    var text = runtimeReady()
+      ? "Static picture of the starting state: the explorers' code is not on this page (the kernel " +
+        "sends it with the first explorer of its session, and this page was opened or reloaded " +
+        "after that); loading it from the notebook server failed too: " + reason +
+        ${JSON.stringify(RUNTIME_MISSING_WAY_OUT)}
+      : "Static picture of the starting state. " + ${JSON.stringify(RUNTIME_MISSING_NOTE)} + reason +
+        ${JSON.stringify(RUNTIME_MISSING_WAY_OUT)};
+    if (note) note.textContent = text;
+    console.warn("isochor explorer " + id + " stayed static: " + reason);
+  }
   function start() {
     var root = document.getElementById(id);
     if (!root || root.getAttribute(${JSON.stringify(EXPLORER_STATE_ATTRIBUTE)}) !== "static") return;
-    if (!window.isochorWidgets || typeof window.vegaEmbed !== "function") {
-      if (waited >= ${runtimeWaitMs}) return;
+    if (!bundleReady() || !runtimeReady()) {
+      if (!asked && waited >= ${LOAD_AFTER_MS}) {
+        asked = true;
+        Promise.all([
+          isochorLoad(${JSON.stringify(RUNTIME_FILES.chart)}, runtimeReady),
+          isochorLoad(${JSON.stringify(RUNTIME_FILES.explorers)}, bundleReady),
+        ]).then(start, failed);
+      }
+      if (refused || waited >= ${runtimeWaitMs}) { giveUp(root); return; }
       waited += 100;
       setTimeout(start, 100);
       return;

@@ -2,7 +2,8 @@
  * Shows an explorer in the current tslab cell as ONE text/html output: the chart runtime and the
  * explorers' bundle (each only the first time in the kernel session, through display's session),
  * then the explorer fragment (explorerHtml). Everything the page needs is inline: it works
- * offline, in exported HTML and in the records.
+ * offline, in exported HTML and in the records. A page that missed the inline copies (refreshed
+ * or reopened on a running kernel) loads them from its notebook server (display/pageLoader.ts).
  */
 import { displaySession } from "../display/displaySession.js";
 import { displayHtml } from "../display/tslabDisplay.js";
@@ -16,7 +17,8 @@ import { widgetsBundleScript } from "./widgetsBundle.js";
 export interface ShowExplorerOptions extends ExplorerHtmlOptions {
   /**
    * Send the chart runtime and the bundle again even if this kernel session sent them before
-   * (after reloading the page without restarting the kernel). Default: only the first time.
+   * (for a page without a notebook server that serves them: display/pageLoader.ts). Default:
+   * only the first time.
    */
   includeScripts?: boolean;
 }

@@ -15,7 +15,8 @@ import { EXPLORER_MODULE, EXPLORER_MODULE_VERSION } from "./explorerState.js";
 
 const BUNDLE_FILE = "dist/isochor-widgets.js";
 
-let cached: { file: string; mtimeMs: number; script: string; key: string } | undefined;
+let cached:
+  { file: string; mtimeMs: number; source: string; script: string; key: string } | undefined;
 
 /** Where the built bundle is: the workspace package isochor-widgets, or beside kernel-lib. */
 export function widgetsBundlePath(): string {
@@ -39,10 +40,16 @@ export function widgetsBundlePath(): string {
 }
 
 /**
- * The bundle as one HTML <script> element and its once-per-page key (cached; re-read when the
- * file changes, e.g. after a rebuild during a kernel session).
+ * The bundle's JavaScript wrapped as it runs in the page (without the <script> element) and its
+ * once-per-page key (cached; re-read when the file changes, e.g. after a rebuild during a kernel
+ * session). The notebook server serves this same text (display/notebookRuntimeFiles.ts).
  */
-export function widgetsBundleScript(): { script: string; key: string } {
+export function widgetsBundleSource(): { source: string; key: string } {
+  const { source, key } = bundleEntry();
+  return { source, key };
+}
+
+function bundleEntry(): { source: string; script: string; key: string } {
   const file = widgetsBundlePath();
   const { mtimeMs } = fs.statSync(file);
   if (!cached || cached.file !== file || cached.mtimeMs !== mtimeMs) {
@@ -61,8 +68,18 @@ export function widgetsBundleScript(): { script: string; key: string } {
       file,
       mtimeMs,
       key,
+      source,
       script: `<script ${RUNTIME_MARKER_ATTRIBUTE}="${key}">\n${safe}\n</script>`,
     };
   }
-  return { script: cached.script, key: cached.key };
+  return cached;
+}
+
+/**
+ * The bundle as one HTML <script> element and its once-per-page key (cached; re-read when the
+ * file changes, e.g. after a rebuild during a kernel session).
+ */
+export function widgetsBundleScript(): { script: string; key: string } {
+  const { script, key } = bundleEntry();
+  return { script, key };
 }
