@@ -36,6 +36,7 @@ import { overallProperty } from "../../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium } from "../../phase/flash/types.js";
 import type { FlashOptions } from "../../phase/flash/flashTP.js";
 import type { FluidState } from "../../state/types.js";
+import { lnKOf, warmSplit } from "./warmSplit.js";
 
 /** The stagnation (vessel) state of the stream that flows. */
 export interface StagnationState {
@@ -68,6 +69,12 @@ export interface OrificeFluxOptions {
    * temperature guess of the hinted search. Affects the work only, not the result.
    */
   throatTemperatureRatioHint?: number;
+  /**
+   * ln(y_i / x_i) of a nearby two-phase throat (e.g. the previous time step's throatLnK): the
+   * first interior points of the screened search start their split from it. Affects the work
+   * only (the throat returned is always computed by the full flash).
+   */
+  throatLnKHint?: readonly number[];
   /** Options of the phase-equilibrium calculations (flashPS, flashTP). */
   flash?: FlashOptions;
 }
@@ -88,6 +95,8 @@ export interface OrificeFlux {
   readonly throatVaporFraction: number;
   /** True when the throat state has more than one phase (homogeneous equilibrium flow). */
   readonly twoPhaseThroat: boolean;
+  /** ln(y_i / x_i) at a two-phase throat (a warm start of the next search: throatLnKHint). */
+  readonly throatLnK?: readonly number[];
   readonly route: "single-phase" | "equilibrium";
   /** States evaluated along the isentrope. */
   readonly evaluations: number;
@@ -101,6 +110,8 @@ interface PathPoint {
   c: number;
   vaporFraction: number;
   phases: number;
+  /** ln(y_i / x_i) of a two-phase point. */
+  lnK?: readonly number[];
 }
 
 function checkStagnation(s: StagnationState, backPressurePa: number): void {
@@ -177,20 +188,20 @@ function equilibriumPointAtT(
  * within SPEC_TOLERANCE / 100 in at most SECANT_STEPS flashes, else undefined (the caller then
  * takes the (P, s) flash, which brackets).
  * slope.dsdT, when positive, replaces the frozen first slope and is updated with the secant's.
- * Used for the screened interior points only.
+ * Used for the screened interior points only; flashAt is the isothermal flash of the screened
+ * search (a warm-started split where one is known, see warmSplit.ts).
  */
 function secantPoint(
-  fluid: Fluid,
   s: StagnationState,
   P: number,
   guessK: number,
-  flash: FlashOptions,
+  flashAt: (T: number, P: number) => Equilibrium,
   slope: { dsdT: number },
 ): PathPoint | undefined {
   const scale = Math.max(Math.abs(s.entropyJPerMolK), R);
   const tol = SPEC_TOLERANCE / 100;
   let T0 = guessK;
-  let eq = fluid.flashTP(T0, P, s.x, flash);
+  let eq = flashAt(T0, P);
   let r0 = overallProperty(eq, "s") - s.entropyJPerMolK;
   if (Math.abs(r0) / scale <= tol) return pathPointOf(s, P, eq);
   let dsdT = slope.dsdT;
@@ -203,7 +214,7 @@ function secantPoint(
   let T1 = T0 - r0 / dsdT;
   for (let k = 0; k < SECANT_STEPS; k++) {
     if (!(T1 > 0.5 * guessK && T1 < 1.5 * guessK)) return undefined;
-    eq = fluid.flashTP(T1, P, s.x, flash);
+    eq = flashAt(T1, P);
     const r1 = overallProperty(eq, "s") - s.entropyJPerMolK;
     if (r1 !== r0) slope.dsdT = (r1 - r0) / (T1 - T0);
     if (Math.abs(r1) / scale <= tol) return pathPointOf(s, P, eq);
@@ -237,6 +248,7 @@ function pathPointOf(s: StagnationState, P: number, eq: Equilibrium): PathPoint 
           ? 0
           : vapor.amount,
     phases: eq.phases.length,
+    lnK: lnKOf(eq),
   };
 }
 
@@ -294,6 +306,7 @@ function fluxAlong(
   flash: FlashOptions = {},
   screen = false,
   tHint?: number,
+  lnKHint?: readonly number[],
 ): OrificeFlux & { points: PathPoint[] } {
   let evaluations = 0;
   let guess = s.temperatureK;
@@ -306,6 +319,21 @@ function fluxAlong(
   const searchFlash: FlashOptions = screen ? { ...flash, extraTrials: "none" } : flash;
   // ds/dT along the isobars of the latest secant (the first step of the next one)
   const slope = { dsdT: NaN };
+  // the screened interior points: the two-phase split from the latest two-phase point's
+  // K-values (warmSplit.ts: verified, no stability test), else the Wilson-start flash
+  let lnK: readonly number[] | undefined = screen ? lnKHint : undefined;
+  const screenedFlash = (T: number, P: number): Equilibrium => {
+    if (lnK !== undefined) {
+      const warm = warmSplit(fluid, T, P, s.x, lnK);
+      if (warm !== undefined) {
+        lnK = lnKOf(warm);
+        return warm;
+      }
+    }
+    const eq = fluid.flashTP(T, P, s.x, searchFlash);
+    lnK = lnKOf(eq);
+    return eq;
+  };
   const at = (P: number): PathPoint => {
     evaluations++;
     let p: PathPoint;
@@ -322,7 +350,7 @@ function fluxAlong(
       }
       if (!(g > 0)) g = guess;
       p =
-        secantPoint(fluid, s, P, g, searchFlash, slope) ??
+        secantPoint(s, P, g, screenedFlash, slope) ??
         equilibriumPoint(fluid, s, P, guess, searchFlash);
     } else p = equilibriumPoint(fluid, s, P, guess, searchFlash);
     guess = p.T;
@@ -356,6 +384,7 @@ function fluxAlong(
       throatDensityKgPerM3: p.rhoMass,
       throatVaporFraction: p.vaporFraction,
       twoPhaseThroat: p.phases > 1,
+      throatLnK: p.lnK,
       route,
       evaluations,
       points,
@@ -559,6 +588,7 @@ function equilibriumFlux(
       flash,
       screened,
       options.throatTemperatureRatioHint,
+      options.throatLnKHint,
     );
   if (!screen) return run(false);
   try {

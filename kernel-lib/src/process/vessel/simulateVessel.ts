@@ -576,6 +576,9 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   // evaluation takes the equilibrium route (the accepted-step check then changes the mode)
   const throatHints = new Map<number, number>();
   const throatTHints = new Map<number, number>();
+  const throatLnKHints = new Map<number, readonly number[]>();
+  // outlets (index; -1 the supply) whose flux took the equilibrium route in the "auto" mode
+  const equilibriumOutlets = new Set<number>();
   const fluxOf = (
     stag: StagnationState,
     back: number,
@@ -585,11 +588,17 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     const opts = {
       throatRatioHint: throatHints.get(which),
       throatTemperatureRatioHint: throatTHints.get(which),
+      throatLnKHint: throatLnKHints.get(which),
       pressureTolerance: 1e-6,
       flash: flashOptions,
     };
     let flux: OrificeFlux;
-    if (route === "auto" || idealGas) {
+    if (route === "auto" && equilibriumOutlets.has(which)) {
+      // the previous evaluation needed the equilibrium route (a two-phase expansion): the
+      // single-phase attempt of "auto" would fail its stability check again; the equilibrium
+      // route is the general one (it also covers a single-phase expansion)
+      flux = orificeMassFlux(fluid, stag, back, { ...opts, route: "equilibrium" });
+    } else if (route === "auto" || idealGas) {
       flux = orificeMassFlux(fluid, stag, back, { ...opts, route });
     } else {
       try {
@@ -601,6 +610,8 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     }
     if (flux.choked) throatHints.set(which, flux.throatPressurePa / stag.pressurePa);
     if (flux.choked) throatTHints.set(which, flux.throatTemperatureK / stag.temperatureK);
+    if (flux.throatLnK !== undefined) throatLnKHints.set(which, flux.throatLnK);
+    if (route === "auto" && flux.route === "equilibrium") equilibriumOutlets.add(which);
     return flux;
   };
   const cache: { key: string; ev: Evaluation }[] = [];
@@ -779,6 +790,9 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   );
   const p0 = first.contents.P;
   let progressSteps = 0;
+  // the evaluation at each accepted point, kept when the step is accepted (evaluating the
+  // points again after the run would start each contents solve from the run's last state)
+  const stepEvals = new Map<readonly number[], Evaluation>();
   for (let round = 0; round < 3; round++) {
     let phaseBoundary = false;
     const r = integrateDormandPrince((_t, yy) => evaluate(yy).dy, t, y, tEnd, {
@@ -787,6 +801,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       maxSteps: Math.max(1, maxSteps - accepted - rejected),
       events,
       onStep: (tt, yy) => {
+        stepEvals.set(yy, evaluate(yy));
         if (mode === "single-phase" && !singlePhaseHolds(yy)) {
           phaseBoundary = true;
           return false;
@@ -820,7 +835,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       for (let k = 1; k < n - 1; k++) {
         ts.push(r.t[k]);
         ys.push(r.y[k].slice());
-        recorded.push(evaluate(r.y[k]));
+        recorded.push(stepEvals.get(r.y[k]) ?? evaluate(r.y[k]));
       }
       accepted += r.acceptedSteps - 1;
       t = lo;
@@ -838,7 +853,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     for (let k = 1; k < r.t.length; k++) {
       ts.push(r.t[k]);
       ys.push(r.y[k].slice());
-      recorded.push(evaluate(r.y[k]));
+      recorded.push(stepEvals.get(r.y[k]) ?? evaluate(r.y[k]));
     }
     accepted += r.acceptedSteps;
     if (r.stoppedBecause === "event") {
