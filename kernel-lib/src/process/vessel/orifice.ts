@@ -35,6 +35,7 @@ import { minimizeBrent } from "../../numerics/brentMinimize.js";
 import { overallProperty } from "../../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium } from "../../phase/flash/types.js";
 import type { FlashOptions } from "../../phase/flash/flashTP.js";
+import { temperatureAtPS } from "../../state/inversions.js";
 import type { FluidState } from "../../state/types.js";
 import { lnKOf, warmSplit } from "./warmSplit.js";
 
@@ -133,9 +134,13 @@ function checkStagnation(s: StagnationState, backPressurePa: number): void {
   }
 }
 
-/** The single-phase isentrope point at P (state inversion at (P, s0)). */
+/**
+ * The single-phase isentrope point at P (state inversion at (P, s0), state/inversions.ts, without
+ * the stability test that fluid.temperatureAtPS adds as a warning: the single-phase route tests
+ * the throat and the middle of the expansion itself, see orificeMassFlux).
+ */
 function singlePhasePoint(fluid: Fluid, s: StagnationState, P: number, guessK: number): PathPoint {
-  const inv = fluid.temperatureAtPS(P, s.entropyJPerMolK, s.x, { initialGuessK: guessK });
+  const inv = temperatureAtPS(fluid, P, s.entropyJPerMolK, s.x, { initialGuessK: guessK });
   const st: FluidState = inv.state;
   return {
     P,
@@ -289,6 +294,14 @@ export function isStableSinglePhase(
 const SCREEN_AGREEMENT = 1e-9;
 /** The (P, s) flash's default specification tolerance (phase/flash/stateFunctionFlash.ts). */
 const SPEC_TOLERANCE = 1e-9;
+
+/**
+ * The relative noise of G at the points of the choke search (the isentrope's entropy met to
+ * 1e-11 relative, the flashes' fugacities to 1e-11): a parabola vertex whose G is below the
+ * middle point's by less than this is accepted as the maximum (the flux there is then exact to
+ * about this, as G is flat at its maximum).
+ */
+const VERTEX_NOISE = 1e-9;
 
 /** Rounds of three points of the hinted choke search before Brent's minimisation. */
 const HINT_ROUNDS = 3;
@@ -444,7 +457,9 @@ function fluxAlong(
       if (g1 >= g0 && g1 >= g2) {
         const pv = at(Math.exp(lnV));
         const gv = pv.rhoMass * velocity(s, pv);
-        if (gv >= g1 && Math.abs(lnV - lnH) <= d) return result(pv, true);
+        // (G at the vertex may fall below G at the middle point by the noise of the
+        // isentrope's points, about 1e-10 relative, when the two are within ~1e-5 in ln P)
+        if (gv >= g1 * (1 - VERTEX_NOISE) && Math.abs(lnV - lnH) <= d) return result(pv, true);
         break;
       }
       if (!(lnV > lo + d && lnV < hi - d)) break;

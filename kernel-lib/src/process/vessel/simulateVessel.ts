@@ -664,12 +664,16 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     return ev;
   };
 
-  // single-phase assumptions still hold at y?
-  const singlePhaseHolds = (y: readonly number[]): boolean => {
+  // single-phase assumptions still hold at y? `screened`: the stability tests from Wilson's
+  // starts only (flashTP extraTrials "none"), for the bisection of a phase boundary: a "false"
+  // is still a proof (a verified split, or a more stable root), a "true" is verified afterwards
+  const wilsonOnly: typeof flashOptions = { ...flashOptions, extraTrials: "none" };
+  const singlePhaseHolds = (y: readonly number[], screened = false): boolean => {
     if (idealGas) return true;
     const ev = evaluate(y);
     const c = ev.contents;
-    if (!isStableSinglePhase(fluid, c.T, c.P, c.z, c.rho, flashOptions)) return false;
+    const testFlash = screened ? wilsonOnly : flashOptions;
+    if (!isStableSinglePhase(fluid, c.T, c.P, c.z, c.rho, testFlash)) return false;
     for (let k = 0; k < ev.outletFlux.length; k++) {
       const f = ev.outletFlux[k];
       if (f === undefined) continue;
@@ -685,7 +689,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
           f.throatPressurePa,
           stag.x,
           rhoThroat,
-          flashOptions,
+          testFlash,
         )
       ) {
         return false;
@@ -825,12 +829,24 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     if (phaseBoundary) {
       // the last accepted point is past the boundary: bisect on the dense output
       const n = r.t.length;
+      // (the trials screened by Wilson's starts, the point found then verified with the full
+      // tests; if that fails, the bisection is repeated below it with the full tests)
+      const bisect = (a: number, b: number, screened: boolean): number => {
+        let lo = a;
+        let hi = b;
+        for (let k = 0; k < 14; k++) {
+          const mid = 0.5 * (lo + hi);
+          if (singlePhaseHolds(r.at(mid), screened)) lo = mid;
+          else hi = mid;
+        }
+        return lo;
+      };
       let lo = r.t[n - 2];
-      let hi = r.t[n - 1];
-      for (let k = 0; k < 14; k++) {
-        const mid = 0.5 * (lo + hi);
-        if (singlePhaseHolds(r.at(mid))) lo = mid;
-        else hi = mid;
+      if ((flashOptions.extraTrials ?? "auto") === "none") lo = bisect(lo, r.t[n - 1], false);
+      else {
+        const screenedLo = bisect(lo, r.t[n - 1], true);
+        if (screenedLo === lo || singlePhaseHolds(r.at(screenedLo))) lo = screenedLo;
+        else lo = bisect(lo, screenedLo, false);
       }
       for (let k = 1; k < n - 1; k++) {
         ts.push(r.t[k]);
