@@ -134,6 +134,7 @@ export function contentsFlash(
     guessP: number,
   ): Equilibrium | undefined => {
     let start = last ?? { single: true };
+    let warmK: readonly number[] | undefined;
     let T = guessT;
     let P = guessP;
     for (let attempt = 0; attempt < 2; attempt++) {
@@ -162,8 +163,15 @@ export function contentsFlash(
         if (eq === undefined) return undefined;
         T = eq.temperatureK;
         P = eq.pressurePa;
+        warmK = lnKOf(eq);
       }
-      const full = fluid.flashTP(T, P, z, flash);
+      // the full flash (all stability tests), warm-started from the trial's split
+      const full = fluid.flashTP(
+        T,
+        P,
+        z,
+        warmK === undefined ? flash : { ...flash, initialLnK: warmK },
+      );
       const r = residual(full, u, 1 / rho);
       if (Math.max(Math.abs(r[0]), Math.abs(r[1])) <= specTolerance) return full;
       const lnK = lnKOf(full);

@@ -61,8 +61,9 @@ export interface OrificeFluxOptions {
   pressureTolerance?: number;
   /**
    * A guess of the choking pressure ratio P_throat / P0 (e.g. from the previous time step): the
-   * equilibrium route then searches around it first (within +-3 % in ln P), and falls back to the
-   * full search when the maximum is not inside.
+   * equilibrium route then searches around it first (within +-3 % in ln P), the single-phase
+   * route brackets the choke within +-1 % of it, and both fall back to the full search when the
+   * choke is not inside.
    */
   throatRatioHint?: number;
   /**
@@ -170,8 +171,9 @@ function equilibriumPoint(
 
 /**
  * The equilibrium isentrope point at P from the isothermal flash at a known temperature T of the
- * isentrope (the screened search's throat): accepted when its entropy meets s0 within
- * SPEC_TOLERANCE (relative to max(|s0|, R), the default of the (P, s) flash), else undefined.
+ * isentrope (the screened search's throat; warm-started from the screened point's K-values,
+ * FlashOptions.initialLnK): accepted when its entropy meets s0 within SPEC_TOLERANCE (relative
+ * to max(|s0|, R), the default of the (P, s) flash), else undefined.
  */
 function equilibriumPointAtT(
   fluid: Fluid,
@@ -179,8 +181,9 @@ function equilibriumPointAtT(
   P: number,
   T: number,
   flash: FlashOptions,
+  lnK?: readonly number[],
 ): PathPoint | undefined {
-  const eq = fluid.flashTP(T, P, s.x, flash);
+  const eq = fluid.flashTP(T, P, s.x, lnK === undefined ? flash : { ...flash, initialLnK: lnK });
   const scale = Math.max(Math.abs(s.entropyJPerMolK), R);
   const residual = Math.abs(overallProperty(eq, "s") - s.entropyJPerMolK) / scale;
   return residual <= SPEC_TOLERANCE ? pathPointOf(s, P, eq) : undefined;
@@ -375,7 +378,7 @@ function fluxAlong(
     if (screen) {
       evaluations++;
       p =
-        equilibriumPointAtT(fluid, s, ps.P, ps.T, flash) ??
+        equilibriumPointAtT(fluid, s, ps.P, ps.T, flash, ps.lnK) ??
         equilibriumPoint(fluid, s, ps.P, ps.T, flash);
       points.push(p);
       const gScreen = ps.rhoMass * velocity(s, ps);
@@ -414,6 +417,16 @@ function fluxAlong(
     };
     let upper = ln0 - 1e-9;
     let lower = NaN;
+    if (hint !== undefined && hint > 0 && hint < 1) {
+      // a bracket of +-1 % around the hinted choke (the previous step's), when it brackets
+      const lnH = ln0 + Math.log(hint);
+      const a = lnH - 0.01;
+      const b = lnH + 0.01;
+      if (a > lnB && b < upper && f(b) <= 0 && f(a) > 0) {
+        const root = findRootBrent(f, a, b, { tolerance: relTol });
+        return result(at(Math.exp(root.value)), true);
+      }
+    }
     for (const r of [0.75, 0.55, 0.4, 0.25, 0.12, 0.05, 0.02, 0.005]) {
       const lnP = ln0 + Math.log(r);
       if (lnP <= lnB) break;
@@ -547,12 +560,32 @@ export function orificeMassFlux(
     return r;
   }
   if (route === "single-phase") {
-    const { points: _p, ...r } = fluxAlong(fluid, stagnation, backPressurePa, route, relTol);
+    const { points: _p, ...r } = fluxAlong(
+      fluid,
+      stagnation,
+      backPressurePa,
+      route,
+      relTol,
+      options.throatRatioHint,
+      {},
+      false,
+      options.throatTemperatureRatioHint,
+    );
     return r;
   }
   let single: (OrificeFlux & { points: PathPoint[] }) | undefined;
   try {
-    single = fluxAlong(fluid, stagnation, backPressurePa, "single-phase", relTol);
+    single = fluxAlong(
+      fluid,
+      stagnation,
+      backPressurePa,
+      "single-phase",
+      relTol,
+      options.throatRatioHint,
+      {},
+      false,
+      options.throatTemperatureRatioHint,
+    );
   } catch (e) {
     if (!(e instanceof SolverError || e instanceof InputError)) throw e;
     single = undefined;
