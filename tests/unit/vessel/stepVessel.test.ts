@@ -54,6 +54,29 @@ describe("vessel step of isochor step", () => {
     expect(pathOf({ ...request, inlet: { T: 300 } })).toBe("$.inlet.P");
     expect(pathOf({ ...request, components: ["unobtainium"] })).toMatch(/^\$\.components/);
     expect(pathOf({ ...request, step: { ...step, until: {} } })).toBe("$.step.until");
+    // the bad-input catalogue's vessel cases, through the request (tests/unit/badInput)
+    const out = step.outlet;
+    expect(pathOf({ ...request, step: { ...step, volume: -2 } })).toBe("$.step.volume");
+    expect(pathOf({ ...request, step: { ...step, outlet: { ...out, diameter: 2 } } })).toBe(
+      "$.step.outlet.diameter",
+    );
+    expect(pathOf({ ...request, step: { ...step, outlet: { ...out, backPressure: 50e5 } } })).toBe(
+      "$.step.outlet.backPressure",
+    );
+    for (const cd of [0, -0.5, 1.2]) {
+      expect(
+        pathOf({ ...request, step: { ...step, outlet: { ...out, dischargeCoefficient: cd } } }),
+      ).toBe("$.step.outlet.dischargeCoefficient");
+    }
+    expect(pathOf({ ...request, step: { ...step, wall: { thickness: -0.01 } } })).toBe(
+      "$.step.wall.thickness",
+    );
+    expect(pathOf({ ...request, step: { ...step, wall: { thickness: 0.01, mass: -5 } } })).toBe(
+      "$.step.wall.mass",
+    );
+    expect(pathOf({ ...request, step: { ...step, until: { time: -1 } } })).toBe(
+      "$.step.until.time",
+    );
   });
 
   it("runs through isochor step: JSON by default, CSV with --csv and the cautions on stderr", async () => {

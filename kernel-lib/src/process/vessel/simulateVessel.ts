@@ -92,6 +92,27 @@ function checkComposition(input: string, x: readonly number[] | undefined, n: nu
   return x.map((v) => v / s);
 }
 
+/** The wall's mass (kg) and heat capacity (J/(kg K)), every field checked. */
+function checkWall(
+  w: VesselSpec["wall"],
+  innerAreaM2: number,
+): { massKg: number; heatCapacityJPerKgK: number } {
+  if (typeof w !== "object" || w === null) {
+    bad("spec.wall", "-", "{ thicknessM, densityKgPerM3?, heatCapacityJPerKgK?, massKg? }", w);
+  }
+  if (!(w.thicknessM > 0)) bad("spec.wall.thicknessM", "m", "> 0", w.thicknessM);
+  const rhoW = w.densityKgPerM3 ?? 7850;
+  if (!(rhoW > 0)) bad("spec.wall.densityKgPerM3", "kg/m3", "> 0", rhoW);
+  const cp = w.heatCapacityJPerKgK ?? 470;
+  if (!(cp > 0)) bad("spec.wall.heatCapacityJPerKgK", "J/(kg K)", "> 0", cp);
+  if (w.massKg !== undefined && !(w.massKg > 0)) bad("spec.wall.massKg", "kg", "> 0", w.massKg);
+  const massKg = w.massKg ?? rhoW * w.thicknessM * innerAreaM2;
+  if (!(massKg > 0 && Number.isFinite(massKg))) {
+    bad("spec.wall.massKg", "kg", "> 0 (thickness x inner area x density)", massKg);
+  }
+  return { massKg, heatCapacityJPerKgK: cp };
+}
+
 function sum(a: readonly number[]): number {
   let s = 0;
   for (const v of a) s += v;
@@ -264,6 +285,8 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
 
   // ---- heat -------------------------------------------------------------------------------
   const heat = spec.heat ?? "adiabatic";
+  // a wall given is checked even when the run is adiabatic (where it is not used)
+  if (spec.wall !== undefined) checkWall(spec.wall, geometry.innerAreaM2);
   let wallHeat: WallHeatSpec | undefined;
   let transport: ((state: FluidState) => ContentsTransport) | undefined;
   let wallMass = 0;
@@ -281,13 +304,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
         "a wall (thicknessM, density, heat capacity) when heat is exchanged through it",
         w,
       );
-    if (!(w.thicknessM > 0)) bad("spec.wall.thicknessM", "m", "> 0", w.thicknessM);
-    const rhoW = w.densityKgPerM3 ?? 7850;
-    if (!(rhoW > 0)) bad("spec.wall.densityKgPerM3", "kg/m3", "> 0", rhoW);
-    wallCp = w.heatCapacityJPerKgK ?? 470;
-    if (!(wallCp > 0)) bad("spec.wall.heatCapacityJPerKgK", "J/(kg K)", "> 0", wallCp);
-    wallMass = w.massKg ?? rhoW * w.thicknessM * geometry.innerAreaM2;
-    if (!(wallMass > 0)) bad("spec.wall.massKg", "kg", "> 0", wallMass);
+    ({ massKg: wallMass, heatCapacityJPerKgK: wallCp } = checkWall(w, geometry.innerAreaM2));
     if (w.massKg === undefined) {
       warnings.push({
         code: "model-limitation",
@@ -360,7 +377,12 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     until !== null &&
     (until.pressurePa !== undefined || until.timeS !== undefined)
   )) {
-    bad("spec.until", "-", "{ pressurePa } and/or { timeS }", until);
+    bad(
+      "spec.until",
+      "-",
+      "a stop criterion: { pressurePa } (target pressure, Pa) and/or { timeS } (s)",
+      until,
+    );
   }
   const pbMax = outlets.length > 0 ? Math.max(...outlets.map((o) => o.backPressurePa)) : 0;
   if (until.pressurePa !== undefined) {
@@ -382,8 +404,8 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       );
     }
   }
-  if (until.timeS !== undefined && !(until.timeS > 0))
-    bad("spec.until.timeS", "s", "> 0", until.timeS);
+  if (until.timeS !== undefined && !(until.timeS > 0 && Number.isFinite(until.timeS)))
+    bad("spec.until.timeS", "s", "> 0 and finite", until.timeS);
   const tEnd = until.timeS ?? options.maxTimeS ?? 1e6;
   const mdmt = spec.minimumDesignMetalTemperatureK;
   if (mdmt !== undefined && !(mdmt > 0))
