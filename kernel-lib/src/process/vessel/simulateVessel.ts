@@ -923,7 +923,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     timeS: ts,
     pressurePa: recorded.map((e) => e.contents.P),
     temperatureK: recorded.map((e) => e.contents.T),
-    wallTemperatureK: ys.map((v) => v[nc + 1]),
+    wallTemperatureK: wallHeat === undefined ? undefined : ys.map((v) => v[nc + 1]),
     massKg: recorded.map((e) => e.contents.massKg),
     massFlowKgPerS: recorded.map((e) => e.massFlowOut),
     liquidFraction: recorded.map((e) => e.contents.liquidFraction),
@@ -934,10 +934,11 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   let iMin = 0;
   let iMax = 0;
   let iwMin = 0;
+  const wallT = series.wallTemperatureK;
   for (let k = 1; k < ts.length; k++) {
     if (series.temperatureK[k] < series.temperatureK[iMin]) iMin = k;
     if (series.temperatureK[k] > series.temperatureK[iMax]) iMax = k;
-    if (series.wallTemperatureK[k] < series.wallTemperatureK[iwMin]) iwMin = k;
+    if (wallT !== undefined && wallT[k] < wallT[iwMin]) iwMin = k;
   }
   const phaseChanges: VesselResult["phaseChanges"][number][] = [];
   for (let k = 1; k < ts.length; k++) {
@@ -958,11 +959,14 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   const cautions = [...VESSEL_CAUTIONS];
   if (wallHeat === undefined) {
     cautions.push(
-      "Adiabatic run: the wall is not modelled (its temperature is shown constant); the contents' minimum temperature is the bound to compare with the metal's limits, and heat from the wall would make the contents warmer than shown.",
+      "Adiabatic run: the wall is not modelled (no wall temperature is reported); the contents' minimum temperature is the bound to compare with the metal's limits, and heat from the wall would make the contents warmer than shown.",
     );
   }
   if (mdmt !== undefined) {
-    const coldest = Math.min(series.temperatureK[iMin], series.wallTemperatureK[iwMin]);
+    const coldest =
+      wallT === undefined
+        ? series.temperatureK[iMin]
+        : Math.min(series.temperatureK[iMin], wallT[iwMin]);
     if (coldest < mdmt) {
       cautions.unshift(
         `The minimum temperature ${coldest.toFixed(1)} K (${(coldest - 273.15).toFixed(1)} degC) is BELOW the minimum design metal temperature ${mdmt.toFixed(1)} K (${(mdmt - 273.15).toFixed(1)} degC): refer to the responsible licensed engineer before any blowdown of this vessel.`,
@@ -978,12 +982,16 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   return {
     kind: filling ? "filling" : "depressurisation",
     series,
-    minimum: {
-      temperatureK: series.temperatureK[iMin],
-      timeS: ts[iMin],
-      wallTemperatureK: series.wallTemperatureK[iwMin],
-      wallTimeS: ts[iwMin],
-    },
+    minimum:
+      wallT === undefined
+        ? { temperatureK: series.temperatureK[iMin], timeS: ts[iMin] }
+        : {
+            temperatureK: series.temperatureK[iMin],
+            timeS: ts[iMin],
+            wallTemperatureK: wallT[iwMin],
+            wallTimeS: ts[iwMin],
+          },
+    wallModelled: wallT !== undefined,
     maximum: { temperatureK: series.temperatureK[iMax], timeS: ts[iMax] },
     timeToTargetS: stoppedBecause === "target-pressure" ? ts[ts.length - 1] : undefined,
     stoppedBecause,
