@@ -3,11 +3,10 @@
  * from 100 bar and 330 K (one phase there; it crosses the dew line within two seconds) to 7 barg
  * through a 50 mm orifice (Cd 0.8) from a vertical vessel of 1.5 m diameter and 4 m shell with
  * 2:1 heads: every step with the (u, v) equilibrium of the contents and the homogeneous
- * equilibrium choke. The issue's goal is below 2 s per run; a call took about 4 s of CPU
- * (December 2026, this 2-core machine under load: most of it in the stability tests of the
- * isothermal flashes inside the (P, s) flashes of the choke search), 0.59 of that since the
- * screened choke search (DEVELOPERS.md, "Blowdown benchmark"), so the case measures a few
- * calls only (`npm run bench -- blowdown --processes 1`).
+ * equilibrium choke. The issue's goal is below 2 s per run; a call took about 3 s of CPU at
+ * efeaf7f and about 1.4 s since the warm-started trial splits (December 2026, this 2-core
+ * machine; DEVELOPERS.md, "Blowdown benchmark"), so the case measures a few calls only
+ * (`npm run bench -- blowdown --processes 1`).
  */
 import { defineFluid } from "../../src/fluid/defineFluid.js";
 import { simulateVessel } from "../../src/process/vessel/simulateVessel.js";

@@ -1,7 +1,8 @@
 /**
  * Time histories of a vessel depressurisation or filling (process/vessel/simulateVessel.ts):
  * pressure against time above, contents and wall temperatures against time below, with the
- * minimum design metal temperature as a horizontal rule and the coldest points marked; and the
+ * minimum design metal temperature as a horizontal rule and the coldest points marked (an
+ * adiabatic run has no wall line: the panel says "wall: not modelled (adiabatic)"); and the
  * path of the contents on the P-T phase envelope. The caution of the result travels in the
  * subtitle: a chart is copied into reports without its notebook.
  */
@@ -27,6 +28,9 @@ export interface VesselHistoryOptions extends BaseChartOptions {
 
 const SHORT_CAUTION =
   "A model result: MDMT, relief and flare design are decided under site codes and standards by licensed engineers.";
+
+/** The note on the temperature panel of an adiabatic run. */
+export const WALL_NOT_MODELLED = "wall: not modelled (adiabatic)";
 
 function checkResult(result: VesselResult): void {
   if (!(result && result.series && Array.isArray(result.series.timeS))) {
@@ -68,10 +72,11 @@ export function vesselHistoryChart(
   s.timeS.forEach((t, k) => {
     tRows.push({ t, y: plotValue(s.temperatureK[k], tAxis.unit), series: "contents" });
   });
-  const walled = result.wallMassKg !== undefined;
-  if (walled) {
+  // an adiabatic run has no wall temperature (not modelled): no wall line, a note instead
+  const wallT = s.wallTemperatureK;
+  if (wallT !== undefined) {
     s.timeS.forEach((t, k) => {
-      tRows.push({ t, y: plotValue(s.wallTemperatureK[k], tAxis.unit), series: "wall" });
+      tRows.push({ t, y: plotValue(wallT[k], tAxis.unit), series: "wall" });
     });
   }
   const mdmt = options.minimumDesignMetalTemperatureK ?? result.minimumDesignMetalTemperatureK;
@@ -82,10 +87,11 @@ export function vesselHistoryChart(
       label: "coldest contents",
     },
   ];
-  if (walled) {
+  const { wallTemperatureK: coldWall, wallTimeS: coldWallTime } = result.minimum;
+  if (coldWall !== undefined && coldWallTime !== undefined) {
     marks.push({
-      t: result.minimum.wallTimeS,
-      y: plotValue(result.minimum.wallTemperatureK, tAxis.unit),
+      t: coldWallTime,
+      y: plotValue(coldWall, tAxis.unit),
       label: "coldest wall",
     });
   }
@@ -110,6 +116,13 @@ export function vesselHistoryChart(
       encoding: { x: timeEnc, y: positionEncoding("y", tAxis), tooltip: [{ field: "label" }] },
     },
   ];
+  if (wallT === undefined) {
+    tLayers.push({
+      data: { values: [{ note: WALL_NOT_MODELLED }] },
+      mark: { type: "text", align: "right", baseline: "top", dx: -4, dy: 4, color: INK.guide },
+      encoding: { x: { value: width }, y: { value: 0 }, text: { field: "note" } },
+    });
+  }
   if (mdmt !== undefined) {
     tLayers.push({
       data: { values: [{ y: plotValue(mdmt, tAxis.unit), label: "MDMT" }] },

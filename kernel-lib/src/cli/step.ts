@@ -69,8 +69,9 @@ Vessel depressurisation or filling: "step": {"kind": "vessel", "volume" (m3), "w
 "outlet": {"diameter" (m), "dischargeCoefficient", "backPressure" (Pa)}, "heat": "adiabatic" |
 {...}, "until": {"P": Pa} | {"time": s}} with "inlet" the initial contents (T, P; no flow).
 Response: "series": {"time" [s], "P" [Pa], "T" [K], "Twall" [K], "mass" [kg], "massFlow" [kg/s],
-"liquidFraction" [-]}, "minimum": {"T", "time", "Twall"}, "warnings", "cautions"; with --csv the
-series as CSV on standard output and the cautions on standard error. The result is a model:
+"liquidFraction" [-]}, "minimum": {"T", "time", "Twall"}, "wallModelled", "warnings", "cautions"
+(adiabatic: the wall is not modelled, "Twall" is null and the CSV's Twall_K column empty); with
+--csv the series as CSV on standard output and the cautions on standard error. The result is a model:
 minimum design metal temperature, relief and flare design and depressuring specifications are
 decided under the site's codes, the applicable standards and by licensed engineers.
 

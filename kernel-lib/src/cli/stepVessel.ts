@@ -13,6 +13,9 @@
  * "coefficient", "coefficient": W/(m2 K), "ambientT": K} | {"kind": "heat-flux", "flux": W/m2,
  * "basis": text} | {"kind": "insulated"}}; "minimumDesignMetalTemperature": K; "shape": a
  * VesselShape of process/vessel/geometry.ts instead of "volume".
+ *
+ * An adiabatic run does not model the wall: its response has "Twall": null in "series" and in
+ * "minimum", "wallModelled": false, and an empty Twall_K column in the CSV.
  */
 import { InputError, RequestError, UnknownNameError, type ResultWarning } from "../errors.js";
 import { defineFluid } from "../fluid/defineFluid.js";
@@ -28,12 +31,16 @@ export interface VesselStepResponse {
     readonly time: readonly number[];
     readonly P: readonly number[];
     readonly T: readonly number[];
-    readonly Twall: readonly number[];
+    /** Wall temperature, K; null for an adiabatic run (the wall is not modelled). */
+    readonly Twall: readonly number[] | null;
     readonly mass: readonly number[];
     readonly massFlow: readonly number[];
     readonly liquidFraction: readonly number[];
   };
-  readonly minimum: { readonly T: number; readonly time: number; readonly Twall: number };
+  /** Twall: the coldest wall temperature, K; null for an adiabatic run. */
+  readonly minimum: { readonly T: number; readonly time: number; readonly Twall: number | null };
+  /** False for an adiabatic run: the wall is not modelled, "Twall" is null. */
+  readonly wallModelled: boolean;
   /** Time to the target pressure, s (null when it was not reached). */
   readonly timeToTarget: number | null;
   readonly stoppedBecause: string;
@@ -70,8 +77,14 @@ const PATHS: readonly [RegExp, string][] = [
   [/^vessel\.shape\.volumeM3/, "$.step.volume"],
   [/^spec\.shape/, "$.step.shape"],
   [/^vessel\.shape/, "$.step.shape"],
+  [/^spec\.wall\.thicknessM/, "$.step.wall.thickness"],
+  [/^spec\.wall\.massKg/, "$.step.wall.mass"],
+  [/^spec\.wall\.densityKgPerM3/, "$.step.wall.density"],
+  [/^spec\.wall\.heatCapacityJPerKgK/, "$.step.wall.heatCapacity"],
   [/^spec\.wall/, "$.step.wall"],
   [/^spec\.heat/, "$.step.heat"],
+  [/^spec\.until\.pressurePa/, "$.step.until.P"],
+  [/^spec\.until\.timeS/, "$.step.until.time"],
   [/^spec\.until/, "$.step.until"],
   [/^spec\.initial\.temperatureK/, "$.inlet.T"],
   [/^spec\.initial\.pressurePa/, "$.inlet.P"],
@@ -252,7 +265,7 @@ export function vesselStepFromRequest(request: unknown): VesselStepResponse {
       time: s.timeS,
       P: s.pressurePa,
       T: s.temperatureK,
-      Twall: s.wallTemperatureK,
+      Twall: s.wallTemperatureK ?? null,
       mass: s.massKg,
       massFlow: s.massFlowKgPerS,
       liquidFraction: s.liquidFraction,
@@ -260,8 +273,9 @@ export function vesselStepFromRequest(request: unknown): VesselStepResponse {
     minimum: {
       T: run.minimum.temperatureK,
       time: run.minimum.timeS,
-      Twall: run.minimum.wallTemperatureK,
+      Twall: run.minimum.wallTemperatureK ?? null,
     },
+    wallModelled: run.wallModelled,
     timeToTarget: run.timeToTargetS ?? null,
     stoppedBecause: run.stoppedBecause,
     massReleased: run.massReleasedKg,
@@ -276,12 +290,23 @@ export function vesselStepFromRequest(request: unknown): VesselStepResponse {
   };
 }
 
-/** The series of a vessel response as CSV (SI units in the header), for `--csv`. */
+/**
+ * The series of a vessel response as CSV (SI units in the header), for `--csv`. The Twall_K
+ * column is empty for an adiabatic run (the wall is not modelled).
+ */
 export function vesselSeriesCsv(response: VesselStepResponse): string {
   const s = response.series;
   const head = "time_s,P_Pa,T_K,Twall_K,mass_kg,massFlow_kg_per_s,liquidFraction";
   const rows = s.time.map((t, k) =>
-    [t, s.P[k], s.T[k], s.Twall[k], s.mass[k], s.massFlow[k], s.liquidFraction[k]].join(","),
+    [
+      t,
+      s.P[k],
+      s.T[k],
+      s.Twall === null ? "" : s.Twall[k],
+      s.mass[k],
+      s.massFlow[k],
+      s.liquidFraction[k],
+    ].join(","),
   );
   return [head, ...rows].join("\n") + "\n";
 }

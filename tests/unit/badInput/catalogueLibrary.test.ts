@@ -26,7 +26,9 @@ import {
   stateAtTemperatureQuality,
   stateAtTemperatureDensity,
   pureFluidPhaseAt,
+  simulateVessel,
   type FluidSpec,
+  type VesselSpec,
 } from "../../../kernel-lib/src/core.js";
 
 type ErrorClass = new (...args: never[]) => IsochorError;
@@ -44,6 +46,17 @@ const mix = defineFluid({ components: ["methane", "ethane"] });
 const water = referenceFluid("water");
 const waterB = referenceFluidBinding(water);
 const garbage = (v: unknown) => v as never;
+// a vessel blowdown that is accepted as it stands (each case below spoils one field)
+const vessel: VesselSpec = {
+  fluid: pr,
+  shape: { kind: "vertical-cylinder", diameterM: 1, lengthM: 3 },
+  initial: { temperatureK: 298.15, pressurePa: 50e5 },
+  outlets: [{ diameterM: 0.02, dischargeCoefficient: 0.8, backPressurePa: 1e5 }],
+  until: { pressurePa: 40e5 },
+};
+const outlet = vessel.outlets![0];
+// methane + n-butane 50/50 at 300 K and 30 bar splits into gas and liquid (isothermal flash)
+const methaneButane = defineFluid({ components: ["methane", "n-butane"] });
 
 const cases: Case[] = [
   // defineFluid: the spec
@@ -560,6 +573,120 @@ const cases: Case[] = [
     cls: PhaseUnavailableError,
     code: "phase-unavailable",
     names: /T = 250 K.*critical temperature/,
+  },
+  // simulateVessel: the vessel, its outlets, wall and stop criterion
+  {
+    name: "vessel of zero volume",
+    run: () => simulateVessel({ ...vessel, shape: { kind: "volume", volumeM3: 0 } }),
+    cls: InputError,
+    code: "bad-input",
+    names: /volumeM3 must be a finite number > 0 \(unit: m3\); received 0/,
+  },
+  {
+    name: "vessel of negative volume",
+    run: () => simulateVessel({ ...vessel, shape: { kind: "volume", volumeM3: -2 } }),
+    cls: InputError,
+    code: "bad-input",
+    names: /volumeM3 must be a finite number > 0.*received -2/,
+  },
+  {
+    name: "vessel orifice larger than the vessel",
+    run: () => simulateVessel({ ...vessel, outlets: [{ ...outlet, diameterM: 1.2 }] }),
+    cls: InputError,
+    code: "bad-input",
+    names:
+      /^spec\.outlets\[0\]\.diameterM must be > 0 and smaller than the vessel's diameter 1\.000 m/,
+  },
+  {
+    name: "vessel back pressure equal to the vessel pressure",
+    run: () => simulateVessel({ ...vessel, outlets: [{ ...outlet, backPressurePa: 50e5 }] }),
+    cls: InputError,
+    code: "bad-input",
+    names:
+      /^spec\.outlets\[0\]\.backPressurePa must be > 0 and below the initial vessel pressure 5000000 Pa/,
+  },
+  {
+    name: "vessel back pressure above the vessel pressure",
+    run: () => simulateVessel({ ...vessel, outlets: [{ ...outlet, backPressurePa: 80e5 }] }),
+    cls: InputError,
+    code: "bad-input",
+    names:
+      /^spec\.outlets\[0\]\.backPressurePa must be .*below the initial vessel pressure.*received 8000000/,
+  },
+  {
+    name: "vessel initial state inside the two-phase region without a liquid level",
+    run: () =>
+      simulateVessel({
+        ...vessel,
+        fluid: methaneButane,
+        initial: { temperatureK: 300, pressurePa: 30e5, z: [0.5, 0.5] },
+        until: { pressurePa: 20e5 },
+      }),
+    cls: InputError,
+    code: "bad-input",
+    names:
+      /^spec\.initial must be a state stable as one phase.*or a gas over a liquid layer.*levelM/,
+  },
+  {
+    name: "vessel discharge coefficient zero",
+    run: () => simulateVessel({ ...vessel, outlets: [{ ...outlet, dischargeCoefficient: 0 }] }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^spec\.outlets\[0\]\.dischargeCoefficient must be > 0 and <= 1; received 0/,
+  },
+  {
+    name: "vessel discharge coefficient negative",
+    run: () => simulateVessel({ ...vessel, outlets: [{ ...outlet, dischargeCoefficient: -0.6 }] }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^spec\.outlets\[0\]\.dischargeCoefficient must be > 0 and <= 1; received -0\.6/,
+  },
+  {
+    name: "vessel discharge coefficient above 1",
+    run: () => simulateVessel({ ...vessel, outlets: [{ ...outlet, dischargeCoefficient: 1.3 }] }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^spec\.outlets\[0\]\.dischargeCoefficient must be > 0 and <= 1; received 1\.3/,
+  },
+  {
+    name: "vessel wall thickness negative (adiabatic run)",
+    run: () => simulateVessel({ ...vessel, wall: { thicknessM: -0.02 } }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^spec\.wall\.thicknessM must be > 0 \(unit: m\); received -0\.02/,
+  },
+  {
+    name: "vessel wall mass negative",
+    run: () =>
+      simulateVessel({
+        ...vessel,
+        wall: { thicknessM: 0.02, massKg: -500 },
+        heat: { kind: "wall", inside: { coefficientWPerM2K: 50 }, outside: { kind: "insulated" } },
+      }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^spec\.wall\.massKg must be > 0 \(unit: kg\); received -500/,
+  },
+  {
+    name: "vessel until without a stop criterion",
+    run: () => simulateVessel({ ...vessel, until: {} }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^spec\.until must be a stop criterion: \{ pressurePa \}.*and\/or \{ timeS \}/,
+  },
+  {
+    name: "vessel until missing",
+    run: () => simulateVessel({ ...vessel, until: garbage(undefined) }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^spec\.until must be a stop criterion.*received undefined/,
+  },
+  {
+    name: "vessel until time not finite",
+    run: () => simulateVessel({ ...vessel, until: { timeS: Infinity } }),
+    cls: InputError,
+    code: "bad-input",
+    names: /^spec\.until\.timeS must be > 0 and finite \(unit: s\)/,
   },
 ];
 

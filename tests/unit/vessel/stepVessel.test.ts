@@ -32,7 +32,7 @@ describe("vessel step of isochor step", () => {
     const r = vesselStepFromRequest(request);
     const n = r.series.time.length;
     expect(n).toBeGreaterThan(3);
-    for (const key of ["P", "T", "Twall", "mass", "massFlow", "liquidFraction"] as const) {
+    for (const key of ["P", "T", "mass", "massFlow", "liquidFraction"] as const) {
       expect(r.series[key]).toHaveLength(n);
     }
     expect(r.stoppedBecause).toBe("target-pressure");
@@ -42,6 +42,28 @@ describe("vessel step of isochor step", () => {
     const csv = vesselSeriesCsv(r).trim().split("\n");
     expect(csv[0]).toBe("time_s,P_Pa,T_K,Twall_K,mass_kg,massFlow_kg_per_s,liquidFraction");
     expect(csv).toHaveLength(n + 1);
+    // adiabatic: the wall is not modelled, so no wall temperature (null, an empty CSV column)
+    expect(r.wallModelled).toBe(false);
+    expect(r.series.Twall).toBeNull();
+    expect(r.minimum.Twall).toBeNull();
+    expect(csv[1].split(",")[3]).toBe("");
+    expect(csv[1].split(",")).toHaveLength(7);
+  });
+
+  it("reports the wall temperature of a run with a wall", () => {
+    const r = vesselStepFromRequest({
+      ...request,
+      step: {
+        ...request.step,
+        wall: { thickness: 0.02 },
+        heat: { inside: { coefficient: 100 }, outside: { kind: "air", ambientT: 293.15 } },
+      },
+    });
+    expect(r.wallModelled).toBe(true);
+    expect(r.series.Twall).toHaveLength(r.series.time.length);
+    expect(r.minimum.Twall).toBeLessThan(298.15);
+    const row = vesselSeriesCsv(r).trim().split("\n")[2].split(",");
+    expect(Number(row[3])).toBeGreaterThan(200);
   });
 
   it("refuses bad fields with their JSON paths", () => {
@@ -54,6 +76,29 @@ describe("vessel step of isochor step", () => {
     expect(pathOf({ ...request, inlet: { T: 300 } })).toBe("$.inlet.P");
     expect(pathOf({ ...request, components: ["unobtainium"] })).toMatch(/^\$\.components/);
     expect(pathOf({ ...request, step: { ...step, until: {} } })).toBe("$.step.until");
+    // the bad-input catalogue's vessel cases, through the request (tests/unit/badInput)
+    const out = step.outlet;
+    expect(pathOf({ ...request, step: { ...step, volume: -2 } })).toBe("$.step.volume");
+    expect(pathOf({ ...request, step: { ...step, outlet: { ...out, diameter: 2 } } })).toBe(
+      "$.step.outlet.diameter",
+    );
+    expect(pathOf({ ...request, step: { ...step, outlet: { ...out, backPressure: 50e5 } } })).toBe(
+      "$.step.outlet.backPressure",
+    );
+    for (const cd of [0, -0.5, 1.2]) {
+      expect(
+        pathOf({ ...request, step: { ...step, outlet: { ...out, dischargeCoefficient: cd } } }),
+      ).toBe("$.step.outlet.dischargeCoefficient");
+    }
+    expect(pathOf({ ...request, step: { ...step, wall: { thickness: -0.01 } } })).toBe(
+      "$.step.wall.thickness",
+    );
+    expect(pathOf({ ...request, step: { ...step, wall: { thickness: 0.01, mass: -5 } } })).toBe(
+      "$.step.wall.mass",
+    );
+    expect(pathOf({ ...request, step: { ...step, until: { time: -1 } } })).toBe(
+      "$.step.until.time",
+    );
   });
 
   it("runs through isochor step: JSON by default, CSV with --csv and the cautions on stderr", async () => {

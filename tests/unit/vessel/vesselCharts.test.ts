@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import { simulateVessel } from "../../../kernel-lib/src/process/vessel/simulateVessel.js";
 import {
+  WALL_NOT_MODELLED,
   vesselHistoryChart,
   vesselPathOnEnvelopeChart,
 } from "../../../kernel-lib/src/charts/vesselHistory.js";
@@ -33,6 +34,35 @@ describe("vessel charts", () => {
     expect(JSON.stringify(spec)).toMatch(/licensed engineers/);
     // the rule sits at the MDMT in degC (244.15 K = -29 degC)
     expect(JSON.stringify(spec)).toContain('"y":-29');
+  });
+
+  it("an adiabatic run: no wall line or coldest-wall mark, the note that the wall is not modelled", async () => {
+    const adiabatic = simulateVessel({
+      fluid: gas,
+      shape: { kind: "horizontal-cylinder", diameterM: 1.2, lengthM: 3 },
+      initial: { temperatureK: 300, pressurePa: 60e5, z },
+      outlets: [{ diameterM: 0.03, dischargeCoefficient: 0.8 }],
+      until: { pressurePa: 40e5 },
+    });
+    // the result says so: no wall temperature in the series or the minimum
+    expect(adiabatic.wallModelled).toBe(false);
+    expect(adiabatic.series.wallTemperatureK).toBeUndefined();
+    expect(adiabatic.minimum.wallTemperatureK).toBeUndefined();
+    expect(adiabatic.minimum.wallTimeS).toBeUndefined();
+    expect(adiabatic.cautions.join(" ")).toMatch(/wall is not modelled/);
+    const spec = vesselHistoryChart(adiabatic);
+    expect(schemaErrors(spec)).toEqual([]);
+    const { warnings } = await compileSpec(spec);
+    expect(warnings).toEqual([]);
+    const text = JSON.stringify(spec);
+    expect(text).not.toMatch(/"series":"wall"/);
+    expect(text).not.toMatch(/coldest wall/);
+    expect(text).toContain(WALL_NOT_MODELLED);
+    // the walled run keeps its wall line and mark, without the note
+    const walled = JSON.stringify(vesselHistoryChart(run));
+    expect(walled).toMatch(/"series":"wall"/);
+    expect(walled).toMatch(/coldest wall/);
+    expect(walled).not.toContain(WALL_NOT_MODELLED);
   });
 
   it("the path on the phase envelope validates and compiles", async () => {

@@ -3,6 +3,8 @@
  * "The isothermal flash problem. Part I. Stability" and "Part II. Phase-split calculation", Fluid
  * Phase Equilib. 9 (1982) 1-19 and 21-40; M. L. Michelsen and J. M. Mollerup, Thermodynamic
  * Models: Fundamentals and Computational Aspects, 2nd ed. 2007, ch. 9-11):
+ *  0. with a warm start (FlashOptions.initialLnK), the two-phase split from those K-values first:
+ *     converged and below the feed's Gibbs energy, it goes straight to step 3 (steps 1-2 skipped);
  *  1. the tangent-plane test of the feed (phase/stability.ts), from Wilson's K-factors plus nearly
  *     pure trials (FlashOptions.extraTrials); stable: tested again with a nearly pure trial of
  *     every present component, and if still stable, one phase, returned with the verdict;
@@ -21,14 +23,14 @@
  *     feed, material balance, no trivial solution, labels by density. Anything else is a
  *     SolverError naming the state and what was tried.
  */
-import { SolverError, type ResultWarning } from "../../errors.js";
+import { InputError, SolverError, type ResultWarning } from "../../errors.js";
 import { checkComposition, checkPressure, checkTemperature } from "../../state/checkInputs.js";
 import { phaseFugacityAtTP } from "../../state/fugacity.js";
 import type { FluidBinding } from "../../state/types.js";
 import { requireCount, requirePositive } from "../../validate.js";
 import { stabilityAtTP, type StabilityOptions, type StabilityResult } from "../stability.js";
 import { convergeMultiphase } from "./threePhaseSplit.js";
-import { convergeTwoPhase, phaseLnPhi, type WorkingPhase } from "./twoPhaseSplit.js";
+import { convergeTwoPhase, phaseGibbs, phaseLnPhi, type WorkingPhase } from "./twoPhaseSplit.js";
 import type { Equilibrium } from "./types.js";
 import { assembleEquilibrium, DEFAULT_VERIFY, describeState } from "./verifyEquilibrium.js";
 
@@ -60,11 +62,23 @@ export interface FlashOptions {
    * "none": Wilson starts only (faster; a missed liquid phase is then possible).
    */
   extraTrials?: "auto" | "none" | readonly number[];
+  /**
+   * A warm start: ln K_i = ln(y_i / x_i) of a nearby two-phase equilibrium (e.g. the previous
+   * step of a time integration; one entry per component, absent ones ignored). The two-phase
+   * split is first converged from these K-values without the stability test of the feed; a
+   * converged split with a Gibbs energy below the feed's single phase then goes through the
+   * stability tests of its phases (step 3 of the header) like any split, so the result is
+   * verified the same way. Otherwise the flash starts from the feed's stability test as without
+   * it. Affects the work, not the answer.
+   */
+  initialLnK?: readonly number[];
 }
 
 const METHOD_1 = "tangent-plane stability test (one phase stable)";
 const METHOD_2 =
   "tangent-plane test, successive substitution with dominant-eigenvalue acceleration and Newton on the Gibbs energy, stability test of the split";
+const METHOD_WARM =
+  "two-phase split from the given K-values (options.initialLnK), successive substitution and Newton on the Gibbs energy, stability test of the split";
 const METHOD_3 =
   "tangent-plane tests, two- then three-phase successive substitution (Michelsen Q function)";
 
@@ -183,47 +197,80 @@ export function flashTP(
   const feedTrials = feedTrialsOf(binding, present, options);
   const checkTrials = checkTrialsOf(present, options);
   const stabilityOptions: StabilityOptions = { ...options.stability, extraTrials: checkTrials };
-  let stability = stabilityAtTP(model, T, P, zz, { ...options.stability, extraTrials: feedTrials });
-  if (stability.stable && checkTrials.some((i) => !feedTrials.includes(i))) {
-    // a one-phase answer is verified with a nearly pure trial of every present component
-    stability = stabilityAtTP(model, T, P, zz, stabilityOptions);
-  }
-  if (stability.stable) return single(stability, stability.warnings);
-
   const splitOptions = { tolerance, newtonAfter, maxIterations };
-  const tried: string[] = [];
-  const lnPhiZ = phaseLnPhi(model, T, P, zz).lnPhi;
   let iterations = 0;
-
-  /** Two phases from a trial composition w (the y phase). */
-  const fromTrial = (w: readonly number[]): WorkingPhase[] | undefined => {
-    const lnPhiW = phaseLnPhi(model, T, P, w).lnPhi;
+  // the warm start (options.initialLnK): a converged split below the feed's Gibbs energy skips
+  // the feed's stability test; its phases are tested below like any split
+  const warm = ((): WorkingPhase[] | undefined => {
+    const lnK0 = options.initialLnK;
+    if (lnK0 === undefined) return undefined;
+    if (!(lnK0.length === zz.length && present.every((i) => Number.isFinite(lnK0[i])))) {
+      throw new InputError({
+        input: "options.initialLnK",
+        unit: "-",
+        validRange: `${zz.length} finite ln K values`,
+        received: lnK0,
+      });
+    }
     const lnK = new Array<number>(zz.length).fill(0);
-    for (const i of present) lnK[i] = lnPhiZ[i] - lnPhiW[i];
+    for (const i of present) lnK[i] = lnK0[i];
     const out = convergeTwoPhase(model, T, P, zz, present, lnK, splitOptions);
     iterations += out.iterations;
-    if (out.converged) return out.phases;
-    tried.push(
-      `two-phase split from a trial (${out.reason ?? "not converged"} after ${out.iterations} iterations, ${out.newtonIterations} Newton)`,
-    );
-    return undefined;
-  };
-  const trials = stability.trials
-    .filter((t) => t.tangentPlaneDistance < 0 && t.composition.length === zz.length)
-    .sort((a, b) => a.tangentPlaneDistance - b.tangentPlaneDistance);
-  let phases: WorkingPhase[] | undefined;
-  for (const t of trials) {
-    phases = fromTrial(t.composition);
-    if (phases !== undefined) break;
-  }
-  const where = (): string => describeState(binding, T, P, zz);
+    if (!out.converged) return undefined;
+    const gFeed = phaseGibbs(zz, phaseLnPhi(model, T, P, zz).lnPhi, present);
+    let gSplit = 0;
+    for (const p of out.phases) gSplit += p.amount * phaseGibbs(p.x, p.lnPhi, present);
+    return gSplit < gFeed ? out.phases : undefined;
+  })();
+  let stability: StabilityResult | undefined;
+  let phases: WorkingPhase[] | undefined = warm;
+  const tried: string[] = [];
   if (phases === undefined) {
+    let feedTest = stabilityAtTP(model, T, P, zz, {
+      ...options.stability,
+      extraTrials: feedTrials,
+    });
+    if (feedTest.stable && checkTrials.some((i) => !feedTrials.includes(i))) {
+      // a one-phase answer is verified with a nearly pure trial of every present component
+      feedTest = stabilityAtTP(model, T, P, zz, stabilityOptions);
+    }
+    if (feedTest.stable) return single(feedTest, feedTest.warnings);
+    phases = splitFromTrials(feedTest);
+    stability = feedTest;
+  }
+
+  /** Two phases from the trials of the feed's stability test that found tm < 0. */
+  function splitFromTrials(feedTest: StabilityResult): WorkingPhase[] {
+    const lnPhiZ = phaseLnPhi(model, T, P, zz).lnPhi;
+    /** Two phases from a trial composition w (the y phase). */
+    const fromTrial = (w: readonly number[]): WorkingPhase[] | undefined => {
+      const lnPhiW = phaseLnPhi(model, T, P, w).lnPhi;
+      const lnK = new Array<number>(zz.length).fill(0);
+      for (const i of present) lnK[i] = lnPhiZ[i] - lnPhiW[i];
+      const out = convergeTwoPhase(model, T, P, zz, present, lnK, splitOptions);
+      iterations += out.iterations;
+      if (out.converged) return out.phases;
+      tried.push(
+        `two-phase split from a trial (${out.reason ?? "not converged"} after ${out.iterations} iterations, ${out.newtonIterations} Newton)`,
+      );
+      return undefined;
+    };
+    const trials = feedTest.trials
+      .filter((t) => t.tangentPlaneDistance < 0 && t.composition.length === zz.length)
+      .sort((a, b) => a.tangentPlaneDistance - b.tangentPlaneDistance);
+    for (const t of trials) {
+      const found = fromTrial(t.composition);
+      if (found !== undefined) return found;
+    }
     throw new SolverError(
       "isothermal flash",
-      `the feed is unstable at ${where()} (tm = ${stability.minimumTangentPlaneDistance.toExponential(3)}) but no split converged: ${tried.join("; ")}`,
+      `the feed is unstable at ${where()} (tm = ${feedTest.minimumTangentPlaneDistance.toExponential(3)}) but no split converged: ${tried.join("; ")}`,
     );
   }
-  let method = METHOD_2;
+  function where(): string {
+    return describeState(binding, T, P, zz);
+  }
+  let method = warm === undefined ? METHOD_2 : METHOD_WARM;
   let finalStability: StabilityResult | undefined;
   // Post-check of the returned phases: every phase (not only the largest), with Wilson trials plus
   // nearly pure trials of every present component (Wilson trials alone miss liquid-liquid splits,

@@ -16,6 +16,7 @@ import type { Fluid } from "../../fluid/defineFluid.js";
 import { overallProperty } from "../../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium } from "../../phase/flash/types.js";
 import type { FlashOptions } from "../../phase/flash/flashTP.js";
+import { lnKOf, warmSplit } from "./warmSplit.js";
 
 /** A warm-started (u, v) solver with its remembered Jacobian. */
 export interface ContentsFlash {
@@ -40,26 +41,32 @@ export function contentsFlash(
   const newton = (
     u: number,
     rho: number,
-    z: readonly number[],
     T0: number,
     P0: number,
+    flashAt: (T: number, P: number) => Equilibrium | undefined,
   ): Equilibrium | undefined => {
     const v = 1 / rho;
     let T = T0;
     let lnP = Math.log(P0);
-    let eq = fluid.flashTP(T, Math.exp(lnP), z, flash);
+    const first = flashAt(T, Math.exp(lnP));
+    if (first === undefined) return undefined;
+    let eq = first;
     let r = residual(eq, u, v);
     let norm = Math.max(Math.abs(r[0]), Math.abs(r[1]));
-    const jacobian = (): [number, number, number, number] => {
+    const jacobian = (): [number, number, number, number] | undefined => {
       const dT = 1e-5 * T;
       const dl = 1e-5;
-      const a = residual(fluid.flashTP(T + dT, Math.exp(lnP), z, flash), u, v);
-      const b = residual(fluid.flashTP(T, Math.exp(lnP + dl), z, flash), u, v);
+      const ea = flashAt(T + dT, Math.exp(lnP));
+      const eb = flashAt(T, Math.exp(lnP + dl));
+      if (ea === undefined || eb === undefined) return undefined;
+      const a = residual(ea, u, v);
+      const b = residual(eb, u, v);
       return [(a[0] - r[0]) / dT, (b[0] - r[0]) / dl, (a[1] - r[1]) / dT, (b[1] - r[1]) / dl];
     };
     let fresh = false;
     if (J === undefined) {
       J = jacobian();
+      if (J === undefined) return undefined;
       fresh = true;
     }
     for (let k = 0; k < 12; k++) {
@@ -73,12 +80,14 @@ export function contentsFlash(
       const s = Math.max(Math.abs(dT) / (0.1 * T), Math.abs(dl) / 0.2, 1);
       dT /= s;
       dl /= s;
-      const eqNew = fluid.flashTP(T + dT, Math.exp(lnP + dl), z, flash);
+      const eqNew = flashAt(T + dT, Math.exp(lnP + dl));
+      if (eqNew === undefined) return undefined;
       const rNew = residual(eqNew, u, v);
       const normNew = Math.max(Math.abs(rNew[0]), Math.abs(rNew[1]));
       if (!(normNew < norm)) {
         if (fresh) return undefined;
         J = jacobian();
+        if (J === undefined) return undefined;
         fresh = true;
         continue;
       }
@@ -91,10 +100,85 @@ export function contentsFlash(
       fresh = false;
       if (slow && norm > specTolerance * 0.1) {
         J = jacobian();
+        if (J === undefined) return undefined;
         fresh = true;
       }
     }
     return norm <= specTolerance ? eq : undefined;
+  };
+  // the phases of the latest result: ln K of a two-phase one (the warm split's start), or one
+  // phase; undefined before the first result and after a three-phase one
+  let last: { lnK?: readonly number[]; single: boolean } | undefined;
+  const remember = (eq: Equilibrium): Equilibrium => {
+    const lnK = lnKOf(eq);
+    last =
+      eq.phases.length === 1
+        ? { single: true }
+        : lnK !== undefined
+          ? { lnK, single: false }
+          : undefined;
+    return eq;
+  };
+  /**
+   * The warm start: the phases of the latest result kept (a two-phase split from its K-values,
+   * warmSplit.ts, or one phase by Newton's method on T at the fixed density; one phase before
+   * the first result), its (T, P) then given to the full flash, which must meet u and v. When
+   * the one-phase trial's full flash finds two phases, the two-phase trial follows from that
+   * flash's K-values. Undefined when no trial is accepted.
+   */
+  const warm = (
+    u: number,
+    rho: number,
+    z: readonly number[],
+    guessT: number,
+    guessP: number,
+  ): Equilibrium | undefined => {
+    let start = last ?? { single: true };
+    let warmK: readonly number[] | undefined;
+    let T = guessT;
+    let P = guessP;
+    for (let attempt = 0; attempt < 2; attempt++) {
+      if (start.single) {
+        let st = fluid.stateAtTRho(T, rho, z);
+        const scale = Math.max(Math.abs(u), R * T);
+        for (let k = 0; ; k++) {
+          const r = st.molar.u - u;
+          if (Math.abs(r) <= 1e-12 * scale) break;
+          if (!(st.molar.cv > 0) || k > 30) return undefined;
+          let dT = -r / st.molar.cv;
+          if (Math.abs(dT) > 0.1 * T) dT = Math.sign(dT) * 0.1 * T;
+          T += dT;
+          st = fluid.stateAtTRho(T, rho, z);
+        }
+        P = st.pressurePa;
+        // inside the spinodal a one-phase state at this density can have P <= 0
+        if (!(P > 0 && T > 0)) return undefined;
+      } else {
+        let lnK = start.lnK!;
+        const eq = newton(u, rho, T, P, (t, p) => {
+          const e = warmSplit(fluid, t, p, z, lnK);
+          if (e !== undefined) lnK = lnKOf(e) ?? lnK;
+          return e;
+        });
+        if (eq === undefined) return undefined;
+        T = eq.temperatureK;
+        P = eq.pressurePa;
+        warmK = lnKOf(eq);
+      }
+      // the full flash (all stability tests), warm-started from the trial's split
+      const full = fluid.flashTP(
+        T,
+        P,
+        z,
+        warmK === undefined ? flash : { ...flash, initialLnK: warmK },
+      );
+      const r = residual(full, u, 1 / rho);
+      if (Math.max(Math.abs(r[0]), Math.abs(r[1])) <= specTolerance) return full;
+      const lnK = lnKOf(full);
+      if (!start.single || lnK === undefined) return undefined;
+      start = { lnK, single: false };
+    }
+    return undefined;
   };
   return {
     get fallbacks() {
@@ -103,20 +187,29 @@ export function contentsFlash(
     solve(u, rho, z, guessT, guessP) {
       let eq: Equilibrium | undefined;
       try {
-        eq = newton(u, rho, z, guessT, guessP);
+        eq = warm(u, rho, z, guessT, guessP);
       } catch (e) {
         if (!(e instanceof SolverError)) throw e;
         eq = undefined;
       }
-      if (eq !== undefined) return eq;
+      if (eq !== undefined) return remember(eq);
+      try {
+        eq = newton(u, rho, guessT, guessP, (t, p) => fluid.flashTP(t, p, z, flash));
+      } catch (e) {
+        if (!(e instanceof SolverError)) throw e;
+        eq = undefined;
+      }
+      if (eq !== undefined) return remember(eq);
       fallbacks++;
       J = undefined;
-      return fluid.flashUV(u, rho, z, {
-        ...flash,
-        initialGuessK: guessT,
-        initialGuessPa: guessP,
-        specTolerance,
-      });
+      return remember(
+        fluid.flashUV(u, rho, z, {
+          ...flash,
+          initialGuessK: guessT,
+          initialGuessPa: guessP,
+          specTolerance,
+        }),
+      );
     },
   };
 }

@@ -35,7 +35,9 @@ import { minimizeBrent } from "../../numerics/brentMinimize.js";
 import { overallProperty } from "../../phase/flash/stateFunctionFlash.js";
 import type { Equilibrium } from "../../phase/flash/types.js";
 import type { FlashOptions } from "../../phase/flash/flashTP.js";
+import { temperatureAtPS } from "../../state/inversions.js";
 import type { FluidState } from "../../state/types.js";
+import { lnKOf, warmSplit } from "./warmSplit.js";
 
 /** The stagnation (vessel) state of the stream that flows. */
 export interface StagnationState {
@@ -59,8 +61,9 @@ export interface OrificeFluxOptions {
   pressureTolerance?: number;
   /**
    * A guess of the choking pressure ratio P_throat / P0 (e.g. from the previous time step): the
-   * equilibrium route then searches around it first (within +-3 % in ln P), and falls back to the
-   * full search when the maximum is not inside.
+   * equilibrium route then searches around it first (within +-3 % in ln P), the single-phase
+   * route brackets the choke within +-1 % of it, and both fall back to the full search when the
+   * choke is not inside.
    */
   throatRatioHint?: number;
   /**
@@ -68,6 +71,12 @@ export interface OrificeFluxOptions {
    * temperature guess of the hinted search. Affects the work only, not the result.
    */
   throatTemperatureRatioHint?: number;
+  /**
+   * ln(y_i / x_i) of a nearby two-phase throat (e.g. the previous time step's throatLnK): the
+   * first interior points of the screened search start their split from it. Affects the work
+   * only (the throat returned is always computed by the full flash).
+   */
+  throatLnKHint?: readonly number[];
   /** Options of the phase-equilibrium calculations (flashPS, flashTP). */
   flash?: FlashOptions;
 }
@@ -88,6 +97,8 @@ export interface OrificeFlux {
   readonly throatVaporFraction: number;
   /** True when the throat state has more than one phase (homogeneous equilibrium flow). */
   readonly twoPhaseThroat: boolean;
+  /** ln(y_i / x_i) at a two-phase throat (a warm start of the next search: throatLnKHint). */
+  readonly throatLnK?: readonly number[];
   readonly route: "single-phase" | "equilibrium";
   /** States evaluated along the isentrope. */
   readonly evaluations: number;
@@ -101,6 +112,8 @@ interface PathPoint {
   c: number;
   vaporFraction: number;
   phases: number;
+  /** ln(y_i / x_i) of a two-phase point. */
+  lnK?: readonly number[];
 }
 
 function checkStagnation(s: StagnationState, backPressurePa: number): void {
@@ -122,9 +135,13 @@ function checkStagnation(s: StagnationState, backPressurePa: number): void {
   }
 }
 
-/** The single-phase isentrope point at P (state inversion at (P, s0)). */
+/**
+ * The single-phase isentrope point at P (state inversion at (P, s0), state/inversions.ts, without
+ * the stability test that fluid.temperatureAtPS adds as a warning: the single-phase route tests
+ * the throat and the middle of the expansion itself, see orificeMassFlux).
+ */
 function singlePhasePoint(fluid: Fluid, s: StagnationState, P: number, guessK: number): PathPoint {
-  const inv = fluid.temperatureAtPS(P, s.entropyJPerMolK, s.x, { initialGuessK: guessK });
+  const inv = temperatureAtPS(fluid, P, s.entropyJPerMolK, s.x, { initialGuessK: guessK });
   const st: FluidState = inv.state;
   return {
     P,
@@ -154,8 +171,9 @@ function equilibriumPoint(
 
 /**
  * The equilibrium isentrope point at P from the isothermal flash at a known temperature T of the
- * isentrope (the screened search's throat): accepted when its entropy meets s0 within
- * SPEC_TOLERANCE (relative to max(|s0|, R), the default of the (P, s) flash), else undefined.
+ * isentrope (the screened search's throat; warm-started from the screened point's K-values,
+ * FlashOptions.initialLnK): accepted when its entropy meets s0 within SPEC_TOLERANCE (relative
+ * to max(|s0|, R), the default of the (P, s) flash), else undefined.
  */
 function equilibriumPointAtT(
   fluid: Fluid,
@@ -163,8 +181,9 @@ function equilibriumPointAtT(
   P: number,
   T: number,
   flash: FlashOptions,
+  lnK?: readonly number[],
 ): PathPoint | undefined {
-  const eq = fluid.flashTP(T, P, s.x, flash);
+  const eq = fluid.flashTP(T, P, s.x, lnK === undefined ? flash : { ...flash, initialLnK: lnK });
   const scale = Math.max(Math.abs(s.entropyJPerMolK), R);
   const residual = Math.abs(overallProperty(eq, "s") - s.entropyJPerMolK) / scale;
   return residual <= SPEC_TOLERANCE ? pathPointOf(s, P, eq) : undefined;
@@ -177,20 +196,20 @@ function equilibriumPointAtT(
  * within SPEC_TOLERANCE / 100 in at most SECANT_STEPS flashes, else undefined (the caller then
  * takes the (P, s) flash, which brackets).
  * slope.dsdT, when positive, replaces the frozen first slope and is updated with the secant's.
- * Used for the screened interior points only.
+ * Used for the screened interior points only; flashAt is the isothermal flash of the screened
+ * search (a warm-started split where one is known, see warmSplit.ts).
  */
 function secantPoint(
-  fluid: Fluid,
   s: StagnationState,
   P: number,
   guessK: number,
-  flash: FlashOptions,
+  flashAt: (T: number, P: number) => Equilibrium,
   slope: { dsdT: number },
 ): PathPoint | undefined {
   const scale = Math.max(Math.abs(s.entropyJPerMolK), R);
   const tol = SPEC_TOLERANCE / 100;
   let T0 = guessK;
-  let eq = fluid.flashTP(T0, P, s.x, flash);
+  let eq = flashAt(T0, P);
   let r0 = overallProperty(eq, "s") - s.entropyJPerMolK;
   if (Math.abs(r0) / scale <= tol) return pathPointOf(s, P, eq);
   let dsdT = slope.dsdT;
@@ -203,7 +222,7 @@ function secantPoint(
   let T1 = T0 - r0 / dsdT;
   for (let k = 0; k < SECANT_STEPS; k++) {
     if (!(T1 > 0.5 * guessK && T1 < 1.5 * guessK)) return undefined;
-    eq = fluid.flashTP(T1, P, s.x, flash);
+    eq = flashAt(T1, P);
     const r1 = overallProperty(eq, "s") - s.entropyJPerMolK;
     if (r1 !== r0) slope.dsdT = (r1 - r0) / (T1 - T0);
     if (Math.abs(r1) / scale <= tol) return pathPointOf(s, P, eq);
@@ -237,6 +256,7 @@ function pathPointOf(s: StagnationState, P: number, eq: Equilibrium): PathPoint 
           ? 0
           : vapor.amount,
     phases: eq.phases.length,
+    lnK: lnKOf(eq),
   };
 }
 
@@ -278,6 +298,14 @@ const SCREEN_AGREEMENT = 1e-9;
 /** The (P, s) flash's default specification tolerance (phase/flash/stateFunctionFlash.ts). */
 const SPEC_TOLERANCE = 1e-9;
 
+/**
+ * The relative noise of G at the points of the choke search (the isentrope's entropy met to
+ * 1e-11 relative, the flashes' fugacities to 1e-11): a parabola vertex whose G is below the
+ * middle point's by less than this is accepted as the maximum (the flux there is then exact to
+ * about this, as G is flat at its maximum).
+ */
+const VERTEX_NOISE = 1e-9;
+
 /** Rounds of three points of the hinted choke search before Brent's minimisation. */
 const HINT_ROUNDS = 3;
 
@@ -294,6 +322,7 @@ function fluxAlong(
   flash: FlashOptions = {},
   screen = false,
   tHint?: number,
+  lnKHint?: readonly number[],
 ): OrificeFlux & { points: PathPoint[] } {
   let evaluations = 0;
   let guess = s.temperatureK;
@@ -306,6 +335,21 @@ function fluxAlong(
   const searchFlash: FlashOptions = screen ? { ...flash, extraTrials: "none" } : flash;
   // ds/dT along the isobars of the latest secant (the first step of the next one)
   const slope = { dsdT: NaN };
+  // the screened interior points: the two-phase split from the latest two-phase point's
+  // K-values (warmSplit.ts: verified, no stability test), else the Wilson-start flash
+  let lnK: readonly number[] | undefined = screen ? lnKHint : undefined;
+  const screenedFlash = (T: number, P: number): Equilibrium => {
+    if (lnK !== undefined) {
+      const warm = warmSplit(fluid, T, P, s.x, lnK);
+      if (warm !== undefined) {
+        lnK = lnKOf(warm);
+        return warm;
+      }
+    }
+    const eq = fluid.flashTP(T, P, s.x, searchFlash);
+    lnK = lnKOf(eq);
+    return eq;
+  };
   const at = (P: number): PathPoint => {
     evaluations++;
     let p: PathPoint;
@@ -322,7 +366,7 @@ function fluxAlong(
       }
       if (!(g > 0)) g = guess;
       p =
-        secantPoint(fluid, s, P, g, searchFlash, slope) ??
+        secantPoint(s, P, g, screenedFlash, slope) ??
         equilibriumPoint(fluid, s, P, guess, searchFlash);
     } else p = equilibriumPoint(fluid, s, P, guess, searchFlash);
     guess = p.T;
@@ -334,7 +378,7 @@ function fluxAlong(
     if (screen) {
       evaluations++;
       p =
-        equilibriumPointAtT(fluid, s, ps.P, ps.T, flash) ??
+        equilibriumPointAtT(fluid, s, ps.P, ps.T, flash, ps.lnK) ??
         equilibriumPoint(fluid, s, ps.P, ps.T, flash);
       points.push(p);
       const gScreen = ps.rhoMass * velocity(s, ps);
@@ -356,6 +400,7 @@ function fluxAlong(
       throatDensityKgPerM3: p.rhoMass,
       throatVaporFraction: p.vaporFraction,
       twoPhaseThroat: p.phases > 1,
+      throatLnK: p.lnK,
       route,
       evaluations,
       points,
@@ -372,6 +417,16 @@ function fluxAlong(
     };
     let upper = ln0 - 1e-9;
     let lower = NaN;
+    if (hint !== undefined && hint > 0 && hint < 1) {
+      // a bracket of +-1 % around the hinted choke (the previous step's), when it brackets
+      const lnH = ln0 + Math.log(hint);
+      const a = lnH - 0.01;
+      const b = lnH + 0.01;
+      if (a > lnB && b < upper && f(b) <= 0 && f(a) > 0) {
+        const root = findRootBrent(f, a, b, { tolerance: relTol });
+        return result(at(Math.exp(root.value)), true);
+      }
+    }
     for (const r of [0.75, 0.55, 0.4, 0.25, 0.12, 0.05, 0.02, 0.005]) {
       const lnP = ln0 + Math.log(r);
       if (lnP <= lnB) break;
@@ -415,7 +470,9 @@ function fluxAlong(
       if (g1 >= g0 && g1 >= g2) {
         const pv = at(Math.exp(lnV));
         const gv = pv.rhoMass * velocity(s, pv);
-        if (gv >= g1 && Math.abs(lnV - lnH) <= d) return result(pv, true);
+        // (G at the vertex may fall below G at the middle point by the noise of the
+        // isentrope's points, about 1e-10 relative, when the two are within ~1e-5 in ln P)
+        if (gv >= g1 * (1 - VERTEX_NOISE) && Math.abs(lnV - lnH) <= d) return result(pv, true);
         break;
       }
       if (!(lnV > lo + d && lnV < hi - d)) break;
@@ -503,12 +560,32 @@ export function orificeMassFlux(
     return r;
   }
   if (route === "single-phase") {
-    const { points: _p, ...r } = fluxAlong(fluid, stagnation, backPressurePa, route, relTol);
+    const { points: _p, ...r } = fluxAlong(
+      fluid,
+      stagnation,
+      backPressurePa,
+      route,
+      relTol,
+      options.throatRatioHint,
+      {},
+      false,
+      options.throatTemperatureRatioHint,
+    );
     return r;
   }
   let single: (OrificeFlux & { points: PathPoint[] }) | undefined;
   try {
-    single = fluxAlong(fluid, stagnation, backPressurePa, "single-phase", relTol);
+    single = fluxAlong(
+      fluid,
+      stagnation,
+      backPressurePa,
+      "single-phase",
+      relTol,
+      options.throatRatioHint,
+      {},
+      false,
+      options.throatTemperatureRatioHint,
+    );
   } catch (e) {
     if (!(e instanceof SolverError || e instanceof InputError)) throw e;
     single = undefined;
@@ -559,6 +636,7 @@ function equilibriumFlux(
       flash,
       screened,
       options.throatTemperatureRatioHint,
+      options.throatLnKHint,
     );
   if (!screen) return run(false);
   try {

@@ -92,6 +92,27 @@ function checkComposition(input: string, x: readonly number[] | undefined, n: nu
   return x.map((v) => v / s);
 }
 
+/** The wall's mass (kg) and heat capacity (J/(kg K)), every field checked. */
+function checkWall(
+  w: VesselSpec["wall"],
+  innerAreaM2: number,
+): { massKg: number; heatCapacityJPerKgK: number } {
+  if (typeof w !== "object" || w === null) {
+    bad("spec.wall", "-", "{ thicknessM, densityKgPerM3?, heatCapacityJPerKgK?, massKg? }", w);
+  }
+  if (!(w.thicknessM > 0)) bad("spec.wall.thicknessM", "m", "> 0", w.thicknessM);
+  const rhoW = w.densityKgPerM3 ?? 7850;
+  if (!(rhoW > 0)) bad("spec.wall.densityKgPerM3", "kg/m3", "> 0", rhoW);
+  const cp = w.heatCapacityJPerKgK ?? 470;
+  if (!(cp > 0)) bad("spec.wall.heatCapacityJPerKgK", "J/(kg K)", "> 0", cp);
+  if (w.massKg !== undefined && !(w.massKg > 0)) bad("spec.wall.massKg", "kg", "> 0", w.massKg);
+  const massKg = w.massKg ?? rhoW * w.thicknessM * innerAreaM2;
+  if (!(massKg > 0 && Number.isFinite(massKg))) {
+    bad("spec.wall.massKg", "kg", "> 0 (thickness x inner area x density)", massKg);
+  }
+  return { massKg, heatCapacityJPerKgK: cp };
+}
+
 function sum(a: readonly number[]): number {
   let s = 0;
   for (const v of a) s += v;
@@ -264,6 +285,8 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
 
   // ---- heat -------------------------------------------------------------------------------
   const heat = spec.heat ?? "adiabatic";
+  // a wall given is checked even when the run is adiabatic (where it is not used)
+  if (spec.wall !== undefined) checkWall(spec.wall, geometry.innerAreaM2);
   let wallHeat: WallHeatSpec | undefined;
   let transport: ((state: FluidState) => ContentsTransport) | undefined;
   let wallMass = 0;
@@ -281,13 +304,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
         "a wall (thicknessM, density, heat capacity) when heat is exchanged through it",
         w,
       );
-    if (!(w.thicknessM > 0)) bad("spec.wall.thicknessM", "m", "> 0", w.thicknessM);
-    const rhoW = w.densityKgPerM3 ?? 7850;
-    if (!(rhoW > 0)) bad("spec.wall.densityKgPerM3", "kg/m3", "> 0", rhoW);
-    wallCp = w.heatCapacityJPerKgK ?? 470;
-    if (!(wallCp > 0)) bad("spec.wall.heatCapacityJPerKgK", "J/(kg K)", "> 0", wallCp);
-    wallMass = w.massKg ?? rhoW * w.thicknessM * geometry.innerAreaM2;
-    if (!(wallMass > 0)) bad("spec.wall.massKg", "kg", "> 0", wallMass);
+    ({ massKg: wallMass, heatCapacityJPerKgK: wallCp } = checkWall(w, geometry.innerAreaM2));
     if (w.massKg === undefined) {
       warnings.push({
         code: "model-limitation",
@@ -360,7 +377,12 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     until !== null &&
     (until.pressurePa !== undefined || until.timeS !== undefined)
   )) {
-    bad("spec.until", "-", "{ pressurePa } and/or { timeS }", until);
+    bad(
+      "spec.until",
+      "-",
+      "a stop criterion: { pressurePa } (target pressure, Pa) and/or { timeS } (s)",
+      until,
+    );
   }
   const pbMax = outlets.length > 0 ? Math.max(...outlets.map((o) => o.backPressurePa)) : 0;
   if (until.pressurePa !== undefined) {
@@ -382,8 +404,8 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       );
     }
   }
-  if (until.timeS !== undefined && !(until.timeS > 0))
-    bad("spec.until.timeS", "s", "> 0", until.timeS);
+  if (until.timeS !== undefined && !(until.timeS > 0 && Number.isFinite(until.timeS)))
+    bad("spec.until.timeS", "s", "> 0 and finite", until.timeS);
   const tEnd = until.timeS ?? options.maxTimeS ?? 1e6;
   const mdmt = spec.minimumDesignMetalTemperatureK;
   if (mdmt !== undefined && !(mdmt > 0))
@@ -576,6 +598,9 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   // evaluation takes the equilibrium route (the accepted-step check then changes the mode)
   const throatHints = new Map<number, number>();
   const throatTHints = new Map<number, number>();
+  const throatLnKHints = new Map<number, readonly number[]>();
+  // outlets (index; -1 the supply) whose flux took the equilibrium route in the "auto" mode
+  const equilibriumOutlets = new Set<number>();
   const fluxOf = (
     stag: StagnationState,
     back: number,
@@ -585,11 +610,17 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     const opts = {
       throatRatioHint: throatHints.get(which),
       throatTemperatureRatioHint: throatTHints.get(which),
+      throatLnKHint: throatLnKHints.get(which),
       pressureTolerance: 1e-6,
       flash: flashOptions,
     };
     let flux: OrificeFlux;
-    if (route === "auto" || idealGas) {
+    if (route === "auto" && equilibriumOutlets.has(which)) {
+      // the previous evaluation needed the equilibrium route (a two-phase expansion): the
+      // single-phase attempt of "auto" would fail its stability check again; the equilibrium
+      // route is the general one (it also covers a single-phase expansion)
+      flux = orificeMassFlux(fluid, stag, back, { ...opts, route: "equilibrium" });
+    } else if (route === "auto" || idealGas) {
       flux = orificeMassFlux(fluid, stag, back, { ...opts, route });
     } else {
       try {
@@ -601,6 +632,8 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     }
     if (flux.choked) throatHints.set(which, flux.throatPressurePa / stag.pressurePa);
     if (flux.choked) throatTHints.set(which, flux.throatTemperatureK / stag.temperatureK);
+    if (flux.throatLnK !== undefined) throatLnKHints.set(which, flux.throatLnK);
+    if (route === "auto" && flux.route === "equilibrium") equilibriumOutlets.add(which);
     return flux;
   };
   const cache: { key: string; ev: Evaluation }[] = [];
@@ -653,12 +686,16 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     return ev;
   };
 
-  // single-phase assumptions still hold at y?
-  const singlePhaseHolds = (y: readonly number[]): boolean => {
+  // single-phase assumptions still hold at y? `screened`: the stability tests from Wilson's
+  // starts only (flashTP extraTrials "none"), for the bisection of a phase boundary: a "false"
+  // is still a proof (a verified split, or a more stable root), a "true" is verified afterwards
+  const wilsonOnly: typeof flashOptions = { ...flashOptions, extraTrials: "none" };
+  const singlePhaseHolds = (y: readonly number[], screened = false): boolean => {
     if (idealGas) return true;
     const ev = evaluate(y);
     const c = ev.contents;
-    if (!isStableSinglePhase(fluid, c.T, c.P, c.z, c.rho, flashOptions)) return false;
+    const testFlash = screened ? wilsonOnly : flashOptions;
+    if (!isStableSinglePhase(fluid, c.T, c.P, c.z, c.rho, testFlash)) return false;
     for (let k = 0; k < ev.outletFlux.length; k++) {
       const f = ev.outletFlux[k];
       if (f === undefined) continue;
@@ -674,7 +711,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
           f.throatPressurePa,
           stag.x,
           rhoThroat,
-          flashOptions,
+          testFlash,
         )
       ) {
         return false;
@@ -779,6 +816,9 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   );
   const p0 = first.contents.P;
   let progressSteps = 0;
+  // the evaluation at each accepted point, kept when the step is accepted (evaluating the
+  // points again after the run would start each contents solve from the run's last state)
+  const stepEvals = new Map<readonly number[], Evaluation>();
   for (let round = 0; round < 3; round++) {
     let phaseBoundary = false;
     const r = integrateDormandPrince((_t, yy) => evaluate(yy).dy, t, y, tEnd, {
@@ -787,6 +827,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
       maxSteps: Math.max(1, maxSteps - accepted - rejected),
       events,
       onStep: (tt, yy) => {
+        stepEvals.set(yy, evaluate(yy));
         if (mode === "single-phase" && !singlePhaseHolds(yy)) {
           phaseBoundary = true;
           return false;
@@ -810,17 +851,29 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     if (phaseBoundary) {
       // the last accepted point is past the boundary: bisect on the dense output
       const n = r.t.length;
+      // (the trials screened by Wilson's starts, the point found then verified with the full
+      // tests; if that fails, the bisection is repeated below it with the full tests)
+      const bisect = (a: number, b: number, screened: boolean): number => {
+        let lo = a;
+        let hi = b;
+        for (let k = 0; k < 14; k++) {
+          const mid = 0.5 * (lo + hi);
+          if (singlePhaseHolds(r.at(mid), screened)) lo = mid;
+          else hi = mid;
+        }
+        return lo;
+      };
       let lo = r.t[n - 2];
-      let hi = r.t[n - 1];
-      for (let k = 0; k < 14; k++) {
-        const mid = 0.5 * (lo + hi);
-        if (singlePhaseHolds(r.at(mid))) lo = mid;
-        else hi = mid;
+      if ((flashOptions.extraTrials ?? "auto") === "none") lo = bisect(lo, r.t[n - 1], false);
+      else {
+        const screenedLo = bisect(lo, r.t[n - 1], true);
+        if (screenedLo === lo || singlePhaseHolds(r.at(screenedLo))) lo = screenedLo;
+        else lo = bisect(lo, screenedLo, false);
       }
       for (let k = 1; k < n - 1; k++) {
         ts.push(r.t[k]);
         ys.push(r.y[k].slice());
-        recorded.push(evaluate(r.y[k]));
+        recorded.push(stepEvals.get(r.y[k]) ?? evaluate(r.y[k]));
       }
       accepted += r.acceptedSteps - 1;
       t = lo;
@@ -838,7 +891,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     for (let k = 1; k < r.t.length; k++) {
       ts.push(r.t[k]);
       ys.push(r.y[k].slice());
-      recorded.push(evaluate(r.y[k]));
+      recorded.push(stepEvals.get(r.y[k]) ?? evaluate(r.y[k]));
     }
     accepted += r.acceptedSteps;
     if (r.stoppedBecause === "event") {
@@ -870,7 +923,7 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
     timeS: ts,
     pressurePa: recorded.map((e) => e.contents.P),
     temperatureK: recorded.map((e) => e.contents.T),
-    wallTemperatureK: ys.map((v) => v[nc + 1]),
+    wallTemperatureK: wallHeat === undefined ? undefined : ys.map((v) => v[nc + 1]),
     massKg: recorded.map((e) => e.contents.massKg),
     massFlowKgPerS: recorded.map((e) => e.massFlowOut),
     liquidFraction: recorded.map((e) => e.contents.liquidFraction),
@@ -881,10 +934,11 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   let iMin = 0;
   let iMax = 0;
   let iwMin = 0;
+  const wallT = series.wallTemperatureK;
   for (let k = 1; k < ts.length; k++) {
     if (series.temperatureK[k] < series.temperatureK[iMin]) iMin = k;
     if (series.temperatureK[k] > series.temperatureK[iMax]) iMax = k;
-    if (series.wallTemperatureK[k] < series.wallTemperatureK[iwMin]) iwMin = k;
+    if (wallT !== undefined && wallT[k] < wallT[iwMin]) iwMin = k;
   }
   const phaseChanges: VesselResult["phaseChanges"][number][] = [];
   for (let k = 1; k < ts.length; k++) {
@@ -905,11 +959,14 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   const cautions = [...VESSEL_CAUTIONS];
   if (wallHeat === undefined) {
     cautions.push(
-      "Adiabatic run: the wall is not modelled (its temperature is shown constant); the contents' minimum temperature is the bound to compare with the metal's limits, and heat from the wall would make the contents warmer than shown.",
+      "Adiabatic run: the wall is not modelled (no wall temperature is reported); the contents' minimum temperature is the bound to compare with the metal's limits, and heat from the wall would make the contents warmer than shown.",
     );
   }
   if (mdmt !== undefined) {
-    const coldest = Math.min(series.temperatureK[iMin], series.wallTemperatureK[iwMin]);
+    const coldest =
+      wallT === undefined
+        ? series.temperatureK[iMin]
+        : Math.min(series.temperatureK[iMin], wallT[iwMin]);
     if (coldest < mdmt) {
       cautions.unshift(
         `The minimum temperature ${coldest.toFixed(1)} K (${(coldest - 273.15).toFixed(1)} degC) is BELOW the minimum design metal temperature ${mdmt.toFixed(1)} K (${(mdmt - 273.15).toFixed(1)} degC): refer to the responsible licensed engineer before any blowdown of this vessel.`,
@@ -925,12 +982,16 @@ export function simulateVessel(spec: VesselSpec, options: VesselOptions = {}): V
   return {
     kind: filling ? "filling" : "depressurisation",
     series,
-    minimum: {
-      temperatureK: series.temperatureK[iMin],
-      timeS: ts[iMin],
-      wallTemperatureK: series.wallTemperatureK[iwMin],
-      wallTimeS: ts[iwMin],
-    },
+    minimum:
+      wallT === undefined
+        ? { temperatureK: series.temperatureK[iMin], timeS: ts[iMin] }
+        : {
+            temperatureK: series.temperatureK[iMin],
+            timeS: ts[iMin],
+            wallTemperatureK: wallT[iwMin],
+            wallTimeS: ts[iwMin],
+          },
+    wallModelled: wallT !== undefined,
     maximum: { temperatureK: series.temperatureK[iMax], timeS: ts[iMax] },
     timeToTargetS: stoppedBecause === "target-pressure" ? ts[ts.length - 1] : undefined,
     stoppedBecause,

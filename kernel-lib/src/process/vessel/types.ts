@@ -159,8 +159,11 @@ export interface VesselSeries {
   readonly pressurePa: readonly number[];
   /** Contents temperature (all phases at one temperature), K. */
   readonly temperatureK: readonly number[];
-  /** Wall temperature, K (constant at the initial temperature when adiabatic: not modelled). */
-  readonly wallTemperatureK: readonly number[];
+  /**
+   * Wall temperature, K. Absent for an adiabatic run: the wall is not modelled there (see
+   * VesselResult.wallModelled), and no wall temperature is reported.
+   */
+  readonly wallTemperatureK?: readonly number[];
   /** Mass of the contents, kg. */
   readonly massKg: readonly number[];
   /** Net mass flow out (negative when filling), kg/s. */
@@ -182,9 +185,15 @@ export interface VesselResult {
   readonly minimum: {
     readonly temperatureK: number;
     readonly timeS: number;
-    readonly wallTemperatureK: number;
-    readonly wallTimeS: number;
+    /** The coldest wall temperature, K, and when (absent for an adiabatic run). */
+    readonly wallTemperatureK?: number;
+    readonly wallTimeS?: number;
   };
+  /**
+   * True when the wall is modelled (a lumped wall exchanging heat); false for an adiabatic run,
+   * where the series and the minimum carry no wall temperature.
+   */
+  readonly wallModelled: boolean;
   readonly maximum: { readonly temperatureK: number; readonly timeS: number };
   /** Time to the target pressure, s (undefined when not reached). */
   readonly timeToTargetS?: number;
