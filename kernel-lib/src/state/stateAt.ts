@@ -210,7 +210,7 @@ export function stateAtTRho(
       received: densityMolPerM3,
     });
   }
-  const phase = phaseLabel(model, temperatureK, P, densityMolPerM3, x, "only", Z);
+  const phase = phaseLabel(model, temperatureK, P, densityMolPerM3, x, "only", Z, residual);
   return finish(binding, temperatureK, densityMolPerM3, x, residual, phase, NO_EXTRA);
 }
 
@@ -291,7 +291,7 @@ export function stateAtTP(
   const position: "lowest" | "highest" | "only" =
     count === 1 ? "only" : index === 0 ? "lowest" : index === count - 1 ? "highest" : "only";
   const Z = 1 + residual.aD;
-  const label = phaseLabel(model, temperatureK, pressurePa, rho, x, position, Z);
+  const label = phaseLabel(model, temperatureK, pressurePa, rho, x, position, Z, residual);
   if (count === 1 && request !== "stable" && label !== "supercritical" && label !== request) {
     throw new PhaseUnavailableError(
       `no ${request} root at T = ${temperatureK} K, P = ${pressurePa} Pa: ${model.info.name} has a single stable density root there (${rho.toPrecision(6)} mol/m3, Z = ${Z.toPrecision(5)}), and it is ${label}-like (rule: state/phaseLabel.ts)`,

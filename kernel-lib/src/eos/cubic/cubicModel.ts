@@ -367,9 +367,12 @@ class CubicModelImpl implements CubicModel {
       aTT: 0,
       aDT: 0,
       aDDD: 0,
+      aDDT: 0,
       dnA: undefined,
     };
     this.residualInto(temperatureK, densityMolPerM3, x, result);
+    // T d(aDD)/dT: in aDD = q^2 - F eps^2 I'' only F depends on T, and T dF/dT = TF
+    result.aDDT = -this.lastTF * this.lastEps2I2;
     if (request?.composition) {
       const n = this.n;
       const a = this.mixA;
@@ -395,6 +398,9 @@ class CubicModelImpl implements CubicModel {
   private lastI = NaN;
   private lastI1 = NaN;
   private lastLogTerm = NaN;
+  // T dF/dT and eps^2 I'' of the last residualInto call (for aDDT in residual())
+  private lastTF = NaN;
+  private lastEps2I2 = NaN;
 
   /**
    * The derivatives of {@link residual} without composition derivatives, written into `out` (no
@@ -438,6 +444,8 @@ class CubicModelImpl implements CubicModel {
     this.lastI = I;
     this.lastI1 = I1;
     this.lastLogTerm = logTerm;
+    this.lastTF = TF;
+    this.lastEps2I2 = eps * eps * I2;
     out.a = logTerm - F * I;
     out.aD = q - F * eps * I1;
     out.aDD = q * q - F * eps * eps * I2;
