@@ -58,6 +58,12 @@ export interface StateInputs {
   readonly gasConstant?: number;
   /** Warnings gathered so far (copied). */
   readonly warnings?: readonly ResultWarning[];
+  /**
+   * The pressure the state was asked at ((T, P) states), Pa: reported as given. Default (and
+   * every other property): P = rho R T Z of the model, which equals the given pressure only to
+   * round-off.
+   */
+  readonly pressurePa?: number;
 }
 
 /** Residual h, s, u, a, g in both conventions, J/mol and J/(mol K), with ln Z and ln phi. */
@@ -285,12 +291,14 @@ export function assembleState(input: StateInputs): FluidState {
     input.departureMethod,
     input.gasConstant ?? R_CODATA,
     input.warnings,
+    input.pressurePa,
   );
 }
 
 /**
  * {@link assembleState} with the inputs as arguments (the state layer's hot path: no inputs
- * record per state). `Rg` is the model's gas constant, J/(mol K).
+ * record per state). `Rg` is the model's gas constant, J/(mol K); `givenPressurePa` the pressure
+ * a (T, P) state was asked at, reported as given (StateInputs.pressurePa).
  */
 export function assembleStateOf(
   T: number,
@@ -304,6 +312,7 @@ export function assembleStateOf(
   departureMethod: DepartureMethod,
   Rg: number,
   given: readonly ResultWarning[] | undefined,
+  givenPressurePa?: number,
 ): FluidState {
   const v = assembled;
   stateValuesInto(T, rho, d, ig, M, Rg, v);
@@ -341,7 +350,7 @@ export function assembleStateOf(
   }
   return {
     temperatureK: T,
-    pressurePa: P,
+    pressurePa: givenPressurePa ?? P,
     densityMolPerM3: rho,
     densityKgPerM3: rho * M,
     x: x.slice(),

@@ -155,6 +155,7 @@ function finish(
   residual: ResidualDerivatives,
   phase: PhaseLabel,
   extraWarnings: readonly ExtraWarning[],
+  givenPressurePa?: number,
 ): FluidState {
   const model = binding.model;
   const ideal = idealGasAt(binding, T, x);
@@ -172,6 +173,7 @@ function finish(
     binding.departureMethod ?? "closed-form",
     model.gasConstant ?? R_CODATA,
     warnings,
+    givenPressurePa,
   );
 }
 
@@ -326,5 +328,6 @@ export function stateAtTP(
       message: `T = ${temperatureK} K, P = ${pressurePa} Pa is on the phase boundary of ${model.info.name} within rounding (two stable density roots whose Gibbs energies differ by ${Math.abs(second - best).toExponential(1)} RT): the phases coexist there in any proportion, and the returned ${label} root (${rho.toPrecision(6)} mol/m3) is only one of them; ask for phase "liquid" or "vapor", or give a quality`,
     });
   }
-  return finish(binding, temperatureK, rho, x, residual, label, warnings);
+  // P as given: the root's rho R T Z equals it only to round-off (3999999.9999999995)
+  return finish(binding, temperatureK, rho, x, residual, label, warnings, pressurePa);
 }
