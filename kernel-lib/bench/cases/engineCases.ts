@@ -62,6 +62,19 @@ export const engineCases: BenchCase[] = [
     },
   },
   {
+    name: "pr-mix10-TP-no-stability",
+    description:
+      "pr-mix10-TP without the tangent-plane test ({ checkStability: false }): the state alone, as stateAtTP was before the test became the default",
+    setup() {
+      const fluid = defineFluid({ components: TEN, model: "peng-robinson" });
+      const options = { checkStability: false };
+      let k = 0;
+      return function prMix10TPNoStability() {
+        return fluid.stateAtTP(MIX10_TEMPERATURES[k++ & 15], 5e6, X10, options);
+      };
+    },
+  },
+  {
     name: "pr-pure-TP-residual-only",
     description:
       "diagnostic: pr-pure-TP with cp = 4R in place of the correlation (engine cost without the cp correlations)",

@@ -119,6 +119,12 @@ function build(
     citation: `${spec.citation ?? "user-defined pressure function"}; departures by numerical integration along the isotherm (${kind})`,
     componentIds: spec.components.slice(),
   };
+  // the quadrature options, read once (every call then passes an object of one shape)
+  const quad: Pick<IntegrationOptions, "relTolerance" | "absTolerance" | "maxSubdivisions"> = {
+    relTolerance: spec.integration?.relTolerance,
+    absTolerance: spec.integration?.absTolerance,
+    maxSubdivisions: spec.integration?.maxSubdivisions,
+  };
   let last:
     { T: number; rho: number; x: readonly number[]; result: IntegratedResidual } | undefined;
   const integrate = (
@@ -137,7 +143,9 @@ function build(
       });
     }
     const result = integrateResidual(evaluator, T, rho, x, {
-      ...spec.integration,
+      relTolerance: quad.relTolerance,
+      absTolerance: quad.absTolerance,
+      maxSubdivisions: quad.maxSubdivisions,
       maxDensityMolPerM3: limit,
       composition: request?.composition === true,
       gasConstant: spec.gasConstant,

@@ -25,6 +25,11 @@ export interface ResidualDerivatives {
   /** rho^3 d3(alpha_r)/d(rho)^3, when the model provides it (critical points). */
   readonly aDDD?: number;
   /**
+   * rho^2 T d3(alpha_r)/d(rho)^2 dT = T d(aDD)/dT, when the model provides it (the phase label
+   * of a mixture, state/phaseLabel.ts, then needs no difference in T).
+   */
+  readonly aDDT?: number;
+  /**
    * d(n alpha_r)/d(n_i) at constant T, V and n_j (j != i), one per component, when requested
    * with `{ composition: true }`. ln phi_i = dnA[i] - ln Z.
    */

@@ -8,7 +8,7 @@
  *   aD  = r aD_e - (1 - r),                                   so Z = r Z_e,
  *   aDD = r^2 aDD_e - 2 r (1 - r) aD_e + (1 - r)^2,
  *   aDDD = r^3 aDDD_e - 6 r^2 (1 - r) aDD_e + 6 r (1 - r)^2 aD_e - 2 (1 - r)^3,
- *   aT = aT_e, aTT = aTT_e, aDT = r aDT_e,
+ *   aT = aT_e, aTT = aTT_e, aDT = r aDT_e,  aDDT = r^2 aDDT_e - 2 r (1 - r) aDT_e,
  *   d(n alpha_r)/dn_i = dnA_e,i - c_i rho_e Z_e + ln r.
  * Where translation changes results: at the same T and P, ln phi_i = ln phi_e,i - c_i P/(R T),
  * the same factor in every phase, so equilibrium ratios (and flash results) are unchanged; the
@@ -184,6 +184,8 @@ export function withVolumeTranslation(
         aTT: e.aTT,
         aDT: r * e.aDT,
       };
+      // T d(aDD)/dT at constant rho (r and rho_e do not depend on T)
+      if (e.aDDT !== undefined) out.aDDT = r * r * e.aDDT - 2 * r * s * e.aDT;
       if (e.aDDD !== undefined) {
         out.aDDD =
           r * r * r * e.aDDD - 6 * r * r * s * e.aDD + 6 * r * s * s * e.aD - 2 * s * s * s;

@@ -57,6 +57,8 @@ export interface PhaseFugacity {
 const COMPOSITION = Object.freeze({ composition: true });
 // the root choice of the current phaseFugacityAtTP call, read out at once (plain numbers)
 const choice = emptyRootChoice();
+// the density roots of the current phaseFugacityAtTP call (models with densityRootsInto)
+const ROOTS = new Float64Array(3);
 
 function gasConstant(model: ResidualModel): number {
   return model.gasConstant ?? R_CODATA;
@@ -76,17 +78,29 @@ export function phaseFugacityAtTP(
   phase: PhaseRequest = "stable",
 ): PhaseFugacity {
   const T = temperatureK;
-  const rhos = densityRootsOf(model, T, pressurePa, x);
-  const chosen = chooseDensityRoot(model, T, rhos, x, phase, choice);
+  // the roots: into the reused scratch when the model can (no array per call)
+  let rhos: ArrayLike<number>;
+  let rootCount: number;
+  if (model.densityRootsInto !== undefined) {
+    rootCount = model.densityRootsInto(T, pressurePa, x, ROOTS);
+    rhos = ROOTS;
+  } else {
+    rhos = densityRootsOf(model, T, pressurePa, x);
+    rootCount = rhos.length;
+  }
+  const chosen = chooseDensityRoot(model, T, rhos, x, phase, choice, rootCount);
   const count = choice.stableCount;
   const chosenRho = choice.densityMolPerM3;
   // g_r/RT of the chosen root: compared already when "stable" had several roots
-  const compared = phase === "stable" && rhos.length > 1;
+  const compared = phase === "stable" && rootCount > 1;
   const lowestG = choice.lowestGibbsOverRT;
   if (chosen === undefined || chosen.dnA === undefined || !(1 + chosen.aD > 0)) {
+    const found = Array.from(rhos).slice(0, rootCount);
     throw new PhaseUnavailableError(
       `${model.info.name} has no mechanically stable density root at T = ${T} K, P = ${pressurePa} Pa for the composition [${x.map((v) => v.toPrecision(4)).join(", ")}]` +
-        (rhos.length > 0 ? ` (roots: ${rhos.map((r) => r.toPrecision(6)).join(", ")} mol/m3)` : ""),
+        (found.length > 0
+          ? ` (roots: ${found.map((r) => r.toPrecision(6)).join(", ")} mol/m3)`
+          : ""),
     );
   }
   return {

@@ -16,7 +16,8 @@
  * (pseudo-)critical point, so a natural gas at 60 barg is a vapour, not "supercritical" as Kay's
  * pseudo-critical rule made it; mixtures are never labelled "supercritical". d2P/drho2 comes from
  * the model's aDDD when it has it, else a central difference of (dP/drho)_T in rho; d2P/drho dT
- * from a central difference of (dP/drho)_T in T (relative steps 1e-5). This is a label, not a
+ * from the model's aDDT when it has it (the cubics), else a central difference of (dP/drho)_T in
+ * T (relative steps 1e-5). This is a label, not a
  * phase-stability test: whether a mixture splits is decided by the tangent-plane test and the
  * flash (phase/).
  * A model without `pseudoCritical` labels a single root of a pure fluid "liquid" when Z < 0.3
@@ -59,11 +60,17 @@ export function phaseIdentificationParameter(
     const dn = dPdRhoOverRT(model.residual(T, rho - h, x));
     rhoPRhoRho = (rho * (up - dn)) / (2 * h);
   }
-  // (d2P/drho dT) / R and (dP/dT)_rho / (rho R)
-  const hT = T * STEP_T;
-  const pRhoUp = (T + hT) * dPdRhoOverRT(model.residual(T + hT, rho, x));
-  const pRhoDn = (T - hT) * dPdRhoOverRT(model.residual(T - hT, rho, x));
-  const pRhoT = (pRhoUp - pRhoDn) / (2 * hT);
+  // (d2P/drho dT) / R = d[T (1 + 2 aD + aDD)]/dT = 1 + 2 aD + aDD + 2 aDT + aDDT, and
+  // (dP/dT)_rho / (rho R)
+  let pRhoT: number;
+  if (r.aDDT !== undefined) {
+    pRhoT = pRho + 2 * r.aDT + r.aDDT;
+  } else {
+    const hT = T * STEP_T;
+    const pRhoUp = (T + hT) * dPdRhoOverRT(model.residual(T + hT, rho, x));
+    const pRhoDn = (T - hT) * dPdRhoOverRT(model.residual(T - hT, rho, x));
+    pRhoT = (pRhoUp - pRhoDn) / (2 * hT);
+  }
   const pT = dPdTAtDensity(rho, r, 1) / rho; // (dP/dT)_rho / (rho R)
   return 2 - (pRhoT / pT - rhoPRhoRho / pRho);
 }
@@ -73,6 +80,8 @@ export function phaseIdentificationParameter(
  *
  * @param position - where the root sits among the stable roots found at this (T, P): "lowest",
  *   "highest" or "only" (the single stable root).
+ * @param residual - the model's derivatives at this state, when the caller has them (saves one
+ *   evaluation for a mixture).
  */
 export function phaseLabel(
   model: ResidualModel,
@@ -82,11 +91,12 @@ export function phaseLabel(
   x: readonly number[],
   position: "lowest" | "highest" | "only",
   Z: number,
+  residual?: ResidualDerivatives,
 ): PhaseLabel {
   if (position === "lowest") return "vapor";
   if (position === "highest") return "liquid";
   if (x.length > 1) {
-    return phaseIdentificationParameter(model, temperatureK, densityMolPerM3, x) > 1
+    return phaseIdentificationParameter(model, temperatureK, densityMolPerM3, x, residual) > 1
       ? "liquid"
       : "vapor";
   }

@@ -279,12 +279,41 @@ const assembled = emptyStateValues();
 
 /** Builds the full state record (see the header for every formula). */
 export function assembleState(input: StateInputs): FluidState {
-  const Rg = input.gasConstant ?? R_CODATA;
-  const T = input.temperatureK;
-  const rho = input.densityMolPerM3;
-  const d = input.residual;
-  const ig = input.ideal;
-  const M = input.molarMassKgPerMol;
+  return assembleStateOf(
+    input.temperatureK,
+    input.densityMolPerM3,
+    input.x,
+    input.residual,
+    input.ideal,
+    input.molarMassKgPerMol,
+    input.phase,
+    input.model,
+    input.departureMethod,
+    input.gasConstant ?? R_CODATA,
+    input.warnings,
+    input.pressurePa,
+  );
+}
+
+/**
+ * {@link assembleState} with the inputs as arguments (the state layer's hot path: no inputs
+ * record per state). `Rg` is the model's gas constant, J/(mol K); `givenPressurePa` the pressure
+ * a (T, P) state was asked at, reported as given (StateInputs.pressurePa).
+ */
+export function assembleStateOf(
+  T: number,
+  rho: number,
+  x: readonly number[],
+  d: ResidualDerivatives,
+  ig: IdealGasProperties,
+  M: number,
+  phase: PhaseLabel,
+  model: ModelInfo,
+  departureMethod: DepartureMethod,
+  Rg: number,
+  given: readonly ResultWarning[] | undefined,
+  givenPressurePa?: number,
+): FluidState {
   const v = assembled;
   stateValuesInto(T, rho, d, ig, M, Rg, v);
   const P = v.pressurePa;
@@ -301,7 +330,6 @@ export function assembleState(input: StateInputs): FluidState {
   const cv = v.cv;
   // one division for the seven specific values (a multiply differs from dividing by at most 1 ulp)
   const perMass = 1 / M;
-  const given = input.warnings;
   let warnings: readonly ResultWarning[] = NO_WARNINGS;
   if (!stable || !(Z > 0) || (given !== undefined && given.length > 0) || ig.warnings.length > 0) {
     const list: ResultWarning[] = given ? given.slice() : [];
@@ -322,12 +350,12 @@ export function assembleState(input: StateInputs): FluidState {
   }
   return {
     temperatureK: T,
-    pressurePa: input.pressurePa ?? P,
+    pressurePa: givenPressurePa ?? P,
     densityMolPerM3: rho,
     densityKgPerM3: rho * M,
-    x: input.x.slice(),
+    x: x.slice(),
     Z,
-    phase: input.phase,
+    phase,
     molar: { h, s, u, a, g, cp, cv },
     mass: {
       h: h * perMass,
@@ -357,9 +385,9 @@ export function assembleState(input: StateInputs): FluidState {
     dPdTPaPerK: v.dPdT,
     dPdRhoPaM3PerMol: dPdr,
     molarMassKgPerMol: M,
-    model: input.model,
+    model,
     referenceState: ig.referenceState,
-    departureMethod: input.departureMethod,
+    departureMethod,
     warnings,
   };
 }

@@ -43,7 +43,8 @@ export function emptyRootChoice(): RootChoice {
 const COMPOSITION = Object.freeze({ composition: true });
 
 /**
- * Evaluates every root in `rhos` (mol/m3, ascending) at T (K) and x once, with composition
+ * Evaluates every root in `rhos` (mol/m3, ascending; the first `rootCount`, default all) at T (K)
+ * and x once, with composition
  * derivatives (the chosen one needs them, and there are at most a few roots), and returns the
  * derivatives of the root the request picks (undefined when no root is mechanically stable);
  * `out` receives the rest.
@@ -51,19 +52,20 @@ const COMPOSITION = Object.freeze({ composition: true });
 export function chooseDensityRoot(
   model: ResidualModel,
   temperatureK: number,
-  rhos: readonly number[],
+  rhos: ArrayLike<number>,
   x: readonly number[],
   request: PhaseRequest,
   out: RootChoice,
+  rootCount: number = rhos.length,
 ): ResidualDerivatives | undefined {
-  const compareGibbs = request === "stable" && rhos.length > 1;
+  const compareGibbs = request === "stable" && rootCount > 1;
   let count = 0;
   let index = 0;
   let rho = NaN;
   let residual: ResidualDerivatives | undefined;
   let best = Infinity;
   let second = Infinity;
-  for (let k = 0; k < rhos.length; k++) {
+  for (let k = 0; k < rootCount; k++) {
     const r = model.residual(temperatureK, rhos[k], x, COMPOSITION);
     if (!(dPdRho(temperatureK, r, model.gasConstant) > 0)) continue;
     let take = count === 0 || request === "liquid";

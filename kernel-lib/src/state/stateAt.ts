@@ -17,7 +17,7 @@ import {
 import type { ResidualDerivatives } from "../eos/types.js";
 import type { IdealGasProperties, ReferenceState } from "../idealgas/types.js";
 import { leanIdealGasOf, type IdealGasValues, type LeanIdealGas } from "../idealgas/leanMixture.js";
-import { assembleState, dPdRho, pressureFromResidual, residualGibbsTP } from "./properties.js";
+import { assembleStateOf, dPdRho, pressureFromResidual, residualGibbsTP } from "./properties.js";
 import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
 import { densityRootsOf, type DensityRootOptions } from "./findDensityRoots.js";
 import { chooseDensityRoot, emptyRootChoice } from "./rootChoice.js";
@@ -83,6 +83,8 @@ const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 const NO_EXTRA: readonly ExtraWarning[] = Object.freeze([]);
 // the root choice of the current stateAtTP call, read out at once (plain numbers, reused)
 const choice = emptyRootChoice();
+// the density roots of the current stateAtTP call (models with densityRootsInto), read at once
+const ROOTS = new Float64Array(3);
 
 /**
  * The ideal-gas mixture at T (K) and x (at the fixed pressure of the state layer; properties.ts
@@ -159,20 +161,20 @@ function finish(
   const ideal = idealGasAt(binding, T, x);
   const own = model.checkValidity ? model.checkValidity(T, rho, x) : [];
   const warnings = extraWarnings.length === 0 ? own : own.concat(extraWarnings);
-  return assembleState({
-    temperatureK: T,
-    densityMolPerM3: rho,
+  return assembleStateOf(
+    T,
+    rho,
     x,
     residual,
     ideal,
-    molarMassKgPerMol: mixtureMolarMass(binding, x),
+    mixtureMolarMass(binding, x),
     phase,
-    model: model.info,
-    departureMethod: binding.departureMethod ?? "closed-form",
-    gasConstant: model.gasConstant,
+    model.info,
+    binding.departureMethod ?? "closed-form",
+    model.gasConstant ?? R_CODATA,
     warnings,
-    pressurePa: givenPressurePa,
-  });
+    givenPressurePa,
+  );
 }
 
 /**
@@ -212,7 +214,7 @@ export function stateAtTRho(
       received: densityMolPerM3,
     });
   }
-  const phase = phaseLabel(model, temperatureK, P, densityMolPerM3, x, "only", Z);
+  const phase = phaseLabel(model, temperatureK, P, densityMolPerM3, x, "only", Z, residual);
   return finish(binding, temperatureK, densityMolPerM3, x, residual, phase, NO_EXTRA);
 }
 
@@ -274,26 +276,36 @@ export function stateAtTP(
       received: request,
     });
   }
-  const rhos = densityRootsOf(model, temperatureK, pressurePa, x, options.rootSearch);
-  const residual = chooseDensityRoot(model, temperatureK, rhos, x, request, choice);
+  // the roots: into the reused scratch when the model can (no array per state)
+  let rhos: ArrayLike<number>;
+  let rootCount: number;
+  if (model.densityRootsInto !== undefined) {
+    rootCount = model.densityRootsInto(temperatureK, pressurePa, x, ROOTS);
+    rhos = ROOTS;
+  } else {
+    rhos = densityRootsOf(model, temperatureK, pressurePa, x, options.rootSearch);
+    rootCount = rhos.length;
+  }
+  const residual = chooseDensityRoot(model, temperatureK, rhos, x, request, choice, rootCount);
   const count = choice.stableCount;
   const index = choice.index;
   const rho = choice.densityMolPerM3;
   const best = choice.lowestGibbsOverRT;
   const second = choice.secondGibbsOverRT;
-  const compareGibbs = request === "stable" && rhos.length > 1;
+  const compareGibbs = request === "stable" && rootCount > 1;
   if (residual === undefined) {
+    const found = Array.from(rhos).slice(0, rootCount);
     throw new PhaseUnavailableError(
       `${model.info.name} has no mechanically stable density root at T = ${temperatureK} K, P = ${pressurePa} Pa` +
-        (rhos.length > 0
-          ? ` (roots found: ${rhos.map((r) => r.toPrecision(6)).join(", ")} mol/m3, all with dP/drho <= 0)`
+        (found.length > 0
+          ? ` (roots found: ${found.map((r) => r.toPrecision(6)).join(", ")} mol/m3, all with dP/drho <= 0)`
           : " (no root at all: the pressure is beyond what the equation can reach at this temperature)"),
     );
   }
   const position: "lowest" | "highest" | "only" =
     count === 1 ? "only" : index === 0 ? "lowest" : index === count - 1 ? "highest" : "only";
   const Z = 1 + residual.aD;
-  const label = phaseLabel(model, temperatureK, pressurePa, rho, x, position, Z);
+  const label = phaseLabel(model, temperatureK, pressurePa, rho, x, position, Z, residual);
   if (count === 1 && request !== "stable" && label !== "supercritical" && label !== request) {
     throw new PhaseUnavailableError(
       `no ${request} root at T = ${temperatureK} K, P = ${pressurePa} Pa: ${model.info.name} has a single stable density root there (${rho.toPrecision(6)} mol/m3, Z = ${Z.toPrecision(5)}), and it is ${label}-like (rule: state/phaseLabel.ts)`,

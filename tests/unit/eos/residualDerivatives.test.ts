@@ -33,6 +33,11 @@ function checkDerivatives(model: ResidualModel, T: number, rho: number, x: numbe
   expect(Math.abs(aDD - r.aDD) / scale(r.aDD)).toBeLessThan(tol);
   expect(Math.abs(aTT - r.aTT) / scale(r.aTT)).toBeLessThan(tol);
   expect(Math.abs(aDT - r.aDT) / scale(r.aDT)).toBeLessThan(tol);
+  if (r.aDDT !== undefined) {
+    // T d(aDD)/dT at constant rho (the cubics give it in closed form)
+    const aDDT = T * d1((t) => model.residual(t, rho, x).aDD, T);
+    expect(Math.abs(aDDT - r.aDDT) / scale(r.aDDT)).toBeLessThan(tol);
+  }
   if (r.aDDD !== undefined) {
     const aDDD = rho * d1((d) => model.residual(T, d, x).aDD, rho) - 2 * r.aDD;
     expect(Math.abs(aDDD - r.aDDD) / scale(r.aDDD)).toBeLessThan(tol);

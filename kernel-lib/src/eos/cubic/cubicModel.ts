@@ -139,6 +139,7 @@ class CubicModelImpl implements CubicModel {
     this.sumA = new Float64Array(n);
     this.scratchC0 = new Float64Array(n);
     this.scratchC1 = new Float64Array(n);
+    this.attractionX = new Float64Array(n);
   }
 
   /** Fills the cache for (T, x) unless it already holds it. */
@@ -206,21 +207,67 @@ class CubicModelImpl implements CubicModel {
    */
   readonly pressureFunction = (T: HyperDual, rho: HyperDual, x: readonly number[]): HyperDual => {
     const b = this.mixtureB(x);
-    const a = T.isConstant()
-      ? HyperDual.constant(this.plainAttraction(T.re, x))
-      : this.attraction(T, x);
+    const a = this.cachedAttraction(T, x);
     if (rho.isConstant()) {
       // rho a plain number: P = T [rho R / (1 - b rho)] - a [rho^2 / (D1 D2)]
       const r = rho.re;
       const repulsiveOverT = (r * R) / (1 - b * r);
       const attractiveOverA = (r * r) / ((1 + this.delta1 * b * r) * (1 + this.delta2 * b * r));
-      return T.mul(repulsiveOverT).sub(a.mul(attractiveOverA));
+      // T.mul(repulsiveOverT).sub(a.mul(attractiveOverA)) part by part: the same products and
+      // differences, one object instead of three
+      return new HyperDual(
+        T.re * repulsiveOverT - a.re * attractiveOverA,
+        T.e1 * repulsiveOverT - a.e1 * attractiveOverA,
+        T.e2 * repulsiveOverT - a.e2 * attractiveOverA,
+        T.e12 * repulsiveOverT - a.e12 * attractiveOverA,
+      );
     }
     const repulsive = rho.mul(R).mul(T).div(rho.mul(-b).add(1));
     const d1 = rho.mul(this.delta1 * b).add(1);
     const d2 = rho.mul(this.delta2 * b).add(1);
     return repulsive.sub(a.mul(rho).mul(rho).div(d1.mul(d2)));
   };
+
+  // a(T) of the last pressure-function call and its arguments: along an isotherm (the numeric
+  // departure integration) every node has the same T and x, so a(T) and its T-derivatives are
+  // formed once per isotherm. Returned as is (HyperDual is immutable), so the numbers are those
+  // of a fresh evaluation.
+  private attractionT: HyperDual | undefined;
+  private attractionValue: HyperDual | undefined;
+  private readonly attractionX: Float64Array;
+
+  /** a(T, x) of the pressure function, from the one-entry cache when T and x are the same. */
+  private cachedAttraction(T: HyperDual, x: readonly number[]): HyperDual {
+    const last = this.attractionT;
+    const n = x.length;
+    if (
+      last !== undefined &&
+      n === this.n &&
+      last.re === T.re &&
+      last.e1 === T.e1 &&
+      last.e2 === T.e2 &&
+      last.e12 === T.e12
+    ) {
+      let same = true;
+      for (let i = 0; i < n; i++) {
+        if (this.attractionX[i] !== x[i]) {
+          same = false;
+          break;
+        }
+      }
+      if (same) return this.attractionValue!;
+    }
+    const a = T.isConstant()
+      ? HyperDual.constant(this.plainAttraction(T.re, x))
+      : this.attraction(T, x);
+    // kept only for x with one entry per component (the model's own length)
+    if (n === this.n) {
+      for (let i = 0; i < n; i++) this.attractionX[i] = x[i];
+      this.attractionT = T;
+      this.attractionValue = a;
+    }
+    return a;
+  }
 
   /** b = sum_i x_i b_i, m3/mol (pressure function). */
   private mixtureB(x: readonly number[]): number {
@@ -320,9 +367,12 @@ class CubicModelImpl implements CubicModel {
       aTT: 0,
       aDT: 0,
       aDDD: 0,
+      aDDT: 0,
       dnA: undefined,
     };
     this.residualInto(temperatureK, densityMolPerM3, x, result);
+    // T d(aDD)/dT: in aDD = q^2 - F eps^2 I'' only F depends on T, and T dF/dT = TF
+    result.aDDT = -this.lastTF * this.lastEps2I2;
     if (request?.composition) {
       const n = this.n;
       const a = this.mixA;
@@ -348,6 +398,9 @@ class CubicModelImpl implements CubicModel {
   private lastI = NaN;
   private lastI1 = NaN;
   private lastLogTerm = NaN;
+  // T dF/dT and eps^2 I'' of the last residualInto call (for aDDT in residual())
+  private lastTF = NaN;
+  private lastEps2I2 = NaN;
 
   /**
    * The derivatives of {@link residual} without composition derivatives, written into `out` (no
@@ -391,6 +444,8 @@ class CubicModelImpl implements CubicModel {
     this.lastI = I;
     this.lastI1 = I1;
     this.lastLogTerm = logTerm;
+    this.lastTF = TF;
+    this.lastEps2I2 = eps * eps * I2;
     out.a = logTerm - F * I;
     out.aD = q - F * eps * I1;
     out.aDD = q * q - F * eps * eps * I2;
