@@ -418,11 +418,16 @@ export function monicCubicRootsInto(c: Float64Array, out: Float64Array): number 
         const sq = Math.sqrt(Q);
         const ratio = Math.max(-1, Math.min(1, R / (sq * sq * sq)));
         const theta = Math.acos(ratio);
-        y1 = largestMagnitude(
-          -2 * sq * Math.cos(theta / 3) - shift,
-          -2 * sq * Math.cos((theta + 2 * Math.PI) / 3) - shift,
-          -2 * sq * Math.cos((theta - 2 * Math.PI) / 3) - shift,
-        );
+        const yLow = -2 * sq * Math.cos(theta / 3) - shift;
+        const yHigh = -2 * sq * Math.cos((theta + 2 * Math.PI) / 3) - shift;
+        // the third, the middle root (its cosine lies in [-1/2, 1/2]), has |y| <= sq + |shift|:
+        // when one of the outer two is larger by a margin far above rounding, largestMagnitude
+        // cannot pick it, and its cosine is not needed
+        const outer = Math.max(Math.abs(yLow), Math.abs(yHigh));
+        y1 =
+          outer > (sq + Math.abs(shift)) * (1 + 1e-12)
+            ? largestMagnitude(yLow, yHigh, 0)
+            : largestMagnitude(yLow, yHigh, -2 * sq * Math.cos((theta - 2 * Math.PI) / 3) - shift);
       } else {
         const sgn = R >= 0 ? 1 : -1;
         const Acard = -sgn * Math.cbrt(Math.abs(R) + Math.sqrt(R2 - Q3));

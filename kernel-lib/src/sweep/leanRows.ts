@@ -127,7 +127,7 @@ interface Columns {
 
 /**
  * (T, P) points of one cubic fluid and composition in the stable root, written into columns.
- * `point(T, P, k)` for each point; false means "not done here" (nothing written; the caller takes
+ * `point(i, j, k)` for each point (positions on the plan's axes, index in the columns); false means "not done here" (nothing written; the caller takes
  * the general path for that point).
  */
 export class CubicTPRows {
@@ -139,9 +139,8 @@ export class CubicTPRows {
   private readonly Rg: number;
   private readonly gasConstant: number | undefined;
   private readonly M: number;
-  private readonly massScale: number;
   private readonly ids: Int32Array;
-  private readonly scaled: Uint8Array;
+  private readonly factor: Float64Array;
   private readonly cols: Float64Array[];
   private readonly phaseCount: Uint8Array;
   private readonly phaseKind: Uint8Array;
@@ -156,6 +155,8 @@ export class CubicTPRows {
   private readonly pc: number;
   private readonly rhoc: number;
   // scratch: coefficients and Z roots, densities, derivatives at the roots, the values
+  private readonly temperatures: Float64Array;
+  private readonly pressures: Float64Array;
   private readonly coefficients = new Float64Array(3);
   private readonly zRoots = new Float64Array(3);
   private readonly rhos = new Float64Array(3);
@@ -182,12 +183,22 @@ export class CubicTPRows {
 
   constructor(
     binding: FluidBinding,
-    x: readonly number[],
-    properties: readonly SweepProperty[],
-    ids: Int32Array,
-    basis: "molar" | "mass",
+    plan: {
+      readonly x: readonly number[];
+      readonly properties: readonly SweepProperty[];
+      readonly propertyIds: Int32Array;
+      readonly basis: "molar" | "mass";
+      readonly firstAxis: Float64Array;
+      readonly secondAxis: Float64Array;
+    },
     columns: Columns,
   ) {
+    const x = plan.x;
+    const properties = plan.properties;
+    const ids = plan.propertyIds;
+    const basis = plan.basis;
+    this.temperatures = plan.firstAxis;
+    this.pressures = plan.secondAxis;
     const model = binding.model;
     if (!isRowCubic(model)) throw new Error("CubicTPRows: not a cubic model (isRowCubic)");
     this.model = model;
@@ -198,10 +209,10 @@ export class CubicTPRows {
     this.gasConstant = model.gasConstant;
     this.Rg = model.gasConstant ?? R;
     this.M = mixtureMolarMass(binding, x);
-    this.massScale = 1 / this.M;
     this.ids = ids;
     const mass = basis === "mass";
-    this.scaled = Uint8Array.from(properties, (p) => (mass && PER_AMOUNT.has(p) ? 1 : 0));
+    const massScale = 1 / this.M;
+    this.factor = Float64Array.from(properties, (p) => (mass && PER_AMOUNT.has(p) ? massScale : 1));
     this.cols = columns.values;
     this.phaseCount = columns.phaseCount;
     this.phaseKind = columns.phaseKind;
@@ -275,10 +286,12 @@ export class CubicTPRows {
   }
 
   /**
-   * The point at T (K), P (Pa) into index `k` of the columns; false (nothing written) when the
-   * general path must take it.
+   * The point of temperature `temperatures[i]` (K) and pressure `pressures[j]` (Pa) of the plan
+   * into index `k` of the columns; false (nothing written) when the general path must take it.
    */
-  point(T: number, P: number, k: number): boolean {
+  point(i: number, j: number, k: number): boolean {
+    const T = this.temperatures[i];
+    const P = this.pressures[j];
     if (T !== this.rowT ? !this.setRow(T) : !this.rowOk) return false;
     // checkPressure's condition (its error comes from the general path)
     if (!(P > 0 && P >= MIN_PRESSURE_PA && P <= MAX_PRESSURE_PA)) return false;
@@ -323,16 +336,18 @@ export class CubicTPRows {
       if (!(eps < 1)) return false;
       const D1 = 1 + d1 * eps;
       const D2 = 1 + d2 * eps;
-      const I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
       const I1 = 1 / (D1 * D2);
       const g1 = d1 / D1 + d2 / D2;
       const I2 = -g1 * I1;
       const oneMinusEps = 1 - eps;
-      const logTerm = -Math.log1p(-eps);
       const q = eps / oneMinusEps;
-      r.a = logTerm - F * I;
       r.aD = q - F * eps * I1;
       r.aDD = q * q - F * eps * eps * I2;
+      // a mechanically unstable root is dropped before its logarithms are taken
+      if (!(dPdRho(T, r, this.gasConstant) > 0)) continue;
+      const I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
+      const logTerm = -Math.log1p(-eps);
+      r.a = logTerm - F * I;
       r.aT = -TF * I;
       if (all) {
         const I3 = (g1 * g1 + (d1 * d1) / (D1 * D1) + (d2 * d2) / (D2 * D2)) * I1;
@@ -340,7 +355,6 @@ export class CubicTPRows {
         r.aDT = -TF * eps * I1;
         r.aDDD = 2 * q * q * q - F * eps * eps * eps * I3;
       }
-      if (!(dPdRho(T, r, this.gasConstant) > 0)) continue;
       let take = stable === 0;
       if (compareGibbs) {
         const g = residualGibbsTP(r);
@@ -396,85 +410,87 @@ export class CubicTPRows {
     const v = this.v;
     const ids = this.ids;
     const cols = this.cols;
+    // one store per case (a shared variable of mixed cases made the engine box the numbers); the
+    // factor is 1 (exact) or 1 / M for an amount-specific property on a mass basis
     for (let m = 0; m < ids.length; m++) {
-      let value: number;
+      const col = cols[m];
+      const f = this.factor[m];
       switch (ids[m]) {
         case T_ID:
-          value = T;
+          col[k] = T * f;
           break;
         case P_ID:
-          value = P;
+          col[k] = P * f;
           break;
         case RHO_ID:
-          value = rho;
+          col[k] = rho * f;
           break;
         case RHO_MASS_ID:
-          value = rho * this.M;
+          col[k] = rho * this.M * f;
           break;
         case Z_ID:
-          value = v.Z;
+          col[k] = v.Z * f;
           break;
         case H_ID:
-          value = v.h;
+          col[k] = v.h * f;
           break;
         case S_ID:
-          value = v.s;
+          col[k] = v.s * f;
           break;
         case U_ID:
-          value = v.u;
+          col[k] = v.u * f;
           break;
         case A_ID:
-          value = v.a;
+          col[k] = v.a * f;
           break;
         case G_ID:
-          value = v.g;
+          col[k] = v.g * f;
           break;
         case CP_ID:
-          value = v.cp;
+          col[k] = v.cp * f;
           break;
         case CV_ID:
-          value = v.cv;
+          col[k] = v.cv * f;
           break;
         case W_ID:
-          value = v.speedOfSound;
+          col[k] = v.speedOfSound * f;
           break;
         case JT_ID:
-          value = v.jt;
+          col[k] = v.jt * f;
           break;
         case KAPPA_ID:
-          value = v.kappaT;
+          col[k] = v.kappaT * f;
           break;
         case BETA_ID:
-          value = v.beta;
+          col[k] = v.beta * f;
           break;
         case H_RES_ID:
-          value = v.hRes;
+          col[k] = v.hRes * f;
           break;
         case S_RES_ID:
-          value = v.sTP;
+          col[k] = v.sTP * f;
           break;
         case U_RES_ID:
-          value = v.uRes;
+          col[k] = v.uRes * f;
           break;
         case A_RES_ID:
-          value = v.aTP;
+          col[k] = v.aTP * f;
           break;
         case G_RES_ID:
-          value = v.gTP;
+          col[k] = v.gTP * f;
           break;
         case CP_RES_ID:
-          value = v.cp - this.ig.cp;
+          col[k] = (v.cp - this.ig.cp) * f;
           break;
         case CV_RES_ID:
-          value = v.cvRes;
+          col[k] = v.cvRes * f;
           break;
         case QUALITY_ID:
-          value = label === "vapor" ? 1 : label === "liquid" ? 0 : NaN;
+          col[k] = (label === "vapor" ? 1 : label === "liquid" ? 0 : NaN) * f;
           break;
         default:
-          value = NaN;
+          col[k] = NaN;
       }
-      cols[m][k] = this.scaled[m] === 1 ? value * this.massScale : value;
     }
     this.phaseCount[k] = 1;
     this.phaseKind[k] =

@@ -496,7 +496,7 @@ export function evaluateSweepRange(
   // (T, P) points of one phase of the feed of a cubic through the row kernel (leanRows.ts)
   const rows =
     plan.specification === "TP" && (ctx.pure || plan.phaseCheck === "none") && isRowCubic(model)
-      ? new CubicTPRows(fluid.binding, plan.x, plan.properties, ids, plan.basis, columns)
+      ? new CubicTPRows(fluid.binding, plan, columns)
       : undefined;
   let failed = 0;
   let nextChunk = start + chunk;
@@ -505,21 +505,17 @@ export function evaluateSweepRange(
   let col = grid ? start - row * n2 : 0;
   for (let i = start; i < end; i++) {
     const local = i - start;
-    let a: number;
-    let b: number;
-    if (grid) {
-      a = plan.firstAxis[row];
-      b = plan.secondAxis[col];
-      if (++col === n2) {
-        col = 0;
-        row++;
-      }
-    } else {
-      a = plan.firstAxis[i];
-      b = plan.secondAxis[i];
+    // positions on the two axes (the row kernel takes them as integers: no boxed numbers)
+    const ia = grid ? row : i;
+    const ib = grid ? col : i;
+    if (grid && ++col === n2) {
+      col = 0;
+      row++;
     }
+    const a = plan.firstAxis[ia];
+    const b = plan.secondAxis[ib];
     try {
-      if (rows === undefined || !rows.point(a, b, local)) {
+      if (rows === undefined || !rows.point(ia, ib, local)) {
         evaluatePoint(ctx, a, b);
         const pt = ctx.pt;
         const scale = mass ? 1 / pt.M : 1;

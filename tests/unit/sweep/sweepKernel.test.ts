@@ -125,7 +125,16 @@ describe("monicCubicRootsInto equals realCubicRootsInto to the last bit", () => 
       ),
       { numRuns: 500 },
     );
-    // double and triple roots, all zero, a rescaled cubic
+    // near-double roots (the middle root's magnitude close to the largest), double and triple
+    // roots, all zero, a rescaled cubic
+    for (const [r1, r2, r3] of [
+      [-2, 1, 1 + 1e-9],
+      [-2, 1 - 1e-7, 1],
+      [-1, -1 + 1e-10, 2],
+      [0.5, 0.5 + 1e-12, -1],
+    ]) {
+      same(-(r1 + r2 + r3), r1 * r2 + r1 * r3 + r2 * r3, -(r1 * r2 * r3));
+    }
     same(-3, 3, -1);
     same(-4, 5, -2);
     same(0, 0, 0);
