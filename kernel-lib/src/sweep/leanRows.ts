@@ -80,16 +80,21 @@ export function isRowCubic(model: ResidualModel): model is ResidualModel & Cubic
   );
 }
 
-const draft = (): ResidualDerivativesDraft => ({
-  a: 0,
-  aD: 0,
-  aDD: 0,
-  aT: 0,
-  aTT: 0,
-  aDT: 0,
-  aDDD: 0,
-  dnA: undefined,
-});
+/**
+ * The derivatives at one root: a class of its own whose fields hold doubles from the start (an
+ * object literal with integer zeros shares its hidden class with every such literal, and one
+ * that ever held a non-number would make each store here allocate a box).
+ */
+class RootDerivatives implements ResidualDerivativesDraft {
+  a = NaN;
+  aD = NaN;
+  aDD = NaN;
+  aT = NaN;
+  aTT = NaN;
+  aDT = NaN;
+  aDDD = NaN;
+  dnA = undefined;
+}
 
 // property ids of the columns (the order of SWEEP_PROPERTIES; runSweep.ts's PROPERTY_ID)
 const T_ID = 0;
@@ -160,8 +165,8 @@ export class CubicTPRows {
   private readonly coefficients = new Float64Array(3);
   private readonly zRoots = new Float64Array(3);
   private readonly rhos = new Float64Array(3);
-  private readonly ra = draft();
-  private readonly rb = draft();
+  private readonly ra = new RootDerivatives();
+  private readonly rb = new RootDerivatives();
   private readonly v = emptyStateValues();
   private readonly ig: IdealGasProperties;
   // the current row
