@@ -423,11 +423,12 @@ export function monicCubicRootsInto(c: Float64Array, out: Float64Array): number 
         // the third, the middle root (its cosine lies in [-1/2, 1/2]), has |y| <= sq + |shift|:
         // when one of the outer two is larger by a margin far above rounding, largestMagnitude
         // cannot pick it, and its cosine is not needed
-        const outer = Math.max(Math.abs(yLow), Math.abs(yHigh));
-        y1 =
-          outer > (sq + Math.abs(shift)) * (1 + 1e-12)
-            ? largestMagnitude(yLow, yHigh, 0)
-            : largestMagnitude(yLow, yHigh, -2 * sq * Math.cos((theta - 2 * Math.PI) / 3) - shift);
+        // (largestMagnitude written out: the first of the three with the largest magnitude)
+        y1 = Math.abs(yHigh) > Math.abs(yLow) ? yHigh : yLow;
+        if (!(Math.abs(y1) > (sq + Math.abs(shift)) * (1 + 1e-12))) {
+          const yMid = -2 * sq * Math.cos((theta - 2 * Math.PI) / 3) - shift;
+          if (Math.abs(yMid) > Math.abs(y1)) y1 = yMid;
+        }
       } else {
         const sgn = R >= 0 ? 1 : -1;
         const Acard = -sgn * Math.cbrt(Math.abs(R) + Math.sqrt(R2 - Q3));
