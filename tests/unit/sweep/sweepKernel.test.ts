@@ -175,6 +175,39 @@ describe("the cubic row kernel equals stateAtTP for every extent", () => {
     for (const set of SETS) checkGrid(fluid, [150, 240.5, 340.25], [1e5, 3e6, 12e6], x, set);
   });
 
+  it("point lists (a new temperature at every point) equal stateAtTP", () => {
+    const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+    const pair = fc.tuple(
+      fc.double({ min: 95, max: 620, noNaN: true }),
+      fc.double({ min: 1e3, max: 40e6, noNaN: true }),
+    );
+    fc.assert(
+      fc.property(
+        fc.array(pair, { minLength: 1, maxLength: 12 }),
+        fc.constantFrom(...SETS),
+        (pts, set) => {
+          const r = fluid.sweep({
+            specification: "TP",
+            layout: "pairs",
+            first: pts.map((p) => p[0]),
+            second: pts.map((p) => p[1]),
+            properties: [...set],
+          });
+          pts.forEach(([T, P], k) => {
+            const st = fluid.stateAtTP(T, P);
+            expect(r.errorCode[k]).toBe(0);
+            expect(r.phaseKind[k]).toBe(kindOf(st.phase));
+            for (const p of set) {
+              const expected = p === "P" ? P : p === "quality" ? qualityOf(st.phase) : GET[p]!(st);
+              expect(Object.is(r.values[p]![k], expected), `${p} at ${T} K, ${P} Pa`).toBe(true);
+            }
+          });
+        },
+      ),
+      { numRuns: 30 },
+    );
+  });
+
   it("mass basis and failing points inside a row", () => {
     const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
     const r = fluid.sweep({
