@@ -353,3 +353,172 @@ function quadraticRoots(
   out[offset + 1] = c / q;
   return 2;
 }
+
+// closed-form roots of the current monicCubicRootsInto call (at most 3), reused
+const monicRaw = new Float64Array(3);
+
+/**
+ * The roots of the monic cubic x^3 + c[0] x^2 + c[1] x + c[2] = 0 written ascending into
+ * `out[0 .. count - 1]`, their number returned: the algorithm of {@link realCubicRootsInto} for
+ * c3 = 1, step for step on the same numbers (so the same roots to the last bit; a test holds the
+ * two equal), written as one function whose numbers come and go through typed arrays. A call that
+ * passes plain numbers to a function the engine does not inline boxes each of them on the heap; in
+ * a loop over millions of states (the sweeps' row kernel) those boxes cost more than the algebra.
+ *
+ * @throws InputError as realCubicRootsInto: a coefficient NaN or infinite.
+ */
+export function monicCubicRootsInto(c: Float64Array, out: Float64Array): number {
+  const c2 = c[0];
+  const c1 = c[1];
+  const c0 = c[2];
+  if (!Number.isFinite(c2) || !Number.isFinite(c1) || !Number.isFinite(c0)) {
+    checkCoefficient(1, c2);
+    checkCoefficient(2, c1);
+    checkCoefficient(3, c0);
+  }
+  const raw = monicRaw;
+  let count = 0;
+  // closedFormCubic(c2, c1, c0, raw), inline
+  {
+    const a = c2;
+    const b = c1;
+    const cc = c0;
+    const aa = Math.abs(a);
+    const ab = Math.abs(b);
+    const ac = Math.abs(cc);
+    let s = 1;
+    let zero = false;
+    if (!(aa <= 1 && ab <= 1 && ac <= 1 && (aa > 0.5 || ab > 0.25 || ac > 0.125))) {
+      const size = Math.max(aa, Math.sqrt(ab), Math.cbrt(ac));
+      if (size === 0) zero = true;
+      else s = Math.pow(2, Math.ceil(Math.log2(size)));
+    }
+    if (zero) {
+      raw[0] = 0;
+      raw[1] = 0;
+      raw[2] = 0;
+      count = 3;
+    } else {
+      const A = s === 1 ? a : a / s;
+      const B = s === 1 ? b : b / (s * s);
+      const C = s === 1 ? cc : cc / (s * s * s);
+      const Q = (A * A - 3 * B) / 9;
+      const R = (2 * A * A * A - 9 * A * B + 27 * C) / 54;
+      const R2 = R * R;
+      const Q3 = Q * Q * Q;
+      const shift = A / 3;
+      const band = 16 * EPS * Math.max(R2, Math.abs(Q3), 16 * EPS * EPS);
+      let y1 = NaN;
+      let three = true;
+      if (Math.abs(R2 - Q3) <= band && Q >= 0) {
+        const sq = Math.sqrt(Q);
+        const sgn = R >= 0 ? 1 : -1;
+        y1 = largestMagnitude(-2 * sgn * sq - shift, sgn * sq - shift, sgn * sq - shift);
+      } else if (R2 < Q3) {
+        const sq = Math.sqrt(Q);
+        const ratio = Math.max(-1, Math.min(1, R / (sq * sq * sq)));
+        const theta = Math.acos(ratio);
+        const yLow = -2 * sq * Math.cos(theta / 3) - shift;
+        const yHigh = -2 * sq * Math.cos((theta + 2 * Math.PI) / 3) - shift;
+        // the third, the middle root (its cosine lies in [-1/2, 1/2]), has |y| <= sq + |shift|:
+        // when one of the outer two is larger by a margin far above rounding, largestMagnitude
+        // cannot pick it, and its cosine is not needed
+        // (largestMagnitude written out: the first of the three with the largest magnitude)
+        y1 = Math.abs(yHigh) > Math.abs(yLow) ? yHigh : yLow;
+        if (!(Math.abs(y1) > (sq + Math.abs(shift)) * (1 + 1e-12))) {
+          const yMid = -2 * sq * Math.cos((theta - 2 * Math.PI) / 3) - shift;
+          if (Math.abs(yMid) > Math.abs(y1)) y1 = yMid;
+        }
+      } else {
+        const sgn = R >= 0 ? 1 : -1;
+        const Acard = -sgn * Math.cbrt(Math.abs(R) + Math.sqrt(R2 - Q3));
+        const Bcard = Acard === 0 ? 0 : Q / Acard;
+        raw[0] = (Acard + Bcard - shift) * s;
+        count = 1;
+        three = false;
+      }
+      if (three) {
+        for (let k = 0; k < 4; k++) {
+          const p = ((y1 + A) * y1 + B) * y1 + C;
+          const dp = (3 * y1 + 2 * A) * y1 + B;
+          if (p === 0 || dp === 0) break;
+          const yNew = y1 - p / dp;
+          const pNew = ((yNew + A) * yNew + B) * yNew + C;
+          if (!(Math.abs(pNew) < Math.abs(p))) break;
+          y1 = yNew;
+        }
+        const P = -C / y1;
+        const S = (B - P) / y1;
+        // quadraticRoots(1, -S, P, raw, 1), inline
+        let pairCount: number;
+        {
+          const qa = 1;
+          const qb = -S;
+          const qc = P;
+          const size = Math.max(Math.abs(qb), Math.sqrt(Math.abs(qa * qc)));
+          if (size === 0) {
+            raw[1] = 0;
+            raw[2] = 0;
+            pairCount = 2;
+          } else {
+            const bs = qb / size;
+            const acs = qa / size;
+            const ccs = qc / size;
+            const disc = bs * bs - 4 * acs * ccs;
+            const qband = 8 * EPS * Math.max(bs * bs, Math.abs(4 * acs * ccs));
+            if (Math.abs(disc) <= qband) {
+              const r = -qb / (2 * qa);
+              raw[1] = r;
+              raw[2] = r;
+              pairCount = 2;
+            } else if (disc < 0) {
+              pairCount = 0;
+            } else {
+              const q = -0.5 * (bs + (bs >= 0 ? 1 : -1) * Math.sqrt(disc)) * size;
+              if (q === 0) {
+                raw[1] = 0;
+                raw[2] = 0;
+              } else {
+                raw[1] = q / qa;
+                raw[2] = qc / q;
+              }
+              pairCount = 2;
+            }
+          }
+        }
+        raw[0] = y1 * s;
+        for (let k = 1; k <= pairCount; k++) raw[k] *= s;
+        count = 1 + pairCount;
+      }
+    }
+  }
+  // the polishing of solveInto with c3 = 1 (3 * c3 * x = 3 * x and 1 * x = x exactly)
+  for (let i = 0; i < count; i++) {
+    let x = raw[i];
+    let nearest = Infinity;
+    for (let j = 0; j < count; j++) {
+      if (j !== i && raw[j] !== x) nearest = Math.min(nearest, Math.abs(raw[j] - x));
+    }
+    let px = ((x + c2) * x + c1) * x + c0;
+    const dp0 = (3 * x + 2 * c2) * x + c1;
+    const steps = count === 1 && Math.abs(px) <= 2 * EPS * Math.abs(x) * Math.abs(dp0) ? 0 : 4;
+    for (let k = 0; k < steps && px !== 0; k++) {
+      const dp = (3 * x + 2 * c2) * x + c1;
+      if (dp === 0 || !Number.isFinite(dp)) break;
+      const step = px / dp;
+      const xNew = x - step;
+      const pNew = ((xNew + c2) * xNew + c1) * xNew + c0;
+      if (!(Math.abs(pNew) < Math.abs(px)) || !(Math.abs(xNew - raw[i]) < nearest / 2)) break;
+      x = xNew;
+      px = pNew;
+      if (Math.abs(step) <= 2 * EPS * Math.abs(x)) break;
+    }
+    let j = i;
+    while (j > 0 && out[j - 1] > x) {
+      out[j] = out[j - 1];
+      j--;
+    }
+    out[j] = x;
+  }
+  return count;
+}

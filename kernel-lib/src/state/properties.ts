@@ -222,6 +222,35 @@ export function residualValuesInto(
 }
 
 /**
+ * The pressure, Z, the departures and the absolute h, s, u, a, g at T (K), rho (mol/m3) into
+ * `out` (no heat capacities or derivatives: the sweeps' extent for energies alone; stateValuesInto
+ * adds the rest to these very numbers). Reads aD, a and aT of the derivatives.
+ */
+export function energyValuesInto(
+  temperatureK: number,
+  densityMolPerM3: number,
+  d: ResidualDerivatives,
+  ig: IdealGasProperties,
+  gasConstant: number,
+  out: StateValues,
+): void {
+  const Rg = gasConstant;
+  const T = temperatureK;
+  const rho = densityMolPerM3;
+  const RT = Rg * T;
+  residualValuesInto(T, d, Rg, out);
+  // absolute: ideal gas at the same T and density plus the TV residuals
+  const lnPressureShift = Math.log((rho * RT) / ig.pressurePa);
+  out.pressurePa = pressureFromResidual(T, rho, d.aD, Rg);
+  out.Z = 1 + d.aD;
+  out.h = ig.h + out.hRes;
+  out.s = ig.s - Rg * lnPressureShift + out.sTV;
+  out.u = ig.u + out.uRes;
+  out.a = ig.a + RT * lnPressureShift + out.aTV;
+  out.g = ig.g + RT * lnPressureShift + out.gTV;
+}
+
+/**
  * Every property of the header at T (K), rho (mol/m3) from the residual derivatives and the ideal
  * gas (any pressure), into `out`: assembleState builds its record from these very numbers, so a
  * sweep that fills `out` gets the single-state values to the last bit.
@@ -238,10 +267,8 @@ export function stateValuesInto(
   const Rg = gasConstant;
   const T = temperatureK;
   const rho = densityMolPerM3;
-  const RT = Rg * T;
-  const Z = 1 + d.aD;
-  const P = pressureFromResidual(T, rho, d.aD, Rg);
-  residualValuesInto(T, d, Rg, out);
+  energyValuesInto(T, rho, d, ig, Rg, out);
+  const P = out.pressurePa;
   // derivatives and heat capacities
   const dPdr = dPdRho(T, d, Rg);
   const dPdT = dPdTAtDensity(rho, d, Rg);
@@ -253,15 +280,6 @@ export function stateValuesInto(
   const w2 = ((cp / cv) * dPdr) / M;
   const kappaT = 1 / (rho * dPdr);
   const beta = kappaT * dPdT;
-  // absolute: ideal gas at the same T and density plus the TV residuals
-  const lnPressureShift = Math.log((rho * RT) / ig.pressurePa);
-  out.pressurePa = P;
-  out.Z = Z;
-  out.h = ig.h + out.hRes;
-  out.s = ig.s - Rg * lnPressureShift + out.sTV;
-  out.u = ig.u + out.uRes;
-  out.a = ig.a + RT * lnPressureShift + out.aTV;
-  out.g = ig.g + RT * lnPressureShift + out.gTV;
   out.cp = cp;
   out.cv = cv;
   out.cvRes = cvRes;

@@ -39,6 +39,7 @@ import { saturationAtTemperature } from "../phase/saturation.js";
 import { locateCriticalPoint } from "../phase/criticalPoint.js";
 import { stateAtTemperatureDensity, type TwoPhaseState } from "../phase/twoPhaseState.js";
 import { axisValues } from "./axes.js";
+import { CubicTPRows, isRowCubic } from "./leanRows.js";
 import {
   MAX_ERROR_MESSAGES,
   SWEEP_ERROR_CODES,
@@ -492,6 +493,11 @@ export function evaluateSweepRange(
   const mass = plan.basis === "mass";
   const perAmount = new Uint8Array(nProps);
   for (let k = 0; k < nProps; k++) perAmount[k] = PER_AMOUNT.has(plan.properties[k]) ? 1 : 0;
+  // (T, P) points of one phase of the feed of a cubic through the row kernel (leanRows.ts)
+  const rows =
+    plan.specification === "TP" && (ctx.pure || plan.phaseCheck === "none") && isRowCubic(model)
+      ? new CubicTPRows(fluid.binding, plan, columns)
+      : undefined;
   let failed = 0;
   let nextChunk = start + chunk;
   // grid position of point `start`, advanced without a division per point
@@ -499,30 +505,28 @@ export function evaluateSweepRange(
   let col = grid ? start - row * n2 : 0;
   for (let i = start; i < end; i++) {
     const local = i - start;
-    let a: number;
-    let b: number;
-    if (grid) {
-      a = plan.firstAxis[row];
-      b = plan.secondAxis[col];
-      if (++col === n2) {
-        col = 0;
-        row++;
-      }
-    } else {
-      a = plan.firstAxis[i];
-      b = plan.secondAxis[i];
+    // positions on the two axes (the row kernel takes them as integers: no boxed numbers)
+    const ia = grid ? row : i;
+    const ib = grid ? col : i;
+    if (grid && ++col === n2) {
+      col = 0;
+      row++;
     }
+    const a = plan.firstAxis[ia];
+    const b = plan.secondAxis[ib];
     try {
-      evaluatePoint(ctx, a, b);
-      const pt = ctx.pt;
-      const scale = mass ? 1 / pt.M : 1;
-      for (let k = 0; k < nProps; k++) {
-        const value = valueOf(ids[k], pt, b, plan.specification);
-        cols[k][local] = perAmount[k] === 1 && mass ? value * scale : value;
+      if (rows === undefined || !rows.point(ia, ib, local)) {
+        evaluatePoint(ctx, a, b);
+        const pt = ctx.pt;
+        const scale = mass ? 1 / pt.M : 1;
+        for (let k = 0; k < nProps; k++) {
+          const value = valueOf(ids[k], pt, b, plan.specification);
+          cols[k][local] = perAmount[k] === 1 && mass ? value * scale : value;
+        }
+        columns.phaseCount[local] = pt.phaseCount;
+        columns.phaseKind[local] = pt.phaseKind;
+        columns.errorCode[local] = 0;
       }
-      columns.phaseCount[local] = pt.phaseCount;
-      columns.phaseKind[local] = pt.phaseKind;
-      columns.errorCode[local] = 0;
     } catch (e) {
       failed++;
       const name = errorName(e);

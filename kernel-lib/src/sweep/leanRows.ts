@@ -1,0 +1,509 @@
+/**
+ * The row kernel of (T, P) sweeps for the cubic equations of state (eos/cubic/cubicModel.ts):
+ * what depends on T alone is taken once per temperature row (the check of T, the mixture's a(T),
+ * da/dT, d2a/dT2 and b through the model's own mixtureParameters, the constants of the Z-cubic and
+ * of alpha_r, the ideal gas of the feed), and per point only the Z-cubic
+ * (numerics/cubicRoots.ts, monicCubicRootsInto), the derivatives of alpha_r at each root, the root
+ * choice, the label and the property formulas run, in one loop body that writes straight into the
+ * sweep's columns: no per-point objects and no plain numbers passed to functions that are not
+ * inlined (each such number would be boxed on the heap).
+ *
+ * The same numbers as the single state, to the last bit: the coefficients of the Z-cubic and the
+ * conversion of its roots to densities are those of CubicModelImpl.densityRootsInto, the
+ * derivatives those of CubicModelImpl.residualInto (the same expressions in the same order, on
+ * the same mixture parameters), the root choice that of state/rootChoice.ts
+ * (chooseDensityRootInto: mechanically unstable roots dropped by dPdRho, then the lowest
+ * g_r/RT by residualGibbsTP, the first on a tie), the pure fluid's label the rule of
+ * state/phaseLabel.ts (a mixture's label is phaseLabel itself), and the properties come from
+ * state/properties.ts (residualValuesInto, energyValuesInto, stateValuesInto). The sweep tests
+ * (tests/unit/sweep/) compare every property, the phase kind and the error code with stateAtTP
+ * point by point; a change of the cubic's arithmetic must be made in both places.
+ *
+ * What the kernel does not finish (a temperature or pressure outside the limits, a density at
+ * close packing, no mechanically stable root) it hands back to the general path (runSweep.ts),
+ * which throws the single state's typed error for that point: per-point error codes and messages
+ * are those of stateValuesAtTP.
+ *
+ * Extents: "residual" (departures, Z, rho), "energies" (also absolute h, s, u, a, g: the ideal gas
+ * of the row, no heat capacities), "all" (also cp, cv, w, jt, kappaT, beta, cpRes, cvRes).
+ */
+import { R } from "../constants.js";
+import type { ResidualDerivativesDraft, ResidualModel } from "../eos/types.js";
+import type { CubicModel } from "../eos/cubic/cubicModel.js";
+import { dPdRho, residualGibbsTP } from "../eos/residualRelations.js";
+import { monicCubicRootsInto } from "../numerics/cubicRoots.js";
+import type { IdealGasProperties } from "../idealgas/types.js";
+import type { FluidBinding, PhaseLabel } from "../state/types.js";
+import {
+  emptyStateValues,
+  energyValuesInto,
+  residualValuesInto,
+  stateValuesInto,
+} from "../state/properties.js";
+import { idealGasAt, mixtureMolarMass } from "../state/stateAt.js";
+import { checkTemperature } from "../state/checkInputs.js";
+import { phaseLabel } from "../state/phaseLabel.js";
+import { MAX_PRESSURE_PA, MIN_PRESSURE_PA } from "../state/physicalLimits.js";
+import { SWEEP_PHASE_KINDS, PER_AMOUNT, type SweepProperty } from "./types.js";
+
+/** What the kernel computes per point (see the header). */
+export type RowExtent = "residual" | "energies" | "all";
+
+const ENERGIES: ReadonlySet<SweepProperty> = new Set<SweepProperty>(["h", "s", "u", "a", "g"]);
+const ALL: ReadonlySet<SweepProperty> = new Set<SweepProperty>([
+  "cp",
+  "cv",
+  "w",
+  "jt",
+  "kappaT",
+  "beta",
+  "cpRes",
+  "cvRes",
+]);
+
+/** The smallest extent that gives these properties. */
+export function rowExtentOf(properties: readonly SweepProperty[]): RowExtent {
+  if (properties.some((p) => ALL.has(p))) return "all";
+  if (properties.some((p) => ENERGIES.has(p))) return "energies";
+  return "residual";
+}
+
+/** Whether the row kernel serves this model: a cubic of eos/cubic (with its allocation-free members). */
+export function isRowCubic(model: ResidualModel): model is ResidualModel & CubicModel {
+  const m = model as Partial<CubicModel> & ResidualModel;
+  return (
+    typeof m.mixtureParameters === "function" &&
+    typeof m.family?.delta1 === "number" &&
+    typeof m.family?.delta2 === "number" &&
+    typeof m.residualInto === "function" &&
+    typeof m.densityRootsInto === "function"
+  );
+}
+
+/**
+ * The derivatives at one root: a class of its own whose fields hold doubles from the start (an
+ * object literal with integer zeros shares its hidden class with every such literal, and one
+ * that ever held a non-number would make each store here allocate a box).
+ */
+class RootDerivatives implements ResidualDerivativesDraft {
+  a = NaN;
+  aD = NaN;
+  aDD = NaN;
+  aT = NaN;
+  aTT = NaN;
+  aDT = NaN;
+  aDDD = NaN;
+  dnA = undefined;
+}
+
+// property ids of the columns (the order of SWEEP_PROPERTIES; runSweep.ts's PROPERTY_ID)
+const T_ID = 0;
+const P_ID = 1;
+const RHO_ID = 2;
+const RHO_MASS_ID = 3;
+const Z_ID = 4;
+const H_ID = 5;
+const S_ID = 6;
+const U_ID = 7;
+const A_ID = 8;
+const G_ID = 9;
+const CP_ID = 10;
+const CV_ID = 11;
+const W_ID = 12;
+const JT_ID = 13;
+const KAPPA_ID = 14;
+const BETA_ID = 15;
+const H_RES_ID = 16;
+const S_RES_ID = 17;
+const U_RES_ID = 18;
+const A_RES_ID = 19;
+const G_RES_ID = 20;
+const CP_RES_ID = 21;
+const CV_RES_ID = 22;
+const QUALITY_ID = 23;
+
+/** The columns a kernel writes (index 0 is the first point of the range). */
+interface Columns {
+  readonly values: Float64Array[];
+  readonly phaseCount: Uint8Array;
+  readonly phaseKind: Uint8Array;
+  readonly errorCode: Uint8Array;
+}
+
+/**
+ * (T, P) points of one cubic fluid and composition in the stable root, written into columns.
+ * `point(i, j, k)` for each point (positions on the plan's axes, index in the columns); false means "not done here" (nothing written; the caller takes
+ * the general path for that point).
+ */
+export class CubicTPRows {
+  private readonly model: ResidualModel & CubicModel;
+  private readonly binding: FluidBinding;
+  private readonly x: readonly number[];
+  private readonly extent: RowExtent;
+  private readonly all: boolean;
+  private readonly Rg: number;
+  private readonly gasConstant: number | undefined;
+  private readonly M: number;
+  private readonly ids: Int32Array;
+  private readonly factor: Float64Array;
+  private readonly cols: Float64Array[];
+  private readonly phaseCount: Uint8Array;
+  private readonly phaseKind: Uint8Array;
+  private readonly errorCode: Uint8Array;
+  private readonly d1: number;
+  private readonly d2: number;
+  private readonly u: number;
+  private readonly w: number;
+  /** Pure fluid with a (pseudo-)critical point: labels by phaseLabel's rule, inline. */
+  private readonly pureLabels: boolean;
+  private readonly tc: number;
+  private readonly pc: number;
+  private readonly rhoc: number;
+  // scratch: coefficients and Z roots, densities, derivatives at the roots, the values
+  private readonly temperatures: Float64Array;
+  private readonly pressures: Float64Array;
+  private readonly coefficients = new Float64Array(3);
+  private readonly zRoots = new Float64Array(3);
+  private readonly rhos = new Float64Array(3);
+  private readonly ra = new RootDerivatives();
+  private readonly rb = new RootDerivatives();
+  private readonly v = emptyStateValues();
+  private readonly ig: IdealGasProperties;
+  // the current row
+  private rowT = NaN;
+  private rowOk = false;
+  private RT = NaN;
+  private RT2 = NaN;
+  private mixA = NaN;
+  private mixAT = NaN;
+  private mixATT = NaN;
+  private mixB = NaN;
+  private F = NaN;
+  private TF = NaN;
+  private TTF = NaN;
+  // the current point (see point())
+  private pointT = NaN;
+  private pointP = NaN;
+  private pointRho = NaN;
+
+  constructor(
+    binding: FluidBinding,
+    plan: {
+      readonly x: readonly number[];
+      readonly properties: readonly SweepProperty[];
+      readonly propertyIds: Int32Array;
+      readonly basis: "molar" | "mass";
+      readonly firstAxis: Float64Array;
+      readonly secondAxis: Float64Array;
+    },
+    columns: Columns,
+  ) {
+    const x = plan.x;
+    const properties = plan.properties;
+    const ids = plan.propertyIds;
+    const basis = plan.basis;
+    this.temperatures = plan.firstAxis;
+    this.pressures = plan.secondAxis;
+    const model = binding.model;
+    if (!isRowCubic(model)) throw new Error("CubicTPRows: not a cubic model (isRowCubic)");
+    this.model = model;
+    this.binding = binding;
+    this.x = x;
+    this.extent = rowExtentOf(properties);
+    this.all = this.extent === "all";
+    this.gasConstant = model.gasConstant;
+    this.Rg = model.gasConstant ?? R;
+    this.M = mixtureMolarMass(binding, x);
+    this.ids = ids;
+    const mass = basis === "mass";
+    const massScale = 1 / this.M;
+    this.factor = Float64Array.from(properties, (p) => (mass && PER_AMOUNT.has(p) ? massScale : 1));
+    this.cols = columns.values;
+    this.phaseCount = columns.phaseCount;
+    this.phaseKind = columns.phaseKind;
+    this.errorCode = columns.errorCode;
+    this.d1 = model.family.delta1;
+    this.d2 = model.family.delta2;
+    this.u = this.d1 + this.d2;
+    this.w = this.d1 * this.d2;
+    const pc = x.length === 1 && model.pseudoCritical ? model.pseudoCritical(x) : undefined;
+    this.pureLabels = pc !== undefined;
+    this.tc = pc?.temperatureK ?? NaN;
+    this.pc = pc?.pressurePa ?? NaN;
+    this.rhoc = pc?.densityMolPerM3 ?? NaN;
+    this.ig = {
+      temperatureK: NaN,
+      pressurePa: NaN,
+      h: NaN,
+      s: NaN,
+      u: NaN,
+      a: NaN,
+      g: NaN,
+      cp: NaN,
+      cv: NaN,
+      referenceState: binding.idealGas.referenceState,
+      warnings: [],
+    };
+  }
+
+  /** Takes the row constants of temperature T (K); false when T fails its check. */
+  private setRow(T: number): boolean {
+    this.rowT = T;
+    this.rowOk = false;
+    try {
+      checkTemperature(T);
+    } catch {
+      return false;
+    }
+    const p = this.model.mixtureParameters(T, this.x);
+    const a = p.a;
+    const b = p.b;
+    this.mixA = a;
+    this.mixAT = p.aT;
+    this.mixATT = p.aTT;
+    this.mixB = b;
+    // densityRootsInto's and residualInto's expressions, in their order
+    const RT = R * T;
+    this.RT = RT;
+    this.RT2 = RT * RT;
+    const bRT = b * R * T;
+    this.F = a / bRT;
+    this.TF = (T * p.aT - a) / bRT;
+    this.TTF = (T * T * p.aTT - 2 * T * p.aT + 2 * a) / bRT;
+    if (this.extent !== "residual") {
+      // a copy: the state layer's cache entry is overwritten by the next temperature
+      const src = idealGasAt(this.binding, T, this.x);
+      const ig = this.ig as { -readonly [K in keyof IdealGasProperties]: IdealGasProperties[K] };
+      ig.temperatureK = src.temperatureK;
+      ig.pressurePa = src.pressurePa;
+      ig.h = src.h;
+      ig.s = src.s;
+      ig.u = src.u;
+      ig.a = src.a;
+      ig.g = src.g;
+      ig.cp = src.cp;
+      ig.cv = src.cv;
+      ig.referenceState = src.referenceState;
+      ig.warnings = src.warnings;
+    }
+    this.rowOk = true;
+    return true;
+  }
+
+  /**
+   * The point of temperature `temperatures[i]` (K) and pressure `pressures[j]` (Pa) of the plan
+   * into index `k` of the columns; false (nothing written) when the general path must take it.
+   */
+  point(i: number, j: number, k: number): boolean {
+    const T = this.temperatures[i];
+    const P = this.pressures[j];
+    if (T !== this.rowT ? !this.setRow(T) : !this.rowOk) return false;
+    // checkPressure's condition (its error comes from the general path)
+    if (!(P > 0 && P >= MIN_PRESSURE_PA && P <= MAX_PRESSURE_PA)) return false;
+    const RT = this.RT;
+    const b = this.mixB;
+    // the Z-cubic of densityRootsInto
+    const A = (this.mixA * P) / this.RT2;
+    const B = (b * P) / RT;
+    const u = this.u;
+    const w = this.w;
+    const c = this.coefficients;
+    c[0] = -(1 + B - u * B);
+    c[1] = A + w * B * B - u * B - u * B * B;
+    c[2] = -(A * B + w * B * B + w * B * B * B);
+    const zRoots = this.zRoots;
+    const count = monicCubicRootsInto(c, zRoots);
+    const rhos = this.rhos;
+    let n = 0;
+    for (let m = count - 1; m >= 0; m--) {
+      const Z = zRoots[m];
+      if (Z > B) {
+        const rho = P / (Z * RT);
+        if (n === 0 || rho !== rhos[n - 1]) rhos[n++] = rho;
+      }
+    }
+    // the choice of chooseDensityRootInto ("stable"), derivatives of residualInto
+    const compareGibbs = n > 1;
+    const all = this.all;
+    const d1 = this.d1;
+    const d2 = this.d2;
+    const F = this.F;
+    const TF = this.TF;
+    let stable = 0;
+    let index = 0;
+    let rho = NaN;
+    let chosen: ResidualDerivativesDraft | undefined;
+    let free = this.ra;
+    let best = Infinity;
+    for (let m = 0; m < n; m++) {
+      const r = free;
+      const eps = b * rhos[m];
+      if (!(eps < 1)) return false;
+      const D1 = 1 + d1 * eps;
+      const D2 = 1 + d2 * eps;
+      const I1 = 1 / (D1 * D2);
+      const g1 = d1 / D1 + d2 / D2;
+      const I2 = -g1 * I1;
+      const oneMinusEps = 1 - eps;
+      const q = eps / oneMinusEps;
+      r.aD = q - F * eps * I1;
+      r.aDD = q * q - F * eps * eps * I2;
+      // a mechanically unstable root is dropped before its logarithms are taken
+      if (!(dPdRho(T, r, this.gasConstant) > 0)) continue;
+      const I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
+      const logTerm = -Math.log1p(-eps);
+      r.a = logTerm - F * I;
+      r.aT = -TF * I;
+      if (all) {
+        const I3 = (g1 * g1 + (d1 * d1) / (D1 * D1) + (d2 * d2) / (D2 * D2)) * I1;
+        r.aTT = -this.TTF * I;
+        r.aDT = -TF * eps * I1;
+        r.aDDD = 2 * q * q * q - F * eps * eps * eps * I3;
+      }
+      let take = stable === 0;
+      if (compareGibbs) {
+        const g = residualGibbsTP(r);
+        if (stable === 0 || g < best) {
+          best = g;
+          take = true;
+        }
+      }
+      if (take) {
+        index = stable;
+        rho = rhos[m];
+        chosen = r;
+        free = r === this.ra ? this.rb : this.ra;
+      }
+      stable++;
+    }
+    if (chosen === undefined) return false;
+    const d = chosen;
+    // the label (state/phaseLabel.ts)
+    let label: PhaseLabel;
+    if (stable > 1 && index === 0) label = "vapor";
+    else if (stable > 1 && index === stable - 1) label = "liquid";
+    else if (this.pureLabels) {
+      label = T >= this.tc && P >= this.pc ? "supercritical" : rho > this.rhoc ? "liquid" : "vapor";
+    } else {
+      const position =
+        stable === 1 ? "only" : index === 0 ? "lowest" : index === stable - 1 ? "highest" : "only";
+      label = phaseLabel(this.model, T, P, rho, this.x, position, 1 + d.aD);
+    }
+    const v = this.v;
+    const Rg = this.Rg;
+    if (this.extent === "residual") {
+      v.Z = 1 + d.aD;
+      residualValuesInto(T, d, Rg, v);
+    } else if (this.extent === "energies") {
+      energyValuesInto(T, rho, d, this.ig, Rg, v);
+    } else {
+      stateValuesInto(T, rho, d, this.ig, this.M, Rg, v);
+    }
+    // through fields, not arguments: plain numbers passed to a function that is not inlined are
+    // boxed on the heap
+    this.pointT = T;
+    this.pointP = P;
+    this.pointRho = rho;
+    this.write(k, label);
+    return true;
+  }
+
+  private write(k: number, label: PhaseLabel): void {
+    const T = this.pointT;
+    const P = this.pointP;
+    const rho = this.pointRho;
+    const v = this.v;
+    const ids = this.ids;
+    const cols = this.cols;
+    // one store per case (a shared variable of mixed cases made the engine box the numbers); the
+    // factor is 1 (exact) or 1 / M for an amount-specific property on a mass basis
+    for (let m = 0; m < ids.length; m++) {
+      const col = cols[m];
+      const f = this.factor[m];
+      switch (ids[m]) {
+        case T_ID:
+          col[k] = T * f;
+          break;
+        case P_ID:
+          col[k] = P * f;
+          break;
+        case RHO_ID:
+          col[k] = rho * f;
+          break;
+        case RHO_MASS_ID:
+          col[k] = rho * this.M * f;
+          break;
+        case Z_ID:
+          col[k] = v.Z * f;
+          break;
+        case H_ID:
+          col[k] = v.h * f;
+          break;
+        case S_ID:
+          col[k] = v.s * f;
+          break;
+        case U_ID:
+          col[k] = v.u * f;
+          break;
+        case A_ID:
+          col[k] = v.a * f;
+          break;
+        case G_ID:
+          col[k] = v.g * f;
+          break;
+        case CP_ID:
+          col[k] = v.cp * f;
+          break;
+        case CV_ID:
+          col[k] = v.cv * f;
+          break;
+        case W_ID:
+          col[k] = v.speedOfSound * f;
+          break;
+        case JT_ID:
+          col[k] = v.jt * f;
+          break;
+        case KAPPA_ID:
+          col[k] = v.kappaT * f;
+          break;
+        case BETA_ID:
+          col[k] = v.beta * f;
+          break;
+        case H_RES_ID:
+          col[k] = v.hRes * f;
+          break;
+        case S_RES_ID:
+          col[k] = v.sTP * f;
+          break;
+        case U_RES_ID:
+          col[k] = v.uRes * f;
+          break;
+        case A_RES_ID:
+          col[k] = v.aTP * f;
+          break;
+        case G_RES_ID:
+          col[k] = v.gTP * f;
+          break;
+        case CP_RES_ID:
+          col[k] = (v.cp - this.ig.cp) * f;
+          break;
+        case CV_RES_ID:
+          col[k] = v.cvRes * f;
+          break;
+        case QUALITY_ID:
+          col[k] = (label === "vapor" ? 1 : label === "liquid" ? 0 : NaN) * f;
+          break;
+        default:
+          col[k] = NaN;
+      }
+    }
+    this.phaseCount[k] = 1;
+    this.phaseKind[k] =
+      label === "vapor"
+        ? SWEEP_PHASE_KINDS.vapor
+        : label === "liquid"
+          ? SWEEP_PHASE_KINDS.liquid
+          : SWEEP_PHASE_KINDS.supercritical;
+    this.errorCode[k] = 0;
+  }
+}
