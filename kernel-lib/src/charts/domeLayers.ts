@@ -12,6 +12,7 @@ import { curveRows } from "./curveRows.js";
 import { shortNumber } from "./shortNumber.js";
 import { WarningList } from "./warningList.js";
 import { INK } from "./theme.js";
+import { pointLabelLayers } from "./pointLabels.js";
 
 /** How to read a diagram coordinate of a saturated phase (SI); undefined when missing. */
 export type PhaseCoordinate = (
@@ -210,11 +211,14 @@ export function criticalLayers(
         ],
       },
     },
-    {
-      data: { values },
-      mark: { type: "text", align: "left", dx: 8, dy: -8, color: INK.critical, fontSize: 10 },
-      encoding: { ...encoding, text: { field: "label", type: "nominal" } },
-    },
+    // The label moves around the marker, off the critical isotherm and the dome.
+    ...pointLabelLayers(
+      values,
+      encoding,
+      "label",
+      { color: INK.critical, fontSize: 10 },
+      "critical",
+    ),
   ];
 }
 
