@@ -45,7 +45,7 @@ export function departureBandChart(
   result: PvtRouteResult,
   options: DepartureBandChartOptions = {},
 ): VegaLiteSpec {
-  const { quantity: q, coverageFactor: k, unit } = checkDepartureChartOptions(options);
+  const { quantity: q, coverageFactor: k, unit, symbol } = checkDepartureChartOptions(options);
   const rows = result.isotherms.flatMap((iso) =>
     iso.states.map((s) => ({
       isotherm: isothermLabel(iso.temperatureK),
@@ -57,16 +57,23 @@ export function departureBandChart(
     })),
   );
   const x = densityEncoding();
-  const color = isothermColorEncoding();
+  const color = isothermColorEncoding(
+    result.isotherms.map((iso) => isothermLabel(iso.temperatureK)),
+  );
+  // Bands stay readable when several overlap: a light fill (overlaps of four still let the grid
+  // and the lines through) and a thin outline in the isotherm's colour; the legend comes from the
+  // lines, so its swatches look like the lines.
+  const noLegend = { ...color, legend: null };
   const layers: Record<string, unknown>[] = [
     {
       data: { values: rows },
-      mark: { type: "area", opacity: 0.25 },
+      mark: { type: "area", fillOpacity: 0.1, strokeWidth: 0.8, strokeOpacity: 0.55 },
       encoding: {
         x,
-        y: { field: "lower", type: "quantitative", title: `Residual ${NAMES[q]} / ${unit}` },
+        y: { field: "lower", type: "quantitative", title: `Residual ${NAMES[q]} / ${symbol}` },
         y2: { field: "upper" },
-        color,
+        color: noLegend,
+        stroke: noLegend,
       },
     },
     {
@@ -79,8 +86,8 @@ export function departureBandChart(
         tooltip: [
           { field: "isotherm", type: "nominal" },
           { field: "rho", type: "quantitative", title: "ρ / mol/m³", format: ".5~g" },
-          { field: "value", type: "quantitative", title: `${q}_res / ${unit}`, format: ".5~g" },
-          { field: "u", type: "quantitative", title: `u / ${unit}`, format: ".2~g" },
+          { field: "value", type: "quantitative", title: `${q}_res / ${symbol}`, format: ".5~g" },
+          { field: "u", type: "quantitative", title: `u / ${symbol}`, format: ".2~g" },
         ],
       },
     },

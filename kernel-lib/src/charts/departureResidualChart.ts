@@ -35,7 +35,7 @@ export function departureResidualChart(
   comparison: readonly ModelComparisonPoint[],
   options: DepartureResidualChartOptions = {},
 ): VegaLiteSpec {
-  const { quantity: q, coverageFactor: k, unit } = checkDepartureChartOptions(options);
+  const { quantity: q, coverageFactor: k, unit, symbol } = checkDepartureChartOptions(options);
   if (comparison.length === 0) {
     throw new InputError({
       input: "comparison",
@@ -59,7 +59,10 @@ export function departureResidualChart(
     z: p.z[q],
   }));
   const x = densityEncoding();
-  const color = isothermColorEncoding();
+  const color = isothermColorEncoding(
+    result.isotherms.map((iso) => isothermLabel(iso.temperatureK)),
+  );
+  const noLegend = { ...color, legend: null };
   const model = options.modelLabel ?? "model";
   return {
     $schema: VEGA_LITE_SCHEMA,
@@ -73,16 +76,18 @@ export function departureResidualChart(
     layer: [
       {
         data: { values: band },
-        mark: { type: "area", opacity: 0.2 },
+        // light fill and an outline per isotherm (readable where bands overlap); legend from the lines
+        mark: { type: "area", fillOpacity: 0.1, strokeWidth: 0.8, strokeOpacity: 0.55 },
         encoding: {
           x,
           y: {
             field: "lower",
             type: "quantitative",
-            title: `Δ${q}_res (data − ${model}) / ${unit}`,
+            title: `Δ${q}_res (data − ${model}) / ${symbol}`,
           },
           y2: { field: "upper" },
-          color,
+          color: noLegend,
+          stroke: noLegend,
         },
       },
       {
