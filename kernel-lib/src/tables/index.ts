@@ -9,3 +9,4 @@ export type { FormatNumberOptions } from "./formatNumber.js";
 export type { NumberColumn, TextColumn, TableColumn, TableOptions } from "./columns.js";
 export { tableHtml } from "./tableHtml.js";
 export { tableText, tableMarkdown } from "./tableText.js";
+export { phaseWord } from "./phaseWords.js";
