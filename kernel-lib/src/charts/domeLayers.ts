@@ -158,17 +158,24 @@ export function qualityLayers(
         detail: { field: "path", type: "nominal" },
       },
     },
-    {
-      data: { values: labels },
-      mark: { type: "text", color: INK.guide, fontSize: 9, dy: 9, clip: true },
-      encoding: {
-        x: positionEncoding("x", xAxis),
-        y: positionEncoding("y", yAxis),
-        text: { field: "label", type: "nominal" },
-      },
-    },
+    // Under the line's foot; above it, beside the line, where the foot is the plot's bottom.
+    ...pointLabelLayers(
+      labels,
+      { x: positionEncoding("x", xAxis), y: positionEncoding("y", yAxis) },
+      "label",
+      { color: INK.guide, fontSize: 9, clip: true },
+      "quality",
+      QUALITY_LABEL_SLOTS,
+    ),
   ];
 }
+
+/** Candidate places of a quality-line label around the line's lowest visible point. */
+const QUALITY_LABEL_SLOTS = [
+  { align: "center", dx: 0, dy: 9 },
+  { align: "left", dx: 3, dy: -9 },
+  { align: "right", dx: -3, dy: -9 },
+] as const;
 
 /** The critical point: an open diamond and a small plain-text label. */
 export function criticalLayers(

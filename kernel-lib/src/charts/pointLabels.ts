@@ -35,6 +35,11 @@ export function pointLabelLayers(
   textField: string,
   mark: Record<string, unknown>,
   group: string,
+  slots: readonly {
+    align: "left" | "right" | "center";
+    dx: number;
+    dy: number;
+  }[] = POINT_LABEL_SLOTS,
 ): Record<string, unknown>[] {
   const values = rows.map((r) => ({
     ...r,
@@ -42,7 +47,7 @@ export function pointLabelLayers(
     labelGroup: group,
     labelSlot: 0,
   }));
-  return POINT_LABEL_SLOTS.map((slot, k) => ({
+  return slots.map((slot, k) => ({
     data: { values: values.map((r) => ({ ...r })) },
     transform: [{ filter: { field: "labelSlot", equal: k } }],
     mark: { type: "text", baseline: "middle", ...mark, ...slot },
