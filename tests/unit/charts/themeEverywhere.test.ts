@@ -51,5 +51,11 @@ describe("the theme on every chart builder", () => {
       ]),
     ];
     for (const spec of specs) expect(spec.config).toEqual(themeConfig());
+    // one notation for axis units: "Name / unit" (ISO 80000-1), never "Name [unit]"
+    const titles = specs.flatMap((spec) =>
+      [...JSON.stringify(spec).matchAll(/"title":"([^"]*)"/g)].map((m) => m[1]),
+    );
+    expect(titles.some((t) => / \/ /.test(t))).toBe(true);
+    expect(titles.filter((t) => /\[[^\]]*\]/.test(t))).toEqual([]);
   });
 });
