@@ -73,6 +73,11 @@ const RATIOS: readonly {
     clock: "wall",
   },
   {
+    case: "sampler-surface-200x200-pick",
+    baseline: "sampler-surface-200x200",
+    meaning: "speed-up of the chart sampler on the sweep path over one stateAtTP per point",
+  },
+  {
     case: "transport-mix10-TRho",
     baseline: "pr-mix10-TP",
     meaning: "cost of viscosity and conductivity (Chung) over the state of the same gas",

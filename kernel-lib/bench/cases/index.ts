@@ -9,6 +9,7 @@ import { processCases } from "./processCases.js";
 import { sweepCases } from "./sweepCases.js";
 import { transportCases } from "./transportCases.js";
 import { vesselCases } from "./vesselCases.js";
+import { chartSamplerCases } from "./chartSamplerCases.js";
 
 export const allCases: BenchCase[] = [
   ...engineCases,
@@ -20,4 +21,5 @@ export const allCases: BenchCase[] = [
   ...sweepCases,
   ...transportCases,
   ...vesselCases,
+  ...chartSamplerCases,
 ];

@@ -5,8 +5,8 @@
  * growing where the fluid is dense; for a pure fluid below Tc the jump at the vapour pressure
  * (condensation); near the critical temperature the steepest change with pressure.
  *
- * Curves: charts/sample/departuresFromFluid (stable state at each (T, P) from state/stateAtTP);
- * chart: charts/departureChart.
+ * Curves: charts/sample/departuresFromFluid (the stable states along the isotherm in one sweep,
+ * sweep/runSweep.ts, equal to state/stateAtTP per point); chart: charts/departureChart.
  *
  * Browser-safe.
  */

@@ -6,8 +6,9 @@
  *
  * The point is held as (P, h), which fixes the state on both sides of and inside the dome
  * (phase/stateAtPressureEnthalpy); a typed temperature is turned into h at the point's pressure
- * (state/stateAtTP, stable phase). Lines: charts/sample isothermOnPressureEnthalpy and
- * isentropeOnPressureEnthalpy; chart: charts/pressureEnthalpyChart + withProcessPath.
+ * (state/stateAtTP, stable phase). Lines: charts/sample isothermOnPressureEnthalpy (one sweep of
+ * (T, P) states, sweep/runSweep.ts) and isentropeOnPressureEnthalpy (a (P, s) inversion per
+ * point); chart: charts/pressureEnthalpyChart + withProcessPath.
  *
  * Browser-safe.
  */

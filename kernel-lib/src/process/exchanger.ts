@@ -26,7 +26,12 @@ import { overallProperty } from "../phase/flash/stateFunctionFlash.js";
 import { requireChoice, requirePositive } from "../validate.js";
 import { closeBalances } from "./balance.js";
 import { heatCurve, type HeatCurve, type HeatCurveOptions } from "./heatCurve.js";
-import { processWarning, temperatureWarnings } from "./warnings.js";
+import {
+  processWarning,
+  requirePositiveFlow,
+  requireSpecObject,
+  temperatureWarnings,
+} from "./warnings.js";
 import { streamEnthalpyJPerMol, streamFromEquilibrium, type Stream } from "./stream.js";
 import { PROCESS_CAUTION, type StepResult } from "./types.js";
 
@@ -114,14 +119,7 @@ interface Evaluation {
  * @example exchanger(effluent, feed, { minimumApproachK: 10 }).minimumApproach
  */
 export function exchanger(hot: Stream, cold: Stream, spec: ExchangerSpec): ExchangerResult {
-  if (spec === null || typeof spec !== "object") {
-    throw new InputError({
-      input: "spec",
-      unit: "-",
-      validRange: "{ dutyW } or { minimumApproachK }",
-      received: spec,
-    });
-  }
+  requireSpecObject(spec, "{ dutyW } or { minimumApproachK }");
   if ((spec.dutyW === undefined) === (spec.minimumApproachK === undefined)) {
     throw new InputError({
       input: "spec",
@@ -135,14 +133,7 @@ export function exchanger(hot: Stream, cold: Stream, spec: ExchangerSpec): Excha
     ["hot", hot],
     ["cold", cold],
   ] as const) {
-    if (!(s.molarFlowMolPerS > 0)) {
-      throw new InputError({
-        input: `${name}.molarFlowMolPerS`,
-        unit: "mol/s",
-        validRange: "> 0",
-        received: s.molarFlowMolPerS,
-      });
-    }
+    requirePositiveFlow(`${name}.molarFlowMolPerS`, s.molarFlowMolPerS);
   }
   const Th = hot.state.temperatureK;
   const Tc = cold.state.temperatureK;

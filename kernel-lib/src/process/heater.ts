@@ -11,7 +11,7 @@ import { overallProperty, type StateFlashOptions } from "../phase/flash/stateFun
 import { requireFinite, requirePositive } from "../validate.js";
 import { closeBalances } from "./balance.js";
 import { heatCurve, type HeatCurve, type HeatCurveOptions } from "./heatCurve.js";
-import { temperatureWarnings } from "./warnings.js";
+import { requirePositiveFlow, requireSpecObject, temperatureWarnings } from "./warnings.js";
 import { streamEnthalpyJPerMol, streamFromEquilibrium, type Stream } from "./stream.js";
 import { PROCESS_CAUTION, type StepResult } from "./types.js";
 
@@ -59,14 +59,7 @@ export function cooler(inlet: Stream, spec: HeaterSpec): HeaterResult {
 }
 
 function heatStep(kind: "heater" | "cooler", inlet: Stream, spec: HeaterSpec): HeaterResult {
-  if (spec === null || typeof spec !== "object") {
-    throw new InputError({
-      input: "spec",
-      unit: "-",
-      validRange: "{ outletTemperatureK } or { dutyW }, with optional outletPressurePa",
-      received: spec,
-    });
-  }
+  requireSpecObject(spec, "{ outletTemperatureK } or { dutyW }, with optional outletPressurePa");
   const hasT = spec.outletTemperatureK !== undefined;
   const hasQ = spec.dutyW !== undefined;
   if (hasT === hasQ) {
@@ -78,14 +71,7 @@ function heatStep(kind: "heater" | "cooler", inlet: Stream, spec: HeaterSpec): H
     });
   }
   const F = inlet.molarFlowMolPerS;
-  if (!(F > 0)) {
-    throw new InputError({
-      input: "inlet.molarFlowMolPerS",
-      unit: "mol/s",
-      validRange: "> 0 (a heater needs a flow)",
-      received: F,
-    });
-  }
+  requirePositiveFlow("inlet.molarFlowMolPerS", F, "> 0 (a heater needs a flow)");
   const fluid = inlet.fluid;
   const z = inlet.z;
   const P =

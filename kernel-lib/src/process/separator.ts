@@ -8,12 +8,12 @@
  * sum_k F beta_k x_ik = F z_i to the flash's verified material balance (1e-12); the duty is
  * Q = sum_k F beta_k h_k - F h_in (0 for the adiabatic drum, to the flash's tolerance).
  */
-import { InputError, type ResultWarning } from "../errors.js";
+import type { ResultWarning } from "../errors.js";
 import type { Equilibrium, EquilibriumPhase } from "../phase/flash/types.js";
 import { overallProperty, type StateFlashOptions } from "../phase/flash/stateFunctionFlash.js";
 import { requirePositive } from "../validate.js";
 import { closeBalances } from "./balance.js";
-import { temperatureWarnings } from "./warnings.js";
+import { requirePositiveFlow, requireSpecObject, temperatureWarnings } from "./warnings.js";
 import { streamEnthalpyJPerMol, streamFromEquilibrium, type Stream } from "./stream.js";
 import { PROCESS_CAUTION, type StepResult } from "./types.js";
 
@@ -72,23 +72,9 @@ function phaseEquilibrium(eq: Equilibrium, p: EquilibriumPhase): Equilibrium {
  * @example separator(cooled, { pressurePa: 30e5 }).liquid?.molarFlowMolPerS
  */
 export function separator(inlet: Stream, spec: SeparatorSpec = {}): SeparatorResult {
-  if (spec === null || typeof spec !== "object") {
-    throw new InputError({
-      input: "spec",
-      unit: "-",
-      validRange: "{ temperatureK?, pressurePa? }",
-      received: spec,
-    });
-  }
+  requireSpecObject(spec, "{ temperatureK?, pressurePa? }");
   const F = inlet.molarFlowMolPerS;
-  if (!(F > 0)) {
-    throw new InputError({
-      input: "inlet.molarFlowMolPerS",
-      unit: "mol/s",
-      validRange: "> 0",
-      received: F,
-    });
-  }
+  requirePositiveFlow("inlet.molarFlowMolPerS", F);
   const fluid = inlet.fluid;
   const z = inlet.z;
   const P =

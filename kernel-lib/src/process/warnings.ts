@@ -84,6 +84,20 @@ export function checkOptionalTemperature(input: string, value: number | undefine
   }
 }
 
+/** Checks that a step's spec is an object; `validRange` says what the step takes. */
+export function requireSpecObject(spec: unknown, validRange: string): void {
+  if (spec === null || typeof spec !== "object") {
+    throw new InputError({ input: "spec", unit: "-", validRange, received: spec });
+  }
+}
+
+/** Checks that a stream flow is positive; `input` names it, `validRange` may say why. */
+export function requirePositiveFlow(input: string, flow: number, validRange = "> 0"): void {
+  if (!(flow > 0)) {
+    throw new InputError({ input, unit: "mol/s", validRange, received: flow });
+  }
+}
+
 /** A description of the phases of an equilibrium, e.g. "vapour 0.93, liquid 0.07". */
 export function describePhases(eq: Equilibrium): string {
   return eq.phases.map((p) => `${p.kind} ${p.amount.toPrecision(4)}`).join(", ");

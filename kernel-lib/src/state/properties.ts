@@ -58,6 +58,12 @@ export interface StateInputs {
   readonly gasConstant?: number;
   /** Warnings gathered so far (copied). */
   readonly warnings?: readonly ResultWarning[];
+  /**
+   * The pressure the state was asked at ((T, P) states), Pa: reported as given. Default (and
+   * every other property): P = rho R T Z of the model, which equals the given pressure only to
+   * round-off.
+   */
+  readonly pressurePa?: number;
 }
 
 /** Residual h, s, u, a, g in both conventions, J/mol and J/(mol K), with ln Z and ln phi. */
@@ -316,7 +322,7 @@ export function assembleState(input: StateInputs): FluidState {
   }
   return {
     temperatureK: T,
-    pressurePa: P,
+    pressurePa: input.pressurePa ?? P,
     densityMolPerM3: rho,
     densityKgPerM3: rho * M,
     x: input.x.slice(),

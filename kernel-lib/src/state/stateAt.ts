@@ -153,6 +153,7 @@ function finish(
   residual: ResidualDerivatives,
   phase: PhaseLabel,
   extraWarnings: readonly ExtraWarning[],
+  givenPressurePa?: number,
 ): FluidState {
   const model = binding.model;
   const ideal = idealGasAt(binding, T, x);
@@ -170,6 +171,7 @@ function finish(
     departureMethod: binding.departureMethod ?? "closed-form",
     gasConstant: model.gasConstant,
     warnings,
+    pressurePa: givenPressurePa,
   });
 }
 
@@ -314,5 +316,6 @@ export function stateAtTP(
       message: `T = ${temperatureK} K, P = ${pressurePa} Pa is on the phase boundary of ${model.info.name} within rounding (two stable density roots whose Gibbs energies differ by ${Math.abs(second - best).toExponential(1)} RT): the phases coexist there in any proportion, and the returned ${label} root (${rho.toPrecision(6)} mol/m3) is only one of them; ask for phase "liquid" or "vapor", or give a quality`,
     });
   }
-  return finish(binding, temperatureK, rho, x, residual, label, warnings);
+  // P as given: the root's rho R T Z equals it only to round-off (3999999.9999999995)
+  return finish(binding, temperatureK, rho, x, residual, label, warnings, pressurePa);
 }

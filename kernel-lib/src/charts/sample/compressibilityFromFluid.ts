@@ -1,15 +1,16 @@
 /**
- * Reduced isotherms Z(Tr, Pr) of a fluid for the compressibility chart: Z of the stable state
- * from state/stateAtTP at T = Tr Tc, P = Pr Pc. Tc and Pc default to the model's own critical
+ * Reduced isotherms Z(Tr, Pr) of a fluid for the compressibility chart: Z of the stable state at
+ * T = Tr Tc, P = Pr Pc, through the sweep engine (a row of typed arrays per isotherm,
+ * sampleSweep.ts; the same numbers as state/stateAtTP). Tc and Pc default to the model's own critical
  * point (phase/locateCriticalPoint) for a pure fluid; give them for a mixture (pseudo-critical).
  */
 import { InputError } from "../../errors.js";
 import { locateCriticalPoint } from "../../phase/criticalPoint.js";
-import { stateAtTP } from "../../state/stateAt.js";
 import type { FluidBinding } from "../../state/types.js";
 import { requirePositive } from "../../validate.js";
 import type { ReducedIsotherm } from "../compressibility.js";
-import { mixtureSplitsAt, tryPoint, type SampleProgress } from "./sampleGuard.js";
+import type { SampleProgress } from "./sampleGuard.js";
+import { sweepTPRows } from "./sampleSweep.js";
 
 /** Options of {@link compressibilityFromFluid}. */
 export interface CompressibilitySampleOptions {
@@ -54,19 +55,19 @@ export function compressibilityFromFluid(
   const total = reducedTemperatures.length * reducedPressures.length;
   let done = 0;
   reducedPressures.forEach((pr, j) => requirePositive(`reducedPressures[${j}]`, pr, "-"));
-  return reducedTemperatures.map((tr, i) => {
-    requirePositive(`reducedTemperatures[${i}]`, tr, "-");
-    return {
-      reducedTemperature: tr,
-      points: reducedPressures.map((pr) => {
-        const T = tr * (Tc as number);
-        const P = pr * (Pc as number);
-        const s = tryPoint(() => stateAtTP(fluid, T, P, x));
-        options.onProgress?.(++done, total);
-        // a mixture that splits here has no single-phase Z: a gap the chart reports
-        const split = s !== undefined && mixtureSplitsAt(fluid.model, T, P, x);
-        return { reducedPressure: pr, z: s && !split ? s.Z : NaN };
-      }),
-    };
-  });
+  reducedTemperatures.forEach((tr, i) => requirePositive(`reducedTemperatures[${i}]`, tr, "-"));
+  const onProgress = options.onProgress;
+  // a mixture that splits at a point has no single-phase Z there: a gap (NaN) the chart reports
+  const { rows } = sweepTPRows(
+    fluid,
+    reducedTemperatures.map((tr) => tr * (Tc as number)),
+    reducedPressures.map((pr) => pr * (Pc as number)),
+    x,
+    ["Z"],
+    { onPoint: onProgress && (() => onProgress(++done, total)) },
+  );
+  return reducedTemperatures.map((tr, i) => ({
+    reducedTemperature: tr,
+    points: reducedPressures.map((pr, j) => ({ reducedPressure: pr, z: rows[i].Z[j] })),
+  }));
 }

@@ -1,7 +1,9 @@
 /**
- * Departure curves of a fluid for the departure chart: the stable state at each (T, P) from
- * state/stateAtTP, its residual h, s, u, a, g relative to the ideal gas at the same T and P
- * (`residual`) or at the same T and density (`residualTV`).
+ * Departure curves of a fluid for the departure chart: the stable state at each (T, P), its
+ * residual h, s, u, a, g relative to the ideal gas at the same T and P (convention "TP": through
+ * the sweep engine, a row of typed arrays per isotherm, sampleSweep.ts, the same numbers as
+ * stateAtTP's `residual`) or at the same T and density (convention "TV": stateAtTP's
+ * `residualTV` per point; the sweep has no same-density departures).
  */
 import { maxOf, minOf } from "../../numerics/extent.js";
 import { requirePositive } from "../../validate.js";
@@ -10,6 +12,9 @@ import { stateAtTP, stateAtTRho } from "../../state/stateAt.js";
 import type { FluidBinding, FluidState } from "../../state/types.js";
 import type { DepartureCurve, DeparturePoint } from "../departures.js";
 import { mixtureSplitsAt, tryPoint, type SampleProgress } from "./sampleGuard.js";
+import { sweepTPRows } from "./sampleSweep.js";
+
+const SWEPT = ["P", "rho", "hRes", "sRes", "uRes", "aRes", "gRes"] as const;
 
 /** Options of {@link departuresFromFluid}. */
 export interface DepartureSampleOptions {
@@ -35,8 +40,15 @@ export function departuresFromFluid(
   const total = temperaturesK.length * pressuresPa.length;
   let done = 0;
   pressuresPa.forEach((p, j) => requirePositive(`pressuresPa[${j}]`, p, "Pa"));
+  temperaturesK.forEach((T, i) => requirePositive(`temperaturesK[${i}]`, T, "K"));
+  const onProgress = options.onProgress;
+  const swept =
+    options.convention === "TV"
+      ? undefined
+      : sweepTPRows(fluid, temperaturesK, pressuresPa, x, SWEPT, {
+          onPoint: onProgress && (() => onProgress(++done, total)),
+        }).rows;
   return temperaturesK.map((T, i) => {
-    requirePositive(`temperaturesK[${i}]`, T, "K");
     const pick = (s: FluidState): DeparturePoint => {
       const r = options.convention === "TV" ? s.residualTV : s.residual;
       return {
@@ -49,7 +61,22 @@ export function departuresFromFluid(
         g: r.g,
       };
     };
-    const points: DeparturePoint[] = pressuresPa.map((P) => {
+    const row = swept?.[i];
+    const points: DeparturePoint[] = pressuresPa.map((P, j) => {
+      if (row !== undefined) {
+        // a gap (no state, or a mixture that splits here) is NaN in every column
+        const h = row.hRes[j];
+        if (Number.isNaN(h)) return { pressurePa: P, h: NaN, s: NaN, u: NaN, a: NaN, g: NaN };
+        return {
+          pressurePa: row.P[j],
+          densityMolPerM3: row.rho[j],
+          h,
+          s: row.sRes[j],
+          u: row.uRes[j],
+          a: row.aRes[j],
+          g: row.gRes[j],
+        };
+      }
       const s = tryPoint(() => stateAtTP(fluid, T, P, x));
       options.onProgress?.(++done, total);
       // a mixture that splits here has no single-phase departure: a gap the chart reports

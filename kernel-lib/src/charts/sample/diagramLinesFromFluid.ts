@@ -1,20 +1,21 @@
 /**
  * Lines of a pure fluid for the P-h and T-s diagrams: isotherms and isobars from the stable state
- * at (T, P) (state/stateAtTP) with the saturated liquid and vapour inserted where the line
- * crosses the dome (so it runs flat across the two-phase region), and isentropes from the
+ * at (T, P) (one sweep per line, sampleSweep.ts: the same numbers as state/stateAtTP) with the
+ * saturated liquid and vapour inserted where the line crosses the dome (so it runs flat across the two-phase region), and isentropes from the
  * (P, s) state across the dome (phase/stateAtPressureEntropy). Below a model's published
  * triple point (pressure for an isobar, temperature for an isotherm) there is no vapour-liquid
  * equilibrium (the fluid sublimes or melts there), so no flat two-phase part is inserted.
  */
 import { saturationAtPressure, saturationAtTemperature } from "../../phase/saturation.js";
 import { stateAtPressureEntropy } from "../../phase/twoPhaseState.js";
-import { stateAtTP, stateAtTRho } from "../../state/stateAt.js";
+import { stateAtTRho } from "../../state/stateAt.js";
 import type { FluidBinding } from "../../state/types.js";
 import { requireFinite, requirePositive } from "../../validate.js";
 import type { PressureEnthalpyPoint } from "../pressureEnthalpy.js";
 import type { TemperatureEntropyPoint } from "../temperatureEntropy.js";
 import type { SaturationHints } from "../../phase/pureFluid.js";
 import { tryPoint } from "./sampleGuard.js";
+import { sweepTPRows } from "./sampleSweep.js";
 
 const PURE = [1];
 
@@ -31,10 +32,11 @@ export function isothermOnPressureEnthalpy(
       ? undefined
       : tryPoint(() => saturationAtTemperature(fluid.model, temperatureK));
   const ps = [...pressuresPa].sort((a, b) => a - b);
+  for (const P of ps) requirePositive("pressurePa", P, "Pa");
+  const line = sweepTPRows(fluid, [temperatureK], ps, PURE, ["h"]).rows[0].h;
   const points: PressureEnthalpyPoint[] = [];
   let inserted = false;
-  for (const P of ps) {
-    requirePositive("pressurePa", P, "Pa");
+  ps.forEach((P, j) => {
     if (sat && !inserted && P >= sat.pressurePa) {
       for (const rho of [sat.vaporDensityMolPerM3, sat.liquidDensityMolPerM3]) {
         points.push({
@@ -44,9 +46,8 @@ export function isothermOnPressureEnthalpy(
       }
       inserted = true;
     }
-    const s = tryPoint(() => stateAtTP(fluid, temperatureK, P, PURE));
-    points.push({ pressurePa: P, enthalpyJPerMol: s ? s.molar.h : NaN });
-  }
+    points.push({ pressurePa: P, enthalpyJPerMol: line[j] });
+  });
   return { temperatureK, points };
 }
 
@@ -63,10 +64,11 @@ export function isobarOnTemperatureEntropy(
       ? undefined
       : tryPoint(() => saturationAtPressure(fluid.model, pressurePa));
   const ts = [...temperaturesK].sort((a, b) => a - b);
+  for (const T of ts) requirePositive("temperatureK", T, "K");
+  const line = sweepTPRows(fluid, ts, [pressurePa], PURE, ["s"]).rows;
   const points: TemperatureEntropyPoint[] = [];
   let inserted = false;
-  for (const T of ts) {
-    requirePositive("temperatureK", T, "K");
+  ts.forEach((T, i) => {
     if (sat && !inserted && T >= sat.temperatureK) {
       for (const rho of [sat.liquidDensityMolPerM3, sat.vaporDensityMolPerM3]) {
         points.push({
@@ -76,9 +78,8 @@ export function isobarOnTemperatureEntropy(
       }
       inserted = true;
     }
-    const s = tryPoint(() => stateAtTP(fluid, T, pressurePa, PURE));
-    points.push({ temperatureK: T, entropyJPerMolK: s ? s.molar.s : NaN });
-  }
+    points.push({ temperatureK: T, entropyJPerMolK: line[i].s[0] });
+  });
   return { pressurePa, points };
 }
 

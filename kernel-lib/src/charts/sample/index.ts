@@ -13,7 +13,7 @@ export {
   isentropeOnPressureEnthalpy,
 } from "./diagramLinesFromFluid.js";
 export { surfaceFromFluid } from "./surfaceFromFluid.js";
-export type { SurfaceSampleOptions } from "./surfaceFromFluid.js";
+export type { SurfaceSampleOptions, SurfaceQuantity } from "./surfaceFromFluid.js";
 export type { DisplayQuantityKindInput } from "./surfaceTypes.js";
 export type { SampleProgress } from "./sampleGuard.js";
 export { mixtureDomeFromFluid } from "./mixtureDomeFromFluid.js";
