@@ -15,6 +15,7 @@ import {
   densityEncoding,
   isothermColorEncoding,
   isothermLabel,
+  bandLayers,
 } from "./departureChartParts.js";
 import type { PvtRouteResult } from "../pvt/departuresFromPvt.js";
 
@@ -57,25 +58,15 @@ export function departureBandChart(
     })),
   );
   const x = densityEncoding();
-  const color = isothermColorEncoding(
-    result.isotherms.map((iso) => isothermLabel(iso.temperatureK)),
-  );
-  // Bands stay readable when several overlap: a light fill (overlaps of four still let the grid
-  // and the lines through) and a thin outline in the isotherm's colour; the legend comes from the
-  // lines, so its swatches look like the lines.
-  const noLegend = { ...color, legend: null };
+  const labels = result.isotherms.map((iso) => isothermLabel(iso.temperatureK));
+  const color = isothermColorEncoding(labels);
+  // Bands readable where several overlap, legend from the lines (bandLayers).
   const layers: Record<string, unknown>[] = [
-    {
-      data: { values: rows },
-      mark: { type: "area", fillOpacity: 0.1, strokeWidth: 0.8, strokeOpacity: 0.55 },
-      encoding: {
-        x,
-        y: { field: "lower", type: "quantitative", title: `Residual ${NAMES[q]} / ${symbol}` },
-        y2: { field: "upper" },
-        color: noLegend,
-        stroke: noLegend,
-      },
-    },
+    ...bandLayers(rows, labels, {
+      field: "lower",
+      type: "quantitative",
+      title: `Residual ${NAMES[q]} / ${symbol}`,
+    }),
     {
       data: { values: rows },
       mark: { type: "line", point: true },

@@ -73,3 +73,31 @@ export function isothermColorEncoding(labels?: readonly string[]): Record<string
   }
   return enc;
 }
+
+/**
+ * Uncertainty bands, one area layer per isotherm in its series colour: a light fill (four
+ * overlapping bands still let the grid and the lines through) and a thin outline in the same
+ * colour. No colour encoding, so the legend comes from the lines alone and its swatches look like
+ * the lines. `rows` carry `isotherm`, `rho`, `lower`, `upper`; `y` is the band's y encoding.
+ */
+export function bandLayers(
+  rows: readonly Record<string, unknown>[],
+  labels: readonly string[],
+  y: Record<string, unknown>,
+): Record<string, unknown>[] {
+  return labels.map((label, i) => {
+    const colour = SERIES_COLORS[i % SERIES_COLORS.length];
+    return {
+      data: { values: rows.filter((r) => r["isotherm"] === label) },
+      mark: {
+        type: "area",
+        color: colour,
+        fillOpacity: 0.08,
+        stroke: colour,
+        strokeWidth: 0.8,
+        strokeOpacity: 0.6,
+      },
+      encoding: { x: densityEncoding(), y, y2: { field: "upper" } },
+    };
+  });
+}

@@ -14,6 +14,7 @@ import {
   densityEncoding,
   isothermColorEncoding,
   isothermLabel,
+  bandLayers,
 } from "./departureChartParts.js";
 import type { PvtRouteResult } from "../pvt/departuresFromPvt.js";
 
@@ -59,10 +60,8 @@ export function departureResidualChart(
     z: p.z[q],
   }));
   const x = densityEncoding();
-  const color = isothermColorEncoding(
-    result.isotherms.map((iso) => isothermLabel(iso.temperatureK)),
-  );
-  const noLegend = { ...color, legend: null };
+  const labels = result.isotherms.map((iso) => isothermLabel(iso.temperatureK));
+  const color = isothermColorEncoding(labels);
   const model = options.modelLabel ?? "model";
   return {
     $schema: VEGA_LITE_SCHEMA,
@@ -74,22 +73,12 @@ export function departureResidualChart(
     width: options.width ?? 560,
     height: options.height ?? 260,
     layer: [
-      {
-        data: { values: band },
-        // light fill and an outline per isotherm (readable where bands overlap); legend from the lines
-        mark: { type: "area", fillOpacity: 0.1, strokeWidth: 0.8, strokeOpacity: 0.55 },
-        encoding: {
-          x,
-          y: {
-            field: "lower",
-            type: "quantitative",
-            title: `Δ${q}_res (data − ${model}) / ${symbol}`,
-          },
-          y2: { field: "upper" },
-          color: noLegend,
-          stroke: noLegend,
-        },
-      },
+      // Bands readable where several overlap, legend from the lines (bandLayers).
+      ...bandLayers(band, labels, {
+        field: "lower",
+        type: "quantitative",
+        title: `Δ${q}_res (data − ${model}) / ${symbol}`,
+      }),
       {
         data: { values: rows },
         mark: { type: "line", point: true },
