@@ -398,15 +398,15 @@ export function mixtureEnergyDomeLayers(
           detail: { field: "path", type: "nominal" },
         },
       },
-      {
-        data: { values: labels },
-        mark: { type: "text", color: INK.guide, fontSize: 9, dy: 9, clip: true },
-        encoding: {
-          x: positionEncoding("x", xAxis),
-          y: positionEncoding("y", yAxis),
-          text: { field: "label", type: "nominal" },
-        },
-      },
+      // under the line's lowest point, or above it beside the line at the plot's bottom
+      ...pointLabelLayers(
+        labels,
+        { x: positionEncoding("x", xAxis), y: positionEncoding("y", yAxis) },
+        "label",
+        { color: INK.guide, fontSize: 9, clip: true },
+        "mixture-quality",
+        QUALITY_LABEL_SLOTS,
+      ),
     );
   }
   for (const note of dome.notes ?? []) warnings.add(String(note));
