@@ -12,6 +12,9 @@ import {
   type UnitChoice,
 } from "./displayUnits.js";
 
+/** Room, px, kept at each end of a log axis fitted to the data (half a marker and a stroke). */
+export const LOG_PADDING = 7;
+
 /** One axis: its quantity, display unit, title and scale type. */
 export interface AxisPlan {
   readonly kind: QuantityKind;
@@ -39,6 +42,9 @@ export function positionEncoding(field: string, axis: AxisPlan): Record<string, 
     ? { type: "log", nice: false }
     : { type: "linear", zero: false };
   if (axis.domain) scale["domain"] = [axis.domain[0], axis.domain[1]];
+  // A log scale is not made "nice", so its data would touch the frame: the critical-point
+  // marker and the dome top were cut. LOG_PADDING px of room at each end (Vega's scale padding).
+  else if (axis.log) scale["padding"] = LOG_PADDING;
   return { field, type: "quantitative", title: axis.title, scale };
 }
 

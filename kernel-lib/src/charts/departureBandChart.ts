@@ -15,6 +15,7 @@ import {
   densityEncoding,
   isothermColorEncoding,
   isothermLabel,
+  bandLayers,
 } from "./departureChartParts.js";
 import type { PvtRouteResult } from "../pvt/departuresFromPvt.js";
 
@@ -45,7 +46,7 @@ export function departureBandChart(
   result: PvtRouteResult,
   options: DepartureBandChartOptions = {},
 ): VegaLiteSpec {
-  const { quantity: q, coverageFactor: k, unit } = checkDepartureChartOptions(options);
+  const { quantity: q, coverageFactor: k, unit, symbol } = checkDepartureChartOptions(options);
   const rows = result.isotherms.flatMap((iso) =>
     iso.states.map((s) => ({
       isotherm: isothermLabel(iso.temperatureK),
@@ -57,18 +58,15 @@ export function departureBandChart(
     })),
   );
   const x = densityEncoding();
-  const color = isothermColorEncoding();
+  const labels = result.isotherms.map((iso) => isothermLabel(iso.temperatureK));
+  const color = isothermColorEncoding(labels);
+  // Bands readable where several overlap, legend from the lines (bandLayers).
   const layers: Record<string, unknown>[] = [
-    {
-      data: { values: rows },
-      mark: { type: "area", opacity: 0.25 },
-      encoding: {
-        x,
-        y: { field: "lower", type: "quantitative", title: `Residual ${NAMES[q]} / ${unit}` },
-        y2: { field: "upper" },
-        color,
-      },
-    },
+    ...bandLayers(rows, labels, {
+      field: "lower",
+      type: "quantitative",
+      title: `Residual ${NAMES[q]} / ${symbol}`,
+    }),
     {
       data: { values: rows },
       mark: { type: "line", point: true },
@@ -79,8 +77,8 @@ export function departureBandChart(
         tooltip: [
           { field: "isotherm", type: "nominal" },
           { field: "rho", type: "quantitative", title: "ρ / mol/m³", format: ".5~g" },
-          { field: "value", type: "quantitative", title: `${q}_res / ${unit}`, format: ".5~g" },
-          { field: "u", type: "quantitative", title: `u / ${unit}`, format: ".2~g" },
+          { field: "value", type: "quantitative", title: `${q}_res / ${symbol}`, format: ".5~g" },
+          { field: "u", type: "quantitative", title: `u / ${symbol}`, format: ".2~g" },
         ],
       },
     },

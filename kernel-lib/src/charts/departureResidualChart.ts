@@ -14,6 +14,7 @@ import {
   densityEncoding,
   isothermColorEncoding,
   isothermLabel,
+  bandLayers,
 } from "./departureChartParts.js";
 import type { PvtRouteResult } from "../pvt/departuresFromPvt.js";
 
@@ -35,7 +36,7 @@ export function departureResidualChart(
   comparison: readonly ModelComparisonPoint[],
   options: DepartureResidualChartOptions = {},
 ): VegaLiteSpec {
-  const { quantity: q, coverageFactor: k, unit } = checkDepartureChartOptions(options);
+  const { quantity: q, coverageFactor: k, unit, symbol } = checkDepartureChartOptions(options);
   if (comparison.length === 0) {
     throw new InputError({
       input: "comparison",
@@ -59,7 +60,8 @@ export function departureResidualChart(
     z: p.z[q],
   }));
   const x = densityEncoding();
-  const color = isothermColorEncoding();
+  const labels = result.isotherms.map((iso) => isothermLabel(iso.temperatureK));
+  const color = isothermColorEncoding(labels);
   const model = options.modelLabel ?? "model";
   return {
     $schema: VEGA_LITE_SCHEMA,
@@ -71,20 +73,12 @@ export function departureResidualChart(
     width: options.width ?? 560,
     height: options.height ?? 260,
     layer: [
-      {
-        data: { values: band },
-        mark: { type: "area", opacity: 0.2 },
-        encoding: {
-          x,
-          y: {
-            field: "lower",
-            type: "quantitative",
-            title: `Δ${q}_res (data − ${model}) / ${unit}`,
-          },
-          y2: { field: "upper" },
-          color,
-        },
-      },
+      // Bands readable where several overlap, legend from the lines (bandLayers).
+      ...bandLayers(band, labels, {
+        field: "lower",
+        type: "quantitative",
+        title: `Δ${q}_res (data − ${model}) / ${symbol}`,
+      }),
       {
         data: { values: rows },
         mark: { type: "line", point: true },

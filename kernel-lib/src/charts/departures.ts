@@ -10,11 +10,11 @@ import type { ChartSpec } from "./chartSpec.js";
 import { toDisplay } from "./displayUnits.js";
 import { planAxis, positionEncoding, type AxisPlan } from "./axisPlan.js";
 import { checkNonEmptyArray, checkSize, type BaseChartOptions } from "./chartOptions.js";
-import { curveRows } from "./curveRows.js";
-import { seriesLabels, seriesLineLayer } from "./seriesLayers.js";
+import { curveRows, type LineRow } from "./curveRows.js";
+import { lineTooltip, seriesLabels, seriesLineLayer } from "./seriesLayers.js";
 import { topLevel } from "./topLevel.js";
 import { WarningList } from "./warningList.js";
-import { DEFAULT_HEIGHT, DEFAULT_WIDTH, SERIES_COLORS } from "./theme.js";
+import { DEFAULT_HEIGHT, DEFAULT_WIDTH, SERIES_COLORS, SERIES_DASHES } from "./theme.js";
 
 /** Residual properties: enthalpy, entropy, internal energy, Helmholtz and Gibbs energy. */
 export type DepartureProperty = "h" | "s" | "u" | "a" | "g";
@@ -61,6 +61,12 @@ export interface DepartureCurve {
   temperatureK: number;
   /** Legend label (plain text). Default: the temperature in the chosen unit. */
   label?: string;
+  /**
+   * The model (or data set) the curve comes from, when curves of several models are compared.
+   * When every curve names one, colour tells the models apart and dash the isotherms (two
+   * legends, "Model" and "Isotherm"); otherwise each curve has a colour and dash of its own.
+   */
+  model?: string;
   points: readonly DeparturePoint[];
 }
 
@@ -120,6 +126,14 @@ export function departureChart(
       : planAxis("molarDensity", "Molar density ρ", options.units, options.logX ?? false);
   const temperatureUnit = planAxis("temperature", "T", options.units).unit;
   const labels = seriesLabels("curves", list, "temperatureK", "K", temperatureUnit);
+  const byModel = list.every((c) => typeof c.model === "string" && c.model !== "");
+  const temperatureLabels = seriesLabels(
+    "curves",
+    list.map((c) => ({ temperatureK: c.temperatureK })),
+    "temperatureK",
+    "K",
+    temperatureUnit,
+  );
   const width = checkSize("width", options.width, DEFAULT_WIDTH);
   const height = checkSize("height", options.height, DEFAULT_HEIGHT);
   const xOf = (p: DeparturePoint) =>
@@ -182,7 +196,11 @@ export function departureChart(
             type: "nominal",
             scale: {
               domain: labels,
-              range: labels.map((_, i) => SERIES_COLORS[i % SERIES_COLORS.length]),
+              range: labels.map((_, i) =>
+                byModel
+                  ? SERIES_COLORS[distinct(list.map((c) => c.model)).indexOf(list[i].model)]
+                  : SERIES_COLORS[i % SERIES_COLORS.length],
+              ),
             },
             legend: null,
           },
@@ -195,7 +213,11 @@ export function departureChart(
       mark: { type: "rule", color: "#9b968b", strokeWidth: 0.8 },
       encoding: { y: positionEncoding("zero", yAxis) },
     });
-    layers.push(seriesLineLayer(rows, labels, "Isotherm", xAxis, yAxis));
+    layers.push(
+      byModel
+        ? modelIsothermLayer(rows, list, labels, temperatureLabels, xAxis, yAxis)
+        : seriesLineLayer(rows, labels, "Isotherm", xAxis, yAxis),
+    );
     return several
       ? { title: { text: NAMES[prop] + suffix, fontSize: 12 }, width, height, layer: layers }
       : { width, height, layer: layers };
@@ -209,4 +231,56 @@ export function departureChart(
   const title =
     props.length === 1 ? "Departure from the ideal gas" : "Departures from the ideal gas";
   return topLevel("departures", title, options, axes, warnings, body, {}, false);
+}
+
+/** Distinct values in first-seen order. */
+function distinct<T>(values: readonly T[]): T[] {
+  return [...new Set(values)];
+}
+
+/** Curves of several models: colour per model, dash per isotherm, each with its own legend. */
+function modelIsothermLayer(
+  rows: readonly LineRow[],
+  curves: readonly DepartureCurve[],
+  labels: readonly string[],
+  temperatureLabels: readonly string[],
+  xAxis: AxisPlan,
+  yAxis: AxisPlan,
+): Record<string, unknown> {
+  const models = distinct(curves.map((c) => String(c.model)));
+  const temperatures = distinct(temperatureLabels);
+  const index = new Map(labels.map((l, i) => [l, i]));
+  const values = rows.map((r) => {
+    const i = index.get(r.series) ?? 0;
+    return { ...r, model: String(curves[i].model), isotherm: temperatureLabels[i] };
+  });
+  return {
+    data: { values },
+    mark: { type: "line", clip: true },
+    encoding: {
+      x: positionEncoding("x", xAxis),
+      y: positionEncoding("y", yAxis),
+      color: {
+        field: "model",
+        type: "nominal",
+        title: "Model",
+        scale: {
+          domain: models,
+          range: models.map((_, i) => SERIES_COLORS[i % SERIES_COLORS.length]),
+        },
+      },
+      strokeDash: {
+        field: "isotherm",
+        type: "nominal",
+        title: "Isotherm",
+        scale: {
+          domain: temperatures,
+          range: temperatures.map((_, i) => SERIES_DASHES[i % SERIES_DASHES.length].slice()),
+        },
+      },
+      order: { field: "order", type: "quantitative" },
+      detail: { field: "path", type: "nominal" },
+      tooltip: lineTooltip(xAxis, yAxis, "Curve"),
+    },
+  };
 }

@@ -12,6 +12,7 @@ import { curveRows } from "./curveRows.js";
 import { shortNumber } from "./shortNumber.js";
 import { WarningList } from "./warningList.js";
 import { INK } from "./theme.js";
+import { pointLabelLayers } from "./pointLabels.js";
 
 /** How to read a diagram coordinate of a saturated phase (SI); undefined when missing. */
 export type PhaseCoordinate = (
@@ -157,17 +158,24 @@ export function qualityLayers(
         detail: { field: "path", type: "nominal" },
       },
     },
-    {
-      data: { values: labels },
-      mark: { type: "text", color: INK.guide, fontSize: 9, dy: 9, clip: true },
-      encoding: {
-        x: positionEncoding("x", xAxis),
-        y: positionEncoding("y", yAxis),
-        text: { field: "label", type: "nominal" },
-      },
-    },
+    // Under the line's foot; above it, beside the line, where the foot is the plot's bottom.
+    ...pointLabelLayers(
+      labels,
+      { x: positionEncoding("x", xAxis), y: positionEncoding("y", yAxis) },
+      "label",
+      { color: INK.guide, fontSize: 9, clip: true },
+      "quality",
+      QUALITY_LABEL_SLOTS,
+    ),
   ];
 }
+
+/** Candidate places of a quality-line label around the line's lowest visible point. */
+const QUALITY_LABEL_SLOTS = [
+  { align: "center", dx: 0, dy: 9 },
+  { align: "left", dx: 3, dy: -9 },
+  { align: "right", dx: -3, dy: -9 },
+] as const;
 
 /** The critical point: an open diamond and a small plain-text label. */
 export function criticalLayers(
@@ -210,11 +218,14 @@ export function criticalLayers(
         ],
       },
     },
-    {
-      data: { values },
-      mark: { type: "text", align: "left", dx: 8, dy: -8, color: INK.critical, fontSize: 10 },
-      encoding: { ...encoding, text: { field: "label", type: "nominal" } },
-    },
+    // The label moves around the marker, off the critical isotherm and the dome.
+    ...pointLabelLayers(
+      values,
+      encoding,
+      "label",
+      { color: INK.critical, fontSize: 10 },
+      "critical",
+    ),
   ];
 }
 
@@ -387,15 +398,15 @@ export function mixtureEnergyDomeLayers(
           detail: { field: "path", type: "nominal" },
         },
       },
-      {
-        data: { values: labels },
-        mark: { type: "text", color: INK.guide, fontSize: 9, dy: 9, clip: true },
-        encoding: {
-          x: positionEncoding("x", xAxis),
-          y: positionEncoding("y", yAxis),
-          text: { field: "label", type: "nominal" },
-        },
-      },
+      // under the line's lowest point, or above it beside the line at the plot's bottom
+      ...pointLabelLayers(
+        labels,
+        { x: positionEncoding("x", xAxis), y: positionEncoding("y", yAxis) },
+        "label",
+        { color: INK.guide, fontSize: 9, clip: true },
+        "mixture-quality",
+        QUALITY_LABEL_SLOTS,
+      ),
     );
   }
   for (const note of dome.notes ?? []) warnings.add(String(note));

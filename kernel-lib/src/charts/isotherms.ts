@@ -24,6 +24,7 @@ import { lineTooltip, seriesEncodings } from "./seriesLayers.js";
 import { shortNumber } from "./shortNumber.js";
 import { topLevel } from "./topLevel.js";
 import { WarningList } from "./warningList.js";
+import { placeGuideLabels } from "./labelPlacement.js";
 import { INK } from "./theme.js";
 
 /** A point of an isotherm, SI. */
@@ -188,7 +189,7 @@ export function isothermChart(
       yAxis,
     ),
   );
-  return topLevel(
+  const spec = topLevel(
     "isotherms",
     "Isotherms",
     options,
@@ -196,6 +197,9 @@ export function isothermChart(
     warnings,
     { layer: layers },
   );
+  // The critical-point label: clear of the lines and inside the plot.
+  placeGuideLabels(spec);
+  return spec;
 }
 
 /** Tie lines at the vapour pressure and the lobes between loop and tie line. */

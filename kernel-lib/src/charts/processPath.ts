@@ -14,8 +14,10 @@ import { topLevel } from "./topLevel.js";
 import { WarningList } from "./warningList.js";
 import { placeGuideLabels } from "./labelPlacement.js";
 import { applyLogTicks } from "./logTicks.js";
+import { applyLinearTicks } from "./linearTicks.js";
 import { INK } from "./theme.js";
 import { pathTag } from "./pathTag.js";
+import { pointLabelLayers } from "./pointLabels.js";
 
 /** One state of a process path, SI per mole. */
 export interface ProcessPathState {
@@ -61,7 +63,7 @@ export function processPathChart(
   );
   const warnings = new WarningList();
   const layers = pathLayers(states, diagram, xAxis, yAxis, basis.perBasis);
-  return topLevel(
+  const spec = topLevel(
     diagram === "pressure-enthalpy" ? "pressure-enthalpy" : "temperature-entropy",
     "Process path",
     options,
@@ -70,6 +72,8 @@ export function processPathChart(
     { layer: layers },
     basis.mass ? { molarMassKgPerMol: basis.molarMassKgPerMol } : {},
   );
+  placeGuideLabels(spec);
+  return spec;
 }
 
 /**
@@ -108,10 +112,13 @@ export function withProcessPath(spec: ChartSpec, states: readonly ProcessPathSta
   );
   // Keep any fixed domain of the diagram so the shared scale is unchanged.
   const copy = JSON.parse(JSON.stringify(spec)) as ChartSpec;
-  const layers = pathLayers(states, diagram, xAxis, yAxis, basis.perBasis);
+  // A group id of its own, so the labels of a second path are placed as a family of their own.
+  const group = `path-${(copy.layer as ChartSpec[]).length}`;
+  const layers = pathLayers(states, diagram, xAxis, yAxis, basis.perBasis, group);
   copy.layer = [...(copy.layer as ChartSpec[]), ...(layers as ChartSpec[])];
   // The path may reach beyond the diagram's data: recompute the log-axis ticks over all layers.
   applyLogTicks(copy as Record<string, unknown>, { refresh: true });
+  applyLinearTicks(copy as Record<string, unknown>, copy, { refresh: true });
   // Guide labels (isentropes) move away from the path's states and their labels.
   placeGuideLabels(copy);
   return copy;
@@ -148,6 +155,7 @@ function pathLayers(
   xAxis: AxisPlan,
   yAxis: AxisPlan,
   perBasis: (v: number) => number,
+  group = "path",
 ): Record<string, unknown>[] {
   const list = checkNonEmptyArray("states", states, "at least one state");
   const rows = list.map((s, i) => {
@@ -194,19 +202,13 @@ function pathLayers(
         ],
       },
     },
-    {
-      data: { values: rows },
-      mark: {
-        type: "text",
-        color: INK.path,
-        fontSize: 10.5,
-        fontWeight: 600,
-        align: "left",
-        dx: 7,
-        dy: -7,
-        clip: true,
-      },
-      encoding: { ...enc, text: { field: "tag", type: "nominal" } },
-    },
+    // The state's tag moves around its point to stay inside the plot and off the lines.
+    ...pointLabelLayers(
+      rows,
+      enc,
+      "tag",
+      { color: INK.path, fontSize: 10.5, fontWeight: 600, clip: true },
+      group,
+    ),
   ];
 }

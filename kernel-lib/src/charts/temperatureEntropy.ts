@@ -4,6 +4,7 @@
  */
 import { InputError } from "../errors.js";
 import type { ChartSpec } from "./chartSpec.js";
+import { placeGuideLabels } from "./labelPlacement.js";
 import { energyDomeLayers, mixtureEnergyDomeLayers } from "./domeLayers.js";
 import { checkMixtureDome, type ChartMixtureDome } from "./mixtureDomeInput.js";
 import { energyBasis } from "./energyBasis.js";
@@ -142,7 +143,7 @@ export function temperatureEntropyChart(
     ),
   );
   layers.push(...fixed.critical, ...mixture.critical);
-  return topLevel(
+  const spec = topLevel(
     "temperature-entropy",
     "Temperature-entropy diagram",
     options,
@@ -151,4 +152,7 @@ export function temperatureEntropyChart(
     { layer: layers },
     basis.mass ? { molarMassKgPerMol: basis.molarMassKgPerMol } : {},
   );
+  // The critical-point label: clear of the lines and inside the plot.
+  placeGuideLabels(spec);
+  return spec;
 }

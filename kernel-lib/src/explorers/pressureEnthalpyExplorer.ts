@@ -12,6 +12,7 @@
  *
  * Browser-safe.
  */
+import { phaseWord } from "../tables/phaseWords.js";
 import { minOf } from "../numerics/extent.js";
 import { fromDisplay, resolveUnit } from "../charts/displayUnits.js";
 import { pressureEnthalpyChart } from "../charts/pressureEnthalpy.js";
@@ -286,7 +287,7 @@ export const pressureEnthalpyExplorer: ExplorerDefinition<PressureEnthalpyExplor
     const where =
       point.kind === "two-phase"
         ? `inside the dome, vapour fraction ${point.quality.toFixed(3)}`
-        : `${point.state.phase}`;
+        : phaseWord(point.state.phase);
     const critical = dome
       ? `; critical point ${formatQuantity(dome.critical.temperatureK, "temperature", state.units)}, ${formatQuantity(dome.critical.pressurePa, "pressure", state.units)}`
       : "";

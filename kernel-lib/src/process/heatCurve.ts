@@ -166,7 +166,7 @@ export function heatCurve(
         enthalpyJPerMol: m.enthalpyJPerMol,
         dutyW: m.dutyW,
         vaporFraction: m.kind === "bubble" ? 0 : 1,
-        phases: m.kind === "bubble" ? "liquid (bubble point)" : "vapor (dew point)",
+        phases: m.kind === "bubble" ? "liquid (bubble point)" : "vapour (dew point)",
         marker: m.kind,
       });
       previousT = m.temperatureK;

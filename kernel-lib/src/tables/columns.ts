@@ -3,6 +3,7 @@
  * Values in rows are SI on the molar basis (K, Pa, mol/m3, J/mol, J/(mol K), m/s, ...); the
  * column says which unit to show, converted through units/ (mass units need a molar mass).
  */
+import { phaseWord } from "./phaseWords.js";
 import { InputError } from "../errors.js";
 import { fromSI } from "../units/convert.js";
 import {
@@ -145,7 +146,8 @@ export function resolveColumns(
         numeric: false,
         cell: (row) => {
           const v = row[c.key];
-          return v === undefined || v === null ? missing : String(v);
+          // a phase kind ("vapor") is printed as the reader's word ("vapour")
+          return v === undefined || v === null ? missing : phaseWord(String(v));
         },
       };
     }

@@ -20,3 +20,4 @@ export type {
 } from "./stateTable.js";
 export { tableHtml } from "./tableHtml.js";
 export { tableText, tableMarkdown } from "./tableText.js";
+export { phaseWord } from "./phaseWords.js";

@@ -1,4 +1,5 @@
 /* eslint-disable @typescript-eslint/no-explicit-any -- the tests read into plain JSON specs */
+import { POINT_LABEL_SLOTS } from "../../../kernel-lib/src/charts/pointLabels.js";
 import { describe, expect, it } from "vitest";
 import { pressureEnthalpyChart } from "../../../kernel-lib/src/charts/pressureEnthalpy.js";
 import { temperatureEntropyChart } from "../../../kernel-lib/src/charts/temperatureEntropy.js";
@@ -203,10 +204,12 @@ describe("process paths", () => {
     const before = JSON.stringify(base);
     const spec = withProcessPath(base, path);
     expect(JSON.stringify(base)).toBe(before);
-    expect((spec.layer as unknown[]).length).toBe((base.layer as unknown[]).length + 3);
+    // the line, the points, and one label layer per candidate slot around each point
+    const added3 = 2 + POINT_LABEL_SLOTS.length;
+    expect((spec.layer as unknown[]).length).toBe((base.layer as unknown[]).length + added3);
     expect(schemaErrors(spec)).toEqual([]);
     expect((await compileSpec(spec)).warnings).toEqual([]);
-    const added = (spec.layer as any[]).slice(-3);
+    const added = (spec.layer as any[]).slice(-added3);
     expect(enc(added[0]).y.scale.type).toBe("log");
     expect(enc(added[0]).x.title).toBe("Specific enthalpy h / Btu/lb");
     expectRelative(values(added[0])[1].x, 29500 / M_PROPANE / 2326);

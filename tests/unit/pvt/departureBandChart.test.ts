@@ -32,22 +32,37 @@ describe("departureBandChart", () => {
     expect(schemaErrors(spec)).toEqual([]);
     const { warnings } = await compileSpec(spec);
     expect(warnings).toEqual([]);
-    const rows = (
-      spec.layer as {
-        data: { values: { value: number; lower: number; upper: number; u: number }[] };
-      }[]
-    )[0]!.data.values;
+    type Layer = {
+      mark: { type: string; color?: string; stroke?: string; fillOpacity?: number };
+      encoding: { color?: { scale?: { range: string[] }; legend?: unknown } };
+      data: { values: { value: number; lower: number; upper: number; u: number }[] };
+    };
+    const layers = spec.layer as Layer[];
+    const bands = layers.filter((l) => l.mark.type === "area");
+    expect(bands).toHaveLength(4); // one band per isotherm
+    const rows = bands.flatMap((l) => l.data.values);
     expect(rows).toHaveLength(4 * 6);
+    // readable where four overlap: light fill, outline in the isotherm's line colour, and the
+    // legend from the lines (its swatches are the line colours)
+    const line = layers.find((l) => l.mark.type === "line")!;
+    const colours = line.encoding.color!.scale!.range;
+    bands.forEach((b, i) => {
+      expect(b.mark.fillOpacity).toBeLessThanOrEqual(0.1);
+      expect(b.mark.stroke).toBe(colours[i]);
+      expect(b.mark.color).toBe(colours[i]);
+      expect(b.encoding.color).toBeUndefined();
+    });
+    expect(line.encoding.color!.legend).toBeUndefined();
     for (const r of rows) {
       expect(r.upper - r.value).toBeCloseTo(2 * r.u, 12);
       expect(r.value - r.lower).toBeCloseTo(2 * r.u, 12);
     }
   });
 
-  it("overlays a model as a third layer and names it in the subtitle", async () => {
+  it("overlays a model as a layer after the bands and the lines, named in the subtitle", async () => {
     const cmp = compareWithModel(result, surfaceResidualModel(result.surfaceFit.surface));
     const spec = departureBandChart(result, { model: { label: "surface fit", points: cmp } });
-    expect((spec.layer as unknown[]).length).toBe(3);
+    expect((spec.layer as unknown[]).length).toBe(result.isotherms.length + 2);
     expect(JSON.stringify(spec.title)).toMatch(/dashed: surface fit/);
     expect(schemaErrors(spec)).toEqual([]);
     await compileSpec(spec);
@@ -60,7 +75,9 @@ describe("departureBandChart", () => {
     expect(schemaErrors(spec)).toEqual([]);
     const { warnings } = await compileSpec(spec);
     expect(warnings).toEqual([]);
-    const rows = (spec.layer as { data: { values: { difference?: number }[] } }[])[1]!.data.values;
+    const rows = (spec.layer as { data: { values: { difference?: number }[] } }[])[
+      result.isotherms.length
+    ]!.data.values;
     expect(rows).toHaveLength(cmp.length);
     expect(rows[0]!.difference).toBe(cmp[0]!.difference.s);
     expect(() => departureResidualChart(result, [])).toThrow(InputError);
