@@ -12,6 +12,7 @@ import type { IdealGasMixture, IdealGasPure, ReferenceState } from "../idealgas/
 import { idealGasFromCorrelation } from "../idealgas/correlationPure.js";
 import { idealGasMixture } from "../idealgas/mixture.js";
 import { zeroAtReferenceState } from "../idealgas/referenceState.js";
+import { shiftedIdealGas, zeroAtIdealGas } from "../idealgas/shiftedMixture.js";
 import { shiftToSaturatedLiquid } from "./saturatedLiquidReference.js";
 import { idealGasFromMolecule } from "../idealgas/molecular/index.js";
 import type { PseudoCriticalPoint, ResidualModel } from "../eos/types.js";
@@ -111,7 +112,10 @@ export interface FluidSpec {
    * ideal part in the publication's reference state.
    */
   idealGas?: "correlation" | "molecular" | IdealGasMixture;
-  /** Zero of h and s. Default: the formation basis. */
+  /**
+   * Zero of h and s. Default: the formation basis; with a reference equation, the publication's
+   * own convention unless one is asked for here (each is honoured, none dropped).
+   */
   referenceState?: ReferenceState;
   /**
    * "closed-form" (default) uses the model's own alpha_r; "numeric" integrates the model's pressure
@@ -436,6 +440,42 @@ function checkSpecFields(spec: FluidSpec): void {
 }
 
 /**
+ * A reference equation's ideal part on the zero the caller asked for. "zero-at" moves it so the
+ * ideal gas has h = s = 0 at (T0, P0); "formation" so the ideal gas at 298.15 K and 1 bar has the
+ * component table's enthalpy of formation and third-law entropy (the values the correlation route
+ * uses on that basis). No request or "fluid-convention" keeps the publication's own zero; a
+ * saturated-liquid convention is applied afterwards on the fluid's own saturated liquid.
+ */
+function referenceOnRequestedZero(
+  inner: IdealGasMixture,
+  requested: ReferenceState | undefined,
+  components: readonly Component[],
+): IdealGasMixture {
+  if (requested === undefined) return inner;
+  if (requested.kind === "zero-at") {
+    return zeroAtIdealGas(inner, requested.temperatureK, requested.pressurePa);
+  }
+  if (requested.kind !== "formation") return inner;
+  const T0 = 298.15;
+  const P0 = 1e5;
+  const target = idealGasMixture(
+    components.map((c) => idealGasFromCorrelation(c)),
+    { referenceState: requested, components },
+  );
+  const n = components.length;
+  const dh = new Float64Array(n);
+  const ds = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    const pure = Array.from({ length: n }, (_, i) => (i === k ? 1 : 0));
+    const want = target.at(T0, P0, pure);
+    const own = inner.at(T0, P0, pure);
+    dh[k] = want.h - own.h;
+    ds[k] = want.s - own.s;
+  }
+  return shiftedIdealGas(inner, dh, ds, requested);
+}
+
+/**
  * Refuses one component listed twice: two entries that resolve to the same id (whether written as
  * id, name, formula, CAS number or synonym), or two records with the same CAS number. A formula
  * alone is not a duplicate: isomers share one (n-butane and isobutane, C4H10).
@@ -658,8 +698,13 @@ export function defineFluid(spec: FluidSpec): Fluid {
   const tradeReference =
     spec.referenceState?.kind === "saturated-liquid" ? spec.referenceState : undefined;
   if (reference !== undefined && route === reference) {
-    // a reference equation carries its own ideal part and the publication's reference state
-    idealGas = referenceIdealGasMixture(reference);
+    // a reference equation carries its own ideal part and the publication's reference state,
+    // moved to the zero the caller asked for
+    idealGas = referenceOnRequestedZero(
+      referenceIdealGasMixture(reference),
+      spec.referenceState,
+      components,
+    );
   } else if (route === "correlation" || route === "molecular") {
     const pures: IdealGasPure[] = components.map((c) =>
       route === "correlation" ? idealGasFromCorrelation(c) : idealGasFromMolecule(c.id),
