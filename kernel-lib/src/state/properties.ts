@@ -292,9 +292,6 @@ export function stateValuesInto(
   out.isentropicExponent = ((cp / cv) * rho * dPdr) / P;
 }
 
-// the values of the current assembleState call (read out at once, single-threaded)
-const assembled = emptyStateValues();
-
 /** Builds the full state record (see the header for every formula). */
 export function assembleState(input: StateInputs): FluidState {
   return assembleStateOf(
@@ -332,20 +329,37 @@ export function assembleStateOf(
   given: readonly ResultWarning[] | undefined,
   givenPressurePa?: number,
 ): FluidState {
-  const v = assembled;
-  stateValuesInto(T, rho, d, ig, M, Rg, v);
-  const P = v.pressurePa;
-  const Z = v.Z;
-  const lnPhi = lnPhiOf(d, v.lnZ);
-  const dPdr = v.dPdRho;
+  // the arithmetic of stateValuesInto (residualParts, energyValuesInto) written out with locals,
+  // operation for operation, so a sweep that fills StateValues gets these very numbers (the sweep
+  // tests check it bit for bit); locals instead of the shared records save the stores and loads
+  const RT = Rg * T;
+  const lnZ = lnZOf(d.aD);
+  const hRes = RT * (d.aD - d.aT);
+  const uRes = -RT * d.aT;
+  const sTV = -Rg * (d.a + d.aT);
+  const aTV = RT * d.a;
+  const gTV = RT * (d.a + d.aD);
+  const sTP = sTV + Rg * lnZ;
+  const aTP = aTV - RT * lnZ;
+  const gTP = RT * gibbsOverRTFromLnZ(d.a, d.aD, lnZ);
+  const lnPressureShift = Math.log((rho * RT) / ig.pressurePa);
+  const P = pressureFromResidual(T, rho, d.aD, Rg);
+  const Z = 1 + d.aD;
+  const h = ig.h + hRes;
+  const s = ig.s - Rg * lnPressureShift + sTV;
+  const u = ig.u + uRes;
+  const a = ig.a + RT * lnPressureShift + aTV;
+  const g = ig.g + RT * lnPressureShift + gTV;
+  const dPdr = dPdRho(T, d, Rg);
+  const dPdT = dPdTAtDensity(rho, d, Rg);
+  const cvRes = -Rg * (2 * d.aT + d.aTT);
+  const cv = ig.cv + cvRes;
+  const cp = cv + (T * dPdT * dPdT) / (rho * rho * dPdr);
   const stable = dPdr > 0;
-  const h = v.h;
-  const s = v.s;
-  const u = v.u;
-  const a = v.a;
-  const g = v.g;
-  const cp = v.cp;
-  const cv = v.cv;
+  const w2 = ((cp / cv) * dPdr) / M;
+  const kappaT = 1 / (rho * dPdr);
+  const beta = kappaT * dPdT;
+  const lnPhi = lnPhiOf(d, lnZ);
   // one division for the seven specific values (a multiply differs from dividing by at most 1 ulp)
   const perMass = 1 / M;
   let warnings: readonly ResultWarning[] = NO_WARNINGS;
@@ -384,23 +398,15 @@ export function assembleStateOf(
       cp: cp * perMass,
       cv: cv * perMass,
     },
-    residual: {
-      h: v.hRes,
-      s: v.sTP,
-      u: v.uRes,
-      a: v.aTP,
-      g: v.gTP,
-      cp: cp - ig.cp,
-      cv: v.cvRes,
-    },
-    residualTV: { h: v.hRes, s: v.sTV, u: v.uRes, a: v.aTV, g: v.gTV },
+    residual: { h: hRes, s: sTP, u: uRes, a: aTP, g: gTP, cp: cp - ig.cp, cv: cvRes },
+    residualTV: { h: hRes, s: sTV, u: uRes, a: aTV, g: gTV },
     lnPhi,
-    speedOfSoundMPerS: v.speedOfSound,
-    jouleThomsonKPerPa: v.jt,
-    isothermalCompressibilityPerPa: v.kappaT,
-    thermalExpansionPerK: v.beta,
-    isentropicExponent: v.isentropicExponent,
-    dPdTPaPerK: v.dPdT,
+    speedOfSoundMPerS: stable && w2 > 0 ? Math.sqrt(w2) : NaN,
+    jouleThomsonKPerPa: (T * beta - 1) / (rho * cp),
+    isothermalCompressibilityPerPa: kappaT,
+    thermalExpansionPerK: beta,
+    isentropicExponent: ((cp / cv) * rho * dPdr) / P,
+    dPdTPaPerK: dPdT,
     dPdRhoPaM3PerMol: dPdr,
     molarMassKgPerMol: M,
     model,

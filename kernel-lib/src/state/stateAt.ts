@@ -79,6 +79,10 @@ interface IdealCacheEntry {
   };
 }
 const idealCache = new WeakMap<FluidBinding, IdealCacheEntry>();
+// the binding of the last idealGasAt call and its entry: a loop over one fluid skips the WeakMap
+// lookup (a hash probe per state); strong references to one binding only, replaced by the next
+let lastBinding: FluidBinding | undefined;
+let lastEntry: IdealCacheEntry | undefined;
 const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 const NO_EXTRA: readonly ExtraWarning[] = Object.freeze([]);
 // the root choice of the current stateAtTP call, read out at once (plain numbers, reused)
@@ -96,7 +100,7 @@ export function idealGasAt(
   T: number,
   x: readonly number[],
 ): IdealGasProperties {
-  let entry = idealCache.get(binding);
+  let entry = binding === lastBinding ? lastEntry : idealCache.get(binding);
   if (entry && entry.T === T && entry.x.length === x.length) {
     let same = true;
     for (let i = 0; i < x.length; i++) {
@@ -130,6 +134,8 @@ export function idealGasAt(
     };
     idealCache.set(binding, entry);
   }
+  lastBinding = binding;
+  lastEntry = entry;
   // the inputs were checked by the public entry point, as the lean path requires
   const lean = entry.leanPath;
   if (lean !== undefined && lean(T, IDEAL_GAS_PRESSURE_PA, x, entry.lean)) {
