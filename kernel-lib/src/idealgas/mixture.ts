@@ -106,6 +106,10 @@ export function idealGasMixture(
   // R ln(P / P_ref) of the last fast-path call, and its pressure
   let lastPressurePa = NaN;
   let lastPressureTerm = NaN;
+  // R ln x_i of the last fast-path composition (0 for x_i = 1 or 0): a state loop at one
+  // composition takes the n logarithms once; the same numbers, so the same sums
+  const lastX = new Float64Array(list.length).fill(NaN);
+  const lastMixing = new Float64Array(list.length);
 
   function at(temperatureK: number, pressurePa: number, x: readonly number[]): IdealGasProperties {
     requirePositive("temperatureK", temperatureK, "K");
@@ -160,8 +164,15 @@ export function idealGasMixture(
       const v = scratch;
       f.unchecked.evaluate(temperatureK, v);
       h += xi * (f.h0 + v.hFrom298 - f.hShift);
-      // ideal mixing, R ln x_i (0 for a pure component, without the logarithm)
-      const mixing = xi === 1 ? 0 : R * Math.log(xi);
+      // ideal mixing, R ln x_i (0 for a pure component, without the logarithm), kept per x_i
+      let mixing: number;
+      if (xi === lastX[i]) {
+        mixing = lastMixing[i];
+      } else {
+        mixing = xi === 1 ? 0 : R * Math.log(xi);
+        lastX[i] = xi;
+        lastMixing[i] = mixing;
+      }
       s += xi * (f.s0 + v.sFrom298 - f.sShift - pressureTerm - mixing);
       cp += xi * v.cp;
     }
