@@ -181,6 +181,17 @@ export class CubicTPRows {
   private F = NaN;
   private TF = NaN;
   private TTF = NaN;
+  // the fast route (precision "fast", see fastPoint())
+  private readonly fast: boolean;
+  private lnPressures: Float64Array | undefined;
+  private lnPig = NaN;
+  private fastI = -1;
+  private fastJ = -1;
+  private fastHas2 = false;
+  private fastZ1 = NaN;
+  private fastP1 = NaN;
+  private fastZ2 = NaN;
+  private fastP2 = NaN;
   // the current point (see point())
   private pointT = NaN;
   private pointP = NaN;
@@ -193,6 +204,7 @@ export class CubicTPRows {
       readonly properties: readonly SweepProperty[];
       readonly propertyIds: Int32Array;
       readonly basis: "molar" | "mass";
+      readonly precision?: "exact" | "fast";
       readonly firstAxis: Float64Array;
       readonly secondAxis: Float64Array;
     },
@@ -228,6 +240,8 @@ export class CubicTPRows {
     this.w = this.d1 * this.d2;
     const pc = x.length === 1 && model.pseudoCritical ? model.pseudoCritical(x) : undefined;
     this.pureLabels = pc !== undefined;
+    // the fast formulas take the properties' gas constant equal to the densities' R
+    this.fast = plan.precision === "fast" && this.extent !== "all" && this.Rg === R;
     this.tc = pc?.temperatureK ?? NaN;
     this.pc = pc?.pressurePa ?? NaN;
     this.rhoc = pc?.densityMolPerM3 ?? NaN;
@@ -285,7 +299,9 @@ export class CubicTPRows {
       ig.cv = src.cv;
       ig.referenceState = src.referenceState;
       ig.warnings = src.warnings;
+      this.lnPig = Math.log(src.pressurePa);
     }
+    this.fastI = -1;
     this.rowOk = true;
     return true;
   }
@@ -300,6 +316,10 @@ export class CubicTPRows {
     if (T !== this.rowT ? !this.setRow(T) : !this.rowOk) return false;
     // checkPressure's condition (its error comes from the general path)
     if (!(P > 0 && P >= MIN_PRESSURE_PA && P <= MAX_PRESSURE_PA)) return false;
+    if (this.fast) {
+      if (this.fastPoint(i, j, k)) return true;
+      this.fastI = -1;
+    }
     const RT = this.RT;
     const b = this.mixB;
     // the Z-cubic of densityRootsInto
@@ -401,6 +421,140 @@ export class CubicTPRows {
     }
     // through fields, not arguments: plain numbers passed to a function that is not inlined are
     // boxed on the heap
+    this.pointT = T;
+    this.pointP = P;
+    this.pointRho = rho;
+    this.write(k, label);
+    return true;
+  }
+
+  /**
+   * The fast route of one point (precision "fast"; the row and the pressure are checked by
+   * point()): only where the Z-cubic has one real root, clearly (the discriminant of the depressed
+   * cubic, R^2 - Q^3, above 1e-8 of its terms; near and inside the three-root region the exact
+   * route runs). The root: Newton's method on the monic cubic started from the previous point of
+   * the row (linear extrapolation in P from the last two), accepted when a step fell below 1e-9
+   * of Z within 8 steps (then one more step) and the residual is at rounding level (16 eps of the
+   * sum of the terms' magnitudes); otherwise, and at the first point of a row, the closed form
+   * (monicCubicRootsInto). A cubic with one real root has f'(Z) > 0 there, so Newton converges
+   * quadratically near it. The logarithms: ln(Z - B) = ln(1 - b rho) + ln Z (the residual's
+   * ln(1 - b rho) and the (T, P) departures' ln Z in one) and ln(D1 / D2); ln(P / P_ig) from a
+   * per-pressure table. The same formulas as state/properties.ts rearranged: s_r(T,P) =
+   * R (ln(Z - B) + (F + T F_T) I), a_r(T,P) = -RT (ln(Z - B) + F I), g_r(T,P) = a_r + RT (Z - 1).
+   * False (nothing written) hands the point to the exact route.
+   */
+  private fastPoint(i: number, j: number, k: number): boolean {
+    const T = this.temperatures[i];
+    const P = this.pressures[j];
+    const RT = this.RT;
+    const b = this.mixB;
+    const A = (this.mixA * P) / this.RT2;
+    const B = (b * P) / RT;
+    const u = this.u;
+    const w = this.w;
+    const c2 = -(1 + B - u * B);
+    const c1 = A + w * B * B - u * B - u * B * B;
+    const c0 = -(A * B + w * B * B + w * B * B * B);
+    const Q = (c2 * c2 - 3 * c1) / 9;
+    const Rq = (2 * c2 * c2 * c2 - 9 * c2 * c1 + 27 * c0) / 54;
+    const R2 = Rq * Rq;
+    const Q3 = Q * Q * Q;
+    if (!(R2 - Q3 > 1e-8 * Math.max(R2, Math.abs(Q3)))) return false;
+    const continued = i === this.fastI && j === this.fastJ + 1;
+    let Z = NaN;
+    if (continued) {
+      let z = this.fastZ1;
+      if (this.fastHas2 && this.fastP1 !== this.fastP2) {
+        z += ((this.fastZ1 - this.fastZ2) * (P - this.fastP1)) / (this.fastP1 - this.fastP2);
+      }
+      let converged = false;
+      for (let it = 0; it < 8; it++) {
+        const f = ((z + c2) * z + c1) * z + c0;
+        const df = (3 * z + 2 * c2) * z + c1;
+        if (!(df !== 0 && Number.isFinite(df))) break;
+        const step = f / df;
+        z -= step;
+        if (Math.abs(step) <= 1e-9 * Math.abs(z)) {
+          const f2 = ((z + c2) * z + c1) * z + c0;
+          const df2 = (3 * z + 2 * c2) * z + c1;
+          if (df2 > 0) z -= f2 / df2;
+          converged = df2 > 0;
+          break;
+        }
+      }
+      if (converged) {
+        const az = Math.abs(z);
+        const f = ((z + c2) * z + c1) * z + c0;
+        const scale = az * az * az + Math.abs(c2) * az * az + Math.abs(c1) * az + Math.abs(c0);
+        if (Math.abs(f) <= 16 * Number.EPSILON * scale) Z = z;
+      }
+    }
+    if (Number.isNaN(Z)) {
+      const c = this.coefficients;
+      c[0] = c2;
+      c[1] = c1;
+      c[2] = c0;
+      if (monicCubicRootsInto(c, this.zRoots) !== 1) return false;
+      Z = this.zRoots[0];
+    }
+    if (!(Z > B)) return false;
+    const rho = P / (Z * RT);
+    const eps = b * rho;
+    if (!(eps < 1)) return false;
+    const d1 = this.d1;
+    const d2 = this.d2;
+    const F = this.F;
+    const TF = this.TF;
+    const D1 = 1 + d1 * eps;
+    const D2 = 1 + d2 * eps;
+    const I1 = 1 / (D1 * D2);
+    const I2 = -(d1 / D1 + d2 / D2) * I1;
+    const q = eps / (1 - eps);
+    const aD = q - F * eps * I1;
+    const aDD = q * q - F * eps * eps * I2;
+    // mechanically stable (dPdRho > 0: 1 + 2 aD + aDD > 0)
+    if (!(1 + 2 * aD + aDD > 0)) return false;
+    const I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
+    const L = Math.log(Z - B);
+    const v = this.v;
+    const hRes = RT * (aD + TF * I);
+    const uRes = RT * TF * I;
+    const sTP = R * (L + (F + TF) * I);
+    const aTP = -RT * (L + F * I);
+    const gTP = aTP + RT * aD;
+    v.Z = 1 + aD;
+    v.hRes = hRes;
+    v.uRes = uRes;
+    v.sTP = sTP;
+    v.aTP = aTP;
+    v.gTP = gTP;
+    if (this.extent === "energies") {
+      let lnP = this.lnPressures;
+      if (lnP === undefined) {
+        lnP = this.pressures.map(Math.log);
+        this.lnPressures = lnP;
+      }
+      const shift = lnP[j] - this.lnPig;
+      const ig = this.ig;
+      v.h = ig.h + hRes;
+      v.u = ig.u + uRes;
+      v.s = ig.s - R * shift + sTP;
+      v.a = ig.a + RT * shift + aTP;
+      v.g = ig.g + RT * shift + gTP;
+    }
+    let label: PhaseLabel;
+    if (this.pureLabels) {
+      label = T >= this.tc && P >= this.pc ? "supercritical" : rho > this.rhoc ? "liquid" : "vapor";
+    } else {
+      label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
+    }
+    this.fastHas2 = continued;
+    this.fastZ2 = this.fastZ1;
+    this.fastP2 = this.fastP1;
+    this.fastZ1 = Z;
+    this.fastP1 = P;
+    this.fastI = i;
+    this.fastJ = j;
     this.pointT = T;
     this.pointP = P;
     this.pointRho = rho;
