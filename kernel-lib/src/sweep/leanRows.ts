@@ -192,6 +192,10 @@ export class CubicTPRows {
   private fastP1 = NaN;
   private fastZ2 = NaN;
   private fastP2 = NaN;
+  private fRho = NaN;
+  private fAD = NaN;
+  private fI = NaN;
+  private fL = NaN;
   // the current point (see point())
   private pointT = NaN;
   private pointP = NaN;
@@ -459,8 +463,11 @@ export class CubicTPRows {
     const Rq = (2 * c2 * c2 * c2 - 9 * c2 * c1 + 27 * c0) / 54;
     const R2 = Rq * Rq;
     const Q3 = Q * Q * Q;
-    if (!(R2 - Q3 > 1e-8 * Math.max(R2, Math.abs(Q3)))) return false;
-    const continued = i === this.fastI && j === this.fastJ + 1;
+    const gap = 1e-8 * Math.max(R2, Math.abs(Q3));
+    const one = R2 - Q3 > gap;
+    // near the boundary of the three-root region the exact route runs
+    if (!one && !(R2 - Q3 < -gap)) return false;
+    const continued = one && i === this.fastI && j === this.fastJ + 1;
     let Z = NaN;
     if (continued) {
       let z = this.fastZ1;
@@ -489,33 +496,56 @@ export class CubicTPRows {
         if (Math.abs(f) <= 16 * Number.EPSILON * scale) Z = z;
       }
     }
+    const zRoots = this.zRoots;
+    let threeLabel: PhaseLabel | undefined;
     if (Number.isNaN(Z)) {
       const c = this.coefficients;
       c[0] = c2;
       c[1] = c1;
       c[2] = c0;
-      if (monicCubicRootsInto(c, this.zRoots) !== 1) return false;
-      Z = this.zRoots[0];
+      const count = monicCubicRootsInto(c, zRoots);
+      if (one) {
+        if (count !== 1) return false;
+        Z = zRoots[0];
+      } else {
+        // three roots, all above B and distinct: the outer two (the middle one is mechanically
+        // unstable) compared by g_r/RT as chooseDensityRootInto does; a near tie (the saturation
+        // pressure within rounding) goes to the exact route, whose rounding decides it
+        if (count !== 3 || !(zRoots[0] > B && zRoots[0] < zRoots[1] && zRoots[1] < zRoots[2])) {
+          return false;
+        }
+        if (!this.rootValues(0, j)) return false;
+        const aDL = this.fAD;
+        const IL = this.fI;
+        const LL = this.fL;
+        const rhoL = this.fRho;
+        if (!this.rootValues(2, j)) return false;
+        const gL = aDL - LL - this.F * IL;
+        const gV = this.fAD - this.fL - this.F * this.fI;
+        if (!(Math.abs(gL - gV) > 1e-11 * (Math.abs(gL) + Math.abs(gV) + 1))) return false;
+        if (gL < gV) {
+          this.fAD = aDL;
+          this.fI = IL;
+          this.fL = LL;
+          this.fRho = rhoL;
+          Z = zRoots[0];
+          threeLabel = "liquid";
+        } else {
+          Z = zRoots[2];
+          threeLabel = "vapor";
+        }
+      }
     }
-    if (!(Z > B)) return false;
-    const rho = P / (Z * RT);
-    const eps = b * rho;
-    if (!(eps < 1)) return false;
-    const d1 = this.d1;
-    const d2 = this.d2;
+    if (threeLabel === undefined) {
+      zRoots[0] = Z;
+      if (!this.rootValues(0, j)) return false;
+    }
+    const rho = this.fRho;
+    const aD = this.fAD;
+    const I = this.fI;
+    const L = this.fL;
     const F = this.F;
     const TF = this.TF;
-    const D1 = 1 + d1 * eps;
-    const D2 = 1 + d2 * eps;
-    const I1 = 1 / (D1 * D2);
-    const I2 = -(d1 / D1 + d2 / D2) * I1;
-    const q = eps / (1 - eps);
-    const aD = q - F * eps * I1;
-    const aDD = q * q - F * eps * eps * I2;
-    // mechanically stable (dPdRho > 0: 1 + 2 aD + aDD > 0)
-    if (!(1 + 2 * aD + aDD > 0)) return false;
-    const I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
-    const L = Math.log(Z - B);
     const v = this.v;
     const hRes = RT * (aD + TF * I);
     const uRes = RT * TF * I;
@@ -543,7 +573,8 @@ export class CubicTPRows {
       v.g = ig.g + RT * shift + gTP;
     }
     let label: PhaseLabel;
-    if (this.pureLabels) {
+    if (threeLabel !== undefined) label = threeLabel;
+    else if (this.pureLabels) {
       label = T >= this.tc && P >= this.pc ? "supercritical" : rho > this.rhoc ? "liquid" : "vapor";
     } else {
       label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
@@ -559,6 +590,40 @@ export class CubicTPRows {
     this.pointP = P;
     this.pointRho = rho;
     this.write(k, label);
+    return true;
+  }
+
+  /**
+   * The quantities of the fast route at root zRoots[m] of the point of pressure pressures[j]
+   * into fRho, fAD (alpha_r's rho-derivative term, Z - 1), fI (the integral I of the cubic's
+   * attraction term) and fL (ln(Z - B)); false when the root is at or beyond close packing or
+   * mechanically unstable (dP/drho <= 0: 1 + 2 aD + aDD <= 0).
+   */
+  private rootValues(m: number, j: number): boolean {
+    const Z = this.zRoots[m];
+    const P = this.pressures[j];
+    const RT = this.RT;
+    const b = this.mixB;
+    const B = (b * P) / RT;
+    if (!(Z > B)) return false;
+    const rho = P / (Z * RT);
+    const eps = b * rho;
+    if (!(eps < 1)) return false;
+    const d1 = this.d1;
+    const d2 = this.d2;
+    const F = this.F;
+    const D1 = 1 + d1 * eps;
+    const D2 = 1 + d2 * eps;
+    const I1 = 1 / (D1 * D2);
+    const I2 = -(d1 / D1 + d2 / D2) * I1;
+    const q = eps / (1 - eps);
+    const aD = q - F * eps * I1;
+    const aDD = q * q - F * eps * eps * I2;
+    if (!(1 + 2 * aD + aDD > 0)) return false;
+    this.fRho = rho;
+    this.fAD = aD;
+    this.fI = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
+    this.fL = Math.log(Z - B);
     return true;
   }
 

@@ -189,7 +189,7 @@ export interface SweepRequest {
    * (T, P) points of a cubic with one real Z root take a Newton root started from the previous
    * point of the row (verified: one real root by the discriminant, converged, residual at
    * rounding level) and one logarithm ln(Z - B) for ln(1 - b rho) + ln Z; the results differ from
-   * the single state by rounding, at most 1e-12 relative (floor: R T for energies, R for entropies,
+   * the single state by rounding, at most 1e-10 relative (floor: R T for energies, R for entropies,
    * 1 for Z; see DEVELOPERS.md "Sweep benchmarks"). Other points and models take the exact route.
    */
   readonly precision?: "exact" | "fast";
