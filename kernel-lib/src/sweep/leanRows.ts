@@ -507,6 +507,9 @@ export class CubicTPRows {
       if (one) {
         if (count !== 1) return false;
         Z = zRoots[0];
+      } else if (count === 3 && zRoots[1] <= B && zRoots[2] > B) {
+        // one root above B (as the exact route, which drops the others): labelled as one root
+        Z = zRoots[2];
       } else {
         // three roots, all above B and distinct: the outer two (the middle one is mechanically
         // unstable) compared by g_r/RT as chooseDensityRootInto does; a near tie (the saturation
@@ -536,15 +539,35 @@ export class CubicTPRows {
         }
       }
     }
-    if (threeLabel === undefined) {
-      zRoots[0] = Z;
-      if (!this.rootValues(0, j)) return false;
-    }
-    const rho = this.fRho;
-    const aD = this.fAD;
-    const I = this.fI;
-    const L = this.fL;
+    let rho: number;
+    let aD: number;
+    let I: number;
+    let L: number;
     const F = this.F;
+    if (threeLabel === undefined) {
+      // rootValues() written out (the hot path of one root)
+      if (!(Z > B)) return false;
+      rho = P / (Z * RT);
+      const eps = b * rho;
+      if (!(eps < 1)) return false;
+      const d1 = this.d1;
+      const d2 = this.d2;
+      const D1 = 1 + d1 * eps;
+      const D2 = 1 + d2 * eps;
+      const I1 = 1 / (D1 * D2);
+      const I2 = -(d1 / D1 + d2 / D2) * I1;
+      const q = eps / (1 - eps);
+      aD = q - F * eps * I1;
+      const aDD = q * q - F * eps * eps * I2;
+      if (!(1 + 2 * aD + aDD > 0)) return false;
+      I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
+      L = Math.log(Z - B);
+    } else {
+      rho = this.fRho;
+      aD = this.fAD;
+      I = this.fI;
+      L = this.fL;
+    }
     const TF = this.TF;
     const v = this.v;
     const hRes = RT * (aD + TF * I);
