@@ -434,18 +434,20 @@ export class CubicTPRows {
 
   /**
    * The fast route of one point (precision "fast"; the row and the pressure are checked by
-   * point()): only where the Z-cubic has one real root, clearly (the discriminant of the depressed
-   * cubic, R^2 - Q^3, above 1e-8 of its terms; near and inside the three-root region the exact
-   * route runs). The root: Newton's method on the monic cubic started from the previous point of
-   * the row (linear extrapolation in P from the last two), accepted when a step fell below 1e-9
-   * of Z within 8 steps (then one more step) and the residual is at rounding level (16 eps of the
-   * sum of the terms' magnitudes); otherwise, and at the first point of a row, the closed form
-   * (monicCubicRootsInto). A cubic with one real root has f'(Z) > 0 there, so Newton converges
-   * quadratically near it. The logarithms: ln(Z - B) = ln(1 - b rho) + ln Z (the residual's
-   * ln(1 - b rho) and the (T, P) departures' ln Z in one) and ln(D1 / D2); ln(P / P_ig) from a
-   * per-pressure table. The same formulas as state/properties.ts rearranged: s_r(T,P) =
-   * R (ln(Z - B) + (F + T F_T) I), a_r(T,P) = -RT (ln(Z - B) + F I), g_r(T,P) = a_r + RT (Z - 1).
-   * False (nothing written) hands the point to the exact route.
+   * point()). Where the Z-cubic's discriminant (R^2 - Q^3 of the depressed cubic) is within 1e-8
+   * of its terms of zero, the exact route runs. The root: Newton's method on the monic cubic
+   * started from the previous point of the row (linear extrapolation in P from the last two),
+   * accepted when a step fell below 1e-9 of Z within 8 steps (then one more step), the residual is
+   * at rounding level (16 eps of the sum of the terms' magnitudes), and, with three real roots,
+   * the other two (the deflated quadratic) lie below B with a margin, so that Z is the one root
+   * above B, the root the exact route takes. Otherwise, and at the first point of a row, the
+   * closed form (monicCubicRootsInto); with three roots above B the outer two are compared by
+   * g_r/RT (chooseDensityRootInto's rule; a near tie, within 1e-11, goes to the exact route). The
+   * logarithms: ln(Z - B) = ln(1 - b rho) + ln Z (the residual's ln(1 - b rho) and the (T, P)
+   * departures' ln Z in one) and ln(D1 / D2); ln(P / P_ig) from a per-pressure table. The
+   * formulas of state/properties.ts rearranged: s_r(T,P) = R (ln(Z - B) + (F + T F_T) I),
+   * a_r(T,P) = -RT (ln(Z - B) + F I), g_r(T,P) = a_r + RT (Z - 1). False (nothing written) hands
+   * the point to the exact route.
    */
   private fastPoint(i: number, j: number, k: number): boolean {
     const T = this.temperatures[i];
@@ -467,7 +469,7 @@ export class CubicTPRows {
     const one = R2 - Q3 > gap;
     // near the boundary of the three-root region the exact route runs
     if (!one && !(R2 - Q3 < -gap)) return false;
-    const continued = one && i === this.fastI && j === this.fastJ + 1;
+    const continued = i === this.fastI && j === this.fastJ + 1;
     let Z = NaN;
     if (continued) {
       let z = this.fastZ1;
@@ -493,7 +495,19 @@ export class CubicTPRows {
         const az = Math.abs(z);
         const f = ((z + c2) * z + c1) * z + c0;
         const scale = az * az * az + Math.abs(c2) * az * az + Math.abs(c1) * az + Math.abs(c0);
-        if (Math.abs(f) <= 16 * Number.EPSILON * scale) Z = z;
+        if (Math.abs(f) <= 16 * Number.EPSILON * scale) {
+          if (one) Z = z;
+          else {
+            // three real roots: z is taken only when the other two (the roots of the deflated
+            // quadratic x^2 + s1 x + s0) lie below B with a margin, i.e. z is the one root above B
+            const s1 = c2 + z;
+            const s0 = c1 + z * s1;
+            const qB = (B + s1) * B + s0;
+            if (z > B && -s1 / 2 < B && qB > 1e-10 * (B * B + Math.abs(s1) * B + Math.abs(s0))) {
+              Z = z;
+            }
+          }
+        }
       }
     }
     const zRoots = this.zRoots;
