@@ -437,7 +437,7 @@ export class CubicTPRows {
    * point()). Where the Z-cubic's discriminant (R^2 - Q^3 of the depressed cubic) is within 1e-8
    * of its terms of zero, the exact route runs. The root: Newton's method on the monic cubic
    * started from the previous point of the row (linear extrapolation in P from the last two),
-   * accepted when a step fell below 1e-9 of Z within 8 steps (then one more step), the residual is
+   * accepted when a step fell below 1e-9 of Z within 8 steps (quadratic convergence), the residual is
    * at rounding level (16 eps of the sum of the terms' magnitudes), and, with three real roots,
    * the other two (the deflated quadratic) lie below B with a margin, so that Z is the one root
    * above B, the root the exact route takes. Otherwise, and at the first point of a row, the
@@ -483,11 +483,10 @@ export class CubicTPRows {
         if (!(df !== 0 && Number.isFinite(df))) break;
         const step = f / df;
         z -= step;
+        // quadratic convergence: after a step below 1e-9 of Z the error is below rounding (the
+        // residual check below verifies it)
         if (Math.abs(step) <= 1e-9 * Math.abs(z)) {
-          const f2 = ((z + c2) * z + c1) * z + c0;
-          const df2 = (3 * z + 2 * c2) * z + c1;
-          if (df2 > 0) z -= f2 / df2;
-          converged = df2 > 0;
+          converged = df > 0;
           break;
         }
       }
