@@ -192,6 +192,9 @@ export class CubicTPRows {
   private fastP1 = NaN;
   private fastZ2 = NaN;
   private fastP2 = NaN;
+  private fastHas3 = false;
+  private fastZ3 = NaN;
+  private fastP3 = NaN;
   private fRho = NaN;
   private fAD = NaN;
   private fI = NaN;
@@ -436,9 +439,9 @@ export class CubicTPRows {
    * The fast route of one point (precision "fast"; the row and the pressure are checked by
    * point()). Where the Z-cubic's discriminant (R^2 - Q^3 of the depressed cubic) is within 1e-8
    * of its terms of zero, the exact route runs. The root: Newton's method on the monic cubic
-   * started from the previous point of the row (linear extrapolation in P from the last two),
-   * accepted when a step fell below 1e-9 of Z within 8 steps (quadratic convergence), the residual is
-   * at rounding level (16 eps of the sum of the terms' magnitudes), and, with three real roots,
+   * started from the previous point of the row (extrapolated in P through the last two or three),
+   * accepted when within 8 steps the residual is at rounding level (16 eps of the sum of the
+   * terms' magnitudes), and, with three real roots,
    * the other two (the deflated quadratic) lie below B with a margin, so that Z is the one root
    * above B, the root the exact route takes. Otherwise, and at the first point of a row, the
    * closed form (monicCubicRootsInto); with three roots above B the outer two are compared by
@@ -472,39 +475,49 @@ export class CubicTPRows {
     const continued = i === this.fastI && j === this.fastJ + 1;
     let Z = NaN;
     if (continued) {
-      let z = this.fastZ1;
-      if (this.fastHas2 && this.fastP1 !== this.fastP2) {
-        z += ((this.fastZ1 - this.fastZ2) * (P - this.fastP1)) / (this.fastP1 - this.fastP2);
+      // the start: Z of the previous point, extrapolated in P through the last two or three
+      // points of the row (Lagrange)
+      const Z1 = this.fastZ1;
+      const P1 = this.fastP1;
+      const P2 = this.fastP2;
+      const P3 = this.fastP3;
+      let z = Z1;
+      if (this.fastHas3 && P1 !== P2 && P2 !== P3 && P1 !== P3) {
+        z =
+          (Z1 * (P - P2) * (P - P3)) / ((P1 - P2) * (P1 - P3)) +
+          (this.fastZ2 * (P - P1) * (P - P3)) / ((P2 - P1) * (P2 - P3)) +
+          (this.fastZ3 * (P - P1) * (P - P2)) / ((P3 - P1) * (P3 - P2));
+      } else if (this.fastHas2 && P1 !== P2) {
+        z += ((Z1 - this.fastZ2) * (P - P1)) / (P1 - P2);
       }
+      // Newton until the residual is at rounding level (16 eps of the sum of the terms'
+      // magnitudes), at most 8 steps
+      const ac2 = Math.abs(c2);
+      const ac1 = Math.abs(c1);
+      const ac0 = Math.abs(c0);
       let converged = false;
-      for (let it = 0; it < 8; it++) {
+      for (let it = 0; it < 9; it++) {
         const f = ((z + c2) * z + c1) * z + c0;
-        const df = (3 * z + 2 * c2) * z + c1;
-        if (!(df !== 0 && Number.isFinite(df))) break;
-        const step = f / df;
-        z -= step;
-        // quadratic convergence: after a step below 1e-9 of Z the error is below rounding (the
-        // residual check below verifies it)
-        if (Math.abs(step) <= 1e-9 * Math.abs(z)) {
-          converged = df > 0;
+        const az = Math.abs(z);
+        if (Math.abs(f) <= 16 * Number.EPSILON * (((az + ac2) * az + ac1) * az + ac0)) {
+          converged = true;
           break;
         }
+        if (it === 8) break;
+        const df = (3 * z + 2 * c2) * z + c1;
+        if (!(df !== 0 && Number.isFinite(df))) break;
+        z -= f / df;
       }
       if (converged) {
-        const az = Math.abs(z);
-        const f = ((z + c2) * z + c1) * z + c0;
-        const scale = az * az * az + Math.abs(c2) * az * az + Math.abs(c1) * az + Math.abs(c0);
-        if (Math.abs(f) <= 16 * Number.EPSILON * scale) {
-          if (one) Z = z;
-          else {
-            // three real roots: z is taken only when the other two (the roots of the deflated
-            // quadratic x^2 + s1 x + s0) lie below B with a margin, i.e. z is the one root above B
-            const s1 = c2 + z;
-            const s0 = c1 + z * s1;
-            const qB = (B + s1) * B + s0;
-            if (z > B && -s1 / 2 < B && qB > 1e-10 * (B * B + Math.abs(s1) * B + Math.abs(s0))) {
-              Z = z;
-            }
+        if (one) Z = z;
+        else {
+          // three real roots: z is taken only when the other two (the roots of the deflated
+          // quadratic x^2 + s1 x + s0) lie below B with a margin, i.e. z is the one root above B
+          const s1 = c2 + z;
+          const s0 = c1 + z * s1;
+          const qB = (B + s1) * B + s0;
+          if (z > B && -s1 / 2 < B && qB > 1e-10 * (B * B + Math.abs(s1) * B + Math.abs(s0))) {
+            Z = z;
           }
         }
       }
@@ -615,7 +628,10 @@ export class CubicTPRows {
     } else {
       label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
     }
+    this.fastHas3 = continued && this.fastHas2;
     this.fastHas2 = continued;
+    this.fastZ3 = this.fastZ2;
+    this.fastP3 = this.fastP2;
     this.fastZ2 = this.fastZ1;
     this.fastP2 = this.fastP1;
     this.fastZ1 = Z;
