@@ -464,8 +464,9 @@ export class CubicTPRows {
     const c2 = -(1 + B - u * B);
     const c1 = A + w * B * B - u * B - u * B * B;
     const c0 = -(A * B + w * B * B + w * B * B * B);
-    const Q = (c2 * c2 - 3 * c1) / 9;
-    const Rq = (2 * c2 * c2 * c2 - 9 * c2 * c1 + 27 * c0) / 54;
+    // (only their sign and size matter: products with 1/9 and 1/54 for the divisions)
+    const Q = (c2 * c2 - 3 * c1) * (1 / 9);
+    const Rq = (2 * c2 * c2 * c2 - 9 * c2 * c1 + 27 * c0) * (1 / 54);
     const R2 = Rq * Rq;
     const Q3 = Q * Q * Q;
     const gap = 1e-8 * Math.max(R2, Math.abs(Q3));
@@ -581,7 +582,7 @@ export class CubicTPRows {
       const D1 = 1 + d1 * eps;
       const D2 = 1 + d2 * eps;
       const I1 = 1 / (D1 * D2);
-      const I2 = -(d1 / D1 + d2 / D2) * I1;
+      const I2 = -(d1 * D2 + d2 * D1) * I1 * I1;
       const q = eps / (1 - eps);
       aD = q - F * eps * I1;
       const aDD = q * q - F * eps * eps * I2;
@@ -667,7 +668,7 @@ export class CubicTPRows {
     const D1 = 1 + d1 * eps;
     const D2 = 1 + d2 * eps;
     const I1 = 1 / (D1 * D2);
-    const I2 = -(d1 / D1 + d2 / D2) * I1;
+    const I2 = -(d1 * D2 + d2 * D1) * I1 * I1;
     const q = eps / (1 - eps);
     const aD = q - F * eps * I1;
     const aDD = q * q - F * eps * eps * I2;
