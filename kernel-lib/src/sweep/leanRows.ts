@@ -195,6 +195,8 @@ export class CubicTPRows {
   private fastHas3 = false;
   private fastZ3 = NaN;
   private fastP3 = NaN;
+  /** The fast route's values by property id (only the ids of its extents are set). */
+  private readonly fastValues = new Float64Array(QUALITY_ID + 1).fill(NaN);
   private fRho = NaN;
   private fAD = NaN;
   private fI = NaN;
@@ -596,18 +598,23 @@ export class CubicTPRows {
       L = this.fL;
     }
     const TF = this.TF;
-    const v = this.v;
+    // the values by property id (see writeFast)
+    const fv = this.fastValues;
     const hRes = RT * (aD + TF * I);
     const uRes = RT * TF * I;
     const sTP = R * (L + (F + TF) * I);
     const aTP = -RT * (L + F * I);
     const gTP = aTP + RT * aD;
-    v.Z = 1 + aD;
-    v.hRes = hRes;
-    v.uRes = uRes;
-    v.sTP = sTP;
-    v.aTP = aTP;
-    v.gTP = gTP;
+    fv[T_ID] = T;
+    fv[P_ID] = P;
+    fv[RHO_ID] = rho;
+    fv[RHO_MASS_ID] = rho * this.M;
+    fv[Z_ID] = 1 + aD;
+    fv[H_RES_ID] = hRes;
+    fv[U_RES_ID] = uRes;
+    fv[S_RES_ID] = sTP;
+    fv[A_RES_ID] = aTP;
+    fv[G_RES_ID] = gTP;
     if (this.extent === "energies") {
       let lnP = this.lnPressures;
       if (lnP === undefined) {
@@ -616,11 +623,11 @@ export class CubicTPRows {
       }
       const shift = lnP[j] - this.lnPig;
       const ig = this.ig;
-      v.h = ig.h + hRes;
-      v.u = ig.u + uRes;
-      v.s = ig.s - R * shift + sTP;
-      v.a = ig.a + RT * shift + aTP;
-      v.g = ig.g + RT * shift + gTP;
+      fv[H_ID] = ig.h + hRes;
+      fv[U_ID] = ig.u + uRes;
+      fv[S_ID] = ig.s - R * shift + sTP;
+      fv[A_ID] = ig.a + RT * shift + aTP;
+      fv[G_ID] = ig.g + RT * shift + gTP;
     }
     let label: PhaseLabel;
     if (threeLabel !== undefined) label = threeLabel;
@@ -629,6 +636,7 @@ export class CubicTPRows {
     } else {
       label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
     }
+    fv[QUALITY_ID] = label === "vapor" ? 1 : label === "liquid" ? 0 : NaN;
     this.fastHas3 = continued && this.fastHas2;
     this.fastHas2 = continued;
     this.fastZ3 = this.fastZ2;
@@ -639,10 +647,18 @@ export class CubicTPRows {
     this.fastP1 = P;
     this.fastI = i;
     this.fastJ = j;
-    this.pointT = T;
-    this.pointP = P;
-    this.pointRho = rho;
-    this.write(k, label);
+    const ids = this.ids;
+    const cols = this.cols;
+    const factor = this.factor;
+    for (let m = 0; m < ids.length; m++) cols[m][k] = fv[ids[m]] * factor[m];
+    this.phaseCount[k] = 1;
+    this.phaseKind[k] =
+      label === "vapor"
+        ? SWEEP_PHASE_KINDS.vapor
+        : label === "liquid"
+          ? SWEEP_PHASE_KINDS.liquid
+          : SWEEP_PHASE_KINDS.supercritical;
+    this.errorCode[k] = 0;
     return true;
   }
 

@@ -25,7 +25,9 @@ const TOLERANCE = 1e-10;
 type Get = (s: FluidState) => number;
 // property, value of the single state, floor of the relative scale (T in K)
 const GET: Partial<Record<SweepProperty, [Get, (T: number) => number]>> = {
+  T: [(s) => s.temperatureK, () => 0],
   rho: [(s) => s.densityMolPerM3, () => 0],
+  rhoMass: [(s) => s.densityKgPerM3, () => 0],
   Z: [(s) => s.Z, () => 1],
   h: [(s) => s.molar.h, (T) => R * T],
   s: [(s) => s.molar.s, () => R],
@@ -41,7 +43,7 @@ const GET: Partial<Record<SweepProperty, [Get, (T: number) => number]>> = {
 
 const SETS: readonly (readonly SweepProperty[])[] = [
   ["hRes", "sRes"],
-  ["rho", "Z", "hRes", "sRes", "uRes", "aRes", "gRes"],
+  ["rho", "Z", "hRes", "sRes", "uRes", "aRes", "gRes", "T", "rhoMass"],
   ["h", "s"],
   ["h", "s", "rho", "u", "a", "g"],
 ];
