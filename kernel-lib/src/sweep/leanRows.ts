@@ -30,7 +30,7 @@
 import { R } from "../constants.js";
 import type { ResidualDerivativesDraft, ResidualModel } from "../eos/types.js";
 import type { CubicModel } from "../eos/cubic/cubicModel.js";
-import { dPdRho, residualGibbsTP } from "../eos/residualRelations.js";
+import { dPdRho, residualGibbsTP, stiffnessFromResidual } from "../eos/residualRelations.js";
 import { monicCubicRootsInto } from "../numerics/cubicRoots.js";
 import type { IdealGasProperties } from "../idealgas/types.js";
 import type { FluidBinding, PhaseLabel } from "../state/types.js";
@@ -587,8 +587,11 @@ export class CubicTPRows {
       const I2 = -(d1 * D2 + d2 * D1) * I1 * I1;
       const q = eps / (1 - eps);
       aD = q - F * eps * I1;
-      const aDD = q * q - F * eps * eps * I2;
-      if (!(1 + 2 * aD + aDD > 0)) return false;
+      // mechanically stable (stiffnessFromResidual: the sign of dP/drho)
+      const r = this.ra;
+      r.aD = aD;
+      r.aDD = q * q - F * eps * eps * I2;
+      if (!(stiffnessFromResidual(r) > 0)) return false;
       I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
       L = Math.log(Z - B);
     } else {
@@ -687,8 +690,10 @@ export class CubicTPRows {
     const I2 = -(d1 * D2 + d2 * D1) * I1 * I1;
     const q = eps / (1 - eps);
     const aD = q - F * eps * I1;
-    const aDD = q * q - F * eps * eps * I2;
-    if (!(1 + 2 * aD + aDD > 0)) return false;
+    const r = this.ra;
+    r.aD = aD;
+    r.aDD = q * q - F * eps * eps * I2;
+    if (!(stiffnessFromResidual(r) > 0)) return false;
     this.fRho = rho;
     this.fAD = aD;
     this.fI = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
