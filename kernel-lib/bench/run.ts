@@ -67,6 +67,22 @@ const RATIOS: readonly {
     meaning: "speed-up of fluid.sweep over one stateAtTP per point (h, s surface)",
   },
   {
+    case: "grid-residual-200x200-per-state",
+    baseline: "grid-residual-200x200-fast",
+    meaning:
+      'speed-up of fluid.sweep precision "fast" over one stateAtTP per point (residual grid)',
+  },
+  {
+    case: "grid-residual-200x200",
+    baseline: "grid-residual-200x200-fast",
+    meaning: 'precision "fast" over the exact route of fluid.sweep (residual h, s grid)',
+  },
+  {
+    case: "surface-200x200",
+    baseline: "surface-200x200-sweep-fast",
+    meaning: 'speed-up of fluid.sweep precision "fast" over one stateAtTP per point (h, s surface)',
+  },
+  {
     case: "sweep-1e6-mix10-1worker",
     baseline: "sweep-1e6-mix10",
     meaning: "scaling from 1 worker to all cores (wall clock; ideal: the number of cores)",

@@ -74,6 +74,46 @@ export const sweepCases: BenchCase[] = [
       };
     },
   },
+  {
+    name: "grid-residual-200x200-fast",
+    description:
+      'the grid-residual-200x200 grid through fluid.sweep with precision "fast" (within 1e-10 of the single state)',
+    measure: { samples: 21 },
+    setup() {
+      const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+      return function gridResidualSweepFast() {
+        const r = fluid.sweep({
+          specification: "TP",
+          first: T_RES,
+          second: P_RES,
+          properties: ["hRes", "sRes"],
+          precision: "fast",
+        });
+        if (r.failed !== 0)
+          throw new Error(`grid-residual-200x200-fast: ${r.failed} points failed`);
+        return r.values.hRes![0] + r.values.sRes![N * N - 1];
+      };
+    },
+  },
+  {
+    name: "surface-200x200-sweep-fast",
+    description:
+      'the surface-200x200 grid through fluid.sweep with precision "fast" (within 1e-10 of the single state)',
+    measure: { samples: 21 },
+    setup() {
+      const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+      return function surfaceSweepFast() {
+        const r = fluid.sweep({
+          specification: "TP",
+          first: { from: 200, to: 500, count: 200 },
+          second: { from: 1e5, to: 20e6, count: 200 },
+          properties: ["h", "s"],
+          precision: "fast",
+        });
+        return r.values.h![0] + r.values.s![0];
+      };
+    },
+  },
 ];
 
 /** The built worker script (the bench bundle runs from out/bench; workers need kernel-lib/dist). */

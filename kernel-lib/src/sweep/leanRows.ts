@@ -30,7 +30,7 @@
 import { R } from "../constants.js";
 import type { ResidualDerivativesDraft, ResidualModel } from "../eos/types.js";
 import type { CubicModel } from "../eos/cubic/cubicModel.js";
-import { dPdRho, residualGibbsTP } from "../eos/residualRelations.js";
+import { dPdRho, residualGibbsTP, stiffnessFromResidual } from "../eos/residualRelations.js";
 import { monicCubicRootsInto } from "../numerics/cubicRoots.js";
 import type { IdealGasProperties } from "../idealgas/types.js";
 import type { FluidBinding, PhaseLabel } from "../state/types.js";
@@ -181,6 +181,26 @@ export class CubicTPRows {
   private F = NaN;
   private TF = NaN;
   private TTF = NaN;
+  // the fast route (precision "fast", see fastPoint())
+  private readonly fast: boolean;
+  private lnPressures: Float64Array | undefined;
+  private lnPig = NaN;
+  private fastI = -1;
+  private fastJ = -1;
+  private fastHas2 = false;
+  private fastZ1 = NaN;
+  private fastP1 = NaN;
+  private fastZ2 = NaN;
+  private fastP2 = NaN;
+  private fastHas3 = false;
+  private fastZ3 = NaN;
+  private fastP3 = NaN;
+  /** The fast route's values by property id (only the ids of its extents are set). */
+  private readonly fastValues = new Float64Array(QUALITY_ID + 1).fill(NaN);
+  private fRho = NaN;
+  private fAD = NaN;
+  private fI = NaN;
+  private fL = NaN;
   // the current point (see point())
   private pointT = NaN;
   private pointP = NaN;
@@ -193,6 +213,7 @@ export class CubicTPRows {
       readonly properties: readonly SweepProperty[];
       readonly propertyIds: Int32Array;
       readonly basis: "molar" | "mass";
+      readonly precision?: "exact" | "fast";
       readonly firstAxis: Float64Array;
       readonly secondAxis: Float64Array;
     },
@@ -228,6 +249,8 @@ export class CubicTPRows {
     this.w = this.d1 * this.d2;
     const pc = x.length === 1 && model.pseudoCritical ? model.pseudoCritical(x) : undefined;
     this.pureLabels = pc !== undefined;
+    // the fast formulas take the properties' gas constant equal to the densities' R
+    this.fast = plan.precision === "fast" && this.extent !== "all" && this.Rg === R;
     this.tc = pc?.temperatureK ?? NaN;
     this.pc = pc?.pressurePa ?? NaN;
     this.rhoc = pc?.densityMolPerM3 ?? NaN;
@@ -285,7 +308,9 @@ export class CubicTPRows {
       ig.cv = src.cv;
       ig.referenceState = src.referenceState;
       ig.warnings = src.warnings;
+      this.lnPig = Math.log(src.pressurePa);
     }
+    this.fastI = -1;
     this.rowOk = true;
     return true;
   }
@@ -300,6 +325,10 @@ export class CubicTPRows {
     if (T !== this.rowT ? !this.setRow(T) : !this.rowOk) return false;
     // checkPressure's condition (its error comes from the general path)
     if (!(P > 0 && P >= MIN_PRESSURE_PA && P <= MAX_PRESSURE_PA)) return false;
+    if (this.fast) {
+      if (this.fastPoint(i, j, k)) return true;
+      this.fastI = -1;
+    }
     const RT = this.RT;
     const b = this.mixB;
     // the Z-cubic of densityRootsInto
@@ -405,6 +434,270 @@ export class CubicTPRows {
     this.pointP = P;
     this.pointRho = rho;
     this.write(k, label);
+    return true;
+  }
+
+  /**
+   * The fast route of one point (precision "fast"; the row and the pressure are checked by
+   * point()). Where the Z-cubic's discriminant (R^2 - Q^3 of the depressed cubic) is within 1e-8
+   * of its terms of zero, the exact route runs. The root: Newton's method on the monic cubic
+   * started from the previous point of the row (extrapolated in P through the last two or three),
+   * accepted when within 8 steps the residual is at rounding level (16 eps of the sum of the
+   * terms' magnitudes), and, with three real roots,
+   * the other two (the deflated quadratic) lie below B with a margin, so that Z is the one root
+   * above B, the root the exact route takes. Otherwise, and at the first point of a row, the
+   * closed form (monicCubicRootsInto); with three roots above B the outer two are compared by
+   * g_r/RT (chooseDensityRootInto's rule; a near tie, within 1e-11, goes to the exact route). The
+   * logarithms: ln(Z - B) = ln(1 - b rho) + ln Z (the residual's ln(1 - b rho) and the (T, P)
+   * departures' ln Z in one) and ln(D1 / D2); ln(P / P_ig) from a per-pressure table. The
+   * formulas of state/properties.ts rearranged: s_r(T,P) = R (ln(Z - B) + (F + T F_T) I),
+   * a_r(T,P) = -RT (ln(Z - B) + F I), g_r(T,P) = a_r + RT (Z - 1). False (nothing written) hands
+   * the point to the exact route.
+   */
+  private fastPoint(i: number, j: number, k: number): boolean {
+    const T = this.temperatures[i];
+    const P = this.pressures[j];
+    const RT = this.RT;
+    const b = this.mixB;
+    const A = (this.mixA * P) / this.RT2;
+    const B = (b * P) / RT;
+    const u = this.u;
+    const w = this.w;
+    const c2 = -(1 + B - u * B);
+    const c1 = A + w * B * B - u * B - u * B * B;
+    const c0 = -(A * B + w * B * B + w * B * B * B);
+    // (only their sign and size matter: products with 1/9 and 1/54 for the divisions)
+    const Q = (c2 * c2 - 3 * c1) * (1 / 9);
+    const Rq = (2 * c2 * c2 * c2 - 9 * c2 * c1 + 27 * c0) * (1 / 54);
+    const R2 = Rq * Rq;
+    const Q3 = Q * Q * Q;
+    const gap = 1e-8 * Math.max(R2, Math.abs(Q3));
+    const one = R2 - Q3 > gap;
+    // near the boundary of the three-root region the exact route runs
+    if (!one && !(R2 - Q3 < -gap)) return false;
+    const continued = i === this.fastI && j === this.fastJ + 1;
+    let Z = NaN;
+    if (continued) {
+      // the start: Z of the previous point, extrapolated in P through the last two or three
+      // points of the row (Lagrange)
+      const Z1 = this.fastZ1;
+      const P1 = this.fastP1;
+      const P2 = this.fastP2;
+      const P3 = this.fastP3;
+      let z = Z1;
+      if (this.fastHas3 && P1 !== P2 && P2 !== P3 && P1 !== P3) {
+        z =
+          (Z1 * (P - P2) * (P - P3)) / ((P1 - P2) * (P1 - P3)) +
+          (this.fastZ2 * (P - P1) * (P - P3)) / ((P2 - P1) * (P2 - P3)) +
+          (this.fastZ3 * (P - P1) * (P - P2)) / ((P3 - P1) * (P3 - P2));
+      } else if (this.fastHas2 && P1 !== P2) {
+        z += ((Z1 - this.fastZ2) * (P - P1)) / (P1 - P2);
+      }
+      // Newton until the residual is at rounding level (16 eps of the sum of the terms'
+      // magnitudes), at most 8 steps
+      const ac2 = Math.abs(c2);
+      const ac1 = Math.abs(c1);
+      const ac0 = Math.abs(c0);
+      let converged = false;
+      for (let it = 0; it < 9; it++) {
+        const f = ((z + c2) * z + c1) * z + c0;
+        const az = Math.abs(z);
+        if (Math.abs(f) <= 16 * Number.EPSILON * (((az + ac2) * az + ac1) * az + ac0)) {
+          converged = true;
+          break;
+        }
+        if (it === 8) break;
+        const df = (3 * z + 2 * c2) * z + c1;
+        if (!(df !== 0 && Number.isFinite(df))) break;
+        z -= f / df;
+      }
+      if (converged) {
+        if (one) Z = z;
+        else {
+          // three real roots: z is taken only when the other two (the roots of the deflated
+          // quadratic x^2 + s1 x + s0) lie below B with a margin, i.e. z is the one root above B
+          const s1 = c2 + z;
+          const s0 = c1 + z * s1;
+          const qB = (B + s1) * B + s0;
+          if (z > B && -s1 / 2 < B && qB > 1e-10 * (B * B + Math.abs(s1) * B + Math.abs(s0))) {
+            Z = z;
+          }
+        }
+      }
+    }
+    const zRoots = this.zRoots;
+    let threeLabel: PhaseLabel | undefined;
+    if (Number.isNaN(Z)) {
+      const c = this.coefficients;
+      c[0] = c2;
+      c[1] = c1;
+      c[2] = c0;
+      const count = monicCubicRootsInto(c, zRoots);
+      if (one) {
+        if (count !== 1) return false;
+        Z = zRoots[0];
+      } else if (count === 3 && zRoots[1] <= B && zRoots[2] > B) {
+        // one root above B (as the exact route, which drops the others): labelled as one root
+        Z = zRoots[2];
+      } else {
+        // three roots, all above B and distinct: the outer two (the middle one is mechanically
+        // unstable) compared by g_r/RT as chooseDensityRootInto does; a near tie (the saturation
+        // pressure within rounding) goes to the exact route, whose rounding decides it
+        if (count !== 3 || !(zRoots[0] > B && zRoots[0] < zRoots[1] && zRoots[1] < zRoots[2])) {
+          return false;
+        }
+        if (!this.rootValues(0, j)) return false;
+        const aDL = this.fAD;
+        const IL = this.fI;
+        const LL = this.fL;
+        const rhoL = this.fRho;
+        if (!this.rootValues(2, j)) return false;
+        const gL = aDL - LL - this.F * IL;
+        const gV = this.fAD - this.fL - this.F * this.fI;
+        if (!(Math.abs(gL - gV) > 1e-11 * (Math.abs(gL) + Math.abs(gV) + 1))) return false;
+        if (gL < gV) {
+          this.fAD = aDL;
+          this.fI = IL;
+          this.fL = LL;
+          this.fRho = rhoL;
+          Z = zRoots[0];
+          threeLabel = "liquid";
+        } else {
+          Z = zRoots[2];
+          threeLabel = "vapor";
+        }
+      }
+    }
+    let rho: number;
+    let aD: number;
+    let I: number;
+    let L: number;
+    const F = this.F;
+    if (threeLabel === undefined) {
+      // rootValues() written out (the hot path of one root)
+      if (!(Z > B)) return false;
+      rho = P / (Z * RT);
+      const eps = b * rho;
+      if (!(eps < 1)) return false;
+      const d1 = this.d1;
+      const d2 = this.d2;
+      const D1 = 1 + d1 * eps;
+      const D2 = 1 + d2 * eps;
+      const I1 = 1 / (D1 * D2);
+      const I2 = -(d1 * D2 + d2 * D1) * I1 * I1;
+      const q = eps / (1 - eps);
+      aD = q - F * eps * I1;
+      // mechanically stable (stiffnessFromResidual: the sign of dP/drho)
+      const r = this.ra;
+      r.aD = aD;
+      r.aDD = q * q - F * eps * eps * I2;
+      if (!(stiffnessFromResidual(r) > 0)) return false;
+      I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
+      L = Math.log(Z - B);
+    } else {
+      rho = this.fRho;
+      aD = this.fAD;
+      I = this.fI;
+      L = this.fL;
+    }
+    const TF = this.TF;
+    // the values by property id (see writeFast)
+    const fv = this.fastValues;
+    const hRes = RT * (aD + TF * I);
+    const uRes = RT * TF * I;
+    const sTP = R * (L + (F + TF) * I);
+    const aTP = -RT * (L + F * I);
+    const gTP = aTP + RT * aD;
+    fv[T_ID] = T;
+    fv[P_ID] = P;
+    fv[RHO_ID] = rho;
+    fv[RHO_MASS_ID] = rho * this.M;
+    fv[Z_ID] = 1 + aD;
+    fv[H_RES_ID] = hRes;
+    fv[U_RES_ID] = uRes;
+    fv[S_RES_ID] = sTP;
+    fv[A_RES_ID] = aTP;
+    fv[G_RES_ID] = gTP;
+    if (this.extent === "energies") {
+      let lnP = this.lnPressures;
+      if (lnP === undefined) {
+        lnP = this.pressures.map(Math.log);
+        this.lnPressures = lnP;
+      }
+      const shift = lnP[j] - this.lnPig;
+      const ig = this.ig;
+      fv[H_ID] = ig.h + hRes;
+      fv[U_ID] = ig.u + uRes;
+      fv[S_ID] = ig.s - R * shift + sTP;
+      fv[A_ID] = ig.a + RT * shift + aTP;
+      fv[G_ID] = ig.g + RT * shift + gTP;
+    }
+    let label: PhaseLabel;
+    if (threeLabel !== undefined) label = threeLabel;
+    else if (this.pureLabels) {
+      label = T >= this.tc && P >= this.pc ? "supercritical" : rho > this.rhoc ? "liquid" : "vapor";
+    } else {
+      label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
+    }
+    fv[QUALITY_ID] = label === "vapor" ? 1 : label === "liquid" ? 0 : NaN;
+    this.fastHas3 = continued && this.fastHas2;
+    this.fastHas2 = continued;
+    this.fastZ3 = this.fastZ2;
+    this.fastP3 = this.fastP2;
+    this.fastZ2 = this.fastZ1;
+    this.fastP2 = this.fastP1;
+    this.fastZ1 = Z;
+    this.fastP1 = P;
+    this.fastI = i;
+    this.fastJ = j;
+    const ids = this.ids;
+    const cols = this.cols;
+    const factor = this.factor;
+    for (let m = 0; m < ids.length; m++) cols[m][k] = fv[ids[m]] * factor[m];
+    this.phaseCount[k] = 1;
+    this.phaseKind[k] =
+      label === "vapor"
+        ? SWEEP_PHASE_KINDS.vapor
+        : label === "liquid"
+          ? SWEEP_PHASE_KINDS.liquid
+          : SWEEP_PHASE_KINDS.supercritical;
+    this.errorCode[k] = 0;
+    return true;
+  }
+
+  /**
+   * The quantities of the fast route at root zRoots[m] of the point of pressure pressures[j]
+   * into fRho, fAD (alpha_r's rho-derivative term, Z - 1), fI (the integral I of the cubic's
+   * attraction term) and fL (ln(Z - B)); false when the root is at or beyond close packing or
+   * mechanically unstable (dP/drho <= 0: 1 + 2 aD + aDD <= 0).
+   */
+  private rootValues(m: number, j: number): boolean {
+    const Z = this.zRoots[m];
+    const P = this.pressures[j];
+    const RT = this.RT;
+    const b = this.mixB;
+    const B = (b * P) / RT;
+    if (!(Z > B)) return false;
+    const rho = P / (Z * RT);
+    const eps = b * rho;
+    if (!(eps < 1)) return false;
+    const d1 = this.d1;
+    const d2 = this.d2;
+    const F = this.F;
+    const D1 = 1 + d1 * eps;
+    const D2 = 1 + d2 * eps;
+    const I1 = 1 / (D1 * D2);
+    const I2 = -(d1 * D2 + d2 * D1) * I1 * I1;
+    const q = eps / (1 - eps);
+    const aD = q - F * eps * I1;
+    const r = this.ra;
+    r.aD = aD;
+    r.aDD = q * q - F * eps * eps * I2;
+    if (!(stiffnessFromResidual(r) > 0)) return false;
+    this.fRho = rho;
+    this.fAD = aD;
+    this.fI = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
+    this.fL = Math.log(Z - B);
     return true;
   }
 

@@ -77,6 +77,7 @@ export interface SweepPlan {
   readonly x: readonly number[];
   readonly basis: "molar" | "mass";
   readonly phaseCheck: SweepPhaseCheck;
+  readonly precision: "exact" | "fast";
   readonly flash?: FlashOptions;
   readonly stateFlash?: SweepRequest["stateFlash"];
 }
@@ -135,6 +136,15 @@ export function planSweep(request: SweepRequest, componentCount: number): SweepP
       unit: "-",
       validRange: '"flash" or "stability" or "none"',
       received: phaseCheck,
+    });
+  }
+  const precision = request.precision ?? "exact";
+  if (!(precision === "exact" || precision === "fast")) {
+    throw new InputError({
+      input: "precision",
+      unit: "-",
+      validRange: '"exact" or "fast"',
+      received: precision,
     });
   }
   const properties = request.properties;
@@ -211,6 +221,7 @@ export function planSweep(request: SweepRequest, componentCount: number): SweepP
     x: Array.from(x),
     basis,
     phaseCheck,
+    precision,
     flash: request.flash,
     stateFlash: request.stateFlash,
   };

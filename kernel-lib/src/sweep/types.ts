@@ -184,6 +184,15 @@ export interface SweepRequest {
   readonly flash?: FlashOptions;
   /** Options of the (P, h) and (P, s) flashes. */
   readonly stateFlash?: StateFlashOptions;
+  /**
+   * "exact" (default): every point equals the single state (stateAtTP) to the last bit. "fast":
+   * (T, P) points of a cubic with one real Z root take a Newton root started from the previous
+   * point of the row (verified: one real root by the discriminant, converged, residual at
+   * rounding level) and one logarithm ln(Z - B) for ln(1 - b rho) + ln Z; the results differ from
+   * the single state by rounding, at most 1e-10 relative (floor: R T for energies, R for entropies,
+   * 1 for Z; see DEVELOPERS.md "Sweep benchmarks"). Other points and models take the exact route.
+   */
+  readonly precision?: "exact" | "fast";
 }
 
 /**

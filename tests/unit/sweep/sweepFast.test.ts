@@ -1,0 +1,150 @@
+/**
+ * The fast route of the cubic row kernel (sweep request `precision: "fast"`, sweep/leanRows.ts
+ * fastPoint): a Newton root of the Z-cubic started from the previous point of the row and one
+ * logarithm ln(Z - B) in place of ln(1 - b rho) + ln Z. Stated tolerance (DEVELOPERS.md "Sweep
+ * benchmarks"): every property within 1e-10 of the single state (stateAtTP) relative to
+ * max(|value|, floor), floor R T for energies (J/mol), R for entropies (J/(mol K)), 1 for Z and
+ * the value itself for densities; the phase kind and the error code equal. The largest
+ * differences (about 6e-12) are liquids at low pressure, Z about 1e-3, where the single state's
+ * ln Z = ln(1 + alpha_r,delta) loses digits to cancellation; the fast route takes ln(Z - B) from
+ * the root itself. The exact route
+ * (default) keeps its bit-equality tests in sweepKernel.test.ts. The grids cross the three-root
+ * region of methane (below Tc = 190.56 K), where the fast route hands points to the exact route,
+ * and the critical neighbourhood, where the discriminant guard does.
+ */
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import { defineFluid, type Fluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
+import { R } from "../../../kernel-lib/src/constants.js";
+import type { FluidState } from "../../../kernel-lib/src/state/types.js";
+import type { SweepProperty } from "../../../kernel-lib/src/sweep/types.js";
+import { SWEEP_PHASE_KINDS } from "../../../kernel-lib/src/sweep/types.js";
+
+const TOLERANCE = 1e-10;
+
+type Get = (s: FluidState) => number;
+// property, value of the single state, floor of the relative scale (T in K)
+const GET: Partial<Record<SweepProperty, [Get, (T: number) => number]>> = {
+  T: [(s) => s.temperatureK, () => 0],
+  rho: [(s) => s.densityMolPerM3, () => 0],
+  rhoMass: [(s) => s.densityKgPerM3, () => 0],
+  Z: [(s) => s.Z, () => 1],
+  h: [(s) => s.molar.h, (T) => R * T],
+  s: [(s) => s.molar.s, () => R],
+  u: [(s) => s.molar.u, (T) => R * T],
+  a: [(s) => s.molar.a, (T) => R * T],
+  g: [(s) => s.molar.g, (T) => R * T],
+  hRes: [(s) => s.residual.h, (T) => R * T],
+  sRes: [(s) => s.residual.s, () => R],
+  uRes: [(s) => s.residual.u, (T) => R * T],
+  aRes: [(s) => s.residual.a, (T) => R * T],
+  gRes: [(s) => s.residual.g, (T) => R * T],
+};
+
+const SETS: readonly (readonly SweepProperty[])[] = [
+  ["hRes", "sRes"],
+  ["rho", "Z", "hRes", "sRes", "uRes", "aRes", "gRes", "T", "rhoMass"],
+  ["h", "s"],
+  ["h", "s", "rho", "u", "a", "g"],
+];
+
+const kindOf = (label: string) =>
+  label === "vapor"
+    ? SWEEP_PHASE_KINDS.vapor
+    : label === "liquid"
+      ? SWEEP_PHASE_KINDS.liquid
+      : SWEEP_PHASE_KINDS.supercritical;
+
+const axis = (lo: number, hi: number, max: number) =>
+  fc
+    .uniqueArray(fc.double({ min: lo, max: hi, noNaN: true }), { minLength: 1, maxLength: max })
+    .map((v) => v.sort((p, q) => p - q));
+
+/** The largest scaled difference over the grid (and the checks of kinds and error codes). */
+function checkGrid(
+  fluid: Fluid,
+  Ts: readonly number[],
+  Ps: readonly number[],
+  x: number[] | undefined,
+  properties: readonly SweepProperty[],
+): number {
+  const r = fluid.sweep({
+    specification: "TP",
+    first: Ts,
+    second: Ps,
+    x,
+    phaseCheck: x === undefined ? undefined : "none",
+    properties: [...properties],
+    precision: "fast",
+  });
+  let worst = 0;
+  for (let i = 0; i < Ts.length; i++) {
+    for (let j = 0; j < Ps.length; j++) {
+      const k = i * Ps.length + j;
+      let st: FluidState;
+      try {
+        st = fluid.stateAtTP(Ts[i], Ps[j], x);
+      } catch (e) {
+        expect(r.errorCode[k]).toBe((e as { code?: string }).code === "phase-unavailable" ? 2 : 1);
+        continue;
+      }
+      expect(r.errorCode[k], `error at ${Ts[i]} K, ${Ps[j]} Pa`).toBe(0);
+      expect(r.phaseKind[k]).toBe(kindOf(st.phase));
+      for (const p of properties) {
+        const [get, floor] = GET[p]!;
+        const expected = get(st);
+        const diff =
+          Math.abs(r.values[p]![k] - expected) / Math.max(Math.abs(expected), floor(Ts[i]));
+        expect(diff, `${p} at ${Ts[i]} K, ${Ps[j]} Pa`).toBeLessThanOrEqual(TOLERANCE);
+        worst = Math.max(worst, diff);
+      }
+    }
+  }
+  return worst;
+}
+
+describe('sweep precision "fast" equals stateAtTP within 1e-10', () => {
+  for (const model of ["peng-robinson", "soave-redlich-kwong"] as const) {
+    const fluid = defineFluid({ components: ["methane"], model });
+    it(`${model} methane: the benchmark grid, three-root and critical regions, random grids`, () => {
+      const N = 60;
+      const Ts = Array.from({ length: N }, (_, i) => 100 + (500 * i) / (N - 1));
+      const Ps = Array.from({ length: N }, (_, j) => 1e4 + ((30e6 - 1e4) * j) / (N - 1));
+      const worst = checkGrid(fluid, Ts, Ps, undefined, ["hRes", "sRes", "Z", "rho"]);
+      // the fast route changed the rounding somewhere (otherwise it did not run)
+      expect(worst).toBeGreaterThan(0);
+      const near = [186, 190, 190.5, 190.56, 190.6, 191, 195];
+      const nearP = [4.4e6, 4.55e6, 4.59e6, 4.599e6, 4.6e6, 4.65e6, 4.8e6, 5e6];
+      for (const set of SETS) checkGrid(fluid, near, nearP, undefined, set);
+      fc.assert(
+        fc.property(axis(95, 620, 6), axis(1e3, 40e6, 8), fc.constantFrom(...SETS), (T, P, set) => {
+          checkGrid(fluid, T, P, undefined, set);
+        }),
+        { numRuns: 25 },
+      );
+    });
+  }
+
+  it("a five-component mixture without a phase check (labels by the PIP)", () => {
+    const fluid = defineFluid({
+      components: ["methane", "ethane", "propane", "nitrogen", "carbon-dioxide"],
+      model: "peng-robinson",
+    });
+    const x = [0.85, 0.06, 0.03, 0.02, 0.04];
+    const Ps = Array.from({ length: 12 }, (_, j) => 1e5 + 1e6 * j);
+    for (const set of SETS) checkGrid(fluid, [150, 240.5, 340.25], Ps, x, set);
+  });
+
+  it('refuses an unknown precision with a typed error naming "precision"', () => {
+    const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+    expect(() =>
+      fluid.sweep({
+        specification: "TP",
+        first: [300],
+        second: [1e5],
+        properties: ["h"],
+        precision: "quick" as "fast",
+      }),
+    ).toThrow(/precision/);
+  });
+});
