@@ -10,6 +10,7 @@ import type { ChartSpec } from "./chartSpec.js";
 import { fromDisplay, toDisplay, type QuantityKind } from "./displayUnits.js";
 import { criticalLayers } from "./domeLayers.js";
 import { gridIsolines } from "./isolines.js";
+import { placeGuideLabels } from "./labelPlacement.js";
 import {
   addDomeWarnings,
   checkCritical,
@@ -295,9 +296,12 @@ export function propertySurfaceChart(
   layers.push(
     ...criticalLayers(critical, critical?.temperatureK, critical?.pressurePa, xAxis, yAxis),
   );
-  return topLevel("property-surface", name, options, [xAxis, yAxis, vAxis], warnings, {
+  const spec = topLevel("property-surface", name, options, [xAxis, yAxis, vAxis], warnings, {
     layer: layers,
   });
+  // the critical-point label: a slot around its point inside the plot, clear of the curves
+  placeGuideLabels(spec);
+  return spec;
 }
 
 /** Cell edges around sample positions: midpoints (in log space when log), half a step outside. */
