@@ -23,8 +23,6 @@
  * {"error": {"code": "bad-request", "message", "path"}}; a problem in the fluid definition (an
  * unknown component, a bad k_ij) is refused the same way with the path of the field. Exit 0 otherwise.
  */
-import * as fs from "node:fs";
-import * as path from "node:path";
 import { IsochorError, RequestError, UnknownNameError, InputError } from "../errors.js";
 import { defineFluid, type Fluid } from "../fluid/defineFluid.js";
 import { referenceFluid } from "../fluid/referenceFluids.js";
@@ -65,6 +63,7 @@ import { transportAtTRho } from "../transport/transportAt.js";
 import { parseCliArgs } from "./cliArgs.js";
 import { convertEntry, convertTP, unitsMap } from "./evalOutput.js";
 import type { CliIo } from "./io.js";
+import { readJsonRequest } from "./requestFile.js";
 
 const USAGE = `usage: isochor eval [request.json | -]
 
@@ -574,34 +573,9 @@ export async function evalCommand(argv: string[], io: CliIo): Promise<number> {
     io.stderr(`isochor eval: ${problem}\n${USAGE}`);
     return 2;
   }
-  const file = args.positionals[0];
-  let text: string;
-  try {
-    text =
-      file === undefined || file === "-"
-        ? await io.readStdin()
-        : fs.readFileSync(path.resolve(io.cwd, file), "utf8");
-  } catch (e) {
-    io.stderr(
-      `isochor eval: cannot read ${file ?? "standard input"}: ${e instanceof Error ? e.message : String(e)}\n`,
-    );
-    return 2;
-  }
-  let raw: unknown;
-  try {
-    // a UTF-8 byte-order mark (some editors write one) is not part of the JSON text
-    raw = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-  } catch (e) {
-    const err = new RequestError(
-      "$",
-      `not valid JSON: ${e instanceof Error ? e.message : String(e)}`,
-    );
-    io.stdout(
-      JSON.stringify({ error: { code: err.code, message: err.message, path: err.path } }) + "\n",
-    );
-    io.stderr(`isochor eval: ${err.message}\n`);
-    return 2;
-  }
+  const request = await readJsonRequest("eval", args.positionals[0], io);
+  if ("exit" in request) return request.exit;
+  const raw = request.raw;
   try {
     const response = runEvalRequest(raw);
     io.stdout(JSON.stringify(response, replacer) + "\n");

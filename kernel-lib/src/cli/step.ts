@@ -11,8 +11,6 @@
  * path of the problem, as in `isochor eval`).
  */
 import { vesselSeriesCsv, vesselStepFromRequest } from "./stepVessel.js";
-import * as fs from "node:fs";
-import * as path from "node:path";
 import {
   InputError,
   IsochorError,
@@ -44,6 +42,7 @@ import {
 } from "./stepRequest.js";
 import { parseCliArgs } from "./cliArgs.js";
 import type { CliIo } from "./io.js";
+import { readJsonRequest } from "./requestFile.js";
 
 const USAGE = `usage: isochor step [request.json | -]
 
@@ -407,19 +406,9 @@ export async function stepCommand(argv: string[], io: CliIo): Promise<number> {
     io.stderr(`isochor step: ${problem}\n${USAGE}`);
     return 2;
   }
-  const file = args.positionals[0];
-  let text: string;
-  try {
-    text =
-      file === undefined || file === "-"
-        ? await io.readStdin()
-        : fs.readFileSync(path.resolve(io.cwd, file), "utf8");
-  } catch (e) {
-    io.stderr(
-      `isochor step: cannot read ${file ?? "standard input"}: ${e instanceof Error ? e.message : String(e)}\n`,
-    );
-    return 2;
-  }
+  const request = await readJsonRequest("step", args.positionals[0], io);
+  if ("exit" in request) return request.exit;
+  const raw = request.raw;
   const fail = (err: IsochorError, exit: number, where?: string): number => {
     const error: Record<string, string> = { code: err.code, message: err.message };
     if (where !== undefined) error.path = where;
@@ -427,16 +416,6 @@ export async function stepCommand(argv: string[], io: CliIo): Promise<number> {
     io.stderr(`isochor step: ${err.message}\n`);
     return exit;
   };
-  let raw: unknown;
-  try {
-    raw = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
-  } catch (e) {
-    const err = new RequestError(
-      "$",
-      `not valid JSON: ${e instanceof Error ? e.message : String(e)}`,
-    );
-    return fail(err, 2, err.path);
-  }
   try {
     const step = (raw as { step?: { kind?: unknown } } | null)?.step;
     if (step !== null && typeof step === "object" && step.kind === "vessel") {
