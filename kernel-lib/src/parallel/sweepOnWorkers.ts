@@ -1,15 +1,18 @@
 /**
- * Sweeps on all cores (Node side): a sweep above a size threshold is split into contiguous
- * ranges of points, one per worker thread (node:worker_threads); each worker builds the fluid
- * from its definition once (fluid.spec) and runs the same engine as the single-thread sweep, so
- * the arrays are equal to those of fluid.sweep exactly. Progress goes through progress/, and an
- * AbortSignal stops the workers (terminated at once) and rejects with the signal's reason.
- * The workers run the built JavaScript of kernel-lib/dist (`npm run build`).
+ * Sweeps on all cores (Node side): a sweep above a size threshold is split into ranges of
+ * points handed out on demand (a worker that finishes one takes the next, so a slower or busier
+ * core takes fewer) to worker threads of a persistent pool (workerPool.ts: started once per
+ * process, the fluid defined once per worker and kept by the key of its definition). Each
+ * worker runs the same engine as the single-thread sweep and its range is written into its
+ * place, so the arrays are equal to those of fluid.sweep exactly. With precision "fast" on a
+ * grid the ranges start at row starts (the fast route starts each point from the previous points
+ * of its temperature row). Progress goes through progress/; an AbortSignal terminates the
+ * sweep's workers at once (the pool replaces them in the next sweep) and rejects with the
+ * signal's reason. The workers run the built JavaScript of kernel-lib/dist (`npm run build`).
  */
 import * as fs from "node:fs";
 import * as os from "node:os";
 import * as path from "node:path";
-import { Worker } from "node:worker_threads";
 import { InputError, IsochorError, type ResultWarning } from "../errors.js";
 import type { Fluid, FluidSpec } from "../fluid/defineFluid.js";
 import {
@@ -26,7 +29,11 @@ import {
   type SweepResult,
 } from "../sweep/types.js";
 import { startProgress, type ProgressOptions, type ProgressTracker } from "../progress/progress.js";
-import type { FromWorker, ToWorker } from "./messages.js";
+import type { DoneMessage, FromWorker } from "./messages.js";
+import { specKey } from "./specKey.js";
+import { defineIn, discardWorker, forget, returnWorker, send, takeWorkers } from "./workerPool.js";
+
+export { closeSweepWorkers, sweepWorkerStats, type SweepWorkerStats } from "./workerPool.js";
 
 /** Options of {@link sweepOnWorkers}. */
 export interface ParallelSweepOptions {
@@ -43,6 +50,11 @@ export interface ParallelSweepOptions {
   progress?: ProgressOptions | false;
   /** Points between progress messages of a worker. Default 2,000. */
   chunk?: number;
+  /**
+   * Points per range handed to a worker at a time (on demand). Default: the sweep's points over
+   * 16 ranges per worker, at least 64 (with precision "fast" on a grid, rounded to whole rows).
+   */
+  rangeSize?: number;
   /** The worker's built script. Default: dist/parallel/sweepWorker.js of this package. */
   workerScript?: string;
 }
@@ -79,9 +91,24 @@ function abortReason(signal: AbortSignal): unknown {
   return signal.reason ?? new Error("the sweep was aborted");
 }
 
+let nextSweepId = 1;
+
+/**
+ * Range boundaries [0, b1, ..., count]: about `size` points each, multiples of `align` (the
+ * row length for a fast grid, else 1) except the last.
+ */
+export function rangeBounds(count: number, size: number, align: number): number[] {
+  const step = Math.max(align, Math.round(size / align) * align);
+  const bounds = [0];
+  for (let b = step; b < count; b += step) bounds.push(b);
+  bounds.push(count);
+  return bounds;
+}
+
 /**
  * Runs `request` on `fluid` across worker threads and resolves with the same result as
- * `fluid.sweep(request)`.
+ * `fluid.sweep(request)`. The workers stay in a pool for later sweeps (idle workers do not keep
+ * Node alive; {@link closeSweepWorkers} ends them).
  *
  * @example
  * ```ts
@@ -118,6 +145,16 @@ export async function sweepOnWorkers(
       received: chunk,
     });
   }
+  const rangeSize =
+    options.rangeSize ?? Math.max(64, Math.ceil(plan.count / (16 * Math.min(workers, cores))));
+  if (!(Number.isInteger(rangeSize) && rangeSize >= 1)) {
+    throw new InputError({
+      input: "options.rangeSize",
+      unit: "points",
+      validRange: "an integer >= 1",
+      received: rangeSize,
+    });
+  }
   const signal = options.signal;
   if (signal?.aborted) throw abortReason(signal);
   const sweepFluid = { binding: fluid, constants: fluid.components };
@@ -140,62 +177,104 @@ export async function sweepOnWorkers(
     return warnings.length === 0 ? r : { ...r, warnings: r.warnings.concat(warnings) };
   }
   const script = options.workerScript ?? defaultWorkerScript();
-  const n = Math.min(workers, plan.count);
+  // the fast route starts each point from the previous points of its row: ranges of whole rows
+  const align =
+    plan.precision === "fast" && plan.layout === "grid" ? Math.max(1, plan.secondAxis.length) : 1;
+  const bounds = rangeBounds(plan.count, rangeSize, align);
+  const ranges = bounds.length - 1;
+  const n = Math.min(workers, ranges);
   const columns = allocateColumns(plan, plan.count);
   const errors: SweepPointError[] = [];
   let failed = 0;
-  const pool: Worker[] = [];
-  const doneBy = new Float64Array(n);
-  // a worker whose job is done is terminated, which exits it with code 1: not a failure
-  const jobDone = new Uint8Array(n);
+  const id = nextSweepId++;
+  // a definition with no canonical key is sent with this sweep and forgotten after it
+  const canonicalKey = specKey(fluid.spec);
+  const key = canonicalKey ?? `sweep-${id}`;
+  const taken = takeWorkers(script, n, key);
   try {
     await new Promise<void>((resolve, reject) => {
-      let finished = 0;
+      let next = 0;
+      let completed = 0;
       let settled = false;
+      const inFlight = new Float64Array(n);
+      // held[k]: worker k still belongs to this sweep; working[k]: it has a range in flight
+      const held = new Uint8Array(n).fill(1);
+      const working = new Uint8Array(n);
+      const release = (k: number) => {
+        if (held[k] === 0) return;
+        held[k] = 0;
+        working[k] = 0;
+        const w = taken[k];
+        if (w.alive) {
+          if (canonicalKey === undefined) forget(w, key);
+          send(w, { type: "end", id });
+        }
+        returnWorker(w);
+      };
       const stop = (error: unknown) => {
         if (settled) return;
         settled = true;
-        for (const w of pool) void w.terminate();
+        signal?.removeEventListener("abort", onAbort);
+        // a worker with a range in flight cannot be interrupted otherwise: it is terminated,
+        // and the pool starts a new one for a later sweep
+        for (let k = 0; k < n; k++) {
+          if (held[k] === 1 && working[k] === 1) {
+            held[k] = 0;
+            void discardWorker(taken[k]);
+          } else release(k);
+        }
         reject(error);
       };
       const onAbort = () => stop(abortReason(signal!));
       signal?.addEventListener("abort", onAbort, { once: true });
-      for (let k = 0; k < n; k++) {
-        const start = Math.floor((plan.count * k) / n);
-        const end = Math.floor((plan.count * (k + 1)) / n);
-        const w = new Worker(script);
-        pool.push(w);
-        w.on("message", (m: FromWorker) => {
-          if (settled) return;
-          if (m.type === "progress") {
-            doneBy[k] = m.done;
-            let total = 0;
-            for (let q = 0; q < n; q++) total += doneBy[q];
-            progress?.set(total);
-          } else if (m.type === "fail") {
-            stop(new IsochorError("runner-failed", `sweep worker ${k + 1} of ${n}: ${m.message}`));
-          } else {
-            jobDone[k] = 1;
-            copyInto(columns, m, m.start);
-            failed += m.failed;
-            errors.push(...m.errors);
-            void w.terminate();
-            if (++finished === n) {
-              settled = true;
-              signal?.removeEventListener("abort", onAbort);
-              resolve();
-            }
-          }
-        });
-        w.on("error", (e) => stop(e));
-        w.on("exit", (code) => {
-          if (!settled && jobDone[k] === 0) {
-            stop(new IsochorError("runner-failed", `sweep worker ${k + 1} exited with ${code}`));
-          }
-        });
-        w.postMessage({ type: "init", spec: fluid.spec } satisfies ToWorker);
-        w.postMessage({ type: "job", request, start, end, chunk } satisfies ToWorker);
-      }
+      const handOut = (k: number) => {
+        if (next < ranges) {
+          working[k] = 1;
+          send(taken[k], { type: "range", id, start: bounds[next], end: bounds[next + 1] });
+          next++;
+        } else release(k);
+      };
+      const onMessage = (k: number, m: FromWorker) => {
+        if (settled) return;
+        if (m.type === "fail") {
+          stop(new IsochorError("runner-failed", `sweep worker ${k + 1} of ${n}: ${m.message}`));
+          return;
+        }
+        if (m.id !== id) return;
+        if (m.type === "progress") {
+          inFlight[k] = m.done;
+          let total = completed;
+          for (let q = 0; q < n; q++) total += inFlight[q];
+          progress?.set(total);
+          return;
+        }
+        copyInto(columns, m);
+        failed += m.failed;
+        // ranges come back in any order: keep every message, the first by index are kept below
+        for (const e of m.errors) errors.push(e);
+        if (errors.length > 4 * MAX_ERROR_MESSAGES) firstErrors(errors);
+        completed += m.end - m.start;
+        inFlight[k] = 0;
+        working[k] = 0;
+        if (completed === plan.count) {
+          settled = true;
+          signal?.removeEventListener("abort", onAbort);
+          for (let q = 0; q < n; q++) release(q);
+          resolve();
+          return;
+        }
+        handOut(k);
+      };
+      taken.forEach((w, k) => {
+        w.onDeath = (e) => {
+          working[k] = 0;
+          stop(new IsochorError("runner-failed", `sweep worker ${k + 1} of ${n}: ${e.message}`));
+        };
+        w.onMessage = (m) => onMessage(k, m);
+        defineIn(w, key, fluid.spec);
+        send(w, { type: "sweep", id, key, request, chunk });
+      });
+      for (let k = 0; k < n; k++) handOut(k);
     });
   } catch (e) {
     progress?.fail(e);
@@ -203,12 +282,18 @@ export async function sweepOnWorkers(
   }
   progress?.set(plan.count);
   progress?.finish();
-  errors.sort((p, q) => p.index - q.index);
-  errors.length = Math.min(errors.length, MAX_ERROR_MESSAGES);
+  firstErrors(errors);
   return sweepResult(sweepFluid, plan, columns, errors, failed);
 }
 
-function copyInto(columns: SweepColumns, m: Extract<FromWorker, { type: "done" }>, at: number) {
+/** Keeps the first MAX_ERROR_MESSAGES messages by point index (as the single-thread sweep). */
+function firstErrors(errors: SweepPointError[]): void {
+  errors.sort((p, q) => p.index - q.index);
+  errors.length = Math.min(errors.length, MAX_ERROR_MESSAGES);
+}
+
+function copyInto(columns: SweepColumns, m: DoneMessage) {
+  const at = m.start;
   for (let k = 0; k < columns.values.length; k++) columns.values[k].set(m.values[k], at);
   columns.phaseCount.set(m.phaseCount, at);
   columns.phaseKind.set(m.phaseKind, at);
