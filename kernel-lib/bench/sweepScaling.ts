@@ -1,0 +1,127 @@
+/**
+ * `npm run bench:scaling [-- --rounds N] [--cold]`: the scaling of the parallel sweep from one
+ * worker to all cores, measured the way a notebook user meets repeated sweeps. The sweep is that
+ * of the `sweep-1e6-mix10` case (h, s and rho of the ten-component gas at 1e6 (T, P) points). In
+ * one process: the pool is warmed by one sweep on all cores, then each round runs the sweep on 1
+ * worker and on all cores, in alternating order (swapped every round), so both see the same
+ * machine load within seconds of each other. With `--cold` the pool's workers are ended after
+ * every sweep (each sweep starts its workers, loads the library and defines the fluid).
+ *
+ * Prints one JSON line per sweep (workers, wall and CPU seconds, 1-minute load average) and a
+ * summary line: per worker count the median wall and CPU seconds, states per second per core
+ * (1e6 / CPU seconds: the CPU time counts every thread of the process), the scaling (median of
+ * the per-round ratios wall(1) / wall(all)) and the fraction of linear (scaling / cores), with
+ * the load before and after. On a shared machine the load says how much of the cores the sweep
+ * could have had. The workers run kernel-lib/dist (`npm run build` first).
+ */
+import * as fs from "node:fs";
+import * as os from "node:os";
+import * as path from "node:path";
+import { performance } from "node:perf_hooks";
+import { defineFluid } from "../src/fluid/defineFluid.js";
+import { closeSweepWorkers, sweepOnWorkers } from "../src/parallel/sweepOnWorkers.js";
+import type { SweepRequest } from "../src/sweep/types.js";
+import { median } from "./harness.js";
+import { TEN, X10 } from "./cases/richGas.js";
+
+const request: SweepRequest = {
+  specification: "TP",
+  first: { from: 340.25, to: 600.25, count: 1000 },
+  second: { from: 1e6, to: 10e6, count: 1000 },
+  x: X10,
+  phaseCheck: "none",
+  properties: ["h", "s", "rho"],
+};
+
+function cpuSeconds(): number {
+  const u = process.cpuUsage();
+  return (u.user + u.system) / 1e6;
+}
+
+const round3 = (v: number) => Math.round(v * 1000) / 1000;
+
+async function main(): Promise<void> {
+  const argv = process.argv.slice(2);
+  const at = argv.indexOf("--rounds");
+  const rounds = at >= 0 ? Number(argv[at + 1]) : 6;
+  if (!(Number.isInteger(rounds) && rounds >= 1))
+    throw new Error("--rounds expects an integer >= 1");
+  const cold = argv.includes("--cold");
+  const script = path.resolve(process.cwd(), "kernel-lib", "dist", "parallel", "sweepWorker.js");
+  if (!fs.existsSync(script)) throw new Error(`${script} is missing: run \`npm run build\` first`);
+  const cores = os.availableParallelism();
+  const fluid = defineFluid({ components: TEN, model: "peng-robinson" });
+  const loadBefore = os.loadavg().map(round3);
+  const sweep = async (workers: number) => {
+    const c0 = cpuSeconds();
+    const t0 = performance.now();
+    const r = await sweepOnWorkers(fluid, request, {
+      workers,
+      threshold: 1,
+      progress: false,
+      workerScript: script,
+    });
+    const wall = (performance.now() - t0) / 1000;
+    const cpu = cpuSeconds() - c0;
+    if (r.failed !== 0) throw new Error(`${r.failed} points failed`);
+    if (cold) await closeSweepWorkers();
+    return { wall, cpu, count: r.count };
+  };
+  // the warm-up: one sweep on all cores (starts the pool, defines the fluid, compiles the code)
+  const warm = await sweep(cores);
+  process.stdout.write(JSON.stringify({ warmUp: true, workers: cores, ...warm }) + "\n");
+  const counts = [1, cores];
+  const runs = new Map<number, { wall: number; cpu: number }[]>(counts.map((n) => [n, []]));
+  const ratios: number[] = [];
+  for (let round = 0; round < rounds; round++) {
+    const order = round % 2 === 0 ? counts : [...counts].reverse();
+    const wallOf = new Map<number, number>();
+    for (const n of order) {
+      const t = await sweep(n);
+      runs.get(n)!.push(t);
+      wallOf.set(n, t.wall);
+      process.stdout.write(
+        JSON.stringify({
+          round,
+          workers: n,
+          wallSeconds: round3(t.wall),
+          cpuSeconds: round3(t.cpu),
+          loadAverage1m: round3(os.loadavg()[0]),
+        }) + "\n",
+      );
+    }
+    ratios.push(wallOf.get(1)! / wallOf.get(cores)!);
+  }
+  const count = warm.count;
+  const perWorkers = counts.map((n) => {
+    const ts = runs.get(n)!;
+    const cpu = median(ts.map((t) => t.cpu));
+    return {
+      workers: n,
+      wallSeconds: round3(median(ts.map((t) => t.wall))),
+      cpuSeconds: round3(cpu),
+      statesPerSecondPerCore: Math.round(count / cpu),
+    };
+  });
+  const scaling = median(ratios);
+  process.stdout.write(
+    JSON.stringify({
+      summary: cold ? "cold (workers started per sweep)" : "warm pool",
+      states: count,
+      cores,
+      rounds,
+      perWorkers,
+      scaling: round3(scaling),
+      scalingSpread: [round3(Math.min(...ratios)), round3(Math.max(...ratios))],
+      fractionOfLinear: round3(scaling / cores),
+      loadAverageBefore: loadBefore,
+      loadAverageAfter: os.loadavg().map(round3),
+    }) + "\n",
+  );
+  await closeSweepWorkers();
+}
+
+main().catch((e) => {
+  process.stderr.write(`${e instanceof Error ? e.stack : String(e)}\n`);
+  process.exit(1);
+});
