@@ -271,10 +271,17 @@ export async function sweepOnWorkers(
           stop(new IsochorError("runner-failed", `sweep worker ${k + 1} of ${n}: ${e.message}`));
         };
         w.onMessage = (m) => onMessage(k, m);
-        defineIn(w, key, fluid.spec);
-        send(w, { type: "sweep", id, key, request, chunk });
       });
-      for (let k = 0; k < n; k++) handOut(k);
+      try {
+        for (const w of taken) {
+          defineIn(w, key, fluid.spec);
+          send(w, { type: "sweep", id, key, request, chunk });
+        }
+        for (let k = 0; k < n; k++) handOut(k);
+      } catch (e) {
+        // e.g. a request option that cannot be cloned to a thread: the workers go back
+        stop(e);
+      }
     });
   } catch (e) {
     progress?.fail(e);

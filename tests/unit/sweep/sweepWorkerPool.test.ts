@@ -163,6 +163,14 @@ describe("the sweep worker pool", () => {
     );
   });
 
+  it("a request that cannot be sent to a thread rejects and gives the workers back", async () => {
+    const flash = { onIteration: () => undefined } as unknown as SweepRequest["flash"];
+    await expect(
+      sweepOnWorkers(gas, { ...request, flash }, { workers: 2, threshold: 1, progress: false }),
+    ).rejects.toThrow(/could not be cloned/);
+    expect(sweepWorkerStats().busy).toBe(0);
+  });
+
   it("an idle pool does not keep Node alive", () => {
     const dist = path.resolve(__dirname, "../../../kernel-lib/dist");
     const script = `
