@@ -51,8 +51,11 @@ export interface ParallelSweepOptions {
   /** Points between progress messages of a worker. Default 2,000. */
   chunk?: number;
   /**
-   * Points per range handed to a worker at a time (on demand). Default: the sweep's points over
-   * 16 ranges per worker, at least 64 (with precision "fast" on a grid, rounded to whole rows).
+   * Points per range handed to a worker at a time (on demand), all ranges alike. Default:
+   * decreasing ranges (guided self-scheduling), each a quarter of the points left per worker,
+   * down to 1/256 of the points per worker and at least 64, so the first ranges are large and
+   * the last ones small (the workers finish together). With precision "fast" on a grid, ranges
+   * are rounded to whole rows.
    */
   rangeSize?: number;
   /** The worker's built script. Default: dist/parallel/sweepWorker.js of this package. */
@@ -106,6 +109,29 @@ export function rangeBounds(count: number, size: number, align: number): number[
 }
 
 /**
+ * Guided self-scheduling (Polychronopoulos and Kuck, 1987, IEEE Trans. Computers 36(12),
+ * 1425-1439, with a quarter instead of all of the share left): range boundaries of `count`
+ * points for `workers` workers, each range max(minSize, ceil(left / (4 workers))) points,
+ * multiples of `align` except the last.
+ */
+export function guidedBounds(
+  count: number,
+  workers: number,
+  minSize: number,
+  align: number,
+): number[] {
+  const bounds = [0];
+  let b = 0;
+  while (b < count) {
+    const size = Math.max(minSize, Math.ceil((count - b) / (4 * workers)));
+    b = Math.min(count, b + Math.max(align, Math.round(size / align) * align));
+    bounds.push(b);
+  }
+  if (count === 0) bounds.push(0);
+  return bounds;
+}
+
+/**
  * Runs `request` on `fluid` across worker threads and resolves with the same result as
  * `fluid.sweep(request)`. The workers stay in a pool for later sweeps (idle workers do not keep
  * Node alive; {@link closeSweepWorkers} ends them).
@@ -145,9 +171,8 @@ export async function sweepOnWorkers(
       received: chunk,
     });
   }
-  const rangeSize =
-    options.rangeSize ?? Math.max(64, Math.ceil(plan.count / (16 * Math.min(workers, cores))));
-  if (!(Number.isInteger(rangeSize) && rangeSize >= 1)) {
+  const rangeSize = options.rangeSize;
+  if (rangeSize !== undefined && !(Number.isInteger(rangeSize) && rangeSize >= 1)) {
     throw new InputError({
       input: "options.rangeSize",
       unit: "points",
@@ -180,7 +205,15 @@ export async function sweepOnWorkers(
   // the fast route starts each point from the previous points of its row: ranges of whole rows
   const align =
     plan.precision === "fast" && plan.layout === "grid" ? Math.max(1, plan.secondAxis.length) : 1;
-  const bounds = rangeBounds(plan.count, rangeSize, align);
+  const bounds =
+    rangeSize !== undefined
+      ? rangeBounds(plan.count, rangeSize, align)
+      : guidedBounds(
+          plan.count,
+          workers,
+          Math.max(64, Math.ceil(plan.count / (256 * workers))),
+          align,
+        );
   const ranges = bounds.length - 1;
   const n = Math.min(workers, ranges);
   const columns = allocateColumns(plan, plan.count);

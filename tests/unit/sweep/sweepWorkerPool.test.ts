@@ -15,7 +15,7 @@ import {
   sweepOnWorkers,
   sweepWorkerStats,
 } from "../../../kernel-lib/src/parallel/sweepOnWorkers.js";
-import { rangeBounds } from "../../../kernel-lib/src/parallel/sweepOnWorkers.js";
+import { guidedBounds, rangeBounds } from "../../../kernel-lib/src/parallel/sweepOnWorkers.js";
 import { specKey } from "../../../kernel-lib/src/parallel/specKey.js";
 import type { SweepRequest, SweepResult } from "../../../kernel-lib/src/sweep/types.js";
 
@@ -195,6 +195,34 @@ describe("rangeBounds and specKey", () => {
     expect(rangeBounds(21, 5, 7)).toEqual([0, 7, 14, 21]);
     expect(rangeBounds(21, 100, 7)).toEqual([0, 21]);
     expect(rangeBounds(3, 1, 1)).toEqual([0, 1, 2, 3]);
+  });
+
+  it("guided ranges shrink to the minimum, cover every point once and keep whole rows", () => {
+    for (const [count, workers, min, align] of [
+      [1_000_000, 2, 1954, 1],
+      [20_000, 3, 64, 1],
+      [1517, 2, 64, 37],
+      [5, 4, 64, 1],
+    ]) {
+      const b = guidedBounds(count, workers, min, align);
+      expect(b[0]).toBe(0);
+      expect(b[b.length - 1]).toBe(count);
+      const sizes = b.slice(1).map((v, i) => v - b[i]);
+      expect(sizes.every((s) => s > 0)).toBe(true);
+      // not growing, and at least the minimum (rounded to rows) except the last
+      for (let i = 1; i < sizes.length - 1; i++) expect(sizes[i]).toBeLessThanOrEqual(sizes[i - 1]);
+      for (let i = 0; i < sizes.length - 1; i++) {
+        expect(sizes[i]).toBeGreaterThanOrEqual(Math.min(min, count) - align / 2);
+        expect(sizes[i] % align).toBe(0);
+      }
+      // the first range is a quarter of each worker's share (rounded to rows)
+      if (sizes.length > 1) {
+        expect(Math.abs(sizes[0] - Math.max(min, count / (4 * workers)))).toBeLessThanOrEqual(
+          align,
+        );
+      }
+    }
+    expect(guidedBounds(1_000_000, 2, 1954, 1).length - 1).toBe(40);
   });
 
   it("gives equal definitions one key and tells different ones apart", () => {
