@@ -7,6 +7,13 @@
  * machine load within seconds of each other. With `--cold` the pool's workers are ended after
  * every sweep (each sweep starts its workers, loads the library and defines the fluid).
  *
+ * A control runs beside it in every round: the same amount of plain arithmetic (a loop of
+ * multiply-adds, sized to take as long as one sweep on one worker) on 1 thread and split over all
+ * cores, on threads started once. Its scaling is what the machine gave a process at that moment:
+ * with other work running, Linux's autogroup scheduling (sched_autogroup_enabled) shares the
+ * cores between sessions, not threads, so a second thread may add little; the sweep's scaling
+ * over the control's says how much of what was available the sweep used.
+ *
  * Prints one JSON line per sweep (workers, wall and CPU seconds, 1-minute load average) and a
  * summary line: per worker count the median wall and CPU seconds, states per second per core
  * (1e6 / CPU seconds: the CPU time counts every thread of the process), the scaling (median of
@@ -18,6 +25,7 @@ import * as fs from "node:fs";
 import * as os from "node:os";
 import * as path from "node:path";
 import { performance } from "node:perf_hooks";
+import { Worker } from "node:worker_threads";
 import { defineFluid } from "../src/fluid/defineFluid.js";
 import { closeSweepWorkers, sweepOnWorkers } from "../src/parallel/sweepOnWorkers.js";
 import type { SweepRequest } from "../src/sweep/types.js";
@@ -39,6 +47,33 @@ function cpuSeconds(): number {
 }
 
 const round3 = (v: number) => Math.round(v * 1000) / 1000;
+
+// the control's thread: runs `n` multiply-adds per message and answers with the result
+const CONTROL_SOURCE = `
+const { parentPort } = require("node:worker_threads");
+parentPort.on("message", (n) => {
+  let x = 0.5;
+  for (let i = 0; i < n; i++) x = x * 0.999999 + 1e-7;
+  parentPort.postMessage(x);
+});`;
+
+/** Threads for the control, started once; run(k, n) splits n iterations over k of them. */
+function controlThreads(count: number) {
+  const threads = Array.from({ length: count }, () => new Worker(CONTROL_SOURCE, { eval: true }));
+  const once = (w: Worker, n: number) =>
+    new Promise<number>((resolve) => {
+      w.once("message", resolve);
+      w.postMessage(n);
+    });
+  return {
+    async run(k: number, n: number): Promise<number> {
+      const t0 = performance.now();
+      await Promise.all(threads.slice(0, k).map((w) => once(w, Math.round(n / k))));
+      return (performance.now() - t0) / 1000;
+    },
+    close: () => Promise.all(threads.map((w) => w.terminate())),
+  };
+}
 
 async function main(): Promise<void> {
   const argv = process.argv.slice(2);
@@ -71,6 +106,12 @@ async function main(): Promise<void> {
   const warm = await sweep(cores);
   process.stdout.write(JSON.stringify({ warmUp: true, workers: cores, ...warm }) + "\n");
   const counts = [1, cores];
+  // the control, sized in each round to take as long on one thread as that round's sweep on
+  // one worker (from the rate of a probe run)
+  const control = controlThreads(cores);
+  await control.run(cores, 2e7);
+  const probe = await control.run(1, 2e7);
+  const controlRatios: number[] = [];
   const runs = new Map<number, { wall: number; cpu: number }[]>(counts.map((n) => [n, []]));
   const ratios: number[] = [];
   for (let round = 0; round < rounds; round++) {
@@ -91,6 +132,19 @@ async function main(): Promise<void> {
       );
     }
     ratios.push(wallOf.get(1)! / wallOf.get(cores)!);
+    const c = [0, 0];
+    const iterations = Math.round((2e7 * wallOf.get(1)!) / Math.max(probe, 1e-3));
+    for (const n of order) c[n === 1 ? 0 : 1] = await control.run(n, iterations);
+    controlRatios.push(c[0] / c[1]);
+    process.stdout.write(
+      JSON.stringify({
+        round,
+        control: true,
+        wallSeconds1: round3(c[0]),
+        wallSecondsAll: round3(c[1]),
+        loadAverage1m: round3(os.loadavg()[0]),
+      }) + "\n",
+    );
   }
   const count = warm.count;
   const perWorkers = counts.map((n) => {
@@ -114,11 +168,15 @@ async function main(): Promise<void> {
       scaling: round3(scaling),
       scalingSpread: [round3(Math.min(...ratios)), round3(Math.max(...ratios))],
       fractionOfLinear: round3(scaling / cores),
+      controlScaling: round3(median(controlRatios)),
+      controlSpread: [round3(Math.min(...controlRatios)), round3(Math.max(...controlRatios))],
+      overControl: round3(median(ratios.map((r, i) => r / controlRatios[i]))),
       loadAverageBefore: loadBefore,
       loadAverageAfter: os.loadavg().map(round3),
     }) + "\n",
   );
   await closeSweepWorkers();
+  await control.close();
 }
 
 main().catch((e) => {
