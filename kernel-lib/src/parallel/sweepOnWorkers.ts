@@ -269,8 +269,11 @@ export async function sweepOnWorkers(
       };
       const onMessage = (k: number, m: FromWorker) => {
         if (settled) return;
+        // a failed definition (id -1) fails the sweep that sent it
         if (m.type === "fail") {
-          stop(new IsochorError("runner-failed", `sweep worker ${k + 1} of ${n}: ${m.message}`));
+          if (m.id === id || m.id === -1) {
+            stop(new IsochorError("runner-failed", `sweep worker ${k + 1} of ${n}: ${m.message}`));
+          }
           return;
         }
         if (m.id !== id) return;
