@@ -6,6 +6,8 @@ import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js
 import { sharedReferenceState } from "../../../kernel-lib/src/fluid/sharedReferenceState.js";
 import { defineStream } from "../../../kernel-lib/src/process/stream.js";
 import { valve } from "../../../kernel-lib/src/process/valve.js";
+import { compressorStage } from "../../../kernel-lib/src/process/compressor.js";
+import { R } from "../../../kernel-lib/src/constants.js";
 import { stateTable, stepTable } from "../../../kernel-lib/src/tables/stateTable.js";
 import { tableHtml } from "../../../kernel-lib/src/tables/tableHtml.js";
 import { tableText } from "../../../kernel-lib/src/tables/tableText.js";
@@ -136,6 +138,59 @@ describe("stateTable: one call, sensible columns and units", () => {
   });
 });
 
+describe("stateTable: departures in either convention, flows in any flow unit", () => {
+  const columns = ["hResidual", "uResidual", "sResidual", "aResidual", "gResidual"] as const;
+
+  it("departures from the ideal gas at the same T and P, or at the same T and density", () => {
+    const state = vapour.phases[0].state;
+    const tp = stateTable([state], { columns });
+    const tv = stateTable([state], { columns, departures: "same-T-and-density" });
+    expect(tp.rows[0].gResidual).toBe(state.residual.g);
+    expect(tv.rows[0].aResidual).toBe(state.residualTV.a);
+    // h and u do not depend on the convention; s differs by R ln Z (ideal gas at the same P has
+    // density rho Z), as a thermodynamics text derives it (e.g. Smith, Van Ness and Abbott)
+    expect(tv.rows[0].hResidual).toBeCloseTo(tp.rows[0].hResidual as number, 9);
+    expect(tv.rows[0].uResidual).toBeCloseTo(tp.rows[0].uResidual as number, 9);
+    expect((tp.rows[0].sResidual as number) - (tv.rows[0].sResidual as number)).toBeCloseTo(
+      R * Math.log(state.Z),
+      9,
+    );
+    expect(tp.options.note).toMatch(/ideal gas at the same T and P\./);
+    expect(tv.options.note).toMatch(/ideal gas at the same T and density\./);
+    // a one-phase flash result gives its phase's departures; a split gives none (a dash)
+    expect(stateTable([vapour], { columns }).rows[0].gResidual).toBe(state.residual.g);
+    expect(stateTable([split], { columns }).rows[0].hResidual).toBeUndefined();
+    const [head, units] = cells(
+      tableText(stateTable([state], { columns, unitOf: { uResidual: "J/mol" } })),
+    );
+    expect(head).toEqual(["h − hⁱᵍ", "u − uⁱᵍ", "s − sⁱᵍ", "a − aⁱᵍ", "g − gⁱᵍ"]);
+    expect(units).toEqual(["kJ/mol", "J/mol", "J/(mol·K)", "kJ/mol", "kJ/mol"]);
+    expect(() => stateTable([state], { departures: "same-T" as never })).toThrow(
+      /options\.departures/,
+    );
+  });
+
+  it("flow columns in the flow unit asked for; a flow unit of the wrong kind is refused", () => {
+    const stream = defineStream({
+      fluid: gas,
+      z: x,
+      T: 320,
+      P: 20e5,
+      flow: { value: 100, unit: "kmol/h" },
+    });
+    const t = stateTable([stream], {
+      columns: ["molarFlow", "massFlow"],
+      unitOf: { molarFlow: "mol/s", massFlow: "t/h" },
+    });
+    expect(t.columns.map((c) => c.label)).toEqual(["Molar flow, mol/s", "Mass flow, t/h"]);
+    expect(t.rows[0].molarFlow).toBeCloseTo(100e3 / 3600, 9); // 1 kmol/h = 1000/3600 mol/s
+    expect(t.rows[0].massFlow).toBeCloseTo(100 * stream.molarMassKgPerMol, 9); // kmol/h x kg/mol = t/h
+    expect(() => stateTable([stream], { unitOf: { massFlow: "kmol/h" } })).toThrow(
+      /options\.unitOf\.massFlow/,
+    );
+  });
+});
+
 describe("stepTable: one row per process step", () => {
   const inlet = (T: number, name: string) =>
     defineStream({ fluid: gas, z: x, T, P: 40e5, flow: { value: 1, unit: "kmol/h" }, name });
@@ -176,6 +231,85 @@ describe("stepTable: one row per process step", () => {
     expect(cells(tableText(t))[1][1]).toBe("barg");
     expect(() => stepTable(steps, { names: ["one"] })).toThrow(InputError);
     expect(() => stepTable([{} as never])).toThrow(/steps\[0\]/);
+  });
+});
+
+describe("stepTable: columns of your choice (compressor heads, efficiencies, flows, your own)", () => {
+  const suction = defineStream({
+    fluid: gas,
+    z: [0.9, 0.1],
+    T: 310,
+    P: 5e5,
+    flow: { value: 36, unit: "kmol/h" },
+    name: "K-1 suction",
+  });
+  const stage = compressorStage(suction, { outletPressurePa: 15e5, polytropicEfficiency: 0.75 });
+
+  it("named compressor columns read the step's own results, head per kg of the inlet", () => {
+    const t = stepTable([stage], {
+      columns: [
+        "name",
+        "pressureRatio",
+        "polytropicHead",
+        "polytropicExponent",
+        "isentropicEfficiency",
+        "power",
+        "massFlow",
+      ],
+      unitOf: { massFlow: "t/h" },
+    });
+    const row = t.rows[0];
+    expect(row.pressureRatio).toBe(stage.pressureRatio);
+    expect(row.isentropicEfficiency).toBe(stage.isentropicEfficiency);
+    expect(row.polytropicExponent).toBe(stage.polytropicExponent);
+    const [head, units, , cellsOfRow] = cells(tableText(t));
+    expect(head).toEqual([
+      "Step",
+      "Pressure ratio",
+      "Polytropic head",
+      "Polytropic exponent",
+      "Isentropic efficiency",
+      "Power into fluid",
+      "Inlet mass flow, t/h",
+    ]);
+    expect(units).toEqual(["kJ/kg", "kW"]);
+    // kJ/kg = J/mol / (kg/mol) / 1000, by hand
+    expect(Number(cellsOfRow[2])).toBeCloseTo(
+      stage.polytropicHeadJPerMol! / suction.molarMassKgPerMol / 1000,
+      2,
+    );
+    expect(Number(cellsOfRow[5])).toBeCloseTo(stage.powerW! / 1000, 2);
+    // 36 kmol/h x M kg/mol = 36 M t/h
+    expect(Number(cellsOfRow[6])).toBeCloseTo(36 * suction.molarMassKgPerMol, 4);
+  });
+
+  it("a valve has no head (a dash), a column of your own, and a bad column is refused", () => {
+    const v = valve(suction, { outletPressurePa: 2e5 });
+    const t = stepTable([stage, v], {
+      nameLabel: "Item",
+      columns: [
+        "name",
+        "polytropicHead",
+        "pressureRatio",
+        {
+          key: "dT",
+          label: "Outlet T − inlet T",
+          unit: "K",
+          difference: true,
+          digits: 4,
+          value: (r) => r.outlet.state.temperatureK - r.inlets[0].state.temperatureK,
+        },
+      ],
+    });
+    const lines = cells(tableText(t));
+    expect(lines[0][0]).toBe("Item");
+    expect(lines[4][1]).toBe("–");
+    expect(t.rows[1].pressureRatio).toBeCloseTo(2e5 / 5e5, 12);
+    expect(t.rows[1].dT).toBe(v.outlet.state.temperatureK - v.inlets[0].state.temperatureK);
+    expect(() => stepTable([stage], { columns: ["head" as never] })).toThrow(/pressureRatio/);
+    expect(() => stepTable([stage], { columns: [{ key: "k", label: "k" } as never] })).toThrow(
+      /options\.columns\[0\]/,
+    );
   });
 });
 
