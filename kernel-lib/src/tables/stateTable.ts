@@ -64,6 +64,11 @@ export interface StateTableOptions<S = TableState> extends TableOptions {
    */
   unitOf?: Partial<Record<StateColumnName, string>>;
   /**
+   * Fixed decimals of a named column instead of its default significant figures, e.g.
+   * { P: 1, hResidual: 1 } (a column of one unit then lines up on the decimal point).
+   */
+  decimalsOf?: Partial<Record<StateColumnName, number>>;
+  /**
    * The ideal gas the departure columns (hResidual, sResidual, uResidual, aResidual, gResidual)
    * compare with: at the same T and P (default, the engineering departure, `state.residual`) or
    * at the same T and density (`state.residualTV`). h and u are the same in both; s, a and g
@@ -288,7 +293,12 @@ function namedColumn(
     const asked = options.unitOf?.[name];
     const unit =
       asked !== undefined ? lookupFlowUnit(asked).symbol : name === "molarFlow" ? "kmol/h" : "kg/h";
-    return { key: name, label: `${spec.label.replace(/,.*$/, "")}, ${unit}`, digits: 5 };
+    const decimals = options.decimalsOf?.[name];
+    return {
+      key: name,
+      label: `${spec.label.replace(/,.*$/, "")}, ${unit}`,
+      ...(decimals !== undefined ? { decimals } : { digits: 5 }),
+    };
   }
   const mass = options.basis === "mass" && spec.mass !== undefined;
   const kind = spec.kind && mass ? massKind(spec.kind) : spec.kind;
@@ -306,7 +316,8 @@ function namedColumn(
     molarMassKey: MOLAR_MASS_KEY,
   };
   // an overridden unit keeps the column's digits unless the default counted decimals of degC
-  if (spec.decimals !== undefined && unit === (mass ? spec.mass : spec.molar))
+  if (options.decimalsOf?.[name] !== undefined) column.decimals = options.decimalsOf[name];
+  else if (spec.decimals !== undefined && unit === (mass ? spec.mass : spec.molar))
     column.decimals = spec.decimals;
   else column.digits = spec.digits ?? 5;
   return column;
@@ -517,6 +528,8 @@ export interface StepTableOptions<S = TableStep> extends TableOptions {
   names?: readonly string[];
   /** Head of the name column. Default "Step". */
   nameLabel?: string;
+  /** Fixed decimals of a named column instead of its default, e.g. { power: 0, outletT: 1 }. */
+  decimalsOf?: Partial<Record<StepColumnName, number>>;
   /**
    * Columns in order, by name or your own. Default: name, inlet and outlet T and P, the change of
    * T, the outlet phase and vapour fraction, power and duty (when a step has some) and the energy
@@ -679,7 +692,10 @@ export function stepTable<S extends TableStep>(
           received: c,
         });
       }
-      return column;
+      const decimals = options.decimalsOf?.[c];
+      if (decimals === undefined || "text" in column) return column;
+      const { digits: _digits, ...rest } = column;
+      return { ...rest, decimals };
     }
     if (!isObject(c) || typeof c.value !== "function") {
       throw new InputError({

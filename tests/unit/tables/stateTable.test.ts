@@ -170,6 +170,27 @@ describe("stateTable: departures in either convention, flows in any flow unit", 
     );
   });
 
+  it("fixed decimals of a named column instead of significant figures", () => {
+    const t = stateTable([vapour.phases[0].state], {
+      columns: ["P", "hResidual"],
+      unitOf: { hResidual: "J/mol" },
+      decimalsOf: { P: 1, hResidual: 1 },
+    });
+    const row = cells(tableText(t)).at(-2)!; // the last line is the note
+    expect(row).toEqual(["20.0", vapour.phases[0].state.residual.h.toFixed(1)]);
+    const steps = [
+      valve(
+        defineStream({ fluid: gas, z: x, T: 310, P: 40e5, flow: { value: 1, unit: "kmol/h" } }),
+        { outletPressurePa: 7e5 },
+      ),
+    ];
+    const s = stepTable(steps, {
+      columns: ["outletP", "pressureRatio"],
+      decimalsOf: { outletP: 2, pressureRatio: 3 },
+    });
+    expect(cells(tableText(s)).at(-1)).toEqual(["7.00", (7 / 40).toFixed(3)]);
+  });
+
   it("flow columns in the flow unit asked for; a flow unit of the wrong kind is refused", () => {
     const stream = defineStream({
       fluid: gas,
