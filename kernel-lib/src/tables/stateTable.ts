@@ -119,8 +119,8 @@ const NAMED: Readonly<Record<StateColumnName, NamedColumn>> = {
     mass: "kJ/(kg K)",
     digits: 5,
   },
-  molarFlow: { label: "Molar flow, kmol/h", digits: 5 },
-  massFlow: { label: "Mass flow, kg/h", digits: 5 },
+  molarFlow: { label: "Molar flow", molar: "kmol/h", digits: 5 },
+  massFlow: { label: "Mass flow", molar: "kg/h", digits: 5 },
 };
 
 /** Field of the row that holds its molar mass (for mass units). */
@@ -260,8 +260,8 @@ function extract(
     uResidual: single ? residual?.u : undefined,
     aResidual: single ? residual?.a : undefined,
     gResidual: single ? residual?.g : undefined,
-    molarFlow: flow !== undefined ? flow * 3.6 : undefined,
-    massFlow: flow !== undefined ? flow * molarMass * 3600 : undefined,
+    molarFlow: flow,
+    massFlow: flow !== undefined ? flow * molarMass : undefined,
     [MOLAR_MASS_KEY]: molarMass,
     warnings,
   };
@@ -288,18 +288,9 @@ function namedColumn(
     });
   }
   if (spec.text) return { key: name, label: name === "name" ? nameLabel : spec.label, text: true };
-  if (name === "molarFlow" || name === "massFlow") {
-    // the rows hold the flow in the unit of the head (kmol/h, kg/h or the one asked for)
-    const asked = options.unitOf?.[name];
-    const unit =
-      asked !== undefined ? lookupFlowUnit(asked).symbol : name === "molarFlow" ? "kmol/h" : "kg/h";
-    const decimals = options.decimalsOf?.[name];
-    return {
-      key: name,
-      label: `${spec.label.replace(/,.*$/, "")}, ${unit}`,
-      ...(decimals !== undefined ? { decimals } : { digits: 5 }),
-    };
-  }
+  // a flow unit asked for: of the column's kind (molar or mass)
+  if (name === "molarFlow" || name === "massFlow")
+    flowUnitOf(options.unitOf?.[name], name === "molarFlow" ? "molar" : "mass", name);
   const mass = options.basis === "mass" && spec.mass !== undefined;
   const kind = spec.kind && mass ? massKind(spec.kind) : spec.kind;
   const unit =
@@ -323,13 +314,13 @@ function namedColumn(
   return column;
 }
 
-/** SI per unit (mol/s or kg/s) of a flow unit asked for a flow column, checked for its kind. */
+/** Checks that a flow unit asked for a flow column is of its kind (molar or mass). */
 function flowUnitOf(
   unit: string | undefined,
   kind: FlowKind,
   column: "molarFlow" | "massFlow",
-): number | undefined {
-  if (unit === undefined) return undefined;
+): void {
+  if (unit === undefined) return;
   const def = lookupFlowUnit(unit);
   if (def.kind !== kind) {
     throw new InputError({
@@ -339,7 +330,6 @@ function flowUnitOf(
       received: unit,
     });
   }
-  return def.factor;
 }
 
 function massKind(kind: QuantityKind): QuantityKind {
@@ -419,16 +409,9 @@ export function stateTable<S extends TableState>(
     });
   }
   const extracted = states.map((s, i) => extract(s, i, departures));
-  const molarFlowUnit = flowUnitOf(options.unitOf?.molarFlow, "molar", "molarFlow");
-  const massFlowUnit = flowUnitOf(options.unitOf?.massFlow, "mass", "massFlow");
   const rows = extracted.map((e, i) => {
     const row = { ...e.row };
     if (names !== undefined) row.name = names[i];
-    // rows hold flows in kmol/h and kg/h; another flow unit converts them here
-    if (molarFlowUnit && typeof row.molarFlow === "number")
-      row.molarFlow = row.molarFlow / 3.6 / molarFlowUnit;
-    if (massFlowUnit && typeof row.massFlow === "number")
-      row.massFlow = row.massFlow / 3600 / massFlowUnit;
     return row;
   });
   const hasNames = rows.some((r) => r.name !== undefined);
@@ -586,8 +569,8 @@ export function stepTable<S extends TableStep>(
       received: options.names,
     });
   }
-  const molarFlowUnit = flowUnitOf(options.unitOf?.molarFlow, "molar", "molarFlow");
-  const massFlowUnit = flowUnitOf(options.unitOf?.massFlow, "mass", "massFlow");
+  flowUnitOf(options.unitOf?.molarFlow, "molar", "molarFlow");
+  flowUnitOf(options.unitOf?.massFlow, "mass", "massFlow");
   const numberOf = (r: object, key: string): number | undefined => {
     const v = (r as Record<string, unknown>)[key];
     return typeof v === "number" ? v : undefined;
@@ -596,8 +579,6 @@ export function stepTable<S extends TableStep>(
     const inlet = extract(r.inlets[0], i).row;
     const outlet = extract(r.outlet, i).row;
     const inletName = (r.inlets[0] as { name?: unknown }).name;
-    const molarFlow = inlet.molarFlow as number | undefined;
-    const massFlow = inlet.massFlow as number | undefined;
     return {
       name: options.names?.[i] ?? (typeof inletName === "string" ? inletName : r.kind),
       inletT: inlet.T,
@@ -616,10 +597,9 @@ export function stepTable<S extends TableStep>(
       polytropicExponent: numberOf(r, "polytropicExponent"),
       polytropicHead: numberOf(r, "polytropicHeadJPerMol"),
       isentropicHead: numberOf(r, "isentropicHeadJPerMol"),
-      // flows of the first inlet: kmol/h and kg/h, or the unit asked for
-      molarFlow:
-        molarFlow !== undefined && molarFlowUnit ? molarFlow / 3.6 / molarFlowUnit : molarFlow,
-      massFlow: massFlow !== undefined && massFlowUnit ? massFlow / 3600 / massFlowUnit : massFlow,
+      // flows of the first inlet, mol/s and kg/s
+      molarFlow: inlet.molarFlow,
+      massFlow: inlet.massFlow,
       [MOLAR_MASS_KEY]: inlet[MOLAR_MASS_KEY],
       warnings: [...(r.warnings ?? []), ...(outlet.warnings as unknown[])],
     };
@@ -633,8 +613,6 @@ export function stepTable<S extends TableStep>(
   // temperatures in degC or K to 0.01 K, like stateTable's; other units to 5 figures
   const temperature = (key: string, label: string, unit: string): NumberColumn =>
     unit === "degC" || unit === "K" ? { key, label, unit, decimals: 2 } : num(key, label, unit, 5);
-  const flowLabel = (kind: string, asked: string | undefined, fallback: string) =>
-    `Inlet ${kind} flow, ${asked !== undefined ? lookupFlowUnit(asked).symbol : fallback}`;
   const named: Record<StepColumnName, TableColumn> = {
     name: { key: "name", label: options.nameLabel ?? "Step", text: true },
     inletT: temperature("inletT", "Inlet T", T),
@@ -659,13 +637,8 @@ export function stepTable<S extends TableStep>(
       ...num("isentropicHead", "Isentropic head", head, 5),
       molarMassKey: MOLAR_MASS_KEY,
     },
-    molarFlow: num(
-      "molarFlow",
-      flowLabel("molar", options.unitOf?.molarFlow, "kmol/h"),
-      undefined,
-      5,
-    ),
-    massFlow: num("massFlow", flowLabel("mass", options.unitOf?.massFlow, "kg/h"), undefined, 5),
+    molarFlow: num("molarFlow", "Inlet molar flow", options.unitOf?.molarFlow ?? "kmol/h", 5),
+    massFlow: num("massFlow", "Inlet mass flow", options.unitOf?.massFlow ?? "kg/h", 5),
   };
   const chosen: readonly (StepColumnName | CustomStepColumn<S>)[] = options.columns ?? [
     "name",
