@@ -68,6 +68,8 @@ export interface StateTableOptions<S = TableState> extends TableOptions {
    * { P: 1, hResidual: 1 } (a column of one unit then lines up on the decimal point).
    */
   decimalsOf?: Partial<Record<StateColumnName, number>>;
+  /** Head of a named column instead of its default, e.g. { T: "Outlet T" }. */
+  labelOf?: Partial<Record<StateColumnName, string>>;
   /**
    * The ideal gas the departure columns (hResidual, sResidual, uResidual, aResidual, gResidual)
    * compare with: at the same T and P (default, the engineering departure, `state.residual`) or
@@ -287,7 +289,8 @@ function namedColumn(
       received: name,
     });
   }
-  if (spec.text) return { key: name, label: name === "name" ? nameLabel : spec.label, text: true };
+  const label = options.labelOf?.[name] ?? (name === "name" ? nameLabel : spec.label);
+  if (spec.text) return { key: name, label, text: true };
   // a flow unit asked for: of the column's kind (molar or mass)
   if (name === "molarFlow" || name === "massFlow")
     flowUnitOf(options.unitOf?.[name], name === "molarFlow" ? "molar" : "mass", name);
@@ -302,7 +305,7 @@ function namedColumn(
         : spec.molar);
   const column: NumberColumn = {
     key: name,
-    label: spec.label,
+    label,
     unit: unit === undefined || unit === "-" ? undefined : unit,
     molarMassKey: MOLAR_MASS_KEY,
   };
@@ -513,6 +516,8 @@ export interface StepTableOptions<S = TableStep> extends TableOptions {
   nameLabel?: string;
   /** Fixed decimals of a named column instead of its default, e.g. { power: 0, outletT: 1 }. */
   decimalsOf?: Partial<Record<StepColumnName, number>>;
+  /** Head of a named column instead of its default, e.g. { outletT: "Discharge T" }. */
+  labelOf?: Partial<Record<StepColumnName, string>>;
   /**
    * Columns in order, by name or your own. Default: name, inlet and outlet T and P, the change of
    * T, the outlet phase and vapour fraction, power and duty (when a step has some) and the energy
@@ -665,10 +670,11 @@ export function stepTable<S extends TableStep>(
           received: c,
         });
       }
+      const label = options.labelOf?.[c] ?? column.label;
       const decimals = options.decimalsOf?.[c];
-      if (decimals === undefined || "text" in column) return column;
+      if (decimals === undefined || "text" in column) return { ...column, label };
       const { digits: _digits, ...rest } = column;
-      return { ...rest, decimals };
+      return { ...rest, label, decimals };
     }
     if (!isObject(c) || typeof c.value !== "function") {
       throw new InputError({

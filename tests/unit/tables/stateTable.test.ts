@@ -199,6 +199,28 @@ describe("stateTable: departures in either convention, flows in any flow unit", 
     expect(cells(tableText(s)).at(-1)).toEqual(["7.00", (7 / 40).toFixed(3)]);
   });
 
+  it("heads of named columns can be renamed", () => {
+    const t = stateTable([vapour], {
+      columns: ["name", "T", "h"],
+      labelOf: { name: "Point", T: "Outlet T" },
+    });
+    expect(cells(tableText(t))[0]).toEqual(["Point", "Outlet T", "h"]);
+    const s = stepTable(
+      [
+        valve(
+          defineStream({ fluid: gas, z: x, T: 310, P: 40e5, flow: { value: 1, unit: "kmol/h" } }),
+          { outletPressurePa: 7e5 },
+        ),
+      ],
+      {
+        columns: ["outletT", "pressureRatio"],
+        labelOf: { outletT: "Discharge T", pressureRatio: "Ratio" },
+        decimalsOf: { pressureRatio: 2 },
+      },
+    );
+    expect(cells(tableText(s))[0]).toEqual(["Discharge T", "Ratio"]);
+  });
+
   it("flow columns in the flow unit asked for; a flow unit of the wrong kind is refused", () => {
     const stream = defineStream({
       fluid: gas,
