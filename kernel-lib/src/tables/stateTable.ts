@@ -94,6 +94,7 @@ interface NamedColumn {
   text?: true;
 }
 
+// departure heads keep "h − hⁱᵍ" on one line (no-break spaces) in a narrow notebook table
 const NAMED: Readonly<Record<StateColumnName, NamedColumn>> = {
   name: { label: "State", text: true },
   T: { label: "T", kind: "temperature", molar: "degC", decimals: 2 },
@@ -110,12 +111,36 @@ const NAMED: Readonly<Record<StateColumnName, NamedColumn>> = {
   cv: { label: "cv", kind: "molarEntropy", molar: "J/(mol K)", mass: "kJ/(kg K)", digits: 5 },
   w: { label: "Speed of sound", kind: "speed", molar: "m/s", digits: 4 },
   jouleThomson: { label: "Joule-Thomson", molar: "K/bar", digits: 3 },
-  hResidual: { label: "h − hⁱᵍ", kind: "molarEnergy", molar: "kJ/mol", mass: "kJ/kg", digits: 5 },
-  uResidual: { label: "u − uⁱᵍ", kind: "molarEnergy", molar: "kJ/mol", mass: "kJ/kg", digits: 5 },
-  aResidual: { label: "a − aⁱᵍ", kind: "molarEnergy", molar: "kJ/mol", mass: "kJ/kg", digits: 5 },
-  gResidual: { label: "g − gⁱᵍ", kind: "molarEnergy", molar: "kJ/mol", mass: "kJ/kg", digits: 5 },
+  hResidual: {
+    label: "h\u00a0−\u00a0hⁱᵍ",
+    kind: "molarEnergy",
+    molar: "kJ/mol",
+    mass: "kJ/kg",
+    digits: 5,
+  },
+  uResidual: {
+    label: "u\u00a0−\u00a0uⁱᵍ",
+    kind: "molarEnergy",
+    molar: "kJ/mol",
+    mass: "kJ/kg",
+    digits: 5,
+  },
+  aResidual: {
+    label: "a\u00a0−\u00a0aⁱᵍ",
+    kind: "molarEnergy",
+    molar: "kJ/mol",
+    mass: "kJ/kg",
+    digits: 5,
+  },
+  gResidual: {
+    label: "g\u00a0−\u00a0gⁱᵍ",
+    kind: "molarEnergy",
+    molar: "kJ/mol",
+    mass: "kJ/kg",
+    digits: 5,
+  },
   sResidual: {
-    label: "s − sⁱᵍ",
+    label: "s\u00a0−\u00a0sⁱᵍ",
     kind: "molarEntropy",
     molar: "J/(mol K)",
     mass: "kJ/(kg K)",

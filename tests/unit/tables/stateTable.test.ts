@@ -171,7 +171,8 @@ describe("stateTable: departures in either convention, flows in any flow unit", 
     const [head, units] = cells(
       tableText(stateTable([state], { columns, unitOf: { uResidual: "J/mol" } })),
     );
-    expect(head).toEqual(["h − hⁱᵍ", "u − uⁱᵍ", "s − sⁱᵍ", "a − aⁱᵍ", "g − gⁱᵍ"]);
+    // no-break spaces: the head does not wrap inside "h − hⁱᵍ"
+    expect(head).toEqual(["hh", "uu", "ss", "aa", "gg"].map(([p, q]) => `${p}\u00a0−\u00a0${q}ⁱᵍ`));
     expect(units).toEqual(["kJ/mol", "J/mol", "J/(mol·K)", "kJ/mol", "kJ/mol"]);
     expect(() => stateTable([state], { departures: "same-T" as never })).toThrow(
       /options\.departures/,
