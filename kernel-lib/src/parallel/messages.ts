@@ -3,8 +3,9 @@
  * and its worker threads (sweepWorker.ts). A worker lives across sweeps: a fluid definition is
  * sent once per worker and kept under its key (specKey.ts) until the runner says to forget it;
  * a sweep's request is sent once per worker that takes part, then ranges of points are handed
- * out one at a time as workers finish their last (on demand); the worker answers with progress
- * counts and each range's typed arrays (transferred, not copied).
+ * out one at a time as workers finish their last (on demand). The result arrays live on
+ * SharedArrayBuffers sent with the request: a worker writes each range in place (no copy, no
+ * transfer) and answers with progress counts and the range's error messages.
  */
 import type { FluidSpec } from "../fluid/defineFluid.js";
 import type { SweepPointError, SweepRequest } from "../sweep/types.js";
@@ -22,13 +23,24 @@ export interface ForgetMessage {
   readonly key: string;
 }
 
+/** The result arrays of a sweep on SharedArrayBuffers: each worker writes its ranges in place. */
+export interface SharedColumns {
+  readonly values: Float64Array[];
+  readonly phaseCount: Uint8Array;
+  readonly phaseKind: Uint8Array;
+  readonly errorCode: Uint8Array;
+  /** [0]: points written; a worker adds its range's count atomically before it says "done". */
+  readonly written: Int32Array;
+}
+
 /** Main -> worker: the request of sweep `id`, on the fluid kept under `key`. */
 export interface SweepMessage {
   readonly type: "sweep";
   readonly id: number;
   readonly key: string;
   readonly request: SweepRequest;
-  /** Points between progress messages. */
+  readonly columns: SharedColumns;
+  /** Points between progress checks; 0: no progress messages. */
   readonly chunk: number;
 }
 
@@ -55,16 +67,12 @@ export interface ProgressMessage {
   readonly done: number;
 }
 
-/** Worker -> main: a range's arrays. */
+/** Worker -> main: a range is written into the shared arrays. */
 export interface DoneMessage {
   readonly type: "done";
   readonly id: number;
   readonly start: number;
   readonly end: number;
-  readonly values: Float64Array[];
-  readonly phaseCount: Uint8Array;
-  readonly phaseKind: Uint8Array;
-  readonly errorCode: Uint8Array;
   readonly errors: SweepPointError[];
   readonly failed: number;
 }

@@ -3,8 +3,9 @@
  * points handed out on demand (a worker that finishes one takes the next, so a slower or busier
  * core takes fewer) to worker threads of a persistent pool (workerPool.ts: started once per
  * process, the fluid defined once per worker and kept by the key of its definition). Each
- * worker runs the same engine as the single-thread sweep and its range is written into its
- * place, so the arrays are equal to those of fluid.sweep exactly. With precision "fast" on a
+ * worker runs the same engine as the single-thread sweep and writes its range in place into the
+ * result arrays, which live on SharedArrayBuffers (no copy or transfer on the main thread), so
+ * the arrays are equal to those of fluid.sweep exactly. With precision "fast" on a
  * grid the ranges start at row starts (the fast route starts each point from the previous points
  * of its temperature row). Progress goes through progress/; an AbortSignal terminates the
  * sweep's workers at once (the pool replaces them in the next sweep) and rejects with the
@@ -15,13 +16,7 @@ import * as os from "node:os";
 import * as path from "node:path";
 import { InputError, IsochorError, type ResultWarning } from "../errors.js";
 import type { Fluid, FluidSpec } from "../fluid/defineFluid.js";
-import {
-  allocateColumns,
-  planSweep,
-  runSweep,
-  sweepResult,
-  type SweepColumns,
-} from "../sweep/runSweep.js";
+import { planSweep, runSweep, sweepResult, type SweepPlan } from "../sweep/runSweep.js";
 import {
   MAX_ERROR_MESSAGES,
   type SweepPointError,
@@ -29,7 +24,7 @@ import {
   type SweepResult,
 } from "../sweep/types.js";
 import { startProgress, type ProgressOptions, type ProgressTracker } from "../progress/progress.js";
-import type { DoneMessage, FromWorker } from "./messages.js";
+import type { FromWorker, SharedColumns } from "./messages.js";
 import { specKey } from "./specKey.js";
 import { defineIn, discardWorker, forget, returnWorker, send, takeWorkers } from "./workerPool.js";
 
@@ -134,7 +129,9 @@ export function guidedBounds(
 /**
  * Runs `request` on `fluid` across worker threads and resolves with the same result as
  * `fluid.sweep(request)`. The workers stay in a pool for later sweeps (idle workers do not keep
- * Node alive; {@link closeSweepWorkers} ends them).
+ * Node alive; {@link closeSweepWorkers} ends them). The result's typed arrays are views of
+ * SharedArrayBuffers (the workers wrote them in place): they read and write like any typed
+ * array, but a structuredClone or postMessage of one shares its memory instead of copying it.
  *
  * @example
  * ```ts
@@ -216,7 +213,7 @@ export async function sweepOnWorkers(
         );
   const ranges = bounds.length - 1;
   const n = Math.min(workers, ranges);
-  const columns = allocateColumns(plan, plan.count);
+  const columns = sharedColumns(plan);
   const errors: SweepPointError[] = [];
   let failed = 0;
   const id = nextSweepId++;
@@ -284,7 +281,8 @@ export async function sweepOnWorkers(
           progress?.set(total);
           return;
         }
-        copyInto(columns, m);
+        // pairs with the worker's Atomics.add after its writes: they are visible from here on
+        Atomics.load(columns.written, 0);
         failed += m.failed;
         // ranges come back in any order: keep every message, the first by index are kept below
         for (const e of m.errors) errors.push(e);
@@ -311,7 +309,14 @@ export async function sweepOnWorkers(
       try {
         for (const w of taken) {
           defineIn(w, key, fluid.spec);
-          send(w, { type: "sweep", id, key, request, chunk });
+          send(w, {
+            type: "sweep",
+            id,
+            key,
+            request,
+            columns,
+            chunk: progress === undefined ? 0 : chunk,
+          });
         }
         for (let k = 0; k < n; k++) handOut(k);
       } catch (e) {
@@ -335,10 +340,17 @@ function firstErrors(errors: SweepPointError[]): void {
   errors.length = Math.min(errors.length, MAX_ERROR_MESSAGES);
 }
 
-function copyInto(columns: SweepColumns, m: DoneMessage) {
-  const at = m.start;
-  for (let k = 0; k < columns.values.length; k++) columns.values[k].set(m.values[k], at);
-  columns.phaseCount.set(m.phaseCount, at);
-  columns.phaseKind.set(m.phaseKind, at);
-  columns.errorCode.set(m.errorCode, at);
+/**
+ * The result arrays on SharedArrayBuffers (the workers write their ranges in place; the arrays
+ * read and write as any typed array, and a structuredClone of one shares its memory).
+ */
+function sharedColumns(plan: SweepPlan): SharedColumns {
+  const n = plan.count;
+  return {
+    values: plan.properties.map(() => new Float64Array(new SharedArrayBuffer(8 * n))),
+    phaseCount: new Uint8Array(new SharedArrayBuffer(n)),
+    phaseKind: new Uint8Array(new SharedArrayBuffer(n)),
+    errorCode: new Uint8Array(new SharedArrayBuffer(n)),
+    written: new Int32Array(new SharedArrayBuffer(4)),
+  };
 }
