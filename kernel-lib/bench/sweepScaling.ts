@@ -14,6 +14,13 @@
  * cores between sessions, not threads, so a second thread may add little; the sweep's scaling
  * over the control's says how much of what was available the sweep used.
  *
+ * On Linux the time each thread of the process spent on a CPU and waiting for one is read from
+ * /proc/self/task/<tid>/schedstat around every sweep: the longest on-CPU time of one thread is
+ * the sweep's critical path, what its wall time would be if no other work waited for the cores.
+ * `onCpuScaling` is the median per round of the 1-worker critical path over the all-cores one:
+ * the scaling the code reaches on an idle machine, apart from the slowing of a core by work on
+ * the other (shared caches, memory bandwidth), which this does not see.
+ *
  * Prints one JSON line per sweep (workers, wall and CPU seconds, 1-minute load average) and a
  * summary line: per worker count the median wall and CPU seconds, states per second per core
  * (1e6 / CPU seconds: the CPU time counts every thread of the process), the scaling (median of
@@ -57,6 +64,38 @@ parentPort.on("message", (n) => {
   parentPort.postMessage(x);
 });`;
 
+/** Per thread of this process: ns on a CPU and ns waiting for one (Linux), else undefined. */
+function threadTimes(): Map<string, [number, number]> | undefined {
+  const dir = "/proc/self/task";
+  if (!fs.existsSync(dir)) return undefined;
+  const times = new Map<string, [number, number]>();
+  for (const tid of fs.readdirSync(dir)) {
+    try {
+      const [run, wait] = fs.readFileSync(`${dir}/${tid}/schedstat`, "utf8").split(" ").map(Number);
+      times.set(tid, [run, wait]);
+    } catch {
+      // a thread that ended meanwhile
+    }
+  }
+  return times;
+}
+
+/** The longest on-CPU time of one thread between two readings (s), and the summed waiting (s). */
+function criticalPath(
+  before: Map<string, [number, number]> | undefined,
+  after: Map<string, [number, number]> | undefined,
+): { run: number; wait: number } | undefined {
+  if (before === undefined || after === undefined) return undefined;
+  let run = 0;
+  let wait = 0;
+  for (const [tid, [r1, w1]] of after) {
+    const [r0, w0] = before.get(tid) ?? [0, 0];
+    run = Math.max(run, (r1 - r0) / 1e9);
+    wait += (w1 - w0) / 1e9;
+  }
+  return { run, wait };
+}
+
 /** Threads for the control, started once; run(k, n) splits n iterations over k of them. */
 function controlThreads(count: number) {
   const threads = Array.from({ length: count }, () => new Worker(CONTROL_SOURCE, { eval: true }));
@@ -88,6 +127,7 @@ async function main(): Promise<void> {
   const fluid = defineFluid({ components: TEN, model: "peng-robinson" });
   const loadBefore = os.loadavg().map(round3);
   const sweep = async (workers: number) => {
+    const s0 = threadTimes();
     const c0 = cpuSeconds();
     const t0 = performance.now();
     const r = await sweepOnWorkers(fluid, request, {
@@ -98,9 +138,10 @@ async function main(): Promise<void> {
     });
     const wall = (performance.now() - t0) / 1000;
     const cpu = cpuSeconds() - c0;
+    const crit = criticalPath(s0, threadTimes());
     if (r.failed !== 0) throw new Error(`${r.failed} points failed`);
     if (cold) await closeSweepWorkers();
-    return { wall, cpu, count: r.count };
+    return { wall, cpu, count: r.count, runMax: crit?.run ?? NaN, wait: crit?.wait ?? NaN };
   };
   // the warm-up: one sweep on all cores (starts the pool, defines the fluid, compiles the code)
   const warm = await sweep(cores);
@@ -113,25 +154,31 @@ async function main(): Promise<void> {
   const probe = await control.run(1, 2e7);
   const controlRatios: number[] = [];
   const runs = new Map<number, { wall: number; cpu: number }[]>(counts.map((n) => [n, []]));
+  const onCpuRatios: number[] = [];
   const ratios: number[] = [];
   for (let round = 0; round < rounds; round++) {
     const order = round % 2 === 0 ? counts : [...counts].reverse();
     const wallOf = new Map<number, number>();
+    const runMaxOf = new Map<number, number>();
     for (const n of order) {
       const t = await sweep(n);
       runs.get(n)!.push(t);
       wallOf.set(n, t.wall);
+      runMaxOf.set(n, t.runMax);
       process.stdout.write(
         JSON.stringify({
           round,
           workers: n,
           wallSeconds: round3(t.wall),
           cpuSeconds: round3(t.cpu),
+          onCpuCriticalSeconds: round3(t.runMax),
+          waitSeconds: round3(t.wait),
           loadAverage1m: round3(os.loadavg()[0]),
         }) + "\n",
       );
     }
     ratios.push(wallOf.get(1)! / wallOf.get(cores)!);
+    onCpuRatios.push(runMaxOf.get(1)! / runMaxOf.get(cores)!);
     const c = [0, 0];
     const iterations = Math.round((2e7 * wallOf.get(1)!) / Math.max(probe, 1e-3));
     for (const n of order) c[n === 1 ? 0 : 1] = await control.run(n, iterations);
@@ -171,6 +218,9 @@ async function main(): Promise<void> {
       controlScaling: round3(median(controlRatios)),
       controlSpread: [round3(Math.min(...controlRatios)), round3(Math.max(...controlRatios))],
       overControl: round3(median(ratios.map((r, i) => r / controlRatios[i]))),
+      onCpuScaling: round3(median(onCpuRatios)),
+      onCpuSpread: [round3(Math.min(...onCpuRatios)), round3(Math.max(...onCpuRatios))],
+      onCpuFractionOfLinear: round3(median(onCpuRatios) / cores),
       loadAverageBefore: loadBefore,
       loadAverageAfter: os.loadavg().map(round3),
     }) + "\n",
