@@ -3,8 +3,9 @@
  * first): later sweeps reuse the workers and the fluid definitions they hold; ranges handed out
  * on demand come back in any order and are written into their place (arrays and the first error
  * messages equal the single-thread sweep's); a worker terminated by cancellation or one that
- * crashes leaves the pool and the next sweep runs on new ones with equal results; an idle pool
- * does not keep Node alive; the cache key of a definition tells definitions apart faithfully.
+ * crashes leaves the pool and the next sweep runs on new ones with equal results; the result
+ * arrays, on SharedArrayBuffers, make the same table files; an idle pool does not keep Node
+ * alive; the cache key of a definition tells definitions apart faithfully.
  */
 import { spawnSync } from "node:child_process";
 import * as path from "node:path";
@@ -17,6 +18,9 @@ import {
 } from "../../../kernel-lib/src/parallel/sweepOnWorkers.js";
 import { guidedBounds, rangeBounds } from "../../../kernel-lib/src/parallel/sweepOnWorkers.js";
 import { specKey } from "../../../kernel-lib/src/parallel/specKey.js";
+import { tableOfSweep } from "../../../kernel-lib/src/propertyTables/propertyTable.js";
+import { tableCsv } from "../../../kernel-lib/src/propertyTables/tableCsv.js";
+import { tableParquet } from "../../../kernel-lib/src/propertyTables/tableParquet.js";
 import type { SweepRequest, SweepResult } from "../../../kernel-lib/src/sweep/types.js";
 
 afterAll(() => closeSweepWorkers());
@@ -169,6 +173,17 @@ describe("the sweep worker pool", () => {
       sweepOnWorkers(gas, { ...request, flash }, { workers: 2, threshold: 1, progress: false }),
     ).rejects.toThrow(/could not be cloned/);
     expect(sweepWorkerStats().busy).toBe(0);
+  });
+
+  it("its result arrays (on SharedArrayBuffers) make the same property-table files", async () => {
+    const r = await sweepOnWorkers(gas, request, { workers: 2, threshold: 1, progress: false });
+    expect(r.values.h!.buffer).toBeInstanceOf(SharedArrayBuffer);
+    const a = tableOfSweep(gas.sweep(request));
+    const b = tableOfSweep(r);
+    expect(tableCsv(b)).toBe(tableCsv(a));
+    expect(Buffer.from(await tableParquet(b)).equals(Buffer.from(await tableParquet(a)))).toBe(
+      true,
+    );
   });
 
   it("an idle pool does not keep Node alive", () => {
