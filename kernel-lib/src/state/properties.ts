@@ -105,6 +105,12 @@ function lnPhiOf(d: ResidualDerivatives, lnZ: number): number[] {
   return out;
 }
 
+/** ln phi_i = dnA_i - ln Z written over dnA (an array the caller owns); returns it. */
+function lnPhiInPlace(dnA: number[], lnZ: number): number[] {
+  for (let i = 0; i < dnA.length; i++) dnA[i] = dnA[i] - lnZ;
+  return dnA;
+}
+
 /**
  * ln phi_i of a state from its residual derivatives (which must carry dnA): dnA_i - ln Z, NaN where
  * Z <= 0 (the formula of the header, for callers that need the fugacities alone).
@@ -313,7 +319,8 @@ export function assembleState(input: StateInputs): FluidState {
 /**
  * {@link assembleState} with the inputs as arguments (the state layer's hot path: no inputs
  * record per state). `Rg` is the model's gas constant, J/(mol K); `givenPressurePa` the pressure
- * a (T, P) state was asked at, reported as given (StateInputs.pressurePa).
+ * a (T, P) state was asked at, reported as given (StateInputs.pressurePa); `ownDnA`: `d.dnA` is
+ * a fresh array of the caller's that may become the state's lnPhi (overwritten in place).
  */
 export function assembleStateOf(
   T: number,
@@ -328,6 +335,7 @@ export function assembleStateOf(
   Rg: number,
   given: readonly ResultWarning[] | undefined,
   givenPressurePa?: number,
+  ownDnA = false,
 ): FluidState {
   // the arithmetic of stateValuesInto (residualParts, energyValuesInto) written out with locals,
   // operation for operation, so a sweep that fills StateValues gets these very numbers (the sweep
@@ -359,7 +367,8 @@ export function assembleStateOf(
   const w2 = ((cp / cv) * dPdr) / M;
   const kappaT = 1 / (rho * dPdr);
   const beta = kappaT * dPdT;
-  const lnPhi = lnPhiOf(d, lnZ);
+  // the caller's fresh dnA array becomes ln phi in place (the same subtraction, no second array)
+  const lnPhi = ownDnA && d.dnA ? lnPhiInPlace(d.dnA as number[], lnZ) : lnPhiOf(d, lnZ);
   // one division for the seven specific values (a multiply differs from dividing by at most 1 ulp)
   const perMass = 1 / M;
   let warnings: readonly ResultWarning[] = NO_WARNINGS;

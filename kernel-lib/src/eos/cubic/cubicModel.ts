@@ -416,28 +416,46 @@ class CubicModelImpl implements CubicModel {
       aDDT: 0,
       dnA: undefined,
     };
-    this.residualInto(temperatureK, densityMolPerM3, x, result);
-    // T d(aDD)/dT: in aDD = q^2 - F eps^2 I'' only F depends on T, and T dF/dT = TF
-    result.aDDT = -this.lastTF * this.lastEps2I2;
     if (request?.composition) {
-      const n = this.n;
-      const a = this.mixA;
-      const b = this.mixB;
-      const eps = b * densityMolPerM3;
-      const F = a / (b * R * temperatureK);
-      const I = this.lastI;
-      const I1 = this.lastI1;
-      const logTerm = this.lastLogTerm;
-      const q = eps / (1 - eps);
-      const dnA = new Array<number>(n);
-      for (let i = 0; i < n; i++) {
-        const bRatio = this.bi[i] / b;
-        dnA[i] =
-          logTerm + bRatio * q - F * ((2 * this.sumA[i]) / a - bRatio) * I - F * bRatio * eps * I1;
-      }
+      const dnA = new Array<number>(this.n);
+      this.residualWithCompositionInto(temperatureK, densityMolPerM3, x, result, dnA);
       result.dnA = dnA;
+    } else {
+      this.residualInto(temperatureK, densityMolPerM3, x, result);
+      // T d(aDD)/dT: in aDD = q^2 - F eps^2 I'' only F depends on T, and T dF/dT = TF
+      result.aDDT = -this.lastTF * this.lastEps2I2;
     }
     return result;
+  }
+
+  /**
+   * {@link residual} with composition derivatives written into `out` and `dnA` (no allocation:
+   * the state layer's (T, P) path); residual() itself runs through here, so the same numbers.
+   */
+  residualWithCompositionInto(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+    out: ResidualDerivativesDraft,
+    dnA: number[],
+  ): void {
+    this.residualInto(temperatureK, densityMolPerM3, x, out);
+    // T d(aDD)/dT: in aDD = q^2 - F eps^2 I'' only F depends on T, and T dF/dT = TF
+    out.aDDT = -this.lastTF * this.lastEps2I2;
+    const n = this.n;
+    const a = this.mixA;
+    const b = this.mixB;
+    const eps = b * densityMolPerM3;
+    const F = a / (b * R * temperatureK);
+    const I = this.lastI;
+    const I1 = this.lastI1;
+    const logTerm = this.lastLogTerm;
+    const q = eps / (1 - eps);
+    for (let i = 0; i < n; i++) {
+      const bRatio = this.bi[i] / b;
+      dnA[i] =
+        logTerm + bRatio * q - F * ((2 * this.sumA[i]) / a - bRatio) * I - F * bRatio * eps * I1;
+    }
   }
 
   // I, I' and -ln(1 - eps) of the last residualInto call (read by residual() at once)
