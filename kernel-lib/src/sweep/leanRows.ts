@@ -424,9 +424,9 @@ export class CubicTPRows {
       v.Z = 1 + d.aD;
       residualValuesInto(T, d, Rg, v);
     } else if (this.extent === "energies") {
-      energyValuesInto(T, rho, d, this.ig, Rg, v);
+      energyValuesInto(T, rho, d, this.ig, Rg, v, P);
     } else {
-      stateValuesInto(T, rho, d, this.ig, this.M, Rg, v);
+      stateValuesInto(T, rho, d, this.ig, this.M, Rg, v, P);
     }
     // through fields, not arguments: plain numbers passed to a function that is not inlined are
     // boxed on the heap

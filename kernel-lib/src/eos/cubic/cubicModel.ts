@@ -108,6 +108,9 @@ class CubicModelImpl implements CubicModel {
   // at the same composition (an isobar, the bench's states, a sweep's rows) reuses the products
   private readonly w: Float64Array;
   private cacheWValid = false;
+  // the highest Tc among the present components of cacheX, and its index
+  private cacheTcMax = 0;
+  private cacheHeaviest = 0;
 
   constructor(
     family: CubicFamily,
@@ -163,17 +166,21 @@ class CubicModelImpl implements CubicModel {
 
   /** Fills the cache for (T, x) unless it already holds it. */
   private update(T: number, x: readonly number[]): void {
+    // the hit (every call after the first of a state) in a function small enough to be inlined
+    if (T === this.cacheT && this.cacheWValid && this.sameComposition(x)) return;
+    this.refresh(T, x);
+  }
+
+  /** Whether x is the composition of the cache (entry by entry). */
+  private sameComposition(x: readonly number[]): boolean {
+    for (let i = 0; i < this.n; i++) if (x[i] !== this.cacheX[i]) return false;
+    return true;
+  }
+
+  /** The cache for (T, x): alpha functions when T changed, mixing sums always. */
+  private refresh(T: number, x: readonly number[]): void {
     const n = this.n;
-    let sameX = this.cacheWValid;
-    if (sameX) {
-      for (let i = 0; i < n; i++) {
-        if (x[i] !== this.cacheX[i]) {
-          sameX = false;
-          break;
-        }
-      }
-    }
-    if (sameX && T === this.cacheT) return;
+    const sameX = this.cacheWValid && this.sameComposition(x);
     // the temperature part (alpha functions) only when T changed: a flash or a stability test
     // calls at one T with many compositions
     if (T !== this.cacheT) {
@@ -213,6 +220,17 @@ class CubicModelImpl implements CubicModel {
         const row = i * n;
         for (let j = 0; j < n; j++) w[row + j] = x[j] * this.oneMinusK[row + j];
       }
+      // the present component of highest Tc (rangeWarnings)
+      let tcMax = 0;
+      let heaviest = 0;
+      for (let i = 0; i < n; i++) {
+        if (x[i] > 0 && this.tc[i] > tcMax) {
+          tcMax = this.tc[i];
+          heaviest = i;
+        }
+      }
+      this.cacheTcMax = tcMax;
+      this.cacheHeaviest = heaviest;
       this.cacheWValid = true;
     }
     let a = 0;
@@ -708,14 +726,10 @@ class CubicModelImpl implements CubicModel {
     x: readonly number[],
   ): ResultWarning[] | undefined {
     let warnings: ResultWarning[] | undefined;
-    let tcMax = 0;
-    let heaviest = 0;
-    for (let i = 0; i < this.n; i++) {
-      if (x[i] > 0 && this.tc[i] > tcMax) {
-        tcMax = this.tc[i];
-        heaviest = i;
-      }
-    }
+    // the present component of highest Tc, kept with the composition in the cache (checkValidity
+    // has updated it for x)
+    const tcMax = this.cacheTcMax;
+    const heaviest = this.cacheHeaviest;
     if (temperatureK < 0.3 * tcMax || temperatureK > CUBIC_MAX_TEMPERATURE_K) {
       warnings = [
         {
