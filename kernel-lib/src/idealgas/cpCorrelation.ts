@@ -266,6 +266,14 @@ function compilePolynomial(correlation: PolynomialCp): CompiledCorrelation {
       overT: Float64Array.from(overT),
       hOffset: correlationCpIntegral(correlation, STANDARD_TEMPERATURE_K, centre),
       sOffset: correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, centre),
+      // the three coefficient lists interleaved, [a_m, cpIntegral_m, overT_m] for m = 0 .. L-1
+      // (overT has L - 1 entries: its last slot is 0, which leaves its Horner sum unchanged,
+      // since 0 d + 0 = 0 exactly), for one loop that carries the three independent sums
+      fused: Float64Array.from({ length: 3 * a.length }, (_, k) => {
+        const m = Math.floor(k / 3);
+        const which = k % 3;
+        return which === 0 ? a[m] : which === 1 ? cpIntegral[m] : m < overT.length ? overT[m] : 0;
+      }),
     };
   });
   // evaluateWithLog: a_0 ln(T / c) as ln T - ln c from the caller's ln T (no logarithm of its
@@ -275,15 +283,19 @@ function compilePolynomial(correlation: PolynomialCp): CompiledCorrelation {
     let i = 0;
     while (i < last && !(t < compiled[i].maxTemperatureK)) i++;
     const g = compiled[i];
-    const a = g.coefficients;
-    let cp = 0;
-    for (let k = a.length - 1; k >= 0; k--) cp = cp * t + a[k];
-    out.cp = R * cp;
+    // the Horner sums of cp (in T), of the cp integral and of the cp/T integral (in d) in one
+    // loop: the same operations on each sum as the three loops of evaluate, so the same numbers
+    const f = g.fused;
     const d = t - g.centre;
+    let cp = 0;
     let h = 0;
-    for (let m = g.cpIntegral.length - 1; m >= 0; m--) h = h * d + g.cpIntegral[m];
     let s = 0;
-    for (let m = g.overT.length - 1; m >= 0; m--) s = s * d + g.overT[m];
+    for (let k = f.length - 3; k >= 0; k -= 3) {
+      cp = cp * t + f[k];
+      h = h * d + f[k + 1];
+      s = s * d + f[k + 2];
+    }
+    out.cp = R * cp;
     out.hFrom298 = g.hOffset + R * d * h;
     out.sFrom298 = g.sOffset + R * (g.a0 * (lnT - g.lnCentre) + d * s);
   };
