@@ -122,6 +122,10 @@ const CP_RES_ID = 21;
 const CV_RES_ID = 22;
 const QUALITY_ID = 23;
 
+const VAPOR = SWEEP_PHASE_KINDS.vapor;
+const LIQUID = SWEEP_PHASE_KINDS.liquid;
+const SUPERCRITICAL = SWEEP_PHASE_KINDS.supercritical;
+
 /** The columns a kernel writes (index 0 is the first point of the range). */
 interface Columns {
   readonly values: Float64Array[];
@@ -184,17 +188,19 @@ export class CubicTPRows {
   // the fast route (precision "fast", see fastPoint())
   private readonly fast: boolean;
   private lnPressures: Float64Array | undefined;
+  private startWeights: Float64Array | undefined;
   private lnPig = NaN;
   private fastI = -1;
   private fastJ = -1;
-  private fastHas2 = false;
+  /** How many points of the history are known (0 to 4; Z1 and P1 the latest). */
+  private fastKnown = 0;
   private fastZ1 = NaN;
   private fastP1 = NaN;
   private fastZ2 = NaN;
   private fastP2 = NaN;
-  private fastHas3 = false;
   private fastZ3 = NaN;
   private fastP3 = NaN;
+  private fastZ4 = NaN;
   /** The fast route's values by property id (only the ids of its extents are set). */
   private readonly fastValues = new Float64Array(QUALITY_ID + 1).fill(NaN);
   private fRho = NaN;
@@ -326,9 +332,276 @@ export class CubicTPRows {
     // checkPressure's condition (its error comes from the general path)
     if (!(P > 0 && P >= MIN_PRESSURE_PA && P <= MAX_PRESSURE_PA)) return false;
     if (this.fast) {
-      if (this.fastPoint(i, j, k)) return true;
+      if (this.fastPoint(i, j, k, true)) return true;
       this.fastI = -1;
     }
+    return this.exactPoint(i, j, k);
+  }
+
+  /** Whether {@link fastRun} serves this plan (precision "fast" and an extent it computes). */
+  get fastRuns(): boolean {
+    return this.fast;
+  }
+
+  /**
+   * The fast route over points j0 .. j1 - 1 of row i of a grid (pressures[j0 ..]) into the
+   * columns from index k0 on: fastPoint's steps for the one root above B in one loop, with the
+   * row's constants and the start's history in locals and the values written straight into the
+   * columns. The start: Z of the previous points of the row extrapolated in P, through the last
+   * four by a cubic with Lagrange weights taken once per pressure axis (startWeights), through
+   * the last two (linear) while fewer are known; from there Newton's method with fastPoint's
+   * stop (residual at rounding level) and fastPoint's guards unchanged (discriminant, the
+   * deflated quadratic's roots below B, mechanical stability). A point those do not pass goes
+   * to fastPoint's closed form, else to the exact route (exactPoint). Returns how many points
+   * from j0 on were written; the caller takes the next one through point() (the general path:
+   * a bad T or P, no stable root).
+   */
+  fastRun(i: number, j0: number, j1: number, k0: number): number {
+    const T = this.temperatures[i];
+    if (T !== this.rowT ? !this.setRow(T) : !this.rowOk) return 0;
+    const pressures = this.pressures;
+    const weights = this.startWeights ?? this.takeStartWeights();
+    const energies = this.extent === "energies";
+    let lnP = this.lnPressures;
+    if (energies && lnP === undefined) {
+      lnP = pressures.map(Math.log);
+      this.lnPressures = lnP;
+    }
+    const RT = this.RT;
+    const b = this.mixB;
+    const aOverRT2 = this.mixA / this.RT2;
+    const bOverRT = b / RT;
+    const u = this.u;
+    const w = this.w;
+    const d1 = this.d1;
+    const d2 = this.d2;
+    const equalDeltas = d1 === d2;
+    const overD12 = 1 / (d1 - d2);
+    const F = this.F;
+    const TF = this.TF;
+    const FTF = F + TF;
+    const M = this.M;
+    const pure = this.pureLabels;
+    const supercriticalT = T >= this.tc;
+    const pc = this.pc;
+    const rhoc = this.rhoc;
+    const ig = this.ig;
+    const igH = ig.h;
+    const igU = ig.u;
+    // s, a and g of the ideal gas at P: the row's value at its own pressure shifted by ln P
+    const igS = ig.s + R * this.lnPig;
+    const igA = ig.a - RT * this.lnPig;
+    const igG = ig.g - RT * this.lnPig;
+    const fv = this.fastValues;
+    const ids = this.ids;
+    const cols = this.cols;
+    const factor = this.factor;
+    const nCols = ids.length;
+    const phaseCount = this.phaseCount;
+    const phaseKind = this.phaseKind;
+    const errorCode = this.errorCode;
+    fv[T_ID] = T;
+    // the history: Z at the last `known` points of the row (z1 the latest)
+    let known = 0;
+    let z1 = NaN;
+    let z2 = NaN;
+    let z3 = NaN;
+    let z4 = NaN;
+    if (i === this.fastI && j0 === this.fastJ + 1) {
+      known = this.fastKnown;
+      z1 = this.fastZ1;
+      z2 = this.fastZ2;
+      z3 = this.fastZ3;
+      z4 = this.fastZ4;
+    }
+    let j = j0;
+    for (; j < j1; j++) {
+      const k = k0 + (j - j0);
+      const P = pressures[j];
+      // checkPressure's condition (its error comes from the general path)
+      if (!(P > 0 && P >= MIN_PRESSURE_PA && P <= MAX_PRESSURE_PA)) break;
+      const A = aOverRT2 * P;
+      const B = bOverRT * P;
+      const c2 = -(1 + B - u * B);
+      const c1 = A + w * B * B - u * B - u * B * B;
+      const c0 = -(A * B + w * B * B + w * B * B * B);
+      const Q = (c2 * c2 - 3 * c1) * (1 / 9);
+      const Rq = (2 * c2 * c2 * c2 - 9 * c2 * c1 + 27 * c0) * (1 / 54);
+      const R2 = Rq * Rq;
+      const Q3 = Q * Q * Q;
+      const gap = 1e-8 * Math.max(R2, Math.abs(Q3));
+      const one = R2 - Q3 > gap;
+      let Z = NaN;
+      if (known > 0 && (one || R2 - Q3 < -gap)) {
+        let z = z1;
+        if (known >= 4 && weights[4 * j] === weights[4 * j]) {
+          const o = 4 * j;
+          z = weights[o] * z1 + weights[o + 1] * z2 + weights[o + 2] * z3 + weights[o + 3] * z4;
+        } else if (known >= 2) {
+          z += ((z1 - z2) * (P - pressures[j - 1])) / (pressures[j - 1] - pressures[j - 2]);
+        }
+        const ac2 = Math.abs(c2);
+        const ac1 = Math.abs(c1);
+        const ac0 = Math.abs(c0);
+        for (let it = 0; it < 9; it++) {
+          const f = ((z + c2) * z + c1) * z + c0;
+          const az = Math.abs(z);
+          if (Math.abs(f) <= 16 * Number.EPSILON * (((az + ac2) * az + ac1) * az + ac0)) {
+            if (one) Z = z;
+            else {
+              // three real roots: z only when the other two lie below B with a margin
+              const s1 = c2 + z;
+              const s0 = c1 + z * s1;
+              const qB = (B + s1) * B + s0;
+              if (z > B && -s1 / 2 < B && qB > 1e-10 * (B * B + Math.abs(s1) * B + Math.abs(s0))) {
+                Z = z;
+              }
+            }
+            break;
+          }
+          if (it === 8) break;
+          const df = (3 * z + 2 * c2) * z + c1;
+          if (!(df !== 0 && Number.isFinite(df))) break;
+          z -= f / df;
+        }
+      }
+      let rho = NaN;
+      let aD = NaN;
+      let I = NaN;
+      let L = NaN;
+      if (Z > B) {
+        rho = P / (Z * RT);
+        const eps = b * rho;
+        if (eps < 1) {
+          const D1 = 1 + d1 * eps;
+          const D2 = 1 + d2 * eps;
+          const I1 = 1 / (D1 * D2);
+          const I2 = -(d1 * D2 + d2 * D1) * I1 * I1;
+          const q = eps / (1 - eps);
+          aD = q - F * eps * I1;
+          // mechanically stable (stiffnessFromResidual: 1 + 2 aD + aDD > 0)
+          if (1 + 2 * aD + (q * q - F * eps * eps * I2) > 0) {
+            I = equalDeltas ? eps / D1 : Math.log(D1 / D2) * overD12;
+            L = Math.log(Z - B);
+          }
+        }
+      }
+      if (!(L === L)) {
+        // not finished here: fastPoint's closed form, else the exact route
+        this.fastI = known > 0 ? i : -1;
+        this.fastJ = j - 1;
+        this.saveHistory(j, known, z1, z2, z3, z4);
+        if (this.fastPoint(i, j, k, false)) {
+          known = this.fastKnown;
+          z1 = this.fastZ1;
+          z2 = this.fastZ2;
+          z3 = this.fastZ3;
+          z4 = this.fastZ4;
+          continue;
+        }
+        this.fastI = -1;
+        known = 0;
+        if (!this.exactPoint(i, j, k)) break;
+        continue;
+      }
+      const hRes = RT * (aD + TF * I);
+      const uRes = RT * TF * I;
+      const sTP = R * (L + FTF * I);
+      const aTP = -RT * (L + F * I);
+      const gTP = aTP + RT * aD;
+      let kind: number;
+      if (pure) kind = supercriticalT && P >= pc ? SUPERCRITICAL : rho > rhoc ? LIQUID : VAPOR;
+      else {
+        const label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
+        kind = label === "vapor" ? VAPOR : label === "liquid" ? LIQUID : SUPERCRITICAL;
+      }
+      fv[P_ID] = P;
+      fv[RHO_ID] = rho;
+      fv[RHO_MASS_ID] = rho * M;
+      fv[Z_ID] = 1 + aD;
+      fv[H_RES_ID] = hRes;
+      fv[U_RES_ID] = uRes;
+      fv[S_RES_ID] = sTP;
+      fv[A_RES_ID] = aTP;
+      fv[G_RES_ID] = gTP;
+      fv[QUALITY_ID] = kind === VAPOR ? 1 : kind === LIQUID ? 0 : NaN;
+      if (energies) {
+        const lnPj = lnP![j];
+        fv[H_ID] = igH + hRes;
+        fv[U_ID] = igU + uRes;
+        fv[S_ID] = igS - R * lnPj + sTP;
+        fv[A_ID] = igA + RT * lnPj + aTP;
+        fv[G_ID] = igG + RT * lnPj + gTP;
+      }
+      for (let m = 0; m < nCols; m++) cols[m][k] = fv[ids[m]] * factor[m];
+      phaseCount[k] = 1;
+      phaseKind[k] = kind;
+      errorCode[k] = 0;
+      z4 = z3;
+      z3 = z2;
+      z2 = z1;
+      z1 = Z;
+      if (known < 4) known++;
+    }
+    // the history for the next run or point of this row
+    this.fastI = known > 0 ? i : -1;
+    this.fastJ = j - 1;
+    this.saveHistory(j, known, z1, z2, z3, z4);
+    return j - j0;
+  }
+
+  /**
+   * fastRun's history into the fields (fastPoint and the next run of the row go on from it):
+   * `known` points before point j of the row, Z at j - 1 .. j - 4.
+   */
+  private saveHistory(j: number, known: number, z1: number, z2: number, z3: number, z4: number) {
+    const pressures = this.pressures;
+    this.fastKnown = known;
+    this.fastZ1 = z1;
+    this.fastZ2 = z2;
+    this.fastZ3 = z3;
+    this.fastZ4 = z4;
+    this.fastP1 = j >= 1 ? pressures[j - 1] : NaN;
+    this.fastP2 = j >= 2 ? pressures[j - 2] : NaN;
+    this.fastP3 = j >= 3 ? pressures[j - 3] : NaN;
+  }
+
+  /**
+   * The cubic start's Lagrange weights of the pressure axis: for point j (j >= 4) the weights of
+   * the points j - 1 .. j - 4, four per point (NaN where two of the five pressures coincide or
+   * j < 4).
+   */
+  private takeStartWeights(): Float64Array {
+    const p = this.pressures;
+    const wts = new Float64Array(4 * p.length).fill(NaN);
+    for (let j = 4; j < p.length; j++) {
+      const P = p[j];
+      let ok = true;
+      for (let m = 0; m < 4; m++) {
+        const Pm = p[j - 1 - m];
+        let l = 1;
+        for (let n = 0; n < 4; n++) {
+          if (n !== m) {
+            const Pn = p[j - 1 - n];
+            l *= (P - Pn) / (Pm - Pn);
+          }
+        }
+        wts[4 * j + m] = l;
+        if (!Number.isFinite(l)) ok = false;
+      }
+      if (!ok) wts.fill(NaN, 4 * j, 4 * j + 4);
+    }
+    this.startWeights = wts;
+    return wts;
+  }
+
+  /**
+   * The exact route of one point (the row and the pressure checked by the caller); false
+   * (nothing written) when the general path must take it.
+   */
+  private exactPoint(i: number, j: number, k: number): boolean {
+    const T = this.temperatures[i];
+    const P = this.pressures[j];
     const RT = this.RT;
     const b = this.mixB;
     // the Z-cubic of densityRootsInto
@@ -447,14 +720,15 @@ export class CubicTPRows {
    * the other two (the deflated quadratic) lie below B with a margin, so that Z is the one root
    * above B, the root the exact route takes. Otherwise, and at the first point of a row, the
    * closed form (monicCubicRootsInto); with three roots above B the outer two are compared by
-   * g_r/RT (chooseDensityRootInto's rule; a near tie, within 1e-11, goes to the exact route). The
+   * g_r/RT (chooseDensityRootInto's rule; a near tie, within 1e-11, goes to the exact route);
+   * `tryNewton` false (fastRun's Newton did not finish the point) goes to the closed form. The
    * logarithms: ln(Z - B) = ln(1 - b rho) + ln Z (the residual's ln(1 - b rho) and the (T, P)
    * departures' ln Z in one) and ln(D1 / D2); ln(P / P_ig) from a per-pressure table. The
    * formulas of state/properties.ts rearranged: s_r(T,P) = R (ln(Z - B) + (F + T F_T) I),
    * a_r(T,P) = -RT (ln(Z - B) + F I), g_r(T,P) = a_r + RT (Z - 1). False (nothing written) hands
    * the point to the exact route.
    */
-  private fastPoint(i: number, j: number, k: number): boolean {
+  private fastPoint(i: number, j: number, k: number, tryNewton: boolean): boolean {
     const T = this.temperatures[i];
     const P = this.pressures[j];
     const RT = this.RT;
@@ -477,7 +751,7 @@ export class CubicTPRows {
     if (!one && !(R2 - Q3 < -gap)) return false;
     const continued = i === this.fastI && j === this.fastJ + 1;
     let Z = NaN;
-    if (continued) {
+    if (continued && tryNewton) {
       // the start: Z of the previous point, extrapolated in P through the last two or three
       // points of the row (Lagrange)
       const Z1 = this.fastZ1;
@@ -485,12 +759,12 @@ export class CubicTPRows {
       const P2 = this.fastP2;
       const P3 = this.fastP3;
       let z = Z1;
-      if (this.fastHas3 && P1 !== P2 && P2 !== P3 && P1 !== P3) {
+      if (this.fastKnown >= 3 && P1 !== P2 && P2 !== P3 && P1 !== P3) {
         z =
           (Z1 * (P - P2) * (P - P3)) / ((P1 - P2) * (P1 - P3)) +
           (this.fastZ2 * (P - P1) * (P - P3)) / ((P2 - P1) * (P2 - P3)) +
           (this.fastZ3 * (P - P1) * (P - P2)) / ((P3 - P1) * (P3 - P2));
-      } else if (this.fastHas2 && P1 !== P2) {
+      } else if (this.fastKnown >= 2 && P1 !== P2) {
         z += ((Z1 - this.fastZ2) * (P - P1)) / (P1 - P2);
       }
       // Newton until the residual is at rounding level (16 eps of the sum of the terms'
@@ -640,8 +914,8 @@ export class CubicTPRows {
       label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
     }
     fv[QUALITY_ID] = label === "vapor" ? 1 : label === "liquid" ? 0 : NaN;
-    this.fastHas3 = continued && this.fastHas2;
-    this.fastHas2 = continued;
+    this.fastKnown = continued ? Math.min(this.fastKnown + 1, 4) : 1;
+    this.fastZ4 = this.fastZ3;
     this.fastZ3 = this.fastZ2;
     this.fastP3 = this.fastP2;
     this.fastZ2 = this.fastZ1;
