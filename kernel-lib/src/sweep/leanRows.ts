@@ -359,18 +359,23 @@ export class CubicTPRows {
   fastRun(i: number, j0: number, j1: number, k0: number): number {
     const T = this.temperatures[i];
     if (T !== this.rowT ? !this.setRow(T) : !this.rowOk) return 0;
+    if (this.startWeights === undefined) this.startWeights = this.takeStartWeights();
+    if (this.lnPressures === undefined) this.lnPressures = this.pressures.map(Math.log);
+    return this.fastLoop(i, j0, j1, k0);
+  }
+
+  /** fastRun's loop (the row set and checked; kept apart from the row's set-up). */
+  private fastLoop(i: number, j0: number, j1: number, k0: number): number {
+    const T = this.temperatures[i];
     const pressures = this.pressures;
-    const weights = this.startWeights ?? this.takeStartWeights();
+    const weights = this.startWeights!;
     const energies = this.extent === "energies";
-    let lnP = this.lnPressures;
-    if (energies && lnP === undefined) {
-      lnP = pressures.map(Math.log);
-      this.lnPressures = lnP;
-    }
+    const lnP = this.lnPressures!;
     const RT = this.RT;
     const b = this.mixB;
     const aOverRT2 = this.mixA / this.RT2;
     const bOverRT = b / RT;
+    const overB = 1 / b;
     const u = this.u;
     const w = this.w;
     const d1 = this.d1;
@@ -430,9 +435,14 @@ export class CubicTPRows {
       const R2 = Rq * Rq;
       const Q3 = Q * Q * Q;
       const gap = 1e-8 * Math.max(R2, Math.abs(Q3));
-      const one = R2 - Q3 > gap;
+      // (every operation of the loop runs at every point, so that the engine's type feedback
+      // covers it: an operation first met after compilation, such as a three-root point, sent
+      // the compiled loop back, and the recompiled loop was about 1.5 times slower)
+      const disc = R2 - Q3;
+      const one = disc > gap;
+      const three = disc < -gap;
       let Z = NaN;
-      if (known > 0 && (one || R2 - Q3 < -gap)) {
+      if (known > 0 && (one || three)) {
         let z = z1;
         if (known >= 4 && weights[4 * j] === weights[4 * j]) {
           const o = 4 * j;
@@ -443,20 +453,12 @@ export class CubicTPRows {
         const ac2 = Math.abs(c2);
         const ac1 = Math.abs(c1);
         const ac0 = Math.abs(c0);
+        let converged = false;
         for (let it = 0; it < 9; it++) {
           const f = ((z + c2) * z + c1) * z + c0;
           const az = Math.abs(z);
           if (Math.abs(f) <= 16 * Number.EPSILON * (((az + ac2) * az + ac1) * az + ac0)) {
-            if (one) Z = z;
-            else {
-              // three real roots: z only when the other two lie below B with a margin
-              const s1 = c2 + z;
-              const s0 = c1 + z * s1;
-              const qB = (B + s1) * B + s0;
-              if (z > B && -s1 / 2 < B && qB > 1e-10 * (B * B + Math.abs(s1) * B + Math.abs(s0))) {
-                Z = z;
-              }
-            }
+            converged = true;
             break;
           }
           if (it === 8) break;
@@ -464,25 +466,37 @@ export class CubicTPRows {
           if (!(df !== 0 && Number.isFinite(df))) break;
           z -= f / df;
         }
+        // with three real roots z only when the other two (the deflated quadratic
+        // x^2 + s1 x + s0) lie below B with a margin (taken at every point, see above)
+        const s1 = c2 + z;
+        const s0 = c1 + z * s1;
+        const qB = (B + s1) * B + s0;
+        const othersBelow =
+          -s1 / 2 < B && qB > 1e-10 * (B * B + Math.abs(s1) * B + Math.abs(s0)) && z > B;
+        if (converged && (one || othersBelow)) Z = z;
       }
       let rho = NaN;
       let aD = NaN;
       let I = NaN;
       let L = NaN;
       if (Z > B) {
-        rho = P / (Z * RT);
-        const eps = b * rho;
+        // eps = b rho = B / Z and q = eps / (1 - eps) = B / (Z - B) through one division
+        const ZB = Z - B;
+        const t = 1 / (Z * ZB);
+        const eps = B * ZB * t;
+        rho = eps * overB;
         if (eps < 1) {
           const D1 = 1 + d1 * eps;
           const D2 = 1 + d2 * eps;
+          // I1 = 1 / (D1 D2) and D1 / D2 = D1^2 I1 through one division
           const I1 = 1 / (D1 * D2);
           const I2 = -(d1 * D2 + d2 * D1) * I1 * I1;
-          const q = eps / (1 - eps);
+          const q = B * Z * t;
           aD = q - F * eps * I1;
           // mechanically stable (stiffnessFromResidual: 1 + 2 aD + aDD > 0)
           if (1 + 2 * aD + (q * q - F * eps * eps * I2) > 0) {
-            I = equalDeltas ? eps / D1 : Math.log(D1 / D2) * overD12;
-            L = Math.log(Z - B);
+            I = equalDeltas ? eps / D1 : Math.log(D1 * D1 * I1) * overD12;
+            L = Math.log(ZB);
           }
         }
       }
@@ -490,7 +504,16 @@ export class CubicTPRows {
         // not finished here: fastPoint's closed form, else the exact route
         this.fastI = known > 0 ? i : -1;
         this.fastJ = j - 1;
-        this.saveHistory(j, known, z1, z2, z3, z4);
+        // (written here, not through a method: doubles passed to a call that is not inlined
+        // are boxed, and the engine then kept the history boxed at every point)
+        this.fastKnown = known;
+        this.fastZ1 = z1;
+        this.fastZ2 = z2;
+        this.fastZ3 = z3;
+        this.fastZ4 = z4;
+        this.fastP1 = j >= 1 ? pressures[j - 1] : NaN;
+        this.fastP2 = j >= 2 ? pressures[j - 2] : NaN;
+        this.fastP3 = j >= 3 ? pressures[j - 3] : NaN;
         if (this.fastPoint(i, j, k, false)) {
           known = this.fastKnown;
           z1 = this.fastZ1;
@@ -526,7 +549,7 @@ export class CubicTPRows {
       fv[G_RES_ID] = gTP;
       fv[QUALITY_ID] = kind === VAPOR ? 1 : kind === LIQUID ? 0 : NaN;
       if (energies) {
-        const lnPj = lnP![j];
+        const lnPj = lnP[j];
         fv[H_ID] = igH + hRes;
         fv[U_ID] = igU + uRes;
         fv[S_ID] = igS - R * lnPj + sTP;
@@ -546,16 +569,6 @@ export class CubicTPRows {
     // the history for the next run or point of this row
     this.fastI = known > 0 ? i : -1;
     this.fastJ = j - 1;
-    this.saveHistory(j, known, z1, z2, z3, z4);
-    return j - j0;
-  }
-
-  /**
-   * fastRun's history into the fields (fastPoint and the next run of the row go on from it):
-   * `known` points before point j of the row, Z at j - 1 .. j - 4.
-   */
-  private saveHistory(j: number, known: number, z1: number, z2: number, z3: number, z4: number) {
-    const pressures = this.pressures;
     this.fastKnown = known;
     this.fastZ1 = z1;
     this.fastZ2 = z2;
@@ -564,6 +577,7 @@ export class CubicTPRows {
     this.fastP1 = j >= 1 ? pressures[j - 1] : NaN;
     this.fastP2 = j >= 2 ? pressures[j - 2] : NaN;
     this.fastP3 = j >= 3 ? pressures[j - 3] : NaN;
+    return j - j0;
   }
 
   /**
@@ -591,7 +605,6 @@ export class CubicTPRows {
       }
       if (!ok) wts.fill(NaN, 4 * j, 4 * j + 4);
     }
-    this.startWeights = wts;
     return wts;
   }
 
