@@ -26,6 +26,11 @@
  *
  * Extents: "residual" (departures, Z, rho), "energies" (also absolute h, s, u, a, g: the ideal gas
  * of the row, no heat capacities), "all" (also cp, cv, w, jt, kappaT, beta, cpRes, cvRes).
+ *
+ * Precision "fast" (extents "residual" and "energies"): fastRun takes the points of a grid's row in
+ * one loop (a Newton root of the Z-cubic started from the row's previous points), fastPoint one
+ * point (the "pairs" layout, and what the loop's guards send back); both within the stated
+ * tolerance of the single state, not to the last bit.
  */
 import { R } from "../constants.js";
 import type { ResidualDerivativesDraft, ResidualModel } from "../eos/types.js";
@@ -201,6 +206,9 @@ export class CubicTPRows {
   private fastZ3 = NaN;
   private fastP3 = NaN;
   private fastZ4 = NaN;
+  /** fastLoop's columns by property id (undefined: not asked) and their factors. */
+  private readonly fastColumns: (Float64Array | undefined)[] = [];
+  private readonly fastFactors = new Float64Array(QUALITY_ID + 1).fill(1);
   /** The fast route's values by property id (only the ids of its extents are set). */
   private readonly fastValues = new Float64Array(QUALITY_ID + 1).fill(NaN);
   private fRho = NaN;
@@ -246,6 +254,11 @@ export class CubicTPRows {
     const massScale = 1 / this.M;
     this.factor = Float64Array.from(properties, (p) => (mass && PER_AMOUNT.has(p) ? massScale : 1));
     this.cols = columns.values;
+    for (let id = 0; id <= QUALITY_ID; id++) this.fastColumns.push(undefined);
+    ids.forEach((id, m) => {
+      this.fastColumns[id] = columns.values[m];
+      this.fastFactors[id] = this.factor[m];
+    });
     this.phaseCount = columns.phaseCount;
     this.phaseKind = columns.phaseKind;
     this.errorCode = columns.errorCode;
@@ -397,15 +410,39 @@ export class CubicTPRows {
     const igS = ig.s + R * this.lnPig;
     const igA = ig.a - RT * this.lnPig;
     const igG = ig.g - RT * this.lnPig;
-    const fv = this.fastValues;
-    const ids = this.ids;
-    const cols = this.cols;
-    const factor = this.factor;
-    const nCols = ids.length;
+    // the asked columns (undefined: not asked) and their factors (1, or 1 / M on a mass basis)
+    const out = this.fastColumns;
+    const fac = this.fastFactors;
+    const oT = out[T_ID];
+    const oP = out[P_ID];
+    const oRho = out[RHO_ID];
+    const oRhoMass = out[RHO_MASS_ID];
+    const oZ = out[Z_ID];
+    const oH = out[H_ID];
+    const oS = out[S_ID];
+    const oU = out[U_ID];
+    const oA = out[A_ID];
+    const oG = out[G_ID];
+    const oHRes = out[H_RES_ID];
+    const oSRes = out[S_RES_ID];
+    const oURes = out[U_RES_ID];
+    const oARes = out[A_RES_ID];
+    const oGRes = out[G_RES_ID];
+    const oQuality = out[QUALITY_ID];
+    const fH = fac[H_ID];
+    const fS = fac[S_ID];
+    const fU = fac[U_ID];
+    const fA = fac[A_ID];
+    const fG = fac[G_ID];
+    const fHRes = fac[H_RES_ID];
+    const fSRes = fac[S_RES_ID];
+    const fURes = fac[U_RES_ID];
+    const fARes = fac[A_RES_ID];
+    const fGRes = fac[G_RES_ID];
+    const fRho = fac[RHO_ID];
     const phaseCount = this.phaseCount;
     const phaseKind = this.phaseKind;
     const errorCode = this.errorCode;
-    fv[T_ID] = T;
     // the history: Z at the last `known` points of the row (z1 the latest)
     let known = 0;
     let z1 = NaN;
@@ -538,25 +575,30 @@ export class CubicTPRows {
         const label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
         kind = label === "vapor" ? VAPOR : label === "liquid" ? LIQUID : SUPERCRITICAL;
       }
-      fv[P_ID] = P;
-      fv[RHO_ID] = rho;
-      fv[RHO_MASS_ID] = rho * M;
-      fv[Z_ID] = 1 + aD;
-      fv[H_RES_ID] = hRes;
-      fv[U_RES_ID] = uRes;
-      fv[S_RES_ID] = sTP;
-      fv[A_RES_ID] = aTP;
-      fv[G_RES_ID] = gTP;
-      fv[QUALITY_ID] = kind === VAPOR ? 1 : kind === LIQUID ? 0 : NaN;
-      if (energies) {
-        const lnPj = lnP[j];
-        fv[H_ID] = igH + hRes;
-        fv[U_ID] = igU + uRes;
-        fv[S_ID] = igS - R * lnPj + sTP;
-        fv[A_ID] = igA + RT * lnPj + aTP;
-        fv[G_ID] = igG + RT * lnPj + gTP;
-      }
-      for (let m = 0; m < nCols; m++) cols[m][k] = fv[ids[m]] * factor[m];
+      // the energies of the ideal gas at P (NaN for extent "residual", and then not asked)
+      const lnPj = energies ? lnP[j] : NaN;
+      const h = igH + hRes;
+      const sAbs = igS - R * lnPj + sTP;
+      const uAbs = igU + uRes;
+      const aAbs = igA + RT * lnPj + aTP;
+      const gAbs = igG + RT * lnPj + gTP;
+      // (the factors of T, P, rho mass, Z and quality are 1: not amount-specific)
+      if (oT !== undefined) oT[k] = T;
+      if (oP !== undefined) oP[k] = P;
+      if (oRho !== undefined) oRho[k] = rho * fRho;
+      if (oRhoMass !== undefined) oRhoMass[k] = rho * M;
+      if (oZ !== undefined) oZ[k] = 1 + aD;
+      if (oH !== undefined) oH[k] = h * fH;
+      if (oS !== undefined) oS[k] = sAbs * fS;
+      if (oU !== undefined) oU[k] = uAbs * fU;
+      if (oA !== undefined) oA[k] = aAbs * fA;
+      if (oG !== undefined) oG[k] = gAbs * fG;
+      if (oHRes !== undefined) oHRes[k] = hRes * fHRes;
+      if (oSRes !== undefined) oSRes[k] = sTP * fSRes;
+      if (oURes !== undefined) oURes[k] = uRes * fURes;
+      if (oARes !== undefined) oARes[k] = aTP * fARes;
+      if (oGRes !== undefined) oGRes[k] = gTP * fGRes;
+      if (oQuality !== undefined) oQuality[k] = kind === VAPOR ? 1 : kind === LIQUID ? 0 : NaN;
       phaseCount[k] = 1;
       phaseKind[k] = kind;
       errorCode[k] = 0;

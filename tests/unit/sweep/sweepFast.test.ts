@@ -152,6 +152,32 @@ describe('sweep precision "fast" equals stateAtTP within 1e-10', () => {
     }
   });
 
+  it("a mass basis divides the amount-specific columns by M and leaves the others", () => {
+    const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+    const base = {
+      specification: "TP" as const,
+      first: { from: 150, to: 450, count: 5 },
+      second: { from: 1e5, to: 20e6, count: 30 },
+      properties: ["h", "s", "u", "a", "g", "hRes", "sRes", "rho", "rhoMass", "Z", "T", "P"],
+      precision: "fast" as const,
+    } satisfies Parameters<Fluid["sweep"]>[0];
+    const molar = fluid.sweep(base);
+    const mass = fluid.sweep({ ...base, basis: "mass" });
+    // methane, 16.043 g/mol (from memory of the NIST Chemistry WebBook; the component table's M)
+    const M = molar.values.rhoMass![0] / molar.values.rho![0];
+    expect(M).toBeCloseTo(0.016043, 5);
+    for (const p of base.properties) {
+      const perAmount = !["rho", "rhoMass", "Z", "T", "P"].includes(p);
+      for (let k = 0; k < 150; k++) {
+        const expected = perAmount ? molar.values[p]![k] / M : molar.values[p]![k];
+        const got = mass.values[p]![k];
+        expect(Math.abs(got - expected), `${p} at ${k}`).toBeLessThanOrEqual(
+          1e-14 * Math.abs(expected),
+        );
+      }
+    }
+  });
+
   it("a range evaluated in progress chunks equals the whole sweep to the last bit", () => {
     // fastRun's runs end at every chunk; the start's history carries over, so the Newton
     // iterates and the numbers are the same as in one pass
