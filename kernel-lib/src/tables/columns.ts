@@ -6,6 +6,7 @@
 import { phaseWord } from "./phaseWords.js";
 import { InputError } from "../errors.js";
 import { fromSI } from "../units/convert.js";
+import { lookupFlowUnit, type FlowUnitDefinition } from "../units/flow.js";
 import {
   DISPLAY_UNITS,
   resolveUnit,
@@ -20,7 +21,10 @@ export interface NumberColumn {
   key: string;
   /** Column head (plain text, escaped), e.g. "Temperature". */
   label: string;
-  /** Unit to show, any unit of units/ ("degC", "psia", "kJ/kg", ...). Default: from `quantity`. */
+  /**
+   * Unit to show, any unit of units/ ("degC", "psia", "kJ/kg", ...) or a molar or mass flow unit
+   * ("kmol/h", "t/h", ...; the rows then hold mol/s or kg/s). Default: from `quantity`.
+   */
   unit?: string;
   /** Kind of quantity, to pick the unit of the table's unit system when `unit` is absent. */
   quantity?: QuantityKind;
@@ -152,9 +156,12 @@ export function resolveColumns(
       };
     }
     const unitId = c.unit ?? (c.quantity ? resolveUnit(c.quantity, options.units).id : undefined);
-    const dimensionless = unitId === undefined || unitId === "-" || unitId === "%";
-    const scale = unitId === "%" ? 100 : 1;
-    const symbol = unitId === undefined || unitId === "-" ? "" : prettySymbol(unitId);
+    const flow = unitId === undefined ? undefined : flowUnit(unitId);
+    const dimensionless = unitId === undefined || unitId === "-" || unitId === "%" || !!flow;
+    // a flow unit: SI (mol/s or kg/s) per unit
+    const scale = flow ? 1 / flow.factor : unitId === "%" ? 100 : 1;
+    const symbol =
+      unitId === undefined || unitId === "-" ? "" : flow ? flow.symbol : prettySymbol(unitId);
     const format = { digits: c.digits, decimals: c.decimals };
     // Check the unit (and the molar mass for mass units) once, before any row; a per-row molar
     // mass is checked in each cell.
@@ -195,6 +202,16 @@ export function resolveColumns(
       },
     };
   });
+}
+
+/** A molar or mass flow unit (kmol/h, t/h, ...), or undefined for any other unit. */
+function flowUnit(id: string): FlowUnitDefinition | undefined {
+  try {
+    const def = lookupFlowUnit(id);
+    return def.kind === "molar" || def.kind === "mass" ? def : undefined;
+  } catch {
+    return undefined;
+  }
 }
 
 /** The printed symbol of a unit: the charts' pretty form when known (°C, m³/kmol), else as given. */

@@ -15,6 +15,9 @@ export type {
   StateTableOptions,
   StepTableOptions,
   StateColumnName,
+  StepColumnName,
+  CustomStepColumn,
+  TableStep,
   CustomStateColumn,
   TableState,
 } from "./stateTable.js";

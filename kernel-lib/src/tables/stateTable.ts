@@ -10,6 +10,7 @@ import { R } from "../constants.js";
 import type { ReferenceState } from "../idealgas/types.js";
 import { describeReferenceState } from "../idealgas/referenceState.js";
 import { resolveUnit, type QuantityKind, type UnitChoice } from "../charts/displayUnits.js";
+import { lookupFlowUnit, type FlowKind } from "../units/flow.js";
 import type { NumberColumn, ResultTable, TableColumn, TableOptions } from "./columns.js";
 
 /** Named columns of a state table. */
@@ -31,6 +32,9 @@ export type StateColumnName =
   | "jouleThomson"
   | "hResidual"
   | "sResidual"
+  | "uResidual"
+  | "aResidual"
+  | "gResidual"
   | "molarFlow"
   | "massFlow";
 
@@ -54,8 +58,25 @@ export interface StateTableOptions<S = TableState> extends TableOptions {
    * row has two or more phases), density, Z, h, s, and molar and mass flow for streams.
    */
   columns?: readonly (StateColumnName | CustomStateColumn<S>)[];
-  /** Unit of a named column, overriding the default, e.g. { P: "barg", h: "kJ/kg" }. */
+  /**
+   * Unit of a named column, overriding the default, e.g. { P: "barg", h: "kJ/kg" }; the flows
+   * take flow units: { molarFlow: "lbmol/h", massFlow: "t/h" }.
+   */
   unitOf?: Partial<Record<StateColumnName, string>>;
+  /**
+   * Fixed decimals of a named column instead of its default significant figures, e.g.
+   * { P: 1, hResidual: 1 } (a column of one unit then lines up on the decimal point).
+   */
+  decimalsOf?: Partial<Record<StateColumnName, number>>;
+  /** Head of a named column instead of its default, e.g. { T: "Outlet T" }. */
+  labelOf?: Partial<Record<StateColumnName, string>>;
+  /**
+   * The ideal gas the departure columns (hResidual, sResidual, uResidual, aResidual, gResidual)
+   * compare with: at the same T and P (default, the engineering departure, `state.residual`) or
+   * at the same T and density (`state.residualTV`). h and u are the same in both; s, a and g
+   * differ by R ln Z. The note says which one the table shows.
+   */
+  departures?: "same-T-and-P" | "same-T-and-density";
   /** "molar" (default: h in kJ/mol, s in J/(mol K)) or "mass" (kJ/kg, kJ/(kg K)). */
   basis?: "molar" | "mass";
   /** Say the reference state of h and s in the note. Default true. */
@@ -73,6 +94,7 @@ interface NamedColumn {
   text?: true;
 }
 
+// departure heads keep "h − hⁱᵍ" on one line (no-break spaces) in a narrow notebook table
 const NAMED: Readonly<Record<StateColumnName, NamedColumn>> = {
   name: { label: "State", text: true },
   T: { label: "T", kind: "temperature", molar: "degC", decimals: 2 },
@@ -89,16 +111,43 @@ const NAMED: Readonly<Record<StateColumnName, NamedColumn>> = {
   cv: { label: "cv", kind: "molarEntropy", molar: "J/(mol K)", mass: "kJ/(kg K)", digits: 5 },
   w: { label: "Speed of sound", kind: "speed", molar: "m/s", digits: 4 },
   jouleThomson: { label: "Joule-Thomson", molar: "K/bar", digits: 3 },
-  hResidual: { label: "h − hⁱᵍ", kind: "molarEnergy", molar: "kJ/mol", mass: "kJ/kg", digits: 5 },
+  hResidual: {
+    label: "h\u00a0−\u00a0hⁱᵍ",
+    kind: "molarEnergy",
+    molar: "kJ/mol",
+    mass: "kJ/kg",
+    digits: 5,
+  },
+  uResidual: {
+    label: "u\u00a0−\u00a0uⁱᵍ",
+    kind: "molarEnergy",
+    molar: "kJ/mol",
+    mass: "kJ/kg",
+    digits: 5,
+  },
+  aResidual: {
+    label: "a\u00a0−\u00a0aⁱᵍ",
+    kind: "molarEnergy",
+    molar: "kJ/mol",
+    mass: "kJ/kg",
+    digits: 5,
+  },
+  gResidual: {
+    label: "g\u00a0−\u00a0gⁱᵍ",
+    kind: "molarEnergy",
+    molar: "kJ/mol",
+    mass: "kJ/kg",
+    digits: 5,
+  },
   sResidual: {
-    label: "s − sⁱᵍ",
+    label: "s\u00a0−\u00a0sⁱᵍ",
     kind: "molarEntropy",
     molar: "J/(mol K)",
     mass: "kJ/(kg K)",
     digits: 5,
   },
-  molarFlow: { label: "Molar flow, kmol/h", digits: 5 },
-  massFlow: { label: "Mass flow, kg/h", digits: 5 },
+  molarFlow: { label: "Molar flow", molar: "kmol/h", digits: 5 },
+  massFlow: { label: "Mass flow", molar: "kg/h", digits: 5 },
 };
 
 /** Field of the row that holds its molar mass (for mass units). */
@@ -131,7 +180,11 @@ function isObject(v: unknown): v is Record<string, unknown> {
 }
 
 /** Reads a state, an equilibrium or a stream into SI molar row values. */
-function extract(input: unknown, index: number): Extracted {
+function extract(
+  input: unknown,
+  index: number,
+  departures: StateTableOptions["departures"] = "same-T-and-P",
+): Extracted {
   if (!isObject(input)) {
     throw new InputError({
       input: `states[${index}]`,
@@ -180,7 +233,14 @@ function extract(input: unknown, index: number): Extracted {
         ? input.molarMassKgPerMol
         : mass;
   const single = present.length <= 1;
-  const residual = isObject(s.residual) ? (s.residual as Record<string, number>) : undefined;
+  // departures: the state's own, else those of the one phase of a one-phase flash result
+  const residualKey = departures === "same-T-and-density" ? "residualTV" : "residual";
+  const ownResidual = isObject(s[residualKey])
+    ? s[residualKey]
+    : present.length === 1 && isObject(present[0].state)
+      ? (present[0].state as Record<string, unknown>)[residualKey]
+      : undefined;
+  const residual = isObject(ownResidual) ? (ownResidual as Record<string, number>) : undefined;
   const kinds = present.map((p) => p.kind);
   const phaseWord =
     present.length > 1
@@ -224,8 +284,11 @@ function extract(input: unknown, index: number): Extracted {
       single && typeof s.jouleThomsonKPerPa === "number" ? s.jouleThomsonKPerPa : undefined,
     hResidual: single ? residual?.h : undefined,
     sResidual: single ? residual?.s : undefined,
-    molarFlow: flow !== undefined ? flow * 3.6 : undefined,
-    massFlow: flow !== undefined ? flow * molarMass * 3600 : undefined,
+    uResidual: single ? residual?.u : undefined,
+    aResidual: single ? residual?.a : undefined,
+    gResidual: single ? residual?.g : undefined,
+    molarFlow: flow,
+    massFlow: flow !== undefined ? flow * molarMass : undefined,
     [MOLAR_MASS_KEY]: molarMass,
     warnings,
   };
@@ -251,7 +314,11 @@ function namedColumn(
       received: name,
     });
   }
-  if (spec.text) return { key: name, label: name === "name" ? nameLabel : spec.label, text: true };
+  const label = options.labelOf?.[name] ?? (name === "name" ? nameLabel : spec.label);
+  if (spec.text) return { key: name, label, text: true };
+  // a flow unit asked for: of the column's kind (molar or mass)
+  if (name === "molarFlow" || name === "massFlow")
+    flowUnitOf(options.unitOf?.[name], name === "molarFlow" ? "molar" : "mass", name);
   const mass = options.basis === "mass" && spec.mass !== undefined;
   const kind = spec.kind && mass ? massKind(spec.kind) : spec.kind;
   const unit =
@@ -263,15 +330,34 @@ function namedColumn(
         : spec.molar);
   const column: NumberColumn = {
     key: name,
-    label: spec.label,
+    label,
     unit: unit === undefined || unit === "-" ? undefined : unit,
     molarMassKey: MOLAR_MASS_KEY,
   };
   // an overridden unit keeps the column's digits unless the default counted decimals of degC
-  if (spec.decimals !== undefined && unit === (mass ? spec.mass : spec.molar))
+  if (options.decimalsOf?.[name] !== undefined) column.decimals = options.decimalsOf[name];
+  else if (spec.decimals !== undefined && unit === (mass ? spec.mass : spec.molar))
     column.decimals = spec.decimals;
   else column.digits = spec.digits ?? 5;
   return column;
+}
+
+/** Checks that a flow unit asked for a flow column is of its kind (molar or mass). */
+function flowUnitOf(
+  unit: string | undefined,
+  kind: FlowKind,
+  column: "molarFlow" | "massFlow",
+): void {
+  if (unit === undefined) return;
+  const def = lookupFlowUnit(unit);
+  if (def.kind !== kind) {
+    throw new InputError({
+      input: `options.unitOf.${column}`,
+      unit: "-",
+      validRange: `a ${kind} flow unit (${kind === "molar" ? "mol/s, kmol/h, lbmol/h" : "kg/s, kg/h, t/h, lb/h"})`,
+      received: unit,
+    });
+  }
 }
 
 function massKind(kind: QuantityKind): QuantityKind {
@@ -341,7 +427,16 @@ export function stateTable<S extends TableState>(
       received: names,
     });
   }
-  const extracted = states.map((s, i) => extract(s, i));
+  const departures = options.departures ?? "same-T-and-P";
+  if (departures !== "same-T-and-P" && departures !== "same-T-and-density") {
+    throw new InputError({
+      input: "options.departures",
+      unit: "-",
+      validRange: '"same-T-and-P" or "same-T-and-density"',
+      received: departures,
+    });
+  }
+  const extracted = states.map((s, i) => extract(s, i, departures));
   const rows = extracted.map((e, i) => {
     const row = { ...e.row };
     if (names !== undefined) row.name = names[i];
@@ -380,8 +475,12 @@ export function stateTable<S extends TableState>(
     return "text" in column ? column : { molarMassKey: MOLAR_MASS_KEY, ...column };
   });
   const showsEnergy = chosen.some((c) => c === "h" || c === "s" || c === "u" || c === "g");
+  const showsDepartures = chosen.some((c) => typeof c === "string" && c.endsWith("Residual"));
   const note = [
     options.note,
+    showsDepartures
+      ? `Departures: real minus the ideal gas at the same T and ${departures === "same-T-and-P" ? "P" : "density"}.`
+      : undefined,
     options.referenceNote === false || !showsEnergy
       ? undefined
       : referenceNote(extracted.map((e) => e.referenceState)),
@@ -395,8 +494,8 @@ export function stateTable<S extends TableState>(
   };
 }
 
-/** What a step result looks like to {@link stepTable}. */
-interface StepLike {
+/** What a step result looks like to {@link stepTable}: a valve, compressor, turbine, ... result. */
+export interface TableStep {
   kind: string;
   inlets: readonly unknown[];
   outlet: unknown;
@@ -406,25 +505,82 @@ interface StepLike {
   warnings?: readonly unknown[];
 }
 
+/** Named columns of a step table. */
+export type StepColumnName =
+  | "name"
+  | "inletT"
+  | "inletP"
+  | "outletT"
+  | "outletP"
+  | "changeT"
+  | "phase"
+  | "vaporFraction"
+  | "power"
+  | "duty"
+  | "balance"
+  | "pressureRatio"
+  | "isentropicEfficiency"
+  | "polytropicEfficiency"
+  | "polytropicExponent"
+  | "polytropicHead"
+  | "isentropicHead"
+  | "molarFlow"
+  | "massFlow";
+
+/** A step column of your own: a table column plus how to get its SI value from a step. */
+export type CustomStepColumn<S = TableStep> = TableColumn & {
+  /** The cell's value from the step result (SI: K, Pa, W, J/mol). */
+  value: (step: S, index: number) => unknown;
+};
+
 /** Options of {@link stepTable}. */
-export interface StepTableOptions extends TableOptions {
+export interface StepTableOptions<S = TableStep> extends TableOptions {
   /** One name per step. Default: the inlet stream's name, else the step's kind. */
   names?: readonly string[];
-  /** Unit of T, P or power/duty, e.g. { T: "degF", P: "barg", power: "MW" }. */
-  unitOf?: { T?: string; P?: string; power?: string };
+  /** Head of the name column. Default "Step". */
+  nameLabel?: string;
+  /** Fixed decimals of a named column instead of its default, e.g. { power: 0, outletT: 1 }. */
+  decimalsOf?: Partial<Record<StepColumnName, number>>;
+  /** Head of a named column instead of its default, e.g. { outletT: "Discharge T" }. */
+  labelOf?: Partial<Record<StepColumnName, string>>;
+  /**
+   * Columns in order, by name or your own. Default: name, inlet and outlet T and P, the change of
+   * T, the outlet phase and vapour fraction, power and duty (when a step has some) and the energy
+   * balance. Compressor and turbine steps also offer pressureRatio, isentropicEfficiency,
+   * polytropicEfficiency, polytropicExponent, polytropicHead and isentropicHead; every step the
+   * first inlet's molarFlow and massFlow.
+   */
+  columns?: readonly (StepColumnName | CustomStepColumn<S>)[];
+  /**
+   * Units, e.g. { T: "degF", P: "barg", power: "MW", head: "J/mol", massFlow: "t/h" }.
+   * Defaults: degC, bar, kW, kJ/kg (per kg of the first inlet), kmol/h, kg/h.
+   */
+  unitOf?: {
+    T?: string;
+    P?: string;
+    power?: string;
+    head?: string;
+    molarFlow?: string;
+    massFlow?: string;
+  };
 }
 
 /**
  * One row per process step (valve, compressor, turbine, heater, ...): inlet and outlet T and P,
  * the outlet's phases and vapour fraction, power or duty into the fluid, and the energy balance
- * the step closed. For the streams of one step in full, use stateTable([...r.inlets, ...r.outlets]).
- * @example showTable(stepTable([valveA, valveB], { names: ["PV-2104", "PV-4312"] }))
+ * the step closed; or the columns you pick (heads, efficiencies, flows, your own). For the
+ * streams of one step in full, use stateTable([...r.inlets, ...r.outlets]).
+ * @example
+ * ```ts
+ * showTable(stepTable([valveA, valveB], { names: ["PV-2104", "PV-4312"] }));
+ * showTable(stepTable(train.stages, { columns: ["name", "outletT", "pressureRatio", "polytropicHead", "power"] }));
+ * ```
  */
-export function stepTable(
-  steps: readonly StepLike[] | StepLike,
-  options: StepTableOptions = {},
+export function stepTable<S extends TableStep>(
+  steps: readonly S[] | S,
+  options: StepTableOptions<S> = {},
 ): ResultTable {
-  const list = (Array.isArray(steps) ? steps : [steps]) as readonly StepLike[];
+  const list = (Array.isArray(steps) ? steps : [steps]) as readonly S[];
   list.forEach((r, i) => {
     if (!isObject(r) || !Array.isArray(r.inlets) || r.inlets.length === 0 || !isObject(r.outlet)) {
       throw new InputError({
@@ -443,7 +599,13 @@ export function stepTable(
       received: options.names,
     });
   }
-  const rows = list.map((r, i) => {
+  flowUnitOf(options.unitOf?.molarFlow, "molar", "molarFlow");
+  flowUnitOf(options.unitOf?.massFlow, "mass", "massFlow");
+  const numberOf = (r: object, key: string): number | undefined => {
+    const v = (r as Record<string, unknown>)[key];
+    return typeof v === "number" ? v : undefined;
+  };
+  const rows: Record<string, unknown>[] = list.map((r, i) => {
     const inlet = extract(r.inlets[0], i).row;
     const outlet = extract(r.outlet, i).row;
     const inletName = (r.inlets[0] as { name?: unknown }).name;
@@ -459,30 +621,99 @@ export function stepTable(
       power: r.powerW,
       duty: r.dutyW,
       balance: r.check?.energyBalanceRelativeError,
+      pressureRatio: numberOf(r, "pressureRatio") ?? (outlet.P as number) / (inlet.P as number),
+      isentropicEfficiency: numberOf(r, "isentropicEfficiency"),
+      polytropicEfficiency: numberOf(r, "polytropicEfficiency"),
+      polytropicExponent: numberOf(r, "polytropicExponent"),
+      polytropicHead: numberOf(r, "polytropicHeadJPerMol"),
+      isentropicHead: numberOf(r, "isentropicHeadJPerMol"),
+      // flows of the first inlet, mol/s and kg/s
+      molarFlow: inlet.molarFlow,
+      massFlow: inlet.massFlow,
+      [MOLAR_MASS_KEY]: inlet[MOLAR_MASS_KEY],
       warnings: [...(r.warnings ?? []), ...(outlet.warnings as unknown[])],
     };
   });
   const T = options.unitOf?.T ?? "degC";
   const P = options.unitOf?.P ?? "bar";
   const W = options.unitOf?.power ?? "kW";
+  const head = options.unitOf?.head ?? "kJ/kg";
   const num = (key: string, label: string, unit: string | undefined, digits: number) =>
     ({ key, label, ...(unit ? { unit } : {}), digits }) as NumberColumn;
   // temperatures in degC or K to 0.01 K, like stateTable's; other units to 5 figures
   const temperature = (key: string, label: string, unit: string): NumberColumn =>
     unit === "degC" || unit === "K" ? { key, label, unit, decimals: 2 } : num(key, label, unit, 5);
-  const columns: TableColumn[] = [
-    { key: "name", label: "Step", text: true },
-    temperature("inletT", "Inlet T", T),
-    num("inletP", "Inlet P", P, 5),
-    temperature("outletT", "Outlet T", T),
-    num("outletP", "Outlet P", P, 5),
-    { ...temperature("changeT", "Change of T", T === "degC" ? "K" : T), difference: true },
-    { key: "phase", label: "Outlet phase", text: true },
-    num("vaporFraction", "Outlet vapour fraction", undefined, 4),
+  const named: Record<StepColumnName, TableColumn> = {
+    name: { key: "name", label: options.nameLabel ?? "Step", text: true },
+    inletT: temperature("inletT", "Inlet T", T),
+    inletP: num("inletP", "Inlet P", P, 5),
+    outletT: temperature("outletT", "Outlet T", T),
+    outletP: num("outletP", "Outlet P", P, 5),
+    changeT: { ...temperature("changeT", "Change of T", T === "degC" ? "K" : T), difference: true },
+    phase: { key: "phase", label: "Outlet phase", text: true },
+    vaporFraction: num("vaporFraction", "Outlet vapour fraction", undefined, 4),
+    power: num("power", "Power into fluid", W, 5),
+    duty: num("duty", "Duty into fluid", W, 5),
+    balance: num("balance", "Energy balance closed to (relative)", undefined, 1),
+    pressureRatio: num("pressureRatio", "Pressure ratio", undefined, 4),
+    isentropicEfficiency: num("isentropicEfficiency", "Isentropic efficiency", undefined, 4),
+    polytropicEfficiency: num("polytropicEfficiency", "Polytropic efficiency", undefined, 4),
+    polytropicExponent: num("polytropicExponent", "Polytropic exponent", undefined, 4),
+    polytropicHead: {
+      ...num("polytropicHead", "Polytropic head", head, 5),
+      molarMassKey: MOLAR_MASS_KEY,
+    },
+    isentropicHead: {
+      ...num("isentropicHead", "Isentropic head", head, 5),
+      molarMassKey: MOLAR_MASS_KEY,
+    },
+    molarFlow: num("molarFlow", "Inlet molar flow", options.unitOf?.molarFlow ?? "kmol/h", 5),
+    massFlow: num("massFlow", "Inlet mass flow", options.unitOf?.massFlow ?? "kg/h", 5),
+  };
+  const chosen: readonly (StepColumnName | CustomStepColumn<S>)[] = options.columns ?? [
+    "name",
+    "inletT",
+    "inletP",
+    "outletT",
+    "outletP",
+    "changeT",
+    "phase",
+    "vaporFraction",
     // power and duty only when a step has some (a valve has neither)
-    ...(rows.some((r) => !!r.power) ? [num("power", "Power into fluid", W, 5)] : []),
-    ...(rows.some((r) => !!r.duty) ? [num("duty", "Duty into fluid", W, 5)] : []),
-    num("balance", "Energy balance closed to (relative)", undefined, 1),
+    ...(rows.some((r) => !!r.power) ? (["power"] as const) : []),
+    ...(rows.some((r) => !!r.duty) ? (["duty"] as const) : []),
+    "balance",
   ];
+  const columns: TableColumn[] = chosen.map((c, j) => {
+    if (typeof c === "string") {
+      const column = named[c];
+      if (column === undefined) {
+        throw new InputError({
+          input: "options.columns",
+          unit: "-",
+          validRange: `column names ${Object.keys(named).join(", ")}, or { key, label, value } objects`,
+          received: c,
+        });
+      }
+      const label = options.labelOf?.[c] ?? column.label;
+      const decimals = options.decimalsOf?.[c];
+      if (decimals === undefined || "text" in column) return { ...column, label };
+      const { digits: _digits, ...rest } = column;
+      return { ...rest, label, decimals };
+    }
+    if (!isObject(c) || typeof c.value !== "function") {
+      throw new InputError({
+        input: `options.columns[${j}]`,
+        unit: "-",
+        validRange: "a column name or { key, label, value: (step, index) => value, ... }",
+        received: c,
+      });
+    }
+    const { value, ...column } = c;
+    rows.forEach((row, i) => {
+      row[column.key] = value(list[i], i);
+    });
+    return "text" in column ? column : { molarMassKey: MOLAR_MASS_KEY, ...column };
+  });
   return { rows, columns, options: tableOptionsOf(options) };
 }

@@ -6,6 +6,8 @@ import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js
 import { sharedReferenceState } from "../../../kernel-lib/src/fluid/sharedReferenceState.js";
 import { defineStream } from "../../../kernel-lib/src/process/stream.js";
 import { valve } from "../../../kernel-lib/src/process/valve.js";
+import { compressorStage } from "../../../kernel-lib/src/process/compressor.js";
+import { R } from "../../../kernel-lib/src/constants.js";
 import { stateTable, stepTable } from "../../../kernel-lib/src/tables/stateTable.js";
 import { tableHtml } from "../../../kernel-lib/src/tables/tableHtml.js";
 import { tableText } from "../../../kernel-lib/src/tables/tableText.js";
@@ -101,8 +103,16 @@ describe("stateTable: one call, sensible columns and units", () => {
     });
     const t = stateTable([stream, stream.state]);
     expect(t.rows[0].name).toBe("fuel gas");
-    expect(t.rows[0].molarFlow).toBeCloseTo(100, 9);
-    expect(t.rows[0].massFlow).toBeCloseTo(100 * stream.molarMassKgPerMol * 1000, 6);
+    // SI in the rows (mol/s, kg/s) like every other column; kmol/h and kg/h in the table
+    expect(t.rows[0].molarFlow).toBeCloseTo(100 / 3.6, 9);
+    expect(t.rows[0].massFlow).toBeCloseTo((100 / 3.6) * stream.molarMassKgPerMol, 9);
+    const [head, units, , row] = cells(
+      tableText(stateTable([stream], { columns: ["molarFlow", "massFlow"] })),
+    );
+    expect(head).toEqual(["Molar flow", "Mass flow"]);
+    expect(units).toEqual(["kmol/h", "kg/h"]);
+    expect(Number(row[0])).toBeCloseTo(100, 9);
+    expect(Number(row[1])).toBeCloseTo(100 * stream.molarMassKgPerMol * 1000, 1);
     expect(t.rows[1].h).toBeCloseTo(vapour.molar.h, 6);
     expect(t.columns.map((c) => c.key)).toEqual(expect.arrayContaining(["molarFlow", "massFlow"]));
     expect(tableHtml(t)).toContain("fuel gas");
@@ -133,6 +143,104 @@ describe("stateTable: one call, sensible columns and units", () => {
     );
     expect(() => stateTable([{ T: 300 }])).toThrow(/temperatureK and pressurePa/);
     expect(() => stateTable("x" as never)).toThrow(InputError);
+  });
+});
+
+describe("stateTable: departures in either convention, flows in any flow unit", () => {
+  const columns = ["hResidual", "uResidual", "sResidual", "aResidual", "gResidual"] as const;
+
+  it("departures from the ideal gas at the same T and P, or at the same T and density", () => {
+    const state = vapour.phases[0].state;
+    const tp = stateTable([state], { columns });
+    const tv = stateTable([state], { columns, departures: "same-T-and-density" });
+    expect(tp.rows[0].gResidual).toBe(state.residual.g);
+    expect(tv.rows[0].aResidual).toBe(state.residualTV.a);
+    // h and u do not depend on the convention; s differs by R ln Z (ideal gas at the same P has
+    // density rho Z), as a thermodynamics text derives it (e.g. Smith, Van Ness and Abbott)
+    expect(tv.rows[0].hResidual).toBeCloseTo(tp.rows[0].hResidual as number, 9);
+    expect(tv.rows[0].uResidual).toBeCloseTo(tp.rows[0].uResidual as number, 9);
+    expect((tp.rows[0].sResidual as number) - (tv.rows[0].sResidual as number)).toBeCloseTo(
+      R * Math.log(state.Z),
+      9,
+    );
+    expect(tp.options.note).toMatch(/ideal gas at the same T and P\./);
+    expect(tv.options.note).toMatch(/ideal gas at the same T and density\./);
+    // a one-phase flash result gives its phase's departures; a split gives none (a dash)
+    expect(stateTable([vapour], { columns }).rows[0].gResidual).toBe(state.residual.g);
+    expect(stateTable([split], { columns }).rows[0].hResidual).toBeUndefined();
+    const [head, units] = cells(
+      tableText(stateTable([state], { columns, unitOf: { uResidual: "J/mol" } })),
+    );
+    // no-break spaces: the head does not wrap inside "h − hⁱᵍ"
+    expect(head).toEqual(["hh", "uu", "ss", "aa", "gg"].map(([p, q]) => `${p}\u00a0−\u00a0${q}ⁱᵍ`));
+    expect(units).toEqual(["kJ/mol", "J/mol", "J/(mol·K)", "kJ/mol", "kJ/mol"]);
+    expect(() => stateTable([state], { departures: "same-T" as never })).toThrow(
+      /options\.departures/,
+    );
+  });
+
+  it("fixed decimals of a named column instead of significant figures", () => {
+    const t = stateTable([vapour.phases[0].state], {
+      columns: ["P", "hResidual"],
+      unitOf: { hResidual: "J/mol" },
+      decimalsOf: { P: 1, hResidual: 1 },
+    });
+    const row = cells(tableText(t)).at(-2)!; // the last line is the note
+    expect(row).toEqual(["20.0", vapour.phases[0].state.residual.h.toFixed(1)]);
+    const steps = [
+      valve(
+        defineStream({ fluid: gas, z: x, T: 310, P: 40e5, flow: { value: 1, unit: "kmol/h" } }),
+        { outletPressurePa: 7e5 },
+      ),
+    ];
+    const s = stepTable(steps, {
+      columns: ["outletP", "pressureRatio"],
+      decimalsOf: { outletP: 2, pressureRatio: 3 },
+    });
+    expect(cells(tableText(s)).at(-1)).toEqual(["7.00", (7 / 40).toFixed(3)]);
+  });
+
+  it("heads of named columns can be renamed", () => {
+    const t = stateTable([vapour], {
+      columns: ["name", "T", "h"],
+      labelOf: { name: "Point", T: "Outlet T" },
+    });
+    expect(cells(tableText(t))[0]).toEqual(["Point", "Outlet T", "h"]);
+    const s = stepTable(
+      [
+        valve(
+          defineStream({ fluid: gas, z: x, T: 310, P: 40e5, flow: { value: 1, unit: "kmol/h" } }),
+          { outletPressurePa: 7e5 },
+        ),
+      ],
+      {
+        columns: ["outletT", "pressureRatio"],
+        labelOf: { outletT: "Discharge T", pressureRatio: "Ratio" },
+        decimalsOf: { pressureRatio: 2 },
+      },
+    );
+    expect(cells(tableText(s))[0]).toEqual(["Discharge T", "Ratio"]);
+  });
+
+  it("flow columns in the flow unit asked for; a flow unit of the wrong kind is refused", () => {
+    const stream = defineStream({
+      fluid: gas,
+      z: x,
+      T: 320,
+      P: 20e5,
+      flow: { value: 100, unit: "kmol/h" },
+    });
+    const t = stateTable([stream], {
+      columns: ["molarFlow", "massFlow"],
+      unitOf: { molarFlow: "mol/s", massFlow: "t/h" },
+    });
+    const [, units, , row] = cells(tableText(t));
+    expect(units).toEqual(["mol/s", "t/h"]);
+    expect(Number(row[0])).toBeCloseTo(100e3 / 3600, 2); // 1 kmol/h = 1000/3600 mol/s
+    expect(Number(row[1])).toBeCloseTo(100 * stream.molarMassKgPerMol, 4); // kmol/h x kg/mol = t/h
+    expect(() => stateTable([stream], { unitOf: { massFlow: "kmol/h" } })).toThrow(
+      /options\.unitOf\.massFlow/,
+    );
   });
 });
 
@@ -176,6 +284,85 @@ describe("stepTable: one row per process step", () => {
     expect(cells(tableText(t))[1][1]).toBe("barg");
     expect(() => stepTable(steps, { names: ["one"] })).toThrow(InputError);
     expect(() => stepTable([{} as never])).toThrow(/steps\[0\]/);
+  });
+});
+
+describe("stepTable: columns of your choice (compressor heads, efficiencies, flows, your own)", () => {
+  const suction = defineStream({
+    fluid: gas,
+    z: [0.9, 0.1],
+    T: 310,
+    P: 5e5,
+    flow: { value: 36, unit: "kmol/h" },
+    name: "K-1 suction",
+  });
+  const stage = compressorStage(suction, { outletPressurePa: 15e5, polytropicEfficiency: 0.75 });
+
+  it("named compressor columns read the step's own results, head per kg of the inlet", () => {
+    const t = stepTable([stage], {
+      columns: [
+        "name",
+        "pressureRatio",
+        "polytropicHead",
+        "polytropicExponent",
+        "isentropicEfficiency",
+        "power",
+        "massFlow",
+      ],
+      unitOf: { massFlow: "t/h" },
+    });
+    const row = t.rows[0];
+    expect(row.pressureRatio).toBe(stage.pressureRatio);
+    expect(row.isentropicEfficiency).toBe(stage.isentropicEfficiency);
+    expect(row.polytropicExponent).toBe(stage.polytropicExponent);
+    const [head, units, , cellsOfRow] = cells(tableText(t));
+    expect(head).toEqual([
+      "Step",
+      "Pressure ratio",
+      "Polytropic head",
+      "Polytropic exponent",
+      "Isentropic efficiency",
+      "Power into fluid",
+      "Inlet mass flow",
+    ]);
+    expect(units).toEqual(["kJ/kg", "kW", "t/h"]);
+    // kJ/kg = J/mol / (kg/mol) / 1000, by hand
+    expect(Number(cellsOfRow[2])).toBeCloseTo(
+      stage.polytropicHeadJPerMol! / suction.molarMassKgPerMol / 1000,
+      2,
+    );
+    expect(Number(cellsOfRow[5])).toBeCloseTo(stage.powerW! / 1000, 2);
+    // 36 kmol/h x M kg/mol = 36 M t/h
+    expect(Number(cellsOfRow[6])).toBeCloseTo(36 * suction.molarMassKgPerMol, 4);
+  });
+
+  it("a valve has no head (a dash), a column of your own, and a bad column is refused", () => {
+    const v = valve(suction, { outletPressurePa: 2e5 });
+    const t = stepTable([stage, v], {
+      nameLabel: "Item",
+      columns: [
+        "name",
+        "polytropicHead",
+        "pressureRatio",
+        {
+          key: "dT",
+          label: "Outlet T − inlet T",
+          unit: "K",
+          difference: true,
+          digits: 4,
+          value: (r) => r.outlet.state.temperatureK - r.inlets[0].state.temperatureK,
+        },
+      ],
+    });
+    const lines = cells(tableText(t));
+    expect(lines[0][0]).toBe("Item");
+    expect(lines[4][1]).toBe("–");
+    expect(t.rows[1].pressureRatio).toBeCloseTo(2e5 / 5e5, 12);
+    expect(t.rows[1].dT).toBe(v.outlet.state.temperatureK - v.inlets[0].state.temperatureK);
+    expect(() => stepTable([stage], { columns: ["head" as never] })).toThrow(/pressureRatio/);
+    expect(() => stepTable([stage], { columns: [{ key: "k", label: "k" } as never] })).toThrow(
+      /options\.columns\[0\]/,
+    );
   });
 });
 

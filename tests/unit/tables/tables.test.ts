@@ -118,6 +118,23 @@ describe("tableHtml", () => {
     expect(html).toContain(">psia</span>");
   });
 
+  it("molar and mass flow units: rows in mol/s or kg/s, the column converts", () => {
+    const flows = [{ n: 1, m: 1 }];
+    const html = tableHtml(flows, [
+      { key: "n", label: "Molar flow", unit: "kmol/h" },
+      { key: "m", label: "Mass flow", unit: "t/h" },
+      { key: "m", label: "Mass flow", unit: "lb/h", digits: 6 },
+    ]);
+    expect(html).toContain(">3.6000</td>"); // 1 mol/s = 3600 mol/h = 3.6 kmol/h
+    expect(html).toContain(">t/h</span>"); // and 1 kg/s = 3.6 t/h
+    // NIST SP 811 (2008) App. B.8: 1 lb = 0.45359237 kg; 3600 / 0.45359237 = 7936.64 lb/h
+    expect(html).toContain(">7936.64</td>");
+    // a volume flow needs a molar volume the column does not have: refused as an unknown unit
+    expect(() => tableHtml(flows, [{ key: "m", label: "V", unit: "m3/h" }])).toThrow(
+      UnknownNameError,
+    );
+  });
+
   it("refuses bad columns, mass units without molar mass, non-numbers", () => {
     expect(() => tableHtml(rows, [])).toThrow(InputError);
     expect(() => tableHtml(rows, [{ key: "hJPerMol", label: "h", unit: "kJ/kg" }])).toThrow(
