@@ -337,18 +337,124 @@ export class CubicTPRows {
   /**
    * The point of temperature `temperatures[i]` (K) and pressure `pressures[j]` (Pa) of the plan
    * into index `k` of the columns; false (nothing written) when the general path must take it.
+   * `exactOnly`: the exact route even with precision "fast" (fastLoop's last resort).
    */
-  point(i: number, j: number, k: number): boolean {
+  point(i: number, j: number, k: number, exactOnly = false): boolean {
     const T = this.temperatures[i];
     const P = this.pressures[j];
     if (T !== this.rowT ? !this.setRow(T) : !this.rowOk) return false;
     // checkPressure's condition (its error comes from the general path)
     if (!(P > 0 && P >= MIN_PRESSURE_PA && P <= MAX_PRESSURE_PA)) return false;
-    if (this.fast) {
+    if (this.fast && !exactOnly) {
       if (this.fastPoint(i, j, k, true)) return true;
       this.fastI = -1;
     }
-    return this.exactPoint(i, j, k);
+    const RT = this.RT;
+    const b = this.mixB;
+    // the Z-cubic of densityRootsInto
+    const A = (this.mixA * P) / this.RT2;
+    const B = (b * P) / RT;
+    const u = this.u;
+    const w = this.w;
+    const c = this.coefficients;
+    c[0] = -(1 + B - u * B);
+    c[1] = A + w * B * B - u * B - u * B * B;
+    c[2] = -(A * B + w * B * B + w * B * B * B);
+    const zRoots = this.zRoots;
+    const count = monicCubicRootsInto(c, zRoots);
+    const rhos = this.rhos;
+    let n = 0;
+    for (let m = count - 1; m >= 0; m--) {
+      const Z = zRoots[m];
+      if (Z > B) {
+        const rho = P / (Z * RT);
+        if (n === 0 || rho !== rhos[n - 1]) rhos[n++] = rho;
+      }
+    }
+    // the choice of chooseDensityRootInto ("stable"), derivatives of residualInto
+    const compareGibbs = n > 1;
+    const all = this.all;
+    const d1 = this.d1;
+    const d2 = this.d2;
+    const F = this.F;
+    const TF = this.TF;
+    let stable = 0;
+    let index = 0;
+    let rho = NaN;
+    let chosen: ResidualDerivativesDraft | undefined;
+    let free = this.ra;
+    let best = Infinity;
+    for (let m = 0; m < n; m++) {
+      const r = free;
+      const eps = b * rhos[m];
+      if (!(eps < 1)) return false;
+      const D1 = 1 + d1 * eps;
+      const D2 = 1 + d2 * eps;
+      const I1 = 1 / (D1 * D2);
+      const g1 = d1 / D1 + d2 / D2;
+      const I2 = -g1 * I1;
+      const oneMinusEps = 1 - eps;
+      const q = eps / oneMinusEps;
+      r.aD = q - F * eps * I1;
+      r.aDD = q * q - F * eps * eps * I2;
+      // a mechanically unstable root is dropped before its logarithms are taken
+      if (!(dPdRho(T, r, this.gasConstant) > 0)) continue;
+      const I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
+      const logTerm = -Math.log1p(-eps);
+      r.a = logTerm - F * I;
+      r.aT = -TF * I;
+      if (all) {
+        const I3 = (g1 * g1 + (d1 * d1) / (D1 * D1) + (d2 * d2) / (D2 * D2)) * I1;
+        r.aTT = -this.TTF * I;
+        r.aDT = -TF * eps * I1;
+        r.aDDD = 2 * q * q * q - F * eps * eps * eps * I3;
+      }
+      let take = stable === 0;
+      if (compareGibbs) {
+        const g = residualGibbsTP(r);
+        if (stable === 0 || g < best) {
+          best = g;
+          take = true;
+        }
+      }
+      if (take) {
+        index = stable;
+        rho = rhos[m];
+        chosen = r;
+        free = r === this.ra ? this.rb : this.ra;
+      }
+      stable++;
+    }
+    if (chosen === undefined) return false;
+    const d = chosen;
+    // the label (state/phaseLabel.ts)
+    let label: PhaseLabel;
+    if (stable > 1 && index === 0) label = "vapor";
+    else if (stable > 1 && index === stable - 1) label = "liquid";
+    else if (this.pureLabels) {
+      label = T >= this.tc && P >= this.pc ? "supercritical" : rho > this.rhoc ? "liquid" : "vapor";
+    } else {
+      const position =
+        stable === 1 ? "only" : index === 0 ? "lowest" : index === stable - 1 ? "highest" : "only";
+      label = phaseLabel(this.model, T, P, rho, this.x, position, 1 + d.aD);
+    }
+    const v = this.v;
+    const Rg = this.Rg;
+    if (this.extent === "residual") {
+      v.Z = 1 + d.aD;
+      residualValuesInto(T, d, Rg, v);
+    } else if (this.extent === "energies") {
+      energyValuesInto(T, rho, d, this.ig, Rg, v);
+    } else {
+      stateValuesInto(T, rho, d, this.ig, this.M, Rg, v);
+    }
+    // through fields, not arguments: plain numbers passed to a function that is not inlined are
+    // boxed on the heap
+    this.pointT = T;
+    this.pointP = P;
+    this.pointRho = rho;
+    this.write(k, label);
+    return true;
   }
 
   /** Whether {@link fastRun} serves this plan (precision "fast" and an extent it computes). */
@@ -365,7 +471,7 @@ export class CubicTPRows {
    * the last two (linear) while fewer are known; from there Newton's method with fastPoint's
    * stop (residual at rounding level) and fastPoint's guards unchanged (discriminant, the
    * deflated quadratic's roots below B, mechanical stability). A point those do not pass goes
-   * to fastPoint's closed form, else to the exact route (exactPoint). Returns how many points
+   * to fastPoint's closed form, else to the exact route (point). Returns how many points
    * from j0 on were written; the caller takes the next one through point() (the general path:
    * a bad T or P, no stable root).
    */
@@ -561,7 +667,7 @@ export class CubicTPRows {
         }
         this.fastI = -1;
         known = 0;
-        if (!this.exactPoint(i, j, k)) break;
+        if (!this.point(i, j, k, true)) break;
         continue;
       }
       const hRes = RT * (aD + TF * I);
@@ -648,121 +754,6 @@ export class CubicTPRows {
       if (!ok) wts.fill(NaN, 4 * j, 4 * j + 4);
     }
     return wts;
-  }
-
-  /**
-   * The exact route of one point (the row and the pressure checked by the caller); false
-   * (nothing written) when the general path must take it.
-   */
-  private exactPoint(i: number, j: number, k: number): boolean {
-    const T = this.temperatures[i];
-    const P = this.pressures[j];
-    const RT = this.RT;
-    const b = this.mixB;
-    // the Z-cubic of densityRootsInto
-    const A = (this.mixA * P) / this.RT2;
-    const B = (b * P) / RT;
-    const u = this.u;
-    const w = this.w;
-    const c = this.coefficients;
-    c[0] = -(1 + B - u * B);
-    c[1] = A + w * B * B - u * B - u * B * B;
-    c[2] = -(A * B + w * B * B + w * B * B * B);
-    const zRoots = this.zRoots;
-    const count = monicCubicRootsInto(c, zRoots);
-    const rhos = this.rhos;
-    let n = 0;
-    for (let m = count - 1; m >= 0; m--) {
-      const Z = zRoots[m];
-      if (Z > B) {
-        const rho = P / (Z * RT);
-        if (n === 0 || rho !== rhos[n - 1]) rhos[n++] = rho;
-      }
-    }
-    // the choice of chooseDensityRootInto ("stable"), derivatives of residualInto
-    const compareGibbs = n > 1;
-    const all = this.all;
-    const d1 = this.d1;
-    const d2 = this.d2;
-    const F = this.F;
-    const TF = this.TF;
-    let stable = 0;
-    let index = 0;
-    let rho = NaN;
-    let chosen: ResidualDerivativesDraft | undefined;
-    let free = this.ra;
-    let best = Infinity;
-    for (let m = 0; m < n; m++) {
-      const r = free;
-      const eps = b * rhos[m];
-      if (!(eps < 1)) return false;
-      const D1 = 1 + d1 * eps;
-      const D2 = 1 + d2 * eps;
-      const I1 = 1 / (D1 * D2);
-      const g1 = d1 / D1 + d2 / D2;
-      const I2 = -g1 * I1;
-      const oneMinusEps = 1 - eps;
-      const q = eps / oneMinusEps;
-      r.aD = q - F * eps * I1;
-      r.aDD = q * q - F * eps * eps * I2;
-      // a mechanically unstable root is dropped before its logarithms are taken
-      if (!(dPdRho(T, r, this.gasConstant) > 0)) continue;
-      const I = d1 === d2 ? eps / D1 : Math.log(D1 / D2) / (d1 - d2);
-      const logTerm = -Math.log1p(-eps);
-      r.a = logTerm - F * I;
-      r.aT = -TF * I;
-      if (all) {
-        const I3 = (g1 * g1 + (d1 * d1) / (D1 * D1) + (d2 * d2) / (D2 * D2)) * I1;
-        r.aTT = -this.TTF * I;
-        r.aDT = -TF * eps * I1;
-        r.aDDD = 2 * q * q * q - F * eps * eps * eps * I3;
-      }
-      let take = stable === 0;
-      if (compareGibbs) {
-        const g = residualGibbsTP(r);
-        if (stable === 0 || g < best) {
-          best = g;
-          take = true;
-        }
-      }
-      if (take) {
-        index = stable;
-        rho = rhos[m];
-        chosen = r;
-        free = r === this.ra ? this.rb : this.ra;
-      }
-      stable++;
-    }
-    if (chosen === undefined) return false;
-    const d = chosen;
-    // the label (state/phaseLabel.ts)
-    let label: PhaseLabel;
-    if (stable > 1 && index === 0) label = "vapor";
-    else if (stable > 1 && index === stable - 1) label = "liquid";
-    else if (this.pureLabels) {
-      label = T >= this.tc && P >= this.pc ? "supercritical" : rho > this.rhoc ? "liquid" : "vapor";
-    } else {
-      const position =
-        stable === 1 ? "only" : index === 0 ? "lowest" : index === stable - 1 ? "highest" : "only";
-      label = phaseLabel(this.model, T, P, rho, this.x, position, 1 + d.aD);
-    }
-    const v = this.v;
-    const Rg = this.Rg;
-    if (this.extent === "residual") {
-      v.Z = 1 + d.aD;
-      residualValuesInto(T, d, Rg, v);
-    } else if (this.extent === "energies") {
-      energyValuesInto(T, rho, d, this.ig, Rg, v);
-    } else {
-      stateValuesInto(T, rho, d, this.ig, this.M, Rg, v);
-    }
-    // through fields, not arguments: plain numbers passed to a function that is not inlined are
-    // boxed on the heap
-    this.pointT = T;
-    this.pointP = P;
-    this.pointRho = rho;
-    this.write(k, label);
-    return true;
   }
 
   /**
