@@ -161,6 +161,19 @@ export interface ResidualModel {
     out: ResidualDerivativesDraft,
   ): void;
   /**
+   * Optional (the state layer's (T, P) path): {@link residual} with composition derivatives,
+   * every derivative (aDDT included) written into `out` and d(n alpha_r)/dn_i into
+   * `dnA[0 .. n - 1]` (`out.dnA` is left alone); no allocation. Must give the same numbers as
+   * `residual(T, rho, x, { composition: true })`.
+   */
+  residualWithCompositionInto?(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+    out: ResidualDerivativesDraft,
+    dnA: number[],
+  ): void;
+  /**
    * Optional (added by the engine issue, additive): the pressure P(T, rho, x) in Pa alone, for
    * models where the full residual is expensive (pressure-function models integrate); root searches
    * use it when present. Must equal rho R T (1 + aD).

@@ -59,8 +59,10 @@ export function idealGasFromCorrelation(
       return;
     checkTemperatureRange(component.id, method, range, t, options);
   };
+  const compiled = compileCorrelation(correlation);
   const unchecked: UncheckedPure = {
-    evaluate: compileCorrelation(correlation).evaluate,
+    evaluate: compiled.evaluate,
+    evaluateWithLog: compiled.evaluateWithLog,
     absoluteEntropy298: component.absoluteEntropyJPerMolK,
   };
   const pure: CorrelationIdealGas = Object.freeze({

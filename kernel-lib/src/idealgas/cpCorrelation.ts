@@ -144,45 +144,92 @@ export interface CpAndIntegrals {
   sFrom298: number;
 }
 
+/** A correlation compiled for repeated evaluation (see {@link compileCorrelation}). */
+export interface CompiledCorrelation {
+  /** Writes cp°(T) and the integrals from 298.15 K into `out` (no allocation, no range check). */
+  evaluate(temperatureK: number, out: CpAndIntegrals): void;
+  /**
+   * The same with ln T supplied by the caller (a mixture takes the logarithm once for all its
+   * components); `lnT` must be Math.log(temperatureK).
+   */
+  evaluateWithLog(temperatureK: number, lnT: number, out: CpAndIntegrals): void;
+}
+
+/**
+ * Aly-Lee with one exponential per hyperbolic argument: for u = |C/T| (or |E/T|) and
+ * e = e^-u, q = 1 - e^2 (formed as 1 - e^2 for u > 1/2, where e^2 < 0.37 and the difference
+ * loses at most about one bit, and as -expm1(-u) (1 + e) with e = 1 + expm1(-u) below, where
+ * 1 - e^2 would cancel):
+ *   x/sinh x = 2u e / q,  x coth x = u (1 + e^2) / q,  ln|sinh x| = u + ln(q / 2),
+ *   y/cosh y = 2u e / p,  y tanh y = u q / p,  ln cosh y = u + ln(p / 2),  p = 1 + e^2.
+ * Two exponentials and two logarithms per correlation (ln T comes from the caller). Against the
+ * form with separate exp and expm1 of -u and -2u (this file before 2026-12-04) the rounding
+ * differs by a few units in the last place (tests/unit/idealgas/compileCorrelation.test.ts
+ * holds the two within 1e-13 relative over the correlation's range).
+ */
+const ALY_LEE_SPLIT = 0.5;
+
 /**
  * A correlation compiled for repeated evaluation: `evaluate(T, out)` writes cp° and the integrals
  * from 298.15 K into `out` (no allocation, no range check). Polynomials use the functions above
- * unchanged. Aly-Lee shares its transcendental functions between cp, h and s (two exponentials
- * per hyperbolic argument instead of a sinh, cosh, tanh, exp and log each) and keeps its
- * antiderivatives at 298.15 K as constants; it agrees with the functions above to rounding.
+ * unchanged. Aly-Lee shares its transcendental functions between cp, h and s (one exponential
+ * per hyperbolic argument, see ALY_LEE_SPLIT) and keeps its antiderivatives at 298.15 K as
+ * constants; it agrees with the functions above to rounding.
  */
-export function compileCorrelation(correlation: CpCorrelation): {
-  evaluate(temperatureK: number, out: CpAndIntegrals): void;
-} {
+export function compileCorrelation(correlation: CpCorrelation): CompiledCorrelation {
   if (correlation.form === "polynomial") return compilePolynomial(correlation);
   const c = correlation;
+  const A = c.aJPerMolK;
+  const B = c.bJPerMolK;
+  const D = c.dJPerMolK;
+  const absC = Math.abs(c.cK);
+  const absE = Math.abs(c.eK);
+  const noB = c.cK === 0;
   const scratch: CpAndIntegrals = { cp: 0, hFrom298: 0, sFrom298: 0 };
-  const alyLeeAll = (t: number, out: CpAndIntegrals, h0: number, s0: number): void => {
-    // x = C/T: with ex = e^-|x| and m = 1 - e^-2|x| (expm1: exact for small x),
-    // x/sinh x = 2|x| ex / m, x coth x = |x| (1 + ex^2) / m, ln|sinh x| = |x| + ln(m / 2)
-    const ax = Math.abs(c.cK / t);
-    const ex = Math.exp(-ax);
-    const mx = -Math.expm1(-2 * ax);
-    const xOverSinhX = ax === 0 ? 1 : (2 * ax * ex) / mx;
-    const xCothX = ax === 0 ? 1 : (ax * (1 + ex * ex)) / mx;
-    // y = E/T: y/cosh y = 2|y| ey / (1 + ey^2), y tanh y = |y| my / (1 + ey^2), ln cosh y = |y| + ln((1 + ey^2) / 2)
-    const ay = Math.abs(c.eK / t);
-    const ey = Math.exp(-ay);
+  const alyLeeAll = (t: number, lnT: number, out: CpAndIntegrals, h0: number, s0: number): void => {
+    // x = C/T (see ALY_LEE_SPLIT for the formulas)
+    const ax = absC / t;
+    let ex: number;
+    let qx: number;
+    if (ax > ALY_LEE_SPLIT) {
+      ex = Math.exp(-ax);
+      qx = 1 - ex * ex;
+    } else {
+      const m = Math.expm1(-ax);
+      ex = 1 + m;
+      qx = -m * (1 + ex);
+    }
+    const xOverSinhX = ax === 0 ? 1 : (2 * ax * ex) / qx;
+    const xCothX = ax === 0 ? 1 : (ax * (1 + ex * ex)) / qx;
+    // y = E/T
+    const ay = absE / t;
+    let ey: number;
+    let qy: number;
+    if (ay > ALY_LEE_SPLIT) {
+      ey = Math.exp(-ay);
+      qy = 1 - ey * ey;
+    } else {
+      const m = Math.expm1(-ay);
+      ey = 1 + m;
+      qy = -m * (1 + ey);
+    }
     const py = 1 + ey * ey;
     const yOverCoshY = (2 * ay * ey) / py;
-    const yTanhY = (ay * -Math.expm1(-2 * ay)) / py;
-    const lnT = Math.log(t);
-    const bPart = c.cK === 0 ? lnT : xCothX - (ax + Math.log(mx / 2));
+    const yTanhY = (ay * qy) / py;
+    const bPart = noB ? lnT : xCothX - (ax + Math.log(qx / 2));
     const dPart = yTanhY - (ay + Math.log(py / 2));
-    out.cp =
-      c.aJPerMolK + c.bJPerMolK * xOverSinhX * xOverSinhX + c.dJPerMolK * yOverCoshY * yOverCoshY;
-    out.hFrom298 = c.aJPerMolK * t + c.bJPerMolK * t * xCothX - c.dJPerMolK * t * yTanhY - h0;
-    out.sFrom298 = c.aJPerMolK * lnT + c.bJPerMolK * bPart - c.dJPerMolK * dPart - s0;
+    out.cp = A + B * xOverSinhX * xOverSinhX + D * yOverCoshY * yOverCoshY;
+    out.hFrom298 = A * t + B * t * xCothX - D * t * yTanhY - h0;
+    out.sFrom298 = A * lnT + B * bPart - D * dPart - s0;
   };
-  alyLeeAll(STANDARD_TEMPERATURE_K, scratch, 0, 0);
+  const t298 = STANDARD_TEMPERATURE_K;
+  alyLeeAll(t298, Math.log(t298), scratch, 0, 0);
   const h298 = scratch.hFrom298;
   const s298 = scratch.sFrom298;
-  return { evaluate: (t, out) => alyLeeAll(t, out, h298, s298) };
+  return {
+    evaluate: (t, out) => alyLeeAll(t, Math.log(t), out, h298, s298),
+    evaluateWithLog: (t, lnT, out) => alyLeeAll(t, lnT, out, h298, s298),
+  };
 }
 
 /**
@@ -193,9 +240,7 @@ export function compileCorrelation(correlation: CpCorrelation): {
  * computed once), plus the exact integrals from 298.15 K to c. One Horner pass each, and no
  * cancellation for T near c, like the power-difference form above.
  */
-function compilePolynomial(correlation: PolynomialCp): {
-  evaluate(temperatureK: number, out: CpAndIntegrals): void;
-} {
+function compilePolynomial(correlation: PolynomialCp): CompiledCorrelation {
   const segments = correlation.segments;
   const last = segments.length - 1;
   const compiled = segments.map((segment, i) => {
@@ -215,16 +260,47 @@ function compilePolynomial(correlation: PolynomialCp): {
       maxTemperatureK: segment.maxTemperatureK,
       coefficients: Float64Array.from(a),
       centre,
+      lnCentre: Math.log(centre),
       a0: a.length > 0 ? a[0] : 0,
       cpIntegral: Float64Array.from(cpIntegral),
       overT: Float64Array.from(overT),
       hOffset: correlationCpIntegral(correlation, STANDARD_TEMPERATURE_K, centre),
       sOffset: correlationCpOverTIntegral(correlation, STANDARD_TEMPERATURE_K, centre),
+      // the three coefficient lists interleaved, [a_m, cpIntegral_m, overT_m] for m = 0 .. L-1
+      // (overT has L - 1 entries: its last slot is 0, which leaves its Horner sum unchanged,
+      // since 0 d + 0 = 0 exactly), for one loop that carries the three independent sums
+      fused: Float64Array.from({ length: 3 * a.length }, (_, k) => {
+        const m = Math.floor(k / 3);
+        const which = k % 3;
+        return which === 0 ? a[m] : which === 1 ? cpIntegral[m] : m < overT.length ? overT[m] : 0;
+      }),
     };
   });
+  // evaluateWithLog: a_0 ln(T / c) as ln T - ln c from the caller's ln T (no logarithm of its
+  // own; absolute error about 1e-15 R a_0 where log1p(d / c) would be exact near c)
+  const evaluateWithLog = (t: number, lnT: number, out: CpAndIntegrals): void => {
+    // the same segment choice as segmentFor (components/cpValue.ts), so cp is bit-for-bit correlationCp
+    let i = 0;
+    while (i < last && !(t < compiled[i].maxTemperatureK)) i++;
+    const g = compiled[i];
+    // the Horner sums of cp (in T), of the cp integral and of the cp/T integral (in d) in one
+    // loop: the same operations on each sum as the three loops of evaluate, so the same numbers
+    const f = g.fused;
+    const d = t - g.centre;
+    let cp = 0;
+    let h = 0;
+    let s = 0;
+    for (let k = f.length - 3; k >= 0; k -= 3) {
+      cp = cp * t + f[k];
+      h = h * d + f[k + 1];
+      s = s * d + f[k + 2];
+    }
+    out.cp = R * cp;
+    out.hFrom298 = g.hOffset + R * d * h;
+    out.sFrom298 = g.sOffset + R * (g.a0 * (lnT - g.lnCentre) + d * s);
+  };
   return {
     evaluate(t, out) {
-      // the same segment choice as segmentFor (components/cpValue.ts), so cp is bit-for-bit correlationCp
       let i = 0;
       while (i < last && !(t < compiled[i].maxTemperatureK)) i++;
       const g = compiled[i];
@@ -240,6 +316,7 @@ function compilePolynomial(correlation: PolynomialCp): {
       out.hFrom298 = g.hOffset + R * d * h;
       out.sFrom298 = g.sOffset + R * (g.a0 * Math.log1p(d / g.centre) + d * s);
     },
+    evaluateWithLog,
   };
 }
 

@@ -156,13 +156,15 @@ export function idealGasMixture(
       lastPressurePa = pressurePa;
     }
     const pressureTerm = lastPressureTerm;
+    // ln T once for every component's correlation
+    const lnT = Math.log(temperatureK);
     for (let i = 0; i < list.length; i++) {
       const xi = x[i];
       if (xi === 0) continue;
       const f = fast[i];
       if (!(f.usable && temperatureK >= f.min && temperatureK <= f.max)) return false;
       const v = scratch;
-      f.unchecked.evaluate(temperatureK, v);
+      f.unchecked.evaluateWithLog(temperatureK, lnT, v);
       h += xi * (f.h0 + v.hFrom298 - f.hShift);
       // ideal mixing, R ln x_i (0 for a pure component, without the logarithm), kept per x_i
       let mixing: number;

@@ -11,6 +11,8 @@ import type { CpAndIntegrals } from "./cpCorrelation.js";
 export interface UncheckedPure {
   /** Writes cp°(T), h°(T) - h°(298.15 K) and s°(T) - s°(298.15 K) (at 1 bar) into `out`. */
   evaluate(temperatureK: number, out: CpAndIntegrals): void;
+  /** The same with lnT = Math.log(temperatureK) from the caller (one logarithm per mixture). */
+  evaluateWithLog(temperatureK: number, lnT: number, out: CpAndIntegrals): void;
   /** Third-law entropy at 298.15 K and 1 bar, J/(mol K) (NaN when unknown). */
   readonly absoluteEntropy298: number;
 }

@@ -105,6 +105,12 @@ function lnPhiOf(d: ResidualDerivatives, lnZ: number): number[] {
   return out;
 }
 
+/** ln phi_i = dnA_i - ln Z written over dnA (an array the caller owns); returns it. */
+function lnPhiInPlace(dnA: number[], lnZ: number): number[] {
+  for (let i = 0; i < dnA.length; i++) dnA[i] = dnA[i] - lnZ;
+  return dnA;
+}
+
 /**
  * ln phi_i of a state from its residual derivatives (which must carry dnA): dnA_i - ln Z, NaN where
  * Z <= 0 (the formula of the header, for callers that need the fugacities alone).
@@ -221,10 +227,45 @@ export function residualValuesInto(
   out.lnZ = parts.lnZ;
 }
 
+// ln(P / P_ig) of the last (T, P) state and its two pressures: states at one pressure (an isobar,
+// a series of states of one stream) take the logarithm once
+let shiftP = NaN;
+let shiftPig = NaN;
+let shiftLn = NaN;
+const LN_ONE_HALF = -Math.LN2;
+
+/**
+ * ln(rho R T / P_ig), the move of the ideal gas from P_ig to the state's density (see the header).
+ * A (T, P) state (`givenPressurePa` defined) with Z > 1/2 takes it as ln(P / P_ig) - ln Z
+ * (rho R T Z = P), which saves a logarithm. Only there: Z = 1 + aD of a dense state comes from
+ * a cancelling sum (aD near -1, whose rounding made ln Z differ by 2e-12 at Z = 0.004), while
+ * for Z > 1/2 its rounding is a few ulp; the two forms then differ by the rounding of rho and Z
+ * (tests/unit/state/pressureShift.test.ts: within 1e-13 of max(|value|, R or R T) for the
+ * absolute s, a and g).
+ */
+function lnPressureShiftOf(
+  rho: number,
+  RT: number,
+  idealPressurePa: number,
+  givenPressurePa: number | undefined,
+  lnZ: number,
+): number {
+  if (givenPressurePa === undefined || !(lnZ > LN_ONE_HALF)) {
+    return Math.log((rho * RT) / idealPressurePa);
+  }
+  if (givenPressurePa !== shiftP || idealPressurePa !== shiftPig) {
+    shiftLn = Math.log(givenPressurePa / idealPressurePa);
+    shiftP = givenPressurePa;
+    shiftPig = idealPressurePa;
+  }
+  return shiftLn - lnZ;
+}
+
 /**
  * The pressure, Z, the departures and the absolute h, s, u, a, g at T (K), rho (mol/m3) into
  * `out` (no heat capacities or derivatives: the sweeps' extent for energies alone; stateValuesInto
- * adds the rest to these very numbers). Reads aD, a and aT of the derivatives.
+ * adds the rest to these very numbers). Reads aD, a and aT of the derivatives. `givenPressurePa`:
+ * the pressure a (T, P) state was asked at (as assembleStateOf), undefined for a (T, rho) state.
  */
 export function energyValuesInto(
   temperatureK: number,
@@ -233,6 +274,7 @@ export function energyValuesInto(
   ig: IdealGasProperties,
   gasConstant: number,
   out: StateValues,
+  givenPressurePa?: number,
 ): void {
   const Rg = gasConstant;
   const T = temperatureK;
@@ -240,7 +282,7 @@ export function energyValuesInto(
   const RT = Rg * T;
   residualValuesInto(T, d, Rg, out);
   // absolute: ideal gas at the same T and density plus the TV residuals
-  const lnPressureShift = Math.log((rho * RT) / ig.pressurePa);
+  const lnPressureShift = lnPressureShiftOf(rho, RT, ig.pressurePa, givenPressurePa, out.lnZ);
   out.pressurePa = pressureFromResidual(T, rho, d.aD, Rg);
   out.Z = 1 + d.aD;
   out.h = ig.h + out.hRes;
@@ -253,7 +295,8 @@ export function energyValuesInto(
 /**
  * Every property of the header at T (K), rho (mol/m3) from the residual derivatives and the ideal
  * gas (any pressure), into `out`: assembleState builds its record from these very numbers, so a
- * sweep that fills `out` gets the single-state values to the last bit.
+ * sweep that fills `out` gets the single-state values to the last bit. `givenPressurePa` as
+ * energyValuesInto.
  */
 export function stateValuesInto(
   temperatureK: number,
@@ -263,11 +306,12 @@ export function stateValuesInto(
   molarMassKgPerMol: number,
   gasConstant: number,
   out: StateValues,
+  givenPressurePa?: number,
 ): void {
   const Rg = gasConstant;
   const T = temperatureK;
   const rho = densityMolPerM3;
-  energyValuesInto(T, rho, d, ig, Rg, out);
+  energyValuesInto(T, rho, d, ig, Rg, out, givenPressurePa);
   const P = out.pressurePa;
   // derivatives and heat capacities
   const dPdr = dPdRho(T, d, Rg);
@@ -313,7 +357,8 @@ export function assembleState(input: StateInputs): FluidState {
 /**
  * {@link assembleState} with the inputs as arguments (the state layer's hot path: no inputs
  * record per state). `Rg` is the model's gas constant, J/(mol K); `givenPressurePa` the pressure
- * a (T, P) state was asked at, reported as given (StateInputs.pressurePa).
+ * a (T, P) state was asked at, reported as given (StateInputs.pressurePa); `ownDnA`: `d.dnA` is
+ * a fresh array of the caller's that may become the state's lnPhi (overwritten in place).
  */
 export function assembleStateOf(
   T: number,
@@ -328,6 +373,7 @@ export function assembleStateOf(
   Rg: number,
   given: readonly ResultWarning[] | undefined,
   givenPressurePa?: number,
+  ownDnA = false,
 ): FluidState {
   // the arithmetic of stateValuesInto (residualParts, energyValuesInto) written out with locals,
   // operation for operation, so a sweep that fills StateValues gets these very numbers (the sweep
@@ -342,7 +388,7 @@ export function assembleStateOf(
   const sTP = sTV + Rg * lnZ;
   const aTP = aTV - RT * lnZ;
   const gTP = RT * gibbsOverRTFromLnZ(d.a, d.aD, lnZ);
-  const lnPressureShift = Math.log((rho * RT) / ig.pressurePa);
+  const lnPressureShift = lnPressureShiftOf(rho, RT, ig.pressurePa, givenPressurePa, lnZ);
   const P = pressureFromResidual(T, rho, d.aD, Rg);
   const Z = 1 + d.aD;
   const h = ig.h + hRes;
@@ -359,7 +405,8 @@ export function assembleStateOf(
   const w2 = ((cp / cv) * dPdr) / M;
   const kappaT = 1 / (rho * dPdr);
   const beta = kappaT * dPdT;
-  const lnPhi = lnPhiOf(d, lnZ);
+  // the caller's fresh dnA array becomes ln phi in place (the same subtraction, no second array)
+  const lnPhi = ownDnA && d.dnA ? lnPhiInPlace(d.dnA as number[], lnZ) : lnPhiOf(d, lnZ);
   // one division for the seven specific values (a multiply differs from dividing by at most 1 ulp)
   const perMass = 1 / M;
   let warnings: readonly ResultWarning[] = NO_WARNINGS;

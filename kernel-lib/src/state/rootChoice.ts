@@ -150,3 +150,59 @@ export function chooseDensityRootInto(
   out.secondGibbsOverRT = second;
   return residual;
 }
+
+/** A model with the allocation-free residual entries of the (T, P) path. */
+export type ModelWithResidualInto = ResidualModel & {
+  residualInto: NonNullable<ResidualModel["residualInto"]>;
+  residualWithCompositionInto: NonNullable<ResidualModel["residualWithCompositionInto"]>;
+};
+
+/**
+ * The choice of {@link chooseDensityRoot} (the same comparisons on the same numbers, so the same
+ * root) without a derivatives object per root: a single root is evaluated once, with its
+ * composition derivatives, into `chosen`; several are compared through
+ * {@link chooseDensityRootInto} (scratch records, no composition derivatives) and the chosen one
+ * evaluated again with them into `chosen`. `dnA` (length n) receives d(n alpha_r)/dn_i and is
+ * set as `chosen.dnA`. Returns `chosen`, or undefined when no root is mechanically stable.
+ */
+export function chooseDensityRootWithComposition(
+  model: ModelWithResidualInto,
+  temperatureK: number,
+  rhos: Float64Array,
+  rootCount: number,
+  x: readonly number[],
+  request: PhaseRequest,
+  out: RootChoice,
+  scratchA: ResidualDerivativesDraft,
+  scratchB: ResidualDerivativesDraft,
+  chosen: ResidualDerivativesDraft,
+  dnA: number[],
+): ResidualDerivatives | undefined {
+  if (rootCount === 1) {
+    const rho = rhos[0];
+    model.residualWithCompositionInto(temperatureK, rho, x, chosen, dnA);
+    chosen.dnA = dnA;
+    const stable = dPdRho(temperatureK, chosen, model.gasConstant) > 0;
+    out.densityMolPerM3 = stable ? rho : NaN;
+    out.index = 0;
+    out.stableCount = stable ? 1 : 0;
+    out.lowestGibbsOverRT = Infinity;
+    out.secondGibbsOverRT = Infinity;
+    return stable ? (chosen as ResidualDerivatives) : undefined;
+  }
+  const r = chooseDensityRootInto(
+    model,
+    temperatureK,
+    rhos,
+    rootCount,
+    x,
+    request,
+    out,
+    scratchA,
+    scratchB,
+  );
+  if (r === undefined) return undefined;
+  model.residualWithCompositionInto(temperatureK, out.densityMolPerM3, x, chosen, dnA);
+  chosen.dnA = dnA;
+  return chosen as ResidualDerivatives;
+}

@@ -14,13 +14,18 @@ import {
   PhaseUnavailableError,
   type ResultWarning,
 } from "../errors.js";
-import type { ResidualDerivatives } from "../eos/types.js";
+import type { ResidualDerivatives, ResidualDerivativesDraft, ResidualModel } from "../eos/types.js";
 import type { IdealGasProperties, ReferenceState } from "../idealgas/types.js";
 import { leanIdealGasOf, type IdealGasValues, type LeanIdealGas } from "../idealgas/leanMixture.js";
 import { assembleStateOf, dPdRho, pressureFromResidual, residualGibbsTP } from "./properties.js";
 import { checkComposition, checkDensity, checkPressure, checkTemperature } from "./checkInputs.js";
 import { densityRootsOf, type DensityRootOptions } from "./findDensityRoots.js";
-import { chooseDensityRoot, emptyRootChoice } from "./rootChoice.js";
+import {
+  chooseDensityRoot,
+  chooseDensityRootWithComposition,
+  emptyRootChoice,
+  type ModelWithResidualInto,
+} from "./rootChoice.js";
 import { phaseLabel } from "./phaseLabel.js";
 import { MAX_PRESSURE_PA } from "./physicalLimits.js";
 import type { FluidBinding, FluidState, PhaseLabel, PhaseRequest } from "./types.js";
@@ -89,6 +94,26 @@ const NO_EXTRA: readonly ExtraWarning[] = Object.freeze([]);
 const choice = emptyRootChoice();
 // the density roots of the current stateAtTP call (models with densityRootsInto), read at once
 const ROOTS = new Float64Array(3);
+// derivative records of the current stateAtTP call (models with residualWithCompositionInto):
+// two for comparing roots, one for the chosen root; read out before the call returns
+const emptyDraft = (): ResidualDerivativesDraft => ({
+  a: 0,
+  aD: 0,
+  aDD: 0,
+  aT: 0,
+  aTT: 0,
+  aDT: 0,
+  aDDD: 0,
+  aDDT: 0,
+  dnA: undefined,
+});
+const SCRATCH_A = emptyDraft();
+const SCRATCH_B = emptyDraft();
+const CHOSEN = emptyDraft();
+
+function hasResidualInto(model: ResidualModel): model is ModelWithResidualInto {
+  return model.residualInto !== undefined && model.residualWithCompositionInto !== undefined;
+}
 
 /**
  * The ideal-gas mixture at T (K) and x (at the fixed pressure of the state layer; properties.ts
@@ -162,6 +187,7 @@ function finish(
   phase: PhaseLabel,
   extraWarnings: readonly ExtraWarning[],
   givenPressurePa?: number,
+  ownDnA = false,
 ): FluidState {
   const model = binding.model;
   const ideal = idealGasAt(binding, T, x);
@@ -180,6 +206,7 @@ function finish(
     model.gasConstant ?? R_CODATA,
     warnings,
     givenPressurePa,
+    ownDnA,
   );
 }
 
@@ -282,17 +309,38 @@ export function stateAtTP(
       received: request,
     });
   }
-  // the roots: into the reused scratch when the model can (no array per state)
+  // the roots: into the reused scratch when the model can (no array per state), and their
+  // derivatives into scratch records (the chosen root's dnA array becomes the state's ln phi)
   let rhos: ArrayLike<number>;
   let rootCount: number;
+  let residual: ResidualDerivatives | undefined;
+  let ownDnA = false;
   if (model.densityRootsInto !== undefined) {
     rootCount = model.densityRootsInto(temperatureK, pressurePa, x, ROOTS);
     rhos = ROOTS;
+    if (hasResidualInto(model)) {
+      residual = chooseDensityRootWithComposition(
+        model,
+        temperatureK,
+        ROOTS,
+        rootCount,
+        x,
+        request,
+        choice,
+        SCRATCH_A,
+        SCRATCH_B,
+        CHOSEN,
+        new Array<number>(x.length),
+      );
+      ownDnA = true;
+    } else {
+      residual = chooseDensityRoot(model, temperatureK, rhos, x, request, choice, rootCount);
+    }
   } else {
     rhos = densityRootsOf(model, temperatureK, pressurePa, x, options.rootSearch);
     rootCount = rhos.length;
+    residual = chooseDensityRoot(model, temperatureK, rhos, x, request, choice, rootCount);
   }
-  const residual = chooseDensityRoot(model, temperatureK, rhos, x, request, choice, rootCount);
   const count = choice.stableCount;
   const index = choice.index;
   const rho = choice.densityMolPerM3;
@@ -335,5 +383,5 @@ export function stateAtTP(
     });
   }
   // P as given: the root's rho R T Z equals it only to round-off (3999999.9999999995)
-  return finish(binding, temperatureK, rho, x, residual, label, warnings, pressurePa);
+  return finish(binding, temperatureK, rho, x, residual, label, warnings, pressurePa, ownDnA);
 }

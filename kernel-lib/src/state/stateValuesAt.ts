@@ -117,7 +117,7 @@ export function stateValuesAtTP(
       `no ${request} root at T = ${temperatureK} K, P = ${pressurePa} Pa: the single stable root is ${label}-like`,
     );
   }
-  fill(binding, temperatureK, rho, x, d, extent, scratch);
+  fill(binding, temperatureK, rho, x, d, extent, scratch, pressurePa);
   return label;
 }
 
@@ -170,6 +170,7 @@ function fill(
   d: ResidualDerivativesDraft,
   extent: LeanExtent,
   scratch: LeanScratch,
+  givenPressurePa?: number,
 ): void {
   const Rg = binding.model.gasConstant ?? R_CODATA;
   const v = scratch.values;
@@ -180,6 +181,15 @@ function fill(
     v.Z = 1 + d.aD;
     residualValuesInto(T, d, Rg, v);
   } else {
-    stateValuesInto(T, rho, d, idealGasAt(binding, T, x), scratch.molarMassKgPerMol, Rg, v);
+    stateValuesInto(
+      T,
+      rho,
+      d,
+      idealGasAt(binding, T, x),
+      scratch.molarMassKgPerMol,
+      Rg,
+      v,
+      givenPressurePa,
+    );
   }
 }

@@ -26,6 +26,11 @@
  *
  * Extents: "residual" (departures, Z, rho), "energies" (also absolute h, s, u, a, g: the ideal gas
  * of the row, no heat capacities), "all" (also cp, cv, w, jt, kappaT, beta, cpRes, cvRes).
+ *
+ * Precision "fast" (extents "residual" and "energies"): fastRun takes the points of a grid's row in
+ * one loop (a Newton root of the Z-cubic started from the row's previous points), fastPoint one
+ * point (the "pairs" layout, and what the loop's guards send back); both within the stated
+ * tolerance of the single state, not to the last bit.
  */
 import { R } from "../constants.js";
 import type { ResidualDerivativesDraft, ResidualModel } from "../eos/types.js";
@@ -122,6 +127,10 @@ const CP_RES_ID = 21;
 const CV_RES_ID = 22;
 const QUALITY_ID = 23;
 
+const VAPOR = SWEEP_PHASE_KINDS.vapor;
+const LIQUID = SWEEP_PHASE_KINDS.liquid;
+const SUPERCRITICAL = SWEEP_PHASE_KINDS.supercritical;
+
 /** The columns a kernel writes (index 0 is the first point of the range). */
 interface Columns {
   readonly values: Float64Array[];
@@ -184,17 +193,22 @@ export class CubicTPRows {
   // the fast route (precision "fast", see fastPoint())
   private readonly fast: boolean;
   private lnPressures: Float64Array | undefined;
+  private startWeights: Float64Array | undefined;
   private lnPig = NaN;
   private fastI = -1;
   private fastJ = -1;
-  private fastHas2 = false;
+  /** How many points of the history are known (0 to 4; Z1 and P1 the latest). */
+  private fastKnown = 0;
   private fastZ1 = NaN;
   private fastP1 = NaN;
   private fastZ2 = NaN;
   private fastP2 = NaN;
-  private fastHas3 = false;
   private fastZ3 = NaN;
   private fastP3 = NaN;
+  private fastZ4 = NaN;
+  /** fastLoop's columns by property id (undefined: not asked) and their factors. */
+  private readonly fastColumns: (Float64Array | undefined)[] = [];
+  private readonly fastFactors = new Float64Array(QUALITY_ID + 1).fill(1);
   /** The fast route's values by property id (only the ids of its extents are set). */
   private readonly fastValues = new Float64Array(QUALITY_ID + 1).fill(NaN);
   private fRho = NaN;
@@ -240,6 +254,11 @@ export class CubicTPRows {
     const massScale = 1 / this.M;
     this.factor = Float64Array.from(properties, (p) => (mass && PER_AMOUNT.has(p) ? massScale : 1));
     this.cols = columns.values;
+    for (let id = 0; id <= QUALITY_ID; id++) this.fastColumns.push(undefined);
+    ids.forEach((id, m) => {
+      this.fastColumns[id] = columns.values[m];
+      this.fastFactors[id] = this.factor[m];
+    });
     this.phaseCount = columns.phaseCount;
     this.phaseKind = columns.phaseKind;
     this.errorCode = columns.errorCode;
@@ -318,15 +337,16 @@ export class CubicTPRows {
   /**
    * The point of temperature `temperatures[i]` (K) and pressure `pressures[j]` (Pa) of the plan
    * into index `k` of the columns; false (nothing written) when the general path must take it.
+   * `exactOnly`: the exact route even with precision "fast" (fastLoop's last resort).
    */
-  point(i: number, j: number, k: number): boolean {
+  point(i: number, j: number, k: number, exactOnly = false): boolean {
     const T = this.temperatures[i];
     const P = this.pressures[j];
     if (T !== this.rowT ? !this.setRow(T) : !this.rowOk) return false;
     // checkPressure's condition (its error comes from the general path)
     if (!(P > 0 && P >= MIN_PRESSURE_PA && P <= MAX_PRESSURE_PA)) return false;
-    if (this.fast) {
-      if (this.fastPoint(i, j, k)) return true;
+    if (this.fast && !exactOnly) {
+      if (this.fastPoint(i, j, k, true)) return true;
       this.fastI = -1;
     }
     const RT = this.RT;
@@ -424,9 +444,9 @@ export class CubicTPRows {
       v.Z = 1 + d.aD;
       residualValuesInto(T, d, Rg, v);
     } else if (this.extent === "energies") {
-      energyValuesInto(T, rho, d, this.ig, Rg, v);
+      energyValuesInto(T, rho, d, this.ig, Rg, v, P);
     } else {
-      stateValuesInto(T, rho, d, this.ig, this.M, Rg, v);
+      stateValuesInto(T, rho, d, this.ig, this.M, Rg, v, P);
     }
     // through fields, not arguments: plain numbers passed to a function that is not inlined are
     // boxed on the heap
@@ -435,6 +455,305 @@ export class CubicTPRows {
     this.pointRho = rho;
     this.write(k, label);
     return true;
+  }
+
+  /** Whether {@link fastRun} serves this plan (precision "fast" and an extent it computes). */
+  get fastRuns(): boolean {
+    return this.fast;
+  }
+
+  /**
+   * The fast route over points j0 .. j1 - 1 of row i of a grid (pressures[j0 ..]) into the
+   * columns from index k0 on: fastPoint's steps for the one root above B in one loop, with the
+   * row's constants and the start's history in locals and the values written straight into the
+   * columns. The start: Z of the previous points of the row extrapolated in P, through the last
+   * four by a cubic with Lagrange weights taken once per pressure axis (startWeights), through
+   * the last two (linear) while fewer are known; from there Newton's method with fastPoint's
+   * stop (residual at rounding level) and fastPoint's guards unchanged (discriminant, the
+   * deflated quadratic's roots below B, mechanical stability). A point those do not pass goes
+   * to fastPoint's closed form, else to the exact route (point). Returns how many points
+   * from j0 on were written; the caller takes the next one through point() (the general path:
+   * a bad T or P, no stable root).
+   */
+  fastRun(i: number, j0: number, j1: number, k0: number): number {
+    const T = this.temperatures[i];
+    if (T !== this.rowT ? !this.setRow(T) : !this.rowOk) return 0;
+    if (this.startWeights === undefined) this.startWeights = this.takeStartWeights();
+    if (this.lnPressures === undefined) this.lnPressures = this.pressures.map(Math.log);
+    return this.fastLoop(i, j0, j1, k0);
+  }
+
+  /** fastRun's loop (the row set and checked; kept apart from the row's set-up). */
+  private fastLoop(i: number, j0: number, j1: number, k0: number): number {
+    const T = this.temperatures[i];
+    const pressures = this.pressures;
+    const weights = this.startWeights!;
+    const energies = this.extent === "energies";
+    const lnP = this.lnPressures!;
+    const RT = this.RT;
+    const b = this.mixB;
+    const aOverRT2 = this.mixA / this.RT2;
+    const bOverRT = b / RT;
+    const overB = 1 / b;
+    const u = this.u;
+    const w = this.w;
+    const d1 = this.d1;
+    const d2 = this.d2;
+    const equalDeltas = d1 === d2;
+    const overD12 = 1 / (d1 - d2);
+    const F = this.F;
+    const TF = this.TF;
+    const FTF = F + TF;
+    const M = this.M;
+    const pure = this.pureLabels;
+    const supercriticalT = T >= this.tc;
+    const pc = this.pc;
+    const rhoc = this.rhoc;
+    const ig = this.ig;
+    const igH = ig.h;
+    const igU = ig.u;
+    // s, a and g of the ideal gas at P: the row's value at its own pressure shifted by ln P
+    const igS = ig.s + R * this.lnPig;
+    const igA = ig.a - RT * this.lnPig;
+    const igG = ig.g - RT * this.lnPig;
+    // the asked columns (undefined: not asked) and their factors (1, or 1 / M on a mass basis)
+    const out = this.fastColumns;
+    const fac = this.fastFactors;
+    const oT = out[T_ID];
+    const oP = out[P_ID];
+    const oRho = out[RHO_ID];
+    const oRhoMass = out[RHO_MASS_ID];
+    const oZ = out[Z_ID];
+    const oH = out[H_ID];
+    const oS = out[S_ID];
+    const oU = out[U_ID];
+    const oA = out[A_ID];
+    const oG = out[G_ID];
+    const oHRes = out[H_RES_ID];
+    const oSRes = out[S_RES_ID];
+    const oURes = out[U_RES_ID];
+    const oARes = out[A_RES_ID];
+    const oGRes = out[G_RES_ID];
+    const oQuality = out[QUALITY_ID];
+    const fH = fac[H_ID];
+    const fS = fac[S_ID];
+    const fU = fac[U_ID];
+    const fA = fac[A_ID];
+    const fG = fac[G_ID];
+    const fHRes = fac[H_RES_ID];
+    const fSRes = fac[S_RES_ID];
+    const fURes = fac[U_RES_ID];
+    const fARes = fac[A_RES_ID];
+    const fGRes = fac[G_RES_ID];
+    const fRho = fac[RHO_ID];
+    const phaseCount = this.phaseCount;
+    const phaseKind = this.phaseKind;
+    const errorCode = this.errorCode;
+    // the history: Z at the last `known` points of the row (z1 the latest)
+    let known = 0;
+    let z1 = NaN;
+    let z2 = NaN;
+    let z3 = NaN;
+    let z4 = NaN;
+    if (i === this.fastI && j0 === this.fastJ + 1) {
+      known = this.fastKnown;
+      z1 = this.fastZ1;
+      z2 = this.fastZ2;
+      z3 = this.fastZ3;
+      z4 = this.fastZ4;
+    }
+    let j = j0;
+    for (; j < j1; j++) {
+      const k = k0 + (j - j0);
+      const P = pressures[j];
+      // checkPressure's condition (its error comes from the general path)
+      if (!(P > 0 && P >= MIN_PRESSURE_PA && P <= MAX_PRESSURE_PA)) break;
+      const A = aOverRT2 * P;
+      const B = bOverRT * P;
+      const c2 = -(1 + B - u * B);
+      const c1 = A + w * B * B - u * B - u * B * B;
+      const c0 = -(A * B + w * B * B + w * B * B * B);
+      const Q = (c2 * c2 - 3 * c1) * (1 / 9);
+      const Rq = (2 * c2 * c2 * c2 - 9 * c2 * c1 + 27 * c0) * (1 / 54);
+      const R2 = Rq * Rq;
+      const Q3 = Q * Q * Q;
+      const gap = 1e-8 * Math.max(R2, Math.abs(Q3));
+      // (every operation of the loop runs at every point, so that the engine's type feedback
+      // covers it: an operation first met after compilation, such as a three-root point, sent
+      // the compiled loop back, and the recompiled loop was about 1.5 times slower)
+      const disc = R2 - Q3;
+      const one = disc > gap;
+      const three = disc < -gap;
+      let Z = NaN;
+      if (known > 0 && (one || three)) {
+        let z = z1;
+        if (known >= 4 && weights[4 * j] === weights[4 * j]) {
+          const o = 4 * j;
+          z = weights[o] * z1 + weights[o + 1] * z2 + weights[o + 2] * z3 + weights[o + 3] * z4;
+        } else if (known >= 2) {
+          z += ((z1 - z2) * (P - pressures[j - 1])) / (pressures[j - 1] - pressures[j - 2]);
+        }
+        const ac2 = Math.abs(c2);
+        const ac1 = Math.abs(c1);
+        const ac0 = Math.abs(c0);
+        let converged = false;
+        for (let it = 0; it < 9; it++) {
+          const f = ((z + c2) * z + c1) * z + c0;
+          const az = Math.abs(z);
+          if (Math.abs(f) <= 16 * Number.EPSILON * (((az + ac2) * az + ac1) * az + ac0)) {
+            converged = true;
+            break;
+          }
+          if (it === 8) break;
+          const df = (3 * z + 2 * c2) * z + c1;
+          if (!(df !== 0 && Number.isFinite(df))) break;
+          z -= f / df;
+        }
+        // with three real roots z only when the other two (the deflated quadratic
+        // x^2 + s1 x + s0) lie below B with a margin (taken at every point, see above)
+        const s1 = c2 + z;
+        const s0 = c1 + z * s1;
+        const qB = (B + s1) * B + s0;
+        const othersBelow =
+          -s1 / 2 < B && qB > 1e-10 * (B * B + Math.abs(s1) * B + Math.abs(s0)) && z > B;
+        if (converged && (one || othersBelow)) Z = z;
+      }
+      let rho = NaN;
+      let aD = NaN;
+      let I = NaN;
+      let L = NaN;
+      if (Z > B) {
+        // eps = b rho = B / Z and q = eps / (1 - eps) = B / (Z - B) through one division
+        const ZB = Z - B;
+        const t = 1 / (Z * ZB);
+        const eps = B * ZB * t;
+        rho = eps * overB;
+        if (eps < 1) {
+          const D1 = 1 + d1 * eps;
+          const D2 = 1 + d2 * eps;
+          // I1 = 1 / (D1 D2) and D1 / D2 = D1^2 I1 through one division
+          const I1 = 1 / (D1 * D2);
+          const I2 = -(d1 * D2 + d2 * D1) * I1 * I1;
+          const q = B * Z * t;
+          aD = q - F * eps * I1;
+          // mechanically stable (stiffnessFromResidual: 1 + 2 aD + aDD > 0)
+          if (1 + 2 * aD + (q * q - F * eps * eps * I2) > 0) {
+            I = equalDeltas ? eps / D1 : Math.log(D1 * D1 * I1) * overD12;
+            L = Math.log(ZB);
+          }
+        }
+      }
+      if (!(L === L)) {
+        // not finished here: fastPoint's closed form, else the exact route
+        this.fastI = known > 0 ? i : -1;
+        this.fastJ = j - 1;
+        // (written here, not through a method: doubles passed to a call that is not inlined
+        // are boxed, and the engine then kept the history boxed at every point)
+        this.fastKnown = known;
+        this.fastZ1 = z1;
+        this.fastZ2 = z2;
+        this.fastZ3 = z3;
+        this.fastZ4 = z4;
+        this.fastP1 = j >= 1 ? pressures[j - 1] : NaN;
+        this.fastP2 = j >= 2 ? pressures[j - 2] : NaN;
+        this.fastP3 = j >= 3 ? pressures[j - 3] : NaN;
+        if (this.fastPoint(i, j, k, false)) {
+          known = this.fastKnown;
+          z1 = this.fastZ1;
+          z2 = this.fastZ2;
+          z3 = this.fastZ3;
+          z4 = this.fastZ4;
+          continue;
+        }
+        this.fastI = -1;
+        known = 0;
+        if (!this.point(i, j, k, true)) break;
+        continue;
+      }
+      const hRes = RT * (aD + TF * I);
+      const uRes = RT * TF * I;
+      const sTP = R * (L + FTF * I);
+      const aTP = -RT * (L + F * I);
+      const gTP = aTP + RT * aD;
+      let kind: number;
+      if (pure) kind = supercriticalT && P >= pc ? SUPERCRITICAL : rho > rhoc ? LIQUID : VAPOR;
+      else {
+        const label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
+        kind = label === "vapor" ? VAPOR : label === "liquid" ? LIQUID : SUPERCRITICAL;
+      }
+      // the energies of the ideal gas at P (NaN for extent "residual", and then not asked)
+      const lnPj = energies ? lnP[j] : NaN;
+      const h = igH + hRes;
+      const sAbs = igS - R * lnPj + sTP;
+      const uAbs = igU + uRes;
+      const aAbs = igA + RT * lnPj + aTP;
+      const gAbs = igG + RT * lnPj + gTP;
+      // (the factors of T, P, rho mass, Z and quality are 1: not amount-specific)
+      if (oT !== undefined) oT[k] = T;
+      if (oP !== undefined) oP[k] = P;
+      if (oRho !== undefined) oRho[k] = rho * fRho;
+      if (oRhoMass !== undefined) oRhoMass[k] = rho * M;
+      if (oZ !== undefined) oZ[k] = 1 + aD;
+      if (oH !== undefined) oH[k] = h * fH;
+      if (oS !== undefined) oS[k] = sAbs * fS;
+      if (oU !== undefined) oU[k] = uAbs * fU;
+      if (oA !== undefined) oA[k] = aAbs * fA;
+      if (oG !== undefined) oG[k] = gAbs * fG;
+      if (oHRes !== undefined) oHRes[k] = hRes * fHRes;
+      if (oSRes !== undefined) oSRes[k] = sTP * fSRes;
+      if (oURes !== undefined) oURes[k] = uRes * fURes;
+      if (oARes !== undefined) oARes[k] = aTP * fARes;
+      if (oGRes !== undefined) oGRes[k] = gTP * fGRes;
+      if (oQuality !== undefined) oQuality[k] = kind === VAPOR ? 1 : kind === LIQUID ? 0 : NaN;
+      phaseCount[k] = 1;
+      phaseKind[k] = kind;
+      errorCode[k] = 0;
+      z4 = z3;
+      z3 = z2;
+      z2 = z1;
+      z1 = Z;
+      if (known < 4) known++;
+    }
+    // the history for the next run or point of this row
+    this.fastI = known > 0 ? i : -1;
+    this.fastJ = j - 1;
+    this.fastKnown = known;
+    this.fastZ1 = z1;
+    this.fastZ2 = z2;
+    this.fastZ3 = z3;
+    this.fastZ4 = z4;
+    this.fastP1 = j >= 1 ? pressures[j - 1] : NaN;
+    this.fastP2 = j >= 2 ? pressures[j - 2] : NaN;
+    this.fastP3 = j >= 3 ? pressures[j - 3] : NaN;
+    return j - j0;
+  }
+
+  /**
+   * The cubic start's Lagrange weights of the pressure axis: for point j (j >= 4) the weights of
+   * the points j - 1 .. j - 4, four per point (NaN where two of the five pressures coincide or
+   * j < 4).
+   */
+  private takeStartWeights(): Float64Array {
+    const p = this.pressures;
+    const wts = new Float64Array(4 * p.length).fill(NaN);
+    for (let j = 4; j < p.length; j++) {
+      const P = p[j];
+      let ok = true;
+      for (let m = 0; m < 4; m++) {
+        const Pm = p[j - 1 - m];
+        let l = 1;
+        for (let n = 0; n < 4; n++) {
+          if (n !== m) {
+            const Pn = p[j - 1 - n];
+            l *= (P - Pn) / (Pm - Pn);
+          }
+        }
+        wts[4 * j + m] = l;
+        if (!Number.isFinite(l)) ok = false;
+      }
+      if (!ok) wts.fill(NaN, 4 * j, 4 * j + 4);
+    }
+    return wts;
   }
 
   /**
@@ -447,14 +766,15 @@ export class CubicTPRows {
    * the other two (the deflated quadratic) lie below B with a margin, so that Z is the one root
    * above B, the root the exact route takes. Otherwise, and at the first point of a row, the
    * closed form (monicCubicRootsInto); with three roots above B the outer two are compared by
-   * g_r/RT (chooseDensityRootInto's rule; a near tie, within 1e-11, goes to the exact route). The
+   * g_r/RT (chooseDensityRootInto's rule; a near tie, within 1e-11, goes to the exact route);
+   * `tryNewton` false (fastRun's Newton did not finish the point) goes to the closed form. The
    * logarithms: ln(Z - B) = ln(1 - b rho) + ln Z (the residual's ln(1 - b rho) and the (T, P)
    * departures' ln Z in one) and ln(D1 / D2); ln(P / P_ig) from a per-pressure table. The
    * formulas of state/properties.ts rearranged: s_r(T,P) = R (ln(Z - B) + (F + T F_T) I),
    * a_r(T,P) = -RT (ln(Z - B) + F I), g_r(T,P) = a_r + RT (Z - 1). False (nothing written) hands
    * the point to the exact route.
    */
-  private fastPoint(i: number, j: number, k: number): boolean {
+  private fastPoint(i: number, j: number, k: number, tryNewton: boolean): boolean {
     const T = this.temperatures[i];
     const P = this.pressures[j];
     const RT = this.RT;
@@ -477,7 +797,7 @@ export class CubicTPRows {
     if (!one && !(R2 - Q3 < -gap)) return false;
     const continued = i === this.fastI && j === this.fastJ + 1;
     let Z = NaN;
-    if (continued) {
+    if (continued && tryNewton) {
       // the start: Z of the previous point, extrapolated in P through the last two or three
       // points of the row (Lagrange)
       const Z1 = this.fastZ1;
@@ -485,12 +805,12 @@ export class CubicTPRows {
       const P2 = this.fastP2;
       const P3 = this.fastP3;
       let z = Z1;
-      if (this.fastHas3 && P1 !== P2 && P2 !== P3 && P1 !== P3) {
+      if (this.fastKnown >= 3 && P1 !== P2 && P2 !== P3 && P1 !== P3) {
         z =
           (Z1 * (P - P2) * (P - P3)) / ((P1 - P2) * (P1 - P3)) +
           (this.fastZ2 * (P - P1) * (P - P3)) / ((P2 - P1) * (P2 - P3)) +
           (this.fastZ3 * (P - P1) * (P - P2)) / ((P3 - P1) * (P3 - P2));
-      } else if (this.fastHas2 && P1 !== P2) {
+      } else if (this.fastKnown >= 2 && P1 !== P2) {
         z += ((Z1 - this.fastZ2) * (P - P1)) / (P1 - P2);
       }
       // Newton until the residual is at rounding level (16 eps of the sum of the terms'
@@ -640,8 +960,8 @@ export class CubicTPRows {
       label = phaseLabel(this.model, T, P, rho, this.x, "only", 1 + aD);
     }
     fv[QUALITY_ID] = label === "vapor" ? 1 : label === "liquid" ? 0 : NaN;
-    this.fastHas3 = continued && this.fastHas2;
-    this.fastHas2 = continued;
+    this.fastKnown = continued ? Math.min(this.fastKnown + 1, 4) : 1;
+    this.fastZ4 = this.fastZ3;
     this.fastZ3 = this.fastZ2;
     this.fastP3 = this.fastP2;
     this.fastZ2 = this.fastZ1;

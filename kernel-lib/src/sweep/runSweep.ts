@@ -514,7 +514,29 @@ export function evaluateSweepRange(
   // grid position of point `start`, advanced without a division per point
   let row = grid ? Math.floor(start / n2) : 0;
   let col = grid ? start - row * n2 : 0;
+  // precision "fast" on a grid: runs of a row through the row kernel's loop (fastRun), each
+  // ending at the row's end, the range's end or the next progress chunk
+  const runs = rows !== undefined && grid && rows.fastRuns;
   for (let i = start; i < end; i++) {
+    if (runs) {
+      let last = Math.min(n2, col + (end - i));
+      if (onChunk !== undefined) last = Math.min(last, col + (nextChunk - i));
+      const done = rows.fastRun(row, col, last, i - start);
+      if (done > 0) {
+        i += done;
+        col += done;
+        if (col === n2) {
+          col = 0;
+          row++;
+        }
+        if (onChunk !== undefined && i === nextChunk) {
+          onChunk(i - start);
+          nextChunk += chunk;
+        }
+        i--;
+        continue;
+      }
+    }
     const local = i - start;
     // positions on the two axes (the row kernel takes them as integers: no boxed numbers)
     const ia = grid ? row : i;

@@ -19,6 +19,11 @@ import { R } from "../../../kernel-lib/src/constants.js";
 import type { FluidState } from "../../../kernel-lib/src/state/types.js";
 import type { SweepProperty } from "../../../kernel-lib/src/sweep/types.js";
 import { SWEEP_PHASE_KINDS } from "../../../kernel-lib/src/sweep/types.js";
+import {
+  allocateColumns,
+  evaluateSweepRange,
+  planSweep,
+} from "../../../kernel-lib/src/sweep/runSweep.js";
 
 const TOLERANCE = 1e-10;
 
@@ -133,6 +138,84 @@ describe('sweep precision "fast" equals stateAtTP within 1e-10', () => {
     const x = [0.85, 0.06, 0.03, 0.02, 0.04];
     const Ps = Array.from({ length: 12 }, (_, j) => 1e5 + 1e6 * j);
     for (const set of SETS) checkGrid(fluid, [150, 240.5, 340.25], Ps, x, set);
+  });
+
+  it("rows with repeated, unordered and refused pressures (the runs stop and go on)", () => {
+    // fastRun's cubic start has no weights where pressures repeat (linear start or the closed
+    // form instead); a refused pressure ends a run and the next point starts a new one
+    const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+    const Ps = [1e5, 2e5, 2e5, 3e5, 5e5, 4e5, 6e5, 7e5, 7e5, 7e5, 8e5, 9e5, 1e6, 2e6];
+    const withBad = [...Ps.slice(0, 7), -1, ...Ps.slice(7), 0, 3e6, 4e6, 5e6, 6e6, 7e6];
+    for (const set of SETS) {
+      checkGrid(fluid, [120, 180, 250.5, 400], Ps, undefined, set);
+      checkGrid(fluid, [120, 250.5], withBad, undefined, set);
+    }
+  });
+
+  it("a mass basis divides the amount-specific columns by M and leaves the others", () => {
+    const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+    const base = {
+      specification: "TP" as const,
+      first: { from: 150, to: 450, count: 5 },
+      second: { from: 1e5, to: 20e6, count: 30 },
+      properties: ["h", "s", "u", "a", "g", "hRes", "sRes", "rho", "rhoMass", "Z", "T", "P"],
+      precision: "fast" as const,
+    } satisfies Parameters<Fluid["sweep"]>[0];
+    const molar = fluid.sweep(base);
+    const mass = fluid.sweep({ ...base, basis: "mass" });
+    // methane, 16.043 g/mol (from memory of the NIST Chemistry WebBook; the component table's M)
+    const M = molar.values.rhoMass![0] / molar.values.rho![0];
+    expect(M).toBeCloseTo(0.016043, 5);
+    for (const p of base.properties) {
+      const perAmount = !["rho", "rhoMass", "Z", "T", "P"].includes(p);
+      for (let k = 0; k < 150; k++) {
+        const expected = perAmount ? molar.values[p]![k] / M : molar.values[p]![k];
+        const got = mass.values[p]![k];
+        expect(Math.abs(got - expected), `${p} at ${k}`).toBeLessThanOrEqual(
+          1e-14 * Math.abs(expected),
+        );
+      }
+    }
+  });
+
+  it("a range evaluated in progress chunks equals the whole sweep to the last bit", () => {
+    // fastRun's runs end at every chunk; the start's history carries over, so the Newton
+    // iterates and the numbers are the same as in one pass
+    const fluid = defineFluid({ components: ["methane"], model: "peng-robinson" });
+    const request = {
+      specification: "TP" as const,
+      first: { from: 150, to: 450, count: 7 },
+      second: { from: 1e5, to: 20e6, count: 53 },
+      properties: ["h", "s", "Z", "rho"] as SweepProperty[],
+      precision: "fast" as const,
+    };
+    const whole = fluid.sweep(request);
+    const plan = planSweep(request, 1);
+    const start = 11;
+    const columns = allocateColumns(plan, plan.count - start);
+    const done: number[] = [];
+    const failed = evaluateSweepRange(
+      { binding: fluid, constants: fluid.components },
+      plan,
+      start,
+      plan.count,
+      columns,
+      [],
+      (n) => done.push(n),
+      17,
+    );
+    expect(failed).toBe(0);
+    expect(done[0]).toBe(17);
+    expect(done.at(-1)).toBe(plan.count - start);
+    for (let m = 0; m < plan.properties.length; m++) {
+      const p = plan.properties[m];
+      // after the range's first row the history is the same as in the whole sweep
+      const from = 53 - start;
+      expect(Array.from(columns.values[m].subarray(from))).toEqual(
+        Array.from(whole.values[p]!.subarray(start + from)),
+      );
+    }
+    expect(Array.from(columns.phaseKind)).toEqual(Array.from(whole.phaseKind.subarray(start)));
   });
 
   it('refuses an unknown precision with a typed error naming "precision"', () => {

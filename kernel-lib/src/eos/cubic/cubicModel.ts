@@ -99,6 +99,18 @@ class CubicModelImpl implements CubicModel {
   private mixATT = NaN;
   private mixB = NaN;
   private readonly psiScratch: PsiValues = { psi: 0, dPsi: 0, d2Psi: 0 };
+  // Soave-type alpha functions (psi = 1 + m (1 - sqrt(T / Tc))): 1 / sqrt(Tc_i) and
+  // -sqrt(a_c,i) m_i / sqrt(Tc_i), so that a new T takes one square root for all components
+  private readonly soaveType: boolean;
+  private readonly invSqrtTc: Float64Array;
+  private readonly dPsiScale: Float64Array;
+  // w_ij = x_j (1 - k_ij) of the composition in cacheX (valid once cacheWValid is true): a new T
+  // at the same composition (an isobar, the bench's states, a sweep's rows) reuses the products
+  private readonly w: Float64Array;
+  private cacheWValid = false;
+  // the highest Tc among the present components of cacheX, and its index
+  private cacheTcMax = 0;
+  private cacheHeaviest = 0;
 
   constructor(
     family: CubicFamily,
@@ -126,6 +138,16 @@ class CubicModelImpl implements CubicModel {
       this.slope[i] = alphaSlope(family.alpha, c.acentricFactor);
       this.tc[i] = Tc;
     }
+    const kind = family.alpha;
+    this.soaveType =
+      kind === "soave" || kind === "peng-robinson-1976" || kind === "peng-robinson-1978";
+    this.invSqrtTc = new Float64Array(n);
+    this.dPsiScale = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      this.invSqrtTc[i] = 1 / Math.sqrt(this.tc[i]);
+      this.dPsiScale[i] = -this.sqrtAc[i] * this.slope[i] * this.invSqrtTc[i];
+    }
+    this.w = new Float64Array(n * n);
     this.oneMinusK = new Float64Array(n * n);
     for (let i = 0; i < n; i++) {
       for (let j = 0; j < n; j++) this.oneMinusK[i * n + j] = 1 - this.interactions.kij[i][j];
@@ -144,45 +166,87 @@ class CubicModelImpl implements CubicModel {
 
   /** Fills the cache for (T, x) unless it already holds it. */
   private update(T: number, x: readonly number[]): void {
+    // the hit (every call after the first of a state) in a function small enough to be inlined
+    if (T === this.cacheT && this.cacheWValid && this.sameComposition(x)) return;
+    this.refresh(T, x);
+  }
+
+  /** Whether x is the composition of the cache (entry by entry). */
+  private sameComposition(x: readonly number[]): boolean {
+    for (let i = 0; i < this.n; i++) if (x[i] !== this.cacheX[i]) return false;
+    return true;
+  }
+
+  /** The cache for (T, x): alpha functions when T changed, mixing sums always. */
+  private refresh(T: number, x: readonly number[]): void {
     const n = this.n;
-    let same = T === this.cacheT;
-    if (same) {
-      for (let i = 0; i < n; i++) {
-        if (x[i] !== this.cacheX[i]) {
-          same = false;
-          break;
-        }
-      }
-    }
-    if (same) return;
+    const sameX = this.cacheWValid && this.sameComposition(x);
     // the temperature part (alpha functions) only when T changed: a flash or a stability test
     // calls at one T with many compositions
     if (T !== this.cacheT) {
-      const kind = this.family.alpha;
-      const out = this.psiScratch;
-      for (let i = 0; i < n; i++) {
-        evaluatePsi(kind, this.slope[i], T, this.tc[i], out);
-        const s = this.sqrtAc[i];
-        this.psi[i] = s * out.psi;
-        this.dPsi[i] = s * out.dPsi;
-        this.d2Psi[i] = s * out.d2Psi;
+      const psi = this.psi;
+      const dPsi = this.dPsi;
+      const d2Psi = this.d2Psi;
+      if (this.soaveType) {
+        // psi = s (1 + m (1 - sqrt(T) / sqrt(Tc))), dpsi/dT = -s m / (2 sqrt(T Tc)),
+        // d2psi/dT2 = -(dpsi/dT) / (2 T): one square root and two divisions per temperature
+        // (evaluatePsi's sqrt(T / Tc) and sqrt(T Tc) per component agree to a few ulp;
+        // tests/unit/eos/cubicMixtureParameters.test.ts)
+        const sqrtT = Math.sqrt(T);
+        const halfInvSqrtT = 0.5 / sqrtT;
+        const minusHalfInvT = -0.5 / T;
+        for (let i = 0; i < n; i++) {
+          psi[i] = this.sqrtAc[i] * (1 + this.slope[i] * (1 - sqrtT * this.invSqrtTc[i]));
+          const d = this.dPsiScale[i] * halfInvSqrtT;
+          dPsi[i] = d;
+          d2Psi[i] = d * minusHalfInvT;
+        }
+      } else {
+        const kind = this.family.alpha;
+        const out = this.psiScratch;
+        for (let i = 0; i < n; i++) {
+          evaluatePsi(kind, this.slope[i], T, this.tc[i], out);
+          const s = this.sqrtAc[i];
+          psi[i] = s * out.psi;
+          dPsi[i] = s * out.dPsi;
+          d2Psi[i] = s * out.d2Psi;
+        }
       }
     }
-    for (let i = 0; i < n; i++) this.cacheX[i] = x[i];
+    const w = this.w;
+    if (!sameX) {
+      for (let i = 0; i < n; i++) this.cacheX[i] = x[i];
+      for (let i = 0; i < n; i++) {
+        const row = i * n;
+        for (let j = 0; j < n; j++) w[row + j] = x[j] * this.oneMinusK[row + j];
+      }
+      // the present component of highest Tc (rangeWarnings)
+      let tcMax = 0;
+      let heaviest = 0;
+      for (let i = 0; i < n; i++) {
+        if (x[i] > 0 && this.tc[i] > tcMax) {
+          tcMax = this.tc[i];
+          heaviest = i;
+        }
+      }
+      this.cacheTcMax = tcMax;
+      this.cacheHeaviest = heaviest;
+      this.cacheWValid = true;
+    }
     let a = 0;
     let aT = 0;
     let aTT = 0;
     let b = 0;
     for (let i = 0; i < n; i++) {
-      const xi = x[i];
+      const xi = this.cacheX[i];
       b += xi * this.bi[i];
       let sA = 0;
       let sT = 0;
       const row = i * n;
       for (let j = 0; j < n; j++) {
-        const w = x[j] * this.oneMinusK[row + j];
-        sA += w * this.psi[j];
-        sT += w * this.dPsi[j];
+        const wij = w[row + j];
+        sA += wij * this.psi[j];
+        sT += wij * this.dPsi[j];
       }
       // a_ij = s_i s_j (1-k_ij), s = sqrt(a_c) psi
       this.sumA[i] = this.psi[i] * sA;
@@ -370,28 +434,46 @@ class CubicModelImpl implements CubicModel {
       aDDT: 0,
       dnA: undefined,
     };
-    this.residualInto(temperatureK, densityMolPerM3, x, result);
-    // T d(aDD)/dT: in aDD = q^2 - F eps^2 I'' only F depends on T, and T dF/dT = TF
-    result.aDDT = -this.lastTF * this.lastEps2I2;
     if (request?.composition) {
-      const n = this.n;
-      const a = this.mixA;
-      const b = this.mixB;
-      const eps = b * densityMolPerM3;
-      const F = a / (b * R * temperatureK);
-      const I = this.lastI;
-      const I1 = this.lastI1;
-      const logTerm = this.lastLogTerm;
-      const q = eps / (1 - eps);
-      const dnA = new Array<number>(n);
-      for (let i = 0; i < n; i++) {
-        const bRatio = this.bi[i] / b;
-        dnA[i] =
-          logTerm + bRatio * q - F * ((2 * this.sumA[i]) / a - bRatio) * I - F * bRatio * eps * I1;
-      }
+      const dnA = new Array<number>(this.n);
+      this.residualWithCompositionInto(temperatureK, densityMolPerM3, x, result, dnA);
       result.dnA = dnA;
+    } else {
+      this.residualInto(temperatureK, densityMolPerM3, x, result);
+      // T d(aDD)/dT: in aDD = q^2 - F eps^2 I'' only F depends on T, and T dF/dT = TF
+      result.aDDT = -this.lastTF * this.lastEps2I2;
     }
     return result;
+  }
+
+  /**
+   * {@link residual} with composition derivatives written into `out` and `dnA` (no allocation:
+   * the state layer's (T, P) path); residual() itself runs through here, so the same numbers.
+   */
+  residualWithCompositionInto(
+    temperatureK: number,
+    densityMolPerM3: number,
+    x: readonly number[],
+    out: ResidualDerivativesDraft,
+    dnA: number[],
+  ): void {
+    this.residualInto(temperatureK, densityMolPerM3, x, out);
+    // T d(aDD)/dT: in aDD = q^2 - F eps^2 I'' only F depends on T, and T dF/dT = TF
+    out.aDDT = -this.lastTF * this.lastEps2I2;
+    const n = this.n;
+    const a = this.mixA;
+    const b = this.mixB;
+    const eps = b * densityMolPerM3;
+    const F = a / (b * R * temperatureK);
+    const I = this.lastI;
+    const I1 = this.lastI1;
+    const logTerm = this.lastLogTerm;
+    const q = eps / (1 - eps);
+    for (let i = 0; i < n; i++) {
+      const bRatio = this.bi[i] / b;
+      dnA[i] =
+        logTerm + bRatio * q - F * ((2 * this.sumA[i]) / a - bRatio) * I - F * bRatio * eps * I1;
+    }
   }
 
   // I, I' and -ln(1 - eps) of the last residualInto call (read by residual() at once)
@@ -644,14 +726,10 @@ class CubicModelImpl implements CubicModel {
     x: readonly number[],
   ): ResultWarning[] | undefined {
     let warnings: ResultWarning[] | undefined;
-    let tcMax = 0;
-    let heaviest = 0;
-    for (let i = 0; i < this.n; i++) {
-      if (x[i] > 0 && this.tc[i] > tcMax) {
-        tcMax = this.tc[i];
-        heaviest = i;
-      }
-    }
+    // the present component of highest Tc, kept with the composition in the cache (checkValidity
+    // has updated it for x)
+    const tcMax = this.cacheTcMax;
+    const heaviest = this.cacheHeaviest;
     if (temperatureK < 0.3 * tcMax || temperatureK > CUBIC_MAX_TEMPERATURE_K) {
       warnings = [
         {
