@@ -386,6 +386,21 @@ function isRecord(v: unknown): v is Record<string, unknown> {
   return typeof v === "object" && v !== null && !Array.isArray(v);
 }
 
+/**
+ * A copy of the definition down to its arrays and per-component overrides (the k_ij matrix is
+ * the usual thing a notebook edits in place after defining a fluid), so `fluid.spec`, which the
+ * worker threads rebuild the fluid from, stays what the fluid was built with.
+ */
+function specCopy(spec: FluidSpec): FluidSpec {
+  const copy: FluidSpec = { ...spec, components: [...spec.components] };
+  if (spec.kij !== undefined) copy.kij = spec.kij.map((row) => [...row]);
+  if (Array.isArray(spec.volumeTranslation)) copy.volumeTranslation = [...spec.volumeTranslation];
+  if (spec.constants !== undefined) {
+    copy.constants = spec.constants.map((c) => (c === undefined ? undefined : { ...c }));
+  }
+  return copy;
+}
+
 /** Refuses spec fields of the wrong kind (a notebook may pass anything) before they are used. */
 function checkSpecFields(spec: FluidSpec): void {
   const fail = (input: string, validRange: string, received: unknown): never => {
@@ -786,7 +801,7 @@ export function defineFluid(spec: FluidSpec): Fluid {
       inversionWithStabilityCheck(binding, temperatureAtPS(binding, P, s, xOf(x), options)),
     sweep: (request) => runSweep({ binding, constants: components }, request),
     // a copy: a caller who edits the spec object later does not change what workers rebuild
-    spec: { ...spec, components: [...spec.components] },
+    spec: specCopy(spec),
     transportAtTP: (T, P, x, options) =>
       transportOfState(
         transportFluid,
