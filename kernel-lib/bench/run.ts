@@ -89,6 +89,12 @@ const RATIOS: readonly {
     clock: "wall",
   },
   {
+    case: "sweep-1e6-mix10-1worker-cold",
+    baseline: "sweep-1e6-mix10-cold",
+    meaning: "scaling from 1 worker to all cores, workers started per sweep (wall clock)",
+    clock: "wall",
+  },
+  {
     case: "sampler-surface-200x200-pick",
     baseline: "sampler-surface-200x200",
     meaning: "speed-up of the chart sampler on the sweep path over one stateAtTP per point",

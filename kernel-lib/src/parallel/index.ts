@@ -1,3 +1,5 @@
 // Public exports of parallel/ (Node side): sweeps split across worker threads.
 export { sweepOnWorkers, defaultWorkerScript } from "./sweepOnWorkers.js";
+export { closeSweepWorkers, sweepWorkerStats } from "./workerPool.js";
+export type { SweepWorkerStats } from "./workerPool.js";
 export type { ParallelSweepOptions } from "./sweepOnWorkers.js";

@@ -1,24 +1,22 @@
 /**
- * Sweeps on all cores (Node side): a sweep above a size threshold is split into contiguous
- * ranges of points, one per worker thread (node:worker_threads); each worker builds the fluid
- * from its definition once (fluid.spec) and runs the same engine as the single-thread sweep, so
- * the arrays are equal to those of fluid.sweep exactly. Progress goes through progress/, and an
- * AbortSignal stops the workers (terminated at once) and rejects with the signal's reason.
- * The workers run the built JavaScript of kernel-lib/dist (`npm run build`).
+ * Sweeps on all cores (Node side): a sweep above a size threshold is split into ranges of
+ * points handed out on demand (a worker that finishes one takes the next, so a slower or busier
+ * core takes fewer) to worker threads of a persistent pool (workerPool.ts: started once per
+ * process, the fluid defined once per worker and kept by the key of its definition). Each
+ * worker runs the same engine as the single-thread sweep and writes its range in place into the
+ * result arrays, which live on SharedArrayBuffers (no copy or transfer on the main thread), so
+ * the arrays are equal to those of fluid.sweep exactly. With precision "fast" on a
+ * grid the ranges start at row starts (the fast route starts each point from the previous points
+ * of its temperature row). Progress goes through progress/; an AbortSignal terminates the
+ * sweep's workers at once (the pool replaces them in the next sweep) and rejects with the
+ * signal's reason. The workers run the built JavaScript of kernel-lib/dist (`npm run build`).
  */
 import * as fs from "node:fs";
 import * as os from "node:os";
 import * as path from "node:path";
-import { Worker } from "node:worker_threads";
 import { InputError, IsochorError, type ResultWarning } from "../errors.js";
 import type { Fluid, FluidSpec } from "../fluid/defineFluid.js";
-import {
-  allocateColumns,
-  planSweep,
-  runSweep,
-  sweepResult,
-  type SweepColumns,
-} from "../sweep/runSweep.js";
+import { planSweep, runSweep, sweepResult, type SweepPlan } from "../sweep/runSweep.js";
 import {
   MAX_ERROR_MESSAGES,
   type SweepPointError,
@@ -26,7 +24,11 @@ import {
   type SweepResult,
 } from "../sweep/types.js";
 import { startProgress, type ProgressOptions, type ProgressTracker } from "../progress/progress.js";
-import type { FromWorker, ToWorker } from "./messages.js";
+import type { FromWorker, SharedColumns } from "./messages.js";
+import { specKey } from "./specKey.js";
+import { defineIn, discardWorker, forget, returnWorker, send, takeWorkers } from "./workerPool.js";
+
+export { closeSweepWorkers, sweepWorkerStats, type SweepWorkerStats } from "./workerPool.js";
 
 /** Options of {@link sweepOnWorkers}. */
 export interface ParallelSweepOptions {
@@ -43,6 +45,14 @@ export interface ParallelSweepOptions {
   progress?: ProgressOptions | false;
   /** Points between progress messages of a worker. Default 2,000. */
   chunk?: number;
+  /**
+   * Points per range handed to a worker at a time (on demand), all ranges alike. Default:
+   * decreasing ranges (guided self-scheduling), each a quarter of the points left per worker,
+   * down to 1/256 of the points per worker and at least 64, so the first ranges are large and
+   * the last ones small (the workers finish together). With precision "fast" on a grid, ranges
+   * are rounded to whole rows.
+   */
+  rangeSize?: number;
   /** The worker's built script. Default: dist/parallel/sweepWorker.js of this package. */
   workerScript?: string;
 }
@@ -79,9 +89,49 @@ function abortReason(signal: AbortSignal): unknown {
   return signal.reason ?? new Error("the sweep was aborted");
 }
 
+let nextSweepId = 1;
+
+/**
+ * Range boundaries [0, b1, ..., count]: about `size` points each, multiples of `align` (the
+ * row length for a fast grid, else 1) except the last.
+ */
+export function rangeBounds(count: number, size: number, align: number): number[] {
+  const step = Math.max(align, Math.round(size / align) * align);
+  const bounds = [0];
+  for (let b = step; b < count; b += step) bounds.push(b);
+  bounds.push(count);
+  return bounds;
+}
+
+/**
+ * Guided self-scheduling (Polychronopoulos and Kuck, 1987, IEEE Trans. Computers 36(12),
+ * 1425-1439, with a quarter instead of all of the share left): range boundaries of `count`
+ * points for `workers` workers, each range max(minSize, ceil(left / (4 workers))) points,
+ * multiples of `align` except the last.
+ */
+export function guidedBounds(
+  count: number,
+  workers: number,
+  minSize: number,
+  align: number,
+): number[] {
+  const bounds = [0];
+  let b = 0;
+  while (b < count) {
+    const size = Math.max(minSize, Math.ceil((count - b) / (4 * workers)));
+    b = Math.min(count, b + Math.max(align, Math.round(size / align) * align));
+    bounds.push(b);
+  }
+  if (count === 0) bounds.push(0);
+  return bounds;
+}
+
 /**
  * Runs `request` on `fluid` across worker threads and resolves with the same result as
- * `fluid.sweep(request)`.
+ * `fluid.sweep(request)`. The workers stay in a pool for later sweeps (idle workers do not keep
+ * Node alive; {@link closeSweepWorkers} ends them). The result's typed arrays are views of
+ * SharedArrayBuffers (the workers wrote them in place): they read and write like any typed
+ * array, but a structuredClone or postMessage of one shares its memory instead of copying it.
  *
  * @example
  * ```ts
@@ -118,6 +168,15 @@ export async function sweepOnWorkers(
       received: chunk,
     });
   }
+  const rangeSize = options.rangeSize;
+  if (rangeSize !== undefined && !(Number.isInteger(rangeSize) && rangeSize >= 1)) {
+    throw new InputError({
+      input: "options.rangeSize",
+      unit: "points",
+      validRange: "an integer >= 1",
+      received: rangeSize,
+    });
+  }
   const signal = options.signal;
   if (signal?.aborted) throw abortReason(signal);
   const sweepFluid = { binding: fluid, constants: fluid.components };
@@ -140,61 +199,129 @@ export async function sweepOnWorkers(
     return warnings.length === 0 ? r : { ...r, warnings: r.warnings.concat(warnings) };
   }
   const script = options.workerScript ?? defaultWorkerScript();
-  const n = Math.min(workers, plan.count);
-  const columns = allocateColumns(plan, plan.count);
+  // the fast route starts each point from the previous points of its row: ranges of whole rows
+  const align =
+    plan.precision === "fast" && plan.layout === "grid" ? Math.max(1, plan.secondAxis.length) : 1;
+  const bounds =
+    rangeSize !== undefined
+      ? rangeBounds(plan.count, rangeSize, align)
+      : guidedBounds(
+          plan.count,
+          workers,
+          Math.max(64, Math.ceil(plan.count / (256 * workers))),
+          align,
+        );
+  const ranges = bounds.length - 1;
+  const n = Math.min(workers, ranges);
+  const columns = sharedColumns(plan);
   const errors: SweepPointError[] = [];
   let failed = 0;
-  const pool: Worker[] = [];
-  const doneBy = new Float64Array(n);
-  // a worker whose job is done is terminated, which exits it with code 1: not a failure
-  const jobDone = new Uint8Array(n);
+  const id = nextSweepId++;
+  // a definition with no canonical key is sent with this sweep and forgotten after it
+  const canonicalKey = specKey(fluid.spec);
+  const key = canonicalKey ?? `sweep-${id}`;
+  const taken = takeWorkers(script, n, key);
   try {
     await new Promise<void>((resolve, reject) => {
-      let finished = 0;
+      let next = 0;
+      let completed = 0;
       let settled = false;
+      const inFlight = new Float64Array(n);
+      // held[k]: worker k still belongs to this sweep; working[k]: it has a range in flight
+      const held = new Uint8Array(n).fill(1);
+      const working = new Uint8Array(n);
+      const release = (k: number) => {
+        if (held[k] === 0) return;
+        held[k] = 0;
+        working[k] = 0;
+        const w = taken[k];
+        if (w.alive) {
+          if (canonicalKey === undefined) forget(w, key);
+          send(w, { type: "end", id });
+        }
+        returnWorker(w);
+      };
       const stop = (error: unknown) => {
         if (settled) return;
         settled = true;
-        for (const w of pool) void w.terminate();
+        signal?.removeEventListener("abort", onAbort);
+        // a worker with a range in flight cannot be interrupted otherwise: it is terminated,
+        // and the pool starts a new one for a later sweep
+        for (let k = 0; k < n; k++) {
+          if (held[k] === 1 && working[k] === 1) {
+            held[k] = 0;
+            void discardWorker(taken[k]);
+          } else release(k);
+        }
         reject(error);
       };
       const onAbort = () => stop(abortReason(signal!));
       signal?.addEventListener("abort", onAbort, { once: true });
-      for (let k = 0; k < n; k++) {
-        const start = Math.floor((plan.count * k) / n);
-        const end = Math.floor((plan.count * (k + 1)) / n);
-        const w = new Worker(script);
-        pool.push(w);
-        w.on("message", (m: FromWorker) => {
-          if (settled) return;
-          if (m.type === "progress") {
-            doneBy[k] = m.done;
-            let total = 0;
-            for (let q = 0; q < n; q++) total += doneBy[q];
-            progress?.set(total);
-          } else if (m.type === "fail") {
+      const handOut = (k: number) => {
+        if (next < ranges) {
+          working[k] = 1;
+          send(taken[k], { type: "range", id, start: bounds[next], end: bounds[next + 1] });
+          next++;
+        } else release(k);
+      };
+      const onMessage = (k: number, m: FromWorker) => {
+        if (settled) return;
+        // a failed definition (id -1) fails the sweep that sent it
+        if (m.type === "fail") {
+          if (m.id === id || m.id === -1) {
             stop(new IsochorError("runner-failed", `sweep worker ${k + 1} of ${n}: ${m.message}`));
-          } else {
-            jobDone[k] = 1;
-            copyInto(columns, m, m.start);
-            failed += m.failed;
-            errors.push(...m.errors);
-            void w.terminate();
-            if (++finished === n) {
-              settled = true;
-              signal?.removeEventListener("abort", onAbort);
-              resolve();
-            }
           }
-        });
-        w.on("error", (e) => stop(e));
-        w.on("exit", (code) => {
-          if (!settled && jobDone[k] === 0) {
-            stop(new IsochorError("runner-failed", `sweep worker ${k + 1} exited with ${code}`));
-          }
-        });
-        w.postMessage({ type: "init", spec: fluid.spec } satisfies ToWorker);
-        w.postMessage({ type: "job", request, start, end, chunk } satisfies ToWorker);
+          return;
+        }
+        if (m.id !== id) return;
+        if (m.type === "progress") {
+          inFlight[k] = m.done;
+          let total = completed;
+          for (let q = 0; q < n; q++) total += inFlight[q];
+          progress?.set(total);
+          return;
+        }
+        // pairs with the worker's Atomics.add after its writes: they are visible from here on
+        Atomics.load(columns.written, 0);
+        failed += m.failed;
+        // ranges come back in any order: keep every message, the first by index are kept below
+        for (const e of m.errors) errors.push(e);
+        if (errors.length > 4 * MAX_ERROR_MESSAGES) firstErrors(errors);
+        completed += m.end - m.start;
+        inFlight[k] = 0;
+        working[k] = 0;
+        if (completed === plan.count) {
+          settled = true;
+          signal?.removeEventListener("abort", onAbort);
+          for (let q = 0; q < n; q++) release(q);
+          resolve();
+          return;
+        }
+        handOut(k);
+      };
+      taken.forEach((w, k) => {
+        w.onDeath = (e) => {
+          working[k] = 0;
+          stop(new IsochorError("runner-failed", `sweep worker ${k + 1} of ${n}: ${e.message}`));
+        };
+        w.onMessage = (m) => onMessage(k, m);
+      });
+      try {
+        for (const w of taken) {
+          defineIn(w, key, fluid.spec);
+          send(w, {
+            type: "sweep",
+            id,
+            key,
+            request,
+            columns,
+            chunk: progress === undefined ? 0 : chunk,
+          });
+        }
+        for (let k = 0; k < n; k++) handOut(k);
+      } catch (e) {
+        // e.g. a request option that cannot be cloned to a thread: the workers go back
+        stop(e);
       }
     });
   } catch (e) {
@@ -203,14 +330,27 @@ export async function sweepOnWorkers(
   }
   progress?.set(plan.count);
   progress?.finish();
-  errors.sort((p, q) => p.index - q.index);
-  errors.length = Math.min(errors.length, MAX_ERROR_MESSAGES);
+  firstErrors(errors);
   return sweepResult(sweepFluid, plan, columns, errors, failed);
 }
 
-function copyInto(columns: SweepColumns, m: Extract<FromWorker, { type: "done" }>, at: number) {
-  for (let k = 0; k < columns.values.length; k++) columns.values[k].set(m.values[k], at);
-  columns.phaseCount.set(m.phaseCount, at);
-  columns.phaseKind.set(m.phaseKind, at);
-  columns.errorCode.set(m.errorCode, at);
+/** Keeps the first MAX_ERROR_MESSAGES messages by point index (as the single-thread sweep). */
+function firstErrors(errors: SweepPointError[]): void {
+  errors.sort((p, q) => p.index - q.index);
+  errors.length = Math.min(errors.length, MAX_ERROR_MESSAGES);
+}
+
+/**
+ * The result arrays on SharedArrayBuffers (the workers write their ranges in place; the arrays
+ * read and write as any typed array, and a structuredClone of one shares its memory).
+ */
+function sharedColumns(plan: SweepPlan): SharedColumns {
+  const n = plan.count;
+  return {
+    values: plan.properties.map(() => new Float64Array(new SharedArrayBuffer(8 * n))),
+    phaseCount: new Uint8Array(new SharedArrayBuffer(n)),
+    phaseKind: new Uint8Array(new SharedArrayBuffer(n)),
+    errorCode: new Uint8Array(new SharedArrayBuffer(n)),
+    written: new Int32Array(new SharedArrayBuffer(4)),
+  };
 }

@@ -191,8 +191,8 @@ export interface SweepRequest {
    * rounding level) and one logarithm ln(Z - B) for ln(1 - b rho) + ln Z; the results differ from
    * the single state by rounding, at most 1e-10 relative (floor: R T for energies, R for entropies,
    * 1 for Z; see DEVELOPERS.md "Sweep benchmarks"). Other points and models take the exact route.
-   * The start depends on the points before in the row, so a range split inside a row
-   * (sweepOnWorkers) can differ from the one-thread run in the last bits, within that tolerance.
+   * The start depends on the points before in the row, so sweepOnWorkers hands out whole rows
+   * of such a grid and its results equal the one-thread run to the last bit.
    */
   readonly precision?: "exact" | "fast";
 }
