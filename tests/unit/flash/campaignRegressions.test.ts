@@ -106,3 +106,30 @@ describe("flashPH: an underflowing K-value is a failed step, not bad input", () 
     }
   });
 });
+
+describe("multiphase split: a phase held at its bound does not stop the Newton iteration", () => {
+  // found by the robustness test (tests/unit/flash/robustness.test.ts, CI run of 2026-12-04):
+  // isobutane / n-hexane / water at 363 K and 3.7 bar threw "after 1 Newton iterations the
+  // largest gradient is 3.99e-1". The vapour's amount sat at zero with a negative gradient while
+  // the coupled Newton step pointed below zero, so the largest feasible step was 0 and the line
+  // search gave up. Held at zero for that step (the active-set rule), the split converges.
+  const fluid = defineFluid({
+    components: ["isobutane", "n-hexane", "water"],
+    model: "peng-robinson",
+  });
+  const z = [0.01736621879453331, 0.5599811577366822, 0.42265262346878446];
+  for (const T of [362.98940194537863, 365, 370]) {
+    it(`at ${T.toFixed(2)} K: a verified hydrocarbon liquid and water`, () => {
+      const eq = fluid.flashTP(T, 373673.11431083584, z);
+      expectVerified(fluid, eq);
+      // two liquids, no vapour: hexane's vapour pressure near 363 K is about 1.9 bar and
+      // water's about 0.7 bar (from memory of the steam tables and the hexane vapour-pressure
+      // curve), their sum with the dissolved isobutane's share stays below 3.7 bar
+      expect(eq.phases.map((p) => p.kind)).toEqual(["liquid", "liquid-2"]);
+      const water = eq.phases.find((p) => p.state.x[2] > 0.99);
+      const oil = eq.phases.find((p) => p.state.x[1] > 0.9);
+      expect(water).toBeDefined();
+      expect(oil).toBeDefined();
+    });
+  }
+});

@@ -85,6 +85,40 @@ export function solveMultiphaseSplit(
     }
     return worst;
   };
+  /**
+   * Backtracking line search on Q along `step` from beta, the step first cut to keep beta >= 0;
+   * fills `trial` and returns Q there, or undefined when no step decreases Q (or, below Q's
+   * rounding, the largest free gradient).
+   */
+  const lineSearch = (
+    step: readonly number[],
+    trial: number[],
+    gNow: readonly number[],
+    gmaxNow: number,
+    qNow: number,
+  ): number | undefined => {
+    let tMax = 1;
+    for (let k = 0; k < np; k++) if (step[k] < 0) tMax = Math.min(tMax, -beta[k] / step[k]);
+    if (!(tMax > 0)) return undefined;
+    let t = tMax;
+    let slope = 0;
+    for (let k = 0; k < np; k++) slope += gNow[k] * step[k];
+    for (let back = 0; back < 60; back++) {
+      for (let k = 0; k < np; k++) trial[k] = Math.max(0, beta[k] + t * step[k]);
+      if (t === tMax)
+        for (let k = 0; k < np; k++) if (step[k] < 0 && -beta[k] / step[k] === tMax) trial[k] = 0;
+      const qt = evalQ(trial);
+      // near the minimum the decrease of Q (~ |g|^2 / H) is below its rounding: there a step is
+      // accepted when it reduces the largest free gradient instead. "Near" is judged by the
+      // predicted decrease as well as by the gradient: with a trace phase (e.g. 1e-5 mol of
+      // water) H is large and Q stops resolving its decrease while |g| is still about 1e-6
+      const belowRounding = gmaxNow < 1e-6 || -t * slope < 1e-12 * Math.max(1, Math.abs(qNow));
+      const better = belowRounding ? gradientMax(trial) < gmaxNow : qt <= qNow + 1e-4 * t * slope;
+      if (better) return qt;
+      t *= 0.5;
+    }
+    return undefined;
+  };
   let iterations = 0;
   let gmax = Infinity;
   const g = new Array<number>(np).fill(0);
@@ -116,52 +150,33 @@ export function solveMultiphaseSplit(
       gmax = Math.max(gmax, Math.abs(g[k]));
     }
     if (gmax <= tol) break;
-    // Newton step on the free phases, with the Hessian scaled by its diagonal
-    const m = free.length;
-    const A: number[][] = [];
-    const rhs = new Array<number>(m);
-    for (let a = 0; a < m; a++) {
-      const row = new Array<number>(m);
-      for (let b = 0; b < m; b++) {
-        row[b] = H[free[a]][free[b]] / Math.sqrt(H[free[a]][free[a]] * H[free[b]][free[b]]);
-      }
-      row[a] += 1e-14;
-      A.push(row);
-      rhs[a] = -g[free[a]] / Math.sqrt(H[free[a]][free[a]]);
+    // Newton step on the free phases, with the Hessian scaled by its diagonal. A phase at its
+    // bound (beta = 0, dQ/dbeta < 0) whose Newton step still points below zero would leave no
+    // room to move (largest feasible step 0): it is held at zero for this step and the step
+    // recomputed for the others (the usual active-set rule; it is freed again next iteration).
+    const freeAll = free.slice();
+    let newton = newtonStep(H, g, free, np);
+    for (let drop = 0; drop < np; drop++) {
+      const held = free.filter((k) => beta[k] <= 0 && newton[k] < 0);
+      if (held.length === 0 || held.length === free.length) break;
+      const kept = free.filter((k) => !held.includes(k));
+      free.length = 0;
+      free.push(...kept);
+      newton = newtonStep(H, g, free, np);
     }
-    let stepScaled: number[];
-    try {
-      stepScaled = solveLinear(A, rhs);
-    } catch {
-      stepScaled = rhs.slice(); // steepest descent in the scaled variables
-    }
-    const step = new Array<number>(np).fill(0);
-    for (let a = 0; a < m; a++) step[free[a]] = stepScaled[a] / Math.sqrt(H[free[a]][free[a]]);
-    // largest step keeping beta >= 0
-    let tMax = 1;
-    for (let k = 0; k < np; k++) if (step[k] < 0) tMax = Math.min(tMax, -beta[k] / step[k]);
-    let t = tMax;
-    const trial = new Array<number>(np);
+    // the projected gradient step, scaled by the Hessian's diagonal, is the fallback: it is a
+    // descent direction whenever a free gradient is non-zero
+    const gradientStep = new Array<number>(np).fill(0);
+    for (const k of freeAll) if (beta[k] > 0 || g[k] < 0) gradientStep[k] = -g[k] / H[k][k];
     let accepted = false;
-    let slope = 0;
-    for (let k = 0; k < np; k++) slope += g[k] * step[k];
-    for (let back = 0; back < 60; back++) {
-      for (let k = 0; k < np; k++) trial[k] = Math.max(0, beta[k] + t * step[k]);
-      if (t === tMax)
-        for (let k = 0; k < np; k++) if (step[k] < 0 && -beta[k] / step[k] === tMax) trial[k] = 0;
-      const qt = evalQ(trial);
-      // near the minimum the decrease of Q (~ |g|^2 / H) is below its rounding: there a step is
-      // accepted when it reduces the largest free gradient instead. "Near" is judged by the
-      // predicted decrease as well as by the gradient: with a trace phase (e.g. 1e-5 mol of
-      // water) H is large and Q stops resolving its decrease while |g| is still about 1e-6
-      const belowRounding = gmax < 1e-6 || -t * slope < 1e-12 * Math.max(1, Math.abs(q));
-      const better = belowRounding ? gradientMax(trial) < gmax : qt <= q + 1e-4 * t * slope;
-      if (better) {
-        q = qt;
+    const trial = new Array<number>(np);
+    for (const step of [newton, gradientStep]) {
+      const outcome = lineSearch(step, trial, g, gmax, q);
+      if (outcome !== undefined) {
+        q = outcome;
         accepted = true;
         break;
       }
-      t *= 0.5;
     }
     if (!accepted) break; // no decrease possible at this precision: converged to rounding
     for (let k = 0; k < np; k++) beta[k] = trial[k];
@@ -187,4 +202,38 @@ export function solveMultiphaseSplit(
     x.push(row);
   }
   return { beta, x, gradient: gmax, iterations };
+}
+
+/**
+ * The Newton step of Q on the `free` phases (zero elsewhere), solved with the Hessian scaled by
+ * its diagonal (a 1e-14 ridge keeps nearly equal K rows solvable); scaled steepest descent when
+ * the system is singular.
+ */
+function newtonStep(
+  H: readonly (readonly number[])[],
+  g: readonly number[],
+  free: readonly number[],
+  np: number,
+): number[] {
+  const m = free.length;
+  const A: number[][] = [];
+  const rhs = new Array<number>(m);
+  for (let a = 0; a < m; a++) {
+    const row = new Array<number>(m);
+    for (let b = 0; b < m; b++) {
+      row[b] = H[free[a]][free[b]] / Math.sqrt(H[free[a]][free[a]] * H[free[b]][free[b]]);
+    }
+    row[a] += 1e-14;
+    A.push(row);
+    rhs[a] = -g[free[a]] / Math.sqrt(H[free[a]][free[a]]);
+  }
+  let stepScaled: number[];
+  try {
+    stepScaled = solveLinear(A, rhs);
+  } catch {
+    stepScaled = rhs.slice(); // steepest descent in the scaled variables
+  }
+  const step = new Array<number>(np).fill(0);
+  for (let a = 0; a < m; a++) step[free[a]] = stepScaled[a] / Math.sqrt(H[free[a]][free[a]]);
+  return step;
 }
