@@ -19,7 +19,7 @@
 import { pressureFromResidual } from "../residualRelations.js";
 import { R } from "../../constants.js";
 import { OutOfRangeError, type ResultWarning } from "../../errors.js";
-import { realCubicRootsInto } from "../../numerics/cubicRoots.js";
+import { monicCubicRootsInto } from "../../numerics/cubicRoots.js";
 import { HyperDual } from "../../numerics/hyperDual.js";
 import type { ModelWithPressure } from "../pressureFunction.js";
 import type {
@@ -39,6 +39,8 @@ const NO_WARNINGS: readonly ResultWarning[] = Object.freeze([]);
 
 // Z roots of the current densityRoots call, reused (read out before the next call: no allocation)
 const Z_ROOTS = new Float64Array(3);
+// the Z-cubic's coefficients c2, c1, c0 of the current densityRootsInto call (read at once)
+const Z_COEFFICIENTS = new Float64Array(3);
 // densities of the current densityRoots call, copied out at once
 const DENSITY_SCRATCH = new Float64Array(3);
 
@@ -642,13 +644,13 @@ class CubicModelImpl implements CubicModel {
     const u = this.delta1 + this.delta2;
     const w = this.delta1 * this.delta2;
     const roots = Z_ROOTS;
-    const count = realCubicRootsInto(
-      1,
-      -(1 + B - u * B),
-      A + w * B * B - u * B - u * B * B,
-      -(A * B + w * B * B + w * B * B * B),
-      roots,
-    );
+    // the monic solver: the arithmetic of realCubicRootsInto with c3 = 1, without its generic
+    // checks (the same roots to the last bit, tests/unit/numerics)
+    const c = Z_COEFFICIENTS;
+    c[0] = -(1 + B - u * B);
+    c[1] = A + w * B * B - u * B - u * B * B;
+    c[2] = -(A * B + w * B * B + w * B * B * B);
+    const count = monicCubicRootsInto(c, roots);
     let n = 0;
     // ascending Z means descending density; return densities ascending
     for (let k = count - 1; k >= 0; k--) {
