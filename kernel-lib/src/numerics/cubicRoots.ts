@@ -357,6 +357,39 @@ function quadraticRoots(
 // closed-form roots of the current monicCubicRootsInto call (at most 3), reused
 const monicRaw = new Float64Array(3);
 
+// the root found by the last successful newtonFromAbove call
+let newtonRoot = NaN;
+
+/**
+ * Newton's method on x^3 + c2 x^2 + c1 x + c0 from `x0` downwards (monicCubicRootsInto's
+ * `upperStart`: the caller has established one real root, right of the inflection point). True
+ * with the root in `newtonRoot` when the conditions of the start hold and the iteration ends at
+ * rounding level; false otherwise (the caller takes the closed form).
+ */
+function newtonFromAbove(c2: number, c1: number, c0: number, x0: number): boolean {
+  if (!(x0 > -c2 / 3)) return false;
+  let x = x0;
+  let p = ((x + c2) * x + c1) * x + c0;
+  if (!(p >= 0)) return false;
+  for (let k = 0; k < 100; k++) {
+    const dp = (3 * x + 2 * c2) * x + c1;
+    const xNew = x - p / dp;
+    if (!(xNew < x)) {
+      const ax = Math.abs(x);
+      const size = ((ax + Math.abs(c2)) * ax + Math.abs(c1)) * ax + Math.abs(c0);
+      if (!(Math.abs(p) <= 16 * EPS * size && size < Infinity)) return false;
+      // a well-conditioned root only (|x p'(x)| at least 1 % of the terms: its rounding then
+      // moves x by a few eps); near a double or triple root (the critical point) the closed form
+      if (!(Math.abs(x * dp) >= 0.01 * size)) return false;
+      newtonRoot = x;
+      return true;
+    }
+    x = xNew;
+    p = ((x + c2) * x + c1) * x + c0;
+  }
+  return false;
+}
+
 /**
  * The roots of the monic cubic x^3 + c[0] x^2 + c[1] x + c[2] = 0 written ascending into
  * `out[0 .. count - 1]`, their number returned: the algorithm of {@link realCubicRootsInto} for
@@ -365,9 +398,23 @@ const monicRaw = new Float64Array(3);
  * passes plain numbers to a function the engine does not inline boxes each of them on the heap; in
  * a loop over millions of states (the sweeps' row kernel) those boxes cost more than the algebra.
  *
+ * `upperStart` (optional; the Z-cubic of a cubic equation of state passes 1 + B, above every root
+ * with Z - B > 0): where the closed form would take a cube root (one real root) and that root lies
+ * right of the inflection point x_i = -c2/3 (R < 0 of the depressed cubic), a start with
+ * x0 > x_i and p(x0) >= 0 lies at or above the root in the region where p is convex and rising,
+ * so Newton's method from it decreases monotonically to the root (Fourier's condition; e.g.
+ * J. Stoer and R. Bulirsch, Introduction to Numerical Analysis, 3rd ed. (2002), sec. 5.3). It
+ * stops at the first step that no longer decreases x and is accepted when |p(x)| is then at
+ * rounding level (16 eps of the sum of the terms' magnitudes), within 100 steps, and the root is
+ * well conditioned (|x p'(x)| at least 1 % of that sum; not near the critical point); otherwise, and
+ * for a start that fails the two conditions, the closed form runs. This takes no cube root (about
+ * 6 steps from 1 + B for a gas); the root may differ from the closed form's in the last bits
+ * (tests/unit/numerics/cubicNewtonStart.test.ts: within 1e-13 relative). Omitted (NaN): the
+ * closed form, step for step as realCubicRootsInto.
+ *
  * @throws InputError as realCubicRootsInto: a coefficient NaN or infinite.
  */
-export function monicCubicRootsInto(c: Float64Array, out: Float64Array): number {
+export function monicCubicRootsInto(c: Float64Array, out: Float64Array, upperStart = NaN): number {
   const c2 = c[0];
   const c1 = c[1];
   const c0 = c[2];
@@ -429,6 +476,11 @@ export function monicCubicRootsInto(c: Float64Array, out: Float64Array): number 
           const yMid = -2 * sq * Math.cos((theta - 2 * Math.PI) / 3) - shift;
           if (Math.abs(yMid) > Math.abs(y1)) y1 = yMid;
         }
+      } else if (R < 0 && newtonFromAbove(A, B, C, s === 1 ? upperStart : upperStart / s)) {
+        // on the rescaled cubic (a power of two: the same steps, no underflow or overflow)
+        raw[0] = newtonRoot * s;
+        count = 1;
+        three = false;
       } else {
         const sgn = R >= 0 ? 1 : -1;
         const Acard = -sgn * Math.cbrt(Math.abs(R) + Math.sqrt(R2 - Q3));

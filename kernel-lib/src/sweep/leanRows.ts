@@ -361,7 +361,7 @@ export class CubicTPRows {
     c[1] = A + w * B * B - u * B - u * B * B;
     c[2] = -(A * B + w * B * B + w * B * B * B);
     const zRoots = this.zRoots;
-    const count = monicCubicRootsInto(c, zRoots);
+    const count = monicCubicRootsInto(c, zRoots, 1 + B);
     const rhos = this.rhos;
     let n = 0;
     for (let m = count - 1; m >= 0; m--) {

@@ -644,13 +644,14 @@ class CubicModelImpl implements CubicModel {
     const u = this.delta1 + this.delta2;
     const w = this.delta1 * this.delta2;
     const roots = Z_ROOTS;
-    // the monic solver: the arithmetic of realCubicRootsInto with c3 = 1, without its generic
-    // checks (the same roots to the last bit, tests/unit/numerics)
+    // the monic solver without the generic checks of realCubicRootsInto; a single real root by
+    // Newton from 1 + B (no cube root; Z - B <= 1 for every root with Z > B: Z (1 - b rho) =
+    // 1 - (1 - b rho) a rho / (RT D1 D2) <= 1), the sweeps' exact route the same (leanRows.ts)
     const c = Z_COEFFICIENTS;
     c[0] = -(1 + B - u * B);
     c[1] = A + w * B * B - u * B - u * B * B;
     c[2] = -(A * B + w * B * B + w * B * B * B);
-    const count = monicCubicRootsInto(c, roots);
+    const count = monicCubicRootsInto(c, roots, 1 + B);
     let n = 0;
     // ascending Z means descending density; return densities ascending
     for (let k = count - 1; k >= 0; k--) {
