@@ -8,6 +8,7 @@ import { describe, expect, it } from "vitest";
 import { defineFluid, type Fluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import { InputError, SolverError } from "../../../kernel-lib/src/errors.js";
 import { overallProperty } from "../../../kernel-lib/src/phase/flash/stateFunctionFlash.js";
+import { solveMultiphaseSplit } from "../../../kernel-lib/src/phase/flash/multiphaseRachfordRice.js";
 import { idealGasFromCorrelation } from "../../../kernel-lib/src/idealgas/correlationPure.js";
 import { idealGasMixture } from "../../../kernel-lib/src/idealgas/mixture.js";
 import { stabilityAtTP } from "../../../kernel-lib/src/phase/stability.js";
@@ -132,4 +133,65 @@ describe("multiphase split: a phase held at its bound does not stop the Newton i
       expect(oil).toBeDefined();
     });
   }
+});
+
+describe("trace components: a phase re-entering from zero with a huge K", () => {
+  // robustness slice case 8499 (tests/unit/flash/robustness.test.ts, seed 20261204): water with
+  // 2.6e-8 n-heptane and 2.55e-8 nitrogen at 225.5 K and 230 bar threw "after 100 Newton
+  // iterations the largest gradient is 1.23e+3" from the minimisation of Michelsen's Q function.
+  // With this model ln phi of heptane infinitely dilute in the water is about 80 (and of
+  // nitrogen about 20), so K of heptane between a heptane-rich phase and the water is about
+  // 1e39. Both trace phases fell to zero on the first steps; re-entering, Q ~ beta - z ln(beta K)
+  // lets a Newton step only double beta, and a hundred doublings did not climb from 1e-40 back to
+  // 1e-8. The longer steps along an accepted Newton step (multiphaseRachfordRice.ts) fix it.
+  // The model's answer is three phases: water, a heptane-rich liquid and a nitrogen-rich fluid,
+  // each trace phase about 2e-8 mol. (Real water would dissolve these traces: the Henry constant
+  // of N2 in water is about 9e9 Pa near 298 K, from memory of R. Sander's compilation (Atmos.
+  // Chem. Phys. 15 (2015) 4399), against about 1.6e16 Pa from this model's ln phi; a cubic with
+  // one k_ij per pair understates such solubilities, which is the model's limit, not the flash's.)
+  const T = 225.50341001478955;
+  const P = 22988521.070213407;
+  const z = [2.6018367948985062e-8, 2.5538662889372702e-8, 0.9999999484429692];
+
+  it("the Q minimisation from the flash's own start converges and closes the balances", () => {
+    // K-values (relative to the water phase) and starting amounts the flash passed at the failure
+    const K = [
+      [1, 1, 1],
+      [5.69533939843364e39, 250987773.26344368, 0.0000022609530409547823],
+      [4.489417770489791e36, 882035183.0532746, 9.340444129547253e-7],
+    ];
+    const r = solveMultiphaseSplit(z, K, {
+      start: [0.9499999528226654, 4.7177334521761304e-8, 0.05],
+    });
+    expect(r.gradient).toBeLessThanOrEqual(1e-12);
+    expect(r.iterations).toBeLessThan(30);
+    // both trace phases present (the minimum's exact conditions: every present phase sums to one)
+    expect(r.beta[1]).toBeGreaterThan(1e-8);
+    expect(r.beta[2]).toBeGreaterThan(1e-8);
+    for (const x of r.x) expect(Math.abs(x.reduce((a, b) => a + b, 0) - 1)).toBeLessThan(1e-12);
+    for (let i = 0; i < z.length; i++) {
+      const sum = r.beta.reduce((a, b, k) => a + b * r.x[k][i], 0);
+      expect(Math.abs(sum - z[i]) / z[i]).toBeLessThan(1e-10);
+    }
+  });
+
+  it("water + 2.6e-8 heptane + 2.55e-8 N2 at 225.5 K, 230 bar: three verified phases", () => {
+    const fluid = defineFluid({ components: ["n-heptane", "nitrogen", "water"] });
+    const eq = fluid.flashTP(T, P, z);
+    expect(expectVerified(fluid, eq, { stability: false })).toBe(3);
+    // every returned phase stable against Wilson and nearly pure trials of every component
+    for (const p of eq.phases) {
+      const t = stabilityAtTP(fluid.model, T, P, p.state.x.slice(), { extraTrials: [0, 1, 2] });
+      expect(t.stable, `${p.kind} phase`).toBe(true);
+    }
+    const water = eq.phases.find((p) => p.state.x[2] > 0.999999);
+    const heptane = eq.phases.find((p) => p.state.x[0] > 0.5);
+    const nitrogen = eq.phases.find((p) => p.state.x[1] > 0.99);
+    expect(water && heptane && nitrogen).toBeTruthy();
+    expect(water!.amount).toBeGreaterThan(0.9999999);
+    for (const p of [heptane!, nitrogen!]) {
+      expect(p.amount).toBeGreaterThan(1e-8);
+      expect(p.amount).toBeLessThan(5e-8);
+    }
+  });
 });

@@ -10,7 +10,9 @@
  * sum_k beta_k = 1; a phase whose bound beta_k = 0 stays active with dQ/dbeta_k >= 0 is absent
  * (its composition would not sum to one). Newton's method with an active set on the bounds and a
  * backtracking line search on Q (as in R. Okuno, R. T. Johns and K. Sepehrnoori, SPE J. 15 (2010)
- * 313-325, who use the same convexity), scaled by the diagonal of the Hessian.
+ * 313-325, who use the same convexity), scaled by the diagonal of the Hessian; an accepted full
+ * step is stretched (doubling) in the phases it at least doubles while Q keeps falling, for trace
+ * phases re-entering from zero.
  */
 import { SolverError } from "../../errors.js";
 import { solveLinear } from "../../numerics/linearSolve.js";
@@ -114,10 +116,35 @@ export function solveMultiphaseSplit(
       // water) H is large and Q stops resolving its decrease while |g| is still about 1e-6
       const belowRounding = gmaxNow < 1e-6 || -t * slope < 1e-12 * Math.max(1, Math.abs(qNow));
       const better = belowRounding ? gradientMax(trial) < gmaxNow : qt <= qNow + 1e-4 * t * slope;
+      if (better && t === 1 && !belowRounding) return expand(step, trial, qt);
       if (better) return qt;
       t *= 0.5;
     }
     return undefined;
+  };
+  /**
+   * A full step accepted, longer steps along it while they keep lowering Q (doubling t, inside
+   * the bounds). A phase that re-enters from zero where a trace component has a huge K (e.g.
+   * heptane at 1e-8 in water, K = 1e39) sees Q ~ beta_k - z_i ln(beta_k K_ki): there Newton only
+   * doubles beta_k per step and would need a hundred steps to climb from 1e-40 to 1e-11.
+   */
+  const expand = (step: readonly number[], trial: number[], qTrial: number): number => {
+    const longer = new Array<number>(np);
+    let q = qTrial;
+    for (let t = 2; t < 2 ** 200; t *= 2) {
+      let inside = true;
+      for (let k = 0; k < np; k++) {
+        // only the phases the step at least doubles are stretched; the others keep the full step
+        longer[k] = beta[k] + (step[k] >= beta[k] ? t : 1) * step[k];
+        if (!(longer[k] >= 0)) inside = false;
+      }
+      if (!inside) break;
+      const ql = evalQ(longer);
+      if (!(ql < q)) break;
+      q = ql;
+      for (let k = 0; k < np; k++) trial[k] = longer[k];
+    }
+    return q;
   };
   let iterations = 0;
   let gmax = Infinity;
