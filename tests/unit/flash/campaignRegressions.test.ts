@@ -9,6 +9,8 @@ import { defineFluid, type Fluid } from "../../../kernel-lib/src/fluid/defineFlu
 import { InputError, SolverError } from "../../../kernel-lib/src/errors.js";
 import { overallProperty } from "../../../kernel-lib/src/phase/flash/stateFunctionFlash.js";
 import { solveMultiphaseSplit } from "../../../kernel-lib/src/phase/flash/multiphaseRachfordRice.js";
+import { convergeMultiphase } from "../../../kernel-lib/src/phase/flash/threePhaseSplit.js";
+import { phaseFugacityAtTP } from "../../../kernel-lib/src/state/fugacity.js";
 import { idealGasFromCorrelation } from "../../../kernel-lib/src/idealgas/correlationPure.js";
 import { idealGasMixture } from "../../../kernel-lib/src/idealgas/mixture.js";
 import { stabilityAtTP } from "../../../kernel-lib/src/phase/stability.js";
@@ -192,6 +194,96 @@ describe("trace components: a phase re-entering from zero with a huge K", () => 
     for (const p of [heptane!, nitrogen!]) {
       expect(p.amount).toBeGreaterThan(1e-8);
       expect(p.amount).toBeLessThan(5e-8);
+    }
+  });
+});
+
+describe("flashTP: a genuine fourth phase is a SolverError that says so", () => {
+  // robustness slice cases 724, 3327, 6211 and 6692 (tests/unit/flash/robustness.test.ts, seed
+  // 20261204): water, a hydrocarbon liquid, a CO2-, H2S- or N2-rich liquid and a hydrogen- or
+  // nitrogen-rich fluid below 190 K. With Peng-Robinson these are four fluid phases (checked
+  // below for case 6692 independently of the flash). In a plant most of these would hold solids
+  // (ice; solid CO2 below its triple point, 216.6 K, from memory of the CO2 tables), which no
+  // fluid-phase model represents. The flash returns at most three phases: it must refuse with a
+  // SolverError that reports the converged and tested four-phase split, never return three.
+  const cases: { id: number; ids: string[]; z: number[]; T: number; P: number }[] = [
+    {
+      id: 724,
+      ids: ["carbon-dioxide", "n-hexane", "nitrogen", "water"],
+      z: [0.16509235612734555, 0.1630268609476073, 0.3143251184278481, 0.35755566449719905],
+      T: 176.27254208782688,
+      P: 21329902.70362892,
+    },
+    {
+      id: 3327,
+      ids: ["carbon-dioxide", "hydrogen", "n-decane", "propylene", "toluene", "water"],
+      z: [
+        0.18769694643691467, 0.18232172111818987, 0.17027186083490195, 5.859327102350484e-9,
+        0.19177003569514062, 0.2679394300555258,
+      ],
+      T: 189.4166877726093,
+      P: 4472750.145209616,
+    },
+    {
+      id: 6211,
+      ids: ["ethane", "hydrogen-sulfide", "n-octane", "nitrogen", "propane", "water"],
+      z: [
+        0.15299741618301885, 0.4044699693691804, 0.12983936751700453, 0.079919494416026,
+        4.506405207592569e-9, 0.23277374800836512,
+      ],
+      T: 157.79374156845734,
+      P: 7717972.563723225,
+    },
+    {
+      id: 6692,
+      ids: ["benzene", "carbon-dioxide", "hydrogen", "n-octane", "water"],
+      z: [
+        0.02633440147138099, 0.3225147956762753, 0.071931191344891, 0.5619698959290224,
+        0.01724971557843038,
+      ],
+      T: 158.3374785608612,
+      P: 121972.85258959187,
+    },
+  ];
+  for (const c of cases) {
+    it(`case ${c.id}: ${c.ids.join(" + ")} at ${c.T.toFixed(1)} K: four phases reported`, () => {
+      const fluid = defineFluid({ components: c.ids });
+      expect(() => fluid.flashTP(c.T, c.P, c.z)).toThrowError(SolverError);
+      expect(() => fluid.flashTP(c.T, c.P, c.z)).toThrowError(
+        /three-phase split is not stable.*fourth phase forms.*four-phase split from that trial converged.*each of its phases is stable/,
+      );
+    });
+  }
+
+  it("case 6692: the four-phase split satisfies every equilibrium condition", () => {
+    // converged here from rough nearly-pure starts (not from the flash), then checked from the
+    // states alone: equal ln f recomputed, material balance, each phase stable
+    const c = cases[3];
+    const fluid = defineFluid({ components: c.ids });
+    const present = [0, 1, 2, 3, 4];
+    const start = [
+      [0.03, 0.2, 0.001, 0.77, 1e-9], // octane-rich liquid
+      [1e-12, 1e-8, 1e-11, 1e-12, 1], // water
+      [1e-8, 0.12, 0.88, 1e-9, 1e-9], // hydrogen-rich vapour
+      [0.04, 0.95, 1e-4, 2e-4, 2e-6], // CO2-rich liquid
+    ].map((x) => ({ x, lnPhi: [], densityMolPerM3: NaN, amount: 0.25 }));
+    const out = convergeMultiphase(fluid.model, c.T, c.P, c.z, present, start, 1e-11, 900);
+    expect(out.converged).toBe(true);
+    expect(out.phases.length).toBe(4);
+    const lnF = out.phases.map((p) => {
+      const f = phaseFugacityAtTP(fluid.model, c.T, c.P, p.x, "stable");
+      return present.map((i) => Math.log(p.x[i]) + f.lnPhi[i]);
+    });
+    for (let k = 1; k < 4; k++)
+      for (const i of present) expect(Math.abs(lnF[k][i] - lnF[0][i])).toBeLessThan(1e-10);
+    for (const i of present) {
+      const s = out.phases.reduce((a, p) => a + p.amount * p.x[i], 0);
+      expect(Math.abs(s - c.z[i])).toBeLessThan(1e-12);
+    }
+    for (const p of out.phases) {
+      expect(p.amount).toBeGreaterThan(0.01);
+      const t = stabilityAtTP(fluid.model, c.T, c.P, p.x, { extraTrials: present });
+      expect(t.stable).toBe(true);
     }
   });
 });

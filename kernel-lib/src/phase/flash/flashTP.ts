@@ -18,7 +18,9 @@
  *     in any of them adds a third phase (threePhaseSplit.ts), seeded with the trial composition of lowest tm; a phase
  *     that vanishes sends the flash back to two phases from the survivors; a two-phase result
  *     that stays unstable is a SolverError, never returned; a three-phase result is tested the
- *     same way, and one that is unstable (a fourth phase would form) is a SolverError too;
+ *     same way, and one that is unstable seeds a four-phase split: converged, it is a SolverError
+ *     reporting four phases (never returned); if a phase vanishes instead, the three survivors
+ *     are converged and tested again;
  *  4. every result is verified (verifyEquilibrium.ts): equal fugacity, Gibbs energy below the
  *     feed, material balance, no trivial solution, labels by density. Anything else is a
  *     SolverError naming the state and what was tried.
@@ -333,15 +335,63 @@ export function flashTP(
     );
   }
   if (phases.length === 3) {
-    // a three-phase split is tested like a two-phase one: a phase that is still unstable means
-    // a fourth phase (e.g. hydrogen, water, hydrocarbon and CO2/H2S-rich liquids below 170 K),
-    // which this flash does not look for; such a split is refused, never returned
-    const test = testPhases(phases);
-    finalStability = test;
-    if (!test.stable) {
+    // a three-phase split is tested like a two-phase one. A phase that is still unstable: the
+    // four-phase split from the trial phase is converged. If it converges, the equilibrium has
+    // four phases (e.g. hydrogen, water, hydrocarbon and CO2/H2S-rich liquids below 190 K),
+    // which this flash does not return: refused, with the four phases' verdict. If a phase
+    // vanishes on the way, the three survivors are another three-phase split, converged and
+    // tested again (the first one had a wrong set of phases).
+    for (let round = 0; ; round++) {
+      const test = testPhases(phases);
+      finalStability = test;
+      if (test.stable) break;
+      const unstable = `the converged three-phase split is not stable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)} for a trial phase)`;
+      const start: WorkingPhase[] = phases.map((p) => ({ ...p, amount: p.amount * 0.95 }));
+      start.push({
+        x: test.incipientComposition!.slice(),
+        lnPhi: [],
+        densityMolPerM3: NaN,
+        amount: 0.05,
+      });
+      const four = convergeMultiphase(
+        model,
+        T,
+        P,
+        zz,
+        present,
+        start,
+        tolerance,
+        3 * maxIterations,
+      );
+      iterations += four.iterations;
+      if (four.converged) {
+        const t4 = testPhases(four.phases);
+        const amounts = four.phases.map((p) => p.amount.toPrecision(4)).join(", ");
+        throw new SolverError(
+          "isothermal flash",
+          `at ${where()}: ${unstable}: a fourth phase forms. A four-phase split from that trial converged (amounts ${amounts}; max |ln f difference| ${four.error.toExponential(2)}) and ${t4.stable ? "each of its phases is stable in the tangent-plane test" : `is itself unstable (tm = ${t4.minimumTangentPlaneDistance.toExponential(3)}: more phases still)`}; this flash returns at most three`,
+        );
+      }
+      if (four.vanished && four.phases.length === 3 && round < 2) {
+        const three = convergeMultiphase(
+          model,
+          T,
+          P,
+          zz,
+          present,
+          four.phases,
+          tolerance,
+          3 * maxIterations,
+        );
+        iterations += three.iterations;
+        if (three.converged) {
+          phases = three.phases;
+          continue;
+        }
+      }
       throw new SolverError(
         "isothermal flash",
-        `at ${where()}: the converged three-phase split is not stable (tm = ${test.minimumTangentPlaneDistance.toExponential(3)} for a trial phase): a fourth phase would form, and this flash finds at most three`,
+        `at ${where()}: ${unstable}: a fourth phase would form, and the four-phase split from that trial ${four.reason ?? "failed"}${four.vanished ? ` (${four.phases.length} phases left)` : ""}; this flash finds at most three`,
       );
     }
   }
