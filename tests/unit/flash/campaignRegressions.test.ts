@@ -198,6 +198,58 @@ describe("trace components: a phase re-entering from zero with a huge K", () => 
   });
 });
 
+describe("the Q minimisation with K-values beyond 1e154 (their square overflows)", () => {
+  // campaign case 1206 (water kind, seed 20261204): hydrogen, n-decane, water and 5.5e-9
+  // isopentane at 107.2 K, 14.3 bar threw "after 100 Newton iterations the largest gradient is
+  // 1.69". K of n-decane between the decane-rich liquid and the water is 4.4e165 with
+  // Peng-Robinson there; the Hessian summed z_i K_ki K_li / E_i^2, E_i^2 overflowed to Infinity,
+  // decane dropped out of the Hessian and the Newton steps went nowhere. Summed as
+  // z_i (K_ki / E_i)(K_li / E_i), it converges in 7 steps. The model's answer is three phases:
+  // hydrogen vapour, a decane liquid, water (in a plant, decane and water would be solid at 107 K;
+  // the fluid-phase model does not represent solids).
+  const ids = ["hydrogen", "isopentane", "n-decane", "water"];
+  const z = normalise([0.141105, 5.48906e-9, 0.157597, 0.701298]);
+  const T = 107.17590225394815;
+  const P = 1434227.7459077975;
+
+  it("converges from the flash's own start and closes the balances", () => {
+    // K-values (relative to the water phase) and starting amounts the flash passed at the failure
+    const K = [
+      [1, 1, 1, 1],
+      [31818729773325.14, 4.034008304314934e76, 4.397711183916005e165, 6.777946018484605e-17],
+      [3763407737599225.5, 5.1954154113690274e66, 4.856251597582504e144, 1.7857114183844484e-19],
+    ];
+    const r = solveMultiphaseSplit(z, K, {
+      start: [0.6662330963430163, 0.2837669036569836, 0.05],
+    });
+    expect(r.gradient).toBeLessThanOrEqual(1e-12);
+    // the water phase holds all the water (its amount is z_water), the others are present
+    expect(Math.abs(r.beta[0] - z[3])).toBeLessThan(1e-12);
+    expect(r.beta[1]).toBeGreaterThan(0.1);
+    expect(r.beta[2]).toBeGreaterThan(0.1);
+    for (const x of r.x) expect(Math.abs(x.reduce((a, b) => a + b, 0) - 1)).toBeLessThan(1e-12);
+    for (let i = 0; i < z.length; i++) {
+      const sum = r.beta.reduce((a, b, k) => a + b * r.x[k][i], 0);
+      expect(Math.abs(sum - z[i]) / z[i]).toBeLessThan(1e-10);
+    }
+  });
+
+  it("H2 + n-decane + water (+ 5.5e-9 isopentane) at 107 K, 14 bar: three verified phases", () => {
+    const fluid = coldFluid(ids);
+    const eq = fluid.flashTP(T, P, z);
+    expect(expectVerified(fluid, eq, { stability: false })).toBe(3);
+    for (const p of eq.phases) {
+      const t = stabilityAtTP(fluid.model, T, P, p.state.x.slice(), { extraTrials: [0, 1, 2, 3] });
+      expect(t.stable, `${p.kind} phase`).toBe(true);
+    }
+    // hydrogen vapour, decane liquid, water
+    expect(eq.phases.map((p) => p.kind)).toEqual(["vapor", "liquid", "liquid-2"]);
+    expect(eq.phases[0].state.x[0]).toBeGreaterThan(0.999);
+    expect(eq.phases[1].state.x[2]).toBeGreaterThan(0.99);
+    expect(eq.phases[2].state.x[3]).toBeGreaterThan(0.999999);
+  });
+});
+
 describe("flashTP: a genuine fourth phase is a SolverError that says so", () => {
   // robustness slice cases 724, 3327, 6211 and 6692 (tests/unit/flash/robustness.test.ts, seed
   // 20261204): water, a hydrocarbon liquid, a CO2-, H2S- or N2-rich liquid and a hydrogen- or

@@ -164,8 +164,13 @@ export function solveMultiphaseSplit(
     }
     for (let i = 0; i < n; i++) {
       if (z[i] === 0) continue;
-      const w = z[i] / (E[i] * E[i]);
-      for (let k = 0; k < np; k++) for (let l = k; l < np; l++) H[k][l] += w * K[k][i] * K[l][i];
+      // as z_i (K_ki / E_i)(K_li / E_i): K of a heavy component between phases far apart in
+      // composition reaches 1e165 at 107 K, and K_ki K_li or E_i^2 would overflow (an infinite
+      // E_i^2 dropped that component from the Hessian)
+      for (let k = 0; k < np; k++) {
+        const a = K[k][i] / E[i];
+        for (let l = k; l < np; l++) H[k][l] += z[i] * a * (K[l][i] / E[i]);
+      }
     }
     for (let k = 0; k < np; k++) for (let l = 0; l < k; l++) H[k][l] = H[l][k];
     // active set: a phase at its bound with a non-negative gradient stays at zero
@@ -208,7 +213,7 @@ export function solveMultiphaseSplit(
     if (!accepted) break; // no decrease possible at this precision: converged to rounding
     for (let k = 0; k < np; k++) beta[k] = trial[k];
   }
-  if (gmax > Math.max(tol, 1e-10)) {
+  if (!(gmax <= Math.max(tol, 1e-10))) {
     throw new SolverError(
       METHOD,
       `after ${iterations} Newton iterations the largest gradient is ${gmax.toExponential(2)} (tolerance ${tol}); amounts [${beta.join(", ")}]`,
