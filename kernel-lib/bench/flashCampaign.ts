@@ -172,7 +172,15 @@ function errorKey(e: unknown): string {
     .replace(/z = \{[^}]*\}/g, "z")
     .replace(/-?\d+(\.\d+)?(e[-+]?\d+)?/gi, "#")
     .slice(0, 160);
-  return `${name}: ${text}`;
+  // the refusals of an unstable three-phase split, by what the four-phase split from it did
+  const four = e.message.includes("four-phase split")
+    ? e.message.includes("each of its phases is stable")
+      ? " [four phases, converged and stable]"
+      : e.message.includes("is itself unstable")
+        ? " [four-phase split converged but unstable]"
+        : " [four-phase split not converged]"
+    : "";
+  return `${name}: ${text}${four}`;
 }
 
 function makeCase(seed: number, index: number): Case {
