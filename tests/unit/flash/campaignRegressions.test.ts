@@ -250,6 +250,46 @@ describe("the Q minimisation with K-values beyond 1e154 (their square overflows)
   });
 });
 
+describe("three-phase split near a critical point: accelerated substitution", () => {
+  // campaign case 852 (near-critical kind, seed 20261204): H2, H2S, light hydrocarbons,
+  // n-decane and 3.4 % water 1.1 K below the hydrocarbon mixture's critical point (400.1 K,
+  // 329 bar). The vapour and the hydrocarbon liquid are nearly alike there; plain substitution of
+  // the three-phase split crawled (900 steps, max |ln f difference| 1.1e-10 against 1e-11) and
+  // the flash threw. With the dominant-eigenvalue acceleration (threePhaseSplit.ts) it converges.
+  it("H2 + H2S + C1-C3 + nC10 + water at 399 K, 329 bar: three verified phases", () => {
+    const ids = [
+      "hydrogen",
+      "hydrogen-sulfide",
+      "isobutane",
+      "methane",
+      "n-butane",
+      "n-decane",
+      "n-pentane",
+      "propane",
+      "water",
+    ];
+    const z = [
+      0.33585165696877645, 0.24164838781577364, 0.010852516270432024, 0.189351570510249,
+      6.756917680652063e-9, 0.0788753560571677, 5.114965828293936e-9, 0.10973474057215216,
+      0.03368575993356564,
+    ];
+    const T = 399.012310825362;
+    const P = 32895600.195712455;
+    const fluid = coldFluid(ids);
+    const eq = fluid.flashTP(T, P, z);
+    expect(expectVerified(fluid, eq, { stability: false })).toBe(3);
+    const present = z.map((_, i) => i);
+    for (const p of eq.phases) {
+      const t = stabilityAtTP(fluid.model, T, P, p.state.x.slice(), { extraTrials: present });
+      expect(t.stable, `${p.kind} phase`).toBe(true);
+    }
+    // the densest phase is the water (nearly pure), the other two the near-critical pair
+    expect(eq.phases[2].state.x[8]).toBeGreaterThan(0.9);
+    expect(eq.phases[0].amount).toBeGreaterThan(0.3);
+    expect(eq.phases[1].amount).toBeGreaterThan(0.3);
+  });
+});
+
 describe("flashTP: a genuine fourth phase is a SolverError that says so", () => {
   // robustness slice cases 724, 3327, 6211 and 6692 (tests/unit/flash/robustness.test.ts, seed
   // 20261204): water, a hydrocarbon liquid, a CO2-, H2S- or N2-rich liquid and a hydrogen- or

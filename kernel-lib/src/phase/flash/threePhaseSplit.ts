@@ -5,7 +5,10 @@
  * of lowest Gibbs energy (twoPhaseSplit.ts phaseLnPhi), as in M. L. Michelsen and J. M. Mollerup,
  * Thermodynamic Models: Fundamentals and Computational Aspects, 2nd ed. (2007), ch. 11. The
  * reference is the phase of largest amount. A phase whose amount stays at zero for three steps has
- * vanished: the caller goes on with the others.
+ * vanished: the caller goes on with the others. Every fifth step the ln K vector of all phases is
+ * extrapolated by the dominant eigenvalue of the substitution (M. L. Michelsen, Fluid Phase
+ * Equilib. 9 (1982) 21-40, as in twoPhaseSplit.ts), kept only when it lowers the largest ln f
+ * difference (near a critical point of two of the phases plain substitution crawls).
  */
 import type { ResidualModel } from "../../eos/types.js";
 import { solveMultiphaseSplit } from "./multiphaseRachfordRice.js";
@@ -48,14 +51,48 @@ export function convergeMultiphase(
   let iterations = 0;
   let r = 0;
   for (let k = 1; k < np; k++) if (phases[k].amount > phases[r].amount) r = k;
+  // dominant-eigenvalue acceleration (as in twoPhaseSplit.ts) of the ln K vector of all phases
+  let lastLnK: number[] | undefined;
+  let lastStep: number[] | undefined;
   for (; iterations < maxIterations; iterations++) {
+    const lnK: number[] = [];
+    for (let k = 0; k < np; k++)
+      for (const i of present) lnK.push(phases[r].lnPhi[i] - phases[k].lnPhi[i]);
+    let saved: { phases: WorkingPhase[]; zeroCount: number[]; error: number } | undefined;
+    const step = lastLnK === undefined ? undefined : lnK.map((v, j) => v - lastLnK![j]);
+    if (step !== undefined && lastStep !== undefined && iterations % 5 === 4) {
+      let dd = 0;
+      let dp = 0;
+      for (let j = 0; j < step.length; j++) {
+        dd += step[j] * step[j];
+        dp += lastStep[j] * step[j];
+      }
+      const lambda = dd / dp;
+      if (lambda > 0 && lambda < 1 && Number.isFinite(lambda)) {
+        saved = {
+          phases: phases.map((p) => ({ ...p, x: p.x.slice(), lnPhi: p.lnPhi.slice() })),
+          zeroCount: zeroCount.slice(),
+          error,
+        };
+        const factor = lambda / (1 - lambda);
+        for (let j = 0; j < lnK.length; j++) lnK[j] += factor * step[j];
+      }
+    }
+    lastStep = saved === undefined ? step : undefined;
+    lastLnK = saved === undefined ? lnK : undefined;
     const K: number[][] = [];
-    for (let k = 0; k < np; k++) {
+    for (let k = 0, j = 0; k < np; k++) {
       const row = new Array<number>(n).fill(1);
-      for (const i of present) row[i] = Math.exp(phases[r].lnPhi[i] - phases[k].lnPhi[i]);
+      for (const i of present) row[i] = Math.exp(lnK[j++]);
       K.push(row);
     }
-    const split = solveMultiphaseSplit(z, K, { start: phases.map((p) => Math.max(p.amount, 0)) });
+    let split: ReturnType<typeof solveMultiphaseSplit>;
+    try {
+      split = solveMultiphaseSplit(z, K, { start: phases.map((p) => Math.max(p.amount, 0)) });
+    } catch (e) {
+      if (saved === undefined) throw e;
+      continue; // the extrapolated K-values: no split; go on by plain substitution
+    }
     for (let k = 0; k < np; k++) {
       phases[k].amount = split.beta[k];
       phases[k].x = normalizeComposition(split.x[k]);
@@ -75,6 +112,13 @@ export function convergeMultiphase(
           phases[r].lnPhi[i];
         error = Math.max(error, Math.abs(d));
       }
+    }
+    if (saved !== undefined && !(error < saved.error)) {
+      // the extrapolation did not lower the fugacity error: back to the phases before it
+      for (let k = 0; k < np; k++) phases[k] = saved.phases[k];
+      for (let k = 0; k < np; k++) zeroCount[k] = saved.zeroCount[k];
+      error = saved.error;
+      continue;
     }
     if (zeroCount.some((c) => c >= 3)) {
       return {
