@@ -290,6 +290,30 @@ describe("three-phase split near a critical point: accelerated substitution", ()
   });
 });
 
+describe("two-phase Newton near a critical point: an indefinite Hessian", () => {
+  // campaign case 1209 (near-critical kind, seed 20261204): n-pentane/n-nonane 2e-6 above its
+  // critical temperature (549.72 K) and 0.05 % below its critical pressure (33.27 bar, both
+  // Heidemann-Khalil with Peng-Robinson). The feed is barely unstable (tm = -3.5e-8); the Hessian
+  // of the Gibbs energy is indefinite by about 1e-6 on the way, the unshifted Newton step
+  // ascends, and the shift restarted at 1e-3 gave steps of 1e-7: 293 Newton steps crept from
+  // 3.6e-8 nowhere and the flash threw. Raised tenfold from 1e-8, the shift converges it.
+  it("n-nonane + n-pentane at 549.72 K, 33.25 bar: two verified phases", () => {
+    const ids = ["n-nonane", "n-pentane"];
+    const z = [0.4788406515880627, 0.5211593484119372];
+    const T = 549.7223144834545;
+    const P = 3325429.6923596077;
+    const fluid = coldFluid(ids);
+    const eq = fluid.flashTP(T, P, z);
+    expect(expectVerified(fluid, eq, { stability: false })).toBe(2);
+    for (const p of eq.phases) {
+      const t = stabilityAtTP(fluid.model, T, P, p.state.x.slice(), { extraTrials: [0, 1] });
+      expect(t.stable, `${p.kind} phase`).toBe(true);
+      // a real split near the critical point: both phases present in bulk
+      expect(p.amount).toBeGreaterThan(0.3);
+    }
+  });
+});
+
 describe("flashTP: a genuine fourth phase is a SolverError that says so", () => {
   // robustness slice cases 724, 3327, 6211 and 6692 (tests/unit/flash/robustness.test.ts, seed
   // 20261204): water, a hydrocarbon liquid, a CO2-, H2S- or N2-rich liquid and a hydrogen- or

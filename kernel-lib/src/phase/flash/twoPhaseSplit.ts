@@ -370,20 +370,23 @@ function newton(
     }
     const rhs = g.map((gi, a) => -D[a] * gi);
     let accepted = false;
-    for (let attempt = 0; attempt < 8 && !accepted; attempt++) {
+    // the shift mu rises tenfold from 1e-8 (to 1e4 at most) until the step descends: near a
+    // critical point the Hessian is indefinite by about 1e-6, and a shift restarted at 1e-3
+    // after each unshifted step gave steps of 1e-7 in ln K, so Newton crept (campaign case 1209)
+    for (let attempt = 0; attempt < 13 && !accepted; attempt++) {
       const A = Hs.map((row, a) => row.map((h, b) => (a === b ? h + mu : h)));
       let stepS: number[];
       try {
         stepS = solveLinear(A, rhs);
       } catch {
-        mu = Math.max(1e-3, 10 * mu);
+        mu = Math.max(1e-8, 10 * mu);
         continue;
       }
       const step = stepS.map((s, a) => s * D[a]);
       let slope = 0;
       for (let a = 0; a < m; a++) slope += g[a] * step[a];
       if (!(slope < 0)) {
-        mu = Math.max(1e-3, 10 * mu);
+        mu = Math.max(1e-8, 10 * mu);
         continue;
       }
       // the largest step keeping 0 < v_i < z_i (at most 0.9 of the way to a bound)
@@ -417,12 +420,12 @@ function newton(
           v = trial;
           cur = next;
           accepted = true;
-          mu = mu * 0.1 < 1e-6 ? 0 : mu * 0.1;
+          mu = mu * 0.1 < 1e-8 ? 0 : mu * 0.1;
           break;
         }
         t *= 0.5;
       }
-      if (!accepted) mu = Math.max(1e-3, 10 * mu);
+      if (!accepted) mu = Math.max(1e-8, 10 * mu);
     }
     if (!accepted) break;
   }
