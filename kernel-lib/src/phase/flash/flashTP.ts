@@ -366,7 +366,15 @@ export function flashTP(
       iterations += four.iterations;
       if (four.converged) {
         const t4 = testPhases(four.phases);
-        const amounts = four.phases.map((p) => p.amount.toPrecision(4)).join(", ");
+        // each phase by its amount and its main component, e.g. "0.2877 (n-hexane 0.563)"
+        const ids = model.info.componentIds;
+        const amounts = four.phases
+          .map((p) => {
+            let main = present[0];
+            for (const i of present) if (p.x[i] > p.x[main]) main = i;
+            return `${p.amount.toPrecision(4)} (${ids[main]} ${p.x[main].toPrecision(3)})`;
+          })
+          .join(", ");
         throw new SolverError(
           "isothermal flash",
           `at ${where()}: ${unstable}: a fourth phase forms. A four-phase split from that trial converged (amounts ${amounts}; max |ln f difference| ${four.error.toExponential(2)}) and ${t4.stable ? "each of its phases is stable in the tangent-plane test" : `is itself unstable (tm = ${t4.minimumTangentPlaneDistance.toExponential(3)}: more phases still)`}; this flash returns at most three`,
