@@ -314,6 +314,42 @@ describe("two-phase Newton near a critical point: an indefinite Hessian", () => 
   });
 });
 
+describe("two-phase Newton: a component almost all in one phase keeps its precision", () => {
+  // campaign case 3700 (near-saturation kind, seed 20261204): CO2, methane, ethane, n-pentane,
+  // n-nonane, n-decane and 6.9e-9 n-heptane at 127.7 K, 0.7 bar, 1e-4 K below a bubble point.
+  // Both two-phase trials ran Newton to the end of its budget (293 steps) and the flash threw
+  // "the feed is unstable ... but no split converged". Newton's variables were the mole numbers
+  // v_i of one phase, the other's taken as z_i - v_i: a component almost all in one phase is
+  // then known in the other only to ulp(z_i) / l_i (in campaign case 7864, n-octane at 1.4e-10
+  // in a CO2/H2S-rich liquid: Newton stalled at max |ln f difference| 4.5e-8). Each component
+  // now moves in the phase that holds less of it; the flash returns three verified phases.
+  it("CO2 + C1 + C2 + nC5 + nC9 + nC10 (+ 6.9e-9 nC7) at 127.7 K, 0.7 bar: three verified phases", () => {
+    const ids = [
+      "carbon-dioxide",
+      "ethane",
+      "methane",
+      "n-decane",
+      "n-heptane",
+      "n-nonane",
+      "n-pentane",
+    ];
+    const z = [
+      0.3720846247093803, 0.15612926467630842, 0.12684605724482984, 0.22223525740420094,
+      6.9073808767203335e-9, 0.08060848185600912, 0.04209630720189065,
+    ];
+    const T = 127.72517421416417;
+    const P = 70582.09537723014;
+    const fluid = coldFluid(ids);
+    const eq = fluid.flashTP(T, P, z);
+    expect(expectVerified(fluid, eq, { stability: false })).toBe(3);
+    const present = z.map((_, i) => i);
+    for (const p of eq.phases) {
+      const t = stabilityAtTP(fluid.model, T, P, p.state.x.slice(), { extraTrials: present });
+      expect(t.stable, `${p.kind} phase`).toBe(true);
+    }
+  });
+});
+
 describe("flashTP: a genuine fourth phase is a SolverError that says so", () => {
   // robustness slice cases 724, 3327, 6211 and 6692 (tests/unit/flash/robustness.test.ts, seed
   // 20261204): water, a hydrocarbon liquid, a CO2-, H2S- or N2-rich liquid and a hydrogen- or

@@ -6,8 +6,8 @@
  * (GDEM with one eigenvalue: lambda = (D_k . D_k) / (D_{k-1} . D_k), ln K += D_k lambda / (1 - lambda),
  * kept only when it lowers the Gibbs energy), then, when substitution is slow (near a critical
  * point), Newton's method on the Gibbs energy in the mole numbers v_i of the y phase
- * (l_i = z_i - v_i; M. L. Michelsen and J. M. Mollerup, Thermodynamic Models: Fundamentals and
- * Computational Aspects, 2nd ed. 2007, ch. 10):
+ * (l_i = z_i - v_i, each updated in the phase holding less of i; M. L. Michelsen and J. M.
+ * Mollerup, Thermodynamic Models: Fundamentals and Computational Aspects, 2nd ed. 2007, ch. 10):
  *   g_i = ln f_i(y) - ln f_i(x),
  *   H_ij = (1/V)(delta_ij / y_i - 1 + n dln phi_i/dn_j (y)) + (1/L)(delta_ij / x_i - 1 + n dln phi_i/dn_j (x)),
  * in the scaled variables of that chapter (H~ = D H D with D_i = sqrt(V L x_i y_i / z_i), whose ideal
@@ -330,9 +330,18 @@ function newton(
   const n = z.length;
   const m = present.length;
   // the mole numbers of the y phase, and the current Gibbs energy
+  // the mole numbers of both phases: v_i in y, l_i = z_i - v_i in x. Each component moves in the
+  // phase that holds less of it and the other is z_i minus that: a component almost all in one
+  // phase (n-octane at 1e-10 in a CO2/H2S liquid beside 0.1 in a hydrocarbon liquid) would
+  // otherwise get its small amount as z_i - v_i, good only to ulp(z_i) / l_i ~ 4e-7, and Newton
+  // stalled at max |ln f difference| 4.5e-8 (campaign case 7864)
   let v = new Array<number>(n).fill(0);
-  for (const i of present) v[i] = start.beta * start.y[i];
-  let cur = phasesFromMoles(v);
+  let l = new Array<number>(n).fill(0);
+  for (const i of present) {
+    v[i] = start.beta * start.y[i];
+    l[i] = start.oneMinusBeta * start.x[i];
+  }
+  let cur = phasesFromMoles(v, l);
   let iterations = 0;
   let mu = 0;
   while (iterations < Math.max(1, budget)) {
@@ -394,14 +403,24 @@ function newton(
       for (let a = 0; a < m; a++) {
         const i = present[a];
         if (step[a] < 0) t = Math.min(t, (0.9 * v[i]) / -step[a]);
-        else if (step[a] > 0) t = Math.min(t, (0.9 * (z[i] - v[i])) / step[a]);
+        else if (step[a] > 0) t = Math.min(t, (0.9 * l[i]) / step[a]);
       }
       for (let back = 0; back < 20; back++) {
         const trial = v.slice();
-        for (let a = 0; a < m; a++) trial[present[a]] += t * step[a];
+        const trialL = l.slice();
+        for (let a = 0; a < m; a++) {
+          const i = present[a];
+          if (l[i] < v[i]) {
+            trialL[i] = l[i] - t * step[a];
+            trial[i] = z[i] - trialL[i];
+          } else {
+            trial[i] = v[i] + t * step[a];
+            trialL[i] = z[i] - trial[i];
+          }
+        }
         let next: ReturnType<typeof phasesFromMoles>;
         try {
-          next = phasesFromMoles(trial);
+          next = phasesFromMoles(trial, trialL);
         } catch (e) {
           if (e instanceof SolverError) {
             t *= 0.5;
@@ -418,6 +437,7 @@ function newton(
           next.gibbs <= gibbs + 1e-4 * t * slope || (err < 1e-5 && gradientNorm(next) < err);
         if (decreases) {
           v = trial;
+          l = trialL;
           cur = next;
           accepted = true;
           mu = mu * 0.1 < 1e-8 ? 0 : mu * 0.1;
@@ -432,19 +452,19 @@ function newton(
   const st = asState(cur, Infinity);
   return { converged: false, outcome: outcomeOf(st, iterations), state: st, iterations };
 
-  function phasesFromMoles(vv: number[]) {
+  function phasesFromMoles(vv: number[], ll: number[]) {
     let V = 0;
     let L = 0;
     for (const i of present) {
       V += vv[i];
-      L += z[i] - vv[i];
+      L += ll[i];
     }
     if (!(V > 0 && L > 0)) throw new SolverError("Newton flash step", "a phase amount left (0, 1)");
     const x = new Array<number>(n).fill(0);
     const y = new Array<number>(n).fill(0);
     for (const i of present) {
       y[i] = vv[i] / V;
-      x[i] = (z[i] - vv[i]) / L;
+      x[i] = ll[i] / L;
     }
     normalizeComposition(x);
     normalizeComposition(y);
