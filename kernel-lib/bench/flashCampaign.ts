@@ -176,8 +176,8 @@ function errorKey(e: unknown): string {
   const four = e.message.includes("four-phase split")
     ? e.message.includes("each of its phases is stable")
       ? " [four phases, converged and stable]"
-      : e.message.includes("is itself unstable")
-        ? " [four-phase split converged but unstable]"
+      : e.message.includes("is itself not stable")
+        ? " [four-phase split converged, not stable]"
         : " [four-phase split not converged]"
     : "";
   return `${name}: ${text}${four}`;

@@ -407,6 +407,33 @@ describe("flashTP: a genuine fourth phase is a SolverError that says so", () => 
     });
   }
 
+  it("campaign case 76: a four-phase split that is itself not stable is reported as such", () => {
+    // CO2, H2, H2S, C3-nC10 and 1 % water at 100.3 K, 0.59 bar: the four-phase split from the
+    // trial converges, but one of its phases is unstable again (tm about -0.95): five phases or
+    // another set of them. It must not be called a four-phase equilibrium.
+    const ids = [
+      "carbon-dioxide",
+      "hydrogen",
+      "hydrogen-sulfide",
+      "n-butane",
+      "n-decane",
+      "n-heptane",
+      "n-octane",
+      "n-pentane",
+      "propane",
+      "water",
+    ];
+    const z = [
+      0.14190863624624148, 0.03094461347331352, 0.07028348470423024, 0.32843564402998243,
+      0.1158344625734523, 4.001182908970276e-9, 0.18677946095391124, 0.04773648261411277,
+      0.06822734423288625, 0.009849867170686902,
+    ];
+    const fluid = coldFluid(ids);
+    expect(() => fluid.flashTP(100.34173356834799, 58898.21828181397, z)).toThrowError(
+      /four-phase split from that trial converged.*is itself not stable.*five phases or another set of them/,
+    );
+  });
+
   it("case 6692: the four-phase split satisfies every equilibrium condition", () => {
     // converged here from rough nearly-pure starts (not from the flash), then checked from the
     // states alone: equal ln f recomputed, material balance, each phase stable

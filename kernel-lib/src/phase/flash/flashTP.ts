@@ -377,7 +377,7 @@ export function flashTP(
           .join(", ");
         throw new SolverError(
           "isothermal flash",
-          `at ${where()}: ${unstable}: a fourth phase forms. A four-phase split from that trial converged (amounts ${amounts}; max |ln f difference| ${four.error.toExponential(2)}) and ${t4.stable ? "each of its phases is stable in the tangent-plane test" : `is itself unstable (tm = ${t4.minimumTangentPlaneDistance.toExponential(3)}: more phases still)`}; this flash returns at most three`,
+          `at ${where()}: ${unstable}: a fourth phase forms. A four-phase split from that trial converged (amounts ${amounts}; max |ln f difference| ${four.error.toExponential(2)}) and ${t4.stable ? "each of its phases is stable in the tangent-plane test" : `is itself not stable (tm = ${t4.minimumTangentPlaneDistance.toExponential(3)}): five phases or another set of them`}; this flash returns at most three`,
         );
       }
       if (four.vanished && four.phases.length === 3 && round < 2) {
