@@ -4,7 +4,9 @@
  * as one file (no module of dist besides itself); the library picks it from kernel-lib/dist
  * whatever the working folder (a notebook's kernel, the CLI) and through the installed package
  * name; a stale bundle (a tsc-only build after it) is passed over for the module-by-module entry;
- * a sweep on the bundle's workers equals the single-thread sweep exactly.
+ * a sweep on the bundle's workers equals the single-thread sweep exactly. startSweepWorkers
+ * starts the pool ahead of need: a later sweep starts no worker and sends no definition, and
+ * the started workers do not keep Node alive.
  */
 import { spawnSync } from "node:child_process";
 import * as fs from "node:fs";
@@ -16,7 +18,9 @@ import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import {
   closeSweepWorkers,
   defaultWorkerScript,
+  startSweepWorkers,
   sweepOnWorkers,
+  sweepWorkerStats,
   workerScriptIn,
 } from "../../../kernel-lib/src/parallel/sweepOnWorkers.js";
 import type { SweepRequest } from "../../../kernel-lib/src/sweep/types.js";
@@ -147,5 +151,59 @@ describe("the bundled sweep worker", () => {
     expect(Array.from(parallel.phaseKind)).toEqual(Array.from(single.phaseKind));
     expect(Array.from(parallel.errorCode)).toEqual(Array.from(single.errorCode));
     expect(parallel.errors).toEqual(single.errors);
+  });
+
+  it("starts ahead of need: the next sweep reuses the workers and fluids, Node still exits", async () => {
+    await closeSweepWorkers();
+    const gas = defineFluid({ components: ["methane", "ethane"], model: "peng-robinson" });
+    const request: SweepRequest = {
+      specification: "TP",
+      first: { from: 260.5, to: 380.5, count: 20 },
+      second: { from: 1e5, to: 8e6, count: 15 },
+      x: [0.9, 0.1],
+      phaseCheck: "none",
+      properties: ["h", "s"],
+    };
+    const before = sweepWorkerStats();
+    expect(startSweepWorkers({ workers: 2, fluids: [gas] })).toBe(2);
+    // workers already idle count: asking again starts none
+    expect(startSweepWorkers({ workers: 2, fluids: [gas] })).toBe(2);
+    const ready = sweepWorkerStats();
+    expect(ready.workers).toBe(2);
+    expect(ready.busy).toBe(0);
+    expect(ready.started - before.started).toBe(2);
+    expect(ready.definitions - before.definitions).toBe(2);
+    const single = gas.sweep(request);
+    const r = await sweepOnWorkers(gas, request, {
+      workers: 2,
+      threshold: 1,
+      rangeSize: 40,
+      progress: false,
+    });
+    const after = sweepWorkerStats();
+    expect(after.started).toBe(ready.started);
+    expect(after.definitions).toBe(ready.definitions);
+    for (const p of ["h", "s"] as const) {
+      const a = single.values[p]!;
+      const b = r.values[p]!;
+      for (let i = 0; i < a.length; i++) expect(Object.is(a[i], b[i]), `${p}[${i}]`).toBe(true);
+    }
+    expect(() => startSweepWorkers({ workers: 0 })).toThrow(/options\.workers/);
+  });
+
+  it("started workers that never sweep do not keep Node alive", () => {
+    const dist = path.join(root, "kernel-lib", "dist");
+    const script = `
+      const { defineFluid } = require(${JSON.stringify(dist + "/fluid/defineFluid.js")});
+      const { startSweepWorkers, sweepWorkerStats } = require(${JSON.stringify(dist + "/parallel/sweepOnWorkers.js")});
+      const gas = defineFluid({ components: ["methane"], model: "peng-robinson" });
+      const n = startSweepWorkers({ workers: 2, fluids: [gas] });
+      // a timer: the workers are running (loading) when the main script has nothing left to do
+      setTimeout(() => console.log("started", n, sweepWorkerStats().workers), 300);
+    `;
+    const r = spawnSync(process.execPath, ["-e", script], { encoding: "utf8", timeout: 30_000 });
+    expect(r.error, "the process did not exit by itself within 30 s").toBeUndefined();
+    expect(r.stdout.trim()).toBe("started 2 2");
+    expect(r.status).toBe(0);
   });
 });
