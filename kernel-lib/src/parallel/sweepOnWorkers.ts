@@ -72,6 +72,8 @@ const WORKER_FILE = "sweepWorker.js";
 /** The same entry bundled into one file by the build (kernel-lib/bundleWorker.js). */
 const WORKER_BUNDLE = "sweepWorker.bundle.js";
 
+let nextSweepId = 1;
+
 /**
  * The worker script in a folder of built files: the bundle when it is there and not older than
  * the entry (a tsc-only build after it leaves it stale), else the entry, else undefined.
@@ -118,6 +120,12 @@ export interface StartSweepWorkersOptions {
   fluids?: readonly Fluid[];
   /** The worker's built script. Default: {@link defaultWorkerScript}. */
   workerScript?: string;
+  /**
+   * A sweep to run the first `points` points of (default 20,000) in every worker, results
+   * dropped, so that the code it takes is compiled before the first real sweep (a cold worker
+   * spends about as long again compiling as loading). Its fluid is defined in the workers too.
+   */
+  warmUp?: { fluid: Fluid; request: SweepRequest; points?: number };
 }
 
 /**
@@ -145,11 +153,41 @@ export function startSweepWorkers(options: StartSweepWorkersOptions = {}): numbe
       received: workers,
     });
   }
+  const warmUp = options.warmUp;
+  const warmPlan =
+    warmUp === undefined ? undefined : planSweep(warmUp.request, warmUp.fluid.componentIds.length);
+  const points = warmUp?.points ?? 20_000;
+  if (!(Number.isInteger(points) && points >= 1)) {
+    throw new InputError({
+      input: "options.warmUp.points",
+      unit: "points",
+      validRange: "an integer >= 1",
+      received: points,
+    });
+  }
   const ready = prestartWorkers(options.workerScript ?? defaultWorkerScript(), workers);
   for (const fluid of options.fluids ?? []) {
     const key = specKey(fluid.spec);
     if (key === undefined || !transferableSpec(fluid.spec)) continue;
     for (const w of ready) defineIn(w, key, fluid.spec);
+  }
+  const warmKey = warmUp === undefined ? undefined : specKey(warmUp.fluid.spec);
+  if (
+    warmUp !== undefined &&
+    warmPlan !== undefined &&
+    warmKey !== undefined &&
+    transferableSpec(warmUp.fluid.spec)
+  ) {
+    const end = Math.min(points, warmPlan.count);
+    for (const w of ready) {
+      // the worker answers "done" (or "fail") to no one: the sweep id is this warm-up's own
+      const id = nextSweepId++;
+      defineIn(w, warmKey, warmUp.fluid.spec);
+      const columns = sharedColumns(warmPlan, end);
+      send(w, { type: "sweep", id, key: warmKey, request: warmUp.request, columns, chunk: 0 });
+      send(w, { type: "range", id, start: 0, end });
+      send(w, { type: "end", id });
+    }
   }
   return ready.length;
 }
@@ -175,8 +213,6 @@ function transferableSpec(spec: FluidSpec): boolean {
 function abortReason(signal: AbortSignal): unknown {
   return signal.reason ?? new Error("the sweep was aborted");
 }
-
-let nextSweepId = 1;
 
 /**
  * Range boundaries [0, b1, ..., count]: about `size` points each, multiples of `align` (the
@@ -429,8 +465,7 @@ function firstErrors(errors: SweepPointError[]): void {
  * The result arrays on SharedArrayBuffers (the workers write their ranges in place; the arrays
  * read and write as any typed array, and a structuredClone of one shares its memory).
  */
-function sharedColumns(plan: SweepPlan): SharedColumns {
-  const n = plan.count;
+function sharedColumns(plan: SweepPlan, n = plan.count): SharedColumns {
   return {
     values: plan.properties.map(() => new Float64Array(new SharedArrayBuffer(8 * n))),
     phaseCount: new Uint8Array(new SharedArrayBuffer(n)),

@@ -5,8 +5,9 @@
  * whatever the working folder (a notebook's kernel, the CLI) and through the installed package
  * name; a stale bundle (a tsc-only build after it) is passed over for the module-by-module entry;
  * a sweep on the bundle's workers equals the single-thread sweep exactly. startSweepWorkers
- * starts the pool ahead of need: a later sweep starts no worker and sends no definition, and
- * the started workers do not keep Node alive.
+ * starts the pool ahead of need (optionally running a warm-up sweep): a later sweep starts no
+ * worker and sends no definition, its numbers stay exact, and the started workers do not keep
+ * Node alive.
  */
 import { spawnSync } from "node:child_process";
 import * as fs from "node:fs";
@@ -191,14 +192,52 @@ describe("the bundled sweep worker", () => {
     expect(() => startSweepWorkers({ workers: 0 })).toThrow(/options\.workers/);
   });
 
+  it("a warm-up sweep ahead of need leaves the next sweep's numbers exact", async () => {
+    await closeSweepWorkers();
+    const gas = defineFluid({ components: ["methane", "n-butane"], model: "peng-robinson" });
+    const request: SweepRequest = {
+      specification: "TP",
+      first: { from: 230.5, to: 430.5, count: 30 },
+      second: { from: 2e5, to: 9e6, count: 20 },
+      x: [0.7, 0.3],
+      phaseCheck: "stability",
+      properties: ["h", "s", "rho", "quality"],
+    };
+    const before = sweepWorkerStats();
+    // the warm-up's fluid is defined once per worker; a partial warm-up (fewer points than asked)
+    const n = startSweepWorkers({ workers: 2, warmUp: { fluid: gas, request, points: 150 } });
+    expect(n).toBe(2);
+    expect(sweepWorkerStats().definitions - before.definitions).toBe(2);
+    const single = gas.sweep(request);
+    const r = await sweepOnWorkers(gas, request, {
+      workers: 2,
+      threshold: 1,
+      rangeSize: 33,
+      progress: false,
+    });
+    expect(sweepWorkerStats().started - before.started).toBe(2);
+    for (const p of request.properties) {
+      const a = single.values[p]!;
+      const b = r.values[p]!;
+      for (let i = 0; i < a.length; i++) expect(Object.is(a[i], b[i]), `${p}[${i}]`).toBe(true);
+    }
+    expect(Array.from(r.phaseKind)).toEqual(Array.from(single.phaseKind));
+    expect(r.errors).toEqual(single.errors);
+    expect(() =>
+      startSweepWorkers({ workers: 1, warmUp: { fluid: gas, request, points: 0 } }),
+    ).toThrow(/options\.warmUp\.points/);
+  });
+
   it("started workers that never sweep do not keep Node alive", () => {
     const dist = path.join(root, "kernel-lib", "dist");
     const script = `
       const { defineFluid } = require(${JSON.stringify(dist + "/fluid/defineFluid.js")});
       const { startSweepWorkers, sweepWorkerStats } = require(${JSON.stringify(dist + "/parallel/sweepOnWorkers.js")});
       const gas = defineFluid({ components: ["methane"], model: "peng-robinson" });
-      const n = startSweepWorkers({ workers: 2, fluids: [gas] });
-      // a timer: the workers are running (loading) when the main script has nothing left to do
+      const request = { specification: "TP", first: { from: 200, to: 400, count: 50 },
+        second: { from: 1e5, to: 1e7, count: 40 }, phaseCheck: "none", properties: ["h", "s"] };
+      // workers loading, then sweeping their warm-up, while the main script has nothing left to do
+      const n = startSweepWorkers({ workers: 2, fluids: [gas], warmUp: { fluid: gas, request } });
       setTimeout(() => console.log("started", n, sweepWorkerStats().workers), 300);
     `;
     const r = spawnSync(process.execPath, ["-e", script], { encoding: "utf8", timeout: 30_000 });
