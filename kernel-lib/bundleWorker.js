@@ -22,6 +22,8 @@ function bundleWorker() {
   const esbuild = require(require.resolve("esbuild", { paths: [__dirname] }));
   esbuild.buildSync({
     entryPoints: [ENTRY],
+    // paths in the bundle's comments relative to kernel-lib/, whatever the working folder
+    absWorkingDir: __dirname,
     outfile: BUNDLE,
     bundle: true,
     platform: "node",
