@@ -9,7 +9,9 @@
  * grid the ranges start at row starts (the fast route starts each point from the previous points
  * of its temperature row). Progress goes through progress/; an AbortSignal terminates the
  * sweep's workers at once (the pool replaces them in the next sweep) and rejects with the
- * signal's reason. The workers run the built JavaScript of kernel-lib/dist (`npm run build`).
+ * signal's reason. The workers run the built JavaScript of kernel-lib/dist (`npm run build`),
+ * bundled into one file by the build so that a worker starts by loading one file;
+ * startSweepWorkers starts them ahead of need (optionally warming their code up).
  */
 import * as fs from "node:fs";
 import * as os from "node:os";
