@@ -34,7 +34,11 @@ import * as path from "node:path";
 import { performance } from "node:perf_hooks";
 import { Worker } from "node:worker_threads";
 import { defineFluid } from "../src/fluid/defineFluid.js";
-import { closeSweepWorkers, sweepOnWorkers } from "../src/parallel/sweepOnWorkers.js";
+import {
+  closeSweepWorkers,
+  sweepOnWorkers,
+  workerScriptIn,
+} from "../src/parallel/sweepOnWorkers.js";
 import type { SweepRequest } from "../src/sweep/types.js";
 import { median } from "./harness.js";
 import { TEN, X10 } from "./cases/richGas.js";
@@ -121,8 +125,9 @@ async function main(): Promise<void> {
   if (!(Number.isInteger(rounds) && rounds >= 1))
     throw new Error("--rounds expects an integer >= 1");
   const cold = argv.includes("--cold");
-  const script = path.resolve(process.cwd(), "kernel-lib", "dist", "parallel", "sweepWorker.js");
-  if (!fs.existsSync(script)) throw new Error(`${script} is missing: run \`npm run build\` first`);
+  const dir = path.resolve(process.cwd(), "kernel-lib", "dist", "parallel");
+  const script = workerScriptIn(dir);
+  if (script === undefined) throw new Error(`no worker in ${dir}: run \`npm run build\` first`);
   const cores = os.availableParallelism();
   const fluid = defineFluid({ components: TEN, model: "peng-robinson" });
   const loadBefore = os.loadavg().map(round3);

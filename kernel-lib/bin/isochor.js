@@ -2,8 +2,9 @@
 /**
  * The `isochor` command as npm links it (`npx isochor ...` right after `npm ci`): runs the compiled
  * command line, dist/cli/main.js. In a fresh clone nothing is compiled yet, so the first use
- * compiles the package once with the workspace's TypeScript (tsc, up to a minute), saying so on
- * stderr; later uses start at once. After changing the sources, `npm run build` compiles again.
+ * compiles the package once with the workspace's TypeScript (tsc, up to a minute; then bundles the
+ * sweep worker, bundleWorker.js), saying so on stderr; later uses start at once. After changing
+ * the sources, `npm run build` compiles again.
  */
 "use strict";
 /* eslint-disable @typescript-eslint/no-require-imports -- a CommonJS launcher, run by node as is */
@@ -30,6 +31,14 @@ function build() {
   });
   if (result.status !== 0 || !fs.existsSync(entry)) {
     return "the compile failed (messages above); fix them or run `npm run build` to see them again.";
+  }
+  try {
+    // the sweep worker as one file (faster worker start); without it workers load dist module by module
+    require(path.join(packageDir, "bundleWorker.js")).bundleWorker();
+  } catch (e) {
+    process.stderr.write(
+      `isochor: the sweep worker bundle was not made (${e.message}); sweeps still run.\n`,
+    );
   }
   process.stderr.write(
     "isochor: compiled. The explorers' browser bundle is built by `npm run build`.\n",

@@ -3,11 +3,14 @@
  * state) and through fluid.sweep (typed arrays, the allocation-free cubic path), in one run so
  * their ratio is measured under the same load.
  */
-import * as fs from "node:fs";
 import * as os from "node:os";
 import * as path from "node:path";
 import { defineFluid } from "../../src/fluid/defineFluid.js";
-import { closeSweepWorkers, sweepOnWorkers } from "../../src/parallel/sweepOnWorkers.js";
+import {
+  closeSweepWorkers,
+  sweepOnWorkers,
+  workerScriptIn,
+} from "../../src/parallel/sweepOnWorkers.js";
 import type { BenchCase } from "../harness.js";
 import { TEN, X10 } from "./richGas.js";
 
@@ -118,8 +121,10 @@ export const sweepCases: BenchCase[] = [
 
 /** The built worker script (the bench bundle runs from out/bench; workers need kernel-lib/dist). */
 function workerScript(): string {
-  const file = path.resolve(process.cwd(), "kernel-lib", "dist", "parallel", "sweepWorker.js");
-  if (!fs.existsSync(file)) throw new Error(`${file} is missing: run \`npm run build\` first`);
+  // the build's one-file bundle, as the library picks it (else the module-by-module entry)
+  const dir = path.resolve(process.cwd(), "kernel-lib", "dist", "parallel");
+  const file = workerScriptIn(dir);
+  if (file === undefined) throw new Error(`no worker in ${dir}: run \`npm run build\` first`);
   return file;
 }
 

@@ -9,7 +9,9 @@
  * grid the ranges start at row starts (the fast route starts each point from the previous points
  * of its temperature row). Progress goes through progress/; an AbortSignal terminates the
  * sweep's workers at once (the pool replaces them in the next sweep) and rejects with the
- * signal's reason. The workers run the built JavaScript of kernel-lib/dist (`npm run build`).
+ * signal's reason. The workers run the built JavaScript of kernel-lib/dist (`npm run build`),
+ * bundled into one file by the build so that a worker starts by loading one file;
+ * startSweepWorkers starts them ahead of need (optionally warming their code up).
  */
 import * as fs from "node:fs";
 import * as os from "node:os";
@@ -26,7 +28,15 @@ import {
 import { startProgress, type ProgressOptions, type ProgressTracker } from "../progress/progress.js";
 import type { FromWorker, SharedColumns } from "./messages.js";
 import { specKey } from "./specKey.js";
-import { defineIn, discardWorker, forget, returnWorker, send, takeWorkers } from "./workerPool.js";
+import {
+  defineIn,
+  discardWorker,
+  forget,
+  prestartWorkers,
+  returnWorker,
+  send,
+  takeWorkers,
+} from "./workerPool.js";
 
 export { closeSweepWorkers, sweepWorkerStats, type SweepWorkerStats } from "./workerPool.js";
 
@@ -53,24 +63,141 @@ export interface ParallelSweepOptions {
    * are rounded to whole rows.
    */
   rangeSize?: number;
-  /** The worker's built script. Default: dist/parallel/sweepWorker.js of this package. */
+  /**
+   * The worker's built script. Default: dist/parallel/sweepWorker.bundle.js of this package (the
+   * build's one-file bundle), or dist/parallel/sweepWorker.js when there is no current bundle.
+   */
   workerScript?: string;
 }
 
 const WORKER_FILE = "sweepWorker.js";
+/** The same entry bundled into one file by the build (kernel-lib/bundleWorker.js). */
+const WORKER_BUNDLE = "sweepWorker.bundle.js";
 
-/** The built worker script: beside this file when it runs from dist, else kernel-lib/dist. */
+let nextSweepId = 1;
+
+/**
+ * The worker script in a folder of built files: the bundle when it is there and not older than
+ * the entry (a tsc-only build after it leaves it stale), else the entry, else undefined.
+ */
+export function workerScriptIn(dir: string): string | undefined {
+  const entry = path.join(dir, WORKER_FILE);
+  const bundle = path.join(dir, WORKER_BUNDLE);
+  const entryStat = fs.statSync(entry, { throwIfNoEntry: false });
+  const bundleStat = fs.statSync(bundle, { throwIfNoEntry: false });
+  if (
+    bundleStat !== undefined &&
+    (entryStat === undefined || bundleStat.mtimeMs >= entryStat.mtimeMs)
+  ) {
+    return bundle;
+  }
+  return entryStat !== undefined ? entry : undefined;
+}
+
+/**
+ * The built worker script: beside this file when it runs from dist, else kernel-lib/dist; the
+ * one-file bundle of the build (one file to load: a worker starts faster) when it is current.
+ */
 export function defaultWorkerScript(): string {
   const candidates = [
-    path.join(__dirname, WORKER_FILE),
-    path.resolve(__dirname, "..", "..", "dist", "parallel", WORKER_FILE),
-    path.resolve(process.cwd(), "kernel-lib", "dist", "parallel", WORKER_FILE),
+    __dirname,
+    path.resolve(__dirname, "..", "..", "dist", "parallel"),
+    path.resolve(process.cwd(), "kernel-lib", "dist", "parallel"),
   ];
-  for (const c of candidates) if (fs.existsSync(c)) return c;
+  for (const dir of candidates) {
+    const script = workerScriptIn(dir);
+    if (script !== undefined) return script;
+  }
   throw new IsochorError(
     "runner-failed",
-    `the sweep worker script was not found (looked at ${candidates.join(", ")}): run \`npm run build\` first, or pass options.workerScript`,
+    `the sweep worker script was not found (looked for ${WORKER_BUNDLE} or ${WORKER_FILE} in ${candidates.join(", ")}): run \`npm run build\` first, or pass options.workerScript`,
   );
+}
+
+/** Options of {@link startSweepWorkers}. */
+export interface StartSweepWorkersOptions {
+  /** Worker threads to have ready. Default: the number of cores (os.availableParallelism). */
+  workers?: number;
+  /** Fluids to define in every worker ahead of their sweeps (those with plain-data definitions). */
+  fluids?: readonly Fluid[];
+  /** The worker's built script. Default: {@link defaultWorkerScript}. */
+  workerScript?: string;
+  /**
+   * A sweep to run the first `points` points of (default 20,000) in every worker, results
+   * dropped, so that the code it takes is compiled before the first real sweep (a cold worker
+   * spends about as long again compiling as loading). Its fluid is defined in the workers too.
+   */
+  warmUp?: { fluid: Fluid; request: SweepRequest; points?: number };
+}
+
+/**
+ * Starts the sweep pool's worker threads ahead of need (and defines `fluids` in them), so that
+ * the first parallel sweep finds them loaded instead of waiting for each to start (a worker
+ * costs about a tenth of a second of one core to start). The workers are idle and unref()ed from
+ * the start: they never keep Node alive, and a process that never sweeps simply exits. Workers
+ * already idle in the pool count. Returns the number of workers ready or starting.
+ *
+ * @example
+ * ```ts
+ * startSweepWorkers({ fluids: [gas] }); // early in a notebook: the threads load meanwhile
+ * // ... later cells ...
+ * const r = await sweepOnWorkers(gas, request);
+ * ```
+ * @throws InputError for a workers option that is not an integer >= 1.
+ */
+export function startSweepWorkers(options: StartSweepWorkersOptions = {}): number {
+  const workers = options.workers ?? cores();
+  if (!(Number.isInteger(workers) && workers >= 1)) {
+    throw new InputError({
+      input: "options.workers",
+      unit: "-",
+      validRange: "an integer >= 1",
+      received: workers,
+    });
+  }
+  const warmUp = options.warmUp;
+  const warmPlan =
+    warmUp === undefined ? undefined : planSweep(warmUp.request, warmUp.fluid.componentIds.length);
+  const points = warmUp?.points ?? 20_000;
+  if (!(Number.isInteger(points) && points >= 1)) {
+    throw new InputError({
+      input: "options.warmUp.points",
+      unit: "points",
+      validRange: "an integer >= 1",
+      received: points,
+    });
+  }
+  const ready = prestartWorkers(options.workerScript ?? defaultWorkerScript(), workers);
+  for (const fluid of options.fluids ?? []) {
+    const key = specKey(fluid.spec);
+    if (key === undefined || !transferableSpec(fluid.spec)) continue;
+    for (const w of ready) defineIn(w, key, fluid.spec);
+  }
+  const warmKey = warmUp === undefined ? undefined : specKey(warmUp.fluid.spec);
+  if (
+    warmUp !== undefined &&
+    warmPlan !== undefined &&
+    warmKey !== undefined &&
+    transferableSpec(warmUp.fluid.spec)
+  ) {
+    const end = Math.min(points, warmPlan.count);
+    for (const w of ready) {
+      // the worker answers "done" (or "fail") to no one: the sweep id is this warm-up's own
+      const id = nextSweepId++;
+      defineIn(w, warmKey, warmUp.fluid.spec);
+      const columns = sharedColumns(warmPlan, end);
+      send(w, { type: "sweep", id, key: warmKey, request: warmUp.request, columns, chunk: 0 });
+      send(w, { type: "range", id, start: 0, end });
+      send(w, { type: "end", id });
+    }
+  }
+  return ready.length;
+}
+
+function cores(): number {
+  return typeof os.availableParallelism === "function"
+    ? os.availableParallelism()
+    : os.cpus().length;
 }
 
 /** Whether a fluid's definition can be sent to a worker (plain data, built-in model). */
@@ -88,8 +215,6 @@ function transferableSpec(spec: FluidSpec): boolean {
 function abortReason(signal: AbortSignal): unknown {
   return signal.reason ?? new Error("the sweep was aborted");
 }
-
-let nextSweepId = 1;
 
 /**
  * Range boundaries [0, b1, ..., count]: about `size` points each, multiples of `align` (the
@@ -148,9 +273,7 @@ export async function sweepOnWorkers(
 ): Promise<SweepResult> {
   const plan = planSweep(request, fluid.componentIds.length);
   const threshold = options.threshold ?? 20_000;
-  const cores =
-    typeof os.availableParallelism === "function" ? os.availableParallelism() : os.cpus().length;
-  const workers = options.workers ?? cores;
+  const workers = options.workers ?? cores();
   if (!(Number.isInteger(workers) && workers >= 1)) {
     throw new InputError({
       input: "options.workers",
@@ -344,8 +467,7 @@ function firstErrors(errors: SweepPointError[]): void {
  * The result arrays on SharedArrayBuffers (the workers write their ranges in place; the arrays
  * read and write as any typed array, and a structuredClone of one shares its memory).
  */
-function sharedColumns(plan: SweepPlan): SharedColumns {
-  const n = plan.count;
+function sharedColumns(plan: SweepPlan, n = plan.count): SharedColumns {
   return {
     values: plan.properties.map(() => new Float64Array(new SharedArrayBuffer(8 * n))),
     phaseCount: new Uint8Array(new SharedArrayBuffer(n)),

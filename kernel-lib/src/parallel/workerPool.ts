@@ -11,7 +11,8 @@
  *  - a worker that crashes, exits, or is terminated (cancellation) leaves the pool at once and the
  *    next sweep starts a new one in its place; idle workers beyond max(cores, the most any sweep
  *    asked for) are terminated when returned;
- *  - {@link closeSweepWorkers} terminates them all (a later sweep starts new ones).
+ *  - {@link closeSweepWorkers} terminates them all (a later sweep starts new ones);
+ *  - startSweepWorkers (sweepOnWorkers.ts) starts them ahead of need, idle and unref()ed.
  */
 import * as os from "node:os";
 import { Worker } from "node:worker_threads";
@@ -98,6 +99,21 @@ export function takeWorkers(script: string, n: number, key: string): PoolWorker[
     w.worker.ref();
   }
   return taken;
+}
+
+/**
+ * Starts workers of `script` ahead of need until the pool holds `n` idle ones; they load the
+ * script at once but stay idle and unref()ed (they never keep Node alive). Returns them.
+ */
+export function prestartWorkers(script: string, n: number): PoolWorker[] {
+  keep = Math.max(keep, n);
+  const idle = [...poolOf(script)].filter((w) => w.alive && !w.busy);
+  while (idle.length < n) {
+    const w = startWorker(script);
+    w.worker.unref();
+    idle.push(w);
+  }
+  return idle.slice(0, n);
 }
 
 /** Sends a message to a worker of the pool. */
