@@ -13,7 +13,7 @@ import fc from "fast-check";
 import { createModel } from "../../../kernel-lib/src/eos/createModel.js";
 import { getComponent } from "../../../kernel-lib/src/components/getComponent.js";
 import { dPdRho, residualGibbsTP } from "../../../kernel-lib/src/eos/residualRelations.js";
-import type { ResidualDerivativesDraft } from "../../../kernel-lib/src/eos/types.js";
+import { zeroResidualDraft } from "../../../kernel-lib/src/eos/residualDraft.js";
 import {
   chooseDensityRoot,
   chooseDensityRootInto,
@@ -26,17 +26,7 @@ import type { PhaseRequest } from "../../../kernel-lib/src/state/types.js";
 
 const model = createModel("peng-robinson", [getComponent("methane")]) as ModelWithResidualInto;
 const x = [1];
-const draft = (): ResidualDerivativesDraft => ({
-  a: 0,
-  aD: 0,
-  aDD: 0,
-  aT: 0,
-  aTT: 0,
-  aDT: 0,
-  aDDD: 0,
-  aDDT: 0,
-  dnA: undefined,
-});
+const draft = zeroResidualDraft;
 const FIELDS = ["densityMolPerM3", "index", "stableCount", "lowestGibbsOverRT"] as const;
 const REQUESTS: readonly PhaseRequest[] = ["stable", "liquid", "vapor"];
 
