@@ -20,8 +20,16 @@
  * roundoff) are returned as a repeated root, listed once per multiplicity. A repeated root is
  * intrinsically ill-conditioned: a double root is determined only to about sqrt(eps) relative,
  * a triple root to about eps^(1/3); the residuals say how well each returned root satisfies p.
+ *
+ * Coefficients near the smallest or the largest doubles: the rescaling divides by s, s^2, s^3
+ * in turn where s^2 or s^3 would underflow to 0 or overflow (s itself is at most 2^1023), and the
+ * quadratic's 4 a c / size^2 is formed without Infinity * 0, so x^3 - 5e-324 x has its three
+ * roots, not NaN. Where c2/c3, c1/c3 or c0/c3 is not a finite double the cubic is refused
+ * (OutOfRangeError, c3); where a nonzero coefficient drops below the normal range on the way to
+ * the rescaled cubic (sizes spanning more than the doubles' range), each root is verified by
+ * its backward error and a failure is a SolverError; a root that is not finite is one as well.
  */
-import { InputError } from "../errors.js";
+import { InputError, OutOfRangeError, SolverError } from "../errors.js";
 
 /** Options of {@link realCubicRoots}. */
 export interface CubicRootsOptions {
@@ -44,6 +52,8 @@ export interface CubicRootsResult {
 
 const EPS = Number.EPSILON;
 const COEFFICIENT_NAMES = ["c3", "c2", "c1", "c0"] as const;
+// the largest power of two among the doubles: the cap of the rescaling factor s (2^1024 is Infinity)
+const MAX_POWER_OF_TWO = 2 ** 1023;
 
 /**
  * All real roots of c3 x^3 + c2 x^2 + c1 x + c0 = 0, ascending.
@@ -56,7 +66,9 @@ const COEFFICIENT_NAMES = ["c3", "c2", "c1", "c0"] as const;
  * // (x - 1)(x - 2)(x - 3) = x^3 - 6x^2 + 11x - 6
  * realCubicRoots(1, -6, 11, -6).roots; // [1, 2, 3]
  * ```
- * @throws InputError if a coefficient is NaN or infinite, or all are zero.
+ * @throws InputError if a coefficient is NaN or infinite, or all are zero; OutOfRangeError (c3)
+ *   where c2/c3, c1/c3 or c0/c3 is not a finite double; SolverError where a root is not finite
+ *   or, with coefficients spanning more than the doubles' range, fails its verification.
  */
 export function realCubicRoots(
   c3: number,
@@ -88,7 +100,7 @@ export function realCubicRoots(
  * const n = realCubicRootsInto(1, -6, 11, -6, out); // n = 3, out = [1, 2, 3]
  * ```
  * @throws InputError if a coefficient is NaN or infinite, if all are zero, or if `out` holds fewer
- *   than 3 numbers.
+ *   than 3 numbers; OutOfRangeError and SolverError as {@link realCubicRoots}.
  */
 export function realCubicRootsInto(
   c3: number,
@@ -149,10 +161,20 @@ function solveInto(
 
   const raw = rawScratch;
   let count: number;
+  lostBelowNormal = false;
   if (c3 !== 0) {
     // monic already (the Z-cubic of an equation of state): no divisions on the critical path
-    count =
-      c3 === 1 ? closedFormCubic(c2, c1, c0, raw) : closedFormCubic(c2 / c3, c1 / c3, c0 / c3, raw);
+    if (c3 === 1) {
+      count = closedFormCubic(c2, c1, c0, raw);
+    } else {
+      const a = c2 / c3;
+      const b = c1 / c3;
+      const c = c0 / c3;
+      checkMonic(c3, c2, c1, c0, a, b, c);
+      const lost = leftNormalRange(c2, a) || leftNormalRange(c1, b) || leftNormalRange(c0, c);
+      count = closedFormCubic(a, b, c, raw);
+      lostBelowNormal ||= lost;
+    }
   } else if (c2 !== 0) {
     count = quadraticRoots(c2, c1, c0, raw, 0);
   } else if (c1 !== 0) {
@@ -200,6 +222,26 @@ function solveInto(
       px = pNew;
       if (Math.abs(step) <= 2 * EPS * Math.abs(x)) break;
     }
+    // verified before it is returned: a finite x; and where the normalisation or the rescaling
+    // took a nonzero coefficient below the normal range (its last bits or all of it lost, so the
+    // closed form solved another cubic), the backward error of a computed root,
+    // |p(x)| <= 64 eps sum |c_i x^i| (plus 64 subnormal units where the terms underflow)
+    if (
+      !(Math.abs(x) < Infinity) ||
+      (lostBelowNormal &&
+        !(
+          Math.abs(px) <=
+          64 *
+            EPS *
+            (Math.abs(c3 * x * x * x) + Math.abs(c2 * x * x) + Math.abs(c1 * x) + Math.abs(c0)) +
+            64 * Number.MIN_VALUE
+        ))
+    ) {
+      throw new SolverError(
+        "real cubic roots (closed form, Numerical Recipes 3rd ed. sec. 5.6, power-of-two rescaling)",
+        `the coefficients (c3, c2, c1, c0) = (${c3}, ${c2}, ${c1}, ${c0}) gave x = ${x} with p(x) = ${px}, not verified as a root: their sizes span more than the range of doubles; substitute x = k y with a power of two k`,
+      );
+    }
     // insertion sort into out (at most 3 roots): ascending without a comparator closure
     let j = i;
     while (j > 0 && out[j - 1] > x) {
@@ -216,9 +258,57 @@ function horner(c3: number, c2: number, c1: number, c0: number, x: number): numb
   return ((c3 * x + c2) * x + c1) * x + c0;
 }
 
-/** Smallest power of two >= v (v > 0), so that rescaling is exact. */
+/**
+ * Refuses the monic form (a, b, c) = (c2, c1, c0) / c3 where one of them is not a finite double
+ * (c3 near the smallest doubles beside the others): the monic form cannot hold that cubic.
+ */
+function checkMonic(
+  c3: number,
+  c2: number,
+  c1: number,
+  c0: number,
+  a: number,
+  b: number,
+  c: number,
+): void {
+  if (!(Math.abs(a) < Infinity && Math.abs(b) < Infinity && Math.abs(c) < Infinity)) {
+    throw new OutOfRangeError({
+      input: "c3",
+      unit: "-",
+      validRange: `large enough beside (c2, c1, c0) = (${c2}, ${c1}, ${c0}) that c2/c3, c1/c3 and c0/c3 are finite doubles`,
+      received: c3,
+      hint: "Substitute x = k y with a power of two k to bring the coefficients together",
+    });
+  }
+}
+
+// the smallest normal double, 2^-1022
+const MIN_NORMAL = 2 ** -1022;
+
+// set by solveInto and closedFormCubic: a nonzero coefficient left the normal range on its way
+// to the rescaled cubic (read by solveInto right after; single-threaded, as polishStepsOfLastSolve)
+let lostBelowNormal = false;
+
+/** True when a nonzero coefficient `v` became `scaled` below the normal range (bits lost). */
+function leftNormalRange(v: number, scaled: number): boolean {
+  return v !== 0 && !(Math.abs(scaled) >= MIN_NORMAL) && Math.abs(v) >= MIN_NORMAL;
+}
+
+/** Smallest power of two >= v (v > 0), so that rescaling is exact; at most 2^1023. */
 function powerOfTwoAtLeast(v: number): number {
-  return Math.pow(2, Math.ceil(Math.log2(v)));
+  return Math.min(Math.pow(2, Math.ceil(Math.log2(v))), MAX_POWER_OF_TWO);
+}
+
+/**
+ * v / s^k for the rescaling factor s (a power of two) and k = 2 or 3: one division by s^k where
+ * s^k is a nonzero finite double (exact, the path of every ordinary cubic), else k divisions by
+ * s. Coefficients near the smallest doubles (x^3 - 5e-324 x) make s^k underflow to 0 (0/0 gave
+ * NaN roots); near the largest, s^k overflows to Infinity (v / Infinity dropped the coefficient).
+ */
+function overPowerOf(v: number, s: number, k: 2 | 3): number {
+  const sk = k === 2 ? s * s : s * s * s;
+  if (sk > 0 && sk < Infinity) return v / sk;
+  return k === 2 ? v / s / s : v / s / s / s;
 }
 
 /**
@@ -245,8 +335,10 @@ function closedFormCubic(a: number, b: number, c: number, out: Float64Array): nu
     s = powerOfTwoAtLeast(size);
   }
   const A = s === 1 ? a : a / s;
-  const B = s === 1 ? b : b / (s * s);
-  const C = s === 1 ? c : c / (s * s * s);
+  const B = s === 1 ? b : overPowerOf(b, s, 2);
+  const C = s === 1 ? c : overPowerOf(c, s, 3);
+  lostBelowNormal =
+    s > 1 && (leftNormalRange(a, A) || leftNormalRange(b, B) || leftNormalRange(c, C));
 
   const Q = (A * A - 3 * B) / 9; // eq. 5.6.10
   const R = (2 * A * A * A - 9 * A * B + 27 * C) / 54;
@@ -334,8 +426,12 @@ function quadraticRoots(
   const bs = b / size;
   const acs = a / size;
   const ccs = c / size;
-  const disc = bs * bs - 4 * acs * ccs;
-  const band = 8 * EPS * Math.max(bs * bs, Math.abs(4 * acs * ccs));
+  // 4 a c / size^2 as 4 (a/size)(c/size), as always; where size is so small that 4 a/size
+  // overflows (coefficients near the smallest doubles: Infinity * 0 gave NaN), as
+  // 4 (a (c/size)) / size, finite because size^2 >= |a c|
+  const fourAC = Math.abs(4 * acs) < Infinity ? 4 * acs * ccs : (4 * (a * ccs)) / size;
+  const disc = bs * bs - fourAC;
+  const band = 8 * EPS * Math.max(bs * bs, Math.abs(fourAC));
   if (Math.abs(disc) <= band) {
     const r = -b / (2 * a);
     out[offset] = r;
@@ -412,6 +508,11 @@ function newtonFromAbove(c2: number, c1: number, c0: number, x0: number): boolea
  * (tests/unit/numerics/cubicNewtonStart.test.ts: within 1e-13 relative). Omitted (NaN): the
  * closed form, step for step as realCubicRootsInto.
  *
+ * The guards against coefficients near the smallest and largest doubles are the same as there;
+ * the verification that follows them in realCubicRootsInto (a root not finite, or not a root to
+ * rounding after a coefficient left the normal range) is not repeated on this path, whose
+ * Z-cubic coefficients are of order one.
+ *
  * @throws InputError as realCubicRootsInto: a coefficient NaN or infinite.
  */
 export function monicCubicRootsInto(c: Float64Array, out: Float64Array, upperStart = NaN): number {
@@ -438,7 +539,7 @@ export function monicCubicRootsInto(c: Float64Array, out: Float64Array, upperSta
     if (!(aa <= 1 && ab <= 1 && ac <= 1 && (aa > 0.5 || ab > 0.25 || ac > 0.125))) {
       const size = Math.max(aa, Math.sqrt(ab), Math.cbrt(ac));
       if (size === 0) zero = true;
-      else s = Math.pow(2, Math.ceil(Math.log2(size)));
+      else s = Math.min(Math.pow(2, Math.ceil(Math.log2(size))), MAX_POWER_OF_TWO);
     }
     if (zero) {
       raw[0] = 0;
@@ -447,8 +548,10 @@ export function monicCubicRootsInto(c: Float64Array, out: Float64Array, upperSta
       count = 3;
     } else {
       const A = s === 1 ? a : a / s;
-      const B = s === 1 ? b : b / (s * s);
-      const C = s === 1 ? cc : cc / (s * s * s);
+      // overPowerOf(b, s, 2) and overPowerOf(cc, s, 3), inline: for a power of two s, s^2 is a
+      // nonzero finite double exactly when 2^-537 <= s <= 2^511, s^3 when 2^-358 <= s <= 2^341
+      const B = s === 1 ? b : s >= 2 ** -537 && s <= 2 ** 511 ? b / (s * s) : b / s / s;
+      const C = s === 1 ? cc : s >= 2 ** -358 && s <= 2 ** 341 ? cc / (s * s * s) : cc / s / s / s;
       const Q = (A * A - 3 * B) / 9;
       const R = (2 * A * A * A - 9 * A * B + 27 * C) / 54;
       const R2 = R * R;
@@ -516,8 +619,10 @@ export function monicCubicRootsInto(c: Float64Array, out: Float64Array, upperSta
             const bs = qb / size;
             const acs = qa / size;
             const ccs = qc / size;
-            const disc = bs * bs - 4 * acs * ccs;
-            const qband = 8 * EPS * Math.max(bs * bs, Math.abs(4 * acs * ccs));
+            // as in quadraticRoots: no Infinity * 0 where size is near the smallest doubles
+            const fourAC = Math.abs(4 * acs) < Infinity ? 4 * acs * ccs : (4 * (qa * ccs)) / size;
+            const disc = bs * bs - fourAC;
+            const qband = 8 * EPS * Math.max(bs * bs, Math.abs(fourAC));
             if (Math.abs(disc) <= qband) {
               const r = -qb / (2 * qa);
               raw[1] = r;

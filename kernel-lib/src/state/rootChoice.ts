@@ -42,6 +42,52 @@ export function emptyRootChoice(): RootChoice {
 // the residual request of every root evaluation, allocated once
 const COMPOSITION = Object.freeze({ composition: true });
 
+/** Starts a choice in `out`: no root seen yet. */
+function beginChoice(out: RootChoice): void {
+  out.densityMolPerM3 = NaN;
+  out.index = 0;
+  out.stableCount = 0;
+  out.lowestGibbsOverRT = Infinity;
+  out.secondGibbsOverRT = Infinity;
+}
+
+/**
+ * THE rule, offered one root at a time in ascending density: a root with (dP/drho)_T <= 0 (or
+ * NaN) is passed over; of the rest the first is taken, "liquid" takes every later one (so the
+ * densest), and with `compareGibbs` one whose g_r/RT is below the lowest so far (the first on a
+ * tie), keeping the lowest and second-lowest g_r/RT. Updates `out`; true when this root is now
+ * the chosen one (its derivatives `r` are then the caller's to keep).
+ */
+function offerRoot(
+  out: RootChoice,
+  request: PhaseRequest,
+  compareGibbs: boolean,
+  temperatureK: number,
+  densityMolPerM3: number,
+  r: ResidualDerivatives,
+  gasConstant: number | undefined,
+): boolean {
+  if (!(dPdRho(temperatureK, r, gasConstant) > 0)) return false;
+  const count = out.stableCount;
+  let take = count === 0 || request === "liquid";
+  if (compareGibbs) {
+    const g = residualGibbsTP(r);
+    if (count === 0 || g < out.lowestGibbsOverRT) {
+      out.secondGibbsOverRT = out.lowestGibbsOverRT;
+      out.lowestGibbsOverRT = g;
+      take = true;
+    } else if (g < out.secondGibbsOverRT) {
+      out.secondGibbsOverRT = g;
+    }
+  }
+  if (take) {
+    out.index = count;
+    out.densityMolPerM3 = densityMolPerM3;
+  }
+  out.stableCount = count + 1;
+  return take;
+}
+
 /**
  * Evaluates every root in `rhos` (mol/m3, ascending; the first `rootCount`, default all) at T (K)
  * and x once, with composition
@@ -59,38 +105,15 @@ export function chooseDensityRoot(
   rootCount: number = rhos.length,
 ): ResidualDerivatives | undefined {
   const compareGibbs = request === "stable" && rootCount > 1;
-  let count = 0;
-  let index = 0;
-  let rho = NaN;
   let residual: ResidualDerivatives | undefined;
-  let best = Infinity;
-  let second = Infinity;
+  beginChoice(out);
   for (let k = 0; k < rootCount; k++) {
-    const r = model.residual(temperatureK, rhos[k], x, COMPOSITION);
-    if (!(dPdRho(temperatureK, r, model.gasConstant) > 0)) continue;
-    let take = count === 0 || request === "liquid";
-    if (compareGibbs) {
-      const g = residualGibbsTP(r);
-      if (count === 0 || g < best) {
-        second = best;
-        best = g;
-        take = true;
-      } else if (g < second) {
-        second = g;
-      }
-    }
-    if (take) {
-      index = count;
-      rho = rhos[k];
+    const rho = rhos[k];
+    const r = model.residual(temperatureK, rho, x, COMPOSITION);
+    if (offerRoot(out, request, compareGibbs, temperatureK, rho, r, model.gasConstant)) {
       residual = r;
     }
-    count++;
   }
-  out.densityMolPerM3 = rho;
-  out.index = index;
-  out.stableCount = count;
-  out.lowestGibbsOverRT = best;
-  out.secondGibbsOverRT = second;
   return residual;
 }
 
@@ -113,41 +136,18 @@ export function chooseDensityRootInto(
   scratchB: ResidualDerivativesDraft,
 ): ResidualDerivativesDraft | undefined {
   const compareGibbs = request === "stable" && rootCount > 1;
-  let count = 0;
-  let index = 0;
-  let rho = NaN;
   let residual: ResidualDerivativesDraft | undefined;
   let free = scratchA;
-  let best = Infinity;
-  let second = Infinity;
+  beginChoice(out);
   for (let k = 0; k < rootCount; k++) {
     const r = free;
-    model.residualInto(temperatureK, rhos[k], x, r);
-    if (!(dPdRho(temperatureK, r, model.gasConstant) > 0)) continue;
-    let take = count === 0 || request === "liquid";
-    if (compareGibbs) {
-      const g = residualGibbsTP(r);
-      if (count === 0 || g < best) {
-        second = best;
-        best = g;
-        take = true;
-      } else if (g < second) {
-        second = g;
-      }
-    }
-    if (take) {
-      index = count;
-      rho = rhos[k];
+    const rho = rhos[k];
+    model.residualInto(temperatureK, rho, x, r);
+    if (offerRoot(out, request, compareGibbs, temperatureK, rho, r, model.gasConstant)) {
       residual = r;
       free = r === scratchA ? scratchB : scratchA;
     }
-    count++;
   }
-  out.densityMolPerM3 = rho;
-  out.index = index;
-  out.stableCount = count;
-  out.lowestGibbsOverRT = best;
-  out.secondGibbsOverRT = second;
   return residual;
 }
 
@@ -182,13 +182,10 @@ export function chooseDensityRootWithComposition(
     const rho = rhos[0];
     model.residualWithCompositionInto(temperatureK, rho, x, chosen, dnA);
     chosen.dnA = dnA;
-    const stable = dPdRho(temperatureK, chosen, model.gasConstant) > 0;
-    out.densityMolPerM3 = stable ? rho : NaN;
-    out.index = 0;
-    out.stableCount = stable ? 1 : 0;
-    out.lowestGibbsOverRT = Infinity;
-    out.secondGibbsOverRT = Infinity;
-    return stable ? (chosen as ResidualDerivatives) : undefined;
+    beginChoice(out);
+    return offerRoot(out, request, false, temperatureK, rho, chosen, model.gasConstant)
+      ? (chosen as ResidualDerivatives)
+      : undefined;
   }
   const r = chooseDensityRootInto(
     model,

@@ -14,7 +14,8 @@ import {
   PhaseUnavailableError,
   type ResultWarning,
 } from "../errors.js";
-import type { ResidualDerivatives, ResidualDerivativesDraft, ResidualModel } from "../eos/types.js";
+import type { ResidualDerivatives, ResidualModel } from "../eos/types.js";
+import { zeroResidualDraft } from "../eos/residualDraft.js";
 import type { IdealGasProperties, ReferenceState } from "../idealgas/types.js";
 import { leanIdealGasOf, type IdealGasValues, type LeanIdealGas } from "../idealgas/leanMixture.js";
 import { assembleStateOf, dPdRho, pressureFromResidual, residualGibbsTP } from "./properties.js";
@@ -96,20 +97,9 @@ const choice = emptyRootChoice();
 const ROOTS = new Float64Array(3);
 // derivative records of the current stateAtTP call (models with residualWithCompositionInto):
 // two for comparing roots, one for the chosen root; read out before the call returns
-const emptyDraft = (): ResidualDerivativesDraft => ({
-  a: 0,
-  aD: 0,
-  aDD: 0,
-  aT: 0,
-  aTT: 0,
-  aDT: 0,
-  aDDD: 0,
-  aDDT: 0,
-  dnA: undefined,
-});
-const SCRATCH_A = emptyDraft();
-const SCRATCH_B = emptyDraft();
-const CHOSEN = emptyDraft();
+const SCRATCH_A = zeroResidualDraft();
+const SCRATCH_B = zeroResidualDraft();
+const CHOSEN = zeroResidualDraft();
 
 function hasResidualInto(model: ResidualModel): model is ModelWithResidualInto {
   return model.residualInto !== undefined && model.residualWithCompositionInto !== undefined;

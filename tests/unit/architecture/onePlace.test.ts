@@ -86,6 +86,11 @@ const BLOCKS: readonly Block[] = [
     ],
   },
   {
+    name: "a zero-filled residual derivatives record (one shape for every draft)",
+    owner: "eos/residualDraft.ts",
+    pattern: /aDDD: 0,\s*aDDT: 0\b/,
+  },
+  {
     name: "closed-form roots or the scan",
     owner: "state/findDensityRoots.ts",
     pattern: /model\.densityRoots\s*\?/,

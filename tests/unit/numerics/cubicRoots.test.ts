@@ -1,7 +1,16 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { realCubicRoots, realCubicRootsInto } from "../../../kernel-lib/src/numerics/cubicRoots.js";
-import { InputError } from "../../../kernel-lib/src/errors.js";
+import {
+  monicCubicRootsInto,
+  realCubicRoots,
+  realCubicRootsInto,
+} from "../../../kernel-lib/src/numerics/cubicRoots.js";
+import {
+  InputError,
+  IsochorError,
+  OutOfRangeError,
+  SolverError,
+} from "../../../kernel-lib/src/errors.js";
 
 /** Relative difference, guarded for zero. */
 function rel(a: number, b: number): number {
@@ -229,8 +238,17 @@ describe("realCubicRootsInto (allocation-free form)", () => {
     fc.assert(
       fc.property(coefficient, coefficient, coefficient, coefficient, (c3, c2, c1, c0) => {
         if (c3 === 0 && c2 === 0 && c1 === 0 && c0 === 0) return;
+        let roots: number[];
+        try {
+          roots = realCubicRoots(c3, c2, c1, c0).roots;
+        } catch (e) {
+          // a root beyond the doubles (e.g. -5e-324 x^2 + 2^-50 x: 2^1024; a subnormal c3
+          // beside ordinary c2, c1, c0) is a typed error in both forms, with the same message
+          expect(e).toBeInstanceOf(IsochorError);
+          expect(() => realCubicRootsInto(c3, c2, c1, c0, out)).toThrow((e as Error).message);
+          return;
+        }
         const count = realCubicRootsInto(c3, c2, c1, c0, out);
-        const { roots } = realCubicRoots(c3, c2, c1, c0);
         // one shared algorithm, so identical numbers (not merely close ones)
         expect(Array.from(out.subarray(0, count))).toEqual(roots);
       }),
@@ -244,5 +262,116 @@ describe("realCubicRootsInto (allocation-free form)", () => {
     expect(() => realCubicRootsInto(1, 0, 0, -Infinity, out)).toThrow(InputError);
     expect(() => realCubicRootsInto(0, 0, 0, 0, out)).toThrow(InputError);
     expect(() => realCubicRootsInto(1, -6, 11, -6, new Float64Array(2))).toThrow(InputError);
+  });
+});
+
+describe("coefficients near the smallest doubles (never NaN)", () => {
+  // every solver of the module on one cubic: realCubicRoots, realCubicRootsInto and, for c3 = 1,
+  // monicCubicRootsInto; the three must agree to the last bit
+  function allForms(c3: number, c2: number, c1: number, c0: number): number[] {
+    const { roots } = realCubicRoots(c3, c2, c1, c0);
+    const out = new Float64Array(3);
+    const n = realCubicRootsInto(c3, c2, c1, c0, out);
+    expect(Array.from(out.subarray(0, n))).toEqual(roots);
+    if (c3 === 1) {
+      const m = monicCubicRootsInto(Float64Array.of(c2, c1, c0), out);
+      expect(Array.from(out.subarray(0, m))).toEqual(roots);
+    }
+    return roots;
+  }
+
+  it("x^3 - 5e-324 x, x^3 + 5e-324 x^2 and x^2 + 1e-308 x have their exact roots", () => {
+    // 5e-324 is 2^-1074, the smallest double, so x (x^2 - 2^-1074) has the roots 0 and
+    // +-2^-537 exactly (closed form: factored by hand); before the guard these gave NaN
+    // (the rescaling's s^3 = 2^-1611 underflowed to 0 and C = 0 / 0)
+    expect(Number.MIN_VALUE).toBe(2 ** -1074);
+    expect(allForms(1, 0, -Number.MIN_VALUE, 0)).toEqual([-(2 ** -537), 0, 2 ** -537]);
+    // x^2 (x + 2^-1074): s^2 underflowed (B = 0 / 0)
+    expect(allForms(1, Number.MIN_VALUE, 0, 0)).toEqual([-Number.MIN_VALUE, 0, 0]);
+    // a quadratic: 4 a / size overflowed and met c = 0 (Infinity * 0)
+    expect(allForms(0, 1, 1e-308, 0).map((x) => (x === 0 ? 0 : x))).toEqual([-1e-308, 0]);
+  });
+
+  it("recovers roots of order 2^-350 exactly from coefficients down to the subnormals", () => {
+    // roots p 2^-350, q 2^-350, r 2^-350 with small integers: c0 = -p q r 2^-1050 is subnormal
+    // and exact (p q r < 2^24), so the roots are exact multiples of 2^-350 (Vieta, exact)
+    const unit = 2 ** -350;
+    fc.assert(
+      fc.property(
+        fc.integer({ min: -40, max: 40 }),
+        fc.integer({ min: -40, max: 40 }),
+        fc.integer({ min: -40, max: 40 }),
+        (p, q, r) => {
+          const roots = allForms(
+            1,
+            -(p + q + r) * unit,
+            (p * q + p * r + q * r) * unit * unit,
+            -p * q * r * unit * unit * unit,
+          );
+          const sorted = [p, q, r].sort((x, y) => x - y).map((v) => v * unit);
+          expect(roots).toHaveLength(3);
+          const distinct = sorted[0] !== sorted[1] && sorted[1] !== sorted[2];
+          // distinct: to rounding; repeated: to about sqrt(eps) (triple: eps^(1/3)) of the scale
+          const scale = 40 * unit;
+          const tol = distinct ? 1e-12 * scale : 1e-4 * scale;
+          roots.forEach((x, i) => expect(Math.abs(x - sorted[i])).toBeLessThan(tol));
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+
+  it("random tiny and subnormal coefficients: finite roots, each a root to rounding", () => {
+    const tiny = fc.oneof(
+      fc.constant(0),
+      fc.double({ min: -1e-290, max: 1e-290, noNaN: true }),
+      fc.integer({ min: -1000, max: 1000 }).map((k) => k * Number.MIN_VALUE),
+    );
+    fc.assert(
+      fc.property(tiny, tiny, tiny, (c2, c1, c0) => {
+        const res = realCubicRoots(1, c2, c1, c0);
+        allForms(1, c2, c1, c0);
+        expect(res.roots.length === 1 || res.roots.length === 3).toBe(true);
+        res.roots.forEach((x, i) => {
+          expect(Number.isFinite(x)).toBe(true);
+          // backward error (common practice, no source) with a floor of a few subnormal units,
+          // where the terms themselves underflow
+          const magnitude =
+            Math.abs(x * x * x) + Math.abs(c2 * x * x) + Math.abs(c1 * x) + Math.abs(c0);
+          expect(Math.abs(res.residuals[i])).toBeLessThanOrEqual(
+            64 * Number.EPSILON * magnitude + 64 * Number.MIN_VALUE,
+          );
+        });
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  it("refuses a cubic the monic form cannot hold, and one whose sizes span beyond the doubles", () => {
+    // 5e-324 x^3 + x^2 - 3x + 2: c2/c3 = 2^1074 is not a double (a root near -2^1074)
+    expect(() => realCubicRoots(Number.MIN_VALUE, 1, -3, 2)).toThrow(OutOfRangeError);
+    expect(() => realCubicRoots(Number.MIN_VALUE, 1, -3, 2)).toThrow(/c3/);
+    expect(() => realCubicRootsInto(Number.MIN_VALUE, 1, -3, 2, new Float64Array(3))).toThrow(
+      OutOfRangeError,
+    );
+    // 1e-300 x^3 + x^2 + x + 1: one real root near -1e300 (x^2 + x + 1 has none); the rescaled
+    // coefficients of x and 1 underflow, and before the guard the roots -1 and 0 (p = 1) came
+    // back beside it
+    expect(() => realCubicRoots(1e-300, 1, 1, 1)).toThrow(SolverError);
+    // x^3 - 1e308 x^2 + 1e308 x - 1e308: one real root near 1e308; before, NaN or 0 and 1 beside it
+    expect(() => realCubicRoots(1, -1e308, 1e308, -1e308)).toThrow(SolverError);
+    // every failure is a typed error, never NaN: wide random exponents
+    const wide = fc.oneof(fc.constant(0), fc.double({ noNaN: true, noDefaultInfinity: true }));
+    fc.assert(
+      fc.property(wide, wide, wide, wide, (c3, c2, c1, c0) => {
+        if (c3 === 0 && c2 === 0 && c1 === 0 && c0 === 0) return;
+        try {
+          for (const x of realCubicRoots(c3, c2, c1, c0).roots) expect(Number.isNaN(x)).toBe(false);
+        } catch (e) {
+          expect(e).toBeInstanceOf(IsochorError);
+        }
+      }),
+      { numRuns: 3000 },
+    );
   });
 });

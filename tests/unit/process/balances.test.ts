@@ -5,16 +5,13 @@
  */
 import { describe, expect, it } from "vitest";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
-import {
-  defineStream,
-  massFlowKgPerS,
-  streamEnthalpyJPerMol,
-} from "../../../kernel-lib/src/process/stream.js";
+import { massFlowKgPerS, streamEnthalpyJPerMol } from "../../../kernel-lib/src/process/stream.js";
 import { valve } from "../../../kernel-lib/src/process/valve.js";
 import { compressorStage } from "../../../kernel-lib/src/process/compressor.js";
 import { compressorTrain } from "../../../kernel-lib/src/process/compressorTrain.js";
 import { turbine } from "../../../kernel-lib/src/process/turbine.js";
 import { pump } from "../../../kernel-lib/src/process/pump.js";
+import { streamAt } from "./fixtures.js";
 
 // an invented Corvid Point recycle gas with enough heavy ends to condense in the intercoolers
 const gas = defineFluid({
@@ -22,24 +19,11 @@ const gas = defineFluid({
   model: "peng-robinson",
 });
 const z = [0.7, 0.12, 0.09, 0.05, 0.04];
-const suction = defineStream({
-  fluid: gas,
-  z,
-  T: 313.15,
-  P: 5e5,
-  flow: { value: 1000, unit: "kmol/h" },
-  name: "recycle gas",
-});
+const suction = streamAt(gas, z, 313.15, 5e5, { value: 1000, unit: "kmol/h" }, "recycle gas");
 
 describe("energy balances of the steps", () => {
   it("valve to two phases: balance, JT cooling, liquid", () => {
-    const hp = defineStream({
-      fluid: gas,
-      z,
-      T: 313.15,
-      P: 60e5,
-      flow: { value: 100, unit: "kmol/h" },
-    });
+    const hp = streamAt(gas, z, 313.15, 60e5, { value: 100, unit: "kmol/h" });
     // an MDMT of 310 K (invented, above the outlet temperature) must raise its warning
     const r = valve(hp, { outletPressurePa: 5e5, minimumDesignMetalTemperatureK: 310 });
     expect(r.check.energyBalanceRelativeError).toBeLessThan(1e-9);
@@ -128,13 +112,7 @@ describe("energy balances of the steps", () => {
   });
 
   it("expander and pump", () => {
-    const hp = defineStream({
-      fluid: gas,
-      z,
-      T: 313.15,
-      P: 60e5,
-      flow: { value: 100, unit: "kmol/h" },
-    });
+    const hp = streamAt(gas, z, 313.15, 60e5, { value: 100, unit: "kmol/h" });
     const e = turbine(hp, { outletPressurePa: 20e5, isentropicEfficiency: 0.85 });
     expect(e.check.energyBalanceRelativeError).toBeLessThan(1e-9);
     expect(e.powerW!).toBeLessThan(0);
@@ -142,13 +120,7 @@ describe("energy balances of the steps", () => {
     expect(ep.check.energyBalanceRelativeError).toBeLessThan(1e-9);
     // expansion: eta_s > eta_p
     expect(ep.isentropicEfficiency).toBeGreaterThan(0.85);
-    const liquid = defineStream({
-      fluid: gas,
-      z: [0, 0, 0.2, 0.4, 0.4],
-      T: 300,
-      P: 10e5,
-      flow: { value: 10, unit: "m3/h" },
-    });
+    const liquid = streamAt(gas, [0, 0, 0.2, 0.4, 0.4], 300, 10e5, { value: 10, unit: "m3/h" });
     const p = pump(liquid, { outletPressurePa: 30e5, efficiency: 0.65 });
     expect(p.check.energyBalanceRelativeError).toBeLessThan(1e-9);
     expect(p.temperatureRiseK).toBeGreaterThan(0);

@@ -5,9 +5,6 @@
  * inside the exchanger where the end differences alone would miss it, and refused input.
  */
 import { describe, expect, it } from "vitest";
-import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
-import { referenceFluid } from "../../../kernel-lib/src/fluid/referenceFluids.js";
-import { defineStream } from "../../../kernel-lib/src/process/stream.js";
 import { cooler, heater } from "../../../kernel-lib/src/process/heater.js";
 import { exchanger } from "../../../kernel-lib/src/process/exchanger.js";
 import { PROCESS_CAUTION } from "../../../kernel-lib/src/process/types.js";
@@ -15,9 +12,10 @@ import { overallProperty } from "../../../kernel-lib/src/phase/flash/stateFuncti
 import { InputError } from "../../../kernel-lib/src/errors.js";
 import { stepHeatCurveChart } from "../../../kernel-lib/src/charts/heatCurve.js";
 import { allLayers, schemaErrors } from "../charts/specCheck.js";
+import { iapwsWater, LIGHT_GAS_Z, lightGas, ONE_MOL_PER_S, streamAt } from "./fixtures.js";
 
 // water by its reference equation (IAPWS-95): the saturation line is the equation's own
-const water = defineFluid({ components: ["water"], model: referenceFluid("water") });
+const water = iapwsWater();
 const ATM = 101325;
 // Saturation temperature of water at 101.325 kPa: 373.124 K (from memory of the IAPWS-95
 // release / Wagner and Pruss, J. Phys. Chem. Ref. Data 31 (2002) 387, normal boiling point).
@@ -28,11 +26,8 @@ const T_SAT_1ATM = 373.124;
 const H_VAP_KJ_PER_KG = 2256.4;
 const M_WATER = 0.018015268; // kg/mol (IAPWS-95)
 
-const gas = defineFluid({
-  components: ["methane", "propane", "n-butane"],
-  model: "peng-robinson",
-});
-const zGas = [0.5, 0.3, 0.2];
+const gas = lightGas();
+const zGas = LIGHT_GAS_Z;
 
 function relativeEnergyError(inH: number, outH: number, Fin: number, Q: number): number {
   return Math.abs(Fin * (outH - inH) - Q) / Math.max(Math.abs(Q), Fin * Math.abs(inH));
@@ -40,7 +35,7 @@ function relativeEnergyError(inH: number, outH: number, Fin: number, Q: number):
 
 describe("heater and cooler", () => {
   it("cooling steam at 1 atm: the flat segment sits at the steam-table saturation temperature", () => {
-    const steam = defineStream({ fluid: water, T: 500, P: ATM, flow: { value: 1, unit: "mol/s" } });
+    const steam = streamAt(water, undefined, 500, ATM);
     const r = cooler(steam, { outletTemperatureK: 350 });
     expect(r.kind).toBe("cooler");
     expect(r.dutyW).toBeLessThan(0);
@@ -64,13 +59,7 @@ describe("heater and cooler", () => {
   });
 
   it("a mixture heated by a duty: energy balance to 1e-9 and the exact bubble and dew points", () => {
-    const feed = defineStream({
-      fluid: gas,
-      z: zGas,
-      T: 220,
-      P: 20e5,
-      flow: { value: 36, unit: "kmol/h" },
-    });
+    const feed = streamAt(gas, zGas, 220, 20e5, { value: 36, unit: "kmol/h" });
     const Q = 180e3;
     const r = heater(feed, { dutyW: Q, outletPressurePa: 19.5e5 });
     const hIn = overallProperty(feed.state, "h");
@@ -93,13 +82,7 @@ describe("heater and cooler", () => {
   });
 
   it("outlet T and duty specifications agree with each other", () => {
-    const feed = defineStream({
-      fluid: gas,
-      z: zGas,
-      T: 350,
-      P: 20e5,
-      flow: { value: 1, unit: "mol/s" },
-    });
+    const feed = streamAt(gas, zGas, 350, 20e5);
     const byT = cooler(feed, { outletTemperatureK: 260 });
     const byQ = cooler(feed, { dutyW: byT.dutyW });
     expect(Math.abs(byQ.outlet.state.temperatureK - 260)).toBeLessThan(1e-6);
@@ -107,13 +90,7 @@ describe("heater and cooler", () => {
   });
 
   it("warns below 0 degC and below a given minimum design metal temperature, with basis", () => {
-    const feed = defineStream({
-      fluid: gas,
-      z: zGas,
-      T: 300,
-      P: 20e5,
-      flow: { value: 1, unit: "mol/s" },
-    });
+    const feed = streamAt(gas, zGas, 300, 20e5);
     const r = cooler(feed, { outletTemperatureK: 240, minimumDesignMetalTemperatureK: 244 });
     const conditions = r.warnings.map((w) => (w as { condition?: string }).condition);
     expect(conditions).toContain("low-temperature");
@@ -123,13 +100,7 @@ describe("heater and cooler", () => {
   });
 
   it("refuses a heater that cools, a cooler that heats, and both or neither specification", () => {
-    const feed = defineStream({
-      fluid: gas,
-      z: zGas,
-      T: 300,
-      P: 20e5,
-      flow: { value: 1, unit: "mol/s" },
-    });
+    const feed = streamAt(gas, zGas, 300, 20e5);
     expect(() => heater(feed, { outletTemperatureK: 280 })).toThrow(/spec\.outletTemperatureK/);
     expect(() => cooler(feed, { dutyW: 100 })).toThrow(/spec\.dutyW/);
     expect(() => heater(feed, {})).toThrow(InputError);
@@ -141,16 +112,9 @@ describe("heater and cooler", () => {
 describe("two-stream counter-current exchanger", () => {
   // a condensing hot stream (steam at 1 atm, superheated at 400 K) against boiler feed water
   // (liquid at 5 bar) : the pinch is where condensation starts, inside the exchanger
-  const steam = () =>
-    defineStream({
-      fluid: water,
-      T: 400,
-      P: ATM,
-      flow: { value: 1, unit: "mol/s" },
-      name: "steam",
-    });
+  const steam = () => streamAt(water, undefined, 400, ATM, ONE_MOL_PER_S, "steam");
   const bfw = (F: number) =>
-    defineStream({ fluid: water, T: 300, P: 5e5, flow: { value: F, unit: "mol/s" }, name: "bfw" });
+    streamAt(water, undefined, 300, 5e5, { value: F, unit: "mol/s" }, "bfw");
 
   it("finds the minimum approach inside, where the ends alone would miss it", () => {
     const Q = 30e3;

@@ -5,29 +5,18 @@
  */
 import { describe, expect, it } from "vitest";
 import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
-import { defineStream, massFlowKgPerS } from "../../../kernel-lib/src/process/stream.js";
+import { massFlowKgPerS } from "../../../kernel-lib/src/process/stream.js";
 import { mixer } from "../../../kernel-lib/src/process/mixer.js";
 import { separator } from "../../../kernel-lib/src/process/separator.js";
 import { overallProperty } from "../../../kernel-lib/src/phase/flash/stateFunctionFlash.js";
 import { InputError } from "../../../kernel-lib/src/errors.js";
+import { LIGHT_GAS_Z, lightGas, streamAt } from "./fixtures.js";
 
-const gas = defineFluid({ components: ["methane", "propane", "n-butane"], model: "peng-robinson" });
+const gas = lightGas();
 
 describe("mixer", () => {
-  const a = defineStream({
-    fluid: gas,
-    z: [0.9, 0.08, 0.02],
-    T: 310,
-    P: 30e5,
-    flow: { value: 2, unit: "mol/s" },
-  });
-  const b = defineStream({
-    fluid: gas,
-    z: [0.3, 0.4, 0.3],
-    T: 250,
-    P: 25e5,
-    flow: { value: 360, unit: "kg/h" },
-  });
+  const a = streamAt(gas, [0.9, 0.08, 0.02], 310, 30e5, { value: 2, unit: "mol/s" });
+  const b = streamAt(gas, [0.3, 0.4, 0.3], 250, 25e5, { value: 360, unit: "kg/h" });
 
   it("closes the energy and component balances at the lowest inlet pressure", () => {
     const r = mixer([a, b]);
@@ -64,26 +53,20 @@ describe("mixer", () => {
       components: ["methane", "ethane", "n-butane"],
       model: "peng-robinson",
     });
-    const c = defineStream({
-      fluid: other,
-      z: [0.5, 0.3, 0.2],
-      T: 300,
-      P: 25e5,
-      flow: { value: 1, unit: "mol/s" },
-    });
+    const c = streamAt(other, [0.5, 0.3, 0.2], 300, 25e5);
     expect(() => mixer([a, c])).toThrow(/inlets\[1\]\.fluid/);
   });
 });
 
 describe("separator", () => {
-  const feed = defineStream({
-    fluid: gas,
-    z: [0.5, 0.3, 0.2],
-    T: 320,
-    P: 20e5,
-    flow: { value: 100, unit: "kmol/h" },
-    name: "KO drum feed",
-  });
+  const feed = streamAt(
+    gas,
+    LIGHT_GAS_Z,
+    320,
+    20e5,
+    { value: 100, unit: "kmol/h" },
+    "KO drum feed",
+  );
 
   it("at given T and P: vapour and liquid, component and mass balances to round-off", () => {
     const r = separator(feed, { temperatureK: 260 });
@@ -126,13 +109,7 @@ describe("separator", () => {
       components: ["methane", "n-hexane", "water"],
       model: "peng-robinson",
     });
-    const s = defineStream({
-      fluid: wet,
-      z: [0.3, 0.3, 0.4],
-      T: 310,
-      P: 10e5,
-      flow: { value: 1, unit: "mol/s" },
-    });
+    const s = streamAt(wet, [0.3, 0.3, 0.4], 310, 10e5);
     const r = separator(s, { temperatureK: 310 });
     expect(r.outlets.length).toBe(3);
     expect(r.liquid2).toBeDefined();

@@ -5,24 +5,23 @@
  */
 import { describe, expect, it } from "vitest";
 import { startRecord } from "../../../kernel-lib/src/records/calculationRecord.js";
-import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
-import { defineStream } from "../../../kernel-lib/src/process/stream.js";
 import { cooler } from "../../../kernel-lib/src/process/heater.js";
 import { separator } from "../../../kernel-lib/src/process/separator.js";
 import { PROCESS_CAUTION } from "../../../kernel-lib/src/process/types.js";
+import { LIGHT_GAS_Z, lightGas, streamAt } from "./fixtures.js";
 
-const gas = defineFluid({ components: ["methane", "propane", "n-butane"], model: "peng-robinson" });
+const gas = lightGas();
 
 describe("a step in a calculation record", () => {
   it("adds inputs, model, method, caution, chart and tables", async () => {
-    const feed = defineStream({
-      fluid: gas,
-      z: [0.5, 0.3, 0.2],
-      T: 350,
-      P: 20e5,
-      flow: { value: 36, unit: "kmol/h" },
-      name: "recycle gas (invented)",
-    });
+    const feed = streamAt(
+      gas,
+      LIGHT_GAS_Z,
+      350,
+      20e5,
+      { value: 36, unit: "kmol/h" },
+      "recycle gas (invented)",
+    );
     const r = cooler(feed, { outletTemperatureK: 250 });
     const rec = startRecord({
       question: "How much heat does E-101 remove?",
@@ -53,13 +52,7 @@ describe("a step in a calculation record", () => {
   it("a record without methods has no such section; a separator draws its P-h path", async () => {
     const rec = startRecord({ question: "q", register: false, live: false });
     expect(await rec.markdown()).not.toContain("Method and assumptions");
-    const feed = defineStream({
-      fluid: gas,
-      z: [0.5, 0.3, 0.2],
-      T: 260,
-      P: 20e5,
-      flow: { value: 1, unit: "mol/s" },
-    });
+    const feed = streamAt(gas, LIGHT_GAS_Z, 260, 20e5);
     await rec.step(separator(feed), { label: "V-101" });
     const md = await rec.markdown();
     expect(md).toContain("V-101: path on P-h axes");

@@ -16,7 +16,7 @@ import {
 } from "../../../kernel-lib/src/numerics/cubicRoots.js";
 import type { FluidState } from "../../../kernel-lib/src/state/types.js";
 import type { SweepProperty } from "../../../kernel-lib/src/sweep/types.js";
-import { SWEEP_PHASE_KINDS } from "../../../kernel-lib/src/sweep/types.js";
+import { axis, fiveComponentGas, kindOf, sweepGridAgainstStates } from "./fixtures.js";
 
 const GET: Partial<Record<SweepProperty, (s: FluidState) => number>> = {
   T: (s) => s.temperatureK,
@@ -48,18 +48,7 @@ const SETS: readonly (readonly SweepProperty[])[] = [
   ["h", "s", "cp", "w", "cpRes", "cvRes", "hRes"],
 ];
 
-const kindOf = (label: string) =>
-  label === "vapor"
-    ? SWEEP_PHASE_KINDS.vapor
-    : label === "liquid"
-      ? SWEEP_PHASE_KINDS.liquid
-      : SWEEP_PHASE_KINDS.supercritical;
 const qualityOf = (label: string) => (label === "vapor" ? 1 : label === "liquid" ? 0 : NaN);
-
-const axis = (lo: number, hi: number, max: number) =>
-  fc
-    .uniqueArray(fc.double({ min: lo, max: hi, noNaN: true }), { minLength: 1, maxLength: max })
-    .map((v) => v.sort((p, q) => p - q));
 
 function checkGrid(
   fluid: Fluid,
@@ -68,32 +57,12 @@ function checkGrid(
   x: number[] | undefined,
   properties: readonly SweepProperty[],
 ) {
-  const r = fluid.sweep({
-    specification: "TP",
-    first: Ts,
-    second: Ps,
-    x,
-    phaseCheck: x === undefined ? undefined : "none",
-    properties: [...properties],
-  });
-  for (let i = 0; i < Ts.length; i++) {
-    for (let j = 0; j < Ps.length; j++) {
-      const k = i * Ps.length + j;
-      let st: FluidState;
-      try {
-        st = fluid.stateAtTP(Ts[i], Ps[j], x);
-      } catch (e) {
-        expect(r.errorCode[k]).toBe((e as { code?: string }).code === "phase-unavailable" ? 2 : 1);
-        continue;
-      }
-      expect(r.errorCode[k], `error at ${Ts[i]} K, ${Ps[j]} Pa`).toBe(0);
-      expect(r.phaseKind[k]).toBe(kindOf(st.phase));
-      for (const p of properties) {
-        const expected = p === "P" ? Ps[j] : p === "quality" ? qualityOf(st.phase) : GET[p]!(st);
-        expect(Object.is(r.values[p]![k], expected), `${p} at ${Ts[i]} K, ${Ps[j]} Pa`).toBe(true);
-      }
+  sweepGridAgainstStates(fluid, Ts, Ps, x, properties, undefined, (values, k, st, T, P) => {
+    for (const p of properties) {
+      const expected = p === "P" ? P : p === "quality" ? qualityOf(st.phase) : GET[p]!(st);
+      expect(Object.is(values[p]![k], expected), `${p} at ${T} K, ${P} Pa`).toBe(true);
     }
-  }
+  });
 }
 
 describe("monicCubicRootsInto equals realCubicRootsInto to the last bit", () => {
@@ -167,11 +136,7 @@ describe("the cubic row kernel equals stateAtTP for every extent", () => {
   }
 
   it("a ten-component-like mixture without a phase check (labels by the PIP)", () => {
-    const fluid = defineFluid({
-      components: ["methane", "ethane", "propane", "nitrogen", "carbon-dioxide"],
-      model: "peng-robinson",
-    });
-    const x = [0.85, 0.06, 0.03, 0.02, 0.04];
+    const { fluid, x } = fiveComponentGas();
     for (const set of SETS) checkGrid(fluid, [150, 240.5, 340.25], [1e5, 3e6, 12e6], x, set);
   });
 

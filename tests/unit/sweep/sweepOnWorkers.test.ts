@@ -4,16 +4,19 @@
  * stops the workers before the sweep completes.
  */
 import { describe, expect, it } from "vitest";
-import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import { sweepOnWorkers } from "../../../kernel-lib/src/parallel/sweepOnWorkers.js";
 import type { ProgressSnapshot } from "../../../kernel-lib/src/progress/progressTypes.js";
 import type { SweepRequest } from "../../../kernel-lib/src/sweep/types.js";
+import {
+  abortAtFirstProgress,
+  expectSameArrays,
+  longRequest,
+  threeAlkaneGas,
+  threeAlkaneX,
+} from "./fixtures.js";
 
-const gas = defineFluid({
-  components: ["methane", "ethane", "propane"],
-  model: "peng-robinson",
-});
-const x = [0.85, 0.1, 0.05];
+const gas = threeAlkaneGas();
+const x = threeAlkaneX;
 
 function recorder() {
   const shown: ProgressSnapshot[] = [];
@@ -39,15 +42,8 @@ describe("sweepOnWorkers", () => {
       chunk: 16,
       progress: { sink, maxUpdatesPerSecond: 1000 },
     });
-    expect(parallel.count).toBe(single.count);
-    for (const p of request.properties) {
-      const a = single.values[p]!;
-      const b = parallel.values[p]!;
-      for (let i = 0; i < a.length; i++) expect(Object.is(a[i], b[i]), `${p}[${i}]`).toBe(true);
-    }
-    expect(Array.from(parallel.errorCode)).toEqual(Array.from(single.errorCode));
+    expectSameArrays(single, parallel, request.properties);
     expect(Array.from(parallel.phaseCount)).toEqual(Array.from(single.phaseCount));
-    expect(Array.from(parallel.phaseKind)).toEqual(Array.from(single.phaseKind));
     expect(parallel.failed).toBe(40);
     expect(parallel.errors.map((e) => e.index)).toEqual(single.errors.map((e) => e.index));
     // some points split below the dew line of this gas: flashed, not one phase
@@ -61,27 +57,12 @@ describe("sweepOnWorkers", () => {
   it("an AbortSignal stops the sweep and rejects with its reason", async () => {
     const controller = new AbortController();
     const { shown, sink } = recorder();
-    const request: SweepRequest = {
-      specification: "TP",
-      first: { from: 200, to: 500, count: 400 },
-      second: { from: 1e5, to: 2e7, count: 400 },
-      x,
-      properties: ["h"],
-    };
-    const promise = sweepOnWorkers(gas, request, {
+    const promise = sweepOnWorkers(gas, longRequest(x), {
       workers: 2,
       threshold: 1,
       chunk: 50,
       signal: controller.signal,
-      progress: {
-        sink: {
-          show(s) {
-            sink.show(s);
-            if (s.done > 0) controller.abort(new Error("stopped by the test"));
-          },
-        },
-        maxUpdatesPerSecond: 1000,
-      },
+      progress: abortAtFirstProgress(controller, sink),
     });
     await expect(promise).rejects.toThrow("stopped by the test");
     const last = shown[shown.length - 1];

@@ -12,6 +12,7 @@ import {
   sweepOnWorkers,
 } from "../../../kernel-lib/src/parallel/sweepOnWorkers.js";
 import type { SweepRequest } from "../../../kernel-lib/src/sweep/types.js";
+import { expectSameArrays } from "./fixtures.js";
 
 afterAll(() => closeSweepWorkers());
 
@@ -20,14 +21,7 @@ function expectSame(
   parallel: typeof single,
   request: SweepRequest,
 ) {
-  expect(parallel.count).toBe(single.count);
-  for (const p of request.properties) {
-    const a = single.values[p]!;
-    const b = parallel.values[p]!;
-    for (let i = 0; i < a.length; i++) expect(Object.is(a[i], b[i]), `${p}[${i}]`).toBe(true);
-  }
-  expect(Array.from(parallel.errorCode)).toEqual(Array.from(single.errorCode));
-  expect(Array.from(parallel.phaseKind)).toEqual(Array.from(single.phaseKind));
+  expectSameArrays(single, parallel, request.properties);
   expect(Array.from(parallel.phaseCount)).toEqual(Array.from(single.phaseCount));
 }
 

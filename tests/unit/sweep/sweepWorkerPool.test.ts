@@ -10,7 +10,6 @@
 import { spawnSync } from "node:child_process";
 import * as path from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
-import { defineFluid } from "../../../kernel-lib/src/fluid/defineFluid.js";
 import {
   closeSweepWorkers,
   sweepOnWorkers,
@@ -21,15 +20,23 @@ import { specKey } from "../../../kernel-lib/src/parallel/specKey.js";
 import { tableOfSweep } from "../../../kernel-lib/src/propertyTables/propertyTable.js";
 import { tableCsv } from "../../../kernel-lib/src/propertyTables/tableCsv.js";
 import { tableParquet } from "../../../kernel-lib/src/propertyTables/tableParquet.js";
-import type { SweepRequest, SweepResult } from "../../../kernel-lib/src/sweep/types.js";
+import type {
+  SweepProperty,
+  SweepRequest,
+  SweepResult,
+} from "../../../kernel-lib/src/sweep/types.js";
+import {
+  abortAtFirstProgress,
+  expectSameArrays,
+  longRequest,
+  threeAlkaneGas,
+  threeAlkaneX,
+} from "./fixtures.js";
 
 afterAll(() => closeSweepWorkers());
 
-const gas = defineFluid({
-  components: ["methane", "ethane", "propane"],
-  model: "peng-robinson",
-});
-const x = [0.85, 0.1, 0.05];
+const gas = threeAlkaneGas();
+const x = threeAlkaneX;
 // one phase of the feed (phaseCheck "none"): cheap points, many ranges
 const request: SweepRequest = {
   specification: "TP",
@@ -40,15 +47,12 @@ const request: SweepRequest = {
   properties: ["h", "s", "rho", "cp"],
 };
 
-function expectEqual(single: SweepResult, parallel: SweepResult, properties: readonly string[]) {
-  expect(parallel.count).toBe(single.count);
-  for (const p of properties) {
-    const a = single.values[p as "h"]!;
-    const b = parallel.values[p as "h"]!;
-    for (let i = 0; i < a.length; i++) expect(Object.is(a[i], b[i]), `${p}[${i}]`).toBe(true);
-  }
-  expect(Array.from(parallel.errorCode)).toEqual(Array.from(single.errorCode));
-  expect(Array.from(parallel.phaseKind)).toEqual(Array.from(single.phaseKind));
+function expectEqual(
+  single: SweepResult,
+  parallel: SweepResult,
+  properties: readonly SweepProperty[],
+) {
+  expectSameArrays(single, parallel, properties);
   expect(parallel.failed).toBe(single.failed);
   expect(parallel.errors).toEqual(single.errors);
 }
@@ -66,10 +70,7 @@ describe("the sweep worker pool", () => {
     expect(first.workers).toBe(2);
     expect(first.busy).toBe(0);
     // the same fluid again, and an equal definition built separately: nothing started or sent
-    const twin = defineFluid({
-      components: ["methane", "ethane", "propane"],
-      model: "peng-robinson",
-    });
+    const twin = threeAlkaneGas();
     expectEqual(single, await sweepOnWorkers(gas, request, options), request.properties);
     expectEqual(single, await sweepOnWorkers(twin, request, options), request.properties);
     const again = sweepWorkerStats();
@@ -117,26 +118,12 @@ describe("the sweep worker pool", () => {
 
   it("replaces workers terminated by cancellation", async () => {
     const controller = new AbortController();
-    const big: SweepRequest = {
-      specification: "TP",
-      first: { from: 200, to: 500, count: 400 },
-      second: { from: 1e5, to: 2e7, count: 400 },
-      x,
-      properties: ["h"],
-    };
-    const promise = sweepOnWorkers(gas, big, {
+    const promise = sweepOnWorkers(gas, longRequest(x), {
       workers: 2,
       threshold: 1,
       chunk: 50,
       signal: controller.signal,
-      progress: {
-        sink: {
-          show(s) {
-            if (s.done > 0) controller.abort(new Error("stopped by the test"));
-          },
-        },
-        maxUpdatesPerSecond: 1000,
-      },
+      progress: abortAtFirstProgress(controller),
     });
     await expect(promise).rejects.toThrow("stopped by the test");
     // the two workers were busy: terminated and out of the pool at once

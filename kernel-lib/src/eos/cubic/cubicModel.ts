@@ -17,6 +17,7 @@
  * u = delta1 + delta2, w = delta1 delta2, A = aP/(RT)^2, B = bP/(RT), keeping roots with Z > B.
  */
 import { pressureFromResidual } from "../residualRelations.js";
+import { zeroResidualDraft } from "../residualDraft.js";
 import { R } from "../../constants.js";
 import { OutOfRangeError, type ResultWarning } from "../../errors.js";
 import { monicCubicRootsInto } from "../../numerics/cubicRoots.js";
@@ -425,17 +426,7 @@ class CubicModelImpl implements CubicModel {
     request?: ResidualRequest,
   ): ResidualDerivatives {
     // one object shape whether or not dnA is requested
-    const result: ResidualDerivativesDraft = {
-      a: 0,
-      aD: 0,
-      aDD: 0,
-      aT: 0,
-      aTT: 0,
-      aDT: 0,
-      aDDD: 0,
-      aDDT: 0,
-      dnA: undefined,
-    };
+    const result = zeroResidualDraft();
     if (request?.composition) {
       const dnA = new Array<number>(this.n);
       this.residualWithCompositionInto(temperatureK, densityMolPerM3, x, result, dnA);
