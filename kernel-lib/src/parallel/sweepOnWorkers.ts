@@ -130,6 +130,18 @@ export interface StartSweepWorkersOptions {
   warmUp?: { fluid: Fluid; request: SweepRequest; points?: number };
 }
 
+/** The `workers` option: an integer >= 1 (InputError otherwise). */
+function checkWorkers(workers: number): void {
+  if (!(Number.isInteger(workers) && workers >= 1)) {
+    throw new InputError({
+      input: "options.workers",
+      unit: "-",
+      validRange: "an integer >= 1",
+      received: workers,
+    });
+  }
+}
+
 /**
  * Starts the sweep pool's worker threads ahead of need (and defines `fluids` in them), so that
  * the first parallel sweep finds them loaded instead of waiting for each to start (a worker
@@ -147,14 +159,7 @@ export interface StartSweepWorkersOptions {
  */
 export function startSweepWorkers(options: StartSweepWorkersOptions = {}): number {
   const workers = options.workers ?? cores();
-  if (!(Number.isInteger(workers) && workers >= 1)) {
-    throw new InputError({
-      input: "options.workers",
-      unit: "-",
-      validRange: "an integer >= 1",
-      received: workers,
-    });
-  }
+  checkWorkers(workers);
   const warmUp = options.warmUp;
   const warmPlan =
     warmUp === undefined ? undefined : planSweep(warmUp.request, warmUp.fluid.componentIds.length);
@@ -274,14 +279,7 @@ export async function sweepOnWorkers(
   const plan = planSweep(request, fluid.componentIds.length);
   const threshold = options.threshold ?? 20_000;
   const workers = options.workers ?? cores();
-  if (!(Number.isInteger(workers) && workers >= 1)) {
-    throw new InputError({
-      input: "options.workers",
-      unit: "-",
-      validRange: "an integer >= 1",
-      received: workers,
-    });
-  }
+  checkWorkers(workers);
   const chunk = options.chunk ?? 2000;
   if (!(Number.isInteger(chunk) && chunk >= 1)) {
     throw new InputError({
