@@ -383,6 +383,9 @@ function closedFormCubic(a: number, b: number, c: number, out: Float64Array): nu
     const dp = (3 * y1 + 2 * A) * y1 + B;
     if (p === 0 || dp === 0) break;
     const yNew = y1 - p / dp;
+    // a polishing step stays near y1: at a double root dp ~ 0 and a step could land on another
+    // root (x (x + 10)^2: from -10 onto 0, where P = -C / y1 = 0/0 gave NaN roots)
+    if (!(Math.abs(yNew - y1) < 0.5 * Math.abs(y1))) break;
     const pNew = ((yNew + A) * yNew + B) * yNew + C;
     if (!(Math.abs(pNew) < Math.abs(p))) break;
     y1 = yNew;
@@ -598,6 +601,8 @@ export function monicCubicRootsInto(c: Float64Array, out: Float64Array, upperSta
           const dp = (3 * y1 + 2 * A) * y1 + B;
           if (p === 0 || dp === 0) break;
           const yNew = y1 - p / dp;
+          // (closedFormCubic's guard: a step stays near y1, never onto another root)
+          if (!(Math.abs(yNew - y1) < 0.5 * Math.abs(y1))) break;
           const pNew = ((yNew + A) * yNew + B) * yNew + C;
           if (!(Math.abs(pNew) < Math.abs(p))) break;
           y1 = yNew;

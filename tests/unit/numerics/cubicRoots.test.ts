@@ -84,6 +84,26 @@ describe("realCubicRoots", () => {
     expect(realCubicRoots(2, 0, 0, 0).roots).toEqual([0, 0, 0]);
   });
 
+  it("a double root beside a root at zero: x (x + 10)^2, as a random test met it (no NaN)", () => {
+    // x (x + 10)^2 = x^3 + 20 x^2 + 100 x (closed form), with the coefficients a property test
+    // formed for roots near -10, -10 and 0; polishing the double root once stepped onto the root
+    // 0 and the deflation divided 0 by it (NaN roots; a SolverError since roots are verified)
+    for (const [c2, c1] of [
+      [20, 100],
+      [19.999999999998586, 99.99999999998585],
+    ]) {
+      const r = realCubicRoots(1, c2, c1, 0).roots;
+      expect(r).toHaveLength(3);
+      expect(r[0]).toBeCloseTo(-10, 5);
+      expect(r[1]).toBeCloseTo(-10, 5);
+      expect(Math.abs(r[2])).toBe(0);
+      const monic = new Float64Array(3);
+      const n = monicCubicRootsInto(Float64Array.from([c2, c1, 0]), monic);
+      expect(n).toBe(3);
+      for (let k = 0; k < 3; k++) expect(Object.is(monic[k], r[k])).toBe(true);
+    }
+  });
+
   it("separates nearly coincident distinct roots (1, 1 + 1e-6, 3)", () => {
     // Roots of a double-root-like cubic are determined only to ~ sqrt(eps) * spread: 1e-6 apart is
     // resolvable. Coefficients formed from the roots (closed form of Vieta's relations).
